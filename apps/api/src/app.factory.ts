@@ -1,0 +1,72 @@
+import { Logger } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import helmet from 'helmet';
+import type { NextFunction, Request, Response } from 'express';
+import { AppModule } from './app.module';
+import type { AppConfig } from './config';
+import { ErrorFilter } from './core/http';
+import { SeedService } from './seed';
+
+/** Builds the whole server (API, OpenAPI document, built web app) for main.ts and the e2e tests. */
+export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {}): Promise<NestExpressApplication> {
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
+    logger: opts.logger === false ? false : ['log', 'warn', 'error'],
+  });
+  app.set('trust proxy', 'loopback');
+  app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
+  app.use(cookieParser());
+  app.setGlobalPrefix('api');
+  app.useGlobalFilters(new ErrorFilter());
+  app.enableShutdownHooks();
+  setUpOpenApi(app);
+  serveWeb(app, cfg.WEB_DIST);
+  await seedWhenEmpty(app, cfg);
+  return app;
+}
+
+function contentSecurity() {
+  return {
+    defaultSrc: ["'self'"],
+    imgSrc: ["'self'", 'data:', 'blob:'],
+    mediaSrc: ["'self'", 'blob:'],
+    styleSrc: ["'self'", "'unsafe-inline'"],
+    fontSrc: ["'self'", 'data:'],
+    connectSrc: ["'self'"],
+    workerSrc: ["'self'", 'blob:'],
+  };
+}
+
+function setUpOpenApi(app: NestExpressApplication): void {
+  const config = new DocumentBuilder()
+    .setTitle('BenchProof API')
+    .setDescription('Service records, media and bench reports for bicycle workshops. Routes need a session cookie unless marked x-public.')
+    .setVersion('0.1.0')
+    .addCookieAuth('bp_session')
+    .build();
+  const document = SwaggerModule.createDocument(app, config);
+  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs-json' });
+}
+
+/** The built web app on the same port; every non-API GET falls back to index.html. */
+function serveWeb(app: NestExpressApplication, dist: string): void {
+  const index = resolve(dist, 'index.html');
+  if (!existsSync(index)) {
+    new Logger('Web').warn(`No built web app at ${dist}; run npm run build`);
+    return;
+  }
+  app.useStaticAssets(dist, { index: false, maxAge: '1h' });
+  app.use((req: Request, res: Response, next: NextFunction) => {
+    if (req.method !== 'GET' || req.path.startsWith('/api')) return next();
+    res.sendFile(index);
+  });
+}
+
+async function seedWhenEmpty(app: NestExpressApplication, cfg: AppConfig): Promise<void> {
+  const seed = app.get(SeedService);
+  if (cfg.SEED_DEMO && seed.isEmpty()) await seed.seedDemo();
+}

@@ -1,0 +1,34 @@
+import { type DynamicModule, Module } from '@nestjs/common';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { AuditModule } from './audit';
+import { AuthModule } from './auth';
+import { type AppConfig, ConfigModule } from './config';
+import { AuthCoreModule } from './core/auth';
+import { DbModule } from './core/db';
+import { HealthController } from './health/health.controller';
+import { ClockModule } from './infra/clock';
+import { SeedModule } from './seed';
+import { ShopsModule } from './shops';
+import { UsersModule } from './users';
+
+/** Feature modules, one per product noun (DESIGN.md). Add new features here. */
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule];
+
+@Module({})
+export class AppModule {
+  static register(cfg: AppConfig): DynamicModule {
+    return {
+      module: AppModule,
+      imports: [
+        ConfigModule.forRoot(cfg),
+        ClockModule,
+        DbModule,
+        AuthCoreModule,
+        ThrottlerModule.forRoot([{ ttl: 60_000, limit: cfg.LOGIN_THROTTLE_LIMIT }]),
+        ...FEATURES,
+        SeedModule,
+      ],
+      controllers: [HealthController],
+    };
+  }
+}

@@ -1,0 +1,2 @@
+export { AuditModule } from './audit.module';
+export { AuditService, type AuditEntry } from './audit.service';

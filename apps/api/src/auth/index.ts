@@ -1,0 +1,1 @@
+export { AuthModule } from './auth.module';

@@ -1,0 +1,66 @@
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { z } from 'zod';
+
+/** Repository root: the nearest folder above this file that holds nest-cli.json. */
+export const REPO_ROOT = findRepoRoot(__dirname);
+
+function findRepoRoot(from: string): string {
+  let dir = from;
+  while (!existsSync(resolve(dir, 'nest-cli.json'))) {
+    const up = dirname(dir);
+    if (up === dir) return process.cwd();
+    dir = up;
+  }
+  return dir;
+}
+
+const bool = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
+
+const EnvSchema = z.object({
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  DATABASE_PATH: z.string().default(resolve(REPO_ROOT, 'data/benchproof.sqlite')),
+  UPLOADS_DIR: z.string().default(resolve(REPO_ROOT, 'uploads')),
+  WEB_DIST: z.string().default(resolve(REPO_ROOT, 'dist/apps/web')),
+  JWT_SECRET: z.string().min(32).optional(),
+  SESSION_TTL_SECONDS: z.coerce.number().int().positive().default(8 * 3600),
+  SEED_DEMO: bool.default(true),
+  COOKIE_SECURE: bool.default(false),
+  LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
+  PUBLIC_URL: z.string().url().optional(),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().default(1025),
+  MAIL_FROM: z.string().default('BenchProof <reports@benchproof.localhost>'),
+  MAIL_CATCHER: bool.default(true),
+  MAX_PHOTO_BYTES: z.coerce.number().int().positive().default(40 * 1024 * 1024),
+  MAX_VIDEO_BYTES: z.coerce.number().int().positive().default(4 * 1024 * 1024 * 1024),
+  MAX_IMAGE_PIXELS: z.coerce.number().int().positive().default(100_000_000),
+});
+
+export type AppConfig = z.infer<typeof EnvSchema> & { jwtSecret: string };
+
+export const APP_CONFIG = Symbol('APP_CONFIG');
+
+/**
+ * Reads the environment once. Without JWT_SECRET a random secret is kept beside
+ * the database so sessions survive a restart of the demo.
+ */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const parsed = EnvSchema.safeParse(env);
+  if (!parsed.success) {
+    throw new Error(`Invalid environment: ${z.prettifyError(parsed.error)}`);
+  }
+  const cfg = parsed.data;
+  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH) };
+}
+
+function secretBeside(databasePath: string): string {
+  if (databasePath === ':memory:') return randomBytes(32).toString('hex');
+  const file = resolve(dirname(databasePath), '.session-secret');
+  if (existsSync(file)) return readFileSync(file, 'utf8').trim();
+  mkdirSync(dirname(file), { recursive: true });
+  const secret = randomBytes(32).toString('hex');
+  writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}

@@ -1,0 +1,16 @@
+export type Role = 'manager' | 'desk' | 'mechanic';
+
+/** Who is calling: every service call is scoped by `shopId`. */
+export interface AuthUser {
+  id: number;
+  shopId: number;
+  role: Role;
+  email: string;
+  name: string;
+}
+
+export interface SessionClaims {
+  sub: number;
+  shop: number;
+  role: Role;
+}

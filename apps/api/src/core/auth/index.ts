@@ -1,0 +1,5 @@
+export { Public, Roles, CurrentUser } from './auth.decorators';
+export type { AuthUser, Role, SessionClaims } from './auth-user';
+export { AuthCoreModule } from './auth-core.module';
+export { CSRF, issueCsrfToken } from './csrf';
+export { SESSION_COOKIE, CSRF_COOKIE, CSRF_HEADER, sessionCookieOptions } from './session-cookie';

@@ -1,0 +1,23 @@
+import { Global, Inject, Module, type OnApplicationShutdown } from '@nestjs/common';
+import type Database from 'better-sqlite3';
+import { APP_CONFIG, type AppConfig } from '../../config';
+import { DB } from './db.types';
+import { openDb } from './open-db';
+
+const SQLITE = Symbol('SQLITE');
+
+@Global()
+@Module({
+  providers: [
+    { provide: SQLITE, inject: [APP_CONFIG], useFactory: (cfg: AppConfig) => openDb(cfg.DATABASE_PATH) },
+    { provide: DB, inject: [SQLITE], useFactory: (opened: ReturnType<typeof openDb>) => opened.db },
+  ],
+  exports: [DB],
+})
+export class DbModule implements OnApplicationShutdown {
+  constructor(@Inject(SQLITE) private readonly opened: { sqlite: Database.Database }) {}
+
+  onApplicationShutdown(): void {
+    this.opened.sqlite.close();
+  }
+}

@@ -1,0 +1,3 @@
+export { DB, type Db } from './db.types';
+export { DbModule } from './db.module';
+export { openDb, MIGRATIONS_DIR } from './open-db';

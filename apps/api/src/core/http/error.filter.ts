@@ -1,0 +1,41 @@
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, Logger } from '@nestjs/common';
+import { ERROR_CODES, type ErrorBody, type ErrorCode } from '@benchproof/contracts';
+import type { Response } from 'express';
+import { DomainError } from './domain-error';
+
+const CODE_BY_STATUS: Record<number, ErrorCode> = {
+  400: 'VALIDATION_FAILED',
+  401: 'UNAUTHENTICATED',
+  403: 'FORBIDDEN',
+  404: 'NOT_FOUND',
+  409: 'CONFLICT',
+  413: 'FILE_TOO_LARGE',
+  415: 'UNSUPPORTED_MEDIA_TYPE',
+  429: 'RATE_LIMITED',
+};
+
+/** The single place errors become HTTP responses: always `{code, message, details}`. */
+@Catch()
+export class ErrorFilter implements ExceptionFilter {
+  private readonly logger = new Logger('ErrorFilter');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const res = host.switchToHttp().getResponse<Response>();
+    const { status, body } = this.toBody(exception);
+    if (status >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    if (!res.headersSent) res.status(status).json(body);
+  }
+
+  private toBody(exception: unknown): { status: number; body: ErrorBody } {
+    if (exception instanceof DomainError) {
+      return { status: exception.status, body: { code: exception.code, message: exception.message, details: exception.details } };
+    }
+    if (exception instanceof HttpException) {
+      const status = exception.getStatus();
+      const code = CODE_BY_STATUS[status] ?? (status >= 500 ? 'INTERNAL' : 'VALIDATION_FAILED');
+      const message = status === 404 ? 'No such route.' : ERROR_CODES[code].message;
+      return { status, body: { code, message, details: null } };
+    }
+    return { status: 500, body: { code: 'INTERNAL', message: ERROR_CODES.INTERNAL.message, details: null } };
+  }
+}

@@ -1,0 +1,3 @@
+export { DomainError, notFound } from './domain-error';
+export { ErrorFilter } from './error.filter';
+export { ZodPipe, zod, ApiZodBody, ApiZodQuery } from './zod';

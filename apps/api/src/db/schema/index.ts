@@ -1,0 +1,3 @@
+export * from './shops.table';
+export * from './users.table';
+export * from './audit-events.table';

@@ -1,0 +1,23 @@
+import { integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { id, timestamp } from './columns';
+
+export const shops = sqliteTable('shops', {
+  id: id(),
+  name: text('name').notNull(),
+  address: text('address').notNull().default(''),
+  email: text('email').notNull().default(''),
+  phone: text('phone').notNull().default(''),
+  labourRateMinor: integer('labour_rate_minor').notNull().default(0),
+  taxRateBp: integer('tax_rate_bp').notNull().default(0),
+  currency: text('currency').notNull().default('EUR'),
+  units: text('units', { enum: ['metric', 'imperial'] }).notNull().default('metric'),
+  pageSize: text('page_size', { enum: ['A4', 'Letter'] }).notNull().default('A4'),
+  finalCheckSecondPerson: integer('final_check_second_person', { mode: 'boolean' }).notNull().default(true),
+  /** Shop policy overrides for chain replacement thresholds, JSON; null = trade defaults. */
+  chainLimits: text('chain_limits', { mode: 'json' }).$type<{ replaceAt11Pct: number; replaceAt10Pct: number; cassettePct: number } | null>(),
+  brandPrimary: text('brand_primary').notNull().default('#1F5F5B'),
+  brandAccent: text('brand_accent').notNull().default('#E0A526'),
+  reportFooter: text('report_footer').notNull().default(''),
+  nextJobSeq: integer('next_job_seq').notNull().default(1),
+  createdAt: timestamp('created_at').notNull(),
+});

@@ -1,0 +1,2 @@
+export { CLOCK, systemClock, type Clock } from './clock';
+export { ClockModule } from './clock.module';

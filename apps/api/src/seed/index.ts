@@ -1,0 +1,2 @@
+export { SeedModule } from './seed.module';
+export { SeedService } from './seed.service';

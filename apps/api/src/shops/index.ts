@@ -1,0 +1,2 @@
+export { ShopsModule } from './shops.module';
+export { ShopsService } from './shops.service';

@@ -1,0 +1,24 @@
+import { Body, Controller, Get, Patch } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import { UpdateShopSettingsRequestSchema, type UpdateShopSettingsRequest } from '@benchproof/contracts';
+import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { ApiZodBody, zod } from '../core/http';
+import { ShopsService } from './shops.service';
+
+@ApiTags('shop')
+@Controller('shop')
+export class ShopsController {
+  constructor(private readonly shops: ShopsService) {}
+
+  @Get('settings')
+  settings(@CurrentUser() user: AuthUser) {
+    return this.shops.settings(user.shopId);
+  }
+
+  @Patch('settings')
+  @Roles('manager')
+  @ApiZodBody(UpdateShopSettingsRequestSchema)
+  update(@CurrentUser() user: AuthUser, @Body(zod(UpdateShopSettingsRequestSchema)) body: UpdateShopSettingsRequest) {
+    return this.shops.update(user, body);
+  }
+}

@@ -1,0 +1,30 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { eq, sql } from 'drizzle-orm';
+import { DB, type Db } from '../core/db';
+import { shops } from '../db/schema';
+
+export type ShopRow = typeof shops.$inferSelect;
+
+@Injectable()
+export class ShopsRepository {
+  constructor(@Inject(DB) private readonly db: Db) {}
+
+  find(id: number): ShopRow | undefined {
+    return this.db.select().from(shops).where(eq(shops.id, id)).get();
+  }
+
+  update(id: number, patch: Partial<ShopRow>): ShopRow {
+    return this.db.update(shops).set(patch).where(eq(shops.id, id)).returning().get();
+  }
+
+  /** Takes the shop's next job sequence number atomically. */
+  takeJobSeq(id: number): number {
+    const row = this.db
+      .update(shops)
+      .set({ nextJobSeq: sql`${shops.nextJobSeq} + 1` })
+      .where(eq(shops.id, id))
+      .returning({ seq: shops.nextJobSeq })
+      .get();
+    return row.seq - 1;
+  }
+}

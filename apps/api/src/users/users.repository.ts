@@ -1,0 +1,37 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { and, asc, eq } from 'drizzle-orm';
+import { DB, type Db } from '../core/db';
+import { users } from '../db/schema';
+
+export type UserRow = typeof users.$inferSelect;
+export type NewUserRow = typeof users.$inferInsert;
+
+@Injectable()
+export class UsersRepository {
+  constructor(@Inject(DB) private readonly db: Db) {}
+
+  listByShop(shopId: number): UserRow[] {
+    return this.db.select().from(users).where(eq(users.shopId, shopId)).orderBy(asc(users.name)).all();
+  }
+
+  findInShop(shopId: number, id: number): UserRow | undefined {
+    return this.db.select().from(users).where(and(eq(users.shopId, shopId), eq(users.id, id))).get();
+  }
+
+  findByEmail(email: string): UserRow | undefined {
+    return this.db.select().from(users).where(eq(users.email, email)).get();
+  }
+
+  insert(row: NewUserRow): UserRow {
+    return this.db.insert(users).values(row).returning().get();
+  }
+
+  update(shopId: number, id: number, patch: Partial<Pick<UserRow, 'role' | 'active' | 'name'>>): UserRow {
+    return this.db.update(users).set(patch).where(and(eq(users.shopId, shopId), eq(users.id, id))).returning().get();
+  }
+
+  /** Runs `fn` in one SQLite transaction so the last-manager rule cannot race. */
+  transaction<T>(fn: () => T): T {
+    return this.db.transaction(() => fn());
+  }
+}

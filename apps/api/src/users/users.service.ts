@@ -1,0 +1,78 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { CreateUserRequest, UpdateUserRequest, UserDto } from '@benchproof/contracts';
+import { AuditService } from '../audit';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { CLOCK, type Clock } from '../infra/clock';
+import { hashPassword, verifyPassword } from './password';
+import { type UserRow, UsersRepository } from './users.repository';
+
+const toDto = (u: UserRow): UserDto => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active });
+
+@Injectable()
+export class UsersService {
+  constructor(
+    private readonly repo: UsersRepository,
+    private readonly audit: AuditService,
+    @Inject(CLOCK) private readonly clock: Clock,
+  ) {}
+
+  list(actor: AuthUser): UserDto[] {
+    return this.repo.listByShop(actor.shopId).map(toDto);
+  }
+
+  /** Staff of the caller's shop, for pickers such as the assigned mechanic. */
+  get(actor: AuthUser, id: number): UserDto {
+    const user = this.repo.findInShop(actor.shopId, id);
+    if (!user) throw notFound('User');
+    return toDto(user);
+  }
+
+  async create(actor: AuthUser, input: CreateUserRequest): Promise<UserDto> {
+    const email = input.email.trim().toLowerCase();
+    if (this.repo.findByEmail(email)) throw new DomainError('EMAIL_TAKEN', undefined, { field: 'email' });
+    const row = this.repo.insert({
+      shopId: actor.shopId,
+      email,
+      name: input.name.trim(),
+      role: input.role,
+      passwordHash: await hashPassword(input.password),
+      active: true,
+      createdAt: this.clock.now(),
+    });
+    this.audit.record(actor, { action: 'user.created', entityType: 'user', entityId: row.id, details: { role: row.role } });
+    return toDto(row);
+  }
+
+  update(actor: AuthUser, id: number, patch: UpdateUserRequest): UserDto {
+    const updated = this.repo.transaction(() => {
+      const user = this.repo.findInShop(actor.shopId, id);
+      if (!user) throw notFound('User');
+      const losesManager = user.role === 'manager' && user.active && (patch.active === false || (patch.role && patch.role !== 'manager'));
+      if (losesManager && this.activeManagers(actor.shopId) <= 1) throw new DomainError('LAST_MANAGER');
+      return this.repo.update(actor.shopId, id, patch);
+    });
+    this.audit.record(actor, { action: 'user.updated', entityType: 'user', entityId: id, details: { ...patch } });
+    return toDto(updated);
+  }
+
+  /**
+   * The staff member for these credentials, or null. Unknown e-mails still pay for
+   * one hash check so response times do not reveal which addresses have accounts.
+   */
+  async verifyCredentials(email: string, password: string): Promise<UserRow | null> {
+    const user = this.repo.findByEmail(email.trim().toLowerCase());
+    const ok = await verifyPassword(user?.passwordHash ?? (await this.dummyHash()), password);
+    return ok && user?.active ? user : null;
+  }
+
+  private dummy?: Promise<string>;
+  private dummyHash(): Promise<string> {
+    this.dummy ??= hashPassword('not-a-real-password-for-timing');
+    return this.dummy;
+  }
+
+  private activeManagers(shopId: number): number {
+    return this.repo.listByShop(shopId).filter((u) => u.active && u.role === 'manager').length;
+  }
+}

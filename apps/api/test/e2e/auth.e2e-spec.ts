@@ -1,0 +1,60 @@
+import { JwtService } from '@nestjs/jwt';
+import { DEMO, startTestApp, type TestApp } from '../test-app';
+
+describe('sign-in, sessions and CSRF', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(() => t.close());
+
+  it('rejects a wrong password with INVALID_CREDENTIALS and sets no cookie', async () => {
+    const res = await t.http().post('/api/auth/login').send({ email: DEMO.manager, password: 'wrong-password' }).expect(401);
+    expect(res.body.code).toBe('INVALID_CREDENTIALS');
+    expect(res.headers['set-cookie']).toBeUndefined();
+  });
+
+  it('rejects a malformed body with VALIDATION_FAILED naming the field', async () => {
+    const res = await t.http().post('/api/auth/login').send({ email: 'not-an-email' }).expect(400);
+    expect(res.body.code).toBe('VALIDATION_FAILED');
+    expect(res.body.details.issues.map((i: { path: string }) => i.path)).toEqual(expect.arrayContaining(['email', 'password']));
+  });
+
+  it('sets an httpOnly session cookie and reports the signed-in user', async () => {
+    const res = await t.http().post('/api/auth/login').send({ email: DEMO.desk, password: 'bench-demo-2026' }).expect(200);
+    const cookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
+    expect(cookies.find((c) => c.startsWith('bp_session='))).toMatch(/HttpOnly/i);
+    expect(res.body.user).toMatchObject({ email: DEMO.desk, role: 'desk' });
+  });
+
+  it('refuses a state change without the CSRF token when the session comes from the cookie', async () => {
+    const { agent } = await t.signIn(DEMO.manager);
+    const res = await agent.patch('/api/shop/settings').set('x-csrf-token', '').send({ labourRateMinor: 100 }).expect(403);
+    expect(res.body.code).toBe('CSRF_MISMATCH');
+  });
+
+  it('tells an expired session apart from a missing one', async () => {
+    const jwt = t.app.get(JwtService);
+    const expired = await jwt.signAsync({ sub: 1, shop: 1, role: 'manager' }, { expiresIn: -10 });
+    const res = await t.http().get('/api/users').set('Cookie', `bp_session=${expired}`).expect(401);
+    expect(res.body.code).toBe('SESSION_EXPIRED');
+  });
+
+  it('throttles repeated sign-in attempts', async () => {
+    const strict = await startTestApp({ LOGIN_THROTTLE_LIMIT: '3' });
+    try {
+      const statuses: number[] = [];
+      for (let i = 0; i < 5; i++) statuses.push((await strict.http().post('/api/auth/login').send({ email: DEMO.desk, password: 'nope-nope' })).status);
+      expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
+      expect(statuses.slice(3)).toEqual([429, 429]);
+    } finally {
+      await strict.close();
+    }
+  });
+
+  it('sends security headers', async () => {
+    const res = await t.http().get('/api/health');
+    expect(res.headers['x-content-type-options']).toBe('nosniff');
+    expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+  });
+});

@@ -1,0 +1,5 @@
+export * from './errors';
+export * from './audit';
+export * from './auth';
+export * from './users';
+export * from './shops';
