@@ -1,0 +1,23 @@
+import type { Role } from '@benchproof/contracts';
+import { redirect, type LoaderFunctionArgs } from 'react-router';
+import { sessionQuery } from '../features/auth';
+import { queryClient } from '../lib/query-client';
+
+/** Loader for the signed-in area: no session → sign-in, remembering where the user was going. */
+export async function requireSession({ request }: LoaderFunctionArgs) {
+  const user = await queryClient.ensureQueryData(sessionQuery);
+  if (!user) {
+    const url = new URL(request.url);
+    throw redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);
+  }
+  return null;
+}
+
+/** Loader for role-limited pages; other roles are sent to the jobs page. */
+export const requireRole =
+  (...roles: Role[]) =>
+  async () => {
+    const user = await queryClient.ensureQueryData(sessionQuery);
+    if (!user || !roles.includes(user.role)) throw redirect('/jobs');
+    return null;
+  };

@@ -1,0 +1,31 @@
+import { Center, Paper, Stack, Text, Title } from '@mantine/core';
+import { useNavigate, useSearchParams } from 'react-router';
+import { Logo } from '../../../components/logo';
+import { SignInForm } from '../../../features/auth';
+
+const NOTICES: Record<string, string> = {
+  expired: 'Your session has expired. Please sign in again — nothing you saved is lost.',
+  signed_out: 'You have been signed out.',
+};
+
+export function SignInRoute() {
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const next = params.get('next');
+  const safeNext = next?.startsWith('/') && !next.startsWith('//') ? next : '/jobs';
+
+  return (
+    <Center mih="100dvh" p="md" bg="bench.0">
+      <Paper withBorder shadow="sm" p="xl" radius="lg" w="100%" maw={420}>
+        <Stack gap="lg">
+          <Logo size={40} />
+          <div>
+            <Title order={2}>Sign in to the bench</Title>
+            <Text c="dimmed">Staff of your workshop only. Bike owners use the link in their e-mail.</Text>
+          </div>
+          <SignInForm notice={NOTICES[params.get('reason') ?? ''] ?? null} onSignedIn={() => void navigate(safeNext, { replace: true })} />
+        </Stack>
+      </Paper>
+    </Center>
+  );
+}

@@ -1,0 +1,47 @@
+import type { LoginRequest, LoginResponse, SessionResponse } from '@benchproof/contracts';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api, ApiError, setCsrfToken } from '../../../lib/api-client';
+
+export const sessionKey = ['session'] as const;
+
+/** The signed-in user, or null. The CSRF token travels with it. */
+export const sessionQuery = queryOptions({
+  queryKey: sessionKey,
+  staleTime: 5 * 60_000,
+  queryFn: async () => {
+    try {
+      const res = await api<SessionResponse>('/auth/session', { quietAuth: true });
+      setCsrfToken(res.csrfToken);
+      return res.user;
+    } catch (e) {
+      if (e instanceof ApiError && e.status === 401) return null;
+      throw e;
+    }
+  },
+});
+
+export const useSession = () => useQuery(sessionQuery);
+
+export function useLogin() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: LoginRequest) => api<LoginResponse>('/auth/login', { method: 'POST', body, quietAuth: true }),
+    onSuccess: (res) => {
+      setCsrfToken(res.csrfToken);
+      qc.clear();
+      qc.setQueryData(sessionKey, res.user);
+    },
+  });
+}
+
+export function useLogout() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<void>('/auth/logout', { method: 'POST', quietAuth: true }),
+    onSettled: () => {
+      setCsrfToken(null);
+      qc.clear();
+      qc.setQueryData(sessionKey, null);
+    },
+  });
+}
