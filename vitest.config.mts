@@ -27,6 +27,13 @@ export default defineConfig({
           testTimeout: 30_000, hookTimeout: 60_000,
         },
       },
+      {
+        test: {
+          name: 'browser', root: 'apps/web/e2e', environment: 'node', globals: true,
+          include: ['**/*.e2e.ts'], globalSetup: ['./support/global-setup.ts'],
+          fileParallelism: false, testTimeout: 60_000, hookTimeout: 60_000,
+        },
+      },
     ],
   },
 });

@@ -8,4 +8,4 @@ Object.defineProperty(window, 'matchMedia', {
   }),
 });
 class ResizeObserverStub { observe() {} unobserve() {} disconnect() {} }
-window.ResizeObserver = ResizeObserverStub as unknown as typeof ResizeObserver;
+window.ResizeObserver = ResizeObserverStub;

@@ -7,7 +7,7 @@ import { CLOCK, type Clock } from '../infra/clock';
 import { hashPassword, verifyPassword } from './password';
 import { type UserRow, UsersRepository } from './users.repository';
 
-const toDto = (u: UserRow): UserDto => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active });
+const toDto = (u: UserRow): UserDto => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, createdAt: u.createdAt.toISOString() });
 
 @Injectable()
 export class UsersService {

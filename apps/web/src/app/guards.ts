@@ -1,6 +1,6 @@
 import type { Role } from '@benchproof/contracts';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
-import { sessionQuery } from '../features/auth';
+import { sessionHasExpired, sessionQuery } from '../features/auth';
 import { queryClient } from '../lib/query-client';
 
 /** Loader for the signed-in area: no session → sign-in, remembering where the user was going. */
@@ -8,7 +8,8 @@ export async function requireSession({ request }: LoaderFunctionArgs) {
   const user = await queryClient.ensureQueryData(sessionQuery);
   if (!user) {
     const url = new URL(request.url);
-    throw redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);
+    const reason = sessionHasExpired() ? '&reason=expired' : '';
+    throw redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}${reason}`);
   }
   return null;
 }

@@ -2,7 +2,7 @@ import { type CanActivate, type ExecutionContext, Inject, Injectable } from '@ne
 import { Reflector } from '@nestjs/core';
 import { doubleCsrf, type DoubleCsrfUtilities } from 'csrf-csrf';
 import type { Request, Response } from 'express';
-import { APP_CONFIG, type AppConfig } from '../../config';
+import type { AppConfig } from '../../config';
 import { DomainError } from '../http';
 import { IS_PUBLIC } from './auth.decorators';
 import { CSRF_COOKIE, CSRF_HEADER, SESSION_COOKIE, sessionFromCookie } from './session-cookie';
@@ -16,7 +16,7 @@ export const csrfFactory = (cfg: AppConfig): DoubleCsrfUtilities =>
     getSessionIdentifier: (req) => sessionFromCookie(req) ?? '',
     cookieName: CSRF_COOKIE,
     cookieOptions: { sameSite: 'lax', secure: cfg.COOKIE_SECURE, path: '/', httpOnly: true },
-    getCsrfTokenFromRequest: (req) => req.headers[CSRF_HEADER] as string | undefined,
+    getCsrfTokenFromRequest: (req) => req.headers[CSRF_HEADER],
   });
 
 /**

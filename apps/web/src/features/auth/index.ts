@@ -1,2 +1,2 @@
-export { sessionKey, sessionQuery, useSession, useLogout } from './api/session';
+export { sessionHasExpired, sessionKey, sessionQuery, useSession, useLogout } from './api/session';
 export { SignInForm } from './components/sign-in-form';

@@ -4,6 +4,10 @@ import { api, ApiError, setCsrfToken } from '../../../lib/api-client';
 
 export const sessionKey = ['session'] as const;
 
+let expired = false;
+/** True when the last session probe found a session that had expired (not merely absent). */
+export const sessionHasExpired = (): boolean => expired;
+
 /** The signed-in user, or null. The CSRF token travels with it. */
 export const sessionQuery = queryOptions({
   queryKey: sessionKey,
@@ -12,8 +16,10 @@ export const sessionQuery = queryOptions({
     try {
       const res = await api<SessionResponse>('/auth/session', { quietAuth: true });
       setCsrfToken(res.csrfToken);
+      expired = false;
       return res.user;
     } catch (e) {
+      expired = e instanceof ApiError && e.code === 'SESSION_EXPIRED';
       if (e instanceof ApiError && e.status === 401) return null;
       throw e;
     }

@@ -25,7 +25,7 @@ function UserRow({ user, me }: { user: UserDto; me: number }) {
         <Text size="sm" c="dimmed">{user.email}</Text>
       </Table.Td>
       <Table.Td miw={150}>
-        <Select aria-label={`Role of ${user.name}`} data={roleOptions} value={user.role} allowDeselect={false} disabled={!user.active || pending} onChange={(v) => v && run(user.id, { role: v as Role })} />
+        <Select aria-label={`Role of ${user.name}`} data={roleOptions} value={user.role} allowDeselect={false} disabled={!user.active || pending} onChange={(v) => v && run(user.id, { role: v })} />
       </Table.Td>
       <Table.Td>{user.active ? <Badge color="bench">Active</Badge> : <Badge color="gray">Deactivated</Badge>}</Table.Td>
       <Table.Td>

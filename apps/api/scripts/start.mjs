@@ -1,0 +1,37 @@
+#!/usr/bin/env node
+// `npm start`: install if needed, build, then serve web + API on one port.
+// The server applies migrations and seeds the demo shop itself when the database is new.
+import { spawn, spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), '../../..');
+const run = (cmd, args) => {
+  const r = spawnSync(cmd, args, { cwd: root, stdio: 'inherit' });
+  if (r.status !== 0) process.exit(r.status ?? 1);
+};
+
+if (!existsSync(resolve(root, 'node_modules/.package-lock.json'))) {
+  console.log('[start] Installing dependencies (npm ci)…');
+  run('npm', ['ci', '--no-audit', '--no-fund']);
+}
+console.log('[start] Building API and web…');
+run('npm', ['run', 'build']);
+
+const children = [];
+const catcher = resolve(root, 'apps/api/scripts/mail-catcher.mjs');
+const mailToCatcher = process.env.MAIL_CATCHER !== 'false' && ['127.0.0.1', 'localhost', undefined].includes(process.env.SMTP_HOST);
+if (mailToCatcher && existsSync(catcher)) {
+  children.push(spawn(process.execPath, [catcher], { cwd: root, stdio: 'inherit' }));
+}
+
+const server = spawn(process.execPath, [resolve(root, 'dist/apps/api/apps/api/src/main.js')], { cwd: root, stdio: 'inherit', env: process.env });
+children.push(server);
+const stop = (signal) => children.forEach((c) => c.kill(signal));
+process.on('SIGINT', () => stop('SIGINT'));
+process.on('SIGTERM', () => stop('SIGTERM'));
+server.on('exit', (code) => {
+  stop('SIGTERM');
+  process.exit(code ?? 0);
+});
