@@ -44,6 +44,10 @@ export default tseslint.config(
     rules: { 'no-restricted-imports': restrict(['^(?!\\.{1,2}/|@benchproof/domain$)', 'libs/annotation is pure TypeScript: no React, no Konva (rule 2).']) },
   },
   {
+    files: ['libs/*/src/**/*.test.ts'],
+    rules: { 'no-restricted-imports': restrict(['^(?!\\.{1,2}/|mathjs$|zod$|@benchproof/domain$)', 'Lib tests may add only the mathjs reference oracle.']) },
+  },
+  {
     files: ['apps/api/**'],
     rules: { 'no-restricted-imports': restrict(['(^|/)apps/web(/|$)|^@benchproof/web$', 'The apps never import each other (rule 4).']) },
   },
