@@ -1,1 +1,4 @@
 export * from './staff';
+export * from './records';
+export * from './media/scenes';
+export * from './media/shots';

@@ -1,22 +1,29 @@
 import { z } from 'zod';
+import { EmailSchema, IdSchema, requiredText } from './common';
 
+/** Staff roles (DESIGN.md). The bike owner is not a user. */
 export const ROLES = ['manager', 'desk', 'mechanic'] as const;
 export const RoleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof RoleSchema>;
 
-export const ROLE_LABELS: Record<Role, string> = { manager: 'Manager', desk: 'Front desk', mechanic: 'Mechanic' };
+export const ROLE_LABELS: Readonly<Record<Role, string>> = {
+  manager: 'Manager',
+  desk: 'Front desk',
+  mechanic: 'Mechanic',
+};
 
 export const LoginRequestSchema = z.object({
-  email: z.email('Enter a valid e-mail address').max(200),
-  password: z.string().min(1, 'Enter your password').max(200),
+  email: EmailSchema,
+  password: z.string().min(1, 'Required').max(200),
 });
 export type LoginRequest = z.infer<typeof LoginRequestSchema>;
 
+/** The signed-in user as the api and the web see them. */
 export const SessionUserSchema = z.object({
-  id: z.number().int(),
-  shopId: z.number().int(),
-  email: z.string(),
-  name: z.string(),
+  id: IdSchema,
+  shopId: IdSchema,
+  email: z.email(),
+  name: requiredText(100),
   role: RoleSchema,
 });
 export type SessionUser = z.infer<typeof SessionUserSchema>;

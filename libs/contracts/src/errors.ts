@@ -1,38 +1,70 @@
 import { z } from 'zod';
 
 /**
- * Every error the API returns carries one of these codes; the web switches on the code,
- * never on the message. Status is the HTTP status the API answers with.
+ * Every error code the api returns. One filter maps a code to its HTTP
+ * status and default message; the web switches on `code`, never on text.
  */
 export const ERROR_CODES = {
   VALIDATION_FAILED: { status: 400, message: 'Some fields need attention.' },
   UNAUTHENTICATED: { status: 401, message: 'Please sign in.' },
-  SESSION_EXPIRED: { status: 401, message: 'Your session has expired. Please sign in again.' },
+  SESSION_EXPIRED: { status: 401, message: 'Your session has ended. Please sign in again.' },
   INVALID_CREDENTIALS: { status: 401, message: 'E-mail or password is not right.' },
   FORBIDDEN: { status: 403, message: 'Your role does not allow this.' },
-  CSRF_MISMATCH: { status: 403, message: 'The page is out of date. Reload it and try again.' },
+  CSRF_MISMATCH: { status: 403, message: 'The page is out of date. Reload and try again.' },
   NOT_FOUND: { status: 404, message: 'Not found.' },
-  CONFLICT: { status: 409, message: 'That conflicts with the current state.' },
-  ILLEGAL_TRANSITION: { status: 409, message: 'The job cannot move to that status from here.' },
-  LAST_MANAGER: { status: 409, message: 'The shop needs at least one active manager.' },
+  CONFLICT: { status: 409, message: 'This was changed by someone else or already exists.' },
+  ILLEGAL_TRANSITION: { status: 409, message: 'The job cannot move to that status from where it is.' },
+  LAST_MANAGER: { status: 409, message: 'A shop needs at least one active manager.' },
   EMAIL_TAKEN: { status: 409, message: 'That e-mail address already has an account.' },
   FINAL_CHECK_SAME_PERSON: { status: 409, message: 'The final check must be done by someone other than the job’s mechanic.' },
-  FILE_TOO_LARGE: { status: 413, message: 'The file is larger than this shop allows.' },
-  UNSUPPORTED_MEDIA_TYPE: { status: 415, message: 'That kind of file is not accepted.' },
+  FINAL_CHECK_REQUIRED: { status: 409, message: 'Record a passed final check before marking the job ready.' },
+  FILE_TOO_LARGE: { status: 413, message: 'The file is too large.' },
+  UNSUPPORTED_MEDIA_TYPE: { status: 415, message: 'This file type is not supported.' },
   FILE_EMPTY: { status: 422, message: 'The file is empty.' },
-  FILE_CORRUPT: { status: 422, message: 'The file is damaged or incomplete.' },
-  IMAGE_TOO_LARGE: { status: 422, message: 'The image has too many pixels to process safely.' },
-  RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a minute and try again.' },
+  FILE_CORRUPT: { status: 422, message: 'The file could not be read.' },
+  IMAGE_TOO_LARGE: { status: 422, message: 'The image has too many pixels to process.' },
+  RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
 } as const satisfies Record<string, { status: number; message: string }>;
 
 export type ErrorCode = keyof typeof ERROR_CODES;
 
-export const ErrorCodeSchema = z.enum(Object.keys(ERROR_CODES) as [ErrorCode, ...ErrorCode[]]);
+/** All codes, for enums and exhaustive switches. */
+export const ERROR_CODE_LIST = Object.keys(ERROR_CODES) as [ErrorCode, ...ErrorCode[]];
 
+/** HTTP status for a code. */
+export function httpStatusFor(code: ErrorCode): number {
+  return ERROR_CODES[code].status;
+}
+
+/** Default message for a code. */
+export function defaultMessageFor(code: ErrorCode): string {
+  return ERROR_CODES[code].message;
+}
+
+export const ErrorCodeSchema = z.enum(ERROR_CODE_LIST);
+
+/** One field problem: dotted path ("newBike.year") and message. */
+export const FieldIssueSchema = z.object({ path: z.string(), message: z.string() });
+export type FieldIssue = z.infer<typeof FieldIssueSchema>;
+
+/** The body of every error response. */
 export const ErrorBodySchema = z.object({
   code: ErrorCodeSchema,
   message: z.string(),
   details: z.unknown(),
 });
 export type ErrorBody = z.infer<typeof ErrorBodySchema>;
+
+/**
+ * VALIDATION_FAILED details from a zod error: `{ issues: [{ path, message }] }`,
+ * so a form can put each message under its field.
+ */
+export function validationDetails(error: z.ZodError): { issues: FieldIssue[] } {
+  return {
+    issues: error.issues.map((issue) => ({
+      path: issue.path.map(String).join('.'),
+      message: issue.message,
+    })),
+  };
+}

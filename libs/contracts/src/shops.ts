@@ -1,34 +1,66 @@
+import { chainWearLimits, MAX_BICYCLE_CHAIN_LIMIT_PCT } from '@benchproof/domain';
 import { z } from 'zod';
+import { IdSchema, requiredText } from './common';
+
+export const UNIT_SYSTEMS = ['metric', 'imperial'] as const;
+export const UnitSystemSchema = z.enum(UNIT_SYSTEMS);
+export type UnitSystem = z.infer<typeof UnitSystemSchema>;
+
+export const PAGE_SIZES = ['A4', 'Letter'] as const;
+export const PageSizeSchema = z.enum(PAGE_SIZES);
+export type PageSize = z.infer<typeof PageSizeSchema>;
+
+/** ISO 4217 alphabetic code, e.g. GBP, EUR, USD. */
+export const CurrencySchema = z.string().regex(/^[A-Z]{3}$/, 'Use a 3-letter ISO 4217 code, e.g. GBP');
+
+const limitPct = z.number().positive().max(MAX_BICYCLE_CHAIN_LIMIT_PCT);
+
+/**
+ * A shop's chain replace-at policy (%), checked with the same rule the
+ * computation uses (domain chainWearLimits): positive, at most 2 %, cassette
+ * limit not below a chain limit.
+ */
+export const ChainLimitsSchema = z
+  .object({ replaceAt11Pct: limitPct, replaceAt10Pct: limitPct, cassettePct: limitPct })
+  .superRefine((policy, ctx) => {
+    try {
+      chainWearLimits(11, policy);
+    } catch (error) {
+      ctx.addIssue({ code: 'custom', path: ['cassettePct'], message: (error as Error).message });
+    }
+  });
+export type ChainLimits = z.infer<typeof ChainLimitsSchema>;
 
 const hexColour = z.string().regex(/^#[0-9a-fA-F]{6}$/, 'A colour like #1F5F5B');
 
-export const ChainLimitsSchema = z.object({
-  replaceAt11Pct: z.number().positive().max(2),
-  replaceAt10Pct: z.number().positive().max(2),
-  cassettePct: z.number().positive().max(3),
-});
-export type ChainLimits = z.infer<typeof ChainLimitsSchema>;
-
-export const ShopSettingsSchema = z.object({
-  name: z.string().trim().min(2).max(120),
-  address: z.string().max(400),
+const settingsFields = {
+  name: requiredText(120),
+  address: z.string().trim().max(500),
   email: z.union([z.email(), z.literal('')]),
   phone: z.string().max(40),
-  labourRateMinor: z.number().int().min(0).max(10_000_000),
-  taxRateBp: z.number().int().min(0).max(10_000),
-  currency: z.string().regex(/^[A-Z]{3}$/, 'An ISO 4217 code such as EUR'),
-  units: z.enum(['metric', 'imperial']),
-  pageSize: z.enum(['A4', 'Letter']),
-  finalCheckSecondPerson: z.boolean(),
-  chainLimits: ChainLimitsSchema.nullable(),
+  /** Report branding; the settings page checks contrast (WCAG 2.2) before saving. */
   brandPrimary: hexColour,
   brandAccent: hexColour,
   reportFooter: z.string().max(1000),
-});
-export type ShopSettings = z.infer<typeof ShopSettingsSchema>;
+  /** Labour rate per hour in minor units (pence, cents). */
+  labourRateMinor: z.int().min(0).max(1_000_000),
+  /** Tax rate in basis points: 2000 = 20 %. */
+  taxRateBp: z.int().min(0).max(10_000),
+  currency: CurrencySchema,
+  units: UnitSystemSchema,
+  pageSize: PageSizeSchema,
+  /** Final check must be signed off by someone other than the mechanic. */
+  finalCheckSecondPerson: z.boolean(),
+  /** Null: the BenchProof defaults (0.5 / 0.75 / 1.0 %). */
+  chainLimits: ChainLimitsSchema.nullable(),
+};
 
-export const ShopSettingsDtoSchema = ShopSettingsSchema.extend({ id: z.number().int() });
+export const ShopSettingsDtoSchema = z.object({ id: IdSchema, ...settingsFields });
 export type ShopSettingsDto = z.infer<typeof ShopSettingsDtoSchema>;
 
-export const UpdateShopSettingsRequestSchema = ShopSettingsSchema.partial();
+/** Partial update: only the fields sent change; chainLimits null resets to defaults. */
+export const UpdateShopSettingsRequestSchema = z
+  .object(settingsFields)
+  .partial()
+  .refine((v) => Object.values(v).some((x) => x !== undefined), 'Nothing to update');
 export type UpdateShopSettingsRequest = z.infer<typeof UpdateShopSettingsRequestSchema>;

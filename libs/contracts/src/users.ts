@@ -1,24 +1,29 @@
 import { z } from 'zod';
 import { RoleSchema } from './auth';
+import { EmailSchema, IdSchema, IsoDateTimeSchema, requiredText } from './common';
+
+/** Minimum password length for staff accounts. */
+export const MIN_PASSWORD_LENGTH = 10;
 
 export const CreateUserRequestSchema = z.object({
-  name: z.string().trim().min(2, 'Enter the full name').max(120),
-  email: z.email('Enter a valid e-mail address').max(200),
+  name: requiredText(100),
+  email: EmailSchema,
   role: RoleSchema,
-  password: z.string().min(10, 'At least 10 characters').max(200),
+  password: z.string().min(MIN_PASSWORD_LENGTH, `At least ${MIN_PASSWORD_LENGTH} characters`).max(200),
 });
 export type CreateUserRequest = z.infer<typeof CreateUserRequestSchema>;
 
 export const UpdateUserRequestSchema = z
-  .object({ role: RoleSchema.optional(), active: z.boolean().optional(), name: z.string().trim().min(2).max(120).optional() })
-  .refine((v) => Object.keys(v).length > 0, 'Nothing to change');
+  .object({ role: RoleSchema.optional(), active: z.boolean().optional() })
+  .refine((v) => v.role !== undefined || v.active !== undefined, 'Change the role or the active flag');
 export type UpdateUserRequest = z.infer<typeof UpdateUserRequestSchema>;
 
 export const UserDtoSchema = z.object({
-  id: z.number().int(),
+  id: IdSchema,
   name: z.string(),
-  email: z.string(),
+  email: z.email(),
   role: RoleSchema,
   active: z.boolean(),
+  createdAt: IsoDateTimeSchema,
 });
 export type UserDto = z.infer<typeof UserDtoSchema>;

@@ -1,5 +1,16 @@
 import { Module } from '@nestjs/common';
+import { FindingsModule } from '../findings';
+import { InspectionModule } from '../inspection';
+import { JobsModule } from '../jobs';
+import { MediaModule } from '../media';
+import { WorkLogModule } from '../work-log';
+import { DemoMediaSeeder } from './demo-media.seeder';
+import { SeedRecords } from './seed-records';
 import { SeedService } from './seed.service';
 
-@Module({ providers: [SeedService], exports: [SeedService] })
+@Module({
+  imports: [JobsModule, InspectionModule, FindingsModule, WorkLogModule, MediaModule],
+  providers: [SeedService, SeedRecords, DemoMediaSeeder],
+  exports: [SeedService],
+})
 export class SeedModule {}

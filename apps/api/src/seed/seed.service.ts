@@ -1,9 +1,13 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
+import { eq } from 'drizzle-orm';
 import { DEMO_PASSWORD, DEMO_SHOPS, type DemoShop } from '@benchproof/seeds';
 import { DB, type Db } from '../core/db';
 import { shops, users } from '../db/schema';
+import { backdateJob } from './seed-backdate';
+import { SeedRecords, type ShopActors } from './seed-records';
 import { CLOCK, type Clock } from '../infra/clock';
 import { hashPassword } from '../users';
+import { DemoMediaSeeder } from './demo-media.seeder';
 
 /**
  * Loads the invented demo scenario into an empty database. Staff and shops are
@@ -17,6 +21,8 @@ export class SeedService {
   constructor(
     @Inject(DB) private readonly db: Db,
     @Inject(CLOCK) private readonly clock: Clock,
+    private readonly demoMedia: DemoMediaSeeder,
+    private readonly records: SeedRecords,
   ) {}
 
   isEmpty(): boolean {
@@ -25,8 +31,30 @@ export class SeedService {
 
   async seedDemo(): Promise<void> {
     const passwordHash = await hashPassword(DEMO_PASSWORD);
-    for (const demo of DEMO_SHOPS) this.insertShop(demo, passwordHash);
-    this.logger.log(`Seeded ${DEMO_SHOPS.length} demo shops`);
+    let jobs = 0;
+    for (const demo of DEMO_SHOPS) {
+      const shopId = this.insertShop(demo, passwordHash);
+      const seeded = this.records.seedShop(demo.key, this.actors(shopId));
+      for (const [jobId, daysAgo] of seeded) backdateJob(this.db, jobId, daysAgo);
+      jobs += seeded.length;
+    }
+    this.logger.log(`Seeded ${DEMO_SHOPS.length} demo shops with ${jobs} jobs`);
+    await this.seedDemoMedia();
+  }
+
+  /** Generated before/after shots and scope stills for the most recent demo jobs of each shop. */
+  async seedDemoMedia(): Promise<void> {
+    await this.demoMedia.seed();
+  }
+
+  /** The demo staff as request actors, the way the session guard would see them. */
+  private actors(shopId: number): ShopActors {
+    const staff = this.db.select().from(users).where(eq(users.shopId, shopId)).all();
+    const byEmail = new Map(staff.map((u) => [u.email, { id: u.id, shopId, role: u.role, email: u.email, name: u.name }]));
+    const first = (role: string) => [...byEmail.values()].find((u) => u.role === role);
+    const manager = first('manager');
+    if (!manager) throw new Error('Demo shop without a manager');
+    return { manager, desk: first('desk') ?? manager, byEmail };
   }
 
   private insertShop(demo: DemoShop, passwordHash: string): number {

@@ -1,0 +1,94 @@
+import { spawn, fork } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import { createWriteStream, readFileSync } from 'node:fs';
+import { once } from 'node:events';
+import { createServer } from 'node:net';
+
+/** Resident set size of a process in bytes, from /proc/<pid>/status (VmRSS, in kB). */
+export function rssOf(pid) {
+  const line = readFileSync(`/proc/${pid}/status`, 'utf8').split('\n').find((l) => l.startsWith('VmRSS:'));
+  return Number(line.replace(/\D+/g, '')) * 1024;
+}
+
+/** Samples a process's RSS every `ms` until stopped; returns the peak. */
+export function sampleRss(pid, ms = 25) {
+  let peak = rssOf(pid);
+  const timer = setInterval(() => {
+    try {
+      peak = Math.max(peak, rssOf(pid));
+    } catch {
+      /* process gone */
+    }
+  }, ms);
+  return { stop: () => (clearInterval(timer), peak) };
+}
+
+const box = (type, body) => {
+  const head = Buffer.alloc(8);
+  head.writeUInt32BE(body.length + 8, 0);
+  head.write(type, 4, 'latin1');
+  return Buffer.concat([head, body]);
+};
+
+/**
+ * Writes `bytes` to `path` as a sniffable MP4 (ftyp + moov with mvhd/tkhd, then one
+ * mdat of pseudo-random data), streamed in 4 MB chunks so the generator stays small.
+ */
+export async function writeTestVideo(path, bytes) {
+  const mvhd = Buffer.alloc(100);
+  mvhd.writeUInt32BE(1000, 12);
+  mvhd.writeUInt32BE(600_000, 16);
+  const tkhd = Buffer.alloc(84);
+  tkhd.writeUInt32BE(1920 * 65536, 76);
+  tkhd.writeUInt32BE(1080 * 65536, 80);
+  const head = Buffer.concat([
+    box('ftyp', Buffer.concat([Buffer.from('isom'), Buffer.from([0, 0, 2, 0]), Buffer.from('isomiso2mp41')])),
+    box('moov', Buffer.concat([box('mvhd', mvhd), box('trak', box('tkhd', tkhd))])),
+  ]);
+  const payload = bytes - head.length - 8;
+  const mdatHead = Buffer.alloc(8);
+  mdatHead.writeUInt32BE(payload + 8, 0);
+  mdatHead.write('mdat', 4, 'latin1');
+  const out = createWriteStream(path);
+  out.write(Buffer.concat([head, mdatHead]));
+  const chunk = randomBytes(4 * 1024 * 1024);
+  for (let left = payload, i = 0; left > 0; i++) {
+    chunk.writeUInt32BE(i, 0);
+    const part = left >= chunk.length ? chunk : chunk.subarray(0, left);
+    if (!out.write(part)) await once(out, 'drain');
+    left -= part.length;
+  }
+  out.end();
+  await once(out, 'finish');
+}
+
+export function freePort() {
+  return new Promise((resolve) => {
+    const s = createServer().listen(0, '127.0.0.1', () => {
+      const { port } = s.address();
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+export async function waitForHealth(base, child) {
+  for (let i = 0; i < 600; i++) {
+    if (child.exitCode !== null) throw new Error(`API exited with ${child.exitCode}`);
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) return;
+    } catch {
+      /* not up yet */
+    }
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error('API did not come up');
+}
+
+export function startBare(dir, script) {
+  const child = fork(script, { env: { ...process.env, BARE_DIR: dir }, stdio: ['ignore', 'inherit', 'inherit', 'ipc'] });
+  return once(child, 'message').then(([msg]) => ({ child, port: msg.port }));
+}
+
+export function startApi(entry, env) {
+  return spawn(process.execPath, [entry], { env: { ...process.env, ...env }, stdio: ['ignore', 'ignore', 'inherit'] });
+}

@@ -1,0 +1,2 @@
+export { BikesModule } from './bikes.module';
+export { BikesService } from './bikes.service';

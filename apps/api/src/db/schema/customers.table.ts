@@ -1,0 +1,21 @@
+import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { id, timestamp } from './columns';
+import { shops } from './shops.table';
+
+/** The bike owner. Not a user: owners reach their jobs through an owner link. */
+export const customers = sqliteTable(
+  'customers',
+  {
+    id: id(),
+    shopId: integer('shop_id').notNull().references(() => shops.id),
+    name: text('name').notNull(),
+    /** '' when not given (the API shows null). */
+    email: text('email').notNull().default(''),
+    phone: text('phone').notNull().default(''),
+    notes: text('notes').notNull().default(''),
+    preferredChannel: text('preferred_channel', { enum: ['email', 'phone', 'sms'] }).notNull().default('email'),
+    createdAt: timestamp('created_at').notNull(),
+    updatedAt: timestamp('updated_at').notNull(),
+  },
+  (t) => [index('customers_shop_name_idx').on(t.shopId, t.name), index('customers_shop_email_idx').on(t.shopId, t.email)],
+);

@@ -1,0 +1,44 @@
+// Type-only: drizzle-kit loads this file without the workspace libs.
+import type { JobStatus } from '@benchproof/domain';
+import { index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { bikes } from './bikes.table';
+import { id, timestamp } from './columns';
+import { customers } from './customers.table';
+import { shops } from './shops.table';
+import { users } from './users.table';
+
+/** One workshop visit of one bike. */
+export const jobs = sqliteTable(
+  'jobs',
+  {
+    id: id(),
+    shopId: integer('shop_id').notNull().references(() => shops.id),
+    number: text('number').notNull(),
+    bikeId: integer('bike_id').notNull().references(() => bikes.id),
+    customerId: integer('customer_id').notNull().references(() => customers.id),
+    status: text('status').$type<JobStatus>().notNull(),
+    reportedSymptoms: text('reported_symptoms').notNull().default(''),
+    /** Calendar day in the shop's terms, ISO "YYYY-MM-DD". */
+    promisedOn: text('promised_on'),
+    mechanicId: integer('mechanic_id').references(() => users.id),
+    finalCheckerId: integer('final_checker_id').references(() => users.id),
+    createdBy: integer('created_by').references(() => users.id),
+    bookedInAt: timestamp('booked_in_at').notNull(),
+    onStandAt: timestamp('on_stand_at'),
+    waitingOwnerAt: timestamp('waiting_owner_at'),
+    inWorkAt: timestamp('in_work_at'),
+    finalCheckAt: timestamp('final_check_at'),
+    readyAt: timestamp('ready_at'),
+    collectedAt: timestamp('collected_at'),
+    cancelledAt: timestamp('cancelled_at'),
+    createdAt: timestamp('created_at').notNull(),
+    updatedAt: timestamp('updated_at').notNull(),
+  },
+  (t) => [
+    uniqueIndex('jobs_shop_number_unique').on(t.shopId, t.number),
+    index('jobs_shop_status_idx').on(t.shopId, t.status),
+    index('jobs_shop_mechanic_idx').on(t.shopId, t.mechanicId),
+    index('jobs_shop_promised_idx').on(t.shopId, t.promisedOn),
+    index('jobs_shop_bike_idx').on(t.shopId, t.bikeId),
+  ],
+);

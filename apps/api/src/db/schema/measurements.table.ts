@@ -1,0 +1,27 @@
+// Type-only: drizzle-kit loads this file without the workspace libs.
+import type { MeasurementKind } from '@benchproof/domain';
+import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { checkpoints } from './checkpoints.table';
+import { id, timestamp } from './columns';
+import { jobs } from './jobs.table';
+import { shops } from './shops.table';
+import { users } from './users.table';
+
+/** A typed reading as entered (input) and what libs/domain computed from it (result). */
+export const measurements = sqliteTable(
+  'measurements',
+  {
+    id: id(),
+    shopId: integer('shop_id').notNull().references(() => shops.id),
+    jobId: integer('job_id').notNull().references(() => jobs.id),
+    checkpointId: integer('checkpoint_id').references(() => checkpoints.id),
+    kind: text('kind').$type<MeasurementKind>().notNull(),
+    input: text('input', { mode: 'json' }).$type<Record<string, unknown>>().notNull(),
+    result: text('result', { mode: 'json' }).$type<Record<string, unknown>>().notNull(),
+    /** The unit the mechanic read in ("mm", "in", "gauge_pct", "grade"). */
+    unit: text('unit').notNull(),
+    userId: integer('user_id').references(() => users.id),
+    at: timestamp('at').notNull(),
+  },
+  (t) => [index('measurements_shop_job_idx').on(t.shopId, t.jobId), index('measurements_checkpoint_idx').on(t.checkpointId)],
+);

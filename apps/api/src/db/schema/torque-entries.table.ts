@@ -1,0 +1,28 @@
+import { index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { id, timestamp } from './columns';
+import { jobs } from './jobs.table';
+import { shops } from './shops.table';
+import { users } from './users.table';
+
+/** One fastener tightened: specified vs applied torque, each in the unit as read, and the verdict computed. */
+export const torqueEntries = sqliteTable(
+  'torque_entries',
+  {
+    id: id(),
+    shopId: integer('shop_id').notNull().references(() => shops.id),
+    jobId: integer('job_id').notNull().references(() => jobs.id),
+    fastener: text('fastener').notNull(),
+    input: text('input', { mode: 'json' }).$type<Record<string, unknown>>().notNull(),
+    result: text('result', { mode: 'json' }).$type<Record<string, unknown>>().notNull(),
+    specValue: real('spec_value').notNull(),
+    specUnit: text('spec_unit').notNull(),
+    appliedValue: real('applied_value').notNull(),
+    appliedUnit: text('applied_unit').notNull(),
+    specSource: text('spec_source').notNull(),
+    tool: text('tool').notNull().default(''),
+    carbonPart: integer('carbon_part', { mode: 'boolean' }).notNull().default(false),
+    userId: integer('user_id').references(() => users.id),
+    at: timestamp('at').notNull(),
+  },
+  (t) => [index('torque_entries_shop_job_idx').on(t.shopId, t.jobId)],
+);

@@ -1,0 +1,82 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import {
+  CreateFindingRequestSchema,
+  RecommendationRequestSchema,
+  RecordDecisionRequestSchema,
+  UpdateFindingRequestSchema,
+  type CreateFindingRequest,
+  type RecommendationRequest,
+  type RecordDecisionRequest,
+  type UpdateFindingRequest,
+} from '@benchproof/contracts';
+import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { ApiZodBody, zod } from '../core/http';
+import { FindingsService } from './findings.service';
+
+@ApiTags('findings')
+@Controller('jobs/:id')
+export class FindingsController {
+  constructor(private readonly findings: FindingsService) {}
+
+  @Get('findings')
+  list(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
+    return this.findings.list(user, id);
+  }
+
+  @Post('findings')
+  @Roles('manager', 'mechanic')
+  @ApiZodBody(CreateFindingRequestSchema)
+  create(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(CreateFindingRequestSchema)) body: CreateFindingRequest) {
+    return this.findings.create(user, id, body);
+  }
+
+  @Patch('findings/:findingId')
+  @Roles('manager', 'mechanic')
+  @ApiZodBody(UpdateFindingRequestSchema)
+  update(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Param('findingId', ParseIntPipe) findingId: number,
+    @Body(zod(UpdateFindingRequestSchema)) body: UpdateFindingRequest,
+  ) {
+    return this.findings.update(user, id, findingId, body);
+  }
+
+  @Delete('findings/:findingId')
+  @HttpCode(204)
+  @Roles('manager', 'mechanic')
+  remove(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Param('findingId', ParseIntPipe) findingId: number) {
+    this.findings.delete(user, id, findingId);
+  }
+
+  /** Create or replace; prices at the shop's current rates. Desk may price too (it builds the estimate). */
+  @Post('findings/:findingId/recommendation')
+  @Roles('manager', 'mechanic', 'desk')
+  @ApiZodBody(RecommendationRequestSchema)
+  setRecommendation(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Param('findingId', ParseIntPipe) findingId: number,
+    @Body(zod(RecommendationRequestSchema)) body: RecommendationRequest,
+  ) {
+    return this.findings.setRecommendation(user, id, findingId, body);
+  }
+
+  @Get('estimate')
+  estimate(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
+    return this.findings.estimate(user, id);
+  }
+
+  @Post('recommendations/:recId/decision')
+  @Roles('manager', 'desk')
+  @ApiZodBody(RecordDecisionRequestSchema)
+  decide(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Param('recId', ParseIntPipe) recId: number,
+    @Body(zod(RecordDecisionRequestSchema)) body: RecordDecisionRequest,
+  ) {
+    return this.findings.recordDecision(user, id, recId, body);
+  }
+}

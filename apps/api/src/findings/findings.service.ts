@@ -1,0 +1,157 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type {
+  CreateFindingRequest,
+  DecisionDto,
+  EstimateDto,
+  FindingDto,
+  RecommendationDto,
+  RecommendationRequest,
+  RecordDecisionRequest,
+  UpdateFindingRequest,
+} from '@benchproof/contracts';
+import { isTerminalStatus } from '@benchproof/domain';
+import { AuditService } from '../audit';
+import { BikesService } from '../bikes';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { CLOCK, type Clock } from '../infra/clock';
+import { InspectionService } from '../inspection';
+import { JobsService, type JobRef } from '../jobs';
+import { ShopsService } from '../shops';
+import { type FindingRow, FindingsRepository, type RecommendationRow } from './findings.repository';
+import { addTotals, toDecisionDto, toFindingDto, toRecommendationDto, ZERO_TOTALS } from './findings.view';
+
+/** One decision on a recommendation, from staff (phone, in person, e-mail) or from the owner page (owner_link). */
+export interface DecisionInput {
+  status: 'pending' | 'approved' | 'declined';
+  channel: 'phone' | 'in_person' | 'email' | 'owner_link';
+  decidedByName: string;
+  /** The staff member who recorded it; null when the owner decided on their own page. */
+  recordedBy: number | null;
+  decidedAt: Date;
+  note: string;
+}
+
+@Injectable()
+export class FindingsService {
+  constructor(
+    private readonly repo: FindingsRepository,
+    private readonly jobs: JobsService,
+    private readonly bikes: BikesService,
+    private readonly inspection: InspectionService,
+    private readonly shops: ShopsService,
+    private readonly audit: AuditService,
+    @Inject(CLOCK) private readonly clock: Clock,
+  ) {}
+
+  private openJob(actor: Pick<AuthUser, 'shopId'>, jobId: number): JobRef {
+    const job = this.jobs.getOwned(actor, jobId);
+    if (isTerminalStatus(job.status)) throw new DomainError('CONFLICT', 'The job is closed; its records can no longer change.', { status: job.status });
+    return job;
+  }
+
+  /** The finding if it belongs to this job of the caller's shop, else NOT_FOUND (media links use this). */
+  getOwned(actor: Pick<AuthUser, 'shopId'>, jobId: number, findingId: number): FindingRow {
+    this.jobs.getOwned(actor, jobId);
+    const f = this.repo.find(actor.shopId, jobId, findingId);
+    if (!f) throw notFound('Finding');
+    return f;
+  }
+
+  private dtos(actor: Pick<AuthUser, 'shopId'>, job: JobRef, rows: FindingRow[]): FindingDto[] {
+    const carbon = this.bikes.get(actor, job.bikeId).frameMaterial === 'carbon';
+    const recs = this.repo.recommendations(actor.shopId, job.id);
+    const decisions = this.repo.decisions(actor.shopId, recs.map((r) => r.id));
+    return rows.map((f) => toFindingDto(f, recs.find((r) => r.findingId === f.id), decisions, carbon));
+  }
+
+  list(actor: AuthUser, jobId: number): FindingDto[] {
+    const job = this.jobs.getOwned(actor, jobId);
+    return this.dtos(actor, job, this.repo.list(actor.shopId, jobId));
+  }
+
+  create(actor: AuthUser, jobId: number, input: CreateFindingRequest): FindingDto {
+    const job = this.openJob(actor, jobId);
+    if (input.checkpointId) this.inspection.requireCheckpoint(actor, jobId, input.checkpointId);
+    const now = this.clock.now();
+    const row = this.repo.insert({ ...input, shopId: actor.shopId, jobId, createdBy: actor.id, createdAt: now, updatedAt: now });
+    return this.dtos(actor, job, [row])[0];
+  }
+
+  update(actor: AuthUser, jobId: number, findingId: number, patch: UpdateFindingRequest): FindingDto {
+    const job = this.openJob(actor, jobId);
+    this.getOwned(actor, jobId, findingId);
+    if (patch.checkpointId) this.inspection.requireCheckpoint(actor, jobId, patch.checkpointId);
+    const row = this.repo.update(actor.shopId, findingId, { ...patch, updatedAt: this.clock.now() });
+    return this.dtos(actor, job, [row])[0];
+  }
+
+  delete(actor: AuthUser, jobId: number, findingId: number): void {
+    this.openJob(actor, jobId);
+    this.getOwned(actor, jobId, findingId);
+    try {
+      this.repo.transaction(() => this.repo.delete(actor.shopId, findingId));
+    } catch (e) {
+      // finding_media (media feature) still points at it: the shots must be unlinked first.
+      if ((e as { code?: string }).code === 'SQLITE_CONSTRAINT_FOREIGNKEY') throw new DomainError('CONFLICT', 'Unlink the shots of this finding before deleting it.');
+      throw e;
+    }
+    this.audit.record(actor, { action: 'finding.deleted', entityType: 'job', entityId: jobId, details: { findingId } });
+  }
+
+  /** Creates or replaces the finding's recommendation at the shop's current labour rate, tax rate and currency. */
+  setRecommendation(actor: AuthUser, jobId: number, findingId: number, input: RecommendationRequest): RecommendationDto {
+    this.openJob(actor, jobId);
+    this.getOwned(actor, jobId, findingId);
+    const shop = this.shops.settings(actor.shopId);
+    const now = this.clock.now();
+    const priced = { summary: input.summary, parts: input.parts, labourHundredths: input.labourHundredths, labourRateMinor: shop.labourRateMinor, taxRateBp: shop.taxRateBp, currency: shop.currency, updatedAt: now };
+    const existing = this.repo.recommendationOf(actor.shopId, findingId);
+    // A changed price needs the owner's word again.
+    const row = existing
+      ? this.repo.updateRecommendation(actor.shopId, existing.id, { ...priced, decisionStatus: 'pending' })
+      : this.repo.insertRecommendation({ ...priced, shopId: actor.shopId, jobId, findingId, createdBy: actor.id, createdAt: now });
+    this.audit.record(actor, { action: existing ? 'recommendation.replaced' : 'recommendation.created', entityType: 'job', entityId: jobId, details: { recommendationId: row.id, previousDecision: existing?.decisionStatus ?? null } });
+    return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]));
+  }
+
+  estimate(actor: AuthUser, jobId: number): EstimateDto {
+    const job = this.jobs.getOwned(actor, jobId);
+    const items = this.dtos(actor, job, this.repo.list(actor.shopId, jobId)).flatMap((f) => (f.recommendation ? [{ ...f, recommendation: f.recommendation }] : []));
+    const totals = { all: ZERO_TOTALS, approved: ZERO_TOTALS, pending: ZERO_TOTALS, declined: ZERO_TOTALS };
+    for (const { recommendation: r } of items) {
+      totals.all = addTotals(totals.all, r.totals);
+      totals[r.decisionStatus] = addTotals(totals[r.decisionStatus], r.totals);
+    }
+    return { jobId, currency: items[0]?.recommendation.currency ?? this.shops.settings(actor.shopId).currency, items, totals };
+  }
+
+  /** Staff record a decision the owner gave by phone, in person or by e-mail. */
+  recordDecision(actor: AuthUser, jobId: number, recommendationId: number, input: RecordDecisionRequest): DecisionDto {
+    this.jobs.getOwned(actor, jobId);
+    const decidedAt = input.decidedAt ? new Date(input.decidedAt) : this.clock.now();
+    return this.decide(actor, jobId, recommendationId, { ...input, recordedBy: actor.id, decidedAt });
+  }
+
+  /**
+   * The one way a decision is stored, for staff and for the owner page alike
+   * (channel owner_link, recordedBy null, scope from the owner link's job).
+   */
+  decide(scope: { shopId: number }, jobId: number, recommendationId: number, d: DecisionInput): DecisionDto {
+    const rec: RecommendationRow | undefined = this.repo.recommendation(scope.shopId, jobId, recommendationId);
+    if (!rec) throw notFound('Recommendation');
+    const row = this.repo.transaction(() => {
+      const inserted = this.repo.insertDecision({ ...d, shopId: scope.shopId, jobId, recommendationId, recordedAt: this.clock.now() });
+      this.repo.updateRecommendation(scope.shopId, rec.id, { decisionStatus: d.status });
+      return inserted;
+    });
+    const who = d.recordedBy === null ? { shopId: scope.shopId, id: null } : { shopId: scope.shopId, id: d.recordedBy };
+    this.audit.record(who, {
+      action: 'recommendation.decided',
+      entityType: 'job',
+      entityId: jobId,
+      details: { recommendationId, status: d.status, channel: d.channel, decidedByName: d.decidedByName },
+    });
+    return toDecisionDto(row);
+  }
+}

@@ -1,0 +1,2 @@
+export { FindingsModule } from './findings.module';
+export { FindingsService, type DecisionInput } from './findings.service';

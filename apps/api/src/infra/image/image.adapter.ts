@@ -1,0 +1,144 @@
+import exifr from 'exifr';
+import sharp, { type Sharp } from 'sharp';
+
+export type ImageCheck =
+  | { ok: true; width: number; height: number; format: string; orientation: number }
+  | { ok: false; reason: 'too_many_pixels' | 'corrupt' | 'unsupported'; message: string };
+
+export interface Rendition {
+  data: Buffer;
+  width: number;
+  height: number;
+}
+
+/** Long-edge limits of the derivatives, in pixels. */
+export const DERIVATIVE_SIZES = { thumb: 320, screen: 1600, print: 2400 } as const;
+export type SizedVariant = keyof typeof DERIVATIVE_SIZES;
+
+/** EXIF data a demo or test image is written with (sharp's withExif/withMetadata). */
+export interface ExifToWrite {
+  orientation?: number;
+  gps?: { lat: number; lon: number };
+  takenAt?: Date;
+  make?: string;
+}
+
+/**
+ * Every use of sharp (libvips) sits here. Inputs are opened with a pixel limit
+ * against decompression bombs; outputs are JPEG with no metadata at all (sharp
+ * drops EXIF/XMP/ICC unless keepExif/withMetadata is called, which only the demo
+ * writer below does, to make test and demo inputs).
+ */
+export class ImageAdapter {
+  constructor(private readonly maxPixels: number) {}
+
+  private open(input: string | Buffer): Sharp {
+    return sharp(input, { limitInputPixels: this.maxPixels, failOn: 'truncated' });
+  }
+
+  /** Reads the header, refuses too many pixels before decoding, then decodes once to prove the file is whole. */
+  async check(path: string): Promise<ImageCheck> {
+    let meta: sharp.Metadata;
+    try {
+      meta = await this.open(path).metadata();
+    } catch (err) {
+      return failure((err as Error).message);
+    }
+    const { width, height, format } = meta;
+    if (!width || !height) return { ok: false, reason: 'corrupt', message: 'No image dimensions' };
+    if (width * height > this.maxPixels) return { ok: false, reason: 'too_many_pixels', message: `${width}×${height}` };
+    try {
+      await this.open(path).resize(256, 256, { fit: 'inside' }).toBuffer();
+    } catch (err) {
+      return failure((err as Error).message);
+    }
+    return { ok: true, width, height, format: format ?? 'unknown', orientation: meta.orientation ?? 1 };
+  }
+
+  /** Whether this libvips build decodes HEIC (HEVC); prebuilt sharp reads only AVIF from the HEIF family. */
+  canReadHeic(): boolean {
+    const heif = sharp.format.heif as { input?: { file?: boolean; fileSuffix?: string[] } };
+    return Boolean(heif.input?.file) && (heif.input?.fileSuffix ?? []).includes('.heic');
+  }
+
+  /** Capture time from EXIF DateTimeOriginal (or CreateDate), if the camera wrote one. */
+  async captureTime(path: string): Promise<Date | null> {
+    try {
+      const tags = (await exifr.parse(path, { pick: ['DateTimeOriginal', 'CreateDate'] })) as
+        | { DateTimeOriginal?: Date; CreateDate?: Date }
+        | undefined;
+      const at = tags?.DateTimeOriginal ?? tags?.CreateDate;
+      return at instanceof Date && !Number.isNaN(at.getTime()) ? at : null;
+    } catch {
+      return null;
+    }
+  }
+
+  /**
+   * One derivative: rotate() applies the EXIF orientation (so the result is upright
+   * and carries none), sRGB, fit inside the long edge, baseline JPEG, no metadata.
+   */
+  async rendition(input: string | Buffer, longEdge: number): Promise<Rendition> {
+    const { data, info } = await this.open(input)
+      .rotate()
+      .toColourspace('srgb')
+      .resize(longEdge, longEdge, { fit: 'inside', withoutEnlargement: true })
+      .flatten({ background: '#ffffff' })
+      .jpeg({ quality: 82, mozjpeg: true })
+      .toBuffer({ resolveWithObject: true });
+    return { data, width: info.width, height: info.height };
+  }
+
+  /**
+   * Encodes pixels (PNG, or an SVG scene as a buffer) to a JPEG carrying EXIF orientation,
+   * GPS, capture time and camera make as asked: demo and test inputs whose stripping is checked.
+   */
+  async jpegWithExif(pixels: Buffer, exif: ExifToWrite = {}): Promise<Buffer> {
+    let img = sharp(pixels).flatten({ background: '#ffffff' });
+    if (exif.orientation && exif.orientation !== 1) img = img.withMetadata({ orientation: exif.orientation });
+    const ifd0: Record<string, string> = exif.make ? { Make: exif.make } : {};
+    const ifd2: Record<string, string> = exif.takenAt ? { DateTimeOriginal: exifDate(exif.takenAt) } : {};
+    const ifd3 = exif.gps ? gpsIfd(exif.gps.lat, exif.gps.lon) : {};
+    if (Object.keys({ ...ifd0, ...ifd2, ...ifd3 }).length) img = img.withExif({ IFD0: ifd0, IFD2: ifd2, IFD3: ifd3 });
+    return img.jpeg({ quality: 88 }).toBuffer();
+  }
+
+  /** Turns upright pixels into the stored pixels a camera would write for `orientation` (its inverse). */
+  async storedForOrientation(upright: Buffer, orientation: number): Promise<Buffer> {
+    const undo: Record<number, (s: Sharp) => Sharp> = {
+      1: (s) => s,
+      3: (s) => s.rotate(180),
+      6: (s) => s.rotate(270),
+      8: (s) => s.rotate(90),
+    };
+    const step = undo[orientation];
+    if (!step) throw new Error(`Demo images use orientation 1, 3, 6 or 8, not ${orientation}`);
+    return step(sharp(upright)).png().toBuffer();
+  }
+}
+
+/** Sorts a libvips error into the three answers the API gives. */
+function failure(message: string): ImageCheck {
+  if (/pixel limit/i.test(message)) return { ok: false, reason: 'too_many_pixels', message };
+  if (/unsupported|no decoder|compression format/i.test(message)) return { ok: false, reason: 'unsupported', message };
+  return { ok: false, reason: 'corrupt', message };
+}
+
+function exifDate(d: Date): string {
+  const p = (n: number) => String(n).padStart(2, '0');
+  return `${d.getUTCFullYear()}:${p(d.getUTCMonth() + 1)}:${p(d.getUTCDate())} ${p(d.getUTCHours())}:${p(d.getUTCMinutes())}:${p(d.getUTCSeconds())}`;
+}
+
+/** GPS IFD strings as sharp's withExif expects them: degrees, minutes, seconds as rationals. */
+function gpsIfd(lat: number, lon: number): Record<string, string> {
+  const dms = (v: number) => {
+    const a = Math.abs(v);
+    const deg = Math.floor(a);
+    const min = Math.floor((a - deg) * 60);
+    const sec = Math.round(((a - deg) * 60 - min) * 60 * 100);
+    return `${deg}/1 ${min}/1 ${sec}/100`;
+  };
+  return { GPSLatitudeRef: lat >= 0 ? 'N' : 'S', GPSLatitude: dms(lat), GPSLongitudeRef: lon >= 0 ? 'E' : 'W', GPSLongitude: dms(lon) };
+}
+
+export const IMAGE = Symbol('IMAGE');

@@ -1,0 +1,1 @@
+export { TaskQueue, TASK_QUEUE } from './task-queue';

@@ -1,0 +1,1 @@
+export { FileSniffer, SNIFFER, type SniffedType } from './file-sniffer';

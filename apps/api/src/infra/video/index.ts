@@ -1,0 +1,1 @@
+export { VideoProbe, VIDEO_PROBE, type VideoInfo } from './video-probe';

@@ -1,0 +1,2 @@
+export { InspectionModule } from './inspection.module';
+export { InspectionService } from './inspection.service';

@@ -1,0 +1,74 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import {
+  MeasurementInputSchema,
+  UpdateCheckpointRequestSchema,
+  type MeasurementInputDto,
+  type UpdateCheckpointRequest,
+} from '@benchproof/contracts';
+import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { ApiZodBody, zod } from '../core/http';
+import { BikeHistoryService } from './bike-history.service';
+import { InspectionService } from './inspection.service';
+
+@ApiTags('inspection')
+@Controller('jobs/:id')
+export class InspectionController {
+  constructor(private readonly inspection: InspectionService) {}
+
+  @Get('inspection')
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
+    return this.inspection.get(user, id);
+  }
+
+  @Patch('checkpoints/:checkpointId')
+  @Roles('manager', 'mechanic')
+  @ApiZodBody(UpdateCheckpointRequestSchema)
+  updateCheckpoint(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Param('checkpointId', ParseIntPipe) checkpointId: number,
+    @Body(zod(UpdateCheckpointRequestSchema)) body: UpdateCheckpointRequest,
+  ) {
+    return this.inspection.updateCheckpoint(user, id, checkpointId, body);
+  }
+
+  @Post('checkpoints/:checkpointId/measurements')
+  @Roles('manager', 'mechanic')
+  @ApiZodBody(MeasurementInputSchema)
+  addMeasurement(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Param('checkpointId', ParseIntPipe) checkpointId: number,
+    @Body(zod(MeasurementInputSchema)) body: MeasurementInputDto,
+  ) {
+    return this.inspection.addMeasurement(user, id, checkpointId, body);
+  }
+
+  /** The verdict as the mechanic types: this bike's speeds, this shop's limits, nothing stored. */
+  @Post('measurements/preview')
+  @HttpCode(200)
+  @ApiZodBody(MeasurementInputSchema)
+  preview(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(MeasurementInputSchema)) body: MeasurementInputDto) {
+    return this.inspection.preview(user, id, body);
+  }
+
+  @Delete('measurements/:measurementId')
+  @HttpCode(204)
+  @Roles('manager', 'mechanic')
+  deleteMeasurement(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Param('measurementId', ParseIntPipe) measurementId: number) {
+    this.inspection.deleteMeasurement(user, id, measurementId);
+  }
+}
+
+@ApiTags('bikes')
+@Controller('bikes/:id/history')
+export class BikeHistoryController {
+  constructor(private readonly history: BikeHistoryService) {}
+
+  /** Visits of the bike and its wear trend (lives here: the trend is made of inspection measurements). */
+  @Get()
+  get(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
+    return this.history.history(user, id);
+  }
+}

@@ -1,0 +1,2 @@
+export { JobsModule } from './jobs.module';
+export { JobsService, type JobRef, type BookedInListener } from './jobs.service';

@@ -1,0 +1,228 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type {
+  BikeListItem,
+  BookInRequest,
+  CustomerDto,
+  FinalCheckDto,
+  FinalCheckRequest,
+  JobDetail,
+  JobDto,
+  JobEvent,
+  JobListQuery,
+  JobPage,
+  TransitionRequest,
+  UpdateJobRequest,
+} from '@benchproof/contracts';
+import { canTransition, finalCheckAllowed, formatJobNumber, allowedNextStatuses } from '@benchproof/domain';
+import { AuditService } from '../audit';
+import { BikesService } from '../bikes';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { CustomersService } from '../customers';
+import { CLOCK, type Clock } from '../infra/clock';
+import { ShopsService } from '../shops';
+import { UsersService } from '../users';
+import { type JobRow, JobsRepository } from './jobs.repository';
+import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, type SummaryContext } from './jobs.view';
+
+/** What other features get from getOwned: enough to scope and label their own rows. */
+export interface JobRef {
+  id: number;
+  shopId: number;
+  number: string;
+  status: JobRow['status'];
+  bikeId: number;
+  customerId: number;
+  mechanicId: number | null;
+}
+
+/** Runs inside the book-in transaction, e.g. to lay out the job's inspection checklist. */
+export type BookedInListener = (actor: AuthUser, job: JobRef, bike: BikeListItem) => void;
+
+type Actor = Pick<AuthUser, 'id' | 'shopId'>;
+
+const toRef = (j: JobRow): JobRef => ({ id: j.id, shopId: j.shopId, number: j.number, status: j.status, bikeId: j.bikeId, customerId: j.customerId, mechanicId: j.mechanicId });
+
+@Injectable()
+export class JobsService {
+  private readonly bookedInListeners: BookedInListener[] = [];
+
+  constructor(
+    private readonly repo: JobsRepository,
+    private readonly customers: CustomersService,
+    private readonly bikes: BikesService,
+    private readonly users: UsersService,
+    private readonly shops: ShopsService,
+    private readonly audit: AuditService,
+    @Inject(CLOCK) private readonly clock: Clock,
+  ) {}
+
+  /** Lets a feature that depends on jobs add rows in the same transaction as a new job. */
+  onBookedIn(listener: BookedInListener): void {
+    this.bookedInListeners.push(listener);
+  }
+
+  private today(): string {
+    return this.clock.now().toISOString().slice(0, 10);
+  }
+
+  private context(actor: AuthUser, rows: JobRow[]): SummaryContext {
+    return {
+      owners: this.customers.byIds(actor, rows.map((r) => r.customerId)),
+      bikes: this.bikes.byIds(actor, rows.map((r) => r.bikeId)),
+      staff: new Map(this.users.list(actor).map((u) => [u.id, u.name])),
+      today: this.today(),
+    };
+  }
+
+  private load(actor: Pick<AuthUser, 'shopId'>, id: number): JobRow {
+    const job = this.repo.find(actor.shopId, id);
+    if (!job) throw notFound('Job');
+    return job;
+  }
+
+  /** The job if it exists in the caller's shop, else NOT_FOUND (other features call this first). */
+  getOwned(actor: Pick<AuthUser, 'shopId'>, jobId: number): JobRef {
+    return toRef(this.load(actor, jobId));
+  }
+
+  list(actor: AuthUser, query: JobListQuery): JobPage {
+    const search = {
+      query,
+      today: this.today(),
+      customerIds: query.q ? this.customers.matchingIds(actor, query.q) : [],
+      bikeIds: query.q ? this.bikes.matchingIds(actor, query.q) : [],
+    };
+    const { rows, total } = this.repo.page(actor.shopId, search);
+    const ctx = this.context(actor, rows);
+    return { items: rows.map((r) => toJobDto(r, ctx)), total, page: query.page, pageSize: query.pageSize };
+  }
+
+  /** Every visit of one bike, oldest first. */
+  listForBike(actor: AuthUser, bikeId: number): JobDto[] {
+    const rows = this.repo.listByBike(actor.shopId, bikeId);
+    const ctx = this.context(actor, rows);
+    return rows.map((r) => toJobDto(r, ctx));
+  }
+
+  get(actor: AuthUser, id: number): JobDetail {
+    const job = this.load(actor, id);
+    const settings = this.shops.settings(actor.shopId);
+    return toDetail(job, this.context(actor, [job]), {
+      finalCheck: this.repo.latestFinalCheck(actor.shopId, id),
+      finalCheckSecondPerson: settings.finalCheckSecondPerson,
+    });
+  }
+
+  private checkStaff(actor: AuthUser, userId: number | null | undefined): void {
+    if (userId) this.users.get(actor, userId);
+  }
+
+  /** Desk books a bike in: customer and bike found or created, number issued, checklist laid out — all or nothing. */
+  bookIn(actor: AuthUser, input: BookInRequest): JobDetail {
+    this.checkStaff(actor, input.mechanicId);
+    const job = this.repo.transaction(() => {
+      const customer = this.resolveCustomer(actor, input);
+      const bike = this.resolveBike(actor, customer, input);
+      const now = this.clock.now();
+      const number = formatJobNumber(now.getUTCFullYear(), this.shops.takeJobSeq(actor.shopId));
+      const row = this.repo.insert({
+        shopId: actor.shopId,
+        number,
+        bikeId: bike.id,
+        customerId: customer.id,
+        status: 'booked_in',
+        reportedSymptoms: input.reportedSymptoms,
+        promisedOn: input.promisedOn,
+        mechanicId: input.mechanicId ?? null,
+        createdBy: actor.id,
+        bookedInAt: now,
+        createdAt: now,
+        updatedAt: now,
+      });
+      this.repo.insertEvent({ shopId: actor.shopId, jobId: row.id, fromStatus: null, toStatus: 'booked_in', userId: actor.id, note: '', at: now });
+      for (const listener of this.bookedInListeners) listener(actor, toRef(row), bike);
+      this.audit.record(actor, { action: 'job.booked_in', entityType: 'job', entityId: row.id, details: { number } });
+      return row;
+    });
+    return this.get(actor, job.id);
+  }
+
+  private resolveCustomer(actor: AuthUser, input: BookInRequest): CustomerDto {
+    if (input.newCustomer) return this.customers.create(actor, input.newCustomer);
+    return this.customers.get(actor, input.customerId ?? 0);
+  }
+
+  private resolveBike(actor: AuthUser, owner: CustomerDto, input: BookInRequest): BikeListItem {
+    if (input.newBike) return this.bikes.insert(actor, owner.id, input.newBike);
+    const bike = this.bikes.get(actor, input.bikeId ?? 0);
+    if (bike.customerId !== owner.id) {
+      throw new DomainError('VALIDATION_FAILED', 'bikeId: that bike belongs to another customer.', { issues: [{ path: 'bikeId', message: 'Belongs to another customer' }] });
+    }
+    return bike;
+  }
+
+  update(actor: AuthUser, id: number, patch: UpdateJobRequest): JobDetail {
+    this.load(actor, id);
+    this.checkStaff(actor, patch.mechanicId);
+    this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
+    this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });
+    return this.get(actor, id);
+  }
+
+  /** Moves the job along JOB_TRANSITIONS (libs/domain); anything else is ILLEGAL_TRANSITION. */
+  transition(actor: AuthUser, id: number, input: TransitionRequest): JobDetail {
+    this.repo.transaction(() => {
+      const job = this.load(actor, id);
+      if (!canTransition(job.status, input.to)) {
+        throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to: input.to, allowed: allowedNextStatuses(job.status) });
+      }
+      if (input.to === 'ready') this.requirePassedCheck(actor, job);
+      const now = this.clock.now();
+      this.repo.update(actor.shopId, id, { status: input.to, [STATUS_TIME_FIELD[input.to]]: now, updatedAt: now });
+      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: input.to, userId: actor.id, note: input.note ?? '', at: now });
+      this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details: { from: job.status, to: input.to } });
+    });
+    return this.get(actor, id);
+  }
+
+  /** Ready needs a passed final check taken since the job last entered final check. */
+  private requirePassedCheck(actor: Actor, job: JobRow): void {
+    const check = this.repo.latestFinalCheck(actor.shopId, job.id);
+    const since = job.finalCheckAt?.getTime() ?? 0;
+    if (!check || !check.passed || check.at.getTime() < since) throw new DomainError('FINAL_CHECK_REQUIRED');
+  }
+
+  events(actor: AuthUser, id: number): JobEvent[] {
+    this.load(actor, id);
+    const staff = new Map(this.users.list(actor).map((u) => [u.id, u.name]));
+    return this.repo.events(actor.shopId, id).map((e) => ({
+      id: e.id,
+      from: e.fromStatus,
+      to: e.toStatus,
+      user: e.userId ? { id: e.userId, name: staff.get(e.userId) ?? '' } : null,
+      note: e.note || null,
+      at: e.at.toISOString(),
+    }));
+  }
+
+  /** Records the final check; with the shop's second-person rule on, the job's mechanic may not sign it. */
+  recordFinalCheck(actor: AuthUser, id: number, input: FinalCheckRequest): FinalCheckDto {
+    const job = this.load(actor, id);
+    if (job.status !== 'final_check') throw new DomainError('CONFLICT', 'The job is not waiting for its final check.', { status: job.status });
+    const { finalCheckSecondPerson } = this.shops.settings(actor.shopId);
+    if (!finalCheckAllowed({ requiresSecondPerson: finalCheckSecondPerson, mechanicId: job.mechanicId, checkerId: actor.id })) {
+      throw new DomainError('FINAL_CHECK_SAME_PERSON');
+    }
+    const now = this.clock.now();
+    const row = this.repo.transaction(() => {
+      const check = this.repo.insertFinalCheck({
+        shopId: actor.shopId, jobId: id, checkerId: actor.id, passed: input.passed, items: input.items, testRideNotes: input.testRideNotes, notes: input.note ?? '', at: now,
+      });
+      this.repo.update(actor.shopId, id, { finalCheckerId: input.passed ? actor.id : job.finalCheckerId, updatedAt: now });
+      this.audit.record(actor, { action: 'job.final_check', entityType: 'job', entityId: id, details: { passed: input.passed } });
+      return check;
+    });
+    return toFinalCheckDto(row, new Map([[actor.id, actor.name]]));
+  }
+}

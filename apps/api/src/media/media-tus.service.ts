@@ -1,0 +1,122 @@
+import { Inject, Injectable, Logger, type OnModuleInit } from '@nestjs/common';
+import { ERROR_CODES, type ErrorCode, type TusUploadStatus, TusUploadMetaSchema } from '@benchproof/contracts';
+import { FileStore } from '@tus/file-store';
+import { Server } from '@tus/server';
+import type { Upload } from '@tus/utils';
+import { randomUUID } from 'node:crypto';
+import type { IncomingMessage, ServerResponse } from 'node:http';
+import { join } from 'node:path';
+import { APP_CONFIG, type AppConfig } from '../config';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
+import { MediaIntakeService } from './media-intake.service';
+import { MediaService } from './media.service';
+
+export const TUS_PATH = '/api/media/tus';
+const UPLOAD_ID = /^[a-f0-9]{32}$/;
+
+type Finished = { shopId: number; assetId: number | null; error: { code: ErrorCode; message: string } | null; size: number };
+type TusRequest = { runtime?: { node?: { req?: IncomingMessage } }; node?: { req?: IncomingMessage } };
+
+/** The Nest session guard has run before tus sees the request; this reads the user it attached. */
+function actorOf(req: unknown): AuthUser {
+  const r = req as TusRequest;
+  const node = (r.runtime?.node?.req ?? r.node?.req) as (IncomingMessage & { user?: AuthUser }) | undefined;
+  if (!node?.user) throw { status_code: 401, body: JSON.stringify({ code: 'UNAUTHENTICATED', message: ERROR_CODES.UNAUTHENTICATED.message, details: null }) };
+  return node.user;
+}
+
+const tusError = (err: DomainError) => ({ status_code: err.status, body: JSON.stringify({ code: err.code, message: err.message, details: err.details }) });
+
+/**
+ * Resumable uploads (tus 1.0 via @tus/server + @tus/file-store). Partial files sit in
+ * UPLOADS_DIR/tus; the job and tags travel in Upload-Metadata. The upload is tied to
+ * the shop of the user who created it, and each later request is checked against it.
+ * When the last byte arrives the file goes through the same intake as a multipart upload.
+ */
+@Injectable()
+export class MediaTusService implements OnModuleInit {
+  private readonly logger = new Logger('MediaTus');
+  private server!: Server;
+  private store!: FileStore;
+  /** Outcome of recently finished uploads, so a client that lost the final response can ask. */
+  private readonly finished = new Map<string, Finished>();
+
+  constructor(
+    private readonly intake: MediaIntakeService,
+    private readonly media: MediaService,
+    @Inject(APP_CONFIG) private readonly cfg: AppConfig,
+    @Inject(UPLOAD_TEMP) private readonly temp: UploadTemp,
+  ) {}
+
+  onModuleInit(): void {
+    this.store = new FileStore({ directory: this.temp.resumableDir });
+    this.server = new Server({
+      path: TUS_PATH,
+      datastore: this.store,
+      relativeLocation: true,
+      respectForwardedHeaders: false,
+      maxSize: this.cfg.MAX_VIDEO_BYTES,
+      namingFunction: () => randomUUID().replace(/-/g, ''),
+      onUploadCreate: (req, upload) => this.onCreate(req, upload),
+      onUploadFinish: (req, upload) => this.onFinish(req, upload),
+    });
+  }
+
+  /** Hands the raw request to tus once the caller may touch this upload (404 for other shops). */
+  async handle(actor: AuthUser, uploadId: string | null, req: IncomingMessage, res: ServerResponse): Promise<void> {
+    if (uploadId !== null) await this.assertAccess(actor, uploadId);
+    await this.server.handle(req, res);
+  }
+
+  async status(actor: AuthUser, uploadId: string): Promise<TusUploadStatus> {
+    const done = this.finished.get(uploadId);
+    if (done && done.shopId === actor.shopId) return { uploadId, offset: done.size, length: done.size, assetId: done.assetId, error: done.error };
+    const upload = await this.assertAccess(actor, uploadId);
+    return { uploadId, offset: upload.offset, length: upload.size ?? null, assetId: null, error: null };
+  }
+
+  private async assertAccess(actor: AuthUser, uploadId: string): Promise<Upload> {
+    if (!UPLOAD_ID.test(uploadId)) throw notFound('Upload');
+    const upload = await this.store.getUpload(uploadId).catch(() => null);
+    if (!upload || upload.metadata?.shopId !== String(actor.shopId)) throw notFound('Upload');
+    return upload;
+  }
+
+  private async onCreate(req: unknown, upload: Upload): Promise<{ metadata: Record<string, string | null> }> {
+    const actor = actorOf(req);
+    const parsed = TusUploadMetaSchema.safeParse(upload.metadata ?? {});
+    if (!parsed.success) throw tusError(new DomainError('VALIDATION_FAILED', 'Upload-Metadata needs jobId, phase and area.', { issues: parsed.error.issues }));
+    try {
+      this.media.assertJob(actor, parsed.data.jobId);
+    } catch (err) {
+      if (err instanceof DomainError) throw tusError(err);
+      throw err;
+    }
+    return { metadata: { ...upload.metadata, shopId: String(actor.shopId), userId: String(actor.id) } };
+  }
+
+  private async onFinish(req: unknown, upload: Upload): Promise<{ status_code: number; headers: Record<string, string>; body: string }> {
+    const actor = actorOf(req);
+    const meta = TusUploadMetaSchema.parse(upload.metadata ?? {});
+    const file = { path: join(this.temp.resumableDir, upload.id), originalName: meta.filename ?? '', size: upload.offset };
+    try {
+      const asset = await this.intake.intake(actor, meta.jobId, file, meta, 'resumable');
+      this.remember(upload.id, { shopId: actor.shopId, assetId: asset.id, error: null, size: upload.offset });
+      return { status_code: 204, headers: { 'BenchProof-Media-Id': String(asset.id) }, body: '' };
+    } catch (err) {
+      if (!(err instanceof DomainError)) this.logger.error((err as Error).stack ?? String(err));
+      const domain = err instanceof DomainError ? err : new DomainError('INTERNAL');
+      this.remember(upload.id, { shopId: actor.shopId, assetId: null, error: { code: domain.code, message: domain.message }, size: upload.offset });
+      throw tusError(domain);
+    } finally {
+      await this.temp.remove(`${file.path}.json`);
+    }
+  }
+
+  private remember(id: string, outcome: Finished): void {
+    this.finished.set(id, outcome);
+    if (this.finished.size > 1000) this.finished.delete(this.finished.keys().next().value as string);
+  }
+}

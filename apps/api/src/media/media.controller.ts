@@ -1,0 +1,104 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Put, Query, Res, UploadedFile, UploadedFiles, UseInterceptors } from '@nestjs/common';
+import { FileInterceptor, FilesInterceptor } from '@nestjs/platform-express';
+import { ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import {
+  FindingMediaRequestSchema,
+  MediaListQuerySchema,
+  RetagOneRequestSchema,
+  RetagRequestSchema,
+  type FindingMediaRequest,
+  type MediaListQuery,
+  type RetagOneRequest,
+  type RetagRequest,
+} from '@benchproof/contracts';
+import type { Response } from 'express';
+import { CurrentUser, type AuthUser } from '../core/auth';
+import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { MediaUploadService } from './media-upload.service';
+import { MediaService } from './media.service';
+import { MAX_FILES_PER_BATCH, toIncoming, UPLOAD_FORM } from './upload-form';
+
+@ApiTags('media')
+@Controller()
+export class MediaController {
+  constructor(
+    private readonly media: MediaService,
+    private readonly uploads: MediaUploadService,
+  ) {}
+
+  /** Several files in `files` plus the tags; 201 all stored, 207 some stored (see UploadBatchResult). */
+  @Post('jobs/:jobId/media')
+  @UseInterceptors(FilesInterceptor('files', MAX_FILES_PER_BATCH))
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({ schema: UPLOAD_FORM })
+  async upload(
+    @CurrentUser() user: AuthUser,
+    @Param('jobId') jobId: string,
+    @UploadedFiles() files: Express.Multer.File[] | undefined,
+    @Body() fields: unknown,
+    @Res({ passthrough: true }) res: Response,
+  ) {
+    const { status, body } = await this.uploads.uploadBatch(user, jobId, (files ?? []).map(toIncoming), fields);
+    res.status(status);
+    return body;
+  }
+
+  @Get('jobs/:jobId/media')
+  @ApiZodQuery(MediaListQuerySchema)
+  list(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Query(zod(MediaListQuerySchema)) q: MediaListQuery) {
+    return this.media.list(user, jobId, q);
+  }
+
+  @Patch('jobs/:jobId/media')
+  @ApiZodBody(RetagRequestSchema)
+  retag(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(RetagRequestSchema)) body: RetagRequest) {
+    return this.media.retag(user, jobId, body);
+  }
+
+  @Get('jobs/:jobId/media/:id')
+  get(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('id', ParseIntPipe) id: number) {
+    return this.media.get(user, jobId, id);
+  }
+
+  @Patch('jobs/:jobId/media/:id')
+  @ApiZodBody(RetagOneRequestSchema)
+  retagOne(
+    @CurrentUser() user: AuthUser,
+    @Param('jobId', ParseIntPipe) jobId: number,
+    @Param('id', ParseIntPipe) id: number,
+    @Body(zod(RetagOneRequestSchema)) body: RetagOneRequest,
+  ) {
+    return this.media.retagOne(user, jobId, id, body);
+  }
+
+  @Delete('jobs/:jobId/media/:id')
+  @HttpCode(204)
+  remove(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('id', ParseIntPipe) id: number): void {
+    this.media.softDelete(user, jobId, id);
+  }
+
+  /** The poster frame of a video, captured in the browser (field `file`, an image). */
+  @Put('jobs/:jobId/media/:id/poster')
+  @UseInterceptors(FileInterceptor('file'))
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } })
+  poster(@CurrentUser() user: AuthUser, @Param('jobId') jobId: string, @Param('id') id: string, @UploadedFile() file: Express.Multer.File | undefined) {
+    return this.uploads.setPoster(user, jobId, id, file && toIncoming(file));
+  }
+
+  @Get('jobs/:jobId/findings/:findingId/media')
+  findingMedia(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('findingId', ParseIntPipe) findingId: number) {
+    return this.media.findingMedia(user, jobId, findingId);
+  }
+
+  @Put('jobs/:jobId/findings/:findingId/media')
+  @ApiZodBody(FindingMediaRequestSchema)
+  linkFindingMedia(
+    @CurrentUser() user: AuthUser,
+    @Param('jobId', ParseIntPipe) jobId: number,
+    @Param('findingId', ParseIntPipe) findingId: number,
+    @Body(zod(FindingMediaRequestSchema)) body: FindingMediaRequest,
+  ) {
+    return this.media.linkToFinding(user, jobId, findingId, body.assetIds);
+  }
+}

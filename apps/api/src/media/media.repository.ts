@@ -1,0 +1,108 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { MediaListQuery, MediaVariant } from '@benchproof/contracts';
+import { and, asc, eq, inArray, isNull } from 'drizzle-orm';
+import { DB, type Db } from '../core/db';
+import { findingMedia, mediaAssets, mediaDerivatives } from '../db/schema';
+
+export type MediaAssetRow = typeof mediaAssets.$inferSelect;
+export type NewMediaAssetRow = typeof mediaAssets.$inferInsert;
+export type MediaDerivativeRow = typeof mediaDerivatives.$inferSelect;
+export type NewMediaDerivativeRow = typeof mediaDerivatives.$inferInsert;
+export type AssetPatch = Partial<Pick<MediaAssetRow, 'phase' | 'area' | 'caption' | 'derivativeStatus' | 'derivativeError' | 'deletedAt' | 'deletedBy' | 'purgedAt' | 'originalKey'>>;
+
+@Injectable()
+export class MediaRepository {
+  constructor(@Inject(DB) private readonly db: Db) {}
+
+  insert(row: NewMediaAssetRow): MediaAssetRow {
+    return this.db.insert(mediaAssets).values(row).returning().get();
+  }
+
+  findInShop(shopId: number, id: number): MediaAssetRow | undefined {
+    return this.db.select().from(mediaAssets).where(and(eq(mediaAssets.shopId, shopId), eq(mediaAssets.id, id))).get();
+  }
+
+  findById(id: number): MediaAssetRow | undefined {
+    return this.db.select().from(mediaAssets).where(eq(mediaAssets.id, id)).get();
+  }
+
+  listForJob(shopId: number, jobId: number, q: MediaListQuery & { includeDeleted: boolean }): MediaAssetRow[] {
+    const where = [eq(mediaAssets.shopId, shopId), eq(mediaAssets.jobId, jobId), isNull(mediaAssets.purgedAt)];
+    if (!q.includeDeleted) where.push(isNull(mediaAssets.deletedAt));
+    if (q.phase) where.push(eq(mediaAssets.phase, q.phase));
+    if (q.area) where.push(eq(mediaAssets.area, q.area));
+    if (q.kind) where.push(eq(mediaAssets.kind, q.kind));
+    return this.db.select().from(mediaAssets).where(and(...where)).orderBy(asc(mediaAssets.uploadedAt), asc(mediaAssets.id)).all();
+  }
+
+  listByIds(shopId: number, jobId: number, ids: number[]): MediaAssetRow[] {
+    if (!ids.length) return [];
+    return this.db
+      .select()
+      .from(mediaAssets)
+      .where(and(eq(mediaAssets.shopId, shopId), eq(mediaAssets.jobId, jobId), inArray(mediaAssets.id, ids), isNull(mediaAssets.deletedAt)))
+      .all();
+  }
+
+  /** Image assets whose derivatives were never finished (crash recovery at boot). */
+  listPending(): MediaAssetRow[] {
+    return this.db
+      .select()
+      .from(mediaAssets)
+      .where(and(eq(mediaAssets.derivativeStatus, 'pending'), isNull(mediaAssets.purgedAt)))
+      .all();
+  }
+
+  update(id: number, patch: AssetPatch): MediaAssetRow {
+    return this.db.update(mediaAssets).set(patch).where(eq(mediaAssets.id, id)).returning().get();
+  }
+
+  derivativesOf(assetIds: number[]): MediaDerivativeRow[] {
+    if (!assetIds.length) return [];
+    return this.db.select().from(mediaDerivatives).where(inArray(mediaDerivatives.assetId, assetIds)).all();
+  }
+
+  findDerivative(assetId: number, variant: MediaVariant): MediaDerivativeRow | undefined {
+    return this.db
+      .select()
+      .from(mediaDerivatives)
+      .where(and(eq(mediaDerivatives.assetId, assetId), eq(mediaDerivatives.variant, variant)))
+      .get();
+  }
+
+  upsertDerivative(row: NewMediaDerivativeRow): void {
+    this.db
+      .insert(mediaDerivatives)
+      .values(row)
+      .onConflictDoUpdate({
+        target: [mediaDerivatives.assetId, mediaDerivatives.variant],
+        set: { key: row.key, width: row.width, height: row.height, bytes: row.bytes, sha256: row.sha256 },
+      })
+      .run();
+  }
+
+  deleteDerivatives(assetId: number): void {
+    this.db.delete(mediaDerivatives).where(eq(mediaDerivatives.assetId, assetId)).run();
+  }
+
+  linksOf(findingId: number): number[] {
+    return this.db
+      .select({ assetId: findingMedia.assetId })
+      .from(findingMedia)
+      .where(eq(findingMedia.findingId, findingId))
+      .orderBy(asc(findingMedia.position))
+      .all()
+      .map((r) => r.assetId);
+  }
+
+  replaceLinks(findingId: number, assetIds: number[]): void {
+    this.db.transaction((tx) => {
+      tx.delete(findingMedia).where(eq(findingMedia.findingId, findingId)).run();
+      assetIds.forEach((assetId, position) => tx.insert(findingMedia).values({ findingId, assetId, position }).run());
+    });
+  }
+
+  transaction<T>(fn: () => T): T {
+    return this.db.transaction(() => fn());
+  }
+}

@@ -1,0 +1,111 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { FindingMediaDto, MediaAssetDto, MediaListQuery, RetagOneRequest, RetagRequest } from '@benchproof/contracts';
+import { AuditService } from '../audit';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { FindingsService } from '../findings';
+import { CLOCK, type Clock } from '../infra/clock';
+import { JobsService } from '../jobs';
+import { MediaDerivativesService } from './media-derivatives.service';
+import { toMediaDto } from './media.mapper';
+import { MediaRepository, type MediaAssetRow } from './media.repository';
+
+/** Media of a job: listing, tags, soft delete and purge, and the shots linked to a finding. */
+@Injectable()
+export class MediaService {
+  constructor(
+    private readonly repo: MediaRepository,
+    private readonly jobs: JobsService,
+    private readonly findings: FindingsService,
+    private readonly derivatives: MediaDerivativesService,
+    private readonly audit: AuditService,
+    @Inject(CLOCK) private readonly clock: Clock,
+  ) {}
+
+  /** Throws NOT_FOUND unless the job belongs to the caller's shop. */
+  assertJob(actor: AuthUser, jobId: number): void {
+    this.jobs.getOwned(actor, jobId);
+  }
+
+  list(actor: AuthUser, jobId: number, q: MediaListQuery): MediaAssetDto[] {
+    this.assertJob(actor, jobId);
+    const includeDeleted = q.includeDeleted === true && actor.role === 'manager';
+    return this.toDtos(this.repo.listForJob(actor.shopId, jobId, { ...q, includeDeleted }));
+  }
+
+  get(actor: AuthUser, jobId: number, id: number): MediaAssetDto {
+    return this.toDtos([this.owned(actor, jobId, id)])[0];
+  }
+
+  retagOne(actor: AuthUser, jobId: number, id: number, patch: RetagOneRequest): MediaAssetDto {
+    return this.retag(actor, jobId, { ids: [id], ...patch })[0];
+  }
+
+  retag(actor: AuthUser, jobId: number, req: RetagRequest): MediaAssetDto[] {
+    this.assertJob(actor, jobId);
+    const { ids, ...tags } = req;
+    const patch = Object.fromEntries(Object.entries(tags).filter(([, v]) => v !== undefined));
+    const updated = this.repo.transaction(() => {
+      const rows = this.repo.listByIds(actor.shopId, jobId, [...new Set(ids)]);
+      const missing = ids.filter((id) => !rows.some((r) => r.id === id));
+      if (missing.length) throw new DomainError('NOT_FOUND', 'Some media were not found in this job.', { missing });
+      return rows.map((r) => this.repo.update(r.id, patch));
+    });
+    for (const r of updated) this.audit.record(actor, { action: 'media.retagged', entityType: 'media_asset', entityId: r.id, details: { jobId, ...patch } });
+    return this.toDtos(updated);
+  }
+
+  /** Soft delete: hidden from the job, original and derivatives kept until a manager purges. */
+  softDelete(actor: AuthUser, jobId: number, id: number): void {
+    const row = this.owned(actor, jobId, id);
+    if (row.deletedAt) return;
+    this.repo.update(id, { deletedAt: this.clock.now(), deletedBy: actor.id });
+    this.audit.record(actor, { action: 'media.deleted', entityType: 'media_asset', entityId: id, details: { jobId, sha256: row.sha256 } });
+  }
+
+  /** Removes the files of a soft-deleted asset for good; the row stays as a tombstone for the audit trail. */
+  async purge(actor: AuthUser, id: number): Promise<void> {
+    const row = this.repo.findInShop(actor.shopId, id);
+    if (!row || row.purgedAt) throw notFound('Media');
+    if (!row.deletedAt) throw new DomainError('CONFLICT', 'Delete the media before purging it.');
+    await this.derivatives.removeFiles(row);
+    this.repo.transaction(() => {
+      this.repo.deleteDerivatives(id);
+      this.repo.update(id, { purgedAt: this.clock.now(), originalKey: null });
+    });
+    this.audit.record(actor, { action: 'media.purged', entityType: 'media_asset', entityId: id, details: { jobId: row.jobId, sha256: row.sha256 } });
+  }
+
+  /** Replaces the shots shown with a finding (order kept); they must be live media of the same job. */
+  linkToFinding(actor: AuthUser, jobId: number, findingId: number, assetIds: number[]): FindingMediaDto {
+    this.findings.getOwned(actor, jobId, findingId);
+    const unique = [...new Set(assetIds)];
+    const rows = this.repo.listByIds(actor.shopId, jobId, unique);
+    const missing = unique.filter((id) => !rows.some((r) => r.id === id));
+    if (missing.length) throw new DomainError('VALIDATION_FAILED', 'Only live media of this job can be linked.', { missing });
+    this.repo.replaceLinks(findingId, unique);
+    this.audit.record(actor, { action: 'finding.media_linked', entityType: 'finding', entityId: findingId, details: { jobId, assetIds: unique } });
+    return this.findingMedia(actor, jobId, findingId);
+  }
+
+  findingMedia(actor: AuthUser, jobId: number, findingId: number): FindingMediaDto {
+    this.findings.getOwned(actor, jobId, findingId);
+    const ids = this.repo.linksOf(findingId);
+    const rows = this.repo.listByIds(actor.shopId, jobId, ids);
+    const ordered = ids.map((id) => rows.find((r) => r.id === id)).filter((r): r is MediaAssetRow => Boolean(r));
+    return { findingId, assets: this.toDtos(ordered) };
+  }
+
+  /** A live (or, for managers, soft-deleted) asset of this job in the caller's shop. */
+  owned(actor: AuthUser, jobId: number, id: number): MediaAssetRow {
+    this.assertJob(actor, jobId);
+    const row = this.repo.findInShop(actor.shopId, id);
+    if (!row || row.jobId !== jobId || row.purgedAt || (row.deletedAt && actor.role !== 'manager')) throw notFound('Media');
+    return row;
+  }
+
+  toDtos(rows: MediaAssetRow[]): MediaAssetDto[] {
+    const derivatives = this.repo.derivativesOf(rows.map((r) => r.id));
+    return rows.map((r) => toMediaDto(r, derivatives));
+  }
+}

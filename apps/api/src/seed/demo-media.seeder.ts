@@ -1,0 +1,62 @@
+import { Inject, Injectable, Logger } from '@nestjs/common';
+import { DEMO_MEDIA_JOBS_PER_SHOP, DEMO_SHOTS, drawScene, type DemoShot } from '@benchproof/seeds';
+import { and, desc, eq } from 'drizzle-orm';
+import type { AuthUser } from '../core/auth';
+import { DB, type Db } from '../core/db';
+import { jobs, shops, users } from '../db/schema';
+import { IMAGE, type ImageAdapter } from '../infra/image';
+import { UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
+import { MediaIntakeService } from '../media';
+
+/**
+ * Demo media for the demo jobs: SVG scenes from seeds/ rendered by sharp, some written
+ * as a phone would (pixels stored turned, EXIF Orientation 3/6/8, GPS, capture time),
+ * then sent through the same intake as an upload, so derivatives show them upright
+ * and clean.
+ */
+@Injectable()
+export class DemoMediaSeeder {
+  private readonly logger = new Logger('Seed');
+
+  constructor(
+    @Inject(DB) private readonly db: Db,
+    private readonly intake: MediaIntakeService,
+    @Inject(IMAGE) private readonly image: ImageAdapter,
+    @Inject(UPLOAD_TEMP) private readonly temp: UploadTemp,
+  ) {}
+
+  async seed(): Promise<void> {
+    let count = 0;
+    for (const shop of this.db.select({ id: shops.id }).from(shops).all()) {
+      const actor = this.mechanicOf(shop.id);
+      if (!actor) continue;
+      const recent = this.db.select({ id: jobs.id }).from(jobs).where(eq(jobs.shopId, shop.id)).orderBy(desc(jobs.id)).limit(DEMO_MEDIA_JOBS_PER_SHOP).all();
+      for (const job of recent) {
+        for (const shot of DEMO_SHOTS) {
+          await this.upload(actor, job.id, shot);
+          count++;
+        }
+      }
+    }
+    if (count) this.logger.log(`Seeded ${count} demo media assets`);
+  }
+
+  private mechanicOf(shopId: number): AuthUser | null {
+    const u = this.db.select().from(users).where(and(eq(users.shopId, shopId), eq(users.role, 'mechanic'))).get();
+    return u ? { id: u.id, shopId: u.shopId, role: u.role, email: u.email, name: u.name } : null;
+  }
+
+  private async upload(actor: AuthUser, jobId: number, shot: DemoShot): Promise<void> {
+    const upright = Buffer.from(drawScene(shot.scene, shot.phase === 'before' ? 'before' : 'after'));
+    const stored = await this.image.storedForOrientation(upright, shot.orientation);
+    const jpeg = await this.image.jpegWithExif(stored, {
+      orientation: shot.orientation,
+      gps: shot.gps ?? undefined,
+      takenAt: new Date(shot.takenAt),
+      make: 'BenchProof demo camera',
+    });
+    const file = await this.temp.write(jpeg);
+    const { scene, orientation: _o, gps: _g, takenAt: _t, ...tags } = shot;
+    await this.intake.intake(actor, jobId, { ...file, originalName: `${scene}-${shot.phase}.jpg` }, tags, 'multipart');
+  }
+}

@@ -1,0 +1,2 @@
+export { WorkLogModule } from './work-log.module';
+export { WorkLogService } from './work-log.service';

@@ -1,0 +1,128 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { TorqueEntryDto, TorqueEntryRequest, WorkEntryDto, WorkEntryRequest } from '@benchproof/contracts';
+import { isDomainInputError, isTerminalStatus, torqueVerdict, type TorqueUnit, type TorqueVerdict } from '@benchproof/domain';
+import { AuditService } from '../audit';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { CLOCK, type Clock } from '../infra/clock';
+import { JobsService } from '../jobs';
+import { UsersService } from '../users';
+import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
+
+type StoredTorqueInput = Pick<TorqueEntryRequest, 'specified' | 'applied'> & { tolerancePct: number | null };
+
+const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto => ({
+  id: w.id,
+  description: w.description,
+  partsUsed: w.partsUsed,
+  minutes: w.minutes,
+  userId: w.userId,
+  userName: w.userId ? (staff.get(w.userId) ?? null) : null,
+  at: w.at.toISOString(),
+});
+
+function toTorqueDto(t: TorqueEntryRow, staff: Map<number, string>): TorqueEntryDto {
+  const input = t.input as unknown as StoredTorqueInput;
+  const v = t.result as unknown as TorqueVerdict;
+  return {
+    id: t.id,
+    fastener: t.fastener,
+    specified: { min: input.specified.min, max: input.specified.max ?? null, unit: input.specified.unit },
+    applied: { value: input.applied.value, unit: input.applied.unit as TorqueUnit },
+    tolerancePct: v.tolerancePct,
+    specSource: t.specSource,
+    tool: t.tool,
+    carbonPart: t.carbonPart,
+    verdict: v.verdict,
+    withinTolerance: v.withinTolerance,
+    deviationPct: v.deviationPct,
+    appliedNm: v.appliedNm,
+    lowNm: v.lowNm,
+    highNm: v.highNm,
+    message: v.message,
+    cautions: [...v.cautions],
+    userId: t.userId,
+    userName: t.userId ? (staff.get(t.userId) ?? null) : null,
+    at: t.at.toISOString(),
+  };
+}
+
+/** What was done on the bench and which fasteners were torqued to what, with verdicts from libs/domain. */
+@Injectable()
+export class WorkLogService {
+  constructor(
+    private readonly repo: WorkLogRepository,
+    private readonly jobs: JobsService,
+    private readonly users: UsersService,
+    private readonly audit: AuditService,
+    @Inject(CLOCK) private readonly clock: Clock,
+  ) {}
+
+  private staff(actor: AuthUser): Map<number, string> {
+    return new Map(this.users.list(actor).map((u) => [u.id, u.name]));
+  }
+
+  private openJob(actor: AuthUser, jobId: number): void {
+    const job = this.jobs.getOwned(actor, jobId);
+    if (isTerminalStatus(job.status)) throw new DomainError('CONFLICT', 'The job is closed; its records can no longer change.', { status: job.status });
+  }
+
+  listWork(actor: AuthUser, jobId: number): WorkEntryDto[] {
+    this.jobs.getOwned(actor, jobId);
+    const staff = this.staff(actor);
+    return this.repo.workEntries(actor.shopId, jobId).map((w) => toWorkDto(w, staff));
+  }
+
+  addWork(actor: AuthUser, jobId: number, input: WorkEntryRequest): WorkEntryDto {
+    this.openJob(actor, jobId);
+    const row = this.repo.insertWorkEntry({ ...input, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() });
+    return toWorkDto(row, this.staff(actor));
+  }
+
+  deleteWork(actor: AuthUser, jobId: number, entryId: number): void {
+    this.openJob(actor, jobId);
+    if (!this.repo.workEntry(actor.shopId, jobId, entryId)) throw notFound('Work entry');
+    this.repo.deleteWorkEntry(actor.shopId, entryId);
+    this.audit.record(actor, { action: 'work_entry.deleted', entityType: 'job', entityId: jobId, details: { entryId } });
+  }
+
+  listTorque(actor: AuthUser, jobId: number): TorqueEntryDto[] {
+    this.jobs.getOwned(actor, jobId);
+    const staff = this.staff(actor);
+    return this.repo.torqueEntries(actor.shopId, jobId).map((t) => toTorqueDto(t, staff));
+  }
+
+  /** Stores the reading and the verdict computed by libs/domain torqueVerdict (the maker's value governs). */
+  addTorque(actor: AuthUser, jobId: number, input: TorqueEntryRequest): TorqueEntryDto {
+    this.openJob(actor, jobId);
+    const verdict = this.verdict(input);
+    const stored: StoredTorqueInput = { specified: input.specified, applied: input.applied, tolerancePct: input.tolerancePct ?? null };
+    const row = this.repo.insertTorqueEntry({
+      shopId: actor.shopId,
+      jobId,
+      fastener: input.fastener,
+      input: { ...stored },
+      result: { ...verdict },
+      specValue: input.specified.min,
+      specUnit: input.specified.unit,
+      appliedValue: input.applied.value,
+      appliedUnit: input.applied.unit,
+      specSource: input.specSource,
+      tool: input.tool,
+      carbonPart: input.carbonPart,
+      userId: actor.id,
+      at: this.clock.now(),
+    });
+    this.audit.record(actor, { action: 'torque.recorded', entityType: 'job', entityId: jobId, details: { torqueEntryId: row.id, verdict: verdict.verdict } });
+    return toTorqueDto(row, this.staff(actor));
+  }
+
+  private verdict(input: TorqueEntryRequest): TorqueVerdict {
+    try {
+      return torqueVerdict({ specified: input.specified, applied: input.applied, tolerancePct: input.tolerancePct, carbonPart: input.carbonPart });
+    } catch (e) {
+      if (isDomainInputError(e)) throw new DomainError('VALIDATION_FAILED', e.message, { domainCode: e.code, ...e.details });
+      throw e;
+    }
+  }
+}

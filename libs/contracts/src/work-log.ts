@@ -1,0 +1,61 @@
+import { TORQUE_UNITS } from '@benchproof/domain';
+import { z } from 'zod';
+import { IsoDateTimeSchema } from './common';
+
+export const WorkEntryRequestSchema = z.object({
+  description: z.string().trim().min(1).max(2000),
+  partsUsed: z.string().trim().max(2000).default(''),
+  minutes: z.number().int().min(0).max(24 * 60),
+});
+export type WorkEntryRequest = z.infer<typeof WorkEntryRequestSchema>;
+
+export const WorkEntryDtoSchema = z.object({
+  id: z.number().int(),
+  description: z.string(),
+  partsUsed: z.string(),
+  minutes: z.number().int(),
+  userId: z.number().int().nullable(),
+  userName: z.string().nullable(),
+  at: IsoDateTimeSchema,
+});
+export type WorkEntryDto = z.infer<typeof WorkEntryDtoSchema>;
+
+export const TorqueUnitSchema = z.enum(TORQUE_UNITS);
+
+export const TorqueEntryRequestSchema = z.object({
+  fastener: z.string().trim().min(1).max(200),
+  /** The maker's value (min) or range (min–max), in the unit printed by the maker. */
+  specified: z.object({ min: z.number().positive(), max: z.number().positive().nullable().default(null), unit: TorqueUnitSchema }),
+  applied: z.object({ value: z.number().positive(), unit: TorqueUnitSchema }),
+  /** Wrench tolerance for a single value; default per libs/domain defaultTorqueTolerancePct. */
+  tolerancePct: z.number().min(0).max(50).optional(),
+  /** Where the specified value comes from (maker's manual, printed on the part). Required. */
+  specSource: z.string().trim().min(2).max(300),
+  tool: z.string().trim().max(200).default(''),
+  carbonPart: z.boolean().default(false),
+});
+export type TorqueEntryRequest = z.infer<typeof TorqueEntryRequestSchema>;
+
+export const TorqueEntryDtoSchema = z.object({
+  id: z.number().int(),
+  fastener: z.string(),
+  specified: z.object({ min: z.number(), max: z.number().nullable(), unit: TorqueUnitSchema }),
+  applied: z.object({ value: z.number(), unit: TorqueUnitSchema }),
+  tolerancePct: z.number().nullable(),
+  specSource: z.string(),
+  tool: z.string(),
+  carbonPart: z.boolean(),
+  verdict: z.enum(['within', 'under', 'over']),
+  withinTolerance: z.boolean(),
+  deviationPct: z.number(),
+  appliedNm: z.number(),
+  lowNm: z.number(),
+  highNm: z.number(),
+  message: z.string(),
+  /** Always the torque caution; the carbon caution too for carbon parts. */
+  cautions: z.array(z.string()),
+  userId: z.number().int().nullable(),
+  userName: z.string().nullable(),
+  at: IsoDateTimeSchema,
+});
+export type TorqueEntryDto = z.infer<typeof TorqueEntryDtoSchema>;
