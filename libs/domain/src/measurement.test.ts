@@ -26,7 +26,7 @@ describe('assessMeasurement dispatches every kind to its domain rule', () => {
     expect(Object.keys(result).sort()).toEqual(['condition', 'message', 'verdict']);
   });
 
-  it('uses the bike speeds and the shop policy for chains', () => {
+  it('uses the drivetrain speed count and the shop policy for chains', () => {
     const input: MeasurementInput = { kind: 'chain_elongation', method: 'gauge', gaugePct: 0.5 };
     expect(assessMeasurement(input, { drivetrainSpeeds: 10 }).verdict).toBe('monitor');
     expect(assessMeasurement(input, { drivetrainSpeeds: 10, chainPolicy: { replaceAt10Pct: 0.5 } }).verdict).toBe('replace_chain');
