@@ -17,7 +17,9 @@ export async function requireSession({ request }: LoaderFunctionArgs) {
 /** Loader for role-limited pages; other roles are sent to the jobs page. */
 export const requireRole =
   (...roles: Role[]) =>
-  async () => {
+  async (args: LoaderFunctionArgs) => {
+    // Child loaders run alongside the parent's, so this one must send a visitor to sign-in too.
+    await requireSession(args);
     const user = await queryClient.ensureQueryData(sessionQuery);
     if (!user || !roles.includes(user.role)) throw redirect('/jobs');
     return null;

@@ -25,6 +25,9 @@ export const setCsrfToken = (token: string | null): void => {
   csrfToken = token;
 };
 
+/** The CSRF header for requests made outside api() (XHR and resumable uploads). */
+export const csrfHeader = (): Record<string, string> => (csrfToken ? { 'x-csrf-token': csrfToken } : {});
+
 /** Called when a signed-in call comes back 401; the app sends the user to sign-in. */
 export const handleSessionLost = (fn: (code: ErrorCode) => void): void => {
   onSessionLost = fn;

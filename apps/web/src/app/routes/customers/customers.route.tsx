@@ -1,5 +1,23 @@
-import { ComingLater } from '../../../components/coming-later';
+import { Button, Modal } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
+import { IconUserPlus } from '@tabler/icons-react';
+import { useNavigate } from 'react-router';
+import { PageHeader } from '../../../components/page-header';
+import { useSession } from '../../../features/auth';
+import { CustomerForm, CustomersTable } from '../../../features/customers';
 
 export function CustomersRoute() {
-  return <ComingLater title="Customers & bikes" arrivesWith="the workshop records issue: owners, their bikes and each bike's history" />;
+  const [opened, { open, close }] = useDisclosure();
+  const navigate = useNavigate();
+  const { data: me } = useSession();
+  const canEdit = me?.role !== 'mechanic';
+  return (
+    <>
+      <PageHeader title="Customers & bikes" subtitle="Owners, their bikes, and each bike's history." actions={canEdit && <Button size="lg" leftSection={<IconUserPlus />} onClick={open}>Add customer</Button>} />
+      <CustomersTable />
+      <Modal opened={opened} onClose={close} title="Add a customer" size="lg">
+        <CustomerForm onDone={(c) => { close(); void navigate(`/customers/${c.id}`); }} />
+      </Modal>
+    </>
+  );
 }

@@ -1,5 +1,23 @@
-import { ComingLater } from '../../../components/coming-later';
+import { Button } from '@mantine/core';
+import { IconPlus } from '@tabler/icons-react';
+import { Link } from 'react-router';
+import { PageHeader } from '../../../components/page-header';
+import { useSession } from '../../../features/auth';
+import { JobsTable } from '../../../features/jobs';
+import { useStaff } from '../staff';
 
 export function JobsRoute() {
-  return <ComingLater title="Jobs" arrivesWith="the workshop records issue: booking-in, the jobs table and the job page" />;
+  const { data: me } = useSession();
+  const { mechanics } = useStaff();
+  const canBook = me?.role === 'desk' || me?.role === 'manager';
+  return (
+    <>
+      <PageHeader
+        title="Jobs"
+        subtitle="Every bike in the workshop. Overdue jobs are marked with a clock and the word Overdue."
+        actions={canBook && <Button component={Link} to="/jobs/new" size="lg" leftSection={<IconPlus />}>Book a bike in</Button>}
+      />
+      <JobsTable mechanics={mechanics} />
+    </>
+  );
 }

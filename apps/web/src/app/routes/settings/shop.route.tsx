@@ -1,5 +1,14 @@
-import { ComingLater } from '../../../components/coming-later';
+import { PageHeader } from '../../../components/page-header';
+import { QueryState } from '../../../components/query-state';
+import { ShopSettingsForm, useShopSettings } from '../../../features/shop-settings';
 
 export function ShopSettingsRoute() {
-  return <ComingLater title="Shop settings" arrivesWith="the workshop records issue: labour rate, tax, currency, units and the final-check rule" />;
+  const settings = useShopSettings();
+  return (
+    <>
+      <PageHeader title="Shop settings" subtitle="Rates, units, the final-check rule, chain limits and the look of your reports." />
+      <QueryState isLoading={settings.isLoading} error={settings.error} />
+      {settings.data && <ShopSettingsForm settings={settings.data} />}
+    </>
+  );
 }

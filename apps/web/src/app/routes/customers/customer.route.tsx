@@ -1,0 +1,31 @@
+import { Button, Group, Modal, Stack, Title } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
+import { IconBike, IconEdit } from '@tabler/icons-react';
+import { useParams } from 'react-router';
+import { QueryState } from '../../../components/query-state';
+import { useSession } from '../../../features/auth';
+import { BikeForm, CustomerBikes } from '../../../features/bikes';
+import { CustomerCard, CustomerForm, useCustomer } from '../../../features/customers';
+
+/** /customers/:customerId — contact details and the bikes on file. */
+export function CustomerRoute() {
+  const id = Number(useParams().customerId);
+  const customer = useCustomer(id);
+  const { data: me } = useSession();
+  const [editing, edit] = useDisclosure();
+  const [adding, add] = useDisclosure();
+  const canEdit = me?.role !== 'mechanic';
+  if (!customer.data) return <QueryState isLoading={customer.isLoading} error={customer.error} />;
+  return (
+    <Stack>
+      <CustomerCard customer={customer.data} actions={canEdit && <Button variant="default" leftSection={<IconEdit size={18} />} onClick={edit.open}>Edit</Button>} />
+      <Group justify="space-between">
+        <Title order={3}>Bikes</Title>
+        {canEdit && <Button leftSection={<IconBike />} onClick={add.open}>Add bike</Button>}
+      </Group>
+      <CustomerBikes customerId={id} />
+      <Modal opened={editing} onClose={edit.close} title="Edit customer" size="lg"><CustomerForm customer={customer.data} onDone={edit.close} /></Modal>
+      <Modal opened={adding} onClose={add.close} title="Add a bike" size="lg"><BikeForm customerId={id} onDone={add.close} /></Modal>
+    </Stack>
+  );
+}

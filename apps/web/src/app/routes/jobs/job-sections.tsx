@@ -1,0 +1,75 @@
+import type { JobDetail, SessionUser, ShopSettingsDto } from '@benchproof/contracts';
+import { Stack } from '@mantine/core';
+import { ArrivesWith } from '../../../components/arrives-with';
+import { BikeSpecs } from '../../../features/bikes';
+import { FindingsPanel } from '../../../features/findings';
+import { InspectionPanel } from '../../../features/inspection';
+import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
+import { JobMediaSection } from '../../../features/media';
+import { TorqueEntries, WorkEntries } from '../../../features/work-log';
+import { useStaff } from '../staff';
+
+export interface SectionProps {
+  job: JobDetail;
+  me: SessionUser;
+  settings: ShopSettingsDto;
+}
+
+export const JOB_SECTIONS = [
+  { value: 'intake', label: 'Intake' },
+  { value: 'inspection', label: 'Inspection' },
+  { value: 'findings', label: 'Findings & estimate' },
+  { value: 'work', label: 'Work & torque' },
+  { value: 'media', label: 'Media' },
+  { value: 'pairs', label: 'Pairs' },
+  { value: 'report', label: 'Report' },
+] as const;
+export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
+
+function Findings({ job, me, settings }: SectionProps) {
+  const { staffName } = useStaff();
+  return (
+    <FindingsPanel
+      jobId={job.id}
+      rates={{ labourRateMinor: settings.labourRateMinor, taxRateBp: settings.taxRateBp, currency: settings.currency }}
+      canDecide={me.role !== 'mechanic'}
+      canEdit={me.role !== 'desk'}
+      ownerName={job.customer.name}
+      me={{ id: me.id, name: me.name }}
+      staffName={staffName}
+    />
+  );
+}
+
+function Work({ job, me }: SectionProps) {
+  const { checkers } = useStaff();
+  return (
+    <Stack gap="xl">
+      <WorkEntries jobId={job.id} />
+      <TorqueEntries jobId={job.id} />
+      <FinalCheckPanel job={job} me={me} checkers={checkers} />
+    </Stack>
+  );
+}
+
+/** One section of the job page; each comes from its own feature. */
+export function JobSectionBody({ section, ...props }: SectionProps & { section: JobSection }) {
+  const { job, me, settings } = props;
+  switch (section) {
+    case 'intake':
+      return <IntakeSection job={job} bikeSpecs={<BikeSpecs bike={job.bikeDetail} />} />;
+    case 'inspection':
+      return <InspectionPanel jobId={job.id} chainPolicy={settings.chainLimits ?? undefined} lengthUnit={settings.units === 'imperial' ? 'in' : 'mm'} carbonFrame={job.bikeDetail.frameMaterial === 'carbon'} />;
+    case 'findings':
+      return <Findings {...props} />;
+    case 'work':
+      return <Work {...props} />;
+    case 'media':
+      // The media feature (features/media) owns this section.
+      return <JobMediaSection jobId={job.id} canSeeDeleted={me.role === 'manager'} />;
+    case 'pairs':
+      return <ArrivesWith what="the pairs issue: before/after pairs suggested from the media" />;
+    case 'report':
+      return <ArrivesWith what="the report issue: preview, issue and e-mail the bench report" />;
+  }
+}

@@ -1,0 +1,40 @@
+import { ScrollArea, Tabs } from '@mantine/core';
+import { useParams, useSearchParams } from 'react-router';
+import { QueryState } from '../../../components/query-state';
+import { useSession } from '../../../features/auth';
+import { JobHeader, useJob } from '../../../features/jobs';
+import { useShopSettings } from '../../../features/shop-settings';
+import { useStaff } from '../staff';
+import { JOB_SECTIONS, JobSectionBody, type JobSection } from './job-sections';
+
+const isSection = (v: string | null): v is JobSection => JOB_SECTIONS.some((s) => s.value === v);
+
+/** /jobs/:jobId — the header with the next move, then one section at a time (tabs scroll on phones). */
+export function JobRoute() {
+  const jobId = Number(useParams().jobId);
+  const job = useJob(jobId);
+  const settings = useShopSettings();
+  const { data: me } = useSession();
+  const { mechanics } = useStaff();
+  const [search, setSearch] = useSearchParams();
+  const tab = search.get('section');
+  const section: JobSection = isSection(tab) ? tab : 'intake';
+  if (!job.data || !settings.data || !me) return <QueryState isLoading={job.isLoading || settings.isLoading} error={job.error ?? settings.error} />;
+  return (
+    <>
+      <JobHeader job={job.data} mechanics={mechanics} canAssign={me.role !== 'mechanic'} />
+      <Tabs value={section} onChange={(v) => v && setSearch({ section: v }, { replace: true })} keepMounted={false}>
+        <ScrollArea type="never" mb="md">
+          <Tabs.List style={{ flexWrap: 'nowrap' }}>
+            {JOB_SECTIONS.map((s) => (
+              <Tabs.Tab key={s.value} value={s.value} fz="md" mih={48} style={{ whiteSpace: 'nowrap' }}>{s.label}</Tabs.Tab>
+            ))}
+          </Tabs.List>
+        </ScrollArea>
+        <Tabs.Panel value={section}>
+          <JobSectionBody section={section} job={job.data} me={me} settings={settings.data} />
+        </Tabs.Panel>
+      </Tabs>
+    </>
+  );
+}

@@ -1,0 +1,44 @@
+import { RecordDecisionRequestSchema, type RecordDecisionRequest } from '@benchproof/contracts';
+import { Alert, Button, SegmentedControl, Stack, Text, Textarea, TextInput } from '@mantine/core';
+import { DateTimePicker } from '@mantine/dates';
+import { useForm } from '@mantine/form';
+import dayjs from 'dayjs';
+import { ApiError } from '../../../lib/api-client';
+import { useRecordDecision } from '../api/findings';
+
+interface Values {
+  status: RecordDecisionRequest['status'];
+  channel: RecordDecisionRequest['channel'];
+  decidedByName: string;
+  decidedAt: string | null;
+  note: string;
+}
+
+const toRequest = (v: Values) => ({ ...v, decidedAt: v.decidedAt ? dayjs(v.decidedAt).toISOString() : undefined });
+
+/** Desk records the owner's answer taken by phone, in person or by e-mail; the signed-in user is the recorder. */
+export function DecisionForm({ jobId, recommendationId, ownerName, recorderName, onDone }: { jobId: number; recommendationId: number; ownerName: string; recorderName: string; onDone: () => void }) {
+  const record = useRecordDecision(jobId, recommendationId);
+  const form = useForm<Values>({
+    initialValues: { status: 'approved', channel: 'phone', decidedByName: ownerName, decidedAt: dayjs().format('YYYY-MM-DD HH:mm:ss'), note: '' },
+    validate: (v) => {
+      const r = RecordDecisionRequestSchema.safeParse(toRequest(v));
+      return r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [i.path.join('.'), i.message]));
+    },
+  });
+  const submit = form.onSubmit((v) => record.mutate(RecordDecisionRequestSchema.parse(toRequest(v)), { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  return (
+    <form onSubmit={submit} noValidate>
+      <Stack>
+        {record.error instanceof ApiError && record.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{record.error.message}</Alert>}
+        <SegmentedControl fullWidth size="lg" data={[{ value: 'approved', label: 'Approved' }, { value: 'declined', label: 'Declined' }, { value: 'pending', label: 'Undecided' }]} {...form.getInputProps('status')} />
+        <SegmentedControl fullWidth size="md" data={[{ value: 'phone', label: 'Phone' }, { value: 'in_person', label: 'In person' }, { value: 'email', label: 'E-mail' }]} {...form.getInputProps('channel')} />
+        <TextInput label="Who decided" description="The owner, or the person they named" {...form.getInputProps('decidedByName')} />
+        <DateTimePicker label="When" valueFormat="D MMM YYYY HH:mm" maxDate={new Date()} size="md" {...form.getInputProps('decidedAt')} />
+        <Textarea label="Note" autosize minRows={2} {...form.getInputProps('note')} />
+        <Text size="sm" c="dimmed">Recorded by {recorderName}.</Text>
+        <Button type="submit" size="lg" loading={record.isPending}>Record decision</Button>
+      </Stack>
+    </form>
+  );
+}

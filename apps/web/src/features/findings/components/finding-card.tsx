@@ -1,0 +1,88 @@
+import type { FindingDto } from '@benchproof/contracts';
+import { DECLINED_SAFETY_NOTICE, INSPECTION_AREA_LABELS, type Condition } from '@benchproof/domain';
+import { Alert, Badge, Button, Card, Group, Modal, Stack, Text } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
+import { IconEdit, IconMessageCircle, IconReceipt } from '@tabler/icons-react';
+import { ConditionBadge } from '../../../components/condition-badge';
+import { SafetyNote } from '../../../components/safety-note';
+import { DecisionForm } from './decision-form';
+import { DECISION_COLOURS, DECISION_LABELS, DecisionHistory } from './decision-history';
+import type { ShopRates } from './estimate-preview';
+import { FindingForm } from './finding-form';
+import { money } from '../../../lib/money';
+import { RecommendationEditor } from './recommendation-editor';
+
+/** Urgency follows the condition (the contract carries no separate urgency field). */
+const URGENCY: Record<Condition, { label: string; colour: string }> = {
+  unsafe: { label: 'Safety — before riding', colour: 'red' },
+  worn: { label: 'Soon', colour: 'orange' },
+  wearing: { label: 'Advisory', colour: 'gray' },
+  sound: { label: 'Advisory', colour: 'gray' },
+};
+
+export interface FindingCardProps {
+  jobId: number;
+  finding: FindingDto;
+  rates: ShopRates;
+  canDecide: boolean;
+  /** Mechanics and managers write findings; the desk prices and records answers. */
+  canEdit: boolean;
+  ownerName: string;
+  me: { id: number; name: string };
+  staffName: (id: number | null) => string;
+}
+
+function Recommendation({ finding }: { finding: FindingDto }) {
+  const r = finding.recommendation;
+  if (!r) return <Text size="sm" c="dimmed">No recommendation priced yet.</Text>;
+  return (
+    <Stack gap={4}>
+      <Group justify="space-between" wrap="nowrap">
+        <Text fw={600}>{r.summary}</Text>
+        <Badge color={DECISION_COLOURS[r.decisionStatus]} variant="filled" radius="sm" size="lg">{DECISION_LABELS[r.decisionStatus]}</Badge>
+      </Group>
+      {r.parts.map((p, i) => <Text key={i} size="sm">{p.qty} × {p.description} — {money(p.totalMinor, r.currency)}</Text>)}
+      <Text size="sm">Labour {(r.labourHundredths / 100).toLocaleString('en-GB')} h — {money(r.totals.labourMinor, r.currency)}</Text>
+      <Text fw={800}>Total {money(r.totals.grossMinor, r.currency)} <Text span size="xs" c="dimmed">incl. tax {money(r.totals.taxMinor, r.currency)}</Text></Text>
+    </Stack>
+  );
+}
+
+/** One finding with its priced recommendation, the owner's decision and its history. */
+export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerName, me, staffName }: FindingCardProps) {
+  const [edit, editModal] = useDisclosure();
+  const [price, priceModal] = useDisclosure();
+  const [decide, decideModal] = useDisclosure();
+  const urgency = URGENCY[finding.condition];
+  const declinedUnsafe = finding.condition === 'unsafe' && finding.recommendation?.decisionStatus === 'declined';
+  return (
+    <Card withBorder padding="md">
+      <Stack gap="sm">
+        <Group justify="space-between" align="flex-start">
+          <Stack gap={2}>
+            <Text size="xs" tt="uppercase" fw={700} c="dimmed">{INSPECTION_AREA_LABELS[finding.area]}</Text>
+            <ConditionBadge condition={finding.condition} />
+          </Stack>
+          <Badge color={urgency.colour} variant="outline" radius="sm">{urgency.label}</Badge>
+        </Group>
+        <Text style={{ whiteSpace: 'pre-wrap' }}>{finding.description}</Text>
+        {finding.cautions.map((c) => <SafetyNote key={c} text={c} />)}
+        {declinedUnsafe && <Alert color="red" variant="filled">{DECLINED_SAFETY_NOTICE}</Alert>}
+        <Recommendation finding={finding} />
+        {finding.recommendation && <DecisionHistory decisions={finding.recommendation.decisions} staffName={staffName} />}
+        <Group gap="xs">
+          {canEdit && <Button variant="default" leftSection={<IconEdit size={18} />} onClick={editModal.open}>Edit</Button>}
+          <Button variant="light" leftSection={<IconReceipt size={18} />} onClick={priceModal.open}>{finding.recommendation ? 'Change price' : 'Price it'}</Button>
+          {canDecide && finding.recommendation && <Button leftSection={<IconMessageCircle size={18} />} onClick={decideModal.open}>Record owner’s answer</Button>}
+        </Group>
+      </Stack>
+      <Modal opened={edit} onClose={editModal.close} title="Edit finding" size="lg"><FindingForm jobId={jobId} finding={finding} onDone={editModal.close} /></Modal>
+      <Modal opened={price} onClose={priceModal.close} title="Recommendation and price" size="lg" fullScreen={false}>
+        <RecommendationEditor jobId={jobId} findingId={finding.id} current={finding.recommendation} rates={rates} onDone={priceModal.close} />
+      </Modal>
+      <Modal opened={decide} onClose={decideModal.close} title="Owner’s decision" size="lg">
+        {finding.recommendation && <DecisionForm jobId={jobId} recommendationId={finding.recommendation.id} ownerName={ownerName} recorderName={me.name} onDone={decideModal.close} />}
+      </Modal>
+    </Card>
+  );
+}

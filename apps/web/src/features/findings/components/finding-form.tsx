@@ -1,0 +1,34 @@
+import { CreateFindingRequestSchema, type CreateFindingRequest, type FindingDto } from '@benchproof/contracts';
+import { INSPECTION_AREAS, INSPECTION_AREA_LABELS } from '@benchproof/domain';
+import { Alert, Button, Select, Stack, Text, Textarea } from '@mantine/core';
+import { schemaResolver, useForm } from '@mantine/form';
+import { ConditionPicker } from '../../../components/condition-picker';
+import { ApiError } from '../../../lib/api-client';
+import { useSaveFinding } from '../api/findings';
+
+const AREA_OPTIONS = INSPECTION_AREAS.map((a) => ({ value: a, label: INSPECTION_AREA_LABELS[a] }));
+
+/** Add or edit a finding: area, condition on our scale, and what is wrong in plain words. */
+export function FindingForm({ jobId, finding, onDone }: { jobId: number; finding?: FindingDto; onDone: () => void }) {
+  const save = useSaveFinding(jobId, finding?.id);
+  const form = useForm<CreateFindingRequest>({
+    initialValues: { area: finding?.area ?? 'drivetrain', condition: finding?.condition ?? 'worn', description: finding?.description ?? '', checkpointId: finding?.checkpointId ?? null },
+    validate: schemaResolver(CreateFindingRequestSchema, { sync: true }),
+  });
+  const submit = form.onSubmit((v) => save.mutate(v, { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  const failure = save.error instanceof ApiError && save.error.code !== 'VALIDATION_FAILED' ? save.error.message : null;
+  return (
+    <form onSubmit={submit} noValidate>
+      <Stack>
+        {failure && <Alert color="red">{failure}</Alert>}
+        <Select label="Area" data={AREA_OPTIONS} allowDeselect={false} {...form.getInputProps('area')} />
+        <Stack gap={4}>
+          <Text size="sm" fw={500}>Condition</Text>
+          <ConditionPicker label="Condition" value={form.getValues().condition} onChange={(c) => form.setFieldValue('condition', c)} />
+        </Stack>
+        <Textarea label="What is wrong" description="In words the owner will understand" autosize minRows={3} withAsterisk {...form.getInputProps('description')} />
+        <Button type="submit" size="lg" loading={save.isPending}>{finding ? 'Save finding' : 'Add finding'}</Button>
+      </Stack>
+    </form>
+  );
+}

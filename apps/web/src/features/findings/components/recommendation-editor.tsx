@@ -1,0 +1,90 @@
+import { RecommendationRequestSchema, type RecommendationDto } from '@benchproof/contracts';
+import type { EstimateLine } from '@benchproof/domain';
+import { ActionIcon, Alert, Button, Group, NumberInput, Paper, Stack, Text, TextInput } from '@mantine/core';
+import { useForm, type UseFormReturnType } from '@mantine/form';
+import { IconPlus, IconTrash } from '@tabler/icons-react';
+import { ApiError } from '../../../lib/api-client';
+import { useSaveRecommendation } from '../api/findings';
+import { EstimatePreview, type ShopRates } from './estimate-preview';
+import { majorTextToMinor, minorToMajorText } from '../../../lib/money';
+
+interface PartRow {
+  description: string;
+  qty: number | string;
+  price: string;
+}
+interface Values {
+  summary: string;
+  parts: PartRow[];
+  hours: number | string;
+}
+
+const emptyPart = (): PartRow => ({ description: '', qty: 1, price: '' });
+
+function toRequest(v: Values, currency: string) {
+  return {
+    summary: v.summary,
+    parts: v.parts.map((p) => ({ description: p.description, qty: Number(p.qty), unitPriceMinor: majorTextToMinor(p.price, currency) ?? Number.NaN })),
+    labourHundredths: Math.round(Number(v.hours || 0) * 100),
+  };
+}
+
+function linesOf(v: Values, rates: ShopRates): EstimateLine[] {
+  const parts: EstimateLine[] = v.parts.flatMap((p) => {
+    const price = majorTextToMinor(p.price, rates.currency);
+    const qty = Number(p.qty);
+    return price === null || !(qty > 0) ? [] : [{ kind: 'part' as const, qty, unitPriceMinor: price }];
+  });
+  return [...parts, { kind: 'labour', hours: Number(v.hours || 0), rateMinorPerHour: rates.labourRateMinor }];
+}
+
+function PartLine({ form, i, currency }: { form: UseFormReturnType<Values>; i: number; currency: string }) {
+  return (
+    <Paper withBorder p="xs">
+      <Stack gap="xs">
+        <Group gap="xs" wrap="nowrap" align="flex-end">
+          <TextInput label="Part" style={{ flex: 1 }} {...form.getInputProps(`parts.${i}.description`)} />
+          <ActionIcon size={44} variant="light" color="red" aria-label="Remove part" onClick={() => form.removeListItem('parts', i)}><IconTrash /></ActionIcon>
+        </Group>
+        <Group grow gap="xs">
+          <NumberInput label="Qty" inputMode="decimal" min={0} step={1} decimalScale={4} {...form.getInputProps(`parts.${i}.qty`)} />
+          <TextInput label={`Unit price (${currency})`} inputMode="decimal" placeholder="0.00" {...form.getInputProps(`parts.${i}.price`)} error={form.errors[`parts.${i}.unitPriceMinor`] ?? form.errors[`parts.${i}.price`]} />
+        </Group>
+      </Stack>
+    </Paper>
+  );
+}
+
+/** Parts and labour for one finding, priced live at the shop's rates. */
+export function RecommendationEditor({ jobId, findingId, current, rates, onDone }: { jobId: number; findingId: number; current: RecommendationDto | null; rates: ShopRates; onDone: () => void }) {
+  const save = useSaveRecommendation(jobId, findingId);
+  const form = useForm<Values>({
+    mode: 'controlled',
+    initialValues: {
+      summary: current?.summary ?? '',
+      parts: current?.parts.map((p) => ({ description: p.description, qty: p.qty, price: minorToMajorText(p.unitPriceMinor, rates.currency) })) ?? [],
+      hours: current ? current.labourHundredths / 100 : 0.5,
+    },
+    validate: (v) => {
+      const r = RecommendationRequestSchema.safeParse(toRequest(v, rates.currency));
+      return r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [i.path.join('.'), i.message]));
+    },
+  });
+  const submit = form.onSubmit((v) => save.mutate(RecommendationRequestSchema.parse(toRequest(v, rates.currency)), { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  const values = form.getValues();
+  return (
+    <form onSubmit={submit} noValidate>
+      <Stack>
+        {save.error instanceof ApiError && save.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{save.error.message}</Alert>}
+        <TextInput label="What we recommend" withAsterisk {...form.getInputProps('summary')} />
+        <Text fw={600}>Parts</Text>
+        {values.parts.map((_, i) => <PartLine key={i} form={form as unknown as UseFormReturnType<Values>} i={i} currency={rates.currency} />)}
+        <Button variant="light" leftSection={<IconPlus />} onClick={() => form.insertListItem('parts', emptyPart())}>Add a part</Button>
+        <NumberInput label="Labour hours" description="In quarter hours" inputMode="decimal" min={0} step={0.25} decimalScale={2} size="lg" {...form.getInputProps('hours')} error={form.errors.labourHundredths ?? form.errors.hours} />
+        <Paper withBorder p="sm" bg="gray.0"><EstimatePreview lines={linesOf(values, rates)} rates={rates} /></Paper>
+        <Text size="xs" c="dimmed">Prices are net; tax is added once on the total. The server stores the figures with the rates of today.</Text>
+        <Button type="submit" size="lg" loading={save.isPending}>Save recommendation</Button>
+      </Stack>
+    </form>
+  );
+}

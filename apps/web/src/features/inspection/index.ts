@@ -1,0 +1,2 @@
+export { inspectionKey, inspectionQuery } from './api/inspection';
+export { InspectionPanel } from './components/inspection-panel';

@@ -1,0 +1,36 @@
+import type { JobDto } from '@benchproof/contracts';
+import { Card, Group, Stack, Text, UnstyledButton } from '@mantine/core';
+import { IconChevronRight } from '@tabler/icons-react';
+import { Link } from 'react-router';
+import { jobBikeLabel } from './job-label';
+import { JobStatusBadge } from './job-status-badge';
+import { PromisedDate } from './promised-date';
+import classes from './jobs.module.css';
+
+/** The jobs list on a phone: one big tappable card per job. */
+export function JobCards({ jobs }: { jobs: JobDto[] }) {
+  return (
+    <Stack gap="sm">
+      {jobs.map((job) => (
+        <UnstyledButton key={job.id} component={Link} to={`/jobs/${job.id}`} aria-label={`Job ${job.number}, ${jobBikeLabel(job)}`}>
+          <Card withBorder padding="md" className={job.overdue ? classes.overdueCard : undefined}>
+            <Group justify="space-between" wrap="nowrap" align="flex-start">
+              <Stack gap={4} miw={0}>
+                <Group gap="xs">
+                  <Text fw={700}>{job.number}</Text>
+                  <JobStatusBadge status={job.status} />
+                </Group>
+                <Text fw={600} truncate>{jobBikeLabel(job)}</Text>
+                <Text size="sm" c="dimmed" truncate>
+                  {job.customer.name} · {job.mechanic?.name ?? 'No mechanic yet'}
+                </Text>
+                <PromisedDate promisedOn={job.promisedOn} overdue={job.overdue} />
+              </Stack>
+              <IconChevronRight aria-hidden />
+            </Group>
+          </Card>
+        </UnstyledButton>
+      ))}
+    </Stack>
+  );
+}

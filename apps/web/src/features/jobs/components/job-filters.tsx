@@ -1,0 +1,83 @@
+import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from '@benchproof/domain';
+import { Button, Chip, Group, Select, SimpleGrid, Stack, TextInput } from '@mantine/core';
+import { DatePickerInput } from '@mantine/dates';
+import { useDebouncedCallback } from '@mantine/hooks';
+import { IconSearch, IconX } from '@tabler/icons-react';
+import { useState } from 'react';
+import type { JobListParams } from '../api/jobs';
+import type { useJobListParams } from '../hooks/use-job-list-params';
+
+export interface Option {
+  value: string;
+  label: string;
+}
+
+interface Props {
+  params: JobListParams;
+  update: ReturnType<typeof useJobListParams>['update'];
+  mechanics: Option[];
+}
+
+function SearchBox({ initial, onSearch }: { initial: string; onSearch: (q: string) => void }) {
+  const [value, setValue] = useState(initial);
+  const debounced = useDebouncedCallback(onSearch, 300);
+  return (
+    <TextInput
+      aria-label="Search jobs"
+      placeholder="Job number, owner or bike"
+      leftSection={<IconSearch size={18} />}
+      value={value}
+      onChange={(e) => {
+        setValue(e.currentTarget.value);
+        debounced(e.currentTarget.value.trim());
+      }}
+      size="md"
+    />
+  );
+}
+
+/** Status chips, mechanic, promised range and free text for the jobs table. */
+export function JobFilters({ params, update, mechanics }: Props) {
+  const range: [string | null, string | null] = [params.promisedAfter ?? null, params.promisedBefore ?? null];
+  const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore);
+  return (
+    <Stack gap="sm" mb="md">
+      <Chip.Group multiple value={params.status ?? []} onChange={(v) => update({ status: v as JobStatus[] })}>
+        <Group gap={8} role="group" aria-label="Filter by status">
+          {JOB_STATUSES.map((s) => (
+            <Chip key={s} value={s} size="md" radius="sm">
+              {JOB_STATUS_LABELS[s]}
+            </Chip>
+          ))}
+        </Group>
+      </Chip.Group>
+      <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
+        <SearchBox initial={params.q ?? ''} onSearch={(q) => update({ q })} />
+        <Select
+          aria-label="Mechanic"
+          placeholder="Any mechanic"
+          data={mechanics}
+          value={params.mechanicId ? String(params.mechanicId) : null}
+          onChange={(v) => update({ mechanicId: v })}
+          clearable
+        />
+        <DatePickerInput
+          type="range"
+          aria-label="Promised between"
+          placeholder="Promised between…"
+          value={range}
+          onChange={([from, to]) => update({ promisedAfter: from, promisedBefore: to })}
+          clearable
+          size="md"
+        />
+      </SimpleGrid>
+      {active && (
+        <Group>
+          <Button variant="subtle" leftSection={<IconX size={18} />} onClick={() => update({ q: null, status: [], mechanicId: null, promisedAfter: null, promisedBefore: null })}>
+            Clear filters
+          </Button>
+        </Group>
+      )}
+    </Stack>
+  );
+}

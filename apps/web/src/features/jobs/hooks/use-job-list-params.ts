@@ -1,0 +1,46 @@
+import { JOB_SORT_FIELDS, type JobListQuery } from '@benchproof/contracts';
+import { isJobStatus, type JobStatus } from '@benchproof/domain';
+import { useMemo } from 'react';
+import { useSearchParams } from 'react-router';
+import type { JobListParams } from '../api/jobs';
+
+type SortField = JobListQuery['sort'];
+const isSortField = (v: string | null): v is SortField => (JOB_SORT_FIELDS as readonly string[]).includes(v ?? '');
+type Key = 'q' | 'mechanicId' | 'promisedAfter' | 'promisedBefore' | 'sort' | 'order' | 'page';
+
+/** Jobs table filters kept in the address bar, so Back and a shared link show the same list. */
+export function useJobListParams(pageSize: number) {
+  const [search, setSearch] = useSearchParams();
+  const params = useMemo<JobListParams>(() => {
+    const status = (search.get('status') ?? '').split(',').filter(isJobStatus);
+    const sort = search.get('sort');
+    return {
+      q: search.get('q') ?? undefined,
+      status: status.length ? status : undefined,
+      mechanicId: Number(search.get('mechanicId')) || undefined,
+      promisedAfter: search.get('promisedAfter') ?? undefined,
+      promisedBefore: search.get('promisedBefore') ?? undefined,
+      sort: isSortField(sort) ? sort : 'promisedOn',
+      order: search.get('order') === 'desc' ? 'desc' : 'asc',
+      page: Number(search.get('page')) || 1,
+      pageSize,
+    };
+  }, [search, pageSize]);
+
+  const update = (patch: Partial<Record<Key, string | null>> & { status?: JobStatus[] }) => {
+    setSearch(
+      (prev) => {
+        const next = new URLSearchParams(prev);
+        for (const [k, v] of Object.entries(patch)) {
+          const value = Array.isArray(v) ? v.join(',') : v;
+          if (value) next.set(k, value);
+          else next.delete(k);
+        }
+        if (!('page' in patch)) next.delete('page');
+        return next;
+      },
+      { replace: true },
+    );
+  };
+  return { params, update };
+}

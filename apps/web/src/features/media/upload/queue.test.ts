@@ -1,0 +1,75 @@
+import { backoffMs, MAX_AUTO_ATTEMPTS, needsRetag, newItem, nextRetryAt, nextToStart, queueReducer, transportFor, type QueueItem } from './queue';
+
+const tags = { phase: 'before', area: 'brakes', caption: '' } as const;
+const file = (name: string, type = 'image/jpeg', size = 10) => new File([new Uint8Array(size)], name, { type });
+const make = (n: number) => Array.from({ length: n }, (_, i) => newItem(7, file(`s${i}.jpg`), { ...tags }));
+const fail = (items: QueueItem[], id: string, retryable: boolean, now = 1000) => queueReducer(items, { type: 'failed', id, message: 'No connection', retryable, now });
+
+describe('upload queue', () => {
+  it('starts at most the parallel limit and queues the rest', () => {
+    let items = queueReducer([], { type: 'add', items: make(3) });
+    expect(nextToStart(items, 2)).toHaveLength(2);
+    items = queueReducer(items, { type: 'started', id: items[0].id });
+    expect(nextToStart(items, 2).map((i) => i.id)).toEqual([items[1].id]);
+  });
+
+  it('backs off 1 s, 2 s, 4 s … up to 30 s', () => {
+    expect([1, 2, 3, 4, 5, 6, 9].map(backoffMs)).toEqual([1000, 2000, 4000, 8000, 16000, 30000, 30000]);
+  });
+
+  it('retries a dropped connection on its own, after the backoff', () => {
+    let items = make(1);
+    const id = items[0].id;
+    items = fail(queueReducer(items, { type: 'started', id }), id, true, 5000);
+    expect(items[0]).toMatchObject({ status: 'waiting_retry', attempts: 1, retryAt: 6000, error: 'No connection' });
+    expect(nextRetryAt(items)).toBe(6000);
+    expect(queueReducer(items, { type: 'retryDue', now: 5999 })[0].status).toBe('waiting_retry');
+    expect(queueReducer(items, { type: 'retryDue', now: 6000 })[0].status).toBe('queued');
+  });
+
+  it('stops retrying on its own after the last automatic attempt, and a manual retry starts afresh', () => {
+    let items = make(1);
+    const id = items[0].id;
+    for (let n = 0; n < MAX_AUTO_ATTEMPTS; n++) items = queueReducer(fail(queueReducer(items, { type: 'started', id }), id, true), { type: 'retryDue', now: Infinity });
+    expect(items[0]).toMatchObject({ status: 'failed', attempts: MAX_AUTO_ATTEMPTS });
+    items = queueReducer(items, { type: 'retryNow', id });
+    expect(items[0]).toMatchObject({ status: 'queued', attempts: 0 });
+  });
+
+  it('does not retry what the server refused, and keeps its message', () => {
+    let items = make(1);
+    items = queueReducer(items, { type: 'failed', id: items[0].id, message: 'That kind of file is not accepted.', retryable: false, now: 0 });
+    expect(items[0]).toMatchObject({ status: 'failed', error: 'That kind of file is not accepted.', retryAt: null });
+  });
+
+  it('keeps a paused shot paused when its aborted request reports back', () => {
+    let items = make(1);
+    const id = items[0].id;
+    items = queueReducer(queueReducer(items, { type: 'started', id }), { type: 'pause', id });
+    expect(fail(items, id, true)[0].status).toBe('paused');
+    expect(queueReducer(items, { type: 'resume', id })[0].status).toBe('queued');
+  });
+
+  it('tags in bulk and flags stored shots whose tags changed for a re-tag', () => {
+    let items = make(3);
+    const [a, b] = items;
+    items = queueReducer(items, { type: 'stored', id: a.id, assetId: 11, tags: a.tags });
+    items = queueReducer(items, { type: 'tag', ids: [a.id, b.id], patch: { phase: 'after' } });
+    expect(items.map((i) => i.tags.phase)).toEqual(['after', 'after', 'before']);
+    expect(items.map(needsRetag)).toEqual([true, false, false]);
+    items = queueReducer(items, { type: 'tagsSaved', id: a.id, tags: items[0].tags });
+    expect(needsRetag(items[0])).toBe(false);
+  });
+
+  it('never drops a shot that is being sent', () => {
+    let items = make(1);
+    items = queueReducer(items, { type: 'started', id: items[0].id });
+    expect(queueReducer(items, { type: 'remove', id: items[0].id })).toHaveLength(1);
+  });
+
+  it('sends videos and large files over the resumable protocol, photos as a form', () => {
+    expect(transportFor(file('a.jpg'))).toBe('form');
+    expect(transportFor(file('a.mp4', 'video/mp4'))).toBe('tus');
+    expect(transportFor(file('big.jpg', 'image/jpeg', 17 * 1024 * 1024))).toBe('tus');
+  });
+});

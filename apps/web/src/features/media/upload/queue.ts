@@ -1,0 +1,155 @@
+import type { MediaArea, MediaPhase, MediaSource } from '@benchproof/domain';
+
+/** Tags a shot carries to the server; they can change before, during or after the upload. */
+export interface ShotTags {
+  phase: MediaPhase;
+  area: MediaArea;
+  caption: string;
+}
+
+export type Transport = 'form' | 'tus';
+export type ShotStatus = 'queued' | 'uploading' | 'paused' | 'waiting_retry' | 'done' | 'failed';
+
+export interface QueueItem {
+  id: string;
+  jobId: number;
+  file: File;
+  transport: Transport;
+  source: MediaSource;
+  sourceAssetId?: number;
+  timecodeMs?: number;
+  tags: ShotTags;
+  /** Tags the server has (null until stored); a difference means a re-tag is due. */
+  savedTags: ShotTags | null;
+  status: ShotStatus;
+  /** 0..1 of the bytes sent. */
+  progress: number;
+  /** Failed attempts since the last manual retry. */
+  attempts: number;
+  retryAt: number | null;
+  error: string | null;
+  assetId: number | null;
+  selected: boolean;
+}
+
+export type QueueAction =
+  | { type: 'add'; items: QueueItem[] }
+  | { type: 'started'; id: string }
+  | { type: 'progress'; id: string; progress: number }
+  | { type: 'stored'; id: string; assetId: number; tags: ShotTags }
+  | { type: 'tagsSaved'; id: string; tags: ShotTags }
+  | { type: 'failed'; id: string; message: string; retryable: boolean; now: number }
+  | { type: 'retryDue'; now: number }
+  | { type: 'retryNow'; id?: string }
+  | { type: 'pause'; id: string }
+  | { type: 'resume'; id: string }
+  | { type: 'remove'; id: string }
+  | { type: 'tag'; ids: string[]; patch: Partial<ShotTags> }
+  | { type: 'select'; ids: string[]; selected: boolean };
+
+/** Automatic attempts before a shot waits for a person to press retry. */
+export const MAX_AUTO_ATTEMPTS = 6;
+/** Files above this size (and every video) go through the resumable protocol. */
+export const TUS_THRESHOLD_BYTES = 16 * 1024 * 1024;
+
+/** Exponential backoff: 1 s, 2 s, 4 s … capped at 30 s. */
+export function backoffMs(attempts: number): number {
+  return Math.min(30_000, 1000 * 2 ** Math.max(0, attempts - 1));
+}
+
+export function transportFor(file: File): Transport {
+  return file.type.startsWith('video/') || file.size > TUS_THRESHOLD_BYTES ? 'tus' : 'form';
+}
+
+let seq = 0;
+export function newItem(jobId: number, file: File, tags: ShotTags, extra: Partial<Pick<QueueItem, 'source' | 'sourceAssetId' | 'timecodeMs'>> = {}): QueueItem {
+  seq += 1;
+  return {
+    id: `shot-${Date.now().toString(36)}-${seq}`,
+    jobId,
+    file,
+    transport: transportFor(file),
+    source: extra.source ?? 'camera',
+    sourceAssetId: extra.sourceAssetId,
+    timecodeMs: extra.timecodeMs,
+    tags,
+    savedTags: null,
+    status: 'queued',
+    progress: 0,
+    attempts: 0,
+    retryAt: null,
+    error: null,
+    assetId: null,
+    selected: false,
+  };
+}
+
+const sameTags = (a: ShotTags, b: ShotTags) => a.phase === b.phase && a.area === b.area && a.caption === b.caption;
+
+/** True when a stored shot's tags were changed after it was sent. */
+export const needsRetag = (i: QueueItem): boolean => i.status === 'done' && i.savedTags !== null && !sameTags(i.tags, i.savedTags);
+
+function onFailed(item: QueueItem, a: Extract<QueueAction, { type: 'failed' }>): QueueItem {
+  if (item.status === 'paused') return item;
+  const attempts = item.attempts + 1;
+  const auto = a.retryable && attempts < MAX_AUTO_ATTEMPTS;
+  return { ...item, attempts, error: a.message, status: auto ? 'waiting_retry' : 'failed', retryAt: auto ? a.now + backoffMs(attempts) : null };
+}
+
+function update(item: QueueItem, a: QueueAction): QueueItem {
+  switch (a.type) {
+    case 'started':
+      return { ...item, status: 'uploading', retryAt: null };
+    case 'progress':
+      return item.status === 'uploading' ? { ...item, progress: Math.max(item.progress, a.progress) } : item;
+    case 'stored':
+      return { ...item, status: 'done', progress: 1, assetId: a.assetId, savedTags: a.tags, error: null, retryAt: null };
+    case 'tagsSaved':
+      return { ...item, savedTags: a.tags };
+    case 'failed':
+      return onFailed(item, a);
+    case 'retryDue':
+      return item.status === 'waiting_retry' && item.retryAt !== null && item.retryAt <= a.now ? { ...item, status: 'queued', retryAt: null } : item;
+    case 'retryNow':
+      return item.status === 'failed' || item.status === 'waiting_retry' ? { ...item, status: 'queued', attempts: 0, retryAt: null } : item;
+    case 'pause':
+      return item.status === 'done' || item.status === 'failed' ? item : { ...item, status: 'paused', retryAt: null };
+    case 'resume':
+      return item.status === 'paused' ? { ...item, status: 'queued' } : item;
+    case 'tag':
+      return { ...item, tags: { ...item.tags, ...a.patch } };
+    case 'select':
+      return { ...item, selected: a.selected };
+    case 'add':
+    case 'remove':
+      return item;
+  }
+}
+
+const targets = (a: QueueAction, item: QueueItem): boolean => {
+  if (a.type === 'retryDue' || (a.type === 'retryNow' && a.id === undefined)) return true;
+  if (a.type === 'tag' || a.type === 'select') return a.ids.includes(item.id);
+  return 'id' in a && a.id === item.id;
+};
+
+/** The upload queue as a pure state machine; the runner performs the side effects it implies. */
+export function queueReducer(items: QueueItem[], a: QueueAction): QueueItem[] {
+  if (a.type === 'add') return [...items, ...a.items];
+  if (a.type === 'remove') return items.filter((i) => i.id !== a.id || i.status === 'uploading');
+  return items.map((i) => (targets(a, i) ? update(i, a) : i));
+}
+
+/** Shots to start now, at most `limit` transfers at a time. */
+export function nextToStart(items: QueueItem[], limit: number): QueueItem[] {
+  const running = items.filter((i) => i.status === 'uploading').length;
+  return items.filter((i) => i.status === 'queued').slice(0, Math.max(0, limit - running));
+}
+
+/** The earliest pending automatic retry, for the runner's timer. */
+export function nextRetryAt(items: QueueItem[]): number | null {
+  const times = items.flatMap((i) => (i.status === 'waiting_retry' && i.retryAt !== null ? [i.retryAt] : []));
+  return times.length ? Math.min(...times) : null;
+}
+
+/** HTTP statuses worth another try: no answer, timeouts, throttling and server trouble. */
+export const isRetryableStatus = (status: number): boolean => status === 0 || status === 408 || status === 429 || status >= 500;

@@ -1,0 +1,92 @@
+import { TorqueEntryRequestSchema } from '@benchproof/contracts';
+import { CARBON_CAUTION, TORQUE_UNITS, TORQUE_UNIT_LABELS, type TorqueUnit } from '@benchproof/domain';
+import { Alert, Button, Checkbox, NumberInput, SegmentedControl, SimpleGrid, Stack, Switch, Text, TextInput } from '@mantine/core';
+import { DatePickerInput } from '@mantine/dates';
+import { useForm } from '@mantine/form';
+import { SafetyNote } from '../../../components/safety-note';
+import { ApiError } from '../../../lib/api-client';
+import { useAddTorqueEntry } from '../api/work-log';
+import { TorqueLive } from './torque-live';
+
+interface Values {
+  fastener: string;
+  specSource: string;
+  isRange: boolean;
+  specMin: number | string;
+  specMax: number | string;
+  specUnit: TorqueUnit;
+  applied: number | string;
+  appliedUnit: TorqueUnit;
+  tool: string;
+  calibratedOn: string | null;
+  threadlocker: boolean;
+  carbonPart: boolean;
+}
+
+const UNIT_OPTIONS = TORQUE_UNITS.map((u) => ({ value: u, label: TORQUE_UNIT_LABELS[u] }));
+const num = (v: number | string) => (v === '' ? null : Number(v));
+
+/** Calibration date and threadlocker have no field in the contract yet, so they travel in the tool text. */
+function toolText(v: Values): string {
+  return [v.tool.trim(), v.calibratedOn && `calibrated ${v.calibratedOn}`, v.threadlocker && 'threadlocker used'].filter(Boolean).join(' · ');
+}
+
+function toRequest(v: Values) {
+  return {
+    fastener: v.fastener,
+    specSource: v.specSource,
+    specified: { min: num(v.specMin) ?? Number.NaN, max: v.isRange ? num(v.specMax) : null, unit: v.specUnit },
+    applied: { value: num(v.applied) ?? Number.NaN, unit: v.appliedUnit },
+    tool: toolText(v),
+    carbonPart: v.carbonPart,
+  };
+}
+
+const INITIAL: Values = { fastener: '', specSource: '', isRange: false, specMin: '', specMax: '', specUnit: 'nm', applied: '', appliedUnit: 'nm', tool: '', calibratedOn: null, threadlocker: false, carbonPart: false };
+
+/** One fastener: the maker's value and where it came from, what was applied, with which wrench. */
+export function TorqueForm({ jobId }: { jobId: number }) {
+  const add = useAddTorqueEntry(jobId);
+  const form = useForm<Values>({
+    mode: 'controlled',
+    initialValues: INITIAL,
+    validate: (v) => {
+      const r = TorqueEntryRequestSchema.safeParse(toRequest(v));
+      if (r.success) return {};
+      const map: Record<string, string> = { 'specified.min': 'specMin', 'specified.max': 'specMax', 'applied.value': 'applied' };
+      return Object.fromEntries(r.error.issues.map((i) => [map[i.path.join('.')] ?? i.path.join('.'), i.message]));
+    },
+  });
+  const v = form.getValues();
+  const specMin = num(v.specMin);
+  const applied = num(v.applied);
+  const submit = form.onSubmit((values) => add.mutate(TorqueEntryRequestSchema.parse(toRequest(values)), { onSuccess: () => form.reset(), onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  return (
+    <form onSubmit={submit} noValidate>
+      <Stack gap="sm">
+        <TextInput label="Fastener" placeholder="e.g. stem steerer clamp bolts" withAsterisk {...form.getInputProps('fastener')} />
+        <TextInput label="Where the value comes from" placeholder="Printed on the stem; maker's manual page…" withAsterisk {...form.getInputProps('specSource')} />
+        <Switch label="The maker gives a range" size="md" {...form.getInputProps('isRange', { type: 'checkbox' })} />
+        <SimpleGrid cols={{ base: 2, sm: 3 }} spacing="sm">
+          <NumberInput label={v.isRange ? 'Maker’s minimum' : 'Maker’s value'} inputMode="decimal" min={0} step={0.5} decimalScale={2} size="lg" {...form.getInputProps('specMin')} />
+          {v.isRange && <NumberInput label="Maker’s maximum" inputMode="decimal" min={0} step={0.5} decimalScale={2} size="lg" {...form.getInputProps('specMax')} />}
+          <NumberInput label="Applied" inputMode="decimal" min={0} step={0.5} decimalScale={2} size="lg" {...form.getInputProps('applied')} />
+        </SimpleGrid>
+        <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
+          <Stack gap={4}><Text size="sm" fw={500}>Unit of the maker’s value</Text><SegmentedControl fullWidth size="md" data={UNIT_OPTIONS} {...form.getInputProps('specUnit')} /></Stack>
+          <Stack gap={4}><Text size="sm" fw={500}>Unit on the wrench</Text><SegmentedControl fullWidth size="md" data={UNIT_OPTIONS} {...form.getInputProps('appliedUnit')} /></Stack>
+        </SimpleGrid>
+        <TorqueLive spec={specMin === null ? null : { min: specMin, max: v.isRange ? num(v.specMax) : null, unit: v.specUnit }} applied={applied === null ? null : { value: applied, unit: v.appliedUnit }} carbonPart={v.carbonPart} />
+        <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
+          <TextInput label="Wrench / tool id" {...form.getInputProps('tool')} />
+          <DatePickerInput label="Wrench calibrated on" clearable maxDate={new Date()} size="md" {...form.getInputProps('calibratedOn')} />
+        </SimpleGrid>
+        <Checkbox label="Threadlocker used" size="md" {...form.getInputProps('threadlocker', { type: 'checkbox' })} />
+        <Checkbox label="Carbon part" size="md" {...form.getInputProps('carbonPart', { type: 'checkbox' })} />
+        {v.carbonPart && <SafetyNote title="Carbon" text={CARBON_CAUTION} />}
+        {add.error instanceof ApiError && add.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{add.error.message}</Alert>}
+        <Button type="submit" size="lg" loading={add.isPending}>Log torque</Button>
+      </Stack>
+    </form>
+  );
+}
