@@ -15,7 +15,7 @@ export default tseslint.config(
   ...tseslint.configs.recommendedTypeChecked,
   {
     languageOptions: {
-      parserOptions: { projectService: { allowDefaultProject: ['*.mjs', 'apps/*/scripts/*.mjs', 'apps/*/bench/*.mjs'] }, tsconfigRootDir: import.meta.dirname },
+      parserOptions: { projectService: { allowDefaultProject: ['*.mjs', '*.mts', 'apps/*/scripts/*.mjs', 'apps/*/bench/*.mjs'] }, tsconfigRootDir: import.meta.dirname },
       globals: { ...globals.node },
     },
     rules: {
@@ -92,6 +92,6 @@ export default tseslint.config(
   },
   {
     files: ['**/*.test.ts', '**/*.test.tsx', '**/*.spec.ts', '**/*.e2e-spec.ts', '**/*.e2e.ts', 'apps/api/test/**', 'apps/web/e2e/**'],
-    rules: { '@typescript-eslint/no-unsafe-member-access': 'off', '@typescript-eslint/no-unsafe-assignment': 'off', '@typescript-eslint/no-unsafe-argument': 'off', '@typescript-eslint/no-unsafe-call': 'off' },
+    rules: { '@typescript-eslint/no-unsafe-member-access': 'off', '@typescript-eslint/no-unsafe-assignment': 'off', '@typescript-eslint/no-unsafe-argument': 'off', '@typescript-eslint/no-unsafe-call': 'off', '@typescript-eslint/no-unsafe-return': 'off' },
   },
 );

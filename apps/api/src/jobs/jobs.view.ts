@@ -49,7 +49,7 @@ export function toFinalCheckDto(row: FinalCheckRow, staff: Map<number, string>):
     id: row.id,
     checker: { id: row.checkerId, name: staff.get(row.checkerId) ?? '' },
     passed: row.passed,
-    items: (row.items ?? {}) as FinalCheckDto['items'],
+    items: (row.items ?? {}),
     testRideNotes: row.testRideNotes,
     note: row.notes || null,
     at: row.at.toISOString(),

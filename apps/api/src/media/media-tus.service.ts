@@ -17,17 +17,28 @@ export const TUS_PATH = '/api/media/tus';
 const UPLOAD_ID = /^[a-f0-9]{32}$/;
 
 type Finished = { shopId: number; assetId: number | null; error: { code: ErrorCode; message: string } | null; size: number };
-type TusRequest = { runtime?: { node?: { req?: IncomingMessage } }; node?: { req?: IncomingMessage } };
+type NodeRequest = IncomingMessage & { user?: AuthUser };
+type TusRequest = { runtime?: { node?: { req?: NodeRequest } }; node?: { req?: NodeRequest } };
+
+/** @tus/server answers a hook failure with the error's `status_code` and `body`. */
+class TusHookError extends Error {
+  constructor(
+    readonly status_code: number,
+    readonly body: string,
+  ) {
+    super(body);
+  }
+}
 
 /** The Nest session guard has run before tus sees the request; this reads the user it attached. */
 function actorOf(req: unknown): AuthUser {
   const r = req as TusRequest;
-  const node = (r.runtime?.node?.req ?? r.node?.req) as (IncomingMessage & { user?: AuthUser }) | undefined;
-  if (!node?.user) throw { status_code: 401, body: JSON.stringify({ code: 'UNAUTHENTICATED', message: ERROR_CODES.UNAUTHENTICATED.message, details: null }) };
+  const node = r.runtime?.node?.req ?? r.node?.req;
+  if (!node?.user) throw new TusHookError(401, JSON.stringify({ code: 'UNAUTHENTICATED', message: ERROR_CODES.UNAUTHENTICATED.message, details: null }));
   return node.user;
 }
 
-const tusError = (err: DomainError) => ({ status_code: err.status, body: JSON.stringify({ code: err.code, message: err.message, details: err.details }) });
+const tusError = (err: DomainError) => new TusHookError(err.status, JSON.stringify({ code: err.code, message: err.message, details: err.details }));
 
 /**
  * Resumable uploads (tus 1.0 via @tus/server + @tus/file-store). Partial files sit in
@@ -84,7 +95,8 @@ export class MediaTusService implements OnModuleInit {
     return upload;
   }
 
-  private async onCreate(req: unknown, upload: Upload): Promise<{ metadata: Record<string, string | null> }> {
+  /** Runs before any byte is accepted: the job must be the caller's shop's; the upload is stamped with who sent it. */
+  private onCreate(req: unknown, upload: Upload): Promise<{ metadata: Record<string, string | null> }> {
     const actor = actorOf(req);
     const parsed = TusUploadMetaSchema.safeParse(upload.metadata ?? {});
     if (!parsed.success) throw tusError(new DomainError('VALIDATION_FAILED', 'Upload-Metadata needs jobId, phase and area.', { issues: parsed.error.issues }));
@@ -94,7 +106,7 @@ export class MediaTusService implements OnModuleInit {
       if (err instanceof DomainError) throw tusError(err);
       throw err;
     }
-    return { metadata: { ...upload.metadata, shopId: String(actor.shopId), userId: String(actor.id) } };
+    return Promise.resolve({ metadata: { ...upload.metadata, shopId: String(actor.shopId), userId: String(actor.id) } });
   }
 
   private async onFinish(req: unknown, upload: Upload): Promise<{ status_code: number; headers: Record<string, string>; body: string }> {

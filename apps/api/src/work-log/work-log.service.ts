@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { TorqueEntryDto, TorqueEntryRequest, WorkEntryDto, WorkEntryRequest } from '@benchproof/contracts';
-import { isDomainInputError, isTerminalStatus, torqueVerdict, type TorqueUnit, type TorqueVerdict } from '@benchproof/domain';
+import { isDomainInputError, isTerminalStatus, torqueVerdict, type TorqueVerdict } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
@@ -28,7 +28,7 @@ function toTorqueDto(t: TorqueEntryRow, staff: Map<number, string>): TorqueEntry
     id: t.id,
     fastener: t.fastener,
     specified: { min: input.specified.min, max: input.specified.max ?? null, unit: input.specified.unit },
-    applied: { value: input.applied.value, unit: input.applied.unit as TorqueUnit },
+    applied: { value: input.applied.value, unit: input.applied.unit },
     tolerancePct: v.tolerancePct,
     specSource: t.specSource,
     tool: t.tool,

@@ -1,3 +1,4 @@
+import type { MediaAssetDto } from '@benchproof/contracts';
 import exifr from 'exifr';
 import { createHash } from 'node:crypto';
 import piexif from 'piexifjs';
@@ -78,7 +79,7 @@ describe('media derivatives: upright, sRGB, no metadata; originals untouched', (
   });
   afterAll(() => t.close());
 
-  const upload = async (bytes: Buffer, name = 'shot.jpg') =>
+  const upload = async (bytes: Buffer, name = 'shot.jpg'): Promise<MediaAssetDto> =>
     (await mech.agent.post(`/api/jobs/${jobId}/media`).field('phase', 'before').field('area', 'frame_fork').attach('files', bytes, name).expect(201)).body.assets[0];
   const fetch = (path: string) => mech.agent.get(path).buffer(true).parse(binary).expect(200);
 

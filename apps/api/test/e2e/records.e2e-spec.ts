@@ -12,7 +12,7 @@ describe('records: measurements, estimate, decisions, torque', () => {
   async function chainCheckpoint(jobId: number, agent: Awaited<ReturnType<TestApp['signIn']>>['agent']): Promise<number> {
     const insp = (await agent.get(`/api/jobs/${jobId}/inspection`).expect(200)).body;
     const drivetrain = insp.areas.find((a: { area: string }) => a.area === 'drivetrain');
-    return drivetrain.checkpoints.find((c: { key: string }) => c.key === 'chain_wear').id;
+    return (drivetrain.checkpoints as { key: string; id: number }[]).find((c) => c.key === 'chain_wear')!.id;
   }
 
   it('gives replace_chain for a 0.8 % gauge reading on an 11-speed bike, stores it, and previews without storing', async () => {

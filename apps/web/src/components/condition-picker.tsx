@@ -1,4 +1,3 @@
-import type { CSSProperties } from 'react';
 import { CONDITIONS, CONDITION_LABELS, type Condition } from '@benchproof/domain';
 import { SimpleGrid, Text, UnstyledButton } from '@mantine/core';
 import { ConditionGlyph } from './condition-badge';
@@ -22,7 +21,7 @@ export function ConditionPicker({ value, onChange, disabled, label }: { value: C
             aria-label={CONDITION_LABELS[c]}
             disabled={disabled}
             onClick={() => onChange(c)}
-            style={{ '--step-colour': CONDITION_COLOURS[c] } as CSSProperties}
+            style={{ '--step-colour': CONDITION_COLOURS[c] }}
           >
             <ConditionGlyph condition={c} size={24} />
             <Text size="sm" fw={700} c={active ? CONDITION_COLOURS[c] : undefined}>{SHORT[c]}</Text>

@@ -17,7 +17,7 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
   }
 
   handleRequest<T>(err: unknown, user: T | false, info: unknown): T {
-    if (err) throw err;
+    if (err instanceof Error) throw err;
     if ((info as { name?: string } | undefined)?.name === 'TokenExpiredError') throw new DomainError('SESSION_EXPIRED');
     if (!user) throw new DomainError('UNAUTHENTICATED');
     return user;

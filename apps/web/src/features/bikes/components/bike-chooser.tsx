@@ -1,4 +1,4 @@
-import { Card, Group, Radio, Stack, Text } from '@mantine/core';
+import { Group, Radio, Stack, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
 import { QueryState } from '../../../components/query-state';
 import { useCustomerBikes } from '../api/bikes';

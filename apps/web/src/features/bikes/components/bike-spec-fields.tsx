@@ -22,7 +22,7 @@ function Segmented({ label, data, props }: { label: string; data: { value: strin
   );
 }
 
-/** Every spec of a bike; speeds and brake type drive the inspection's computations. */
+/** Every spec of a bike; the drivetrain speed count and brake type drive the inspection computations. */
 export function BikeSpecFields({ field }: { field: FieldGetter }) {
   return (
     <Stack gap="sm">

@@ -22,7 +22,7 @@ export function WearChart({ series }: { series: WearSeries }) {
           curveType="linear"
           withDots
           referenceLines={series.limit === null ? [] : [{ y: series.limit, label: isLimitAbove ? `Replace at ${series.limit} ${series.unit}` : `Minimum ${series.limit} ${series.unit}`, color: 'red.8' }]}
-          yAxisProps={{ domain: [0, (max: number) => Math.ceil(Math.max(max, series.limit ?? 0) * 12) / 10] }}
+          yAxisProps={{ width: 72, domain: [0, (max: number) => Math.ceil(Math.max(max, series.limit ?? 0) * 12) / 10] }}
           valueFormatter={(v) => v.toLocaleString('en-GB', { maximumFractionDigits: 2 })}
         />
         <Text size="sm" c="dimmed">

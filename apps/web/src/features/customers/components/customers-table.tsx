@@ -66,7 +66,7 @@ export function CustomersTable({ pageSize = 20 }: { pageSize?: number }) {
     <Stack>
       <Group grow preventGrowOverflow={false} wrap="wrap">
         <TextInput aria-label="Search customers" placeholder="Name, phone or e-mail" leftSection={<IconSearch size={18} />} value={q} onChange={(e) => { setQ(e.currentTarget.value); setPage(1); }} miw={220} />
-        <Select aria-label="Sort" data={SORTS} value={sort} onChange={(v) => v && setSort(v as Sort)} allowDeselect={false} maw={220} />
+        <Select aria-label="Sort" data={SORTS} value={sort} onChange={(v) => v && setSort(v)} allowDeselect={false} maw={220} />
       </Group>
       <QueryState isLoading={list.isLoading} error={list.error} />
       {list.data && list.data.items.length === 0 && <Text c="dimmed">No customers found.</Text>}

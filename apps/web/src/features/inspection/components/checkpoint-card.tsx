@@ -66,7 +66,7 @@ export function CheckpointCard(props: Props) {
       <Stack gap="sm">
         <Group justify="space-between" wrap="nowrap" align="flex-start">
           <Text fw={700}>{checkpoint.label}</Text>
-          {checkpoint.safetyCritical && <Badge color="brass" variant="light" radius="sm">Safety</Badge>}
+          {checkpoint.safetyCritical && <Badge color="brass" variant="light" radius="sm" style={{ flexShrink: 0 }}>Safety</Badge>}
         </Group>
         <ConditionPicker label={`Condition of ${checkpoint.label}`} value={checkpoint.condition} disabled={update.isPending} onChange={(condition) => update.mutate({ condition })} />
         <Readings {...props} />

@@ -70,7 +70,7 @@ export function MeasurementForm({ kind, ctx, speeds, chainPolicy, onSave, saving
       </SimpleGrid>
       <VerdictView live={live} />
       {onSave && (
-        <Button size="lg" leftSection={<IconDeviceFloppy />} disabled={live.state !== 'ok' || !input} loading={saving} onClick={() => input && onSave(input as MeasurementInputDto)}>
+        <Button size="lg" leftSection={<IconDeviceFloppy />} disabled={live.state !== 'ok' || !input} loading={saving} onClick={() => input && onSave(input)}>
           Save reading
         </Button>
       )}

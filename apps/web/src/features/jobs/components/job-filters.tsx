@@ -1,4 +1,4 @@
-import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from '@benchproof/domain';
+import { JOB_STATUSES, JOB_STATUS_LABELS } from '@benchproof/domain';
 import { Button, Chip, Group, Select, SimpleGrid, Stack, TextInput } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
 import { useDebouncedCallback } from '@mantine/hooks';
@@ -42,7 +42,7 @@ export function JobFilters({ params, update, mechanics }: Props) {
   const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore);
   return (
     <Stack gap="sm" mb="md">
-      <Chip.Group multiple value={params.status ?? []} onChange={(v) => update({ status: v as JobStatus[] })}>
+      <Chip.Group multiple value={params.status ?? []} onChange={(v) => update({ status: v })}>
         <Group gap={8} role="group" aria-label="Filter by status">
           {JOB_STATUSES.map((s) => (
             <Chip key={s} value={s} size="md" radius="sm">

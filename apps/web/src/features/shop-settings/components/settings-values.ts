@@ -37,7 +37,7 @@ const toFormPath = (p: string) => PATHS[p] ?? p.replace(/^chainLimits\./, 'chain
 /** Builds the PATCH body (major units → minor, % → basis points) and checks it with the API's schema. */
 export function toRequest(v: SettingsValues, toMinor: (text: string, currency: string) => number | null) {
   const { labourRate, taxRatePct, ownChainLimits, chain, ...rest } = v;
-  let labourRateMinor: number | null = null;
+  let labourRateMinor: number | null;
   try {
     labourRateMinor = toMinor(labourRate, v.currency);
   } catch {
