@@ -43,7 +43,8 @@ export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
 }
 
 export async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto('/sign-in');
+  // Already on sign-in (e.g. sent there with ?next=…): stay, so the way back is kept.
+  if (!new URL(page.url()).pathname.startsWith('/sign-in')) await page.goto('/sign-in');
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
