@@ -1,3 +1,4 @@
+import { URGENCIES } from '@benchproof/domain';
 import { z } from 'zod';
 import { ConditionSchema, InspectionAreaSchema } from './inspection';
 import { IsoDateTimeSchema } from './common';
@@ -27,9 +28,14 @@ export const PartLineInputSchema = z.object({
   unitPriceMinor: z.number().int().min(0).max(100_000_000),
 });
 
+/** CHECKS.md A.2 step 4: safety-critical, recommended soon, advisory. */
+export const UrgencySchema = z.enum(URGENCIES);
+
 /** Create or replace the recommendation of a finding. Labour is in hundredths of an hour (75 = 0.75 h). */
 export const RecommendationRequestSchema = z.object({
   summary: z.string().trim().min(1).max(400),
+  /** Omitted: derived from the finding's condition (libs/domain defaultUrgency). */
+  urgency: UrgencySchema.optional(),
   parts: z.array(PartLineInputSchema).max(50).default([]),
   labourHundredths: z.number().int().min(0).max(100_000),
 });
@@ -77,6 +83,7 @@ export const RecommendationDtoSchema = z.object({
   id: z.number().int(),
   findingId: z.number().int(),
   summary: z.string(),
+  urgency: UrgencySchema,
   parts: z.array(PartLineInputSchema.extend({ totalMinor: z.number().int() })),
   labourHundredths: z.number().int(),
   /** Rates copied from the shop settings when the recommendation was written. */

@@ -74,6 +74,8 @@ export const JobListQuerySchema = pagingQuerySchema(JOB_SORT_FIELDS).extend({
   promisedAfter: IsoDateSchema.optional(),
   promisedBefore: IsoDateSchema.optional(),
   overdue: z.stringbool().optional(),
+  /** true: only jobs still open (not collected or cancelled); false: only closed ones. */
+  open: z.stringbool().optional(),
 });
 export type JobListQuery = z.infer<typeof JobListQuerySchema>;
 

@@ -26,3 +26,15 @@ describe('TorqueEntryRequestSchema', () => {
     expect(TorqueEntryRequestSchema.safeParse({ ...entry, applied: { value: 5, unit: 'J' } }).success).toBe(false);
   });
 });
+
+describe('TorqueEntryRequestSchema: wrench calibration and threadlocker', () => {
+  it('takes a calibration date and a threadlocker kind', () => {
+    const r = TorqueEntryRequestSchema.parse({ ...entry, toolCalibratedOn: '2025-01-15', threadlocker: 'blue_medium' });
+    expect(r).toMatchObject({ toolCalibratedOn: '2025-01-15', threadlocker: 'blue_medium' });
+  });
+
+  it('rejects a calibration date that is not YYYY-MM-DD and an unknown threadlocker', () => {
+    expect(TorqueEntryRequestSchema.safeParse({ ...entry, toolCalibratedOn: '15/01/2025' }).success).toBe(false);
+    expect(TorqueEntryRequestSchema.safeParse({ ...entry, threadlocker: 'glue' }).success).toBe(false);
+  });
+});

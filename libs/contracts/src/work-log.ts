@@ -1,6 +1,6 @@
-import { TORQUE_UNITS } from '@benchproof/domain';
+import { THREADLOCKERS, TORQUE_UNITS } from '@benchproof/domain';
 import { z } from 'zod';
-import { IsoDateTimeSchema } from './common';
+import { IsoDateSchema, IsoDateTimeSchema } from './common';
 
 export const WorkEntryRequestSchema = z.object({
   description: z.string().trim().min(1).max(2000),
@@ -21,6 +21,8 @@ export const WorkEntryDtoSchema = z.object({
 export type WorkEntryDto = z.infer<typeof WorkEntryDtoSchema>;
 
 export const TorqueUnitSchema = z.enum(TORQUE_UNITS);
+/** Thread-locking compound used on the fastener (ISO 4210-2 4.3.1, CHECKS.md B.3). */
+export const ThreadlockerSchema = z.enum(THREADLOCKERS);
 
 export const TorqueEntryRequestSchema = z.object({
   fastener: z.string().trim().min(1).max(200),
@@ -32,6 +34,9 @@ export const TorqueEntryRequestSchema = z.object({
   /** Where the specified value comes from (maker's manual, printed on the part). Required. */
   specSource: z.string().trim().min(2).max(300),
   tool: z.string().trim().max(200).default(''),
+  /** The wrench's last calibration (YYYY-MM-DD). The server rejects a date in the future. */
+  toolCalibratedOn: IsoDateSchema.optional(),
+  threadlocker: ThreadlockerSchema.optional(),
   carbonPart: z.boolean().default(false),
 });
 export type TorqueEntryRequest = z.infer<typeof TorqueEntryRequestSchema>;
@@ -44,6 +49,10 @@ export const TorqueEntryDtoSchema = z.object({
   tolerancePct: z.number().nullable(),
   specSource: z.string(),
   tool: z.string(),
+  toolCalibratedOn: IsoDateSchema.nullable(),
+  /** True when the calibration was more than 12 months before the entry (libs/domain isWrenchCalibrationOverdue). */
+  calibrationOverdue: z.boolean(),
+  threadlocker: ThreadlockerSchema.nullable(),
   carbonPart: z.boolean(),
   verdict: z.enum(['within', 'under', 'over']),
   withinTolerance: z.boolean(),

@@ -20,3 +20,5 @@ export * from './tyre-size';
 export * from './final-check';
 export * from './cautions';
 export * from './wear-trend';
+export * from './torque-wrench';
+export * from './recommendation-urgency';

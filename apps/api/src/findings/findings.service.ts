@@ -9,7 +9,7 @@ import type {
   RecordDecisionRequest,
   UpdateFindingRequest,
 } from '@benchproof/contracts';
-import { isTerminalStatus } from '@benchproof/domain';
+import { defaultUrgency, isTerminalStatus } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
@@ -102,17 +102,18 @@ export class FindingsService {
   /** Creates or replaces the finding's recommendation at the shop's current labour rate, tax rate and currency. */
   setRecommendation(actor: AuthUser, jobId: number, findingId: number, input: RecommendationRequest): RecommendationDto {
     this.openJob(actor, jobId);
-    this.getOwned(actor, jobId, findingId);
+    const finding = this.getOwned(actor, jobId, findingId);
     const shop = this.shops.settings(actor.shopId);
     const now = this.clock.now();
-    const priced = { summary: input.summary, parts: input.parts, labourHundredths: input.labourHundredths, labourRateMinor: shop.labourRateMinor, taxRateBp: shop.taxRateBp, currency: shop.currency, updatedAt: now };
+    const urgency = input.urgency ?? defaultUrgency(finding.condition);
+    const priced = { summary: input.summary, urgency, parts: input.parts, labourHundredths: input.labourHundredths, labourRateMinor: shop.labourRateMinor, taxRateBp: shop.taxRateBp, currency: shop.currency, updatedAt: now };
     const existing = this.repo.recommendationOf(actor.shopId, findingId);
     // A changed price needs the owner's word again.
     const row = existing
       ? this.repo.updateRecommendation(actor.shopId, existing.id, { ...priced, decisionStatus: 'pending' })
       : this.repo.insertRecommendation({ ...priced, shopId: actor.shopId, jobId, findingId, createdBy: actor.id, createdAt: now });
     this.audit.record(actor, { action: existing ? 'recommendation.replaced' : 'recommendation.created', entityType: 'job', entityId: jobId, details: { recommendationId: row.id, previousDecision: existing?.decisionStatus ?? null } });
-    return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]));
+    return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]), finding.condition);
   }
 
   estimate(actor: AuthUser, jobId: number): EstimateDto {

@@ -1,5 +1,5 @@
 import type { DecisionDto, FindingDto, MoneyTotals, RecommendationDto } from '@benchproof/contracts';
-import { areaCautions, estimateTotals, lineTotalMinor, type EstimateLine } from '@benchproof/domain';
+import { areaCautions, defaultUrgency, estimateTotals, lineTotalMinor, type Condition, type EstimateLine } from '@benchproof/domain';
 import type { DecisionRow, FindingRow, RecommendationRow } from './findings.repository';
 
 /** Labour is stored in hundredths of an hour; libs/domain takes decimal hours (exact to 4 decimals). */
@@ -37,11 +37,13 @@ export const toDecisionDto = (d: DecisionRow): DecisionDto => ({
   recordedAt: d.recordedAt.toISOString(),
 });
 
-export function toRecommendationDto(r: RecommendationRow, decisions: DecisionRow[]): RecommendationDto {
+/** `condition` is the finding's: rows from before urgency existed read as its default. */
+export function toRecommendationDto(r: RecommendationRow, decisions: DecisionRow[], condition: Condition): RecommendationDto {
   return {
     id: r.id,
     findingId: r.findingId,
     summary: r.summary,
+    urgency: r.urgency ?? defaultUrgency(condition),
     parts: r.parts.map((p) => ({ ...p, totalMinor: lineTotalMinor(p.qty, p.unitPriceMinor) })),
     labourHundredths: r.labourHundredths,
     labourRateMinor: r.labourRateMinor,
@@ -64,7 +66,7 @@ export function toFindingDto(f: FindingRow, rec: RecommendationRow | undefined, 
     description: f.description,
     doNotRide: f.condition === 'unsafe',
     cautions: areaCautions(f.area, { carbonFrame }),
-    recommendation: rec ? toRecommendationDto(rec, decisions) : null,
+    recommendation: rec ? toRecommendationDto(rec, decisions, f.condition) : null,
     createdAt: f.createdAt.toISOString(),
     updatedAt: f.updatedAt.toISOString(),
   };

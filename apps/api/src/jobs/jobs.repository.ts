@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { JobListQuery } from '@benchproof/contracts';
-import type { JobStatus } from '@benchproof/domain';
+import { TERMINAL_STATUSES, type JobStatus } from '@benchproof/domain';
 import { and, asc, count, desc, eq, gte, inArray, isNull, like, lt, lte, notInArray, or, type SQL } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { finalChecks, jobStatusEvents, jobs } from '../db/schema';
@@ -46,6 +46,7 @@ export class JobsRepository {
       f.promisedAfter ? gte(jobs.promisedOn, f.promisedAfter) : undefined,
       f.promisedBefore ? lte(jobs.promisedOn, f.promisedBefore) : undefined,
       f.overdue === undefined ? undefined : f.overdue ? overdue : notOverdue,
+      f.open === undefined ? undefined : f.open ? notInArray(jobs.status, [...TERMINAL_STATUSES]) : inArray(jobs.status, [...TERMINAL_STATUSES]),
       text,
     );
   }

@@ -100,9 +100,16 @@ export class SeedRecords {
   private logWork(job: DemoJob, jobId: number, mech: AuthUser): void {
     for (const w of job.work ?? []) this.workLog.addWork(mech, jobId, w);
     for (const t of job.torque ?? []) {
+      // The entry is backdated by the job's daysAgo afterwards; the calibration day is counted from then.
+      const toolCalibratedOn = t.toolCalibratedDaysBefore === undefined ? undefined : this.daysBeforeNow(job.daysAgo + t.toolCalibratedDaysBefore);
       this.workLog.addTorque(mech, jobId, {
-        fastener: t.fastener, specified: { min: t.spec, max: null, unit: t.unit }, applied: { value: t.applied, unit: t.unit }, specSource: t.specSource, tool: t.tool, carbonPart: t.carbonPart,
+        fastener: t.fastener, specified: { min: t.spec, max: null, unit: t.unit }, applied: { value: t.applied, unit: t.unit }, specSource: t.specSource, tool: t.tool,
+        toolCalibratedOn, threadlocker: t.threadlocker, carbonPart: t.carbonPart,
       });
     }
+  }
+
+  private daysBeforeNow(days: number): string {
+    return new Date(this.clock.now().getTime() - days * DAY_MS).toISOString().slice(0, 10);
   }
 }

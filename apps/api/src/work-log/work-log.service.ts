@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { TorqueEntryDto, TorqueEntryRequest, WorkEntryDto, WorkEntryRequest } from '@benchproof/contracts';
-import { isDomainInputError, isTerminalStatus, torqueVerdict, type TorqueVerdict } from '@benchproof/domain';
+import { isDomainInputError, isTerminalStatus, isWrenchCalibrationOverdue, latestCalendarDate, torqueVerdict, type TorqueVerdict } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
@@ -32,6 +32,10 @@ function toTorqueDto(t: TorqueEntryRow, staff: Map<number, string>): TorqueEntry
     tolerancePct: v.tolerancePct,
     specSource: t.specSource,
     tool: t.tool,
+    toolCalibratedOn: t.toolCalibratedOn,
+    // Judged on the day of the entry, so the log keeps saying what was true when the bolt was torqued.
+    calibrationOverdue: isWrenchCalibrationOverdue(t.toolCalibratedOn, t.at.toISOString().slice(0, 10)),
+    threadlocker: t.threadlocker,
     carbonPart: t.carbonPart,
     verdict: v.verdict,
     withinTolerance: v.withinTolerance,
@@ -95,6 +99,8 @@ export class WorkLogService {
   /** Stores the reading and the verdict computed by libs/domain torqueVerdict (the maker's value governs). */
   addTorque(actor: AuthUser, jobId: number, input: TorqueEntryRequest): TorqueEntryDto {
     this.openJob(actor, jobId);
+    const now = this.clock.now();
+    this.requirePastCalibration(input.toolCalibratedOn, now);
     const verdict = this.verdict(input);
     const stored: StoredTorqueInput = { specified: input.specified, applied: input.applied, tolerancePct: input.tolerancePct ?? null };
     const row = this.repo.insertTorqueEntry({
@@ -109,12 +115,21 @@ export class WorkLogService {
       appliedUnit: input.applied.unit,
       specSource: input.specSource,
       tool: input.tool,
+      toolCalibratedOn: input.toolCalibratedOn ?? null,
+      threadlocker: input.threadlocker ?? null,
       carbonPart: input.carbonPart,
       userId: actor.id,
-      at: this.clock.now(),
+      at: now,
     });
     this.audit.record(actor, { action: 'torque.recorded', entityType: 'job', entityId: jobId, details: { torqueEntryId: row.id, verdict: verdict.verdict } });
     return toTorqueDto(row, this.staff(actor));
+  }
+
+  /** A calibration cannot lie in the future; same error shape as the zod pipe so forms mark the field. */
+  private requirePastCalibration(calibratedOn: string | undefined, now: Date): void {
+    if (!calibratedOn || calibratedOn <= latestCalendarDate(now)) return;
+    const message = 'The calibration date cannot be in the future.';
+    throw new DomainError('VALIDATION_FAILED', `toolCalibratedOn: ${message}`, { issues: [{ path: 'toolCalibratedOn', message }] });
   }
 
   private verdict(input: TorqueEntryRequest): TorqueVerdict {

@@ -26,6 +26,8 @@ export const recommendations = sqliteTable(
     jobId: integer('job_id').notNull().references(() => jobs.id),
     findingId: integer('finding_id').notNull().references(() => findings.id),
     summary: text('summary').notNull(),
+    /** Set by the mechanic; null on rows written before urgency existed (read as the finding condition's default). */
+    urgency: text('urgency', { enum: ['safety', 'soon', 'advisory'] }),
     parts: text('parts', { mode: 'json' }).$type<RecommendationPartRow[]>().notNull(),
     labourHundredths: integer('labour_hundredths').notNull(),
     labourRateMinor: integer('labour_rate_minor').notNull(),

@@ -20,6 +20,10 @@ export const torqueEntries = sqliteTable(
     appliedUnit: text('applied_unit').notNull(),
     specSource: text('spec_source').notNull(),
     tool: text('tool').notNull().default(''),
+    /** The wrench's last calibration date (YYYY-MM-DD), as the mechanic read it off the wrench or its certificate. */
+    toolCalibratedOn: text('tool_calibrated_on'),
+    /** Thread-locking compound used; null = not recorded (older entries). */
+    threadlocker: text('threadlocker', { enum: ['none', 'blue_medium', 'red_high', 'pre_applied', 'other'] }),
     carbonPart: integer('carbon_part', { mode: 'boolean' }).notNull().default(false),
     userId: integer('user_id').references(() => users.id),
     at: timestamp('at').notNull(),

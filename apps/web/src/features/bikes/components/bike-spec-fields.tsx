@@ -8,6 +8,9 @@ type Field =
 /** Mantine input props for one field (value, onChange, error, …). */
 type FieldGetter = (name: Field) => object;
 
+/** At least 44 px per choice, for gloved or greasy fingers at the counter. */
+const TARGET = { label: { minHeight: 44, display: 'flex', alignItems: 'center', justifyContent: 'center' } } as const;
+
 function Segmented({ label, data, props }: { label: string; data: { value: string; label: string }[]; props: object }) {
   const { error, value, onChange } = props as { error?: ReactNode; value: string; onChange: (v: string) => void };
   // Three long choices do not fit side by side on a phone: stack them there.
@@ -16,7 +19,7 @@ function Segmented({ label, data, props }: { label: string; data: { value: strin
   return (
     <Stack gap={4}>
       <Text size="sm" fw={500}>{label}</Text>
-      <SegmentedControl fullWidth size="md" orientation={vertical ? 'vertical' : 'horizontal'} data={data} value={value} onChange={onChange} aria-label={label} />
+      <SegmentedControl fullWidth size="md" orientation={vertical ? 'vertical' : 'horizontal'} data={data} value={value} onChange={onChange} aria-label={label} styles={TARGET} />
       {error && <Text size="sm" c="red">{error}</Text>}
     </Stack>
   );

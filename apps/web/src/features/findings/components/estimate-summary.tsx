@@ -1,6 +1,7 @@
 import { Paper, SimpleGrid, Stack, Text } from '@mantine/core';
 import { QueryState } from '../../../components/query-state';
 import { useEstimate } from '../api/findings';
+import { EstimateItems } from './estimate-items';
 import { money } from '../../../lib/money';
 
 function Total({ label, minor, currency, hint }: { label: string; minor: number; currency: string; hint: string }) {
@@ -27,6 +28,7 @@ export function EstimateSummary({ jobId }: { jobId: number }) {
         <Total label="Declined" minor={e.totals.declined.grossMinor} currency={e.currency} hint={`${count('declined')} item(s)`} />
         <Total label="All quoted" minor={e.totals.all.grossMinor} currency={e.currency} hint={`tax ${money(e.totals.all.taxMinor, e.currency)}`} />
       </SimpleGrid>
+      <EstimateItems estimate={e} />
     </Stack>
   );
 }

@@ -1,5 +1,5 @@
 import type { FindingDto } from '@benchproof/contracts';
-import { DECLINED_SAFETY_NOTICE, INSPECTION_AREA_LABELS, type Condition } from '@benchproof/domain';
+import { DECLINED_SAFETY_NOTICE, defaultUrgency, INSPECTION_AREA_LABELS } from '@benchproof/domain';
 import { Alert, Badge, Button, Card, Group, Modal, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconEdit, IconMessageCircle, IconReceipt } from '@tabler/icons-react';
@@ -7,18 +7,13 @@ import { ConditionBadge } from '../../../components/condition-badge';
 import { SafetyNote } from '../../../components/safety-note';
 import { DecisionForm } from './decision-form';
 import { DECISION_COLOURS, DECISION_LABELS, DecisionHistory } from './decision-history';
+import { isDeclinedSafety } from './estimate-items';
 import type { ShopRates } from './estimate-preview';
 import { FindingForm } from './finding-form';
 import { money } from '../../../lib/money';
 import { RecommendationEditor } from './recommendation-editor';
+import { UrgencyBadge } from './urgency-badge';
 
-/** Urgency follows the condition (the contract carries no separate urgency field). */
-const URGENCY: Record<Condition, { label: string; colour: string }> = {
-  unsafe: { label: 'Safety — before riding', colour: 'red' },
-  worn: { label: 'Soon', colour: 'orange' },
-  wearing: { label: 'Advisory', colour: 'gray' },
-  sound: { label: 'Advisory', colour: 'gray' },
-};
 
 export interface FindingCardProps {
   jobId: number;
@@ -53,8 +48,9 @@ export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerNa
   const [edit, editModal] = useDisclosure();
   const [price, priceModal] = useDisclosure();
   const [decide, decideModal] = useDisclosure();
-  const urgency = URGENCY[finding.condition];
-  const declinedUnsafe = finding.condition === 'unsafe' && finding.recommendation?.decisionStatus === 'declined';
+  // Before it is priced, the finding shows the urgency its recommendation would start with.
+  const urgency = finding.recommendation?.urgency ?? defaultUrgency(finding.condition);
+  const declinedUnsafe = isDeclinedSafety(urgency, finding.recommendation?.decisionStatus ?? 'pending', finding.condition);
   return (
     <Card withBorder padding="md">
       <Stack gap="sm">
@@ -63,7 +59,7 @@ export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerNa
             <Text size="xs" tt="uppercase" fw={700} c="dimmed">{INSPECTION_AREA_LABELS[finding.area]}</Text>
             <ConditionBadge condition={finding.condition} />
           </Stack>
-          <Badge color={urgency.colour} variant="outline" radius="sm">{urgency.label}</Badge>
+          <UrgencyBadge urgency={urgency} />
         </Group>
         <Text style={{ whiteSpace: 'pre-wrap' }}>{finding.description}</Text>
         {finding.cautions.map((c) => <SafetyNote key={c} text={c} />)}
@@ -78,7 +74,7 @@ export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerNa
       </Stack>
       <Modal opened={edit} onClose={editModal.close} title="Edit finding" size="lg"><FindingForm jobId={jobId} finding={finding} onDone={editModal.close} /></Modal>
       <Modal opened={price} onClose={priceModal.close} title="Recommendation and price" size="lg" fullScreen={false}>
-        <RecommendationEditor jobId={jobId} findingId={finding.id} current={finding.recommendation} rates={rates} onDone={priceModal.close} />
+        <RecommendationEditor jobId={jobId} findingId={finding.id} condition={finding.condition} current={finding.recommendation} rates={rates} onDone={priceModal.close} />
       </Modal>
       <Modal opened={decide} onClose={decideModal.close} title="Owner’s decision" size="lg">
         {finding.recommendation && <DecisionForm jobId={jobId} recommendationId={finding.recommendation.id} ownerName={ownerName} recorderName={me.name} onDone={decideModal.close} />}

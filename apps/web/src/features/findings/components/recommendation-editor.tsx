@@ -1,6 +1,6 @@
 import { RecommendationRequestSchema, type RecommendationDto } from '@benchproof/contracts';
-import type { EstimateLine } from '@benchproof/domain';
-import { ActionIcon, Alert, Button, Group, NumberInput, Paper, Stack, Text, TextInput } from '@mantine/core';
+import { defaultUrgency, URGENCIES, URGENCY_LABELS, type Condition, type EstimateLine, type Urgency } from '@benchproof/domain';
+import { ActionIcon, Alert, Button, Group, NumberInput, Paper, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconPlus, IconTrash } from '@tabler/icons-react';
 import { ApiError } from '../../../lib/api-client';
@@ -15,15 +15,18 @@ interface PartRow {
 }
 interface Values {
   summary: string;
+  urgency: Urgency;
   parts: PartRow[];
   hours: number | string;
 }
 
+const URGENCY_OPTIONS = URGENCIES.map((u) => ({ value: u, label: URGENCY_LABELS[u] }));
 const emptyPart = (): PartRow => ({ description: '', qty: 1, price: '' });
 
 function toRequest(v: Values, currency: string) {
   return {
     summary: v.summary,
+    urgency: v.urgency,
     parts: v.parts.map((p) => ({ description: p.description, qty: Number(p.qty), unitPriceMinor: majorTextToMinor(p.price, currency) ?? Number.NaN })),
     labourHundredths: Math.round(Number(v.hours || 0) * 100),
   };
@@ -56,12 +59,13 @@ function PartLine({ form, i, currency }: { form: UseFormReturnType<Values>; i: n
 }
 
 /** Parts and labour for one finding, priced live at the shop's rates. */
-export function RecommendationEditor({ jobId, findingId, current, rates, onDone }: { jobId: number; findingId: number; current: RecommendationDto | null; rates: ShopRates; onDone: () => void }) {
+export function RecommendationEditor({ jobId, findingId, condition, current, rates, onDone }: { jobId: number; findingId: number; condition: Condition; current: RecommendationDto | null; rates: ShopRates; onDone: () => void }) {
   const save = useSaveRecommendation(jobId, findingId);
   const form = useForm<Values>({
     mode: 'controlled',
     initialValues: {
       summary: current?.summary ?? '',
+      urgency: current?.urgency ?? defaultUrgency(condition),
       parts: current?.parts.map((p) => ({ description: p.description, qty: p.qty, price: minorToMajorText(p.unitPriceMinor, rates.currency) })) ?? [],
       hours: current ? current.labourHundredths / 100 : 0.5,
     },
@@ -77,6 +81,11 @@ export function RecommendationEditor({ jobId, findingId, current, rates, onDone 
       <Stack>
         {save.error instanceof ApiError && save.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{save.error.message}</Alert>}
         <TextInput label="What we recommend" withAsterisk {...form.getInputProps('summary')} />
+        <Stack gap={4}>
+          <Text size="sm" fw={500} id={`urgency-${findingId}`}>Urgency</Text>
+          <SegmentedControl fullWidth size="md" data={URGENCY_OPTIONS} aria-labelledby={`urgency-${findingId}`} {...form.getInputProps('urgency')} />
+          <Text size="xs" c="dimmed">Starts from the finding’s condition; change it if the work is more or less pressing.</Text>
+        </Stack>
         <Text fw={600}>Parts</Text>
         {values.parts.map((_, i) => <PartLine key={i} form={form as unknown as UseFormReturnType<Values>} i={i} currency={rates.currency} />)}
         <Button variant="light" leftSection={<IconPlus />} onClick={() => form.insertListItem('parts', emptyPart())}>Add a part</Button>

@@ -1,5 +1,5 @@
 import { JOB_STATUSES, JOB_STATUS_LABELS } from '@benchproof/domain';
-import { Button, Chip, Group, Select, SimpleGrid, Stack, TextInput } from '@mantine/core';
+import { Button, Chip, Group, Select, SimpleGrid, Stack, Switch, TextInput } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
 import { useDebouncedCallback } from '@mantine/hooks';
 import { IconSearch, IconX } from '@tabler/icons-react';
@@ -14,6 +14,7 @@ export interface Option {
 
 interface Props {
   params: JobListParams;
+  includeClosed: boolean;
   update: ReturnType<typeof useJobListParams>['update'];
   mechanics: Option[];
 }
@@ -37,9 +38,10 @@ function SearchBox({ initial, onSearch }: { initial: string; onSearch: (q: strin
 }
 
 /** Status chips, mechanic, promised range and free text for the jobs table. */
-export function JobFilters({ params, update, mechanics }: Props) {
+export function JobFilters({ params, includeClosed, update, mechanics }: Props) {
   const range: [string | null, string | null] = [params.promisedAfter ?? null, params.promisedBefore ?? null];
-  const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore);
+  const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed);
+  const byStatus = Boolean(params.status?.length);
   return (
     <Stack gap="sm" mb="md">
       <Chip.Group multiple value={params.status ?? []} onChange={(v) => update({ status: v })}>
@@ -51,6 +53,14 @@ export function JobFilters({ params, update, mechanics }: Props) {
           ))}
         </Group>
       </Chip.Group>
+      <Switch
+        label="Include collected and cancelled jobs"
+        description={byStatus ? 'The chosen statuses decide which jobs are listed.' : 'Off: only jobs still in the workshop.'}
+        checked={includeClosed || byStatus}
+        disabled={byStatus}
+        onChange={(e) => update({ closed: e.currentTarget.checked ? '1' : null })}
+        size="md"
+      />
       <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
         <SearchBox initial={params.q ?? ''} onSearch={(q) => update({ q })} />
         <Select
@@ -73,7 +83,7 @@ export function JobFilters({ params, update, mechanics }: Props) {
       </SimpleGrid>
       {active && (
         <Group>
-          <Button variant="subtle" leftSection={<IconX size={18} />} onClick={() => update({ q: null, status: [], mechanicId: null, promisedAfter: null, promisedBefore: null })}>
+          <Button variant="subtle" leftSection={<IconX size={18} />} onClick={() => update({ q: null, status: [], mechanicId: null, promisedAfter: null, promisedBefore: null, closed: null })}>
             Clear filters
           </Button>
         </Group>

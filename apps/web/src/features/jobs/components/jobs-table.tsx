@@ -81,7 +81,7 @@ function DesktopTable({ jobs, sort, onSort }: { jobs: JobDto[]; sort: Sort; onSo
 
 /** The jobs table: filters in the address bar, paging and sort on the server, cards on phones. */
 export function JobsTable({ mechanics, pageSize = 20 }: { mechanics: Option[]; pageSize?: number }) {
-  const { params, update } = useJobListParams(pageSize);
+  const { params, includeClosed, update } = useJobListParams(pageSize);
   const jobs = useJobs(params);
   const data = jobs.data;
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
@@ -89,7 +89,7 @@ export function JobsTable({ mechanics, pageSize = 20 }: { mechanics: Option[]; p
   const onSort = (s: Sort) => update({ sort: s.field, order: s.order });
   return (
     <>
-      <JobFilters params={params} update={update} mechanics={mechanics} />
+      <JobFilters params={params} includeClosed={includeClosed} update={update} mechanics={mechanics} />
       <QueryState isLoading={jobs.isLoading} error={jobs.error} />
       {data && data.items.length === 0 && <Text c="dimmed" py="lg">No jobs match these filters.</Text>}
       {data && data.items.length > 0 && (

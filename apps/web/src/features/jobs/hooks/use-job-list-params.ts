@@ -6,17 +6,23 @@ import type { JobListParams } from '../api/jobs';
 
 type SortField = JobListQuery['sort'];
 const isSortField = (v: string | null): v is SortField => (JOB_SORT_FIELDS as readonly string[]).includes(v ?? '');
-type Key = 'q' | 'mechanicId' | 'promisedAfter' | 'promisedBefore' | 'sort' | 'order' | 'page';
+type Key = 'q' | 'mechanicId' | 'promisedAfter' | 'promisedBefore' | 'sort' | 'order' | 'page' | 'closed';
 
-/** Jobs table filters kept in the address bar, so Back and a shared link show the same list. */
+/**
+ * Jobs table filters kept in the address bar, so Back and a shared link show the same list.
+ * By default only open jobs are listed; `closed=1` adds collected and cancelled ones,
+ * and picking statuses lists exactly those.
+ */
 export function useJobListParams(pageSize: number) {
   const [search, setSearch] = useSearchParams();
   const params = useMemo<JobListParams>(() => {
     const status = (search.get('status') ?? '').split(',').filter(isJobStatus);
     const sort = search.get('sort');
+    const includeClosed = search.get('closed') === '1';
     return {
       q: search.get('q') ?? undefined,
       status: status.length ? status : undefined,
+      open: status.length || includeClosed ? undefined : true,
       mechanicId: Number(search.get('mechanicId')) || undefined,
       promisedAfter: search.get('promisedAfter') ?? undefined,
       promisedBefore: search.get('promisedBefore') ?? undefined,
@@ -26,6 +32,7 @@ export function useJobListParams(pageSize: number) {
       pageSize,
     };
   }, [search, pageSize]);
+  const includeClosed = search.get('closed') === '1';
 
   const update = (patch: Partial<Record<Key, string | null>> & { status?: JobStatus[] }) => {
     setSearch(
@@ -42,5 +49,5 @@ export function useJobListParams(pageSize: number) {
       { replace: true },
     );
   };
-  return { params, update };
+  return { params, includeClosed, update };
 }

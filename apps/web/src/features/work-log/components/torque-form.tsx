@@ -1,11 +1,13 @@
 import { TorqueEntryRequestSchema } from '@benchproof/contracts';
-import { CARBON_CAUTION, TORQUE_UNITS, TORQUE_UNIT_LABELS, type TorqueUnit } from '@benchproof/domain';
-import { Alert, Button, Checkbox, NumberInput, SegmentedControl, SimpleGrid, Stack, Switch, Text, TextInput } from '@mantine/core';
+import { CARBON_CAUTION, isWrenchCalibrationOverdue, THREADLOCKERS, THREADLOCKER_LABELS, TORQUE_UNITS, TORQUE_UNIT_LABELS, type Threadlocker, type TorqueUnit } from '@benchproof/domain';
+import { Alert, Button, Checkbox, NumberInput, SegmentedControl, Select, SimpleGrid, Stack, Switch, Text, TextInput } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
 import { useForm } from '@mantine/form';
+import dayjs from 'dayjs';
 import { SafetyNote } from '../../../components/safety-note';
 import { ApiError } from '../../../lib/api-client';
 import { useAddTorqueEntry } from '../api/work-log';
+import { CalibrationNotice } from './calibration-notice';
 import { TorqueLive } from './torque-live';
 
 interface Values {
@@ -18,18 +20,14 @@ interface Values {
   applied: number | string;
   appliedUnit: TorqueUnit;
   tool: string;
-  calibratedOn: string | null;
-  threadlocker: boolean;
+  toolCalibratedOn: string | null;
+  threadlocker: Threadlocker | null;
   carbonPart: boolean;
 }
 
 const UNIT_OPTIONS = TORQUE_UNITS.map((u) => ({ value: u, label: TORQUE_UNIT_LABELS[u] }));
+const THREADLOCKER_OPTIONS = THREADLOCKERS.map((t) => ({ value: t, label: THREADLOCKER_LABELS[t] }));
 const num = (v: number | string) => (v === '' ? null : Number(v));
-
-/** Calibration date and threadlocker have no field in the contract yet, so they travel in the tool text. */
-function toolText(v: Values): string {
-  return [v.tool.trim(), v.calibratedOn && `calibrated ${v.calibratedOn}`, v.threadlocker && 'threadlocker used'].filter(Boolean).join(' · ');
-}
 
 function toRequest(v: Values) {
   return {
@@ -37,12 +35,14 @@ function toRequest(v: Values) {
     specSource: v.specSource,
     specified: { min: num(v.specMin) ?? Number.NaN, max: v.isRange ? num(v.specMax) : null, unit: v.specUnit },
     applied: { value: num(v.applied) ?? Number.NaN, unit: v.appliedUnit },
-    tool: toolText(v),
+    tool: v.tool,
+    toolCalibratedOn: v.toolCalibratedOn ?? undefined,
+    threadlocker: v.threadlocker ?? undefined,
     carbonPart: v.carbonPart,
   };
 }
 
-const INITIAL: Values = { fastener: '', specSource: '', isRange: false, specMin: '', specMax: '', specUnit: 'nm', applied: '', appliedUnit: 'nm', tool: '', calibratedOn: null, threadlocker: false, carbonPart: false };
+const INITIAL: Values = { fastener: '', specSource: '', isRange: false, specMin: '', specMax: '', specUnit: 'nm', applied: '', appliedUnit: 'nm', tool: '', toolCalibratedOn: null, threadlocker: null, carbonPart: false };
 
 /** One fastener: the maker's value and where it came from, what was applied, with which wrench. */
 export function TorqueForm({ jobId }: { jobId: number }) {
@@ -79,9 +79,10 @@ export function TorqueForm({ jobId }: { jobId: number }) {
         <TorqueLive spec={specMin === null ? null : { min: specMin, max: v.isRange ? num(v.specMax) : null, unit: v.specUnit }} applied={applied === null ? null : { value: applied, unit: v.appliedUnit }} carbonPart={v.carbonPart} />
         <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
           <TextInput label="Wrench / tool id" {...form.getInputProps('tool')} />
-          <DatePickerInput label="Wrench calibrated on" clearable maxDate={new Date()} size="md" {...form.getInputProps('calibratedOn')} />
+          <DatePickerInput label="Wrench calibrated on" placeholder="From the wrench or its certificate" clearable maxDate={new Date()} size="md" valueFormat="D MMM YYYY" {...form.getInputProps('toolCalibratedOn')} />
         </SimpleGrid>
-        <Checkbox label="Threadlocker used" size="md" {...form.getInputProps('threadlocker', { type: 'checkbox' })} />
+        <CalibrationNotice overdue={isWrenchCalibrationOverdue(v.toolCalibratedOn, dayjs().format('YYYY-MM-DD'))} />
+        <Select label="Threadlocker" placeholder="Not recorded" data={THREADLOCKER_OPTIONS} clearable size="md" {...form.getInputProps('threadlocker')} />
         <Checkbox label="Carbon part" size="md" {...form.getInputProps('carbonPart', { type: 'checkbox' })} />
         {v.carbonPart && <SafetyNote title="Carbon" text={CARBON_CAUTION} />}
         {add.error instanceof ApiError && add.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{add.error.message}</Alert>}
