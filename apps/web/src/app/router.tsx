@@ -1,35 +1,30 @@
+import type { ComponentType } from 'react';
 import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
 import { requireRole, requireSession } from './guards';
 import { SignInRoute } from './routes/auth/sign-in.route';
-import { BikeRoute } from './routes/bikes/bike.route';
-import { CustomerRoute } from './routes/customers/customer.route';
-import { CustomersRoute } from './routes/customers/customers.route';
 import { NotFoundRoute } from './routes/errors/not-found.route';
 import { RouteError } from './routes/errors/route-error';
-import { BookInRoute } from './routes/jobs/book-in.route';
-import { CaptureRoute } from './routes/jobs/capture.route';
-import { JobRoute } from './routes/jobs/job.route';
-import { JobsRoute } from './routes/jobs/jobs.route';
-import { ScopeRoute } from './routes/jobs/scope.route';
-import { ShopSettingsRoute } from './routes/settings/shop.route';
-import { UsersRoute } from './routes/settings/users.route';
-import { ShowcaseRoute } from './routes/showcase/showcase.route';
 import { AppLayout } from './shell/app-layout';
+
+/** Loads a page's code when it is first visited, so a phone downloads only what it opens. */
+const page =
+  <M,>(load: () => Promise<M>, pick: (m: M) => ComponentType) =>
+  async () => ({ Component: pick(await load()) });
 
 /** Pages inside the signed-in frame. Features meet here; add new pages to this list. */
 const signedIn: RouteObject[] = [
   { index: true, element: <Navigate to="/jobs" replace /> },
-  { path: 'jobs', element: <JobsRoute /> },
-  { path: 'jobs/new', loader: requireRole('manager', 'desk'), element: <BookInRoute /> },
-  { path: 'jobs/:jobId', element: <JobRoute /> },
-  { path: 'jobs/:jobId/capture', element: <CaptureRoute /> },
-  { path: 'jobs/:jobId/scope', element: <ScopeRoute /> },
-  { path: 'customers', element: <CustomersRoute /> },
-  { path: 'customers/:customerId', element: <CustomerRoute /> },
-  { path: 'bikes/:bikeId', element: <BikeRoute /> },
-  { path: 'showcase', loader: requireRole('manager'), element: <ShowcaseRoute /> },
-  { path: 'settings/users', loader: requireRole('manager'), element: <UsersRoute /> },
-  { path: 'settings/shop', loader: requireRole('manager'), element: <ShopSettingsRoute /> },
+  { path: 'jobs', lazy: page(() => import('./routes/jobs/jobs.route'), (m) => m.JobsRoute) },
+  { path: 'jobs/new', loader: requireRole('manager', 'desk'), lazy: page(() => import('./routes/jobs/book-in.route'), (m) => m.BookInRoute) },
+  { path: 'jobs/:jobId', lazy: page(() => import('./routes/jobs/job.route'), (m) => m.JobRoute) },
+  { path: 'jobs/:jobId/capture', lazy: page(() => import('./routes/jobs/capture.route'), (m) => m.CaptureRoute) },
+  { path: 'jobs/:jobId/scope', lazy: page(() => import('./routes/jobs/scope.route'), (m) => m.ScopeRoute) },
+  { path: 'customers', lazy: page(() => import('./routes/customers/customers.route'), (m) => m.CustomersRoute) },
+  { path: 'customers/:customerId', lazy: page(() => import('./routes/customers/customer.route'), (m) => m.CustomerRoute) },
+  { path: 'bikes/:bikeId', lazy: page(() => import('./routes/bikes/bike.route'), (m) => m.BikeRoute) },
+  { path: 'showcase', loader: requireRole('manager'), lazy: page(() => import('./routes/showcase/showcase.route'), (m) => m.ShowcaseRoute) },
+  { path: 'settings/users', loader: requireRole('manager'), lazy: page(() => import('./routes/settings/users.route'), (m) => m.UsersRoute) },
+  { path: 'settings/shop', loader: requireRole('manager'), lazy: page(() => import('./routes/settings/shop.route'), (m) => m.ShopSettingsRoute) },
   { path: '*', element: <NotFoundRoute /> },
 ];
 

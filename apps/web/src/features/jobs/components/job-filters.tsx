@@ -3,7 +3,7 @@ import { Button, Chip, Group, Select, SimpleGrid, Stack, Switch, TextInput } fro
 import { DatePickerInput } from '@mantine/dates';
 import { useDebouncedCallback } from '@mantine/hooks';
 import { IconSearch, IconX } from '@tabler/icons-react';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import type { JobListParams } from '../api/jobs';
 import type { useJobListParams } from '../hooks/use-job-list-params';
 
@@ -22,6 +22,8 @@ interface Props {
 function SearchBox({ initial, onSearch }: { initial: string; onSearch: (q: string) => void }) {
   const [value, setValue] = useState(initial);
   const debounced = useDebouncedCallback(onSearch, 300);
+  // A search still waiting when the user taps a result must not pull them back to the list.
+  useEffect(() => () => debounced.cancel(), [debounced]);
   return (
     <TextInput
       aria-label="Search jobs"
@@ -32,6 +34,7 @@ function SearchBox({ initial, onSearch }: { initial: string; onSearch: (q: strin
         setValue(e.currentTarget.value);
         debounced(e.currentTarget.value.trim());
       }}
+      onBlur={() => debounced.flush()}
       size="md"
     />
   );
