@@ -1,6 +1,6 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { DEMO_MEDIA_JOBS_PER_SHOP, DEMO_SHOTS, drawScene, type DemoShot } from '@benchproof/seeds';
-import { and, desc, eq } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { AuthUser } from '../core/auth';
 import { DB, type Db } from '../core/db';
 import { jobs, shops, users } from '../db/schema';
@@ -30,8 +30,7 @@ export class DemoMediaSeeder {
     for (const shop of this.db.select({ id: shops.id }).from(shops).all()) {
       const actor = this.mechanicOf(shop.id);
       if (!actor) continue;
-      const recent = this.db.select({ id: jobs.id }).from(jobs).where(eq(jobs.shopId, shop.id)).orderBy(desc(jobs.id)).limit(DEMO_MEDIA_JOBS_PER_SHOP).all();
-      for (const job of recent) {
+      for (const job of this.jobsWithWorkDone(shop.id)) {
         for (const shot of DEMO_SHOTS) {
           await this.upload(actor, job.id, shot);
           count++;
@@ -39,6 +38,17 @@ export class DemoMediaSeeder {
       }
     }
     if (count) this.logger.log(`Seeded ${count} demo media assets`);
+  }
+
+  /** Jobs far enough along to have before and after shots (not booked-in, cancelled or collected). */
+  private jobsWithWorkDone(shopId: number): { id: number }[] {
+    return this.db
+      .select({ id: jobs.id })
+      .from(jobs)
+      .where(and(eq(jobs.shopId, shopId), inArray(jobs.status, ['waiting_owner', 'in_work', 'final_check', 'ready'])))
+      .orderBy(asc(jobs.id))
+      .limit(DEMO_MEDIA_JOBS_PER_SHOP)
+      .all();
   }
 
   private mechanicOf(shopId: number): AuthUser | null {
