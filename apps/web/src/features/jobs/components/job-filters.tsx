@@ -1,5 +1,5 @@
 import { JOB_STATUSES, JOB_STATUS_LABELS } from '@benchproof/domain';
-import { Button, Chip, Group, Select, SimpleGrid, Stack, Switch, TextInput } from '@mantine/core';
+import { Button, Chip, Group, Select, SimpleGrid, Stack, Switch, TextInput, useMatches } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
 import { useDebouncedCallback } from '@mantine/hooks';
 import { IconSearch, IconX } from '@tabler/icons-react';
@@ -45,10 +45,12 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
   const range: [string | null, string | null] = [params.promisedAfter ?? null, params.promisedBefore ?? null];
   const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed);
   const byStatus = Boolean(params.status?.length);
+  const chipWrap = useMatches<'nowrap' | 'wrap'>({ base: 'nowrap', sm: 'wrap' });
   return (
     <Stack gap="sm" mb="md">
       <Chip.Group multiple value={params.status ?? []} onChange={(v) => update({ status: v })}>
-        <Group gap={8} role="group" aria-label="Filter by status">
+        {/* One swipeable row on a phone, so the jobs start near the top of the screen. */}
+        <Group gap={8} role="group" aria-label="Filter by status" wrap={chipWrap} style={{ overflowX: 'auto', paddingBottom: 4 }}>
           {JOB_STATUSES.map((s) => (
             <Chip key={s} value={s} size="md" radius="sm">
               {JOB_STATUS_LABELS[s]}
