@@ -38,6 +38,13 @@ function actorOf(req: unknown): AuthUser {
   return node.user;
 }
 
+/**
+ * tus Upload-Metadata may carry a key with no value (tus-js-client sends an empty caption
+ * that way, and @tus/server reads it as null); such a key means "not given".
+ */
+const presentValues = (metadata: Record<string, string | null> | undefined): Record<string, string> =>
+  Object.fromEntries(Object.entries(metadata ?? {}).filter((e): e is [string, string] => e[1] !== null));
+
 const tusError = (err: DomainError) => new TusHookError(err.status, JSON.stringify({ code: err.code, message: err.message, details: err.details }));
 
 /**
@@ -98,7 +105,7 @@ export class MediaTusService implements OnModuleInit {
   /** Runs before any byte is accepted: the job must be the caller's shop's; the upload is stamped with who sent it. */
   private onCreate(req: unknown, upload: Upload): Promise<{ metadata: Record<string, string | null> }> {
     const actor = actorOf(req);
-    const parsed = TusUploadMetaSchema.safeParse(upload.metadata ?? {});
+    const parsed = TusUploadMetaSchema.safeParse(presentValues(upload.metadata));
     if (!parsed.success) throw tusError(new DomainError('VALIDATION_FAILED', 'Upload-Metadata needs jobId, phase and area.', { issues: parsed.error.issues }));
     try {
       this.media.assertJob(actor, parsed.data.jobId);
@@ -111,7 +118,7 @@ export class MediaTusService implements OnModuleInit {
 
   private async onFinish(req: unknown, upload: Upload): Promise<{ status_code: number; headers: Record<string, string>; body: string }> {
     const actor = actorOf(req);
-    const meta = TusUploadMetaSchema.parse(upload.metadata ?? {});
+    const meta = TusUploadMetaSchema.parse(presentValues(upload.metadata));
     const file = { path: join(this.temp.resumableDir, upload.id), originalName: meta.filename ?? '', size: upload.offset };
     try {
       const asset = await this.intake.intake(actor, meta.jobId, file, meta, 'resumable');
