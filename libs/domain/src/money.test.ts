@@ -3,6 +3,8 @@ import { DomainInputError } from './errors';
 import {
   currencyMinorDigits,
   estimateTotals,
+  majorTextToMinor,
+  minorToMajorText,
   formatMoney,
   labourMinor,
   lineTotalMinor,
@@ -150,5 +152,28 @@ describe('formatMoney with the currency minor digits (ISO 4217 via Intl)', () =>
   it('rejects fractional minor units and malformed currencies', () => {
     expect(() => formatMoney(12.5, 'GBP')).toThrow(DomainInputError);
     expect(() => formatMoney(100, 'POUNDS')).toThrow(DomainInputError);
+  });
+});
+
+describe('prices typed in major units', () => {
+  // ISO 4217 minor digits: GBP has 2, JPY has 0 (from memory; Intl.NumberFormat agrees).
+  it.each([
+    ['12.5', 'GBP', 1250],
+    ['12,50', 'GBP', 1250],
+    ['0.07', 'GBP', 7],
+    ['.5', 'GBP', 50],
+    ['1200', 'JPY', 1200],
+  ])('reads %s %s as %i minor units', (text, currency, minor) => {
+    expect(majorTextToMinor(text, currency)).toBe(minor);
+  });
+
+  it.each([['12.345', 'GBP'], ['12.5', 'JPY'], ['', 'GBP'], ['.', 'GBP'], ['-3', 'GBP'], ['12a', 'GBP']])('refuses %s %s', (text, currency) => {
+    expect(majorTextToMinor(text, currency)).toBeNull();
+  });
+
+  it('writes minor units back as the text a price box shows', () => {
+    expect(minorToMajorText(1250, 'GBP')).toBe('12.50');
+    expect(minorToMajorText(1200, 'JPY')).toBe('1200');
+    expect(majorTextToMinor(minorToMajorText(8699, 'GBP'), 'GBP')).toBe(8699);
   });
 });

@@ -1,7 +1,6 @@
 import type { EstimateDto } from '@benchproof/contracts';
-import { DECLINED_SAFETY_NOTICE, INSPECTION_AREA_LABELS, URGENCIES, URGENCY_LABELS, type Urgency } from '@benchproof/domain';
+import { DECLINED_SAFETY_NOTICE, INSPECTION_AREA_LABELS, URGENCIES, URGENCY_LABELS, type Urgency, formatMoney } from '@benchproof/domain';
 import { Alert, Badge, Group, Paper, Stack, Text, Title } from '@mantine/core';
-import { money } from '../../../lib/money';
 import { DECISION_COLOURS, DECISION_LABELS } from './decision-history';
 import { UrgencyBadge } from './urgency-badge';
 
@@ -24,7 +23,7 @@ function EstimateLine({ item, currency }: { item: Item; currency: string }) {
           <Group gap="xs" wrap="nowrap">
             <UrgencyBadge urgency={r.urgency} />
             <Badge color={DECISION_COLOURS[r.decisionStatus]} variant="filled" radius="sm">{DECISION_LABELS[r.decisionStatus]}</Badge>
-            <Text fw={700}>{money(r.totals.grossMinor, currency)}</Text>
+            <Text fw={700}>{formatMoney(r.totals.grossMinor, currency)}</Text>
           </Group>
         </Group>
         {isDeclinedSafety(r.urgency, r.decisionStatus, item.condition) && <Alert color="red" variant="filled" p="xs">{DECLINED_SAFETY_NOTICE}</Alert>}

@@ -1,6 +1,5 @@
-import { estimateTotals, isDomainInputError, type EstimateLine } from '@benchproof/domain';
+import { estimateTotals, isDomainInputError, type EstimateLine, formatMoney } from '@benchproof/domain';
 import { Group, Stack, Text } from '@mantine/core';
-import { money } from '../../../lib/money';
 
 export interface ShopRates {
   labourRateMinor: number;
@@ -29,11 +28,11 @@ export function EstimatePreview({ lines, rates }: { lines: EstimateLine[]; rates
   const c = rates.currency;
   return (
     <Stack gap={2} aria-live="polite">
-      <Row label="Parts" value={money(totals.partsMinor, c)} />
-      <Row label={`Labour at ${money(rates.labourRateMinor, c)}/h`} value={money(totals.labourMinor, c)} />
-      <Row label="Net" value={money(totals.netMinor, c)} />
-      <Row label={`Tax ${(rates.taxRateBp / 100).toLocaleString('en-GB')} %`} value={money(totals.taxMinor, c)} />
-      <Row label="Total" value={money(totals.grossMinor, c)} strong />
+      <Row label="Parts" value={formatMoney(totals.partsMinor, c)} />
+      <Row label={`Labour at ${formatMoney(rates.labourRateMinor, c)}/h`} value={formatMoney(totals.labourMinor, c)} />
+      <Row label="Net" value={formatMoney(totals.netMinor, c)} />
+      <Row label={`Tax ${(rates.taxRateBp / 100).toLocaleString('en-GB')} %`} value={formatMoney(totals.taxMinor, c)} />
+      <Row label="Total" value={formatMoney(totals.grossMinor, c)} strong />
     </Stack>
   );
 }

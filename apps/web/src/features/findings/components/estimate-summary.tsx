@@ -2,13 +2,13 @@ import { Paper, SimpleGrid, Stack, Text } from '@mantine/core';
 import { QueryState } from '../../../components/query-state';
 import { useEstimate } from '../api/findings';
 import { EstimateItems } from './estimate-items';
-import { money } from '../../../lib/money';
+import { formatMoney } from '@benchproof/domain';
 
 function Total({ label, minor, currency, hint }: { label: string; minor: number; currency: string; hint: string }) {
   return (
     <Paper withBorder p="sm">
       <Text size="xs" tt="uppercase" fw={700} c="dimmed">{label}</Text>
-      <Text fz="xl" fw={800}>{money(minor, currency)}</Text>
+      <Text fz="xl" fw={800}>{formatMoney(minor, currency)}</Text>
       <Text size="xs" c="dimmed">{hint}</Text>
     </Paper>
   );
@@ -26,7 +26,7 @@ export function EstimateSummary({ jobId }: { jobId: number }) {
         <Total label="Approved" minor={e.totals.approved.grossMinor} currency={e.currency} hint={`${count('approved')} item(s)`} />
         <Total label="Waiting" minor={e.totals.pending.grossMinor} currency={e.currency} hint={`${count('pending')} item(s)`} />
         <Total label="Declined" minor={e.totals.declined.grossMinor} currency={e.currency} hint={`${count('declined')} item(s)`} />
-        <Total label="All quoted" minor={e.totals.all.grossMinor} currency={e.currency} hint={`tax ${money(e.totals.all.taxMinor, e.currency)}`} />
+        <Total label="All quoted" minor={e.totals.all.grossMinor} currency={e.currency} hint={`tax ${formatMoney(e.totals.all.taxMinor, e.currency)}`} />
       </SimpleGrid>
       <EstimateItems estimate={e} />
     </Stack>

@@ -1,5 +1,5 @@
 import type { FindingDto } from '@benchproof/contracts';
-import { DECLINED_SAFETY_NOTICE, defaultUrgency, INSPECTION_AREA_LABELS } from '@benchproof/domain';
+import { DECLINED_SAFETY_NOTICE, defaultUrgency, INSPECTION_AREA_LABELS, formatMoney } from '@benchproof/domain';
 import { Alert, Badge, Button, Card, Group, Modal, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconEdit, IconMessageCircle, IconReceipt } from '@tabler/icons-react';
@@ -10,7 +10,6 @@ import { DECISION_COLOURS, DECISION_LABELS, DecisionHistory } from './decision-h
 import { isDeclinedSafety } from './estimate-items';
 import type { ShopRates } from './estimate-preview';
 import { FindingForm } from './finding-form';
-import { money } from '../../../lib/money';
 import { RecommendationEditor } from './recommendation-editor';
 import { UrgencyBadge } from './urgency-badge';
 
@@ -36,9 +35,9 @@ function Recommendation({ finding }: { finding: FindingDto }) {
         <Text fw={600}>{r.summary}</Text>
         <Badge color={DECISION_COLOURS[r.decisionStatus]} variant="filled" radius="sm" size="lg">{DECISION_LABELS[r.decisionStatus]}</Badge>
       </Group>
-      {r.parts.map((p, i) => <Text key={i} size="sm">{p.qty} × {p.description} — {money(p.totalMinor, r.currency)}</Text>)}
-      <Text size="sm">Labour {(r.labourHundredths / 100).toLocaleString('en-GB')} h — {money(r.totals.labourMinor, r.currency)}</Text>
-      <Text fw={800}>Total {money(r.totals.grossMinor, r.currency)} <Text span size="xs" c="dimmed">incl. tax {money(r.totals.taxMinor, r.currency)}</Text></Text>
+      {r.parts.map((p, i) => <Text key={i} size="sm">{p.qty} × {p.description} — {formatMoney(p.totalMinor, r.currency)}</Text>)}
+      <Text size="sm">Labour {(r.labourHundredths / 100).toLocaleString('en-GB')} h — {formatMoney(r.totals.labourMinor, r.currency)}</Text>
+      <Text fw={800}>Total {formatMoney(r.totals.grossMinor, r.currency)} <Text span size="xs" c="dimmed">incl. tax {formatMoney(r.totals.taxMinor, r.currency)}</Text></Text>
     </Stack>
   );
 }

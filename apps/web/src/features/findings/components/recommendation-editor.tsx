@@ -1,12 +1,11 @@
 import { RecommendationRequestSchema, type RecommendationDto } from '@benchproof/contracts';
-import { defaultUrgency, URGENCIES, URGENCY_LABELS, type Condition, type EstimateLine, type Urgency } from '@benchproof/domain';
+import { defaultUrgency, URGENCIES, URGENCY_LABELS, type Condition, type EstimateLine, type Urgency, majorTextToMinor, minorToMajorText } from '@benchproof/domain';
 import { ActionIcon, Alert, Button, Group, NumberInput, Paper, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconPlus, IconTrash } from '@tabler/icons-react';
 import { ApiError } from '../../../lib/api-client';
 import { useSaveRecommendation } from '../api/findings';
 import { EstimatePreview, type ShopRates } from './estimate-preview';
-import { majorTextToMinor, minorToMajorText } from '../../../lib/money';
 
 interface PartRow {
   description: string;

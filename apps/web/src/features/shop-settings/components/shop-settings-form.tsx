@@ -1,11 +1,10 @@
 import { UpdateShopSettingsRequestSchema, type ShopSettingsDto } from '@benchproof/contracts';
-import { DEFAULT_CHAIN_LIMIT_POLICY } from '@benchproof/domain';
+import { DEFAULT_CHAIN_LIMIT_POLICY, majorTextToMinor, minorToMajorText } from '@benchproof/domain';
 import { Alert, Button, ColorInput, NumberInput, Paper, SegmentedControl, SimpleGrid, Stack, Switch, Text, Textarea, TextInput, Title } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
 import type { ReactNode } from 'react';
 import { ApiError } from '../../../lib/api-client';
-import { majorTextToMinor, minorToMajorText } from '../../../lib/money';
 import { useUpdateShopSettings } from '../api/shop-settings';
 import { ContrastCheck } from './contrast-check';
 import { fromDto, toRequest, type SettingsValues } from './settings-values';
