@@ -11,6 +11,7 @@ import { FindingsModule } from './findings';
 import { HealthController } from './health/health.controller';
 import { MediaModule } from './media';
 import { ClockModule } from './infra/clock';
+import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { SeedModule } from './seed';
@@ -29,6 +30,7 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot(cfg),
         ClockModule,
+        TasksModule,
         DbModule,
         AuthCoreModule,
         ThrottlerModule.forRoot([{ ttl: 60_000, limit: cfg.LOGIN_THROTTLE_LIMIT }]),
