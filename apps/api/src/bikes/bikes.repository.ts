@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { BikeListQuery } from '@benchproof/contracts';
-import { and, asc, count, desc, eq, inArray, like, or, sql, type SQL } from 'drizzle-orm';
-import { DB, type Db } from '../core/db';
+import { and, asc, count, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { DB, ftsPrefixQuery, type Db } from '../core/db';
 import { bikes } from '../db/schema';
 
 export type BikeRow = typeof bikes.$inferSelect;
@@ -17,18 +17,14 @@ function order(query: BikeListQuery): SQL[] {
 export class BikesRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  /** Maker, model, "maker model" and serial contain `q`, or the owner is one of `ownerIds`. */
-  private matches(q: string, ownerIds: number[] = []): SQL | undefined {
-    const p = `%${q}%`;
-    const makerModel = like(sqlConcat(), p);
-    return or(like(bikes.maker, p), like(bikes.model, p), makerModel, like(bikes.serialNumber, p), ownerIds.length ? inArray(bikes.customerId, ownerIds) : undefined);
-  }
-
-  page(shopId: number, query: BikeListQuery, ownerIds: number[]): { rows: BikeRow[]; total: number } {
+  /** Maker, model, serial or the owner's name start with what was typed (bike_search FTS5 index). */
+  page(shopId: number, query: BikeListQuery): { rows: BikeRow[]; total: number } {
+    const text = query.q ? ftsPrefixQuery(query.q) : null;
+    if (query.q && text === null) return { rows: [], total: 0 };
     const where = and(
       eq(bikes.shopId, shopId),
       query.customerId ? eq(bikes.customerId, query.customerId) : undefined,
-      query.q ? this.matches(query.q, ownerIds) : undefined,
+      text === null ? undefined : sql`${bikes.id} IN (SELECT rowid FROM bike_search WHERE bike_search MATCH ${text})`,
     );
     const total = this.db.select({ n: count() }).from(bikes).where(where).get()?.n ?? 0;
     const rows = this.db
@@ -40,15 +36,6 @@ export class BikesRepository {
       .offset((query.page - 1) * query.pageSize)
       .all();
     return { rows, total };
-  }
-
-  matchingIds(shopId: number, q: string): number[] {
-    return this.db
-      .select({ id: bikes.id })
-      .from(bikes)
-      .where(and(eq(bikes.shopId, shopId), this.matches(q)))
-      .all()
-      .map((r) => r.id);
   }
 
   listByCustomer(shopId: number, customerId: number): BikeRow[] {
@@ -76,8 +63,4 @@ export class BikesRepository {
   update(shopId: number, id: number, patch: Partial<NewBikeRow>): BikeRow | undefined {
     return this.db.update(bikes).set(patch).where(and(eq(bikes.shopId, shopId), eq(bikes.id, id))).returning().get();
   }
-}
-
-function sqlConcat(): SQL {
-  return sql`${bikes.maker} || ' ' || ${bikes.model}`;
 }

@@ -48,8 +48,7 @@ export class BikesService {
   }
 
   list(actor: AuthUser, query: BikeListQuery): BikePage {
-    const ownerIds = query.q ? this.customers.matchingIds(actor, query.q) : [];
-    const { rows, total } = this.repo.page(actor.shopId, query, ownerIds);
+    const { rows, total } = this.repo.page(actor.shopId, query);
     return { items: this.withOwners(actor, rows), total, page: query.page, pageSize: query.pageSize };
   }
 
@@ -85,10 +84,6 @@ export class BikesService {
     return this.withOwners(actor, [row])[0];
   }
 
-  /** Ids of the shop's bikes whose maker, model or serial contains `q`. */
-  matchingIds(actor: Pick<AuthUser, 'shopId'>, q: string): number[] {
-    return this.repo.matchingIds(actor.shopId, q);
-  }
 
   byIds(actor: Pick<AuthUser, 'shopId'>, ids: number[]): Map<number, BikeListItem> {
     const rows = this.repo.findMany(actor.shopId, [...new Set(ids)]);

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { CustomerListQuery } from '@benchproof/contracts';
-import { and, asc, count, desc, eq, inArray, like, or, type SQL } from 'drizzle-orm';
-import { DB, type Db } from '../core/db';
+import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
+import { DB, ftsPrefixQuery, type Db } from '../core/db';
 import { customers } from '../db/schema';
 
 export type CustomerRow = typeof customers.$inferSelect;
@@ -14,13 +14,14 @@ const SORT_COLUMN = { name: customers.name, createdAt: customers.createdAt } as 
 export class CustomersRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  private matches(q: string): SQL | undefined {
-    const pattern = `%${q}%`;
-    return or(like(customers.name, pattern), like(customers.email, pattern), like(customers.phone, pattern));
-  }
-
+  /** Name, e-mail or phone words start with what was typed (customer_search FTS5 index). */
   page(shopId: number, query: CustomerListQuery): { rows: CustomerRow[]; total: number } {
-    const where = and(eq(customers.shopId, shopId), query.q ? this.matches(query.q) : undefined);
+    const text = query.q ? ftsPrefixQuery(query.q) : null;
+    if (query.q && text === null) return { rows: [], total: 0 };
+    const where = and(
+      eq(customers.shopId, shopId),
+      text === null ? undefined : sql`${customers.id} IN (SELECT rowid FROM customer_search WHERE customer_search MATCH ${text})`,
+    );
     const total = this.db.select({ n: count() }).from(customers).where(where).get()?.n ?? 0;
     const rows = this.db
       .select()
@@ -31,15 +32,6 @@ export class CustomersRepository {
       .offset((query.page - 1) * query.pageSize)
       .all();
     return { rows, total };
-  }
-
-  matchingIds(shopId: number, q: string): number[] {
-    return this.db
-      .select({ id: customers.id })
-      .from(customers)
-      .where(and(eq(customers.shopId, shopId), this.matches(q)))
-      .all()
-      .map((r) => r.id);
   }
 
   find(shopId: number, id: number): CustomerRow | undefined {

@@ -55,10 +55,6 @@ export class CustomersService {
     return toCustomerDto(row);
   }
 
-  /** Ids of the shop's customers whose name, e-mail or phone contains `q` (for other features' searches). */
-  matchingIds(actor: Pick<AuthUser, 'shopId'>, q: string): number[] {
-    return this.repo.matchingIds(actor.shopId, q);
-  }
 
   /** Customers by id, keyed by id; ids of other shops are simply absent. */
   byIds(actor: Pick<AuthUser, 'shopId'>, ids: number[]): Map<number, CustomerDto> {

@@ -1,9 +1,9 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { JobListQuery } from '@benchproof/contracts';
-import { TERMINAL_STATUSES, type JobStatus } from '@benchproof/domain';
-import { and, asc, count, desc, eq, gte, inArray, isNull, like, lt, lte, notInArray, or, type SQL } from 'drizzle-orm';
-import { DB, type Db } from '../core/db';
-import { finalChecks, jobStatusEvents, jobs } from '../db/schema';
+import { JOB_STATUSES, TERMINAL_STATUSES, type JobStatus } from '@benchproof/domain';
+import { and, asc, count, desc, eq, getTableColumns, gte, inArray, isNull, lt, lte, or, sql, type SQL } from 'drizzle-orm';
+import { DB, ftsPrefixQuery, type Db } from '../core/db';
+import { bikes, customers, finalChecks, jobStatusEvents, jobs } from '../db/schema';
 
 export type JobRow = typeof jobs.$inferSelect;
 export type NewJobRow = typeof jobs.$inferInsert;
@@ -12,15 +12,26 @@ export type FinalCheckRow = typeof finalChecks.$inferSelect;
 
 /** Statuses in which a passed promised day no longer counts as overdue. */
 export const DONE_STATUSES: JobStatus[] = ['ready', 'collected', 'cancelled'];
+const NOT_DONE = JOB_STATUSES.filter((st) => !DONE_STATUSES.includes(st));
+const OPEN = JOB_STATUSES.filter((st) => !TERMINAL_STATUSES.includes(st));
+
+/** A jobs-list row: the job with the owner's name and the bike's identity joined in (a read model). */
+export type JobListRow = JobRow & { ownerName: string; bikeMaker: string; bikeModel: string; bikeColour: string; bikeSerial: string };
+
+const LIST_COLUMNS = {
+  ...getTableColumns(jobs),
+  ownerName: customers.name,
+  bikeMaker: bikes.maker,
+  bikeModel: bikes.model,
+  bikeColour: bikes.colour,
+  bikeSerial: bikes.serialNumber,
+};
 
 const SORT_COLUMN = { promisedOn: jobs.promisedOn, createdAt: jobs.createdAt, number: jobs.number, status: jobs.status } as const;
 
 export interface JobSearch {
   query: JobListQuery;
   today: string;
-  /** Owners and bikes whose names/specs matched the free text (resolved by their features). */
-  customerIds: number[];
-  bikeIds: number[];
 }
 
 /** Jobs, their status history and final checks; every query scoped by shop. */
@@ -32,12 +43,13 @@ export class JobsRepository {
     return this.db.transaction(() => fn());
   }
 
-  private filters(shopId: number, s: JobSearch): SQL | undefined {
+  /**
+   * Status filters are written as IN lists (never NOT IN) so the (shop, status, promised)
+   * index serves them; free text goes through the job_search FTS5 index.
+   */
+  private filters(shopId: number, s: JobSearch, text: string | null): SQL | undefined {
     const { query: f, today } = s;
-    const text = f.q
-      ? or(like(jobs.number, `%${f.q}%`), s.customerIds.length ? inArray(jobs.customerId, s.customerIds) : undefined, s.bikeIds.length ? inArray(jobs.bikeId, s.bikeIds) : undefined)
-      : undefined;
-    const overdue = and(lt(jobs.promisedOn, today), notInArray(jobs.status, DONE_STATUSES));
+    const overdue = and(lt(jobs.promisedOn, today), inArray(jobs.status, NOT_DONE));
     const notOverdue = or(gte(jobs.promisedOn, today), inArray(jobs.status, DONE_STATUSES), isNull(jobs.promisedOn));
     return and(
       eq(jobs.shopId, shopId),
@@ -46,17 +58,22 @@ export class JobsRepository {
       f.promisedAfter ? gte(jobs.promisedOn, f.promisedAfter) : undefined,
       f.promisedBefore ? lte(jobs.promisedOn, f.promisedBefore) : undefined,
       f.overdue === undefined ? undefined : f.overdue ? overdue : notOverdue,
-      f.open === undefined ? undefined : f.open ? notInArray(jobs.status, [...TERMINAL_STATUSES]) : inArray(jobs.status, [...TERMINAL_STATUSES]),
-      text,
+      f.open === undefined ? undefined : inArray(jobs.status, f.open ? OPEN : [...TERMINAL_STATUSES]),
+      text === null ? undefined : sql`${jobs.id} IN (SELECT rowid FROM job_search WHERE job_search MATCH ${text})`,
     );
   }
 
-  page(shopId: number, s: JobSearch): { rows: JobRow[]; total: number } {
-    const where = this.filters(shopId, s);
+  /** One page of the jobs list with owner and bike joined in, and the matching total. */
+  page(shopId: number, s: JobSearch): { rows: JobListRow[]; total: number } {
+    const text = s.query.q ? ftsPrefixQuery(s.query.q) : null;
+    if (s.query.q && text === null) return { rows: [], total: 0 };
+    const where = this.filters(shopId, s, text);
     const total = this.db.select({ n: count() }).from(jobs).where(where).get()?.n ?? 0;
     const rows = this.db
-      .select()
+      .select(LIST_COLUMNS)
       .from(jobs)
+      .innerJoin(customers, eq(customers.id, jobs.customerId))
+      .innerJoin(bikes, eq(bikes.id, jobs.bikeId))
       .where(where)
       .orderBy((s.query.order === 'desc' ? desc : asc)(SORT_COLUMN[s.query.sort]), desc(jobs.id))
       .limit(s.query.pageSize)

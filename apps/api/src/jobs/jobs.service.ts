@@ -23,7 +23,7 @@ import { CLOCK, type Clock } from '../infra/clock';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import { type JobRow, JobsRepository } from './jobs.repository';
-import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, type SummaryContext } from './jobs.view';
+import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
 
 /** What other features get from getOwned: enough to scope and label their own rows. */
 export interface JobRef {
@@ -87,15 +87,10 @@ export class JobsService {
   }
 
   list(actor: AuthUser, query: JobListQuery): JobPage {
-    const search = {
-      query,
-      today: this.today(),
-      customerIds: query.q ? this.customers.matchingIds(actor, query.q) : [],
-      bikeIds: query.q ? this.bikes.matchingIds(actor, query.q) : [],
-    };
-    const { rows, total } = this.repo.page(actor.shopId, search);
-    const ctx = this.context(actor, rows);
-    return { items: rows.map((r) => toJobDto(r, ctx)), total, page: query.page, pageSize: query.pageSize };
+    const today = this.today();
+    const { rows, total } = this.repo.page(actor.shopId, { query, today });
+    const staff = new Map(this.users.list(actor).map((u) => [u.id, u.name]));
+    return { items: rows.map((r) => toJobListDto(r, staff, today)), total, page: query.page, pageSize: query.pageSize };
   }
 
   /** Every visit of one bike, oldest first. */

@@ -1,6 +1,6 @@
 import type { BikeListItem, CustomerDto, FinalCheckDto, JobDetail, JobDto } from '@benchproof/contracts';
 import { allowedTransitions, JOB_STATUS_LABELS, JOB_STATUSES, nextAction, type JobStatus } from '@benchproof/domain';
-import { DONE_STATUSES, type FinalCheckRow, type JobRow } from './jobs.repository';
+import { DONE_STATUSES, type FinalCheckRow, type JobListRow, type JobRow } from './jobs.repository';
 
 /** What a job DTO needs besides the job row: owners, bikes and staff names looked up in batches. */
 export interface SummaryContext {
@@ -28,19 +28,34 @@ export const isOverdue = (job: Pick<JobRow, 'promisedOn' | 'status'>, today: str
 
 const person = (id: number | null, staff: Map<number, string>) => (id ? { id, name: staff.get(id) ?? '' } : null);
 
-export function toJobDto(job: JobRow, ctx: SummaryContext): JobDto {
-  const bike = ctx.bikes.get(job.bikeId);
+/** A list row from the joined read model (owner and bike names come with the row). */
+export function toJobListDto(row: JobListRow, staff: Map<number, string>, today: string): JobDto {
+  return {
+    ...baseDto(row, staff, today),
+    customer: { id: row.customerId, name: row.ownerName },
+    bike: { id: row.bikeId, maker: row.bikeMaker, model: row.bikeModel, colour: row.bikeColour || null, serialNumber: row.bikeSerial || null },
+  };
+}
+
+function baseDto(job: JobRow, staff: Map<number, string>, today: string): Omit<JobDto, 'customer' | 'bike'> {
   return {
     id: job.id,
     number: job.number,
     status: job.status,
-    customer: { id: job.customerId, name: ctx.owners.get(job.customerId)?.name ?? '' },
-    bike: { id: job.bikeId, maker: bike?.maker ?? '', model: bike?.model ?? '', colour: bike?.colour ?? null, serialNumber: bike?.serialNumber ?? null },
-    mechanic: person(job.mechanicId, ctx.staff),
+    mechanic: person(job.mechanicId, staff),
     promisedOn: job.promisedOn ?? '',
     reportedSymptoms: job.reportedSymptoms,
     createdAt: job.createdAt.toISOString(),
-    overdue: isOverdue(job, ctx.today),
+    overdue: isOverdue(job, today),
+  };
+}
+
+export function toJobDto(job: JobRow, ctx: SummaryContext): JobDto {
+  const bike = ctx.bikes.get(job.bikeId);
+  return {
+    ...baseDto(job, ctx.staff, ctx.today),
+    customer: { id: job.customerId, name: ctx.owners.get(job.customerId)?.name ?? '' },
+    bike: { id: job.bikeId, maker: bike?.maker ?? '', model: bike?.model ?? '', colour: bike?.colour ?? null, serialNumber: bike?.serialNumber ?? null },
   };
 }
 

@@ -36,7 +36,8 @@ export const jobs = sqliteTable(
   },
   (t) => [
     uniqueIndex('jobs_shop_number_unique').on(t.shopId, t.number),
-    index('jobs_shop_status_idx').on(t.shopId, t.status),
+    // The jobs list: open statuses of one shop sorted by promised day.
+    index('jobs_shop_status_promised_idx').on(t.shopId, t.status, t.promisedOn, t.id),
     index('jobs_shop_mechanic_idx').on(t.shopId, t.mechanicId),
     index('jobs_shop_promised_idx').on(t.shopId, t.promisedOn),
     index('jobs_shop_bike_idx').on(t.shopId, t.bikeId),
