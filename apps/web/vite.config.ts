@@ -1,8 +1,10 @@
 import react from '@vitejs/plugin-react';
+import { compression, defineAlgorithm } from 'vite-plugin-compression2';
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
-  plugins: [react()],
+  // Precompressed copies next to each asset; the API serves them by Accept-Encoding.
+  plugins: [react(), compression({ algorithms: [defineAlgorithm('brotliCompress'), defineAlgorithm('gzip')], threshold: 1024 })],
   build: { outDir: '../../dist/apps/web', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
   server: { proxy: { '/api': 'http://localhost:3000' } },
   test: {

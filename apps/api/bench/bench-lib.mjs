@@ -90,5 +90,28 @@ export function startBare(dir, script) {
 }
 
 export function startApi(entry, env) {
-  return spawn(process.execPath, [entry], { env: { ...process.env, ...env }, stdio: ['ignore', 'ignore', 'inherit'] });
+  return spawn(process.execPath, [entry], { env: { MALLOC_ARENA_MAX: '2', ...process.env, ...env }, stdio: ['ignore', 'ignore', 'inherit'] });
+}
+
+export const ENTRY_REL = 'dist/apps/api/apps/api/src/main.js';
+
+/** The built API on a free port over a fresh database in `dir` (demo seed applied at boot). */
+export async function startDemoApi(root, dir, env = {}) {
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const child = startApi(`${root}/${ENTRY_REL}`, {
+    PORT: String(port), DATABASE_PATH: `${dir}/bench.sqlite`, UPLOADS_DIR: `${dir}/uploads`, WEB_DIST: `${dir}/no-web`,
+    MAIL_CATCHER: 'false', LOG_LEVEL: 'warn', LOGIN_THROTTLE_LIMIT: '1000', ...env,
+  });
+  await waitForHealth(base, child);
+  return { base, child, stop: () => new Promise((ok) => (child.exitCode !== null ? ok() : (child.once('exit', ok), child.kill()))) };
+}
+
+/** Signs in a demo user; returns the session cookie header and the CSRF token. */
+export async function signIn(base, email = 'desk@lantern-spoke.test') {
+  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: 'bench-demo-2026' }) });
+  if (!res.ok) throw new Error(`login ${res.status}`);
+  const cookie = res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  const { csrfToken } = await res.json();
+  return { cookie, csrf: csrfToken };
 }

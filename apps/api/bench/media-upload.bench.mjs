@@ -8,6 +8,7 @@ import { dirname, join, resolve } from 'node:path';
 import { pipeline } from 'node:stream/promises';
 import { fileURLToPath } from 'node:url';
 import { createRequire } from 'node:module';
+import { atLeast, emitRow } from './table.mjs';
 import { freePort, rssOf, sampleRss, startApi, startBare, waitForHealth, writeTestVideo } from './bench-lib.mjs';
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -92,6 +93,8 @@ async function main() {
     const rows = [bare, api].map((r) => ({ run: r.name, 'MB/s': (SIZE / MB / r.secs).toFixed(1), seconds: r.secs.toFixed(2), 'peak RSS growth MB': (r.growth / MB).toFixed(1) }));
     console.table(rows);
     console.log(`throughput ratio (tus / bare): ${(bare.secs / api.secs).toFixed(2)}   RSS growth ratio: ${(api.growth / Math.max(bare.growth, 1)).toFixed(2)}`);
+    const mbps = (r) => SIZE / MB / r.secs;
+    emitRow(atLeast(`${(SIZE / MB).toFixed(0)} MB upload (tus) vs bare stream to disk`, mbps(bare), mbps(api), 'MB/s', 0.5, `, RSS +${(api.growth / MB).toFixed(0)} MB`));
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -1,11 +1,30 @@
-// `npm run bench`: every API benchmark, one after another (needs `npm run build` first).
-import { spawnSync } from 'node:child_process';
+// `npm run bench`: every benchmark (needs `npm run build` first), then one table of
+// benchmark, baseline (measured in the same run), product, ratio, target and whether it is met.
+import { spawn } from 'node:child_process';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { printTable } from './table.mjs';
 
 const here = dirname(fileURLToPath(import.meta.url));
-for (const bench of ['media-upload.bench.mjs']) {
+const BENCHES = ['jobs-list.bench.mjs', 'photo.bench.mjs', 'media-serve.bench.mjs', 'web-load.bench.mjs', 'media-upload.bench.mjs'];
+const only = process.argv.slice(2);
+const rows = [];
+
+for (const bench of BENCHES.filter((b) => only.length === 0 || only.some((o) => b.includes(o)))) {
   console.log(`\n▶ ${bench}`);
-  const r = spawnSync(process.execPath, [join(here, bench)], { stdio: 'inherit' });
-  if (r.status !== 0) process.exit(r.status ?? 1);
+  const child = spawn(process.execPath, [join(here, bench)], { stdio: ['ignore', 'pipe', 'inherit'] });
+  let rest = '';
+  child.stdout.on('data', (chunk) => {
+    const lines = (rest + chunk).split('\n');
+    rest = lines.pop();
+    for (const l of lines) {
+      if (l.startsWith('BENCH_ROW ')) rows.push(JSON.parse(l.slice(10)));
+      else console.log(l);
+    }
+  });
+  const code = await new Promise((ok) => child.on('exit', ok));
+  if (code !== 0) rows.push({ benchmark: bench, baseline: '—', product: `failed (exit ${code})`, ratio: '—', target: '—', met: false });
 }
+
+console.log('\n');
+printTable(rows);

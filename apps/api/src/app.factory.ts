@@ -2,7 +2,9 @@ import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
+import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import helmet from 'helmet';
@@ -19,6 +21,8 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   });
   app.set('trust proxy', 'loopback');
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
+  // JSON lists and the OpenAPI document; images and video are already compressed and are skipped.
+  app.use(compression({ threshold: 1024 }));
   app.use(cookieParser());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());
@@ -52,17 +56,36 @@ function setUpOpenApi(app: NestExpressApplication): void {
   SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs-json' });
 }
 
-/** The built web app on the same port; every non-API GET falls back to index.html. */
+/**
+ * The built web app on the same port. API calls never touch the disk here: the static
+ * middleware sits behind a path check. Hashed assets are served precompressed (brotli,
+ * else gzip, made at build time) and cached for good; index.html is revalidated.
+ */
 function serveWeb(app: NestExpressApplication, dist: string): void {
   const index = resolve(dist, 'index.html');
   if (!existsSync(index)) {
     new Logger('Web').warn(`No built web app at ${dist}; run npm run build`);
     return;
   }
-  app.useStaticAssets(dist, { index: false, maxAge: '1h' });
+  const assets = expressStaticGzip(dist, {
+    enableBrotli: true,
+    orderPreference: ['br', 'gzip'],
+    index: false,
+    serveStatic: {
+      index: false,
+      setHeaders: (res, path) => {
+        const hashed = path.includes('/assets/');
+        res.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'no-cache');
+      },
+    },
+  });
   app.use((req: Request, res: Response, next: NextFunction) => {
-    if (req.method !== 'GET' || req.path.startsWith('/api')) return next();
-    res.sendFile(index);
+    if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+    if (req.path === '/api' || req.path.startsWith('/api/')) return next();
+    assets(req, res, () => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(index);
+    });
   });
 }
 

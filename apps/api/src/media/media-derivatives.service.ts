@@ -47,9 +47,8 @@ export class MediaDerivativesService implements OnApplicationBootstrap, OnApplic
     if (!row || row.derivativeStatus !== 'pending' || !row.originalKey) return;
     try {
       const original = await buffer(this.storage.createReadStream(row.originalKey));
-      for (const variant of IMAGE_VARIANTS) {
-        await this.save(row, variant, await this.image.rendition(original, DERIVATIVE_SIZES[variant]));
-      }
+      const made = await this.image.renditions(original, IMAGE_VARIANTS.map((v) => DERIVATIVE_SIZES[v]));
+      for (const [i, variant] of IMAGE_VARIANTS.entries()) await this.save(row, variant, made[i]);
       this.repo.update(assetId, { derivativeStatus: 'ready', derivativeError: null });
     } catch (err) {
       this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });

@@ -15,9 +15,13 @@ const SQLITE = Symbol('SQLITE');
   exports: [DB],
 })
 export class DbModule implements OnApplicationShutdown {
+  /** Re-gathers planner statistics as tables grow (SQLite: run PRAGMA optimize every few hours). */
+  private readonly optimizer = setInterval(() => this.opened.sqlite.pragma('optimize'), 3 * 3600_000).unref();
+
   constructor(@Inject(SQLITE) private readonly opened: { sqlite: Database.Database }) {}
 
   onApplicationShutdown(): void {
+    clearInterval(this.optimizer);
     this.opened.sqlite.close();
   }
 }

@@ -30,7 +30,11 @@ export interface ExifToWrite {
  * writer below does, to make test and demo inputs).
  */
 export class ImageAdapter {
-  constructor(private readonly maxPixels: number) {}
+  constructor(private readonly maxPixels: number) {
+    // Every photo is decoded once and never again, so libvips' operation cache only holds
+    // memory after a burst (sharp's docs: disable it when inputs do not repeat).
+    sharp.cache(false);
+  }
 
   private open(input: string | Buffer): Sharp {
     return sharp(input, { limitInputPixels: this.maxPixels, failOn: 'truncated' });
@@ -79,14 +83,35 @@ export class ImageAdapter {
    * and carries none), sRGB, fit inside the long edge, baseline JPEG, no metadata.
    */
   async rendition(input: string | Buffer, longEdge: number): Promise<Rendition> {
+    const [one] = await this.renditions(input, [longEdge]);
+    return one;
+  }
+
+  /**
+   * Several sizes from ONE decode: the photo is decoded, turned upright, converted to
+   * sRGB and scaled to the largest size once; each size is then resized from those
+   * pixels in memory. Plain libjpeg at quality 82 with optimised Huffman tables:
+   * mozjpeg saved about 8 % of bytes at 3–4× the encode time (bench, photo row).
+   */
+  async renditions(input: string | Buffer, longEdges: readonly number[]): Promise<Rendition[]> {
+    const largest = Math.max(...longEdges);
     const { data, info } = await this.open(input)
       .rotate()
       .toColourspace('srgb')
-      .resize(longEdge, longEdge, { fit: 'inside', withoutEnlargement: true })
+      .resize(largest, largest, { fit: 'inside', withoutEnlargement: true })
       .flatten({ background: '#ffffff' })
-      .jpeg({ quality: 82, mozjpeg: true })
+      .raw()
       .toBuffer({ resolveWithObject: true });
-    return { data, width: info.width, height: info.height };
+    const raw = { raw: { width: info.width, height: info.height, channels: info.channels } } as const;
+    return Promise.all(
+      longEdges.map(async (edge) => {
+        const out = await sharp(data, raw)
+          .resize(edge, edge, { fit: 'inside', withoutEnlargement: true })
+          .jpeg({ quality: 82, optimiseCoding: true })
+          .toBuffer({ resolveWithObject: true });
+        return { data: out.data, width: out.info.width, height: out.info.height };
+      }),
+    );
   }
 
   /**

@@ -1,0 +1,62 @@
+// Jobs list at the size of three years of one busy shop: 10,000 jobs, 50 connections.
+// Baseline in the same run: a bare Express route answering the same captured JSON.
+import autocannon from 'autocannon';
+import Database from 'better-sqlite3';
+import express from 'express';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { tmpdir } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { signIn, startDemoApi } from './bench-lib.mjs';
+import { atLeast, atMost, emitRow, medianOf3 } from './table.mjs';
+
+const root = resolve(dirname(fileURLToPath(import.meta.url)), '../../..');
+const require = createRequire(join(root, 'apps/api/package.json'));
+const { seedBulkRecords } = require(join(root, 'dist/apps/api/apps/api/src/seed/bulk-records.js'));
+const JOBS = Number(process.env.BENCH_JOBS ?? 10_000);
+
+const load = (url, headers) =>
+  new Promise((ok, fail) => autocannon({ url, connections: 50, duration: 5, headers }, (err, r) => (err ? fail(err) : ok({ rps: r.requests.average, p99: r.latency.p99, errors: r.errors + r.non2xx }))));
+
+function bareServer(payload) {
+  const app = express();
+  app.get('/', (_req, res) => res.json(payload));
+  return new Promise((ok) => {
+    const s = app.listen(0, '127.0.0.1', () => ok({ url: `http://127.0.0.1:${s.address().port}/`, close: () => s.close() }));
+  });
+}
+
+async function measure(api, cookie, path, label) {
+  const url = `${api.base}${path}`;
+  const payload = await (await fetch(url, { headers: { cookie } })).json();
+  const bare = await bareServer(payload);
+  const b = await medianOf3(() => load(bare.url, {}), 'rps');
+  bare.close();
+  const p = await medianOf3(() => load(url, { cookie }), 'rps');
+  emitRow(atLeast(`${label}, 50 conns, ${JOBS} jobs: req/s`, b.rps, p.rps, 'req/s', 0.5, p.errors ? ` (${p.errors} errors)` : ''));
+  emitRow({ ...atMost(`${label}: p99 latency`, b.p99, p.p99, 'ms', Infinity), target: '≤ 50 ms', met: p.p99 <= 50 });
+}
+
+async function main() {
+  const dir = mkdtempSync(join(tmpdir(), 'benchproof-jobs-'));
+  let api = await startDemoApi(root, dir);
+  try {
+    await api.stop();
+    const sqlite = new Database(join(dir, 'bench.sqlite'));
+    seedBulkRecords(sqlite, 1, { customers: Math.ceil(JOBS / 3), jobs: JOBS });
+    sqlite.close();
+    api = await startDemoApi(root, dir);
+    const { cookie } = await signIn(api.base);
+    await measure(api, cookie, '/api/jobs?open=true', 'jobs list, default page');
+    await measure(api, cookie, '/api/jobs?q=ada', 'jobs search "ada"');
+  } finally {
+    await api.stop();
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exitCode = 1;
+});
