@@ -4,7 +4,6 @@ import { AuditModule } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { FindingsModule } from '../findings';
 import { ImageModule } from '../infra/image';
-import { TASK_QUEUE, TaskQueue } from '../infra/queue';
 import { FileSniffer, SNIFFER } from '../infra/sniff';
 import { StorageModule, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { VIDEO_PROBE, VideoProbe } from '../infra/video';
@@ -43,7 +42,6 @@ import { MAX_FILES_PER_BATCH } from './upload-form';
     MediaDerivativesService,
     MediaFilesService,
     MediaTusService,
-    { provide: TASK_QUEUE, useFactory: () => new TaskQueue(2) },
     { provide: SNIFFER, useClass: FileSniffer },
     { provide: VIDEO_PROBE, useClass: VideoProbe },
   ],
