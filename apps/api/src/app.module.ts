@@ -1,4 +1,5 @@
 import { type DynamicModule, Module } from '@nestjs/common';
+import { EventEmitterModule } from '@nestjs/event-emitter';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
@@ -31,6 +32,7 @@ export class AppModule {
         ConfigModule.forRoot(cfg),
         ClockModule,
         TasksModule,
+        EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,
         ThrottlerModule.forRoot([{ ttl: 60_000, limit: cfg.LOGIN_THROTTLE_LIMIT }]),

@@ -4,6 +4,7 @@ import { TERMINAL_STATUSES, type JobStatus } from '@benchproof/domain';
 import { and, asc, count, desc, eq, gte, inArray, isNull, like, lt, lte, notInArray, or, type SQL } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { finalChecks, jobStatusEvents, jobs } from '../db/schema';
+import type { DbTx } from '../infra/tasks';
 
 export type JobRow = typeof jobs.$inferSelect;
 export type NewJobRow = typeof jobs.$inferInsert;
@@ -28,8 +29,9 @@ export interface JobSearch {
 export class JobsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
+  /** `tx` is for domain events and task enqueues that must commit with the change. */
+  transaction<T>(fn: (tx: DbTx) => T): T {
+    return this.db.transaction((tx) => fn(tx));
   }
 
   private filters(shopId: number, s: JobSearch): SQL | undefined {
