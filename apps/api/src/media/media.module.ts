@@ -18,6 +18,7 @@ import { MediaUploadService } from './media-upload.service';
 import { MediaController } from './media.controller';
 import { MediaRepository } from './media.repository';
 import { MediaService } from './media.service';
+import { MediaSweepService } from './media-sweep.service';
 import { MAX_FILES_PER_BATCH } from './upload-form';
 
 @Module({
@@ -42,6 +43,7 @@ import { MAX_FILES_PER_BATCH } from './upload-form';
     MediaDerivativesService,
     MediaFilesService,
     MediaTusService,
+    MediaSweepService,
     { provide: SNIFFER, useClass: FileSniffer },
     { provide: VIDEO_PROBE, useClass: VideoProbe },
   ],
