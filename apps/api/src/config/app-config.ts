@@ -28,7 +28,6 @@ const EnvSchema = z.object({
   SEED_DEMO: bool.default(true),
   COOKIE_SECURE: bool.default(false),
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
-  PUBLIC_URL: z.string().url().optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().default(1025),
   MAIL_FROM: z.string().default('BenchProof <reports@benchproof.localhost>'),

@@ -1,6 +1,6 @@
 import express from 'express';
 import { Writable } from 'node:stream';
-import pinoHttp from 'pino-http';
+import pinoHttp, { type Options as PinoHttpOptions } from 'pino-http';
 import request from 'supertest';
 import { loadConfig } from '../../config';
 import { redactUrl, requestLogging } from './request-logging';
@@ -13,7 +13,7 @@ async function logOf(send: (agent: request.Agent) => Promise<unknown>): Promise<
   const sink = new Writable({ write: (chunk, _enc, done) => void (lines.push(String(chunk)), done()) });
   const cfg = loadConfig({ DATABASE_PATH: ':memory:', LOG_LEVEL: 'info' });
   const app = express();
-  app.use(pinoHttp(requestLogging(cfg).pinoHttp as pinoHttp.Options, sink));
+  app.use(pinoHttp(requestLogging(cfg).pinoHttp as PinoHttpOptions, sink));
   app.get('/api/owner/:token', (req, res) => {
     (req as unknown as { user: object }).user = { id: 7, shopId: 3 };
     res.cookie('bp_session', 'jwt-value').status(200).json({ ok: true });
