@@ -1,28 +1,25 @@
 import { areaCautions, measurementCautions } from './cautions';
 import { BRAKE_CAUTION, CARBON_CAUTION, STEERING_CAUTION } from './safety';
-import { create, all, type Fraction } from 'mathjs';
+import { fraction, type Fraction } from 'mathjs';
 import { chainDueEstimate, type ChainTrendPoint, trendValue } from './wear-trend';
 
-const math = create(all, { number: 'Fraction' });
-
-/** Independent check: the same least-squares line in exact fractions (mathjs), due day = ceil(last day + gap / slope). */
+/** Independent check: the same least-squares line in exact fractions (mathjs Fraction), due day = last day + ceil(gap / slope). */
 function exactDueDay(points: ChainTrendPoint[], limitPct: number): number | null {
-  const f = (x: number) => math.fraction(String(x)) as Fraction;
+  const f = (x: number): Fraction => fraction(String(x));
   const n = f(points.length);
-  const mx = math.divide(points.reduce((s, p) => math.add(s, f(p.day)) as Fraction, f(0)), n) as Fraction;
-  const my = math.divide(points.reduce((s, p) => math.add(s, f(p.pct)) as Fraction, f(0)), n) as Fraction;
+  const mx = points.reduce((s, p) => s.add(f(p.day)), f(0)).div(n);
+  const my = points.reduce((s, p) => s.add(f(p.pct)), f(0)).div(n);
   let sxy = f(0);
   let sxx = f(0);
   for (const p of points) {
-    const dx = math.subtract(f(p.day), mx) as Fraction;
-    sxy = math.add(sxy, math.multiply(dx, math.subtract(f(p.pct), my))) as Fraction;
-    sxx = math.add(sxx, math.multiply(dx, dx)) as Fraction;
+    const dx = f(p.day).sub(mx);
+    sxy = sxy.add(dx.mul(f(p.pct).sub(my)));
+    sxx = sxx.add(dx.mul(dx));
   }
-  const slope = math.divide(sxy, sxx) as Fraction;
-  if (!math.larger(slope, 0)) return null;
+  const slope = sxy.div(sxx);
+  if (slope.compare(0) <= 0) return null;
   const last = points[points.length - 1];
-  const days = math.divide(math.subtract(f(limitPct), f(last.pct)), slope) as Fraction;
-  return last.day + Number(math.ceil(days));
+  return last.day + Number(f(limitPct).sub(f(last.pct)).div(slope).ceil().valueOf());
 }
 
 describe('trendValue', () => {

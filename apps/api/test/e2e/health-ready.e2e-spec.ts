@@ -1,4 +1,4 @@
-import { SqliteTaskRunner, TASK_RUNNER } from '../../src/infra/tasks';
+import { type SqliteTaskRunner, TASK_RUNNER } from '../../src/infra/tasks';
 import { startTestApp, type TestApp } from '../test-app';
 
 describe('readiness (GET /api/health/ready)', () => {

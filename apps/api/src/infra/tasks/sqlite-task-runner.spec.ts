@@ -7,6 +7,11 @@ import type { TaskContext } from './tasks.port';
 
 const OPTIONS: SqliteRunnerOptions = { pollMs: 1000, leaseMs: 30_000, backoff: { baseMs: 1000, maxMs: 60_000 }, maxAttempts: 5 };
 
+const record = <T>(into: T[], item: T): Promise<void> => {
+  into.push(item);
+  return Promise.resolve();
+};
+
 function setUp(opts: Partial<SqliteRunnerOptions> = {}) {
   const { db, sqlite } = openDb(':memory:');
   const runner = new SqliteTaskRunner(new TaskStore(db), systemClock, { ...OPTIONS, ...opts });
@@ -18,7 +23,7 @@ describe('SqliteTaskRunner', () => {
   beforeAll(() => Logger.overrideLogger(false));
   it('never runs a task enqueued in a transaction that rolled back', async () => {
     const { db, runner, calls } = setUp();
-    runner.register('demo.work', async (t) => void calls.push(t), { concurrency: 1 });
+    runner.register('demo.work', (t) => record(calls, t), { concurrency: 1 });
     runner.start();
     expect(() =>
       db.transaction((tx) => {
@@ -36,7 +41,7 @@ describe('SqliteTaskRunner', () => {
 
   it('runs the same (kind, key) once however often it is enqueued', async () => {
     const { runner, calls } = setUp();
-    runner.register('demo.work', async (t) => void calls.push(t), { concurrency: 2 });
+    runner.register('demo.work', (t) => record(calls, t), { concurrency: 2 });
     runner.start();
     runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 1 } });
     runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 2 } });
@@ -68,9 +73,7 @@ describe('SqliteTaskRunner', () => {
   it('ends failed with the last error once maxAttempts is used up, and a new enqueue queues it again', async () => {
     const { runner } = setUp({ backoff: { baseMs: 10, maxMs: 10 } });
     let fail = true;
-    runner.register('demo.flaky', async () => {
-      if (fail) throw new Error('disk full');
-    }, { concurrency: 1, maxAttempts: 2 });
+    runner.register('demo.flaky', () => (fail ? Promise.reject(new Error('disk full')) : Promise.resolve()), { concurrency: 1, maxAttempts: 2 });
     runner.start();
     runner.enqueue({ kind: 'demo.flaky', key: 'x', shopId: null });
     await runner.settled();
@@ -89,9 +92,9 @@ describe('SqliteTaskRunner', () => {
     it('retries a handler that fails twice, then ends done after three attempts with growing delays', async () => {
       const { runner } = setUp();
       const at: number[] = [];
-      runner.register('demo.retry', async (t) => {
+      runner.register('demo.retry', (t) => {
         at.push(Date.now());
-        if (t.attempt < 3) throw new Error(`try ${t.attempt} failed`);
+        return t.attempt < 3 ? Promise.reject(new Error(`try ${t.attempt} failed`)) : Promise.resolve();
       }, { concurrency: 1 });
       runner.start();
       runner.enqueue({ kind: 'demo.retry', key: 'job-1', shopId: null });
@@ -116,7 +119,7 @@ describe('SqliteTaskRunner', () => {
       dead.insert({ kind: 'demo.work', key: 'orphan', shopId: null }, new Date());
       expect(dead.claim('demo.work', 1, 'killed-process', new Date(), 5000)).toHaveLength(1);
       const keys: string[] = [];
-      runner.register('demo.work', async (t) => void keys.push(`${t.key}#${t.attempt}`), { concurrency: 1 });
+      runner.register('demo.work', (t) => record(keys, `${t.key}#${t.attempt}`), { concurrency: 1 });
       runner.start();
       await vi.advanceTimersByTimeAsync(4000);
       expect(keys).toEqual([]);

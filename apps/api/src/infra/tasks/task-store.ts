@@ -97,7 +97,8 @@ export class TaskStore {
       .from(tasks)
       .where(and(inArray(tasks.kind, kinds), eq(tasks.status, 'queued')))
       .get();
-    return row?.at == null ? null : new Date(row.at);
+    const at = row?.at;
+    return at === null || at === undefined ? null : new Date(at);
   }
 
   counts(): Record<TaskRow['status'], number> {
