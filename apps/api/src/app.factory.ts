@@ -8,6 +8,7 @@ import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import helmet from 'helmet';
+import { Logger as PinoLogger } from 'nestjs-pino';
 import type { NextFunction, Request, Response } from 'express';
 import { AppModule } from './app.module';
 import type { AppConfig } from './config';
@@ -18,7 +19,10 @@ import { SeedService } from './seed';
 export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {}): Promise<NestExpressApplication> {
   const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
     logger: opts.logger === false ? false : ['log', 'warn', 'error'],
+    bufferLogs: opts.logger !== false,
   });
+  // Nest's own log lines go through pino too, as JSON at LOG_LEVEL.
+  if (opts.logger !== false) app.useLogger(app.get(PinoLogger));
   app.set('trust proxy', 'loopback');
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
   // JSON lists and the OpenAPI document; images and video are already compressed and are skipped.

@@ -1,11 +1,14 @@
 import { type DynamicModule, Module } from '@nestjs/common';
+import { EventEmitterModule } from '@nestjs/event-emitter';
 import { ThrottlerModule } from '@nestjs/throttler';
+import { LoggerModule } from 'nestjs-pino';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
 import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
 import { AuthCoreModule } from './core/auth';
 import { DbModule } from './core/db';
+import { requestLogging } from './core/logging';
 import { CustomersModule } from './customers';
 import { FindingsModule } from './findings';
 import { HealthController } from './health/health.controller';
@@ -29,8 +32,10 @@ export class AppModule {
       module: AppModule,
       imports: [
         ConfigModule.forRoot(cfg),
+        LoggerModule.forRoot(requestLogging(cfg)),
         ClockModule,
         TasksModule,
+        EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,
         ThrottlerModule.forRoot([{ ttl: 60_000, limit: cfg.LOGIN_THROTTLE_LIMIT }]),

@@ -32,6 +32,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     WEB_DIST: join(dir, 'no-web'),
     LOGIN_THROTTLE_LIMIT: '1000',
     MAIL_CATCHER: 'false',
+    LOG_LEVEL: 'silent',
     ...env,
   });
   const app = await createApp(cfg, { logger: false });

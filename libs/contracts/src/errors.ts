@@ -25,6 +25,7 @@ export const ERROR_CODES = {
   IMAGE_TOO_LARGE: { status: 422, message: 'The image has too many pixels to process.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
+  NOT_READY: { status: 503, message: 'The server is starting or cannot reach its database or task runner.' },
 } as const satisfies Record<string, { status: number; message: string }>;
 
 export type ErrorCode = keyof typeof ERROR_CODES;

@@ -88,9 +88,24 @@ describe('thicknessVerdict (below the maker minimum: do not ride, CHECKS.md D)',
     expect(r.condition).toBe(condition);
   });
 
+  // CHECKS.md D (brakes): "Do not ride if pads are worn to the maker's wear line or rotors are
+  // below the minimum thickness marked on them." A pad AT its line is unsafe; a rotor at its minimum is worn.
+  it.each([
+    { part: 'pad', measured: 0.5, min: 0.5, condition: 'unsafe', text: 'worn to the wear line. Unsafe — do not ride; replace.' },
+    { part: 'pad', measured: 0.499_999_9, min: 0.5, condition: 'unsafe', text: 'worn to the wear line. Unsafe — do not ride; replace.' },
+    { part: 'pad', measured: 0.4, min: 0.5, condition: 'unsafe', text: 'below the minimum. Unsafe — do not ride; replace.' },
+    { part: 'pad', measured: 0.6, min: 0.5, condition: 'worn', text: 'at or near the minimum. Replace.' },
+    { part: 'rotor', measured: 1.5, min: 1.5, condition: 'worn', text: 'at or near the minimum. Replace.' },
+    { part: 'rotor', measured: 1.4, min: 1.5, condition: 'unsafe', text: 'below the minimum. Unsafe — do not ride; replace.' },
+  ] as const)('$part $measured mm against its line $min mm → $condition', ({ part, measured, min, condition, text }) => {
+    const r = thicknessVerdict(measured, min, { part });
+    expect(r.condition).toBe(condition);
+    expect(r.message.endsWith(text)).toBe(true);
+  });
+
   it('honours a custom margin and says do not ride below the minimum', () => {
     expect(thicknessVerdict(1.2, 1, { warnMarginMm: 0.1 }).verdict).toBe('ok');
-    expect(thicknessVerdict(0.8, 1).message).toBe("Pad 0.8 mm against the maker's minimum 1 mm: below the minimum. Do not ride; replace.");
+    expect(thicknessVerdict(0.8, 1).message).toBe("Pad 0.8 mm against the maker's minimum 1 mm: below the minimum. Unsafe — do not ride; replace.");
   });
 
   it('rejects a zero minimum and negative readings', () => {

@@ -86,10 +86,11 @@ export function tyreClearanceVerdict(
 
 /**
  * Pad or rotor thickness against the maker's minimum (pad wear line,
- * rotor "MIN TH" marking). Our rule: below the minimum is unsafe (do not
- * ride, CHECKS.md D); at the minimum or within `warnMarginMm` above it
- * (default 0.5 mm, common practice, no source) is worn — replace; above that
- * sound. The maker's minimum is entered per part, never assumed.
+ * rotor "MIN TH" marking). CHECKS.md D: "Do not ride if pads are worn to the
+ * maker's wear line or rotors are below the minimum thickness marked on them",
+ * so a pad at or under its line and a rotor under its minimum are unsafe; up to
+ * `warnMarginMm` above that (default 0.5 mm, common practice, no source) is
+ * worn — replace; above that sound. The maker's minimum is entered per part.
  */
 export function thicknessVerdict(
   measuredMm: number,
@@ -102,8 +103,12 @@ export function thicknessVerdict(
   requireInRange('warning margin', warnMarginMm, { min: 0, max: 10 });
   const value = roundTo(measuredMm, 6);
   const what = `${part === 'pad' ? 'Pad' : 'Rotor'} ${mm(value)} against the maker's minimum ${mm(minimumMm)}`;
+  if (part === 'pad' && value <= minimumMm) {
+    const where = value === minimumMm ? 'worn to the wear line' : 'below the minimum';
+    return { condition: 'unsafe', verdict: 'below_minimum', message: `${what}: ${where}. Unsafe — do not ride; replace.` };
+  }
   if (value < minimumMm) {
-    return { condition: 'unsafe', verdict: 'below_minimum', message: `${what}: below the minimum. Do not ride; replace.` };
+    return { condition: 'unsafe', verdict: 'below_minimum', message: `${what}: below the minimum. Unsafe — do not ride; replace.` };
   }
   if (value <= roundTo(minimumMm + warnMarginMm, 6)) {
     return { condition: 'worn', verdict: 'replace', message: `${what}: at or near the minimum. Replace.` };

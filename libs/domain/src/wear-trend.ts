@@ -88,8 +88,20 @@ export function chainDueEstimate(points: readonly ChainTrendPoint[], limitPct: n
   if (!last) return null;
   if (last.pct >= limitPct) return { dueDay: last.day, alreadyDue: true, pctPerDay: slope(seg) ?? 0, pointsUsed: seg.length };
   const rate = slope(seg);
-  if (rate === null || rate <= 0) return null;
-  return { dueDay: Math.ceil(last.day + (limitPct - last.pct) / rate), alreadyDue: false, pctPerDay: rate, pointsUsed: seg.length };
+  if (rate === null || !rising(rate, seg)) return null;
+  // Rounded before the ceiling: (0.5 − 0.3) / 0.001 is 200.00000000000006 in binary floating point, not 200.
+  const daysLeft = Math.ceil(roundTo((limitPct - last.pct) / rate, 6));
+  return { dueDay: last.day + daysLeft, alreadyDue: false, pctPerDay: rate, pointsUsed: seg.length };
+}
+
+/**
+ * A slope that adds less than a millionth of a percent over the whole series is floating-point
+ * noise of a flat series (three equal readings give ±1e-19 %/day, a due date tens of thousands of
+ * years out), not wear: flat and falling trends have no due date.
+ */
+function rising(rate: number, seg: readonly ChainTrendPoint[]): boolean {
+  const span = seg[seg.length - 1].day - seg[0].day;
+  return rate > 0 && roundTo(rate * span, 6) > 0;
 }
 
 function slope(seg: readonly ChainTrendPoint[]): number | null {

@@ -28,7 +28,6 @@ const EnvSchema = z.object({
   SEED_DEMO: bool.default(true),
   COOKIE_SECURE: bool.default(false),
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
-  PUBLIC_URL: z.string().url().optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().default(1025),
   MAIL_FROM: z.string().default('BenchProof <reports@benchproof.localhost>'),
@@ -36,6 +35,16 @@ const EnvSchema = z.object({
   MAX_PHOTO_BYTES: z.coerce.number().int().positive().default(40 * 1024 * 1024),
   MAX_VIDEO_BYTES: z.coerce.number().int().positive().default(4 * 1024 * 1024 * 1024),
   MAX_IMAGE_PIXELS: z.coerce.number().int().positive().default(100_000_000),
+  /** Background tasks (infra/tasks): only 'sqlite' is built; see DEVELOPERS.md for a BullMQ driver. */
+  TASKS_DRIVER: z.enum(['sqlite']).default('sqlite'),
+  TASK_POLL_MS: z.coerce.number().int().positive().default(1000),
+  TASK_LEASE_MS: z.coerce.number().int().min(300).default(60_000),
+  TASK_BACKOFF_MS: z.coerce.number().int().positive().default(2000),
+  /** Unfinished resumable uploads expire after this many hours (tus expiration extension). */
+  TUS_EXPIRE_HOURS: z.coerce.number().positive().default(24),
+  STORAGE_SWEEP_MINUTES: z.coerce.number().positive().default(60),
+  /** pino level; 'silent' turns request logs off (tests). */
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
 export type AppConfig = z.infer<typeof EnvSchema> & { jwtSecret: string };

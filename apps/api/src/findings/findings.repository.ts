@@ -2,6 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { decisions, findings, recommendations } from '../db/schema';
+import type { DbTx } from '../infra/tasks';
 
 export type FindingRow = typeof findings.$inferSelect;
 export type NewFindingRow = typeof findings.$inferInsert;
@@ -15,8 +16,9 @@ export type NewDecisionRow = typeof decisions.$inferInsert;
 export class FindingsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
+  /** `tx` is for domain events and task enqueues that must commit with the change. */
+  transaction<T>(fn: (tx: DbTx) => T): T {
+    return this.db.transaction((tx) => fn(tx));
   }
 
   list(shopId: number, jobId: number): FindingRow[] {

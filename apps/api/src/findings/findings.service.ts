@@ -10,9 +10,11 @@ import type {
   UpdateFindingRequest,
 } from '@benchproof/contracts';
 import { defaultUrgency, isTerminalStatus } from '@benchproof/domain';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
+import { publish, RecommendationDecidedEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { InspectionService } from '../inspection';
@@ -42,6 +44,7 @@ export class FindingsService {
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
     @Inject(CLOCK) private readonly clock: Clock,
+    private readonly emitter: EventEmitter2,
   ) {}
 
   private openJob(actor: Pick<AuthUser, 'shopId'>, jobId: number): JobRef {
@@ -141,9 +144,10 @@ export class FindingsService {
   decide(scope: { shopId: number }, jobId: number, recommendationId: number, d: DecisionInput): DecisionDto {
     const rec: RecommendationRow | undefined = this.repo.recommendation(scope.shopId, jobId, recommendationId);
     if (!rec) throw notFound('Recommendation');
-    const row = this.repo.transaction(() => {
+    const row = this.repo.transaction((tx) => {
       const inserted = this.repo.insertDecision({ ...d, shopId: scope.shopId, jobId, recommendationId, recordedAt: this.clock.now() });
       this.repo.updateRecommendation(scope.shopId, rec.id, { decisionStatus: d.status });
+      publish(this.emitter, new RecommendationDecidedEvent(tx, scope.shopId, jobId, rec.id, d.status, d.channel));
       return inserted;
     });
     const who = d.recordedBy === null ? { shopId: scope.shopId, id: null } : { shopId: scope.shopId, id: d.recordedBy };

@@ -1,4 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import type {
   CheckpointDto,
   InspectionDto,
@@ -20,6 +21,7 @@ import {
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
+import { DOMAIN_EVENTS, type JobBookedInEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { JobsService, type JobRef } from '../jobs';
@@ -56,9 +58,11 @@ export class InspectionService {
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
     @Inject(CLOCK) private readonly clock: Clock,
+    events: EventEmitter2,
   ) {
-    // Registered at construction, not in onModuleInit: the demo seed books jobs in before app.init().
-    this.jobs.onBookedIn((actor, job) => this.layOutChecklist(actor.shopId, job.id));
+    // A synchronous listener (not @OnEvent, which subscribes at bootstrap and swallows throws):
+    // the demo seed books jobs in before app.init(), and a failed layout must roll the booking back.
+    events.on(DOMAIN_EVENTS.jobBookedIn, (e: JobBookedInEvent) => this.layOutChecklist(e.shopId, e.jobId));
   }
 
   /** DEFAULT_CHECKPOINTS from libs/domain, so the mechanic's list is ready when the bike reaches the stand. */

@@ -4,6 +4,7 @@ import { JOB_STATUSES, TERMINAL_STATUSES, type JobStatus } from '@benchproof/dom
 import { and, asc, count, desc, eq, getTableColumns, gte, inArray, isNull, lt, lte, or, sql, type SQL } from 'drizzle-orm';
 import { DB, ftsPrefixQuery, type Db } from '../core/db';
 import { bikes, customers, finalChecks, jobStatusEvents, jobs } from '../db/schema';
+import type { DbTx } from '../infra/tasks';
 
 export type JobRow = typeof jobs.$inferSelect;
 export type NewJobRow = typeof jobs.$inferInsert;
@@ -39,8 +40,9 @@ export interface JobSearch {
 export class JobsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
+  /** `tx` is for domain events and task enqueues that must commit with the change. */
+  transaction<T>(fn: (tx: DbTx) => T): T {
+    return this.db.transaction((tx) => fn(tx));
   }
 
   /**

@@ -14,9 +14,11 @@ import type {
   UpdateJobRequest,
 } from '@benchproof/contracts';
 import { canTransition, finalCheckAllowed, formatJobNumber, allowedNextStatuses } from '@benchproof/domain';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
+import { JobBookedInEvent, JobMovedEvent, publish } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CustomersService } from '../customers';
 import { CLOCK, type Clock } from '../infra/clock';
@@ -36,17 +38,12 @@ export interface JobRef {
   mechanicId: number | null;
 }
 
-/** Runs inside the book-in transaction, e.g. to lay out the job's inspection checklist. */
-export type BookedInListener = (actor: AuthUser, job: JobRef, bike: BikeListItem) => void;
-
 type Actor = Pick<AuthUser, 'id' | 'shopId'>;
 
 const toRef = (j: JobRow): JobRef => ({ id: j.id, shopId: j.shopId, number: j.number, status: j.status, bikeId: j.bikeId, customerId: j.customerId, mechanicId: j.mechanicId });
 
 @Injectable()
 export class JobsService {
-  private readonly bookedInListeners: BookedInListener[] = [];
-
   constructor(
     private readonly repo: JobsRepository,
     private readonly customers: CustomersService,
@@ -55,12 +52,8 @@ export class JobsService {
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
     @Inject(CLOCK) private readonly clock: Clock,
+    private readonly emitter: EventEmitter2,
   ) {}
-
-  /** Lets a feature that depends on jobs add rows in the same transaction as a new job. */
-  onBookedIn(listener: BookedInListener): void {
-    this.bookedInListeners.push(listener);
-  }
 
   private today(): string {
     return this.clock.now().toISOString().slice(0, 10);
@@ -116,7 +109,7 @@ export class JobsService {
   /** Desk books a bike in: customer and bike found or created, number issued, checklist laid out — all or nothing. */
   bookIn(actor: AuthUser, input: BookInRequest): JobDetail {
     this.checkStaff(actor, input.mechanicId);
-    const job = this.repo.transaction(() => {
+    const job = this.repo.transaction((tx) => {
       const customer = this.resolveCustomer(actor, input);
       const bike = this.resolveBike(actor, customer, input);
       const now = this.clock.now();
@@ -136,7 +129,7 @@ export class JobsService {
         updatedAt: now,
       });
       this.repo.insertEvent({ shopId: actor.shopId, jobId: row.id, fromStatus: null, toStatus: 'booked_in', userId: actor.id, note: '', at: now });
-      for (const listener of this.bookedInListeners) listener(actor, toRef(row), bike);
+      publish(this.emitter, new JobBookedInEvent(tx, actor.shopId, row.id, actor.id));
       this.audit.record(actor, { action: 'job.booked_in', entityType: 'job', entityId: row.id, details: { number } });
       return row;
     });
@@ -167,7 +160,7 @@ export class JobsService {
 
   /** Moves the job along JOB_TRANSITIONS (libs/domain); anything else is ILLEGAL_TRANSITION. */
   transition(actor: AuthUser, id: number, input: TransitionRequest): JobDetail {
-    this.repo.transaction(() => {
+    this.repo.transaction((tx) => {
       const job = this.load(actor, id);
       if (!canTransition(job.status, input.to)) {
         throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to: input.to, allowed: allowedNextStatuses(job.status) });
@@ -177,6 +170,7 @@ export class JobsService {
       this.repo.update(actor.shopId, id, { status: input.to, [STATUS_TIME_FIELD[input.to]]: now, updatedAt: now });
       this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: input.to, userId: actor.id, note: input.note ?? '', at: now });
       this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details: { from: job.status, to: input.to } });
+      publish(this.emitter, new JobMovedEvent(tx, actor.shopId, id, job.status, input.to, actor.id));
     });
     return this.get(actor, id);
   }

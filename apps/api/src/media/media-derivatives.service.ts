@@ -1,57 +1,69 @@
-import { Inject, Injectable, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
+import { Inject, Injectable, type OnApplicationBootstrap, type OnModuleInit } from '@nestjs/common';
 import type { MediaVariant } from '@benchproof/contracts';
-import { randomUUID } from 'node:crypto';
 import { Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
 import { DERIVATIVE_SIZES, IMAGE, type ImageAdapter, type Rendition, type SizedVariant } from '../infra/image';
-import { TASK_QUEUE, type TaskQueue } from '../infra/queue';
 import { STORAGE, type Storage } from '../infra/storage';
+import { type DbTx, TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 
 const IMAGE_VARIANTS: SizedVariant[] = ['thumb', 'screen', 'print'];
 
+export const DERIVATIVES_TASK = 'media.derivatives';
+/** One image at a time: sharp/libvips already uses both cores of the target machine for one job. */
+const DERIVATIVES_CONCURRENCY = 1;
+const DERIVATIVES_MAX_ATTEMPTS = 3;
+
+/** One file per (asset, variant): a re-run after a crash overwrites instead of adding a file. */
+export const derivativeKey = (row: Pick<MediaAssetRow, 'id' | 'shopId'>, variant: MediaVariant) => `derivatives/${row.shopId}/${row.id}-${variant}.jpg`;
+
 /**
- * Makes the thumb/screen/print JPEGs of an image asset in the background and flips
- * its status pending → ready or failed. Keyed by asset id, so enqueueing twice is
- * harmless; assets left pending by a crash are picked up again at boot.
+ * Makes the thumb/screen/print JPEGs of an image asset as a durable task ('media.derivatives',
+ * keyed by asset id) and flips its status pending → ready, or failed after the last attempt.
  */
 @Injectable()
-export class MediaDerivativesService implements OnApplicationBootstrap, OnApplicationShutdown {
+export class MediaDerivativesService implements OnModuleInit, OnApplicationBootstrap {
   constructor(
     private readonly repo: MediaRepository,
-    @Inject(TASK_QUEUE) private readonly queue: TaskQueue,
+    @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(IMAGE) private readonly image: ImageAdapter,
   ) {}
 
+  onModuleInit(): void {
+    this.tasks.register(DERIVATIVES_TASK, (t) => this.make(t), { concurrency: DERIVATIVES_CONCURRENCY, maxAttempts: DERIVATIVES_MAX_ATTEMPTS });
+  }
+
+  /** Assets stored before the durable runner existed have no task row; give them one. */
   onApplicationBootstrap(): void {
-    for (const row of this.repo.listPending()) this.enqueue(row.id);
+    for (const row of this.repo.listPending()) this.enqueue(row);
   }
 
-  /** Lets queued work finish before the database closes. */
-  async onApplicationShutdown(): Promise<void> {
-    await this.queue.drain();
+  /** Pass the transaction that stores the asset, so the task commits (or vanishes) with it. */
+  enqueue(row: Pick<MediaAssetRow, 'id' | 'shopId'>, tx?: DbTx): void {
+    this.tasks.enqueue({ kind: DERIVATIVES_TASK, key: String(row.id), shopId: row.shopId }, tx);
   }
 
-  enqueue(assetId: number): void {
-    this.queue.enqueue(`derivatives:${assetId}`, () => this.make(assetId));
-  }
-
-  /** Resolves when no derivative work is queued or running. */
+  /** Resolves when no background work is queued or running. */
   settled(): Promise<void> {
-    return this.queue.drain();
+    return this.tasks.settled();
   }
 
-  private async make(assetId: number): Promise<void> {
+  private async make(task: TaskContext): Promise<void> {
+    const assetId = Number(task.key);
     const row = this.repo.findById(assetId);
     if (!row || row.derivativeStatus !== 'pending' || !row.originalKey) return;
     try {
       const original = await buffer(this.storage.createReadStream(row.originalKey));
       const made = await this.image.renditions(original, IMAGE_VARIANTS.map((v) => DERIVATIVE_SIZES[v]));
-      for (const [i, variant] of IMAGE_VARIANTS.entries()) await this.save(row, variant, made[i]);
+      for (const [i, variant] of IMAGE_VARIANTS.entries()) {
+        await this.save(row, variant, made[i]);
+        task.progress((i + 1) / IMAGE_VARIANTS.length);
+      }
       this.repo.update(assetId, { derivativeStatus: 'ready', derivativeError: null });
     } catch (err) {
-      this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
+      if (task.attempt >= DERIVATIVES_MAX_ATTEMPTS) this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
+      throw err;
     }
   }
 
@@ -66,10 +78,11 @@ export class MediaDerivativesService implements OnApplicationBootstrap, OnApplic
 
   private async save(row: MediaAssetRow, variant: MediaVariant, out: Rendition): Promise<void> {
     const previous = this.repo.findDerivative(row.id, variant);
-    const key = `derivatives/${row.shopId}/${randomUUID()}.jpg`;
+    const key = derivativeKey(row, variant);
     const stored = await this.storage.put(key, Readable.from([out.data]));
     this.repo.upsertDerivative({ assetId: row.id, variant, key, width: out.width, height: out.height, bytes: stored.bytes, sha256: stored.sha256 });
-    if (previous) await this.storage.delete(previous.key);
+    // Rows written before keys were deterministic point at a random name.
+    if (previous && previous.key !== key) await this.storage.delete(previous.key);
   }
 
   async removeFiles(row: MediaAssetRow): Promise<void> {

@@ -68,7 +68,7 @@ export class MediaIntakeService {
         entityId: row.id,
         details: { jobId, kind, mime: row.mime, sha256: row.sha256, bytes: row.byteSize, channel },
       });
-      if (type.family === 'image') this.derivatives.enqueue(row.id);
+      if (type.family === 'image') this.derivatives.enqueue(row);
       return toMediaDto(row, []);
     } finally {
       await this.temp.remove(file.path);

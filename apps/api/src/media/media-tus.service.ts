@@ -69,7 +69,8 @@ export class MediaTusService implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
-    this.store = new FileStore({ directory: this.temp.resumableDir });
+    // The tus expiration extension: unfinished uploads answer Upload-Expires and are removed after it.
+    this.store = new FileStore({ directory: this.temp.resumableDir, expirationPeriodInMilliseconds: this.cfg.TUS_EXPIRE_HOURS * 3600_000 });
     this.server = new Server({
       path: TUS_PATH,
       datastore: this.store,
@@ -93,6 +94,11 @@ export class MediaTusService implements OnModuleInit {
     if (done && done.shopId === actor.shopId) return { uploadId, offset: done.size, length: done.size, assetId: done.assetId, error: done.error };
     const upload = await this.assertAccess(actor, uploadId);
     return { uploadId, offset: upload.offset, length: upload.size ?? null, assetId: null, error: null };
+  }
+
+  /** Deletes unfinished uploads past their Upload-Expires (run by the storage.sweep task). */
+  expireAbandoned(): Promise<number> {
+    return this.server.cleanUpExpiredUploads();
   }
 
   private async assertAccess(actor: AuthUser, uploadId: string): Promise<Upload> {

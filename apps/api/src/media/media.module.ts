@@ -4,7 +4,6 @@ import { AuditModule } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { FindingsModule } from '../findings';
 import { ImageModule } from '../infra/image';
-import { TASK_QUEUE, TaskQueue } from '../infra/queue';
 import { FileSniffer, SNIFFER } from '../infra/sniff';
 import { StorageModule, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { VIDEO_PROBE, VideoProbe } from '../infra/video';
@@ -19,6 +18,7 @@ import { MediaUploadService } from './media-upload.service';
 import { MediaController } from './media.controller';
 import { MediaRepository } from './media.repository';
 import { MediaService } from './media.service';
+import { MediaSweepService } from './media-sweep.service';
 import { MAX_FILES_PER_BATCH } from './upload-form';
 
 @Module({
@@ -43,7 +43,7 @@ import { MAX_FILES_PER_BATCH } from './upload-form';
     MediaDerivativesService,
     MediaFilesService,
     MediaTusService,
-    { provide: TASK_QUEUE, useFactory: () => new TaskQueue(2) },
+    MediaSweepService,
     { provide: SNIFFER, useClass: FileSniffer },
     { provide: VIDEO_PROBE, useClass: VideoProbe },
   ],

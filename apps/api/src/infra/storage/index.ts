@@ -2,3 +2,4 @@ export { STORAGE, assertSafeKey, type Storage, type StoredObject, type ByteRange
 export { LocalDiskStorage } from './local-disk.storage';
 export { UPLOAD_TEMP, UploadTemp } from './upload-temp';
 export { StorageModule } from './storage.module';
+export { removeLeftovers } from './leftovers';

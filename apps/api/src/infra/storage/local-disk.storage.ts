@@ -35,7 +35,8 @@ export class LocalDiskStorage implements Storage {
     const partial = `${target}.partial`;
     const { tap, result } = hashing();
     try {
-      await pipeline(source, tap, createWriteStream(partial, { flags: 'wx' }));
+      // 'w', not 'wx': a .partial left by a killed process must not block the re-run of the same key.
+      await pipeline(source, tap, createWriteStream(partial, { flags: 'w' }));
       await rename(partial, target);
     } catch (err) {
       await rm(partial, { force: true });

@@ -1,7 +1,42 @@
-import { Global, Module } from '@nestjs/common';
-import { MemoryTaskRunner } from './memory-task-runner';
+import { type BeforeApplicationShutdown, Global, Inject, Module, type OnApplicationBootstrap } from '@nestjs/common';
+import { APP_CONFIG, type AppConfig } from '../../config';
+import { DB, type Db } from '../../core/db';
+import { CLOCK, type Clock } from '../clock';
+import { SqliteTaskRunner } from './sqlite-task-runner';
+import { TaskStore } from './task-store';
 import { TASK_RUNNER } from './tasks.port';
 
+/**
+ * The runner behind TASK_RUNNER, chosen by TASKS_DRIVER (only 'sqlite' today; DEVELOPERS.md
+ * says how a BullMQ driver would plug in). Handlers register in their module's onModuleInit;
+ * the runner starts taking work once the whole application has booted.
+ */
 @Global()
-@Module({ providers: [{ provide: TASK_RUNNER, useFactory: () => new MemoryTaskRunner() }], exports: [TASK_RUNNER] })
-export class TasksModule {}
+@Module({
+  providers: [
+    {
+      provide: TASK_RUNNER,
+      inject: [DB, CLOCK, APP_CONFIG],
+      useFactory: (db: Db, clock: Clock, cfg: AppConfig) =>
+        new SqliteTaskRunner(new TaskStore(db), clock, {
+          pollMs: cfg.TASK_POLL_MS,
+          leaseMs: cfg.TASK_LEASE_MS,
+          backoff: { baseMs: cfg.TASK_BACKOFF_MS, maxMs: 10 * 60_000 },
+          maxAttempts: 5,
+        }),
+    },
+  ],
+  exports: [TASK_RUNNER],
+})
+export class TasksModule implements OnApplicationBootstrap, BeforeApplicationShutdown {
+  constructor(@Inject(TASK_RUNNER) private readonly runner: SqliteTaskRunner) {}
+
+  onApplicationBootstrap(): void {
+    this.runner.start();
+  }
+
+  /** Before the database closes: finish what is running, take nothing new. */
+  async beforeApplicationShutdown(): Promise<void> {
+    await this.runner.stop();
+  }
+}

@@ -11,10 +11,12 @@ export interface TaskSpec {
   key: string;
   shopId: number | null;
   payload?: Record<string, unknown>;
+  /** Not before this time (periodic housekeeping); default now. */
+  runAt?: Date;
 }
 
 /** What a handler receives. Handlers must be idempotent: a task may run again after a crash. */
-export interface TaskContext extends Required<Omit<TaskSpec, 'payload'>> {
+export interface TaskContext extends Required<Omit<TaskSpec, 'payload' | 'runAt'>> {
   payload: Record<string, unknown>;
   attempt: number;
   /** Reports progress 0..1 for screens that show it. */
@@ -49,8 +51,20 @@ export interface TaskRunner {
   register(kind: string, handler: TaskHandler, options: TaskKindOptions): void;
   enqueue(spec: TaskSpec, tx?: DbTx): void;
   status(kind: string, key: string): TaskStatus | null;
-  /** Resolves when nothing is queued or running (tests and shutdown). */
+  /** Resolves when nothing is queued or running (tests and shutdown); tasks scheduled for later are not waited for. */
   settled(): Promise<void>;
+  /** For the readiness check: is the runner polling, and how much work waits. */
+  health?(): TaskRunnerHealth;
+  /** Deletes finished (done) tasks last touched before `before`; returns how many. */
+  prune?(before: Date): number;
+}
+
+export interface TaskRunnerHealth {
+  ok: boolean;
+  driver: string;
+  /** Last time the runner looked for work (ISO), null before it started. */
+  lastPollAt: string | null;
+  counts: Record<TaskState, number>;
 }
 
 export const TASK_RUNNER = Symbol('TASK_RUNNER');

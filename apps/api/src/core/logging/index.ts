@@ -1,0 +1,1 @@
+export { requestLogging, redactUrl } from './request-logging';

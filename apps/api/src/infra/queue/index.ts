@@ -1,1 +1,0 @@
-export { TaskQueue, TASK_QUEUE } from './task-queue';

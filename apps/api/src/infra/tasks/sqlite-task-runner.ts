@@ -1,0 +1,194 @@
+import { Logger } from '@nestjs/common';
+import { randomUUID } from 'node:crypto';
+import { hostname } from 'node:os';
+import type { Clock } from '../clock';
+import { type BackoffOptions, retryDelay } from './backoff';
+import { type TaskRow, type TaskStore, toStatus } from './task-store';
+import type { DbTx, TaskHandler, TaskKindOptions, TaskRunner, TaskRunnerHealth, TaskSpec, TaskStatus } from './tasks.port';
+
+export interface SqliteRunnerOptions {
+  /** How often to look for work enqueued by another process or freed by an expired lease (ms). */
+  pollMs: number;
+  /** How long a claim holds without renewal; a killed process's tasks run again after this (ms). */
+  leaseMs: number;
+  backoff: BackoffOptions;
+  /** Attempts before a task ends failed, unless its kind says otherwise. */
+  maxAttempts: number;
+  random?: () => number;
+}
+
+interface Kind {
+  handler: TaskHandler;
+  options: TaskKindOptions;
+  running: number;
+}
+
+/**
+ * The durable runner: tasks are rows of the `tasks` table (an outbox written in the caller's
+ * transaction), claimed under a lease, retried with backoff, limited per kind. Wakes at once
+ * on enqueue, at the next retry time, and at least every `pollMs`.
+ */
+export class SqliteTaskRunner implements TaskRunner {
+  private readonly logger = new Logger('TaskRunner');
+  private readonly owner = `${hostname()}:${process.pid}:${randomUUID().slice(0, 8)}`;
+  private readonly kinds = new Map<string, Kind>();
+  private readonly inflight = new Set<Promise<void>>();
+  private waiters: (() => void)[] = [];
+  private timer: NodeJS.Timeout | null = null;
+  private wakePending = false;
+  private state: 'idle' | 'started' | 'stopped' = 'idle';
+  private lastPollAt: Date | null = null;
+  private lastPollFailed = false;
+
+  constructor(
+    private readonly store: TaskStore,
+    private readonly clock: Clock,
+    private readonly opts: SqliteRunnerOptions,
+  ) {}
+
+  register(kind: string, handler: TaskHandler, options: TaskKindOptions): void {
+    this.kinds.set(kind, { handler, options, running: 0 });
+    this.wake();
+  }
+
+  enqueue(spec: TaskSpec, tx?: DbTx): void {
+    this.store.insert(spec, this.clock.now(), tx);
+    // After the caller's (synchronous) transaction has committed or rolled back.
+    this.wake();
+  }
+
+  status(kind: string, key: string): TaskStatus | null {
+    const row = this.store.find(kind, key);
+    return row ? toStatus(row) : null;
+  }
+
+  settled(): Promise<void> {
+    if (!this.busy()) return Promise.resolve();
+    return new Promise((resolve) => this.waiters.push(resolve));
+  }
+
+  health(): TaskRunnerHealth {
+    const counts = this.store.counts();
+    return { ok: this.state === 'started' && !this.lastPollFailed, driver: 'sqlite', lastPollAt: this.lastPollAt?.toISOString() ?? null, counts };
+  }
+
+  prune(before: Date): number {
+    return this.store.prune(before);
+  }
+
+  /** Begins taking work (after every handler has registered). */
+  start(): void {
+    if (this.state !== 'idle') return;
+    this.state = 'started';
+    this.wake();
+  }
+
+  /** Takes no new work and waits for what this process is running. */
+  async stop(): Promise<void> {
+    this.state = 'stopped';
+    if (this.timer) clearTimeout(this.timer);
+    await Promise.allSettled([...this.inflight]);
+    for (const w of this.waiters.splice(0)) w();
+  }
+
+  private wake(): void {
+    if (this.state !== 'started' || this.wakePending) return;
+    this.wakePending = true;
+    setImmediate(() => {
+      this.wakePending = false;
+      this.tick();
+    });
+  }
+
+  private tick(): void {
+    if (this.state !== 'started') return;
+    if (this.timer) clearTimeout(this.timer);
+    const now = this.clock.now();
+    try {
+      for (const [name, kind] of this.kinds) {
+        for (const row of this.store.claim(name, kind.options.concurrency - kind.running, this.owner, now, this.opts.leaseMs)) this.run(kind, row);
+      }
+      this.lastPollAt = now;
+      this.lastPollFailed = false;
+    } catch (err) {
+      this.lastPollFailed = true;
+      this.logger.error(`Task poll failed: ${(err as Error).message}`);
+    }
+    this.schedule(now);
+    this.notifyIfIdle();
+  }
+
+  /** Sleeps until the next retry falls due, or one poll interval, whichever is sooner. */
+  private schedule(now: Date): void {
+    const free = [...this.kinds].filter(([, k]) => k.running < k.options.concurrency).map(([name]) => name);
+    let wait = this.opts.pollMs;
+    try {
+      const due = this.store.nextDue(free);
+      if (due) wait = Math.min(wait, Math.max(10, due.getTime() - now.getTime()));
+    } catch {
+      // The poll below retries; a closed database shows in health().
+    }
+    this.timer = setTimeout(() => this.tick(), wait);
+    this.timer.unref();
+  }
+
+  private run(kind: Kind, row: TaskRow): void {
+    kind.running++;
+    const { leaseMs } = this.opts;
+    const heartbeat = setInterval(() => this.safely(() => this.store.renew(row.id, this.owner, new Date(this.clock.now().getTime() + leaseMs))), leaseMs / 3);
+    heartbeat.unref();
+    const ctx = {
+      kind: row.kind,
+      key: row.key,
+      shopId: row.shopId,
+      payload: row.payload,
+      attempt: row.attempts,
+      progress: (f: number) => this.safely(() => this.store.progress(row.id, this.owner, f)),
+    };
+    const done: Promise<void> = Promise.resolve()
+      .then(() => kind.handler(ctx))
+      .then(
+        () => this.safely(() => this.store.finish(row.id, this.owner, this.clock.now())),
+        (err: unknown) => this.safely(() => this.failed(kind, row, err)),
+      )
+      .finally(() => {
+        clearInterval(heartbeat);
+        kind.running--;
+        this.inflight.delete(done);
+        this.wake();
+        this.notifyIfIdle();
+      });
+    this.inflight.add(done);
+  }
+
+  private failed(kind: Kind, row: TaskRow, err: unknown): void {
+    const message = err instanceof Error ? err.message : String(err);
+    const max = kind.options.maxAttempts ?? this.opts.maxAttempts;
+    const now = this.clock.now();
+    const retryAt = row.attempts < max ? new Date(now.getTime() + retryDelay(row.attempts, this.opts.backoff, this.opts.random)) : null;
+    this.store.fail(row.id, this.owner, now, message, retryAt);
+    this.logger.warn(`${row.kind}:${row.key} attempt ${row.attempts} failed (${message})${retryAt ? `; retry at ${retryAt.toISOString()}` : '; giving up'}`);
+  }
+
+  /** Store writes after a handler must not crash the process (e.g. the database closing in a test). */
+  private safely(write: () => void): void {
+    try {
+      write();
+    } catch (err) {
+      this.logger.error(`Task bookkeeping failed: ${(err as Error).message}`);
+    }
+  }
+
+  private busy(): boolean {
+    if (this.inflight.size > 0) return true;
+    try {
+      return this.state !== 'stopped' && this.store.pendingCount([...this.kinds.keys()], this.clock.now()) > 0;
+    } catch {
+      return false;
+    }
+  }
+
+  private notifyIfIdle(): void {
+    if (this.waiters.length > 0 && !this.busy()) for (const w of this.waiters.splice(0)) w();
+  }
+}
