@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { FindingMediaDto, MediaAssetDto, MediaListQuery, RetagOneRequest, RetagRequest } from '@benchproof/contracts';
+import { roleCan, type FindingMediaDto, type MediaAssetDto, type MediaListQuery, type RetagOneRequest, type RetagRequest } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
@@ -29,7 +29,7 @@ export class MediaService {
 
   list(actor: AuthUser, jobId: number, q: MediaListQuery): MediaAssetDto[] {
     this.assertJob(actor, jobId);
-    const includeDeleted = q.includeDeleted === true && actor.role === 'manager';
+    const includeDeleted = q.includeDeleted === true && roleCan(actor.role, 'media.view_deleted');
     return this.toDtos(this.repo.listForJob(actor.shopId, jobId, { ...q, includeDeleted }));
   }
 
@@ -100,7 +100,7 @@ export class MediaService {
   owned(actor: AuthUser, jobId: number, id: number): MediaAssetRow {
     this.assertJob(actor, jobId);
     const row = this.repo.findInShop(actor.shopId, id);
-    if (!row || row.jobId !== jobId || row.purgedAt || (row.deletedAt && actor.role !== 'manager')) throw notFound('Media');
+    if (!row || row.jobId !== jobId || row.purgedAt || (row.deletedAt && !roleCan(actor.role, 'media.view_deleted'))) throw notFound('Media');
     return row;
   }
 
