@@ -1,2 +1,3 @@
 export { JobsModule } from './jobs.module';
-export { JobsService, type JobRef, type BookedInListener } from './jobs.service';
+export { JobsService, type BookedInListener } from './jobs.service';
+export { JobAccess, type JobRef, type JobCaller, type EvidenceKind } from './job-access.service';
