@@ -27,8 +27,8 @@ import { InspectionRepository, type CheckpointRow, type MeasurementRow } from '.
 import { assess, measurementContext, unitOf, type StoredResult } from './measurement-assess';
 
 export const toMeasurementDto = (m: MeasurementRow): MeasurementDto => {
-  const { trend: _trend, ...result } = m.result as unknown as StoredResult;
-  return { id: m.id, checkpointId: m.checkpointId, kind: m.kind, input: m.input as MeasurementInputDto, result, unit: m.unit, userId: m.userId, at: m.at.toISOString() };
+  const { trend: _trend, ...result } = m.result;
+  return { id: m.id, checkpointId: m.checkpointId, kind: m.kind, input: m.input, result, unit: m.unit, userId: m.userId, at: m.at.toISOString() };
 };
 
 const toCheckpointDto = (c: CheckpointRow, ms: MeasurementRow[]): CheckpointDto => ({

@@ -7,9 +7,9 @@ import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { JobAccess } from '../jobs';
 import { UsersService } from '../users';
+import type { StoredTorqueInput } from '../db/schema';
 import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
 
-type StoredTorqueInput = Pick<TorqueEntryRequest, 'specified' | 'applied'> & { tolerancePct: number | null };
 
 const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto => ({
   id: w.id,
@@ -22,8 +22,7 @@ const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto =>
 });
 
 function toTorqueDto(t: TorqueEntryRow, staff: Map<number, string>): TorqueEntryDto {
-  const input = t.input as unknown as StoredTorqueInput;
-  const v = t.result as unknown as TorqueVerdict;
+  const { input, result: v } = t;
   return {
     id: t.id,
     fastener: t.fastener,
