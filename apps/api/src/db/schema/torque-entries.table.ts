@@ -1,6 +1,6 @@
 // Type-only: drizzle-kit loads this file without the workspace libs.
 import type { TorqueEntryRequest } from '@benchproof/contracts';
-import type { TorqueVerdict } from '@benchproof/domain';
+import type { Threadlocker, TorqueVerdict } from '@benchproof/domain';
 import { index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { jobs } from './jobs.table';
@@ -29,7 +29,7 @@ export const torqueEntries = sqliteTable(
     /** The wrench's last calibration date (YYYY-MM-DD), as the mechanic read it off the wrench or its certificate. */
     toolCalibratedOn: text('tool_calibrated_on'),
     /** Thread-locking compound used; null = not recorded (older entries). */
-    threadlocker: text('threadlocker', { enum: ['none', 'blue_medium', 'red_high', 'pre_applied', 'other'] }),
+    threadlocker: text('threadlocker').$type<Threadlocker>(),
     carbonPart: integer('carbon_part', { mode: 'boolean' }).notNull().default(false),
     userId: integer('user_id').references(() => users.id),
     at: timestamp('at').notNull(),
