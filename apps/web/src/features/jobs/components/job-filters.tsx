@@ -1,4 +1,4 @@
-import { JOB_STATUSES, JOB_STATUS_LABELS } from '@benchproof/domain';
+import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from '@benchproof/domain';
 import { Button, Chip, Group, Select, SimpleGrid, Stack, Switch, TextInput, useMatches } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
 import { useDebouncedCallback } from '@mantine/hooks';
@@ -40,7 +40,7 @@ function SearchBox({ initial, onSearch }: { initial: string; onSearch: (q: strin
   );
 }
 
-function StatusChips({ value, onChange }: { value: string[]; onChange: (v: string[]) => void }) {
+function StatusChips({ value, onChange }: { value: JobStatus[]; onChange: (v: JobStatus[]) => void }) {
   const chipWrap = useMatches<'nowrap' | 'wrap'>({ base: 'nowrap', sm: 'wrap' });
   return (
     <Chip.Group multiple value={value} onChange={onChange}>
@@ -63,7 +63,7 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
   const byStatus = Boolean(params.status?.length);
   return (
     <Stack gap="sm" mb="md">
-      <StatusChips value={params.status ?? []} onChange={(v) => update({ status: v })} />
+      <StatusChips value={params.status ?? []} onChange={(status) => update({ status })} />
       <Switch
         label="Include collected and cancelled jobs"
         description={byStatus ? 'The chosen statuses decide which jobs are listed.' : 'Off: only jobs still in the workshop.'}
