@@ -17,7 +17,7 @@ export default defineConfig({
       {
         test: {
           name: 'api-unit', root: 'apps/api', environment: 'node', globals: true,
-          include: ['src/**/*.spec.ts'], setupFiles: ['reflect-metadata'],
+          include: ['src/**/*.spec.ts', 'test/lint/**/*.spec.ts'], setupFiles: ['reflect-metadata'],
         },
       },
       {

@@ -3,16 +3,17 @@
  * every status. All names, makers and models are made up; e-mails use `.test`.
  * Days are relative to the day the seed runs, so some promised dates are overdue.
  */
-import type { MeasurementInput } from '@benchproof/domain';
+import type { ContactChannel, DecisionChannel } from '@benchproof/contracts';
+import type { BrakeType, CableRouting, Condition, DropoutType, FrameMaterial, InspectionArea, JobStatus, MeasurementInput, Threadlocker, Urgency } from '@benchproof/domain';
 
-export type DemoStatus = 'booked_in' | 'on_stand' | 'waiting_owner' | 'in_work' | 'final_check' | 'ready' | 'collected' | 'cancelled';
+export type DemoStatus = JobStatus;
 
 export interface DemoOwner {
   key: string;
   name: string;
   email: string | null;
   phone: string | null;
-  preferredChannel: 'email' | 'phone' | 'sms';
+  preferredChannel: ContactChannel;
 }
 
 export interface DemoBike {
@@ -21,28 +22,28 @@ export interface DemoBike {
   maker: string;
   model: string;
   year: number | null;
-  frameMaterial: 'steel' | 'aluminium' | 'carbon' | 'titanium' | 'other';
+  frameMaterial: FrameMaterial;
   size: string | null;
   colour: string | null;
   serialNumber: string | null;
   drivetrainSpeeds: number;
-  brakeType: 'rim' | 'mechanical_disc' | 'hydraulic_disc';
-  cableRouting: 'external' | 'internal';
-  dropoutType: 'vertical' | 'horizontal';
+  brakeType: BrakeType;
+  cableRouting: CableRouting;
+  dropoutType: DropoutType;
   tyreSize: string | null;
 }
 
 export interface DemoFinding {
-  area: 'frame_fork' | 'steering_headset' | 'drivetrain' | 'brakes' | 'wheels_tyres' | 'cables_housing' | 'bearings' | 'contact_points' | 'frame_interior';
-  condition: 'sound' | 'wearing' | 'worn' | 'unsafe';
+  area: InspectionArea;
+  condition: Condition;
   description: string;
   recommendation?: {
     summary: string;
     /** CHECKS.md A.2 step 4: safety-critical, recommended soon, advisory. */
-    urgency: 'safety' | 'soon' | 'advisory';
+    urgency: Urgency;
     parts: { description: string; qty: number; unitPriceMinor: number }[];
     labourHundredths: number;
-    decision?: { status: 'approved' | 'declined'; channel: 'phone' | 'in_person' | 'email'; decidedByName: string };
+    decision?: { status: 'approved' | 'declined'; channel: Exclude<DecisionChannel, 'owner_link'>; decidedByName: string };
   };
 }
 
@@ -55,7 +56,7 @@ export interface DemoTorque {
   tool: string;
   /** The wrench was last calibrated this many days before the work (the job's booking day). */
   toolCalibratedDaysBefore?: number;
-  threadlocker?: 'none' | 'blue_medium' | 'red_high' | 'pre_applied' | 'other';
+  threadlocker?: Threadlocker;
   carbonPart: boolean;
 }
 
@@ -69,7 +70,7 @@ export interface DemoJob {
   promisedAfterDays: number;
   mechanic: string | null;
   symptoms: string;
-  conditions?: Record<string, 'sound' | 'wearing' | 'worn' | 'unsafe'>;
+  conditions?: Record<string, Condition>;
   measurements?: { checkpoint: string; input: MeasurementInput }[];
   findings?: DemoFinding[];
   work?: { description: string; partsUsed: string; minutes: number }[];

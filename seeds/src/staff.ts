@@ -2,12 +2,14 @@
  * The invented demo scenario: two shops so that shop isolation can be seen and tested.
  * Every name, address and e-mail here is made up; e-mails use the reserved `.test` domain.
  */
+import type { Role, UnitSystem } from '@benchproof/contracts';
+
 export const DEMO_PASSWORD = 'bench-demo-2026';
 
 export interface DemoStaff {
   name: string;
   email: string;
-  role: 'manager' | 'desk' | 'mechanic';
+  role: Role;
 }
 
 export interface DemoShop {
@@ -19,7 +21,7 @@ export interface DemoShop {
   currency: string;
   labourRateMinor: number;
   taxRateBp: number;
-  units: 'metric' | 'imperial';
+  units: UnitSystem;
   pageSize: 'A4' | 'Letter';
   finalCheckSecondPerson: boolean;
   brandPrimary: string;

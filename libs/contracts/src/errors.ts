@@ -13,6 +13,7 @@ export const ERROR_CODES = {
   CSRF_MISMATCH: { status: 403, message: 'The page is out of date. Reload and try again.' },
   NOT_FOUND: { status: 404, message: 'Not found.' },
   CONFLICT: { status: 409, message: 'This was changed by someone else or already exists.' },
+  JOB_CLOSED: { status: 409, message: 'The bike has been handed back, so this job’s records are frozen. A manager can still correct them.' },
   ILLEGAL_TRANSITION: { status: 409, message: 'The job cannot move to that status from where it is.' },
   LAST_MANAGER: { status: 409, message: 'A shop needs at least one active manager.' },
   EMAIL_TAKEN: { status: 409, message: 'That e-mail address already has an account.' },

@@ -46,6 +46,8 @@ export const DECISION_STATUSES = ['pending', 'approved', 'declined'] as const;
 export const DECISION_CHANNELS = ['phone', 'in_person', 'email', 'owner_link'] as const;
 export const DecisionStatusSchema = z.enum(DECISION_STATUSES);
 export const DecisionChannelSchema = z.enum(DECISION_CHANNELS);
+export type DecisionStatus = z.infer<typeof DecisionStatusSchema>;
+export type DecisionChannel = z.infer<typeof DecisionChannelSchema>;
 
 export const RecordDecisionRequestSchema = z.object({
   status: DecisionStatusSchema,

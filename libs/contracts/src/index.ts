@@ -1,6 +1,7 @@
 export * from './errors';
 export * from './audit';
 export * from './auth';
+export * from './access-policy';
 export * from './users';
 export * from './shops';
 export * from './media';

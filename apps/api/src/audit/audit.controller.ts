@@ -1,7 +1,7 @@
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { AuditQuerySchema, type AuditQuery } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodQuery, zod } from '../core/http';
 import { AuditService } from './audit.service';
 
@@ -11,7 +11,7 @@ export class AuditController {
   constructor(private readonly audit: AuditService) {}
 
   @Get()
-  @Roles('manager')
+  @Can('audit.view')
   @ApiZodQuery(AuditQuerySchema)
   list(@CurrentUser() user: AuthUser, @Query(zod(AuditQuerySchema)) q: AuditQuery) {
     return this.audit.list(user.shopId, q.entityType, q.entityId);

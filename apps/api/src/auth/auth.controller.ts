@@ -5,7 +5,7 @@ import { LoginRequestSchema, type LoginRequest } from '@benchproof/contracts';
 import type { DoubleCsrfUtilities } from 'csrf-csrf';
 import type { Request, Response } from 'express';
 import { APP_CONFIG, type AppConfig } from '../config';
-import { CSRF, CSRF_COOKIE, CurrentUser, issueCsrfToken, Public, SESSION_COOKIE, sessionCookieOptions, type AuthUser } from '../core/auth';
+import { Can, CSRF, CSRF_COOKIE, CurrentUser, issueCsrfToken, Public, SESSION_COOKIE, sessionCookieOptions, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { AuthService } from './auth.service';
 
@@ -36,6 +36,7 @@ export class AuthController {
 
   /** The current session, with a fresh CSRF token for the page that just loaded. */
   @Get('session')
+  @Can('session.view')
   session(@CurrentUser() user: AuthUser, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     return { user: this.auth.describe(user), csrfToken: issueCsrfToken(this.csrf, req, res) };
   }

@@ -8,7 +8,7 @@ import {
   type BikeInput,
   type UpdateBikeRequest,
 } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
 import { BikesService } from './bikes.service';
 
@@ -18,25 +18,27 @@ export class BikesController {
   constructor(private readonly bikes: BikesService) {}
 
   @Get()
+  @Can('bikes.view')
   @ApiZodQuery(BikeListQuerySchema)
   list(@CurrentUser() user: AuthUser, @Query(zod(BikeListQuerySchema)) query: BikeListQuery) {
     return this.bikes.list(user, query);
   }
 
   @Post()
-  @Roles('manager', 'desk')
+  @Can('bikes.edit')
   @ApiZodBody(BikeInputSchema)
   create(@CurrentUser() user: AuthUser, @Body(zod(BikeInputSchema)) body: BikeInput) {
     return this.bikes.create(user, body);
   }
 
   @Get(':id')
+  @Can('bikes.view')
   get(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.bikes.get(user, id);
   }
 
   @Patch(':id')
-  @Roles('manager', 'desk')
+  @Can('bikes.edit')
   @ApiZodBody(UpdateBikeRequestSchema)
   update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateBikeRequestSchema)) body: UpdateBikeRequest) {
     return this.bikes.update(user, id, body);
@@ -49,6 +51,7 @@ export class CustomerBikesController {
   constructor(private readonly bikes: BikesService) {}
 
   @Get()
+  @Can('bikes.view')
   list(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.bikes.listForCustomer(user, id);
   }

@@ -8,7 +8,7 @@ import {
   type CustomerListQuery,
   type UpdateCustomerRequest,
 } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
 import { CustomersService } from './customers.service';
 
@@ -18,25 +18,27 @@ export class CustomersController {
   constructor(private readonly customers: CustomersService) {}
 
   @Get()
+  @Can('customers.view')
   @ApiZodQuery(CustomerListQuerySchema)
   list(@CurrentUser() user: AuthUser, @Query(zod(CustomerListQuerySchema)) query: CustomerListQuery) {
     return this.customers.list(user, query);
   }
 
   @Post()
-  @Roles('manager', 'desk')
+  @Can('customers.edit')
   @ApiZodBody(CustomerInputSchema)
   create(@CurrentUser() user: AuthUser, @Body(zod(CustomerInputSchema)) body: CustomerInput) {
     return this.customers.create(user, body);
   }
 
   @Get(':id')
+  @Can('customers.view')
   get(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.customers.get(user, id);
   }
 
   @Patch(':id')
-  @Roles('manager', 'desk')
+  @Can('customers.edit')
   @ApiZodBody(UpdateCustomerRequestSchema)
   update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateCustomerRequestSchema)) body: UpdateCustomerRequest) {
     return this.customers.update(user, id, body);

@@ -10,7 +10,7 @@ import {
   type RecordDecisionRequest,
   type UpdateFindingRequest,
 } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { FindingsService } from './findings.service';
 
@@ -20,19 +20,20 @@ export class FindingsController {
   constructor(private readonly findings: FindingsService) {}
 
   @Get('findings')
+  @Can('findings.view')
   list(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.findings.list(user, id);
   }
 
   @Post('findings')
-  @Roles('manager', 'mechanic')
+  @Can('findings.edit')
   @ApiZodBody(CreateFindingRequestSchema)
   create(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(CreateFindingRequestSchema)) body: CreateFindingRequest) {
     return this.findings.create(user, id, body);
   }
 
   @Patch('findings/:findingId')
-  @Roles('manager', 'mechanic')
+  @Can('findings.edit')
   @ApiZodBody(UpdateFindingRequestSchema)
   update(
     @CurrentUser() user: AuthUser,
@@ -44,15 +45,15 @@ export class FindingsController {
   }
 
   @Delete('findings/:findingId')
+  @Can('findings.edit')
   @HttpCode(204)
-  @Roles('manager', 'mechanic')
   remove(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Param('findingId', ParseIntPipe) findingId: number) {
     this.findings.delete(user, id, findingId);
   }
 
   /** Create or replace; prices at the shop's current rates. Desk may price too (it builds the estimate). */
   @Post('findings/:findingId/recommendation')
-  @Roles('manager', 'mechanic', 'desk')
+  @Can('findings.recommend')
   @ApiZodBody(RecommendationRequestSchema)
   setRecommendation(
     @CurrentUser() user: AuthUser,
@@ -64,12 +65,13 @@ export class FindingsController {
   }
 
   @Get('estimate')
+  @Can('findings.view')
   estimate(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.findings.estimate(user, id);
   }
 
   @Post('recommendations/:recId/decision')
-  @Roles('manager', 'desk')
+  @Can('recommendations.decide')
   @ApiZodBody(RecordDecisionRequestSchema)
   decide(
     @CurrentUser() user: AuthUser,

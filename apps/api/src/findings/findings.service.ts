@@ -9,7 +9,7 @@ import type {
   RecordDecisionRequest,
   UpdateFindingRequest,
 } from '@benchproof/contracts';
-import { defaultUrgency, isTerminalStatus } from '@benchproof/domain';
+import { defaultUrgency } from '@benchproof/domain';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
@@ -18,7 +18,7 @@ import { publish, RecommendationDecidedEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { InspectionService } from '../inspection';
-import { JobsService, type JobRef } from '../jobs';
+import { JobAccess, type EvidenceKind, type JobRef } from '../jobs';
 import { ShopsService } from '../shops';
 import { type FindingRow, FindingsRepository, type RecommendationRow } from './findings.repository';
 import { addTotals, toDecisionDto, toFindingDto, toRecommendationDto, ZERO_TOTALS } from './findings.view';
@@ -38,7 +38,7 @@ export interface DecisionInput {
 export class FindingsService {
   constructor(
     private readonly repo: FindingsRepository,
-    private readonly jobs: JobsService,
+    private readonly jobs: JobAccess,
     private readonly bikes: BikesService,
     private readonly inspection: InspectionService,
     private readonly shops: ShopsService,
@@ -47,15 +47,18 @@ export class FindingsService {
     private readonly emitter: EventEmitter2,
   ) {}
 
-  private openJob(actor: Pick<AuthUser, 'shopId'>, jobId: number): JobRef {
-    const job = this.jobs.getOwned(actor, jobId);
-    if (isTerminalStatus(job.status)) throw new DomainError('CONFLICT', 'The job is closed; its records can no longer change.', { status: job.status });
-    return job;
+  /** JobAccess's per-object check: in the caller's shop and still open (or a manager's audited override). */
+  private openJob(actor: AuthUser, jobId: number, what: EvidenceKind = 'finding'): JobRef {
+    return this.jobs.change(actor, jobId, what);
   }
 
-  /** The finding if it belongs to this job of the caller's shop, else NOT_FOUND (media links use this). */
-  getOwned(actor: Pick<AuthUser, 'shopId'>, jobId: number, findingId: number): FindingRow {
-    this.jobs.getOwned(actor, jobId);
+  /** NOT_FOUND unless the finding belongs to this job of the caller's shop (media links use this; the row stays here). */
+  assertFinding(actor: AuthUser, jobId: number, findingId: number): void {
+    this.owned(actor, jobId, findingId);
+  }
+
+  private owned(actor: AuthUser, jobId: number, findingId: number): FindingRow {
+    this.jobs.read(actor, jobId);
     const f = this.repo.find(actor.shopId, jobId, findingId);
     if (!f) throw notFound('Finding');
     return f;
@@ -69,7 +72,7 @@ export class FindingsService {
   }
 
   list(actor: AuthUser, jobId: number): FindingDto[] {
-    const job = this.jobs.getOwned(actor, jobId);
+    const job = this.jobs.read(actor, jobId);
     return this.dtos(actor, job, this.repo.list(actor.shopId, jobId));
   }
 
@@ -83,7 +86,7 @@ export class FindingsService {
 
   update(actor: AuthUser, jobId: number, findingId: number, patch: UpdateFindingRequest): FindingDto {
     const job = this.openJob(actor, jobId);
-    this.getOwned(actor, jobId, findingId);
+    this.owned(actor, jobId, findingId);
     if (patch.checkpointId) this.inspection.requireCheckpoint(actor, jobId, patch.checkpointId);
     const row = this.repo.update(actor.shopId, findingId, { ...patch, updatedAt: this.clock.now() });
     return this.dtos(actor, job, [row])[0];
@@ -91,7 +94,7 @@ export class FindingsService {
 
   delete(actor: AuthUser, jobId: number, findingId: number): void {
     this.openJob(actor, jobId);
-    this.getOwned(actor, jobId, findingId);
+    this.owned(actor, jobId, findingId);
     try {
       this.repo.transaction(() => this.repo.delete(actor.shopId, findingId));
     } catch (e) {
@@ -104,8 +107,8 @@ export class FindingsService {
 
   /** Creates or replaces the finding's recommendation at the shop's current labour rate, tax rate and currency. */
   setRecommendation(actor: AuthUser, jobId: number, findingId: number, input: RecommendationRequest): RecommendationDto {
-    this.openJob(actor, jobId);
-    const finding = this.getOwned(actor, jobId, findingId);
+    this.openJob(actor, jobId, 'recommendation');
+    const finding = this.owned(actor, jobId, findingId);
     const shop = this.shops.settings(actor.shopId);
     const now = this.clock.now();
     const urgency = input.urgency ?? defaultUrgency(finding.condition);
@@ -120,7 +123,7 @@ export class FindingsService {
   }
 
   estimate(actor: AuthUser, jobId: number): EstimateDto {
-    const job = this.jobs.getOwned(actor, jobId);
+    const job = this.jobs.read(actor, jobId);
     const items = this.dtos(actor, job, this.repo.list(actor.shopId, jobId)).flatMap((f) => (f.recommendation ? [{ ...f, recommendation: f.recommendation }] : []));
     const totals = { all: ZERO_TOTALS, approved: ZERO_TOTALS, pending: ZERO_TOTALS, declined: ZERO_TOTALS };
     for (const { recommendation: r } of items) {
@@ -132,7 +135,7 @@ export class FindingsService {
 
   /** Staff record a decision the owner gave by phone, in person or by e-mail. */
   recordDecision(actor: AuthUser, jobId: number, recommendationId: number, input: RecordDecisionRequest): DecisionDto {
-    this.jobs.getOwned(actor, jobId);
+    this.openJob(actor, jobId, 'decision');
     const decidedAt = input.decidedAt ? new Date(input.decidedAt) : this.clock.now();
     return this.decide(actor, jobId, recommendationId, { ...input, recordedBy: actor.id, decidedAt });
   }

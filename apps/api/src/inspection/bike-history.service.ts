@@ -36,12 +36,12 @@ export class BikeHistoryService {
     const byJob = new Map(jobs.map((j) => [j.id, j]));
     const out = new Map<string, WearSeries>();
     for (const m of rows) {
-      const trend = (m.result as unknown as StoredResult).trend;
+      const trend = m.result.trend;
       const job = byJob.get(m.jobId);
       if (!trend || !job) continue;
       const s = out.get(trend.key) ?? { key: trend.key, kind: trend.kind, label: trend.label, unit: trend.unit, limit: trend.limit, points: [] };
       s.limit = trend.limit;
-      s.points.push({ jobId: job.id, jobNumber: job.number, at: m.at.toISOString(), value: trend.value, condition: (m.result as unknown as StoredResult).condition });
+      s.points.push({ jobId: job.id, jobNumber: job.number, at: m.at.toISOString(), value: trend.value, condition: m.result.condition });
       out.set(trend.key, s);
     }
     return [...out.values()];

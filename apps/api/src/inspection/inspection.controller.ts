@@ -6,7 +6,7 @@ import {
   type MeasurementInputDto,
   type UpdateCheckpointRequest,
 } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { BikeHistoryService } from './bike-history.service';
 import { InspectionService } from './inspection.service';
@@ -17,12 +17,13 @@ export class InspectionController {
   constructor(private readonly inspection: InspectionService) {}
 
   @Get('inspection')
+  @Can('inspection.view')
   get(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.inspection.get(user, id);
   }
 
   @Patch('checkpoints/:checkpointId')
-  @Roles('manager', 'mechanic')
+  @Can('inspection.record')
   @ApiZodBody(UpdateCheckpointRequestSchema)
   updateCheckpoint(
     @CurrentUser() user: AuthUser,
@@ -34,7 +35,7 @@ export class InspectionController {
   }
 
   @Post('checkpoints/:checkpointId/measurements')
-  @Roles('manager', 'mechanic')
+  @Can('inspection.record')
   @ApiZodBody(MeasurementInputSchema)
   addMeasurement(
     @CurrentUser() user: AuthUser,
@@ -47,6 +48,7 @@ export class InspectionController {
 
   /** The verdict as the mechanic types: this bike's speeds, this shop's limits, nothing stored. */
   @Post('measurements/preview')
+  @Can('inspection.view')
   @HttpCode(200)
   @ApiZodBody(MeasurementInputSchema)
   preview(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(MeasurementInputSchema)) body: MeasurementInputDto) {
@@ -54,8 +56,8 @@ export class InspectionController {
   }
 
   @Delete('measurements/:measurementId')
+  @Can('inspection.record')
   @HttpCode(204)
-  @Roles('manager', 'mechanic')
   deleteMeasurement(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Param('measurementId', ParseIntPipe) measurementId: number) {
     this.inspection.deleteMeasurement(user, id, measurementId);
   }
@@ -68,6 +70,7 @@ export class BikeHistoryController {
 
   /** Visits of the bike and its wear trend (lives here: the trend is made of inspection measurements). */
   @Get()
+  @Can('inspection.view')
   get(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.history.history(user, id);
   }

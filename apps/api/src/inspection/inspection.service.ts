@@ -14,7 +14,6 @@ import {
   findCheckpoint,
   INSPECTION_AREA_LABELS,
   INSPECTION_AREAS,
-  isTerminalStatus,
   worstCondition,
   type Condition,
 } from '@benchproof/domain';
@@ -24,14 +23,14 @@ import type { AuthUser } from '../core/auth';
 import { DOMAIN_EVENTS, type JobBookedInEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
-import { JobsService, type JobRef } from '../jobs';
+import { JobAccess, JobsService, type JobRef } from '../jobs';
 import { ShopsService } from '../shops';
 import { InspectionRepository, type CheckpointRow, type MeasurementRow } from './inspection.repository';
 import { assess, measurementContext, unitOf, type StoredResult } from './measurement-assess';
 
 export const toMeasurementDto = (m: MeasurementRow): MeasurementDto => {
-  const { trend: _trend, ...result } = m.result as unknown as StoredResult;
-  return { id: m.id, checkpointId: m.checkpointId, kind: m.kind, input: m.input as MeasurementInputDto, result, unit: m.unit, userId: m.userId, at: m.at.toISOString() };
+  const { trend: _trend, ...result } = m.result;
+  return { id: m.id, checkpointId: m.checkpointId, kind: m.kind, input: m.input, result, unit: m.unit, userId: m.userId, at: m.at.toISOString() };
 };
 
 const toCheckpointDto = (c: CheckpointRow, ms: MeasurementRow[]): CheckpointDto => ({
@@ -54,6 +53,7 @@ export class InspectionService {
   constructor(
     private readonly repo: InspectionRepository,
     private readonly jobs: JobsService,
+    private readonly access: JobAccess,
     private readonly bikes: BikesService,
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
@@ -72,10 +72,9 @@ export class InspectionService {
     );
   }
 
+  /** JobAccess's per-object check: in the caller's shop and still open (or a manager's audited override). */
   private openJob(actor: AuthUser, jobId: number): JobRef {
-    const job = this.jobs.getOwned(actor, jobId);
-    if (isTerminalStatus(job.status)) throw new DomainError('CONFLICT', 'The job is closed; its records can no longer change.', { status: job.status });
-    return job;
+    return this.access.change(actor, jobId, 'inspection');
   }
 
   private checkpointOf(actor: AuthUser, jobId: number, checkpointId: number): CheckpointRow {
@@ -85,7 +84,7 @@ export class InspectionService {
   }
 
   get(actor: AuthUser, jobId: number): InspectionDto {
-    const job = this.jobs.getOwned(actor, jobId);
+    const job = this.access.read(actor, jobId);
     const bike = this.bikes.get(actor, job.bikeId);
     const cps = this.repo.checkpoints(actor.shopId, jobId);
     const ms = this.repo.measurements(actor.shopId, [jobId]);
@@ -112,7 +111,7 @@ export class InspectionService {
 
   /** The verdict for a reading on this job's bike with the shop's limits, without storing anything. */
   preview(actor: AuthUser, jobId: number, input: MeasurementInputDto): MeasurementResultDto {
-    const { trend: _trend, ...result } = this.assessFor(actor, this.jobs.getOwned(actor, jobId), input);
+    const { trend: _trend, ...result } = this.assessFor(actor, this.access.read(actor, jobId), input);
     return result;
   }
 

@@ -1,18 +1,16 @@
-import type { MeasurementInputDto, MeasurementResultDto, ShopSettingsDto } from '@benchproof/contracts';
+import type { MeasurementInputDto, ShopSettingsDto } from '@benchproof/contracts';
 import {
   assessMeasurement,
   isDomainInputError,
   measurementCautions,
   trendValue,
   type MeasurementContext,
-  type TrendValue,
 } from '@benchproof/domain';
 import { DomainError } from '../core/http';
+import type { StoredMeasurementResult } from '../db/schema';
 
-/** The result as stored: the verdict shown to people plus the plottable value for the wear trend. */
-export interface StoredResult extends MeasurementResultDto {
-  trend: TrendValue | null;
-}
+/** The result as stored (typed on the measurements table's JSON column). */
+export type StoredResult = StoredMeasurementResult;
 
 /** The drivetrain speed count and the shop's chain-limit overrides: what a verdict depends on besides the reading. */
 export function measurementContext(drivetrainSpeeds: number, settings: Pick<ShopSettingsDto, 'chainLimits'>): MeasurementContext {

@@ -1,2 +1,3 @@
 export { JobsModule } from './jobs.module';
-export { JobsService, type JobRef } from './jobs.service';
+export { JobsService } from './jobs.service';
+export { JobAccess, type JobRef, type JobCaller, type EvidenceKind } from './job-access.service';

@@ -12,7 +12,7 @@ import {
   type TransitionRequest,
   type UpdateJobRequest,
 } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
 import { JobsService } from './jobs.service';
 
@@ -22,6 +22,7 @@ export class JobsController {
   constructor(private readonly jobs: JobsService) {}
 
   @Get()
+  @Can('jobs.view')
   @ApiZodQuery(JobListQuerySchema)
   list(@CurrentUser() user: AuthUser, @Query(zod(JobListQuerySchema)) query: JobListQuery) {
     return this.jobs.list(user, query);
@@ -29,25 +30,27 @@ export class JobsController {
 
   /** Book-in: existing or new customer and bike, in one transaction. */
   @Post()
-  @Roles('manager', 'desk')
+  @Can('jobs.book_in')
   @ApiZodBody(BookInRequestSchema)
   bookIn(@CurrentUser() user: AuthUser, @Body(zod(BookInRequestSchema)) body: BookInRequest) {
     return this.jobs.bookIn(user, body);
   }
 
   @Get(':id')
+  @Can('jobs.view')
   get(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.jobs.get(user, id);
   }
 
   @Patch(':id')
-  @Roles('manager', 'desk')
+  @Can('jobs.edit')
   @ApiZodBody(UpdateJobRequestSchema)
   update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateJobRequestSchema)) body: UpdateJobRequest) {
     return this.jobs.update(user, id, body);
   }
 
   @Post(':id/transitions')
+  @Can('jobs.transition')
   @HttpCode(200)
   @ApiZodBody(TransitionRequestSchema)
   transition(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(TransitionRequestSchema)) body: TransitionRequest) {
@@ -55,13 +58,14 @@ export class JobsController {
   }
 
   @Get(':id/events')
+  @Can('jobs.view')
   events(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.jobs.events(user, id);
   }
 
   /** The final check belongs to the job's flow: ready needs a passed one. */
   @Post(':id/final-check')
-  @Roles('manager', 'mechanic')
+  @Can('jobs.final_check')
   @ApiZodBody(FinalCheckRequestSchema)
   finalCheck(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(FinalCheckRequestSchema)) body: FinalCheckRequest) {
     return this.jobs.recordFinalCheck(user, id, body);

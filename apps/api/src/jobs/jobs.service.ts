@@ -24,23 +24,12 @@ import { CustomersService } from '../customers';
 import { CLOCK, type Clock } from '../infra/clock';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
+import { JobAccess, type JobRef, toJobRef } from './job-access.service';
 import { type JobRow, JobsRepository } from './jobs.repository';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
 
-/** What other features get from getOwned: enough to scope and label their own rows. */
-export interface JobRef {
-  id: number;
-  shopId: number;
-  number: string;
-  status: JobRow['status'];
-  bikeId: number;
-  customerId: number;
-  mechanicId: number | null;
-}
 
 type Actor = Pick<AuthUser, 'id' | 'shopId'>;
-
-const toRef = (j: JobRow): JobRef => ({ id: j.id, shopId: j.shopId, number: j.number, status: j.status, bikeId: j.bikeId, customerId: j.customerId, mechanicId: j.mechanicId });
 
 @Injectable()
 export class JobsService {
@@ -51,6 +40,7 @@ export class JobsService {
     private readonly users: UsersService,
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
+    private readonly access: JobAccess,
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly emitter: EventEmitter2,
   ) {}
@@ -72,11 +62,6 @@ export class JobsService {
     const job = this.repo.find(actor.shopId, id);
     if (!job) throw notFound('Job');
     return job;
-  }
-
-  /** The job if it exists in the caller's shop, else NOT_FOUND (other features call this first). */
-  getOwned(actor: Pick<AuthUser, 'shopId'>, jobId: number): JobRef {
-    return toRef(this.load(actor, jobId));
   }
 
   list(actor: AuthUser, query: JobListQuery): JobPage {
@@ -151,7 +136,7 @@ export class JobsService {
   }
 
   update(actor: AuthUser, id: number, patch: UpdateJobRequest): JobDetail {
-    this.load(actor, id);
+    this.access.change(actor, id, 'job');
     this.checkStaff(actor, patch.mechanicId);
     this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
     this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });

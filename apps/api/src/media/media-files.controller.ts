@@ -2,7 +2,7 @@ import { Controller, Get, Headers, HttpCode, Param, ParseIntPipe, Post, Res } fr
 import { ApiParam, ApiTags } from '@nestjs/swagger';
 import { MEDIA_VARIANTS, MediaVariantSchema, type MediaVariant } from '@benchproof/contracts';
 import type { Response } from 'express';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { zod } from '../core/http';
 import { MediaFilesService } from './media-files.service';
 import { MediaService } from './media.service';
@@ -17,11 +17,13 @@ export class MediaFilesController {
   ) {}
 
   @Get(':id/original')
+  @Can('media.view')
   original(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Headers() h: Record<string, string | undefined>, @Res() res: Response) {
     return this.send(user, id, 'original', h, res);
   }
 
   @Get(':id/:variant')
+  @Can('media.view')
   @ApiParam({ name: 'variant', enum: MEDIA_VARIANTS })
   variant(
     @CurrentUser() user: AuthUser,
@@ -35,7 +37,7 @@ export class MediaFilesController {
 
   /** Removes the files of a soft-deleted asset for good (manager only; audited). */
   @Post(':id/purge')
-  @Roles('manager')
+  @Can('media.purge')
   @HttpCode(204)
   purge(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.media.purge(user, id);

@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { MediaVariant } from '@benchproof/contracts';
+import { roleCan, type MediaVariant } from '@benchproof/contracts';
 import type { Readable } from 'node:stream';
 import type { AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
@@ -55,7 +55,7 @@ export class MediaFilesService {
 
   private locate(actor: AuthUser, id: number, variant: MediaVariant | 'original'): { key: string; sha256: string; mime: string } {
     const row = this.repo.findInShop(actor.shopId, id);
-    const hidden = !row || row.purgedAt || (row.deletedAt && actor.role !== 'manager');
+    const hidden = !row || row.purgedAt || (row.deletedAt && !roleCan(actor.role, 'media.view_deleted'));
     if (!row || hidden || !row.originalKey) throw notFound('Media');
     if (variant === 'original') return { key: row.originalKey, sha256: row.sha256, mime: row.mime };
     const d = this.repo.findDerivative(row.id, variant);

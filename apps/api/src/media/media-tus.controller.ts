@@ -1,7 +1,7 @@
 import { Controller, Delete, Get, Param, Patch, Post, Req, Res } from '@nestjs/common';
 import { ApiHeader, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
-import { CurrentUser, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { MediaTusService } from './media-tus.service';
 
 /**
@@ -17,12 +17,14 @@ export class MediaTusController {
   constructor(private readonly tus: MediaTusService) {}
 
   @Post()
+  @Can('media.upload')
   @ApiOperation({ summary: 'Create a resumable upload; Upload-Metadata carries jobId, phase, area, source, caption, filename' })
   create(@CurrentUser() user: AuthUser, @Req() req: Request, @Res() res: Response) {
     return this.tus.handle(user, null, req, res);
   }
 
   @Get(':uploadId')
+  @Can('media.upload')
   @ApiOperation({ summary: 'GET: state of the upload (JSON). HEAD: tus offset check.' })
   async state(@CurrentUser() user: AuthUser, @Param('uploadId') uploadId: string, @Req() req: Request, @Res() res: Response) {
     if (req.method === 'HEAD') return this.tus.handle(user, uploadId, req, res);
@@ -30,12 +32,14 @@ export class MediaTusController {
   }
 
   @Patch(':uploadId')
+  @Can('media.upload')
   @ApiOperation({ summary: 'Append bytes at Upload-Offset (Content-Type: application/offset+octet-stream)' })
   append(@CurrentUser() user: AuthUser, @Param('uploadId') uploadId: string, @Req() req: Request, @Res() res: Response) {
     return this.tus.handle(user, uploadId, req, res);
   }
 
   @Delete(':uploadId')
+  @Can('media.upload')
   @ApiOperation({ summary: 'Abandon an unfinished upload (tus termination)' })
   terminate(@CurrentUser() user: AuthUser, @Param('uploadId') uploadId: string, @Req() req: Request, @Res() res: Response) {
     return this.tus.handle(user, uploadId, req, res);

@@ -23,7 +23,7 @@ export class MediaUploadService {
   async uploadBatch(actor: AuthUser, jobIdParam: string, files: IncomingFile[], fields: unknown): Promise<{ status: 201 | 207; body: UploadBatchResult }> {
     try {
       const jobId = parseId(jobIdParam);
-      this.media.assertJob(actor, jobId);
+      this.media.assertOpenJob(actor, jobId);
       const meta = new ZodPipe(UploadMetaSchema).transform(fields);
       if (!files.length) throw new DomainError('VALIDATION_FAILED', 'Attach at least one file in the "files" field.');
       const results: UploadFileResult[] = [];

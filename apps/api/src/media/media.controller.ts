@@ -12,7 +12,7 @@ import {
   type RetagRequest,
 } from '@benchproof/contracts';
 import type { Response } from 'express';
-import { CurrentUser, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
 import { MediaUploadService } from './media-upload.service';
 import { MediaService } from './media.service';
@@ -28,6 +28,7 @@ export class MediaController {
 
   /** Several files in `files` plus the tags; 201 all stored, 207 some stored (see UploadBatchResult). */
   @Post('jobs/:jobId/media')
+  @Can('media.upload')
   @UseInterceptors(FilesInterceptor('files', MAX_FILES_PER_BATCH))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: UPLOAD_FORM })
@@ -44,23 +45,27 @@ export class MediaController {
   }
 
   @Get('jobs/:jobId/media')
+  @Can('media.view')
   @ApiZodQuery(MediaListQuerySchema)
   list(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Query(zod(MediaListQuerySchema)) q: MediaListQuery) {
     return this.media.list(user, jobId, q);
   }
 
   @Patch('jobs/:jobId/media')
+  @Can('media.edit')
   @ApiZodBody(RetagRequestSchema)
   retag(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(RetagRequestSchema)) body: RetagRequest) {
     return this.media.retag(user, jobId, body);
   }
 
   @Get('jobs/:jobId/media/:id')
+  @Can('media.view')
   get(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('id', ParseIntPipe) id: number) {
     return this.media.get(user, jobId, id);
   }
 
   @Patch('jobs/:jobId/media/:id')
+  @Can('media.edit')
   @ApiZodBody(RetagOneRequestSchema)
   retagOne(
     @CurrentUser() user: AuthUser,
@@ -72,6 +77,7 @@ export class MediaController {
   }
 
   @Delete('jobs/:jobId/media/:id')
+  @Can('media.edit')
   @HttpCode(204)
   remove(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('id', ParseIntPipe) id: number): void {
     this.media.softDelete(user, jobId, id);
@@ -79,6 +85,7 @@ export class MediaController {
 
   /** The poster frame of a video, captured in the browser (field `file`, an image). */
   @Put('jobs/:jobId/media/:id/poster')
+  @Can('media.upload')
   @UseInterceptors(FileInterceptor('file'))
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } })
@@ -87,11 +94,13 @@ export class MediaController {
   }
 
   @Get('jobs/:jobId/findings/:findingId/media')
+  @Can('media.view')
   findingMedia(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('findingId', ParseIntPipe) findingId: number) {
     return this.media.findingMedia(user, jobId, findingId);
   }
 
   @Put('jobs/:jobId/findings/:findingId/media')
+  @Can('media.edit')
   @ApiZodBody(FindingMediaRequestSchema)
   linkFindingMedia(
     @CurrentUser() user: AuthUser,

@@ -1,11 +1,11 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { FindingMediaDto, MediaAssetDto, MediaListQuery, RetagOneRequest, RetagRequest } from '@benchproof/contracts';
+import { roleCan, type FindingMediaDto, type MediaAssetDto, type MediaListQuery, type RetagOneRequest, type RetagRequest } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { FindingsService } from '../findings';
 import { CLOCK, type Clock } from '../infra/clock';
-import { JobsService } from '../jobs';
+import { JobAccess } from '../jobs';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
@@ -15,7 +15,7 @@ import { MediaRepository, type MediaAssetRow } from './media.repository';
 export class MediaService {
   constructor(
     private readonly repo: MediaRepository,
-    private readonly jobs: JobsService,
+    private readonly jobs: JobAccess,
     private readonly findings: FindingsService,
     private readonly derivatives: MediaDerivativesService,
     private readonly audit: AuditService,
@@ -24,12 +24,17 @@ export class MediaService {
 
   /** Throws NOT_FOUND unless the job belongs to the caller's shop. */
   assertJob(actor: AuthUser, jobId: number): void {
-    this.jobs.getOwned(actor, jobId);
+    this.jobs.read(actor, jobId);
+  }
+
+  /** As assertJob, and the job's evidence is not frozen (JOB_CLOSED after handover unless a manager overrides). */
+  assertOpenJob(actor: AuthUser, jobId: number): void {
+    this.jobs.change(actor, jobId, 'media');
   }
 
   list(actor: AuthUser, jobId: number, q: MediaListQuery): MediaAssetDto[] {
     this.assertJob(actor, jobId);
-    const includeDeleted = q.includeDeleted === true && actor.role === 'manager';
+    const includeDeleted = q.includeDeleted === true && roleCan(actor.role, 'media.view_deleted');
     return this.toDtos(this.repo.listForJob(actor.shopId, jobId, { ...q, includeDeleted }));
   }
 
@@ -42,7 +47,7 @@ export class MediaService {
   }
 
   retag(actor: AuthUser, jobId: number, req: RetagRequest): MediaAssetDto[] {
-    this.assertJob(actor, jobId);
+    this.assertOpenJob(actor, jobId);
     const { ids, ...tags } = req;
     const patch = Object.fromEntries(Object.entries(tags).filter(([, v]) => v !== undefined));
     const updated = this.repo.transaction(() => {
@@ -57,13 +62,17 @@ export class MediaService {
 
   /** Soft delete: hidden from the job, original and derivatives kept until a manager purges. */
   softDelete(actor: AuthUser, jobId: number, id: number): void {
+    this.assertOpenJob(actor, jobId);
     const row = this.owned(actor, jobId, id);
     if (row.deletedAt) return;
     this.repo.update(id, { deletedAt: this.clock.now(), deletedBy: actor.id });
     this.audit.record(actor, { action: 'media.deleted', entityType: 'media_asset', entityId: id, details: { jobId, sha256: row.sha256 } });
   }
 
-  /** Removes the files of a soft-deleted asset for good; the row stays as a tombstone for the audit trail. */
+  /**
+   * Removes the files of a soft-deleted asset for good; the row stays as a tombstone for the audit trail.
+   * Allowed on a collected job too: it removes only what was already deleted (privacy housekeeping).
+   */
   async purge(actor: AuthUser, id: number): Promise<void> {
     const row = this.repo.findInShop(actor.shopId, id);
     if (!row || row.purgedAt) throw notFound('Media');
@@ -78,7 +87,8 @@ export class MediaService {
 
   /** Replaces the shots shown with a finding (order kept); they must be live media of the same job. */
   linkToFinding(actor: AuthUser, jobId: number, findingId: number, assetIds: number[]): FindingMediaDto {
-    this.findings.getOwned(actor, jobId, findingId);
+    this.assertOpenJob(actor, jobId);
+    this.findings.assertFinding(actor, jobId, findingId);
     const unique = [...new Set(assetIds)];
     const rows = this.repo.listByIds(actor.shopId, jobId, unique);
     const missing = unique.filter((id) => !rows.some((r) => r.id === id));
@@ -89,7 +99,7 @@ export class MediaService {
   }
 
   findingMedia(actor: AuthUser, jobId: number, findingId: number): FindingMediaDto {
-    this.findings.getOwned(actor, jobId, findingId);
+    this.findings.assertFinding(actor, jobId, findingId);
     const ids = this.repo.linksOf(findingId);
     const rows = this.repo.listByIds(actor.shopId, jobId, ids);
     const ordered = ids.map((id) => rows.find((r) => r.id === id)).filter((r): r is MediaAssetRow => Boolean(r));
@@ -100,7 +110,7 @@ export class MediaService {
   owned(actor: AuthUser, jobId: number, id: number): MediaAssetRow {
     this.assertJob(actor, jobId);
     const row = this.repo.findInShop(actor.shopId, id);
-    if (!row || row.jobId !== jobId || row.purgedAt || (row.deletedAt && actor.role !== 'manager')) throw notFound('Media');
+    if (!row || row.jobId !== jobId || row.purgedAt || (row.deletedAt && !roleCan(actor.role, 'media.view_deleted'))) throw notFound('Media');
     return row;
   }
 

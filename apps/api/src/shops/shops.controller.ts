@@ -1,7 +1,7 @@
 import { Body, Controller, Get, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { UpdateShopSettingsRequestSchema, type UpdateShopSettingsRequest } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { ShopsService } from './shops.service';
 
@@ -11,12 +11,13 @@ export class ShopsController {
   constructor(private readonly shops: ShopsService) {}
 
   @Get('settings')
+  @Can('shop.view')
   settings(@CurrentUser() user: AuthUser) {
     return this.shops.settings(user.shopId);
   }
 
   @Patch('settings')
-  @Roles('manager')
+  @Can('shop.edit')
   @ApiZodBody(UpdateShopSettingsRequestSchema)
   update(@CurrentUser() user: AuthUser, @Body(zod(UpdateShopSettingsRequestSchema)) body: UpdateShopSettingsRequest) {
     return this.shops.update(user, body);

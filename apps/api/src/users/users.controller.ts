@@ -1,7 +1,7 @@
 import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CreateUserRequestSchema, UpdateUserRequestSchema, type CreateUserRequest, type UpdateUserRequest } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { UsersService } from './users.service';
 
@@ -12,19 +12,20 @@ export class UsersController {
 
   /** Every role can list the shop's staff (pickers for mechanic and final checker). */
   @Get()
+  @Can('users.view')
   list(@CurrentUser() user: AuthUser) {
     return this.users.list(user);
   }
 
   @Post()
-  @Roles('manager')
+  @Can('users.manage')
   @ApiZodBody(CreateUserRequestSchema)
   create(@CurrentUser() user: AuthUser, @Body(zod(CreateUserRequestSchema)) body: CreateUserRequest) {
     return this.users.create(user, body);
   }
 
   @Patch(':id')
-  @Roles('manager')
+  @Can('users.manage')
   @ApiZodBody(UpdateUserRequestSchema)
   update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateUserRequestSchema)) body: UpdateUserRequest) {
     return this.users.update(user, id, body);

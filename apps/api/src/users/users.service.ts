@@ -59,11 +59,12 @@ export class UsersService {
   /**
    * The staff member for these credentials, or null. Unknown e-mails still pay for
    * one hash check so response times do not reveal which addresses have accounts.
+   * The password hash never leaves this feature: callers get the session identity only.
    */
-  async verifyCredentials(email: string, password: string): Promise<UserRow | null> {
+  async verifyCredentials(email: string, password: string): Promise<AuthUser | null> {
     const user = this.repo.findByEmail(email.trim().toLowerCase());
     const ok = await verifyPassword(user?.passwordHash ?? (await this.dummyHash()), password);
-    return ok && user?.active ? user : null;
+    return ok && user?.active ? { id: user.id, shopId: user.shopId, role: user.role, email: user.email, name: user.name } : null;
   }
 
   private dummy?: Promise<string>;

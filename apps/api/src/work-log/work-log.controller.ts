@@ -1,7 +1,7 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { TorqueEntryRequestSchema, WorkEntryRequestSchema, type TorqueEntryRequest, type WorkEntryRequest } from '@benchproof/contracts';
-import { CurrentUser, Roles, type AuthUser } from '../core/auth';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { WorkLogService } from './work-log.service';
 
@@ -11,31 +11,33 @@ export class WorkLogController {
   constructor(private readonly log: WorkLogService) {}
 
   @Get('work-entries')
+  @Can('work_log.view')
   listWork(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.log.listWork(user, id);
   }
 
   @Post('work-entries')
-  @Roles('manager', 'mechanic')
+  @Can('work_log.record')
   @ApiZodBody(WorkEntryRequestSchema)
   addWork(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(WorkEntryRequestSchema)) body: WorkEntryRequest) {
     return this.log.addWork(user, id, body);
   }
 
   @Delete('work-entries/:entryId')
+  @Can('work_log.record')
   @HttpCode(204)
-  @Roles('manager', 'mechanic')
   deleteWork(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Param('entryId', ParseIntPipe) entryId: number) {
     this.log.deleteWork(user, id, entryId);
   }
 
   @Get('torque-entries')
+  @Can('work_log.view')
   listTorque(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number) {
     return this.log.listTorque(user, id);
   }
 
   @Post('torque-entries')
-  @Roles('manager', 'mechanic')
+  @Can('work_log.record')
   @ApiZodBody(TorqueEntryRequestSchema)
   addTorque(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(TorqueEntryRequestSchema)) body: TorqueEntryRequest) {
     return this.log.addTorque(user, id, body);

@@ -1,15 +1,15 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { TorqueEntryDto, TorqueEntryRequest, WorkEntryDto, WorkEntryRequest } from '@benchproof/contracts';
-import { isDomainInputError, isTerminalStatus, isWrenchCalibrationOverdue, latestCalendarDate, torqueVerdict, type TorqueVerdict } from '@benchproof/domain';
+import { isDomainInputError, isWrenchCalibrationOverdue, latestCalendarDate, torqueVerdict, type TorqueVerdict } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
-import { JobsService } from '../jobs';
+import { JobAccess } from '../jobs';
 import { UsersService } from '../users';
+import type { StoredTorqueInput } from '../db/schema';
 import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
 
-type StoredTorqueInput = Pick<TorqueEntryRequest, 'specified' | 'applied'> & { tolerancePct: number | null };
 
 const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto => ({
   id: w.id,
@@ -22,8 +22,7 @@ const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto =>
 });
 
 function toTorqueDto(t: TorqueEntryRow, staff: Map<number, string>): TorqueEntryDto {
-  const input = t.input as unknown as StoredTorqueInput;
-  const v = t.result as unknown as TorqueVerdict;
+  const { input, result: v } = t;
   return {
     id: t.id,
     fastener: t.fastener,
@@ -56,7 +55,7 @@ function toTorqueDto(t: TorqueEntryRow, staff: Map<number, string>): TorqueEntry
 export class WorkLogService {
   constructor(
     private readonly repo: WorkLogRepository,
-    private readonly jobs: JobsService,
+    private readonly jobs: JobAccess,
     private readonly users: UsersService,
     private readonly audit: AuditService,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -66,13 +65,13 @@ export class WorkLogService {
     return new Map(this.users.list(actor).map((u) => [u.id, u.name]));
   }
 
+  /** JobAccess's per-object check: in the caller's shop and still open (or a manager's audited override). */
   private openJob(actor: AuthUser, jobId: number): void {
-    const job = this.jobs.getOwned(actor, jobId);
-    if (isTerminalStatus(job.status)) throw new DomainError('CONFLICT', 'The job is closed; its records can no longer change.', { status: job.status });
+    this.jobs.change(actor, jobId, 'work_log');
   }
 
   listWork(actor: AuthUser, jobId: number): WorkEntryDto[] {
-    this.jobs.getOwned(actor, jobId);
+    this.jobs.read(actor, jobId);
     const staff = this.staff(actor);
     return this.repo.workEntries(actor.shopId, jobId).map((w) => toWorkDto(w, staff));
   }
@@ -91,7 +90,7 @@ export class WorkLogService {
   }
 
   listTorque(actor: AuthUser, jobId: number): TorqueEntryDto[] {
-    this.jobs.getOwned(actor, jobId);
+    this.jobs.read(actor, jobId);
     const staff = this.staff(actor);
     return this.repo.torqueEntries(actor.shopId, jobId).map((t) => toTorqueDto(t, staff));
   }

@@ -1,58 +1,85 @@
-import { DEMO, startTestApp, type TestApp } from '../test-app';
+import { ACCESS_POLICY, ACTIONS, MEDIA_VARIANTS, ROLES, roleCan, type Action } from '@benchproof/contracts';
+import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 
 interface Operation {
+  route: string;
   path: string;
-  method: string;
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
   public: boolean;
-  roles: string[] | undefined;
+  action: Action | undefined;
 }
 
 /** Every operation in the OpenAPI document, so routes added later are covered automatically. */
 async function operations(t: TestApp): Promise<Operation[]> {
   const doc = (await t.http().get('/api/docs-json').expect(200)).body as {
-    paths: Record<string, Record<string, { 'x-public'?: boolean; 'x-roles'?: string[] }>>;
+    paths: Record<string, Record<string, { 'x-public'?: boolean; 'x-action'?: Action }>>;
   };
   return Object.entries(doc.paths).flatMap(([path, ops]) =>
-    Object.entries(ops).map(([method, op]) => ({ path, method, public: op['x-public'] === true, roles: op['x-roles'] })),
+    Object.entries(ops).map(([method, op]) => ({
+      route: `${method.toUpperCase()} ${path}`, path, method: method as Operation['method'], public: op['x-public'] === true, action: op['x-action'],
+    })),
   );
 }
 
-/** Fills `{id}`-style path parameters with an id that exists in the demo shop (1). */
-const concrete = (path: string) => path.replace(/\{[^}]+\}/g, '1');
+/** Fills `{id}`-style path parameters with an id that exists in the demo shop (1), and a real variant name. */
+const concrete = (path: string) => path.replace('{variant}', MEDIA_VARIANTS[0]).replace(/\{[^}]+\}/g, '1');
+const call = (who: SignedIn, op: Operation) => who.agent[op.method](concrete(op.path)).send({});
 
-describe('route matrix from the OpenAPI document', () => {
+describe('route matrix from the OpenAPI document and ACCESS_POLICY', () => {
   let t: TestApp;
   let ops: Operation[];
+  let guarded: Operation[];
   beforeAll(async () => {
     t = await startTestApp();
     ops = await operations(t);
+    guarded = ops.filter((o) => !o.public);
   });
   afterAll(() => t.close());
 
   it('documents the foundation routes', () => {
-    const listed = ops.map((o) => `${o.method.toUpperCase()} ${o.path}`);
-    expect(listed).toEqual(expect.arrayContaining(['GET /api/health', 'POST /api/auth/login', 'GET /api/users', 'PATCH /api/users/{id}', 'GET /api/shop/settings']));
+    expect(ops.map((o) => o.route)).toEqual(expect.arrayContaining(['GET /api/health', 'POST /api/auth/login', 'GET /api/users', 'PATCH /api/users/{id}', 'GET /api/shop/settings']));
+  });
+
+  it('names a policy action on every signed-in route', () => {
+    expect(guarded.length).toBeGreaterThan(3);
+    expect(guarded.filter((o) => !o.action || !ACTIONS.includes(o.action)).map((o) => o.route)).toEqual([]);
   });
 
   it('answers 401 with the standard error body on every non-public route without a session', async () => {
-    const guarded = ops.filter((o) => !o.public);
-    expect(guarded.length).toBeGreaterThan(3);
     for (const op of guarded) {
-      const res = await t.http()[op.method as 'get'](concrete(op.path)).send({});
-      expect({ route: `${op.method} ${op.path}`, status: res.status }).toEqual({ route: `${op.method} ${op.path}`, status: 401 });
+      const res = await t.http()[op.method](concrete(op.path)).send({});
+      expect({ route: op.route, status: res.status }).toEqual({ route: op.route, status: 401 });
       expect(res.body).toMatchObject({ code: 'UNAUTHENTICATED', message: expect.any(String) });
     }
   });
 
-  it('answers 403 to every role a route does not list', async () => {
-    const limited = ops.filter((o) => o.roles?.length);
-    expect(limited.some((o) => o.roles?.length === 1 && o.roles[0] === 'manager')).toBe(true);
+  it('never lets staff call an owner-only action', () => {
+    const ownerOnly = guarded.filter((o) => o.action && ROLES.every((r) => !roleCan(r, o.action!)));
+    expect(ownerOnly.map((o) => o.route)).toEqual([]);
+  });
+
+  it('answers 404 to staff of another shop on every route that names a record', async () => {
+    const strangers = [await t.signIn(DEMO.otherShopManager), await t.signIn(DEMO.otherShopMechanic)];
+    const named = guarded.filter((o) => o.path.includes('{') && !o.path.includes('/tus/'));
+    expect(named.length).toBeGreaterThan(10);
+    for (const op of named) {
+      for (const who of strangers.filter((s) => roleCan(s.user.role as 'manager', op.action!))) {
+        const res = await call(who, op);
+        // A bad body may be refused before the lookup (400); it must never succeed or reveal the record.
+        const expected = op.method === 'get' || op.method === 'delete' || op.route.endsWith('/purge') ? [404] : [400, 404];
+        expect({ route: op.route, role: who.user.role, status: expected.includes(res.status) ? 'hidden' : res.status }).toEqual({ route: op.route, role: who.user.role, status: 'hidden' });
+      }
+    }
+  });
+
+  it('answers 403 FORBIDDEN exactly to the roles ACCESS_POLICY leaves out, and lets the others through', async () => {
     const users = { manager: await t.signIn(DEMO.manager), desk: await t.signIn(DEMO.desk), mechanic: await t.signIn(DEMO.mechanic) };
-    for (const op of limited) {
-      for (const role of (['manager', 'desk', 'mechanic'] as const).filter((r) => !op.roles?.includes(r))) {
-        const res = await users[role].agent[op.method as 'get'](concrete(op.path)).send({});
-        expect({ route: `${op.method} ${op.path}`, role, status: res.status }).toEqual({ route: `${op.method} ${op.path}`, role, status: 403 });
-        expect(res.body.code).toBe('FORBIDDEN');
+    for (const op of guarded) {
+      for (const role of ROLES) {
+        const allowed = ACCESS_POLICY[op.action!].staff.some((r) => r === role);
+        const res = await call(users[role], op);
+        const seen = res.status === 403 && res.body.code === 'FORBIDDEN' ? 'forbidden' : 'let through';
+        expect({ route: op.route, role, seen }).toEqual({ route: op.route, role, seen: allowed ? 'let through' : 'forbidden' });
       }
     }
   });

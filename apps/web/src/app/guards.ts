@@ -1,4 +1,4 @@
-import type { Role } from '@benchproof/contracts';
+import { roleCan, type Action } from '@benchproof/contracts';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import { sessionHasExpired, sessionQuery } from '../features/auth';
 import { queryClient } from '../lib/query-client';
@@ -14,13 +14,13 @@ export async function requireSession({ request }: LoaderFunctionArgs) {
   return null;
 }
 
-/** Loader for role-limited pages; other roles are sent to the jobs page. */
-export const requireRole =
-  (...roles: Role[]) =>
+/** Loader for pages limited by ACCESS_POLICY; roles that may not do `action` are sent to the jobs page. */
+export const requireAction =
+  (action: Action) =>
   async (args: LoaderFunctionArgs) => {
     // Child loaders run alongside the parent's, so this one must send a visitor to sign-in too.
     await requireSession(args);
     const user = await queryClient.ensureQueryData(sessionQuery);
-    if (!user || !roles.includes(user.role)) throw redirect('/jobs');
+    if (!user || !roleCan(user.role, action)) throw redirect('/jobs');
     return null;
   };

@@ -1,6 +1,6 @@
 import type { ComponentType } from 'react';
 import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
-import { requireRole, requireSession } from './guards';
+import { requireAction, requireSession } from './guards';
 import { SignInRoute } from './routes/auth/sign-in.route';
 import { NotFoundRoute } from './routes/errors/not-found.route';
 import { RouteError } from './routes/errors/route-error';
@@ -15,16 +15,16 @@ const page =
 const signedIn: RouteObject[] = [
   { index: true, element: <Navigate to="/jobs" replace /> },
   { path: 'jobs', lazy: page(() => import('./routes/jobs/jobs.route'), (m) => m.JobsRoute) },
-  { path: 'jobs/new', loader: requireRole('manager', 'desk'), lazy: page(() => import('./routes/jobs/book-in.route'), (m) => m.BookInRoute) },
+  { path: 'jobs/new', loader: requireAction('jobs.book_in'), lazy: page(() => import('./routes/jobs/book-in.route'), (m) => m.BookInRoute) },
   { path: 'jobs/:jobId', lazy: page(() => import('./routes/jobs/job.route'), (m) => m.JobRoute) },
   { path: 'jobs/:jobId/capture', lazy: page(() => import('./routes/jobs/capture.route'), (m) => m.CaptureRoute) },
   { path: 'jobs/:jobId/scope', lazy: page(() => import('./routes/jobs/scope.route'), (m) => m.ScopeRoute) },
   { path: 'customers', lazy: page(() => import('./routes/customers/customers.route'), (m) => m.CustomersRoute) },
   { path: 'customers/:customerId', lazy: page(() => import('./routes/customers/customer.route'), (m) => m.CustomerRoute) },
   { path: 'bikes/:bikeId', lazy: page(() => import('./routes/bikes/bike.route'), (m) => m.BikeRoute) },
-  { path: 'showcase', loader: requireRole('manager'), lazy: page(() => import('./routes/showcase/showcase.route'), (m) => m.ShowcaseRoute) },
-  { path: 'settings/users', loader: requireRole('manager'), lazy: page(() => import('./routes/settings/users.route'), (m) => m.UsersRoute) },
-  { path: 'settings/shop', loader: requireRole('manager'), lazy: page(() => import('./routes/settings/shop.route'), (m) => m.ShopSettingsRoute) },
+  { path: 'showcase', loader: requireAction('showcase.manage'), lazy: page(() => import('./routes/showcase/showcase.route'), (m) => m.ShowcaseRoute) },
+  { path: 'settings/users', loader: requireAction('users.manage'), lazy: page(() => import('./routes/settings/users.route'), (m) => m.UsersRoute) },
+  { path: 'settings/shop', loader: requireAction('shop.edit'), lazy: page(() => import('./routes/settings/shop.route'), (m) => m.ShopSettingsRoute) },
   { path: '*', element: <NotFoundRoute /> },
 ];
 

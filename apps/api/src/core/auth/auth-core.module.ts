@@ -6,9 +6,9 @@ import { APP_CONFIG, type AppConfig } from '../../config';
 import { CSRF, CsrfGuard, csrfFactory } from './csrf';
 import { JwtAuthGuard } from './jwt-auth.guard';
 import { JwtStrategy } from './jwt.strategy';
-import { RolesGuard } from './roles.guard';
+import { PolicyGuard } from './policy.guard';
 
-/** Sessions for the whole API: the global guards run in order session → role → CSRF. */
+/** Sessions for the whole API: the global guards run in order session → policy → CSRF. */
 @Global()
 @Module({
   imports: [
@@ -25,7 +25,7 @@ import { RolesGuard } from './roles.guard';
     JwtStrategy,
     { provide: CSRF, inject: [APP_CONFIG], useFactory: csrfFactory },
     { provide: APP_GUARD, useClass: JwtAuthGuard },
-    { provide: APP_GUARD, useClass: RolesGuard },
+    { provide: APP_GUARD, useClass: PolicyGuard },
     { provide: APP_GUARD, useClass: CsrfGuard },
   ],
   exports: [JwtModule, CSRF],

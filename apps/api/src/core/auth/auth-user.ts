@@ -1,4 +1,6 @@
-export type Role = 'manager' | 'desk' | 'mechanic';
+import type { Role } from '@benchproof/contracts';
+
+export type { Role };
 
 /** Who is calling: every service call is scoped by `shopId`. */
 export interface AuthUser {

@@ -1,21 +1,32 @@
 import { applyDecorators, createParamDecorator, type ExecutionContext, SetMetadata } from '@nestjs/common';
 import { ApiExtension } from '@nestjs/swagger';
+import { type Action, type Actor, rolesFor } from '@benchproof/contracts';
 import type { Request } from 'express';
-import type { AuthUser, Role } from './auth-user';
+import type { AuthUser } from './auth-user';
 
 export const IS_PUBLIC = 'benchproof:public';
-export const ROLES = 'benchproof:roles';
+export const ACTION = 'benchproof:action';
 
 /** Lets a route answer without a session; marked `x-public` in the OpenAPI document too. */
 export const Public = (): MethodDecorator & ClassDecorator =>
   applyDecorators(SetMetadata(IS_PUBLIC, true), ApiExtension('x-public', true));
 
-/** Limits a route to the given roles; marked `x-roles` in the OpenAPI document. */
-export const Roles = (...roles: Role[]): MethodDecorator & ClassDecorator =>
-  applyDecorators(SetMetadata(ROLES, roles), ApiExtension('x-roles', roles));
+/**
+ * Names the policy action a route performs (ACCESS_POLICY in libs/contracts). The
+ * PolicyGuard lets the caller through only if the policy allows it; the OpenAPI
+ * document carries the action (`x-action`) and the roles it resolves to (`x-roles`).
+ */
+export const Can = (action: Action): MethodDecorator & ClassDecorator =>
+  applyDecorators(SetMetadata(ACTION, action), ApiExtension('x-action', action), ApiExtension('x-roles', rolesFor(action)));
 
 /** The signed-in staff member, as checked by the session guard. */
 export const CurrentUser = createParamDecorator((_: unknown, ctx: ExecutionContext): AuthUser => {
   const req = ctx.switchToHttp().getRequest<Request & { user: AuthUser }>();
   return req.user;
+});
+
+/** Who is calling, staff or owner link, as set by the policy guard or the owner-link guard. */
+export const CurrentActor = createParamDecorator((_: unknown, ctx: ExecutionContext): Actor => {
+  const req = ctx.switchToHttp().getRequest<Request & { actor: Actor }>();
+  return req.actor;
 });

@@ -1,3 +1,5 @@
+// Type-only: drizzle-kit loads this file without the workspace libs; value lists live in libs/domain and libs/contracts.
+import type { BrakeType, CableRouting, DropoutType, FrameMaterial } from '@benchproof/domain';
 import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { customers } from './customers.table';
@@ -13,15 +15,15 @@ export const bikes = sqliteTable(
     maker: text('maker').notNull(),
     model: text('model').notNull(),
     year: integer('year'),
-    frameMaterial: text('frame_material', { enum: ['steel', 'aluminium', 'carbon', 'titanium', 'other'] }).notNull(),
+    frameMaterial: text('frame_material').$type<FrameMaterial>().notNull(),
     /** '' when not given (the API shows null). */
     size: text('size').notNull().default(''),
     colour: text('colour').notNull().default(''),
     serialNumber: text('serial_number').notNull().default(''),
     drivetrainSpeeds: integer('drivetrain_speeds').notNull(),
-    brakeType: text('brake_type', { enum: ['rim', 'mechanical_disc', 'hydraulic_disc'] }).notNull(),
-    cableRouting: text('cable_routing', { enum: ['external', 'internal'] }).notNull(),
-    dropoutType: text('dropout_type', { enum: ['vertical', 'horizontal'] }).notNull(),
+    brakeType: text('brake_type').$type<BrakeType>().notNull(),
+    cableRouting: text('cable_routing').$type<CableRouting>().notNull(),
+    dropoutType: text('dropout_type').$type<DropoutType>().notNull(),
     notes: text('notes').notNull().default(''),
     /** ISO 5775 designation such as 28-622. */
     tyreSize: text('tyre_size'),

@@ -1,3 +1,5 @@
+// Type-only: drizzle-kit loads this file without the workspace libs; value lists live in libs/domain and libs/contracts.
+import type { ContactChannel } from '@benchproof/contracts';
 import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { shops } from './shops.table';
@@ -13,7 +15,7 @@ export const customers = sqliteTable(
     email: text('email').notNull().default(''),
     phone: text('phone').notNull().default(''),
     notes: text('notes').notNull().default(''),
-    preferredChannel: text('preferred_channel', { enum: ['email', 'phone', 'sms'] }).notNull().default('email'),
+    preferredChannel: text('preferred_channel').$type<ContactChannel>().notNull().default('email'),
     createdAt: timestamp('created_at').notNull(),
     updatedAt: timestamp('updated_at').notNull(),
   },

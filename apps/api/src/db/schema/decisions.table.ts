@@ -1,3 +1,5 @@
+// Type-only: drizzle-kit loads this file without the workspace libs; value lists live in libs/domain and libs/contracts.
+import type { DecisionChannel, DecisionStatus } from '@benchproof/contracts';
 import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { jobs } from './jobs.table';
@@ -17,8 +19,8 @@ export const decisions = sqliteTable(
     shopId: integer('shop_id').notNull().references(() => shops.id),
     jobId: integer('job_id').notNull().references(() => jobs.id),
     recommendationId: integer('recommendation_id').notNull().references(() => recommendations.id),
-    status: text('status', { enum: ['pending', 'approved', 'declined'] }).notNull(),
-    channel: text('channel', { enum: ['phone', 'in_person', 'email', 'owner_link'] }).notNull(),
+    status: text('status').$type<DecisionStatus>().notNull(),
+    channel: text('channel').$type<DecisionChannel>().notNull(),
     decidedByName: text('decided_by_name').notNull(),
     recordedBy: integer('recorded_by').references(() => users.id),
     note: text('note').notNull().default(''),

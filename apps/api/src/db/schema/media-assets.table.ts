@@ -1,4 +1,5 @@
 // Type-only: drizzle-kit loads this file without the workspace libs.
+import type { DerivativeStatus } from '@benchproof/contracts';
 import type { MediaArea, MediaKind, MediaPhase, MediaSource } from '@benchproof/domain';
 import { type AnySQLiteColumn, index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
@@ -35,7 +36,7 @@ export const mediaAssets = sqliteTable(
     uploadedBy: integer('uploaded_by').notNull().references(() => users.id),
     sourceAssetId: integer('source_asset_id').references((): AnySQLiteColumn => mediaAssets.id),
     timecodeMs: integer('timecode_ms'),
-    derivativeStatus: text('derivative_status', { enum: ['pending', 'ready', 'failed'] }).notNull(),
+    derivativeStatus: text('derivative_status').$type<DerivativeStatus>().notNull(),
     derivativeError: text('derivative_error'),
     deletedAt: timestamp('deleted_at'),
     deletedBy: integer('deleted_by').references(() => users.id),

@@ -1,3 +1,5 @@
+// Type-only: drizzle-kit loads this file without the workspace libs; value lists live in libs/domain and libs/contracts.
+import type { MediaVariant } from '@benchproof/contracts';
 import { integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { id } from './columns';
 import { mediaAssets } from './media-assets.table';
@@ -8,7 +10,7 @@ export const mediaDerivatives = sqliteTable(
   {
     id: id(),
     assetId: integer('asset_id').notNull().references(() => mediaAssets.id),
-    variant: text('variant', { enum: ['thumb', 'screen', 'print', 'poster'] }).notNull(),
+    variant: text('variant').$type<MediaVariant>().notNull(),
     key: text('key').notNull(),
     width: integer('width').notNull(),
     height: integer('height').notNull(),

@@ -1,3 +1,6 @@
+// Type-only: drizzle-kit loads this file without the workspace libs; value lists live in libs/domain and libs/contracts.
+import type { DecisionStatus } from '@benchproof/contracts';
+import type { Urgency } from '@benchproof/domain';
 import { index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { findings } from './findings.table';
@@ -27,14 +30,14 @@ export const recommendations = sqliteTable(
     findingId: integer('finding_id').notNull().references(() => findings.id),
     summary: text('summary').notNull(),
     /** Set by the mechanic; null on rows written before urgency existed (read as the finding condition's default). */
-    urgency: text('urgency', { enum: ['safety', 'soon', 'advisory'] }),
+    urgency: text('urgency').$type<Urgency>(),
     parts: text('parts', { mode: 'json' }).$type<RecommendationPartRow[]>().notNull(),
     labourHundredths: integer('labour_hundredths').notNull(),
     labourRateMinor: integer('labour_rate_minor').notNull(),
     taxRateBp: integer('tax_rate_bp').notNull(),
     currency: text('currency').notNull(),
     /** Latest decision, denormalised from the decisions history. */
-    decisionStatus: text('decision_status', { enum: ['pending', 'approved', 'declined'] }).notNull().default('pending'),
+    decisionStatus: text('decision_status').$type<DecisionStatus>().notNull().default('pending'),
     createdBy: integer('created_by').references(() => users.id),
     createdAt: timestamp('created_at').notNull(),
     updatedAt: timestamp('updated_at').notNull(),

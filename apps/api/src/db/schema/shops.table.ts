@@ -1,3 +1,5 @@
+// Type-only: drizzle-kit loads this file without the workspace libs; value lists live in libs/domain and libs/contracts.
+import type { PageSize, UnitSystem } from '@benchproof/contracts';
 import { integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 
@@ -10,8 +12,8 @@ export const shops = sqliteTable('shops', {
   labourRateMinor: integer('labour_rate_minor').notNull().default(0),
   taxRateBp: integer('tax_rate_bp').notNull().default(0),
   currency: text('currency').notNull().default('EUR'),
-  units: text('units', { enum: ['metric', 'imperial'] }).notNull().default('metric'),
-  pageSize: text('page_size', { enum: ['A4', 'Letter'] }).notNull().default('A4'),
+  units: text('units').$type<UnitSystem>().notNull().default('metric'),
+  pageSize: text('page_size').$type<PageSize>().notNull().default('A4'),
   finalCheckSecondPerson: integer('final_check_second_person', { mode: 'boolean' }).notNull().default(true),
   /** Shop policy overrides for chain replacement thresholds, JSON; null = trade defaults. */
   chainLimits: text('chain_limits', { mode: 'json' }).$type<{ replaceAt11Pct: number; replaceAt10Pct: number; cassettePct: number } | null>(),

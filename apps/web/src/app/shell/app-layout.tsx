@@ -1,34 +1,17 @@
-import { ROLE_LABELS, type SessionUser } from '@benchproof/contracts';
-import { AppShell, Burger, Button, Group, NavLink, ScrollArea, Stack, Text } from '@mantine/core';
+import { ROLE_LABELS } from '@benchproof/contracts';
+import { AppShell, Burger, Button, Group, ScrollArea, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconLogout } from '@tabler/icons-react';
-import { NavLink as RouterNavLink, Outlet, useNavigate } from 'react-router';
+import { Outlet, useNavigate } from 'react-router';
 import { Logo } from '../../components/logo';
-import { useLogout, useSession } from '../../features/auth';
-import { NAV_ITEMS } from './nav-items';
-
-function Navigation({ user, onNavigate }: { user: SessionUser; onNavigate: () => void }) {
-  return (
-    <Stack gap={4}>
-      {NAV_ITEMS.filter((i) => !i.roles || i.roles.includes(user.role)).map((item) => (
-        <NavLink
-          key={item.to}
-          component={RouterNavLink}
-          to={item.to}
-          label={item.label}
-          leftSection={<item.icon size={22} stroke={1.7} />}
-          onClick={onNavigate}
-          styles={{ root: { minHeight: 48, borderRadius: 8 }, label: { fontSize: 16 } }}
-        />
-      ))}
-    </Stack>
-  );
-}
+import { useCan, useLogout, useSession } from '../../features/auth';
+import { Navigation } from './navigation';
 
 /** The signed-in frame: header with the mark, a navigation drawer on phones, a sidebar on desktops. */
 export function AppLayout() {
   const [opened, { toggle, close }] = useDisclosure();
   const { data: user } = useSession();
+  const can = useCan();
   const logout = useLogout();
   const navigate = useNavigate();
   if (!user) return null;
@@ -56,7 +39,7 @@ export function AppLayout() {
       </AppShell.Header>
       <AppShell.Navbar p="sm">
         <AppShell.Section grow component={ScrollArea}>
-          <Navigation user={user} onNavigate={close} />
+          <Navigation can={can} onNavigate={close} />
         </AppShell.Section>
       </AppShell.Navbar>
       <AppShell.Main>

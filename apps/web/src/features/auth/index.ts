@@ -1,2 +1,3 @@
 export { sessionHasExpired, sessionKey, sessionQuery, useSession, useLogout } from './api/session';
+export { useCan } from './api/access';
 export { SignInForm } from './components/sign-in-form';

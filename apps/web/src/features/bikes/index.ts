@@ -5,4 +5,4 @@ export { BikeHistoryPanel } from './components/bike-history';
 export { BikeSpecFields } from './components/bike-spec-fields';
 export { BikeSpecs } from './components/bike-specs';
 export { CustomerBikes } from './components/customer-bikes';
-export { bikeFormToInput, bikeLabel, EMPTY_BIKE, type BikeFormValues } from './components/spec-labels';
+export { BIKE_FORM_MODEL, bikeFormToInput, bikeLabel, EMPTY_BIKE, type BikeFormValues } from './components/spec-labels';

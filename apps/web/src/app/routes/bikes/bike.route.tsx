@@ -3,14 +3,14 @@ import { useDisclosure } from '@mantine/hooks';
 import { IconEdit } from '@tabler/icons-react';
 import { Link, useParams } from 'react-router';
 import { QueryState } from '../../../components/query-state';
-import { useSession } from '../../../features/auth';
+import { useCan } from '../../../features/auth';
 import { BikeForm, BikeHistoryPanel, bikeLabel, BikeSpecs, useBike } from '../../../features/bikes';
 
 /** /bikes/:bikeId — specs, visits and the wear trend across them. */
 export function BikeRoute() {
   const id = Number(useParams().bikeId);
   const bike = useBike(id);
-  const { data: me } = useSession();
+  const can = useCan();
   const [editing, edit] = useDisclosure();
   if (!bike.data) return <QueryState isLoading={bike.isLoading} error={bike.error} />;
   const b = bike.data;
@@ -22,7 +22,7 @@ export function BikeRoute() {
             <Title order={2}>{bikeLabel(b)}</Title>
             <Text>Owner: <Anchor component={Link} to={`/customers/${b.customerId}`}>{b.ownerName}</Anchor></Text>
           </Stack>
-          {me?.role !== 'mechanic' && <Button variant="default" leftSection={<IconEdit size={18} />} onClick={edit.open}>Edit</Button>}
+          {can('bikes.edit') && <Button variant="default" leftSection={<IconEdit size={18} />} onClick={edit.open}>Edit</Button>}
         </Group>
         <BikeSpecs bike={b} />
       </Paper>

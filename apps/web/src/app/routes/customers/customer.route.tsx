@@ -3,7 +3,7 @@ import { useDisclosure } from '@mantine/hooks';
 import { IconBike, IconEdit } from '@tabler/icons-react';
 import { useParams } from 'react-router';
 import { QueryState } from '../../../components/query-state';
-import { useSession } from '../../../features/auth';
+import { useCan } from '../../../features/auth';
 import { BikeForm, CustomerBikes } from '../../../features/bikes';
 import { CustomerCard, CustomerForm, useCustomer } from '../../../features/customers';
 
@@ -11,10 +11,9 @@ import { CustomerCard, CustomerForm, useCustomer } from '../../../features/custo
 export function CustomerRoute() {
   const id = Number(useParams().customerId);
   const customer = useCustomer(id);
-  const { data: me } = useSession();
   const [editing, edit] = useDisclosure();
   const [adding, add] = useDisclosure();
-  const canEdit = me?.role !== 'mechanic';
+  const canEdit = useCan()('customers.edit');
   if (!customer.data) return <QueryState isLoading={customer.isLoading} error={customer.error} />;
   return (
     <Stack>

@@ -3,14 +3,13 @@ import { useDisclosure } from '@mantine/hooks';
 import { IconUserPlus } from '@tabler/icons-react';
 import { useNavigate } from 'react-router';
 import { PageHeader } from '../../../components/page-header';
-import { useSession } from '../../../features/auth';
+import { useCan } from '../../../features/auth';
 import { CustomerForm, CustomersTable } from '../../../features/customers';
 
 export function CustomersRoute() {
   const [opened, { open, close }] = useDisclosure();
   const navigate = useNavigate();
-  const { data: me } = useSession();
-  const canEdit = me?.role !== 'mechanic';
+  const canEdit = useCan()('customers.edit');
   return (
     <>
       <PageHeader title="Customers & bikes" subtitle="Owners, their bikes, and each bike's history." actions={canEdit && <Button size="lg" leftSection={<IconUserPlus />} onClick={open}>Add customer</Button>} />

@@ -1,7 +1,7 @@
 import { notifications } from '@mantine/notifications';
 import { useNavigate } from 'react-router';
 import { PageHeader } from '../../../components/page-header';
-import { BikeChooser, BikeSpecFields } from '../../../features/bikes';
+import { BIKE_FORM_MODEL, BikeChooser, BikeSpecFields } from '../../../features/bikes';
 import { CustomerFields, CustomerSearch } from '../../../features/customers';
 import { BookInForm, type BookInSlots } from '../../../features/jobs';
 import { useStaff } from '../staff';
@@ -12,6 +12,7 @@ const slots: BookInSlots = {
   customerFields: (field) => <CustomerFields field={field} />,
   bikeChooser: (p) => <BikeChooser {...p} />,
   bikeFields: (field) => <BikeSpecFields field={field} />,
+  bikeModel: BIKE_FORM_MODEL,
 };
 
 export function BookInRoute() {

@@ -1,4 +1,4 @@
-import type { JobDetail, SessionUser, ShopSettingsDto } from '@benchproof/contracts';
+import { roleCan, type JobDetail, type SessionUser, type ShopSettingsDto } from '@benchproof/contracts';
 import { Stack } from '@mantine/core';
 import { ArrivesWith } from '../../../components/arrives-with';
 import { BikeSpecs } from '../../../features/bikes';
@@ -32,8 +32,8 @@ function Findings({ job, me, settings }: SectionProps) {
     <FindingsPanel
       jobId={job.id}
       rates={{ labourRateMinor: settings.labourRateMinor, taxRateBp: settings.taxRateBp, currency: settings.currency }}
-      canDecide={me.role !== 'mechanic'}
-      canEdit={me.role !== 'desk'}
+      canDecide={roleCan(me.role, 'recommendations.decide')}
+      canEdit={roleCan(me.role, 'findings.edit')}
       ownerName={job.customer.name}
       me={{ id: me.id, name: me.name }}
       staffName={staffName}
@@ -66,7 +66,7 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
       return <Work {...props} />;
     case 'media':
       // The media feature (features/media) owns this section.
-      return <JobMediaSection jobId={job.id} canSeeDeleted={me.role === 'manager'} />;
+      return <JobMediaSection jobId={job.id} canSeeDeleted={roleCan(me.role, 'media.view_deleted')} />;
     case 'pairs':
       return <ArrivesWith what="the pairs issue: before/after pairs suggested from the media" />;
     case 'report':

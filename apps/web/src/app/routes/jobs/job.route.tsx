@@ -1,7 +1,7 @@
 import { ScrollArea, Tabs } from '@mantine/core';
 import { useParams, useSearchParams } from 'react-router';
 import { QueryState } from '../../../components/query-state';
-import { useSession } from '../../../features/auth';
+import { useCan, useSession } from '../../../features/auth';
 import { JobHeader, useJob } from '../../../features/jobs';
 import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';
@@ -15,6 +15,7 @@ export function JobRoute() {
   const job = useJob(jobId);
   const settings = useShopSettings();
   const { data: me } = useSession();
+  const can = useCan();
   const { mechanics } = useStaff();
   const [search, setSearch] = useSearchParams();
   const tab = search.get('section');
@@ -22,7 +23,7 @@ export function JobRoute() {
   if (!job.data || !settings.data || !me) return <QueryState isLoading={job.isLoading || settings.isLoading} error={job.error ?? settings.error} />;
   return (
     <>
-      <JobHeader job={job.data} mechanics={mechanics} canAssign={me.role !== 'mechanic'} />
+      <JobHeader job={job.data} mechanics={mechanics} canAssign={can('jobs.edit')} />
       <Tabs value={section} onChange={(v) => v && setSearch({ section: v }, { replace: true })} keepMounted={false}>
         <ScrollArea type="never" mb="md">
           <Tabs.List style={{ flexWrap: 'nowrap' }}>

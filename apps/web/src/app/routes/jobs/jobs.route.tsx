@@ -2,14 +2,13 @@ import { Button } from '@mantine/core';
 import { IconPlus } from '@tabler/icons-react';
 import { Link } from 'react-router';
 import { PageHeader } from '../../../components/page-header';
-import { useSession } from '../../../features/auth';
+import { useCan } from '../../../features/auth';
 import { JobsTable } from '../../../features/jobs';
 import { useStaff } from '../staff';
 
 export function JobsRoute() {
-  const { data: me } = useSession();
   const { mechanics } = useStaff();
-  const canBook = me?.role === 'desk' || me?.role === 'manager';
+  const canBook = useCan()('jobs.book_in');
   return (
     <>
       <PageHeader

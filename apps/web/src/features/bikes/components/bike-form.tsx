@@ -1,6 +1,7 @@
 import { BikeInputSchema, type BikeDto } from '@benchproof/contracts';
 import { Alert, Button, Stack } from '@mantine/core';
-import { useForm } from '@mantine/form';
+import { schemaResolver, useForm } from '@mantine/form';
+import { z } from 'zod';
 import { ApiError } from '../../../lib/api-client';
 import { useSaveBike } from '../api/bikes';
 import { BikeSpecFields } from './bike-spec-fields';
@@ -11,10 +12,8 @@ export function BikeForm({ customerId, bike, onDone }: { customerId: number; bik
   const save = useSaveBike(bike?.id);
   const form = useForm<BikeFormValues>({
     initialValues: bike ? bikeToForm(bike) : EMPTY_BIKE,
-    validate: (v) => {
-      const r = BikeInputSchema.safeParse({ ...bikeFormToInput(v), customerId });
-      return r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [i.path.join('.'), i.message]));
-    },
+    // The web's one validation pattern: the contract's schema through Mantine's resolver (here after the form→input step).
+    validate: schemaResolver(z.preprocess((v) => ({ ...bikeFormToInput(v as BikeFormValues), customerId }), BikeInputSchema), { sync: true }),
   });
   const submit = form.onSubmit((v) =>
     save.mutate(BikeInputSchema.parse({ ...bikeFormToInput(v), customerId }), { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }),

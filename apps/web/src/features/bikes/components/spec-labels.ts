@@ -45,6 +45,9 @@ export function bikeFormToInput(v: BikeFormValues) {
   return { ...v, year: v.year === '' ? null : Number(v.year), drivetrainSpeeds: v.drivetrainSpeeds === '' ? Number.NaN : Number(v.drivetrainSpeeds) };
 }
 
+/** The one bike form model: book-in (jobs, through the route) and the bike form both use it. */
+export const BIKE_FORM_MODEL = { empty: EMPTY_BIKE, toInput: bikeFormToInput };
+
 export function bikeToForm(b: BikeDto): BikeFormValues {
   return { ...b, year: b.year ?? '', size: b.size ?? '', colour: b.colour ?? '', serialNumber: b.serialNumber ?? '', tyreSize: b.tyreSize ?? '' };
 }

@@ -6,7 +6,7 @@ import { IconAlertTriangle, IconCheck } from '@tabler/icons-react';
 import type { ReactNode } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useBookIn } from '../api/jobs';
-import { INITIAL_BOOK_IN, parseBookIn, validateBookIn, type BookInValues } from './book-in-values';
+import { initialBookIn, parseBookIn, validateBookIn, type BikeFormModel, type BookInValues } from './book-in-values';
 import type { Option } from './job-filters';
 
 type FieldProps = ReturnType<UseFormReturnType<BookInValues>['getInputProps']>;
@@ -22,6 +22,7 @@ export interface BookInSlots {
   customerFields: (field: FieldGetter) => ReactNode;
   bikeChooser: (p: { customerId: number; selectedId: number | null; onPick: (id: number | null) => void; error?: ReactNode }) => ReactNode;
   bikeFields: (field: FieldGetter) => ReactNode;
+  bikeModel: BikeFormModel;
 }
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
@@ -74,9 +75,9 @@ function BikeSection({ form, slots }: { form: UseFormReturnType<BookInValues>; s
 /** Booking-in: owner, bike, symptoms, promised day and mechanic in one submit. */
 export function BookInForm({ slots, mechanics, onBooked }: { slots: BookInSlots; mechanics: Option[]; onBooked: (job: JobDetail) => void }) {
   const bookIn = useBookIn();
-  const form = useForm<BookInValues>({ mode: 'controlled', initialValues: INITIAL_BOOK_IN, validate: validateBookIn });
+  const form = useForm<BookInValues>({ mode: 'controlled', initialValues: initialBookIn(slots.bikeModel), validate: validateBookIn(slots.bikeModel) });
   const submit = form.onSubmit((values) =>
-    bookIn.mutate(parseBookIn(values), {
+    bookIn.mutate(parseBookIn(values, slots.bikeModel), {
       onSuccess: onBooked,
       onError: (e) => {
         if (e instanceof ApiError && e.code === 'VALIDATION_FAILED') form.setErrors(e.fieldErrors());

@@ -1,28 +1,22 @@
-import { BookInRequestSchema, CustomerInputSchema, NewBikeInputSchema, type BookInRequest } from '@benchproof/contracts';
+import { BookInRequestSchema, CustomerInputSchema, NewBikeInputSchema, type BookInRequest, type ContactChannel } from '@benchproof/contracts';
 
 /** Customer fields as the form holds them. */
 export interface CustomerValues {
   name: string;
   email: string;
   phone: string;
-  preferredChannel: 'email' | 'phone' | 'sms';
+  preferredChannel: ContactChannel;
   notes: string;
 }
 
-/** Bike fields as the form holds them: number boxes may be empty while typing. */
-export interface BikeValues {
-  maker: string;
-  model: string;
-  year: number | string;
-  frameMaterial: 'steel' | 'aluminium' | 'carbon' | 'titanium' | 'other';
-  size: string;
-  colour: string;
-  serialNumber: string;
-  drivetrainSpeeds: number | string;
-  brakeType: 'rim' | 'mechanical_disc' | 'hydraulic_disc';
-  cableRouting: 'external' | 'internal';
-  dropoutType: 'vertical' | 'horizontal';
-  tyreSize: string;
+/**
+ * The bike part of the form. The bikes feature owns the model (its values, their
+ * empty state and how they become the contract's bike input); the route hands it in.
+ */
+export interface BikeFormModel {
+  empty: unknown;
+  // Method syntax on purpose: the bikes feature's toInput takes its own value type.
+  toInput(values: never): unknown;
 }
 
 export interface BookInValues {
@@ -32,35 +26,31 @@ export interface BookInValues {
   newCustomer: CustomerValues;
   bikeMode: 'existing' | 'new';
   bikeId: number | null;
-  newBike: BikeValues;
+  /** Held as the bikes feature's form values; only BikeFormModel reads them. */
+  newBike: unknown;
   reportedSymptoms: string;
   promisedOn: string | null;
   mechanicId: string | null;
 }
 
-export const INITIAL_BOOK_IN: BookInValues = {
+export const initialBookIn = (bike: BikeFormModel): BookInValues => ({
   customerMode: 'existing',
   customerId: null,
   customerLabel: '',
   newCustomer: { name: '', email: '', phone: '', preferredChannel: 'phone', notes: '' },
   bikeMode: 'existing',
   bikeId: null,
-  newBike: {
-    maker: '', model: '', year: '', frameMaterial: 'aluminium', size: '', colour: '', serialNumber: '',
-    drivetrainSpeeds: 11, brakeType: 'hydraulic_disc', cableRouting: 'external', dropoutType: 'vertical', tyreSize: '',
-  },
+  newBike: bike.empty,
   reportedSymptoms: '',
   promisedOn: null,
   mechanicId: null,
-};
-
-const numOrNaN = (v: number | string) => (v === '' ? Number.NaN : Number(v));
+});
 
 /** The one request the booking-in form sends; a new customer always brings a new bike. */
-export function toBookInRequest(v: BookInValues): Record<string, unknown> {
+export function toBookInRequest(v: BookInValues, bikeModel: BikeFormModel): Record<string, unknown> {
   const existingCustomer = v.customerMode === 'existing';
   const existingBike = existingCustomer && v.bikeMode === 'existing';
-  const bike = { ...v.newBike, year: v.newBike.year === '' ? null : Number(v.newBike.year), drivetrainSpeeds: numOrNaN(v.newBike.drivetrainSpeeds) };
+  const bike = (bikeModel.toInput as (values: unknown) => unknown)(v.newBike);
   return {
     ...(existingCustomer ? { customerId: v.customerId ?? undefined } : { newCustomer: v.newCustomer }),
     ...(existingBike ? { bikeId: v.bikeId ?? undefined } : { newBike: bike }),
@@ -78,16 +68,16 @@ const FRIENDLY: Record<string, string> = {
 };
 
 /** Validates with the API's own zod schemas, field by field so each box gets its message. */
-export function validateBookIn(values: BookInValues): Record<string, string> {
+export const validateBookIn = (bikeModel: BikeFormModel) => (values: BookInValues): Record<string, string> => {
   const errors: Record<string, string> = {};
   const add = (path: string, message: string) => (errors[path] ??= FRIENDLY[path] ?? message);
-  const req = toBookInRequest(values);
+  const req = toBookInRequest(values, bikeModel);
   if (values.customerMode === 'existing' && !values.customerId) add('customerId', '');
   if (values.customerMode === 'existing' && values.bikeMode === 'existing' && !values.bikeId) add('bikeId', '');
   if (req.newCustomer) CustomerInputSchema.safeParse(req.newCustomer).error?.issues.forEach((i) => add(`newCustomer.${i.path.join('.')}`, i.message));
   if (req.newBike) NewBikeInputSchema.safeParse(req.newBike).error?.issues.forEach((i) => add(`newBike.${i.path.join('.')}`, i.message));
   BookInRequestSchema.safeParse(req).error?.issues.forEach((i) => add(i.path.join('.'), i.message));
   return errors;
-}
+};
 
-export const parseBookIn = (values: BookInValues): BookInRequest => BookInRequestSchema.parse(toBookInRequest(values));
+export const parseBookIn = (values: BookInValues, bikeModel: BikeFormModel): BookInRequest => BookInRequestSchema.parse(toBookInRequest(values, bikeModel));

@@ -1,4 +1,4 @@
-import type { FinalCheckRequest, JobDetail } from '@benchproof/contracts';
+import { roleCan, type FinalCheckRequest, type JobDetail, type Role } from '@benchproof/contracts';
 import { failedFinalCheckItems, FINAL_CHECK_ITEMS, FINAL_CHECK_ITEM_LABELS, type FinalCheckItem } from '@benchproof/domain';
 import { Alert, Button, Checkbox, Group, Paper, Stack, Text, Textarea, Title } from '@mantine/core';
 import { IconAlertTriangle, IconCircleCheck, IconCircleX } from '@tabler/icons-react';
@@ -61,9 +61,9 @@ function CheckForm({ job, blocked }: { job: JobDetail; blocked: boolean }) {
 }
 
 /** The final check: who may do it, the last result, the checklist; the server's refusal is shown as it says it. */
-export function FinalCheckPanel({ job, me, checkers }: { job: JobDetail; me: { id: number; role: string }; checkers: string[] }) {
+export function FinalCheckPanel({ job, me, checkers }: { job: JobDetail; me: { id: number; role: Role }; checkers: string[] }) {
   const samePerson = job.finalCheckSecondPerson && job.mechanic?.id === me.id;
-  const wrongRole = me.role === 'desk';
+  const wrongRole = !roleCan(me.role, 'jobs.final_check');
   return (
     <Paper withBorder p="md">
       <Stack gap="sm">

@@ -1,4 +1,4 @@
-import { JOB_STATUSES, JOB_STATUS_LABELS } from '@benchproof/domain';
+import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from '@benchproof/domain';
 import { Button, Chip, Group, Select, SimpleGrid, Stack, Switch, TextInput, useMatches } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
 import { useDebouncedCallback } from '@mantine/hooks';
@@ -40,24 +40,30 @@ function SearchBox({ initial, onSearch }: { initial: string; onSearch: (q: strin
   );
 }
 
+function StatusChips({ value, onChange }: { value: JobStatus[]; onChange: (v: JobStatus[]) => void }) {
+  const chipWrap = useMatches<'nowrap' | 'wrap'>({ base: 'nowrap', sm: 'wrap' });
+  return (
+    <Chip.Group multiple value={value} onChange={onChange}>
+      {/* One swipeable row on a phone, so the jobs start near the top of the screen. */}
+      <Group gap={8} role="group" aria-label="Filter by status" wrap={chipWrap} style={{ overflowX: 'auto', paddingBottom: 4 }}>
+        {JOB_STATUSES.map((s) => (
+          <Chip key={s} value={s} size="md" radius="sm">
+            {JOB_STATUS_LABELS[s]}
+          </Chip>
+        ))}
+      </Group>
+    </Chip.Group>
+  );
+}
+
 /** Status chips, mechanic, promised range and free text for the jobs table. */
 export function JobFilters({ params, includeClosed, update, mechanics }: Props) {
   const range: [string | null, string | null] = [params.promisedAfter ?? null, params.promisedBefore ?? null];
   const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed);
   const byStatus = Boolean(params.status?.length);
-  const chipWrap = useMatches<'nowrap' | 'wrap'>({ base: 'nowrap', sm: 'wrap' });
   return (
     <Stack gap="sm" mb="md">
-      <Chip.Group multiple value={params.status ?? []} onChange={(v) => update({ status: v })}>
-        {/* One swipeable row on a phone, so the jobs start near the top of the screen. */}
-        <Group gap={8} role="group" aria-label="Filter by status" wrap={chipWrap} style={{ overflowX: 'auto', paddingBottom: 4 }}>
-          {JOB_STATUSES.map((s) => (
-            <Chip key={s} value={s} size="md" radius="sm">
-              {JOB_STATUS_LABELS[s]}
-            </Chip>
-          ))}
-        </Group>
-      </Chip.Group>
+      <StatusChips value={params.status ?? []} onChange={(status) => update({ status })} />
       <Switch
         label="Include collected and cancelled jobs"
         description={byStatus ? 'The chosen statuses decide which jobs are listed.' : 'Off: only jobs still in the workshop.'}

@@ -1,0 +1,47 @@
+import { ESLint } from 'eslint';
+import { resolve } from 'node:path';
+import tseslint from 'typescript-eslint';
+
+const ROOT = resolve(__dirname, '../../../..');
+
+/**
+ * Lints probe sources as if they sat at `filePath`, with the repository's real
+ * eslint.config.mjs. Type-aware rules are switched off for the probe: the file
+ * does not exist on disk, and the boundary rule needs only the resolver.
+ */
+const eslint = new ESLint({ cwd: ROOT, overrideConfig: [{ files: ['**/*.{ts,tsx}'], ...tseslint.configs.disableTypeChecked }] });
+
+async function lintProbe(filePath: string, code: string): Promise<string[]> {
+  const [result] = await eslint.lintText(code, { filePath: resolve(ROOT, filePath) });
+  return result.messages.filter((m) => m.ruleId === 'import-x/no-restricted-paths').map((m) => m.message);
+}
+
+// The first lint loads the whole config and resolver, which takes seconds on a shared machine.
+describe('import boundaries hold on resolved paths (STYLE.md dependency rules)', { timeout: 60_000 }, () => {
+  it('refuses a web feature importing another feature through a deep relative path', async () => {
+    const messages = await lintProbe('apps/web/src/features/jobs/components/probe.tsx', "import { CustomerForm } from '../../../features/customers/components/customer-form';\nexport const x = CustomerForm;\n");
+    expect(messages).toEqual([expect.stringMatching(/No cross-feature imports/)]);
+  });
+
+  it('refuses it even when the path takes a detour through app/', async () => {
+    const messages = await lintProbe('apps/web/src/features/jobs/components/probe.tsx', "import * as c from '../../../app/../features/customers';\nexport const x = c;\n");
+    expect(messages).toEqual([expect.stringMatching(/No cross-feature imports/)]);
+  });
+
+  it("refuses an api feature reaching past another feature's index.ts, but allows the index", async () => {
+    const deep = await lintProbe('apps/api/src/jobs/probe.ts', "import { CustomersRepository } from '../customers/customers.repository';\nexport const x = CustomersRepository;\n");
+    expect(deep).toEqual([expect.stringMatching(/only through its index\.ts/)]);
+    const viaIndex = await lintProbe('apps/api/src/jobs/probe.ts', "import { CustomersService } from '../customers';\nexport const x = CustomersService;\n");
+    expect(viaIndex).toEqual([]);
+  });
+
+  it('refuses react-konva outside features/annotate', async () => {
+    const messages = await lintProbe('apps/web/src/features/media/components/probe.tsx', "import { Stage } from 'react-konva';\nexport const x = Stage;\n");
+    expect(messages).toEqual([expect.stringMatching(/Only features\/annotate draws with Konva/)]);
+  });
+
+  it('refuses core/ importing a feature', async () => {
+    const messages = await lintProbe('apps/api/src/core/http/probe.ts', "import { JobsService } from '../../jobs';\nexport const x = JobsService;\n");
+    expect(messages).toEqual([expect.stringMatching(/core\/ and infra\/ never import features/)]);
+  });
+});

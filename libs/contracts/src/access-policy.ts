@@ -1,0 +1,97 @@
+import { ROLES, type Role } from './auth';
+
+/**
+ * The one access policy: what each staff role may do, and what an owner-link
+ * visitor may do. The api guard (@Can), the web's `can()` and the route-matrix
+ * test all read this table, so a role string never appears anywhere else.
+ *
+ * Per-object rules (the job is in the caller's shop, the job is still open)
+ * are not here: they need the row, so the jobs feature's JobAccess checks them.
+ */
+
+/** A signed-in staff member of one shop. */
+export interface StaffActor {
+  kind: 'staff';
+  shopId: number;
+  userId: number;
+  role: Role;
+}
+
+/** Someone holding a job's private owner link: one shop, one job, owner-facing actions only. */
+export interface OwnerActor {
+  kind: 'owner';
+  shopId: number;
+  jobId: number;
+}
+
+export type Actor = StaffActor | OwnerActor;
+
+interface Rule {
+  /** Staff roles allowed to do it. */
+  staff: readonly Role[];
+  /** Whether an owner-link visitor may do it (on their one job only). */
+  owner: boolean;
+}
+
+const ALL_STAFF = ROLES;
+const staff = (...roles: Role[]): Rule => ({ staff: roles, owner: false });
+const ownerOnly: Rule = { staff: [], owner: true };
+
+export const ACCESS_POLICY = {
+  'session.view': staff(...ALL_STAFF),
+  'users.view': staff(...ALL_STAFF),
+  'users.manage': staff('manager'),
+  'shop.view': staff(...ALL_STAFF),
+  'shop.edit': staff('manager'),
+  'audit.view': staff('manager'),
+  'showcase.manage': staff('manager'),
+  'customers.view': staff(...ALL_STAFF),
+  'customers.edit': staff('manager', 'desk'),
+  'bikes.view': staff(...ALL_STAFF),
+  'bikes.edit': staff('manager', 'desk'),
+  'jobs.view': staff(...ALL_STAFF),
+  'jobs.book_in': staff('manager', 'desk'),
+  'jobs.edit': staff('manager', 'desk'),
+  'jobs.transition': staff(...ALL_STAFF),
+  'jobs.final_check': staff('manager', 'mechanic'),
+  /** Change evidence on a collected or cancelled job; every use is audited (JobAccess). */
+  'jobs.reopen_evidence': staff('manager'),
+  'inspection.view': staff(...ALL_STAFF),
+  'inspection.record': staff('manager', 'mechanic'),
+  'findings.view': staff(...ALL_STAFF),
+  'findings.edit': staff('manager', 'mechanic'),
+  'findings.recommend': staff(...ALL_STAFF),
+  'recommendations.decide': staff('manager', 'desk'),
+  'work_log.view': staff(...ALL_STAFF),
+  'work_log.record': staff('manager', 'mechanic'),
+  'media.view': staff(...ALL_STAFF),
+  'media.upload': staff(...ALL_STAFF),
+  'media.edit': staff(...ALL_STAFF),
+  'media.view_deleted': staff('manager'),
+  'media.purge': staff('manager'),
+  'owner.view': ownerOnly,
+  'owner.decide': ownerOnly,
+  'owner.consent': ownerOnly,
+} as const satisfies Record<string, Rule>;
+
+export type Action = keyof typeof ACCESS_POLICY;
+
+/** Every action, for the route matrix and exhaustive checks. */
+export const ACTIONS = Object.keys(ACCESS_POLICY) as [Action, ...Action[]];
+
+/** Whether a staff role may do an action. */
+export function roleCan(role: Role, action: Action): boolean {
+  const rule: Rule = ACCESS_POLICY[action];
+  return rule.staff.includes(role);
+}
+
+/** Whether an actor may do an action (the object-level checks come after, in JobAccess). */
+export function actorCan(actor: Actor, action: Action): boolean {
+  const rule: Rule = ACCESS_POLICY[action];
+  return actor.kind === 'staff' ? rule.staff.includes(actor.role) : rule.owner;
+}
+
+/** The staff roles allowed to do an action, in ROLES order. */
+export function rolesFor(action: Action): Role[] {
+  return ROLES.filter((r) => roleCan(r, action));
+}
