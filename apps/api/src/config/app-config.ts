@@ -29,6 +29,8 @@ const EnvSchema = z.object({
   COOKIE_SECURE: bool.default(false),
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
   PUBLIC_URL: z.string().url().optional(),
+  /** The origin the web app is served from; the only one allowed cross-origin (tus CORS). Default: PUBLIC_URL's origin, else http://localhost:PORT. */
+  APP_ORIGIN: z.string().url().optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().default(1025),
   MAIL_FROM: z.string().default('BenchProof <reports@benchproof.localhost>'),
@@ -38,7 +40,7 @@ const EnvSchema = z.object({
   MAX_IMAGE_PIXELS: z.coerce.number().int().positive().default(100_000_000),
 });
 
-export type AppConfig = z.infer<typeof EnvSchema> & { jwtSecret: string };
+export type AppConfig = z.infer<typeof EnvSchema> & { jwtSecret: string; appOrigin: string };
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
 
@@ -52,7 +54,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     throw new Error(`Invalid environment: ${z.prettifyError(parsed.error)}`);
   }
   const cfg = parsed.data;
-  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH) };
+  const appOrigin = new URL(cfg.APP_ORIGIN ?? cfg.PUBLIC_URL ?? `http://localhost:${cfg.PORT}`).origin;
+  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH), appOrigin };
 }
 
 function secretBeside(databasePath: string): string {
