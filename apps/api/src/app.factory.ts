@@ -17,7 +17,8 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
     logger: opts.logger === false ? false : ['log', 'warn', 'error'],
   });
-  app.set('trust proxy', 'loopback');
+  // Behind a proxy, TRUST_PROXY says which hops may set X-Forwarded-For; without it req.ip is the socket's address.
+  app.set('trust proxy', trustProxy(cfg.TRUST_PROXY));
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
   app.use(cookieParser());
   app.setGlobalPrefix('api');
@@ -27,6 +28,13 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   serveWeb(app, cfg.WEB_DIST);
   await seedWhenEmpty(app, cfg);
   return app;
+}
+
+/** Express 'trust proxy' from the environment: `true`/`false`, a hop count, or addresses/subnet names. */
+function trustProxy(value: string | undefined): boolean | number | string {
+  if (value === undefined || value === 'false') return false;
+  if (value === 'true') return true;
+  return /^\d+$/.test(value) ? Number(value) : value;
 }
 
 function contentSecurity() {

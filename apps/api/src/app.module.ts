@@ -1,5 +1,4 @@
 import { type DynamicModule, Module } from '@nestjs/common';
-import { ThrottlerModule } from '@nestjs/throttler';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
 import { BikesModule } from './bikes';
@@ -33,7 +32,6 @@ export class AppModule {
         TasksModule,
         DbModule,
         AuthCoreModule,
-        ThrottlerModule.forRoot([{ ttl: 60_000, limit: cfg.LOGIN_THROTTLE_LIMIT }]),
         ...FEATURES,
         SeedModule,
       ],

@@ -27,7 +27,12 @@ const EnvSchema = z.object({
   SESSION_TTL_SECONDS: z.coerce.number().int().positive().default(8 * 3600),
   SEED_DEMO: bool.default(true),
   COOKIE_SECURE: bool.default(false),
+  /** Failed sign-ins allowed per account, and per address, within the window. */
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
+  LOGIN_THROTTLE_ADDRESS_LIMIT: z.coerce.number().int().positive().default(50),
+  LOGIN_THROTTLE_WINDOW_SECONDS: z.coerce.number().int().positive().default(15 * 60),
+  /** Express 'trust proxy' (e.g. `loopback`, `1`, `10.0.0.0/8`). Unset: X-Forwarded-For is ignored. */
+  TRUST_PROXY: z.string().min(1).optional(),
   PUBLIC_URL: z.string().url().optional(),
   /** The origin the web app is served from; the only one allowed cross-origin (tus CORS). Default: PUBLIC_URL's origin, else http://localhost:PORT. */
   APP_ORIGIN: z.string().url().optional(),

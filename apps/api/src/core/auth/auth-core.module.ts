@@ -6,6 +6,7 @@ import { APP_CONFIG, type AppConfig } from '../../config';
 import { CSRF, CsrfGuard, csrfFactory } from './csrf';
 import { JwtAuthGuard } from './jwt-auth.guard';
 import { JwtStrategy } from './jwt.strategy';
+import { SessionStore } from './session-store';
 import { RolesGuard } from './roles.guard';
 
 /** Sessions for the whole API: the global guards run in order session → role → CSRF. */
@@ -23,11 +24,12 @@ import { RolesGuard } from './roles.guard';
   ],
   providers: [
     JwtStrategy,
+    SessionStore,
     { provide: CSRF, inject: [APP_CONFIG], useFactory: csrfFactory },
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: RolesGuard },
     { provide: APP_GUARD, useClass: CsrfGuard },
   ],
-  exports: [JwtModule, CSRF],
+  exports: [JwtModule, CSRF, SessionStore],
 })
 export class AuthCoreModule {}

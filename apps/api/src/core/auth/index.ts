@@ -3,3 +3,5 @@ export type { AuthUser, Role, SessionClaims } from './auth-user';
 export { AuthCoreModule } from './auth-core.module';
 export { CSRF, issueCsrfToken } from './csrf';
 export { SESSION_COOKIE, CSRF_COOKIE, CSRF_HEADER, sessionCookieOptions } from './session-cookie';
+export { SessionStore } from './session-store';
+export { sessionTokenFrom } from './jwt.strategy';

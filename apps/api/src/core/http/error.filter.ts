@@ -33,6 +33,8 @@ export class ErrorFilter implements ExceptionFilter {
     const res = host.switchToHttp().getResponse<Response>();
     const { status, body } = this.toBody(exception);
     if (status >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    const retryAfter = (body.details as { retryAfterSeconds?: unknown } | null)?.retryAfterSeconds;
+    if (status === 429 && typeof retryAfter === 'number' && !res.headersSent) res.setHeader('Retry-After', String(retryAfter));
     if (!res.headersSent) res.status(status).json(body);
   }
 
