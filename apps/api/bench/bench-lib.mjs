@@ -23,34 +23,21 @@ export function sampleRss(pid, ms = 25) {
   return { stop: () => (clearInterval(timer), peak) };
 }
 
-const box = (type, body) => {
-  const head = Buffer.alloc(8);
-  head.writeUInt32BE(body.length + 8, 0);
-  head.write(type, 4, 'latin1');
-  return Buffer.concat([head, body]);
-};
+const CLIP = readFileSync(new URL('../test/media/clip-64x48.mp4', import.meta.url));
 
 /**
- * Writes `bytes` to `path` as a sniffable MP4 (ftyp + moov with mvhd/tkhd, then one
- * mdat of pseudo-random data), streamed in 4 MB chunks so the generator stays small.
+ * Writes `bytes` to `path` as a real, parseable MP4: the committed 64×48 test clip, then
+ * one `free` box of pseudo-random data (ISO/IEC 14496-12: readers skip free space),
+ * streamed in 4 MB chunks so the generator stays small.
  */
 export async function writeTestVideo(path, bytes) {
-  const mvhd = Buffer.alloc(100);
-  mvhd.writeUInt32BE(1000, 12);
-  mvhd.writeUInt32BE(600_000, 16);
-  const tkhd = Buffer.alloc(84);
-  tkhd.writeUInt32BE(1920 * 65536, 76);
-  tkhd.writeUInt32BE(1080 * 65536, 80);
-  const head = Buffer.concat([
-    box('ftyp', Buffer.concat([Buffer.from('isom'), Buffer.from([0, 0, 2, 0]), Buffer.from('isomiso2mp41')])),
-    box('moov', Buffer.concat([box('mvhd', mvhd), box('trak', box('tkhd', tkhd))])),
-  ]);
-  const payload = bytes - head.length - 8;
-  const mdatHead = Buffer.alloc(8);
-  mdatHead.writeUInt32BE(payload + 8, 0);
-  mdatHead.write('mdat', 4, 'latin1');
+  const payload = bytes - CLIP.length - 16;
+  const freeHead = Buffer.alloc(16);
+  freeHead.writeUInt32BE(1, 0); // size 1: a 64-bit size follows the type
+  freeHead.write('free', 4, 'latin1');
+  freeHead.writeBigUInt64BE(BigInt(payload + 16), 8);
   const out = createWriteStream(path);
-  out.write(Buffer.concat([head, mdatHead]));
+  out.write(Buffer.concat([CLIP, freeHead]));
   const chunk = randomBytes(4 * 1024 * 1024);
   for (let left = payload, i = 0; left > 0; i++) {
     chunk.writeUInt32BE(i, 0);

@@ -23,7 +23,8 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   });
   // Nest's own log lines go through pino too, as JSON at LOG_LEVEL.
   if (opts.logger !== false) app.useLogger(app.get(PinoLogger));
-  app.set('trust proxy', 'loopback');
+  // Behind a proxy, TRUST_PROXY says which hops may set X-Forwarded-For; without it req.ip is the socket's address.
+  app.set('trust proxy', trustProxy(cfg.TRUST_PROXY));
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
   // JSON lists and the OpenAPI document; images and video are already compressed and are skipped.
   app.use(compression({ threshold: 1024 }));
@@ -35,6 +36,13 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   serveWeb(app, cfg.WEB_DIST);
   await seedWhenEmpty(app, cfg);
   return app;
+}
+
+/** Express 'trust proxy' from the environment: `true`/`false`, a hop count, or addresses/subnet names. */
+function trustProxy(value: string | undefined): boolean | number | string {
+  if (value === undefined || value === 'false') return false;
+  if (value === 'true') return true;
+  return /^\d+$/.test(value) ? Number(value) : value;
 }
 
 function contentSecurity() {

@@ -1,6 +1,5 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { EventEmitterModule } from '@nestjs/event-emitter';
-import { ThrottlerModule } from '@nestjs/throttler';
 import { LoggerModule } from 'nestjs-pino';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
@@ -38,7 +37,6 @@ export class AppModule {
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,
-        ThrottlerModule.forRoot([{ ttl: 60_000, limit: cfg.LOGIN_THROTTLE_LIMIT }]),
         ...FEATURES,
         SeedModule,
       ],

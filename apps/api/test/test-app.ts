@@ -31,6 +31,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     UPLOADS_DIR: join(dir, 'uploads'),
     WEB_DIST: join(dir, 'no-web'),
     LOGIN_THROTTLE_LIMIT: '1000',
+    LOGIN_THROTTLE_ADDRESS_LIMIT: '1000',
     MAIL_CATCHER: 'false',
     LOG_LEVEL: 'silent',
     ...env,

@@ -18,6 +18,13 @@ export const UpdateUserRequestSchema = z
   .refine((v) => v.role !== undefined || v.active !== undefined, 'Change the role or the active flag');
 export type UpdateUserRequest = z.infer<typeof UpdateUserRequestSchema>;
 
+/** A signed-in user changes their own password; every other session of theirs ends. */
+export const ChangePasswordRequestSchema = z.object({
+  currentPassword: z.string().min(1, 'Required').max(200),
+  newPassword: z.string().min(MIN_PASSWORD_LENGTH, `At least ${MIN_PASSWORD_LENGTH} characters`).max(200),
+});
+export type ChangePasswordRequest = z.infer<typeof ChangePasswordRequestSchema>;
+
 export const UserDtoSchema = z.object({
   id: IdSchema,
   name: z.string(),

@@ -27,7 +27,15 @@ const EnvSchema = z.object({
   SESSION_TTL_SECONDS: z.coerce.number().int().positive().default(8 * 3600),
   SEED_DEMO: bool.default(true),
   COOKIE_SECURE: bool.default(false),
+  /** Failed sign-ins allowed per account, and per address, within the window. */
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
+  LOGIN_THROTTLE_ADDRESS_LIMIT: z.coerce.number().int().positive().default(50),
+  LOGIN_THROTTLE_WINDOW_SECONDS: z.coerce.number().int().positive().default(15 * 60),
+  /** Express 'trust proxy' (e.g. `loopback`, `1`, `10.0.0.0/8`). Unset: X-Forwarded-For is ignored. */
+  TRUST_PROXY: z.string().min(1).optional(),
+  PUBLIC_URL: z.string().url().optional(),
+  /** The origin the web app is served from; the only one allowed cross-origin (tus CORS). Default: PUBLIC_URL's origin, else http://localhost:PORT. */
+  APP_ORIGIN: z.string().url().optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().default(1025),
   MAIL_FROM: z.string().default('BenchProof <reports@benchproof.localhost>'),
@@ -47,7 +55,7 @@ const EnvSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
-export type AppConfig = z.infer<typeof EnvSchema> & { jwtSecret: string };
+export type AppConfig = z.infer<typeof EnvSchema> & { jwtSecret: string; appOrigin: string };
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
 
@@ -61,7 +69,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     throw new Error(`Invalid environment: ${z.prettifyError(parsed.error)}`);
   }
   const cfg = parsed.data;
-  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH) };
+  const appOrigin = new URL(cfg.APP_ORIGIN ?? cfg.PUBLIC_URL ?? `http://localhost:${cfg.PORT}`).origin;
+  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH), appOrigin };
 }
 
 function secretBeside(databasePath: string): string {

@@ -120,7 +120,11 @@ export class MediaIntakeService {
   }
 
   private async probe(path: string, type: AcceptedType, dims: Dims | null): Promise<Probed> {
-    if (type.family === 'video' || !dims) return { ...(await this.video.probe(path)), capturedAt: null };
+    if (type.family === 'video' || !dims) {
+      const info = await this.video.probe(path);
+      if (!info) throw new DomainError('VIDEO_UNREADABLE');
+      return { ...info, capturedAt: null };
+    }
     return { ...dims, durationMs: null, capturedAt: await this.image.captureTime(path) };
   }
 

@@ -6,11 +6,13 @@ import type { Upload } from '@tus/utils';
 import { randomUUID } from 'node:crypto';
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import { join } from 'node:path';
+import { NodeRequest, sendNodeResponse } from 'srvx/node';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { MediaIntakeService } from './media-intake.service';
+import { withJsonError } from './media-tus.errors';
 import { MediaService } from './media.service';
 
 export const TUS_PATH = '/api/media/tus';
@@ -76,6 +78,9 @@ export class MediaTusService implements OnModuleInit {
       datastore: this.store,
       relativeLocation: true,
       respectForwardedHeaders: false,
+      // The web app is served from this origin; no other site may drive uploads from a browser.
+      allowedOrigins: (origin: string) => origin === this.cfg.appOrigin,
+      allowedCredentials: true,
       maxSize: this.cfg.MAX_VIDEO_BYTES,
       namingFunction: () => randomUUID().replace(/-/g, ''),
       onUploadCreate: (req, upload) => this.onCreate(req, upload),
@@ -86,7 +91,9 @@ export class MediaTusService implements OnModuleInit {
   /** Hands the raw request to tus once the caller may touch this upload (404 for other shops). */
   async handle(actor: AuthUser, uploadId: string | null, req: IncomingMessage, res: ServerResponse): Promise<void> {
     if (uploadId !== null) await this.assertAccess(actor, uploadId);
-    await this.server.handle(req, res);
+    // handle() would send tus's plain-text errors as they are; this turns them into the one JSON error shape first.
+    const response = await this.server.handleWeb(new NodeRequest({ req, res }));
+    await sendNodeResponse(res, await withJsonError(response, req.method ?? 'GET'));
   }
 
   async status(actor: AuthUser, uploadId: string): Promise<TusUploadStatus> {

@@ -30,6 +30,10 @@ export class UsersRepository {
     return this.db.update(users).set(patch).where(and(eq(users.shopId, shopId), eq(users.id, id))).returning().get();
   }
 
+  setPasswordHash(shopId: number, id: number, passwordHash: string): void {
+    this.db.update(users).set({ passwordHash }).where(and(eq(users.shopId, shopId), eq(users.id, id))).run();
+  }
+
   /** Runs `fn` in one SQLite transaction so the last-manager rule cannot race. */
   transaction<T>(fn: () => T): T {
     return this.db.transaction(() => fn());

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { CreateUserRequest, UpdateUserRequest, UserDto } from '@benchproof/contracts';
 import { AuditService } from '../audit';
-import type { AuthUser } from '../core/auth';
+import { SessionStore, type AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { hashPassword, verifyPassword } from './password';
@@ -14,6 +14,7 @@ export class UsersService {
   constructor(
     private readonly repo: UsersRepository,
     private readonly audit: AuditService,
+    private readonly sessions: SessionStore,
     @Inject(CLOCK) private readonly clock: Clock,
   ) {}
 
@@ -50,10 +51,24 @@ export class UsersService {
       if (!user) throw notFound('User');
       const losesManager = user.role === 'manager' && user.active && (patch.active === false || (patch.role && patch.role !== 'manager'));
       if (losesManager && this.activeManagers(actor.shopId) <= 1) throw new DomainError('LAST_MANAGER');
-      return this.repo.update(actor.shopId, id, patch);
+      const row = this.repo.update(actor.shopId, id, patch);
+      // A deactivated user's tokens must not come back to life when the account is re-activated.
+      if (patch.active === false) this.sessions.endAllOf(actor.shopId, id);
+      return row;
     });
     this.audit.record(actor, { action: 'user.updated', entityType: 'user', entityId: id, details: { ...patch } });
     return toDto(updated);
+  }
+
+  /** Sets the caller's own password after checking the current one, and ends all their sessions. */
+  async changePassword(actor: AuthUser, currentPassword: string, newPassword: string): Promise<void> {
+    const user = this.repo.findInShop(actor.shopId, actor.id);
+    if (!user || !(await verifyPassword(user.passwordHash, currentPassword))) {
+      throw new DomainError('INVALID_CREDENTIALS', 'The current password is not right.', { field: 'currentPassword' });
+    }
+    this.repo.setPasswordHash(actor.shopId, actor.id, await hashPassword(newPassword));
+    this.sessions.endAllOf(actor.shopId, actor.id);
+    this.audit.record(actor, { action: 'user.password_changed', entityType: 'user', entityId: actor.id, details: {} });
   }
 
   /**

@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { binary, bookJob, derivativesSettled, filesUnder, patternBytes, solidJpeg, tinyMp4 } from '../media/media-fixtures';
+import { binary, bookJob, derivativesSettled, filesUnder, patternBytes, solidJpeg, paddedMp4, CLIP_MP4 } from '../media/media-fixtures';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 
 describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
@@ -13,7 +13,7 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
     t = await startTestApp();
     mech = await t.signIn(DEMO.mechanic);
     jobId = await bookJob(t);
-    video = tinyMp4(2500, 320, 240, patternBytes(50_000));
+    video = paddedMp4(patternBytes(50_000));
     const res = await mech.agent
       .post(`/api/jobs/${jobId}/media`)
       .field('phase', 'before')
@@ -33,7 +33,7 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
   };
 
   it('probes the video and serves it whole with type, private caching and the SHA-256 as ETag', async () => {
-    expect(videoAsset).toMatchObject({ kind: 'scope_video', mime: 'video/mp4', durationMs: 2500, width: 320, height: 240, status: 'ready' });
+    expect(videoAsset).toMatchObject({ kind: 'scope_video', mime: 'video/mp4', durationMs: CLIP_MP4.durationMs, width: CLIP_MP4.width, height: CLIP_MP4.height, status: 'ready' });
     const res = await get(videoAsset.urls.original!).expect(200);
     expect(res.headers['content-type']).toBe('video/mp4');
     expect(res.headers['cache-control']).toMatch(/^private/);

@@ -1,5 +1,5 @@
 import { BRAKE_TYPES, CABLE_ROUTINGS, DROPOUT_TYPES, FRAME_MATERIALS } from '@benchproof/domain';
-import { readdirSync, statSync } from 'node:fs';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { MediaDerivativesService } from '../../src/media';
@@ -87,20 +87,28 @@ const box = (type: string, ...parts: Buffer[]) => {
   return Buffer.concat([head, body]);
 };
 
+const fixture = (name: string) => readFileSync(join(__dirname, name));
+
 /**
- * A minimal ISO base media file (ISO/IEC 14496-12): ftyp, moov with mvhd (timescale
- * 1000, the duration) and one trak/tkhd (width/height as 16.16), then `payload` in mdat.
- * Enough for type sniffing, the duration/size probe and byte-range reads.
+ * Real clips made once with ffmpeg 7 from its `testsrc` pattern and committed (a few KB each):
+ * `-f lavfi -i testsrc=size=64x48:rate=10 -t 1 -c:v libx264 -movflags +faststart` and
+ * `-f lavfi -i testsrc=size=80x60:rate=10 -t 1.5 -c:v libvpx`.
  */
-export function tinyMp4(durationMs: number, width: number, height: number, payload: Buffer): Buffer {
-  const ftyp = box('ftyp', Buffer.from('isom'), Buffer.from([0, 0, 2, 0]), Buffer.from('isomiso2mp41'));
-  const mvhd = Buffer.alloc(100);
-  mvhd.writeUInt32BE(1000, 12);
-  mvhd.writeUInt32BE(durationMs, 16);
-  const tkhd = Buffer.alloc(84);
-  tkhd.writeUInt32BE(width * 65536, 76);
-  tkhd.writeUInt32BE(height * 65536, 80);
-  return Buffer.concat([ftyp, box('moov', box('mvhd', mvhd), box('trak', box('tkhd', tkhd))), box('mdat', payload)]);
+export const CLIP_MP4 = { bytes: fixture('clip-64x48.mp4'), width: 64, height: 48, durationMs: 1000 };
+export const CLIP_WEBM = { bytes: fixture('clip-80x60.webm'), width: 80, height: 60, durationMs: 1500 };
+/** As the browser's MediaRecorder writes it, without a Duration element (`-f webm -live 1`). */
+export const CLIP_WEBM_LIVE = { bytes: fixture('clip-80x60-live.webm'), width: 80, height: 60, durationMs: null };
+
+/**
+ * The real MP4 clip followed by a `free` box of `padding` (ISO/IEC 14496-12 §8.1.2: readers
+ * skip free space), so a large upload is still a playable 64×48, 1 s video.
+ */
+export const paddedMp4 = (padding: Buffer): Buffer => Buffer.concat([CLIP_MP4.bytes, box('free', padding)]);
+
+/** What a careless or hostile client sends as clip.mp4: a valid 24-byte `ftyp` box, then noise. */
+export function junkMp4(noiseBytes: number): Buffer {
+  const ftyp = box('ftyp', Buffer.from('isom'), Buffer.from([0, 0, 2, 0]), Buffer.from('isomiso2'));
+  return Buffer.concat([ftyp, patternBytes(noiseBytes, 99)]);
 }
 
 /** Deterministic, incompressible-looking bytes. */

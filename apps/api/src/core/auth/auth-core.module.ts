@@ -7,6 +7,7 @@ import { CSRF, CsrfGuard, csrfFactory } from './csrf';
 import { JwtAuthGuard } from './jwt-auth.guard';
 import { JwtStrategy } from './jwt.strategy';
 import { PolicyGuard } from './policy.guard';
+import { SessionStore } from './session-store';
 
 /** Sessions for the whole API: the global guards run in order session → policy → CSRF. */
 @Global()
@@ -23,11 +24,12 @@ import { PolicyGuard } from './policy.guard';
   ],
   providers: [
     JwtStrategy,
+    SessionStore,
     { provide: CSRF, inject: [APP_CONFIG], useFactory: csrfFactory },
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: PolicyGuard },
     { provide: APP_GUARD, useClass: CsrfGuard },
   ],
-  exports: [JwtModule, CSRF],
+  exports: [JwtModule, CSRF, SessionStore],
 })
 export class AuthCoreModule {}

@@ -15,4 +15,6 @@ export interface SessionClaims {
   sub: number;
   shop: number;
   role: Role;
+  /** The server-side session (sessions table) this token belongs to. */
+  sid: string;
 }

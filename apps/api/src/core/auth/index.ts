@@ -4,3 +4,5 @@ export { AuthCoreModule } from './auth-core.module';
 export { PolicyGuard, assertCan, staffActor } from './policy.guard';
 export { CSRF, issueCsrfToken } from './csrf';
 export { SESSION_COOKIE, CSRF_COOKIE, CSRF_HEADER, sessionCookieOptions } from './session-cookie';
+export { SessionStore } from './session-store';
+export { sessionTokenFrom } from './jwt.strategy';

@@ -1,34 +1,40 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { PassportStrategy } from '@nestjs/passport';
-import { eq } from 'drizzle-orm';
+import { createSecretKey, type KeyObject } from 'node:crypto';
 import { ExtractJwt, Strategy } from 'passport-jwt';
 import { APP_CONFIG, type AppConfig } from '../../config';
-import { users } from '../../db/schema';
-import { DB, type Db } from '../db';
 import type { AuthUser, SessionClaims } from './auth-user';
 import { sessionFromCookie } from './session-cookie';
+import { SessionStore } from './session-store';
+
+/** The signing secret as a ready key object, so verifying a token does not re-import a string each request. */
+export const sessionKey = (cfg: AppConfig): KeyObject => createSecretKey(Buffer.from(cfg.jwtSecret, 'utf8'));
+
+/** Where a session token may come from: the httpOnly cookie (browsers) or a Bearer header (scripts). */
+export const sessionTokenFrom = ExtractJwt.fromExtractors([sessionFromCookie, ExtractJwt.fromAuthHeaderAsBearerToken()]);
 
 /**
  * Reads the JWT from the httpOnly session cookie (browsers, including `<img>` and
- * `<video>` requests) or from a Bearer header (scripts). A deactivated user loses
- * access at the next request, not when the token expires.
+ * `<video>` requests) or from a Bearer header (scripts). The token must carry an
+ * expiry and name a live server-side session: sign-out, deactivation and a password
+ * change end it at the next request, not when the token expires.
  */
 @Injectable()
 export class JwtStrategy extends PassportStrategy(Strategy) {
   constructor(
     @Inject(APP_CONFIG) cfg: AppConfig,
-    @Inject(DB) private readonly db: Db,
+    private readonly sessions: SessionStore,
   ) {
     super({
-      jwtFromRequest: ExtractJwt.fromExtractors([sessionFromCookie, ExtractJwt.fromAuthHeaderAsBearerToken()]),
-      secretOrKey: cfg.jwtSecret,
+      jwtFromRequest: sessionTokenFrom,
+      // passport-jwt hands this to jsonwebtoken, which accepts a KeyObject; its typings only list string | Buffer.
+      secretOrKey: sessionKey(cfg) as unknown as string,
       algorithms: ['HS256'],
     });
   }
 
-  validate(claims: SessionClaims): AuthUser | false {
-    const user = this.db.select().from(users).where(eq(users.id, claims.sub)).get();
-    if (!user?.active || user.shopId !== claims.shop) return false;
-    return { id: user.id, shopId: user.shopId, role: user.role, email: user.email, name: user.name };
+  validate(claims: SessionClaims & { exp?: unknown }): AuthUser | false {
+    if (typeof claims.exp !== 'number' || typeof claims.sid !== 'string') return false;
+    return this.sessions.resolve(claims.sid, claims.sub, claims.shop) ?? false;
   }
 }

@@ -14,6 +14,16 @@ const CODE_BY_STATUS: Record<number, ErrorCode> = {
   429: 'RATE_LIMITED',
 };
 
+/**
+ * A JSON or form body over the parser's limit arrives as an HttpException whose cause is
+ * body-parser's http-error (type `entity.too.large`, with the limit); multer's own 413 is a file.
+ */
+function bodyTooLarge(exception: unknown): ErrorBody | null {
+  const cause = exception instanceof HttpException ? (exception.cause as { type?: unknown; limit?: unknown } | undefined) : undefined;
+  if (cause?.type !== 'entity.too.large') return null;
+  return { code: 'BODY_TOO_LARGE', message: ERROR_CODES.BODY_TOO_LARGE.message, details: { limitBytes: typeof cause.limit === 'number' ? cause.limit : null } };
+}
+
 /** The single place errors become HTTP responses: always `{code, message, details}`. */
 @Catch()
 export class ErrorFilter implements ExceptionFilter {
@@ -23,6 +33,8 @@ export class ErrorFilter implements ExceptionFilter {
     const res = host.switchToHttp().getResponse<Response>();
     const { status, body } = this.toBody(exception);
     if (status >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    const retryAfter = (body.details as { retryAfterSeconds?: unknown } | null)?.retryAfterSeconds;
+    if (status === 429 && typeof retryAfter === 'number' && !res.headersSent) res.setHeader('Retry-After', String(retryAfter));
     if (!res.headersSent) res.status(status).json(body);
   }
 
@@ -30,6 +42,8 @@ export class ErrorFilter implements ExceptionFilter {
     if (exception instanceof DomainError) {
       return { status: exception.status, body: { code: exception.code, message: exception.message, details: exception.details } };
     }
+    const body = bodyTooLarge(exception);
+    if (body) return { status: 413, body };
     if (exception instanceof HttpException) {
       const status = exception.getStatus();
       const code = CODE_BY_STATUS[status] ?? (status >= 500 ? 'INTERNAL' : 'VALIDATION_FAILED');

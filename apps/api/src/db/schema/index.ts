@@ -17,3 +17,4 @@ export * from './media-assets.table';
 export * from './media-derivatives.table';
 export * from './finding-media.table';
 export * from './tasks.table';
+export * from './sessions.table';

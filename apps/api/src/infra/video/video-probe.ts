@@ -1,92 +1,82 @@
-import { open, type FileHandle } from 'node:fs/promises';
+import mediaInfoFactory, { type MediaInfo, type ReadChunkFunc } from 'mediainfo.js';
+import { open } from 'node:fs/promises';
 
+/** What a readable video reports; the duration is null only for a live-recorded WebM (see below). */
 export interface VideoInfo {
   durationMs: number | null;
-  width: number | null;
-  height: number | null;
+  width: number;
+  height: number;
 }
 
-const NONE: VideoInfo = { durationMs: null, width: null, height: null };
-const MAX_MOOV_BYTES = 32 * 1024 * 1024;
-
 /**
- * Duration and frame size of an MP4/MOV from its `moov` box (ISO/IEC 14496-12:
- * mvhd timescale + duration, tkhd width/height as 16.16 fixed point), without
- * decoding anything. Other containers (WebM) report nulls.
+ * Duration and frame size of a video (MP4/QuickTime from phones, WebM from the
+ * browser's recorder) read by MediaInfoLib compiled to WebAssembly (mediainfo.js).
+ * Its .wasm ships inside the npm package and is loaded from node_modules, never
+ * fetched. A file without a video track or frame size answers null: a ftyp box
+ * followed by noise sniffs as MP4 but is not a video. MP4/QuickTime must also
+ * declare a duration (mvhd). A WebM may lack one: the browser's MediaRecorder
+ * writes live WebM whose Segment Info has no Duration (optional in the Matroska
+ * spec, RFC 9559 §5.1.2.4), and refusing those would refuse the app's own recordings.
  */
 export class VideoProbe {
-  async probe(path: string): Promise<VideoInfo> {
+  private instance?: Promise<MediaInfo<'object'>>;
+  /** One MediaInfo instance parses one file at a time, so calls queue here. */
+  private queue: Promise<unknown> = Promise.resolve();
+
+  probe(path: string): Promise<VideoInfo | null> {
+    const run = this.queue.then(() => this.analyze(path));
+    this.queue = run.catch(() => undefined);
+    return run;
+  }
+
+  private async analyze(path: string): Promise<VideoInfo | null> {
+    const mediaInfo = await this.load();
     const file = await open(path, 'r');
     try {
-      const moov = await findTopLevelBox(file, 'moov');
-      return moov ? parseMoov(moov) : NONE;
+      const { size } = await file.stat();
+      const read: ReadChunkFunc = async (length, offset) => {
+        const chunk = new Uint8Array(Math.max(0, Math.min(length, size - offset)));
+        const { bytesRead } = await file.read(chunk, 0, chunk.length, offset);
+        return chunk.subarray(0, bytesRead);
+      };
+      const result = await mediaInfo.analyzeData(size, read);
+      return toInfo(result.media?.track ?? []);
     } catch {
-      return NONE;
+      return null;
     } finally {
       await file.close();
     }
   }
-}
 
-async function findTopLevelBox(file: FileHandle, type: string): Promise<Buffer | null> {
-  const { size } = await file.stat();
-  const head = Buffer.alloc(16);
-  let pos = 0;
-  while (pos + 8 <= size) {
-    await file.read(head, 0, 16, pos);
-    let boxSize = head.readUInt32BE(0);
-    let headerLen = 8;
-    if (boxSize === 1) {
-      boxSize = Number(head.readBigUInt64BE(8));
-      headerLen = 16;
-    } else if (boxSize === 0) boxSize = size - pos;
-    if (boxSize < headerLen) return null;
-    if (head.toString('latin1', 4, 8) === type) {
-      const len = boxSize - headerLen;
-      if (len > MAX_MOOV_BYTES) return null;
-      const body = Buffer.alloc(len);
-      await file.read(body, 0, len, pos + headerLen);
-      return body;
-    }
-    pos += boxSize;
-  }
-  return null;
-}
-
-function* children(buf: Buffer): Generator<{ type: string; body: Buffer }> {
-  let pos = 0;
-  while (pos + 8 <= buf.length) {
-    const size = buf.readUInt32BE(pos);
-    if (size < 8 || pos + size > buf.length) return;
-    yield { type: buf.toString('latin1', pos + 4, pos + 8), body: buf.subarray(pos + 8, pos + size) };
-    pos += size;
+  private load(): Promise<MediaInfo<'object'>> {
+    const wasm = require.resolve('mediainfo.js/MediaInfoModule.wasm');
+    this.instance ??= mediaInfoFactory({ format: 'object', locateFile: () => wasm });
+    return this.instance;
   }
 }
 
-function parseMoov(moov: Buffer): VideoInfo {
-  const info: VideoInfo = { ...NONE };
-  for (const box of children(moov)) {
-    if (box.type === 'mvhd') info.durationMs = mvhdDurationMs(box.body);
-    if (box.type === 'trak' && info.width === null) {
-      const tkhd = [...children(box.body)].find((c) => c.type === 'tkhd');
-      const size = tkhd ? tkhdSize(tkhd.body) : null;
-      if (size && size.width > 0) Object.assign(info, size);
-    }
-  }
-  return info;
+type Track = Record<string, unknown> & { '@type': string };
+
+function toInfo(found: readonly object[]): VideoInfo | null {
+  const tracks = found as readonly Track[];
+  const general = tracks.find((t) => t['@type'] === 'General');
+  const video = tracks.find((t) => t['@type'] === 'Video');
+  if (!video) return null;
+  const width = positive(video.Width);
+  const height = positive(video.Height);
+  // Seconds in MediaInfo's object output; the container's duration first, the track's when the container has none.
+  const seconds = positive(general?.Duration) ?? positive(video.Duration);
+  const liveWebm = general?.Format === 'WebM' || general?.Format === 'Matroska';
+  if (width === null || height === null || (seconds === null && !liveWebm)) return null;
+  // Phones store portrait clips as landscape frames plus a rotation; report the size as the clip plays.
+  const quarterTurn = Math.abs(Number(video.Rotation ?? 0)) % 180 === 90;
+  const [w, h] = quarterTurn ? [height, width] : [width, height];
+  return { width: Math.round(w), height: Math.round(h), durationMs: seconds === null ? null : Math.round(seconds * 1000) };
 }
 
-function mvhdDurationMs(b: Buffer): number | null {
-  const v1 = b[0] === 1;
-  const timescale = v1 ? b.readUInt32BE(20) : b.readUInt32BE(12);
-  const duration = v1 ? Number(b.readBigUInt64BE(24)) : b.readUInt32BE(16);
-  return timescale > 0 ? Math.round((duration * 1000) / timescale) : null;
-}
-
-function tkhdSize(b: Buffer): { width: number; height: number } | null {
-  const at = b.length - 8;
-  if (at < 0) return null;
-  return { width: Math.round(b.readUInt32BE(at) / 65536), height: Math.round(b.readUInt32BE(at + 4) / 65536) };
+function positive(value: unknown): number | null {
+  const n = typeof value === 'string' ? Number(value) : value;
+  return typeof n === 'number' && Number.isFinite(n) && n > 0 ? n : null;
 }
 
 export const VIDEO_PROBE = Symbol('VIDEO_PROBE');
