@@ -38,7 +38,9 @@ export function requestLogging(cfg: AppConfig): Params {
         res.setHeader('x-request-id', id);
         return id;
       },
-      customProps: (req: IncomingMessage) => {
+      // pino-http asks at the start too, before the session guard and the router have run: only the end counts.
+      customProps: (req: IncomingMessage, res: ServerResponse) => {
+        if (!res.headersSent) return {};
         const r = req as Req;
         return { userId: r.user?.id ?? null, shopId: r.user?.shopId ?? null, route: r.route?.path ?? null };
       },
