@@ -6,6 +6,7 @@ import { buffer } from 'node:stream/consumers';
 import { DERIVATIVE_SIZES, IMAGE, type ImageAdapter, type Rendition, type SizedVariant } from '../infra/image';
 import { TASK_QUEUE, type TaskQueue } from '../infra/queue';
 import { STORAGE, type Storage } from '../infra/storage';
+import { MediaPhashService } from './media-phash.service';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 
 const IMAGE_VARIANTS: SizedVariant[] = ['thumb', 'screen', 'print'];
@@ -22,6 +23,7 @@ export class MediaDerivativesService implements OnApplicationBootstrap, OnApplic
     @Inject(TASK_QUEUE) private readonly queue: TaskQueue,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(IMAGE) private readonly image: ImageAdapter,
+    private readonly phash: MediaPhashService,
   ) {}
 
   onApplicationBootstrap(): void {
@@ -51,6 +53,7 @@ export class MediaDerivativesService implements OnApplicationBootstrap, OnApplic
         await this.save(row, variant, await this.image.rendition(original, DERIVATIVE_SIZES[variant]));
       }
       this.repo.update(assetId, { derivativeStatus: 'ready', derivativeError: null });
+      this.phash.enqueue(row);
     } catch (err) {
       this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
     }
