@@ -57,6 +57,8 @@ export const PairSuggestionDtoSchema = z.object({
   order: z.enum(['after', 'before', 'unknown']),
   /** Differing bits of the two 64-bit perceptual hashes; null while a hash is being computed. */
   distance: z.number().int().nullable(),
+  /** One of the one-to-one picks (each shot used once), listed before the other combinations. */
+  best: z.boolean(),
 });
 export type PairSuggestionDto = z.infer<typeof PairSuggestionDtoSchema>;
 

@@ -55,6 +55,17 @@ describe('scorePair', () => {
 });
 
 describe('suggestPairs', () => {
+  it('one-to-one picks come first even when a reused shot scores higher than a later pick', () => {
+    // Before 1 fits after 3 best (0 bits) and after 4 well (8 bits); before 2 is 16 bits from either.
+    const list = suggestPairs([
+      shot({ id: 1, phash: '0000000000000000' }),
+      shot({ id: 2, phash: 'ffff000000000000' }),
+      shot({ id: 3, phase: 'after', phash: '0000000000000000', takenAt: '2026-03-03T15:00:00Z' }),
+      shot({ id: 4, phase: 'after', phash: 'f00000000000000f', takenAt: '2026-03-03T15:00:00Z' }),
+    ]);
+    expect(list.map((s) => `${s.beforeId}>${s.afterId}${s.best ? '*' : ''}`)).toEqual(['1>3*', '2>4*', '1>4', '2>3']);
+  });
+
   // Two drivetrain subjects: framing (hash) tells them apart, area alone cannot.
   const shots: PairShot[] = [
     shot({ id: 10, phash: 'f0f0f0f000000000' }), // chain before
@@ -67,10 +78,11 @@ describe('suggestPairs', () => {
 
   it('ranks the true pairs first and leaves out during shots and videos', () => {
     const list = suggestPairs(shots);
-    expect(list.slice(0, 2).map((s) => [s.beforeId, s.afterId])).toEqual([
-      [11, 21],
-      [10, 20],
+    expect(list.slice(0, 2).map((s) => [s.beforeId, s.afterId, s.best])).toEqual([
+      [11, 21, true],
+      [10, 20, true],
     ]);
+    expect(list.slice(2).every((s) => !s.best)).toBe(true);
     expect(list).toHaveLength(4);
     expect(list.every((s) => s.beforeId !== 30 && s.afterId !== 40)).toBe(true);
   });

@@ -50,6 +50,11 @@ export interface PairSuggestion {
   order: 'after' | 'before' | 'unknown';
   /** Hamming distance of the two hashes, null if either is missing. */
   distance: number | null;
+  /**
+   * True for the one-to-one picks: taking the best-scoring combination, then the best
+   * among shots not yet used, and so on. What a builder offers with one tap.
+   */
+  best: boolean;
 }
 
 /** Scores one before/after combination; null if the two cannot form a pair at all. */
@@ -62,7 +67,7 @@ export function scorePair(before: PairShot, after: PairShot): PairSuggestion | n
   const framing = distance === null ? 0.5 : Math.max(0, 1 - distance / UNRELATED_DISTANCE);
   const orderScore = order === 'after' ? 1 : order === 'unknown' ? 0.5 : 0;
   const score = PAIR_WEIGHTS.area * (sameArea ? 1 : 0) + PAIR_WEIGHTS.order * orderScore + PAIR_WEIGHTS.framing * framing;
-  return { beforeId: before.id, afterId: after.id, score: Math.round(score * 1e6) / 1e6, sameArea, order, distance };
+  return { beforeId: before.id, afterId: after.id, score: Math.round(score * 1e6) / 1e6, sameArea, order, distance, best: false };
 }
 
 function captureOrder(before: string | null, after: string | null): PairSuggestion['order'] {
@@ -74,8 +79,9 @@ function captureOrder(before: string | null, after: string | null): PairSuggesti
 }
 
 /**
- * Every before/after combination of a job's shots, best first, leaving out shots that
- * are already in a pair. Ties keep a stable order (lower before id, then lower after id).
+ * Every before/after combination of a job's shots, leaving out shots already in a pair:
+ * first the one-to-one picks (greedy by score, each shot used once, `best: true`), then
+ * every other combination by score. Ties keep a stable order (lower before id, then after id).
  */
 export function suggestPairs(shots: readonly PairShot[], alreadyPaired: ReadonlySet<number> = new Set()): PairSuggestion[] {
   const free = shots.filter((s) => !alreadyPaired.has(s.id));
@@ -86,5 +92,12 @@ export function suggestPairs(shots: readonly PairShot[], alreadyPaired: Readonly
       if (s) out.push(s);
     }
   }
-  return out.sort((x, y) => y.score - x.score || x.beforeId - y.beforeId || x.afterId - y.afterId);
+  out.sort((x, y) => y.score - x.score || x.beforeId - y.beforeId || x.afterId - y.afterId);
+  const used = new Set<number>();
+  for (const s of out) {
+    if (used.has(s.beforeId) || used.has(s.afterId)) continue;
+    s.best = true;
+    used.add(s.beforeId).add(s.afterId);
+  }
+  return [...out.filter((s) => s.best), ...out.filter((s) => !s.best)];
 }
