@@ -1,5 +1,5 @@
 import type { MediaAssetDto, PairCrop } from '@benchproof/contracts';
-import { Group, SegmentedControl, SimpleGrid, Stack, Text } from '@mantine/core';
+import { SegmentedControl, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
 import { CompareSlider } from './compare-slider';
 import { CroppedShot } from './cropped-shot';
@@ -11,9 +11,9 @@ export function CompareView({ before, after, crop, caption }: { before: MediaAss
   const [mode, setMode] = useState<Mode>('slider');
   return (
     <Stack gap="xs">
-      <Group justify="space-between" wrap="nowrap">
-        <Text fw={600} lineClamp={2}>{caption || 'Before and after'}</Text>
-        <SegmentedControl
+      <Text fw={600} lineClamp={2}>{caption || 'Before and after'}</Text>
+      <SegmentedControl
+          fullWidth
           size="md"
           value={mode}
           onChange={(v) => setMode(v)}
@@ -23,7 +23,6 @@ export function CompareView({ before, after, crop, caption }: { before: MediaAss
           ]}
           aria-label="How to compare"
         />
-      </Group>
       {mode === 'slider' ? (
         <CompareSlider before={before} after={after} crop={crop} />
       ) : (

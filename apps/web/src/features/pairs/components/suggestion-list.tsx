@@ -24,15 +24,13 @@ function SuggestionCard({ s, onPick, busy }: { s: PairSuggestionDto; onPick: () 
           </Stack>
         ))}
       </SimpleGrid>
-      <Group justify="space-between" mt="xs" wrap="nowrap">
-        <Group gap={6}>
-          <Badge variant="light" color={s.sameArea ? 'blue' : 'gray'}>{MEDIA_AREA_LABELS[s.before.area]}</Badge>
-          <Badge variant="light" color={framing.color}>{framing.label}</Badge>
-        </Group>
-        <Button size="md" leftSection={<IconLink size={20} />} onClick={onPick} loading={busy}>
-          Pair these
-        </Button>
+      <Group gap={6} mt="xs">
+        <Badge variant="light" color={s.sameArea ? 'blue' : 'gray'}>{MEDIA_AREA_LABELS[s.before.area]}</Badge>
+        <Badge variant="light" color={framing.color}>{framing.label}</Badge>
       </Group>
+      <Button size="md" mt="xs" fullWidth leftSection={<IconLink size={20} />} onClick={onPick} loading={busy}>
+        Pair these
+      </Button>
     </Paper>
   );
 }
