@@ -12,6 +12,7 @@ import { CustomersModule } from './customers';
 import { FindingsModule } from './findings';
 import { HealthController } from './health/health.controller';
 import { MediaModule } from './media';
+import { PairsModule } from './pairs';
 import { ClockModule } from './infra/clock';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
@@ -22,7 +23,7 @@ import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule];
 
 @Module({})
 export class AppModule {

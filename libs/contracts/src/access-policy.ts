@@ -69,6 +69,8 @@ export const ACCESS_POLICY = {
   'media.edit': staff(...ALL_STAFF),
   'media.view_deleted': staff('manager'),
   'media.purge': staff('manager'),
+  'pairs.view': staff(...ALL_STAFF),
+  'pairs.edit': staff('manager', 'mechanic'),
   'owner.view': ownerOnly,
   'owner.decide': ownerOnly,
   'owner.consent': ownerOnly,

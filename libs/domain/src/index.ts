@@ -22,3 +22,5 @@ export * from './cautions';
 export * from './wear-trend';
 export * from './torque-wrench';
 export * from './recommendation-urgency';
+export * from './perceptual-hash';
+export * from './pair-suggestion';

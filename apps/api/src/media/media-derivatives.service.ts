@@ -5,6 +5,7 @@ import { buffer } from 'node:stream/consumers';
 import { DERIVATIVE_SIZES, IMAGE, type ImageAdapter, type Rendition, type SizedVariant } from '../infra/image';
 import { STORAGE, type Storage } from '../infra/storage';
 import { type DbTx, TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
+import { MediaPhashService } from './media-phash.service';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 
 const IMAGE_VARIANTS: SizedVariant[] = ['thumb', 'screen', 'print'];
@@ -28,6 +29,7 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(IMAGE) private readonly image: ImageAdapter,
+    private readonly phash: MediaPhashService,
   ) {}
 
   onModuleInit(): void {
@@ -61,6 +63,7 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
         task.progress((i + 1) / IMAGE_VARIANTS.length);
       }
       this.repo.update(assetId, { derivativeStatus: 'ready', derivativeError: null });
+      this.phash.enqueue(row);
     } catch (err) {
       if (task.attempt >= DERIVATIVES_MAX_ATTEMPTS) this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
       throw err;

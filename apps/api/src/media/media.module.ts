@@ -12,6 +12,7 @@ import { MediaDerivativesService } from './media-derivatives.service';
 import { MediaFilesController } from './media-files.controller';
 import { MediaFilesService } from './media-files.service';
 import { MediaIntakeService } from './media-intake.service';
+import { MediaPhashService } from './media-phash.service';
 import { MediaTusController } from './media-tus.controller';
 import { MediaTusService } from './media-tus.service';
 import { MediaUploadService } from './media-upload.service';
@@ -41,6 +42,7 @@ import { MAX_FILES_PER_BATCH } from './upload-form';
     MediaIntakeService,
     MediaUploadService,
     MediaDerivativesService,
+    MediaPhashService,
     MediaFilesService,
     MediaTusService,
     MediaSweepService,

@@ -8,7 +8,7 @@ export type MediaAssetRow = typeof mediaAssets.$inferSelect;
 export type NewMediaAssetRow = typeof mediaAssets.$inferInsert;
 export type MediaDerivativeRow = typeof mediaDerivatives.$inferSelect;
 export type NewMediaDerivativeRow = typeof mediaDerivatives.$inferInsert;
-export type AssetPatch = Partial<Pick<MediaAssetRow, 'phase' | 'area' | 'caption' | 'derivativeStatus' | 'derivativeError' | 'deletedAt' | 'deletedBy' | 'purgedAt' | 'originalKey'>>;
+export type AssetPatch = Partial<Pick<MediaAssetRow, 'phase' | 'area' | 'caption' | 'derivativeStatus' | 'derivativeError' | 'deletedAt' | 'deletedBy' | 'purgedAt' | 'originalKey' | 'phash'>>;
 
 @Injectable()
 export class MediaRepository {
@@ -50,6 +50,15 @@ export class MediaRepository {
       .select()
       .from(mediaAssets)
       .where(and(eq(mediaAssets.derivativeStatus, 'pending'), isNull(mediaAssets.purgedAt)))
+      .all();
+  }
+
+  /** Stills whose derivatives are ready but whose perceptual hash is missing (boot catch-up). */
+  listMissingPhash(): MediaAssetRow[] {
+    return this.db
+      .select()
+      .from(mediaAssets)
+      .where(and(eq(mediaAssets.derivativeStatus, 'ready'), isNull(mediaAssets.phash), isNull(mediaAssets.purgedAt), inArray(mediaAssets.kind, ['photo', 'scope_still'])))
       .all();
   }
 

@@ -1,11 +1,13 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { roleCan, type FindingMediaDto, type MediaAssetDto, type MediaListQuery, type RetagOneRequest, type RetagRequest } from '@benchproof/contracts';
+import type { PairShot } from '@benchproof/domain';
+
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { FindingsService } from '../findings';
 import { CLOCK, type Clock } from '../infra/clock';
-import { JobAccess } from '../jobs';
+import { JobAccess, type JobCaller } from '../jobs';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
@@ -114,8 +116,33 @@ export class MediaService {
     return row;
   }
 
+  /** Live media of a job with what the pair rules need (kind, tags, capture time, perceptual hash). */
+  pairShots(actor: JobCaller, jobId: number): ShotForPairing[] {
+    this.jobs.read(actor, jobId);
+    const rows = this.repo.listForJob(actor.shopId, jobId, { includeDeleted: false });
+    return this.toDtos(rows).map((dto, i) => ({ dto, shot: toPairShot(rows[i]) }));
+  }
+
+  /** A live asset anywhere in the caller's shop (NOT_FOUND otherwise), so pairs can tell "another job" apart. */
+  shotInShop(actor: Pick<AuthUser, 'shopId'>, id: number): ShotForPairing & { jobId: number } {
+    const row = this.repo.findInShop(actor.shopId, id);
+    if (!row || row.deletedAt || row.purgedAt) throw notFound('Media');
+    return { dto: this.toDtos([row])[0], shot: toPairShot(row), jobId: row.jobId };
+  }
+
   toDtos(rows: MediaAssetRow[]): MediaAssetDto[] {
     const derivatives = this.repo.derivativesOf(rows.map((r) => r.id));
     return rows.map((r) => toMediaDto(r, derivatives));
   }
+}
+
+export interface ShotForPairing {
+  dto: MediaAssetDto;
+  shot: PairShot;
+}
+
+function toPairShot(r: MediaAssetRow): PairShot {
+  // EXIF capture time when the camera wrote one; the upload time otherwise.
+  const takenAt = (r.capturedAt ?? r.uploadedAt).toISOString();
+  return { id: r.id, kind: r.kind, phase: r.phase, area: r.area, takenAt, phash: r.phash };
 }

@@ -57,7 +57,7 @@ export class DemoMediaSeeder {
   }
 
   private async upload(actor: AuthUser, jobId: number, shot: DemoShot): Promise<void> {
-    const upright = Buffer.from(drawScene(shot.scene, shot.phase === 'before' ? 'before' : 'after'));
+    const upright = Buffer.from(drawScene(shot.scene, shot.phase === 'before' ? 'before' : 'after', shot.framing));
     const stored = await this.image.storedForOrientation(upright, shot.orientation);
     const jpeg = await this.image.jpegWithExif(stored, {
       orientation: shot.orientation,
@@ -66,7 +66,7 @@ export class DemoMediaSeeder {
       make: 'BenchProof demo camera',
     });
     const file = await this.temp.write(jpeg);
-    const { scene, orientation: _o, gps: _g, takenAt: _t, ...tags } = shot;
+    const { scene, orientation: _o, gps: _g, takenAt: _t, framing: _f, decoy: _d, ...tags } = shot;
     await this.intake.intake(actor, jobId, { ...file, originalName: `${scene}-${shot.phase}.jpg` }, tags, 'multipart');
   }
 }

@@ -27,7 +27,7 @@ describe('demo media in the seeded shop', () => {
 
   it('puts before and after shots, and scope stills, on jobs that are under way', () => {
     expect(assets.length).toBeGreaterThanOrEqual(8);
-    expect(new Set(assets.map((a) => a.phase))).toEqual(new Set(['before', 'after']));
+    expect(new Set(assets.map((a) => a.phase))).toEqual(new Set(['before', 'during', 'after']));
     expect(assets.some((a) => a.source === 'scope' && a.area === 'frame_interior')).toBe(true);
   });
 

@@ -18,3 +18,4 @@ export * from './media-derivatives.table';
 export * from './finding-media.table';
 export * from './tasks.table';
 export * from './sessions.table';
+export * from './shot-pairs.table';

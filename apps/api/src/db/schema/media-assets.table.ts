@@ -38,6 +38,8 @@ export const mediaAssets = sqliteTable(
     timecodeMs: integer('timecode_ms'),
     derivativeStatus: text('derivative_status').$type<DerivativeStatus>().notNull(),
     derivativeError: text('derivative_error'),
+    /** 64-bit DCT perceptual hash (16 hex digits) of the upright screen derivative; null until computed. */
+    phash: text('phash'),
     deletedAt: timestamp('deleted_at'),
     deletedBy: integer('deleted_by').references(() => users.id),
     purgedAt: timestamp('purged_at'),

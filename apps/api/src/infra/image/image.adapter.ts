@@ -115,6 +115,24 @@ export class ImageAdapter {
   }
 
   /**
+   * The 32×32 greyscale grid the perceptual hash is computed on (libs/domain
+   * perceptualHash): upright, `fit: 'fill'` (the whole frame, aspect ignored, as the
+   * pHash definition and sharp-phash do), one channel. greyscale() is needed: without it
+   * sharp can hand back three channels (CHECKS.md B.9 gotcha).
+   */
+  async hashGrid(input: string | Buffer, size = 32): Promise<Uint8Array> {
+    const { data, info } = await this.open(input)
+      .rotate()
+      .flatten({ background: '#ffffff' })
+      .greyscale()
+      .resize(size, size, { fit: 'fill' })
+      .raw()
+      .toBuffer({ resolveWithObject: true });
+    if (info.channels !== 1 || data.length !== size * size) throw new Error(`Expected a ${size}×${size} single-channel grid, got ${info.channels} channels`);
+    return new Uint8Array(data.buffer, data.byteOffset, data.length);
+  }
+
+  /**
    * Encodes pixels (PNG, or an SVG scene as a buffer) to a JPEG carrying EXIF orientation,
    * GPS, capture time and camera make as asked: demo and test inputs whose stripping is checked.
    */

@@ -6,6 +6,7 @@ import { FindingsPanel } from '../../../features/findings';
 import { InspectionPanel } from '../../../features/inspection';
 import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
 import { JobMediaSection } from '../../../features/media';
+import { PairsPanel } from '../../../features/pairs';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
 
@@ -68,7 +69,7 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
       // The media feature (features/media) owns this section.
       return <JobMediaSection jobId={job.id} canSeeDeleted={roleCan(me.role, 'media.view_deleted')} />;
     case 'pairs':
-      return <ArrivesWith what="the pairs issue: before/after pairs suggested from the media" />;
+      return <PairsPanel jobId={job.id} canEdit={me.role !== 'desk'} />;
     case 'report':
       return <ArrivesWith what="the report issue: preview, issue and e-mail the bench report" />;
   }

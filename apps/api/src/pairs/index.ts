@@ -1,0 +1,2 @@
+export { PairsModule } from './pairs.module';
+export { PairsService } from './pairs.service';

@@ -1,0 +1,2 @@
+export { PairsPanel } from './components/pairs-panel';
+export { pairImageSources } from './components/pair-image';
