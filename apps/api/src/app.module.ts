@@ -10,6 +10,8 @@ import { CustomersModule } from './customers';
 import { FindingsModule } from './findings';
 import { HealthController } from './health/health.controller';
 import { MediaModule } from './media';
+import { ConsentModule } from './consent';
+import { OwnerModule } from './owner';
 import { ClockModule } from './infra/clock';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
@@ -20,7 +22,7 @@ import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, ConsentModule, OwnerModule];
 
 @Module({})
 export class AppModule {

@@ -23,6 +23,12 @@ export const ERROR_CODES = {
   FILE_EMPTY: { status: 422, message: 'The file is empty.' },
   FILE_CORRUPT: { status: 422, message: 'The file could not be read.' },
   IMAGE_TOO_LARGE: { status: 422, message: 'The image has too many pixels to process.' },
+  OWNER_LINK_INVALID: { status: 404, message: 'This link is not valid. Ask the shop to send you a new one.' },
+  OWNER_LINK_EXPIRED: { status: 410, message: 'This link has expired. Ask the shop to send you a new one.' },
+  OWNER_LINK_REVOKED: { status: 410, message: 'This link was withdrawn by the shop. Ask the shop to send you a new one.' },
+  PRICE_CHANGED: { status: 409, message: 'The shop changed this price after you opened the page. Check the new price and decide again.' },
+  SAFETY_CONFIRMATION_REQUIRED: { status: 422, message: 'Declining a safety item needs a second confirmation.' },
+  CONSENT_WORDING_CHANGED: { status: 409, message: 'The consent wording has changed. Read it again before deciding.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
 } as const satisfies Record<string, { status: number; message: string }>;

@@ -15,3 +15,5 @@ export * from './bike-history';
 export * from './inspection';
 export * from './findings';
 export * from './work-log';
+export * from './consent';
+export * from './owner';
