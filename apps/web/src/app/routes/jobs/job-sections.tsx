@@ -6,6 +6,7 @@ import { FindingsPanel } from '../../../features/findings';
 import { InspectionPanel } from '../../../features/inspection';
 import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
 import { JobMediaSection } from '../../../features/media';
+import { OwnerLinkPanel } from '../../../features/owner';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
 
@@ -23,6 +24,7 @@ export const JOB_SECTIONS = [
   { value: 'media', label: 'Media' },
   { value: 'pairs', label: 'Pairs' },
   { value: 'report', label: 'Report' },
+  { value: 'owner', label: 'Owner link' },
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
@@ -71,5 +73,7 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
       return <ArrivesWith what="the pairs issue: before/after pairs suggested from the media" />;
     case 'report':
       return <ArrivesWith what="the report issue: preview, issue and e-mail the bench report" />;
+    case 'owner':
+      return <OwnerLinkPanel jobId={job.id} canManage={me.role !== 'mechanic'} ownerName={job.customer.name} />;
   }
 }
