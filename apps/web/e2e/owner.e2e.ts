@@ -34,7 +34,7 @@ describe('the owner page: desk sends the link, the owner decides and consents, d
     open.push(owner);
     await owner.page.goto(new URL(url).pathname);
     await owner.page.getByRole('heading', { name: /Pellbrook Drift 10/ }).waitFor();
-    await owner.page.getByText('DO NOT RIDE').waitFor();
+    await owner.page.getByText('DO NOT RIDE', { exact: true }).waitFor();
     await owner.page.getByText('Squeal from the back brake and the chain jumps on hills.').waitFor();
     expect(await owner.page.getByRole('link', { name: 'Call' }).getAttribute('href')).toMatch(/^tel:\+?\d+$/);
     await snap(owner.page, 'owner-page-phone');
