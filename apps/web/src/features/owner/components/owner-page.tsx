@@ -26,6 +26,8 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: NonNulla
   const c = useChoices(page.findings);
   const [confirming, setConfirming] = useState(false);
   const [sent, setSent] = useState(false);
+  // Unsafe items first: "do not ride" must be the first thing the owner reads.
+  const findings = [...page.findings].sort((a, b) => Number(b.doNotRide) - Number(a.doNotRide));
   const currency = page.findings.find((f) => f.recommendation)?.recommendation?.currency ?? 'EUR';
   return (
     <div className={classes.page}>
@@ -36,7 +38,7 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: NonNulla
         {page.findings.length > 0 && (
           <Stack gap="sm">
             <Title order={2} size="h3">What we found</Title>
-            {page.findings.map((f) => (
+            {findings.map((f) => (
               <OwnerFindingCard key={f.id} finding={f} choice={f.recommendation ? c.choices[f.recommendation.id] : undefined} onChoose={(ch) => f.recommendation && c.choose(f.recommendation.id, ch)} />
             ))}
           </Stack>
