@@ -77,7 +77,7 @@ describe('the owner page: desk sends the link, the owner decides and consents, d
     await owner.page.getByText(/Only photos of the bike and its parts are used/).waitFor();
     await owner.page.getByLabel('The make and model of my bike may be named').check();
     // The switch follows the server: it flips when the shop has stored the answer.
-    await owner.page.getByText('No, do not use the photos').click();
+    await owner.page.getByRole('switch', { name: 'Marketing consent' }).click();
     await owner.page.getByText(/^Given on /).waitFor();
     await snap(owner.page, 'owner-after-answers-phone');
 
