@@ -13,6 +13,8 @@ import { FindingsModule } from './findings';
 import { HealthController } from './health/health.controller';
 import { MediaModule } from './media';
 import { PairsModule } from './pairs';
+import { ConsentModule } from './consent';
+import { OwnerModule } from './owner';
 import { ClockModule } from './infra/clock';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
@@ -23,7 +25,7 @@ import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule];
 
 @Module({})
 export class AppModule {

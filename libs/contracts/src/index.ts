@@ -17,3 +17,5 @@ export * from './inspection';
 export * from './findings';
 export * from './work-log';
 export * from './pairs';
+export * from './consent';
+export * from './owner';

@@ -24,3 +24,4 @@ export * from './torque-wrench';
 export * from './recommendation-urgency';
 export * from './perceptual-hash';
 export * from './pair-suggestion';
+export * from './owner-explanations';

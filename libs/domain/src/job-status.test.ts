@@ -9,6 +9,7 @@ import {
   isJobStatus,
   isTerminalStatus,
   nextAction,
+  statusAfterOwnerAnswer,
   type JobStatus,
 } from './job-status';
 
@@ -121,5 +122,17 @@ describe('finalCheckAllowed', () => {
     { requiresSecondPerson: false, mechanicId: 7, checkerId: 7, allowed: true },
   ])('second person $requiresSecondPerson, mechanic $mechanicId, checker $checkerId → $allowed', (c) => {
     expect(finalCheckAllowed(c)).toBe(c.allowed);
+  });
+});
+
+describe('statusAfterOwnerAnswer', () => {
+  it.each([
+    ['waiting_owner', 0, 'in_work'],
+    ['waiting_owner', 1, null],
+    ['on_stand', 0, null],
+    ['in_work', 0, null],
+    ['collected', 0, null],
+  ] as const)('%s with %i pending → %s', (status, pending, expected) => {
+    expect(statusAfterOwnerAnswer(status, pending)).toBe(expected);
   });
 });

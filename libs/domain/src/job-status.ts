@@ -113,3 +113,13 @@ export function finalCheckAllowed(input: {
   const { mechanicId } = input;
   return mechanicId === null || mechanicId === undefined || mechanicId !== input.checkerId;
 }
+
+/**
+ * Where the job goes once the owner has answered: a job waiting on the owner
+ * moves on to work when no recommendation is pending any more (approved or
+ * declined alike — the bench works on what was approved). Null when it stays.
+ */
+export function statusAfterOwnerAnswer(status: JobStatus, pendingCount: number): JobStatus | null {
+  if (status !== 'waiting_owner' || pendingCount > 0) return null;
+  return canTransition(status, 'in_work') ? 'in_work' : null;
+}

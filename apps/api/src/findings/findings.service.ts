@@ -18,10 +18,10 @@ import { publish, RecommendationDecidedEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { InspectionService } from '../inspection';
-import { JobAccess, type EvidenceKind, type JobRef } from '../jobs';
+import { JobAccess, type EvidenceKind, type JobCaller, type JobRef } from '../jobs';
 import { ShopsService } from '../shops';
 import { type FindingRow, FindingsRepository, type RecommendationRow } from './findings.repository';
-import { addTotals, toDecisionDto, toFindingDto, toRecommendationDto, ZERO_TOTALS } from './findings.view';
+import { addTotals, recommendationTotals, toDecisionDto, toFindingDto, toRecommendationDto, ZERO_TOTALS } from './findings.view';
 
 /** One decision on a recommendation, from staff (phone, in person, e-mail) or from the owner page (owner_link). */
 export interface DecisionInput {
@@ -32,6 +32,12 @@ export interface DecisionInput {
   recordedBy: number | null;
   decidedAt: Date;
   note: string;
+  /**
+   * The version and gross price the decider saw (owner page). When desk has
+   * re-priced since, the decision is refused with PRICE_CHANGED instead of
+   * binding the owner to a price they never saw.
+   */
+  seen?: { updatedAt: string; grossMinor: number };
 }
 
 @Injectable()
@@ -71,7 +77,7 @@ export class FindingsService {
     return rows.map((f) => toFindingDto(f, recs.find((r) => r.findingId === f.id), decisions, carbon));
   }
 
-  list(actor: AuthUser, jobId: number): FindingDto[] {
+  list(actor: JobCaller, jobId: number): FindingDto[] {
     const job = this.jobs.read(actor, jobId);
     return this.dtos(actor, job, this.repo.list(actor.shopId, jobId));
   }
@@ -122,7 +128,7 @@ export class FindingsService {
     return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]), finding.condition);
   }
 
-  estimate(actor: AuthUser, jobId: number): EstimateDto {
+  estimate(actor: JobCaller, jobId: number): EstimateDto {
     const job = this.jobs.read(actor, jobId);
     const items = this.dtos(actor, job, this.repo.list(actor.shopId, jobId)).flatMap((f) => (f.recommendation ? [{ ...f, recommendation: f.recommendation }] : []));
     const totals = { all: ZERO_TOTALS, approved: ZERO_TOTALS, pending: ZERO_TOTALS, declined: ZERO_TOTALS };
@@ -147,6 +153,7 @@ export class FindingsService {
   decide(scope: { shopId: number }, jobId: number, recommendationId: number, d: DecisionInput): DecisionDto {
     const rec: RecommendationRow | undefined = this.repo.recommendation(scope.shopId, jobId, recommendationId);
     if (!rec) throw notFound('Recommendation');
+    if (d.seen) this.requireSeenPrice(rec, d.seen);
     const row = this.repo.transaction((tx) => {
       const inserted = this.repo.insertDecision({ ...d, shopId: scope.shopId, jobId, recommendationId, recordedAt: this.clock.now() });
       this.repo.updateRecommendation(scope.shopId, rec.id, { decisionStatus: d.status });
@@ -161,5 +168,11 @@ export class FindingsService {
       details: { recommendationId, status: d.status, channel: d.channel, decidedByName: d.decidedByName },
     });
     return toDecisionDto(row);
+  }
+
+  private requireSeenPrice(rec: RecommendationRow, seen: { updatedAt: string; grossMinor: number }): void {
+    const grossMinor = recommendationTotals(rec).grossMinor;
+    if (rec.updatedAt.getTime() === new Date(seen.updatedAt).getTime() && grossMinor === seen.grossMinor) return;
+    throw new DomainError('PRICE_CHANGED', undefined, { recommendationId: rec.id, grossMinor, currency: rec.currency, updatedAt: rec.updatedAt.toISOString() });
   }
 }

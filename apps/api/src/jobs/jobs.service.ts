@@ -29,7 +29,7 @@ import { type JobRow, JobsRepository } from './jobs.repository';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
 
 
-type Actor = Pick<AuthUser, 'id' | 'shopId'>;
+type Actor = Pick<AuthUser, 'shopId'>;
 
 @Injectable()
 export class JobsService {
@@ -145,19 +145,33 @@ export class JobsService {
 
   /** Moves the job along JOB_TRANSITIONS (libs/domain); anything else is ILLEGAL_TRANSITION. */
   transition(actor: AuthUser, id: number, input: TransitionRequest): JobDetail {
+    this.move(actor, id, input.to, input.note ?? '');
+    return this.get(actor, id);
+  }
+
+  /** What the owner page may show of a job: no staff, no internal notes. */
+  ownerFacing(scope: Pick<AuthUser, 'shopId'>, id: number): JobRef & { reportedSymptoms: string; promisedOn: string | null } {
+    const job = this.load(scope, id);
+    return { ...toJobRef(job), reportedSymptoms: job.reportedSymptoms, promisedOn: job.promisedOn };
+  }
+
+  /** A status change caused by the owner on their own page: same table, no staff user, audited as the owner link. */
+  transitionByOwner(scope: Pick<AuthUser, 'shopId'>, id: number, to: JobRow['status'], note: string): void {
+    this.move({ shopId: scope.shopId, id: null }, id, to, note);
+  }
+
+  private move(actor: { shopId: number; id: number | null }, id: number, to: JobRow['status'], note: string): void {
     this.repo.transaction((tx) => {
       const job = this.load(actor, id);
-      if (!canTransition(job.status, input.to)) {
-        throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to: input.to, allowed: allowedNextStatuses(job.status) });
-      }
-      if (input.to === 'ready') this.requirePassedCheck(actor, job);
+      if (!canTransition(job.status, to)) throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to, allowed: allowedNextStatuses(job.status) });
+      if (to === 'ready') this.requirePassedCheck(actor, job);
       const now = this.clock.now();
-      this.repo.update(actor.shopId, id, { status: input.to, [STATUS_TIME_FIELD[input.to]]: now, updatedAt: now });
-      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: input.to, userId: actor.id, note: input.note ?? '', at: now });
-      this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details: { from: job.status, to: input.to } });
-      publish(this.emitter, new JobMovedEvent(tx, actor.shopId, id, job.status, input.to, actor.id));
+      this.repo.update(actor.shopId, id, { status: to, [STATUS_TIME_FIELD[to]]: now, updatedAt: now });
+      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: to, userId: actor.id, note, at: now });
+      const details = actor.id === null ? { from: job.status, to, by: 'owner_link' } : { from: job.status, to };
+      this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details });
+      publish(this.emitter, new JobMovedEvent(tx, actor.shopId, id, job.status, to, actor.id));
     });
-    return this.get(actor, id);
   }
 
   /** Ready needs a passed final check taken since the job last entered final check. */

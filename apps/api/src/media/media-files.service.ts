@@ -28,7 +28,22 @@ export class MediaFilesService {
   ) {}
 
   async open(actor: AuthUser, id: number, variant: MediaVariant | 'original', req: { range?: string; ifNoneMatch?: string }): Promise<FileReply> {
-    const file = this.locate(actor, id, variant);
+    return this.serve(this.locate(actor, id, variant), id, variant, req);
+  }
+
+  /**
+   * A screen-sized derivative of a live asset of this job, for the owner page:
+   * never the original, never another job's media.
+   */
+  async openDerivativeOfJob(scope: { shopId: number; jobId: number }, id: number, variant: 'thumb' | 'screen', req: { range?: string; ifNoneMatch?: string }): Promise<FileReply> {
+    const row = this.repo.findInShop(scope.shopId, id);
+    if (!row || row.jobId !== scope.jobId || row.deletedAt || row.purgedAt) throw notFound('Media');
+    const d = this.repo.findDerivative(row.id, variant) ?? this.repo.findDerivative(row.id, 'poster');
+    if (!d) throw notFound('Media variant');
+    return this.serve({ key: d.key, sha256: d.sha256, mime: 'image/jpeg' }, id, variant, req);
+  }
+
+  private async serve(file: { key: string; sha256: string; mime: string }, id: number, variant: string, req: { range?: string; ifNoneMatch?: string }): Promise<FileReply> {
     const stat = await this.storage.stat(file.key);
     if (!stat) throw notFound('Media file');
     const etag = `"${file.sha256}"`;

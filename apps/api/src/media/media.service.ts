@@ -108,6 +108,18 @@ export class MediaService {
     return { findingId, assets: this.toDtos(ordered) };
   }
 
+  /** Live, ready images linked to each finding, in the mechanic's order (the owner page shows these). */
+  shotsOfFindings(scope: { shopId: number; jobId: number }, findingIds: number[]): Map<number, MediaAssetDto[]> {
+    const out = new Map<number, MediaAssetDto[]>();
+    for (const findingId of findingIds) {
+      const ids = this.repo.linksOf(findingId);
+      const rows = this.repo.listByIds(scope.shopId, scope.jobId, ids).filter((r) => r.derivativeStatus === 'ready');
+      const ordered = ids.map((id) => rows.find((r) => r.id === id)).filter((r): r is MediaAssetRow => Boolean(r));
+      out.set(findingId, this.toDtos(ordered));
+    }
+    return out;
+  }
+
   /** A live (or, for managers, soft-deleted) asset of this job in the caller's shop. */
   owned(actor: AuthUser, jobId: number, id: number): MediaAssetRow {
     this.assertJob(actor, jobId);

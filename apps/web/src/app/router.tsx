@@ -30,6 +30,7 @@ const signedIn: RouteObject[] = [
 
 export const routes: RouteObject[] = [
   { path: '/sign-in', element: <SignInRoute />, errorElement: <RouteError /> },
+  { path: '/o/:token', lazy: page(() => import('./routes/owner/owner.route'), (m) => m.OwnerRoute), errorElement: <RouteError /> },
   {
     path: '/',
     loader: requireSession,

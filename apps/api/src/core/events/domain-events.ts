@@ -40,7 +40,8 @@ export class JobMovedEvent implements InTransaction {
     readonly jobId: number,
     readonly from: string,
     readonly to: string,
-    readonly userId: number,
+    /** null when the owner moved it through their link. */
+    readonly userId: number | null,
   ) {}
 }
 

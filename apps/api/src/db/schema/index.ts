@@ -19,3 +19,5 @@ export * from './finding-media.table';
 export * from './tasks.table';
 export * from './sessions.table';
 export * from './shot-pairs.table';
+export * from './owner-links.table';
+export * from './consents.table';

@@ -7,6 +7,7 @@ import { InspectionPanel } from '../../../features/inspection';
 import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
 import { JobMediaSection } from '../../../features/media';
 import { PairsPanel } from '../../../features/pairs';
+import { OwnerLinkPanel } from '../../../features/owner';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
 
@@ -24,6 +25,7 @@ export const JOB_SECTIONS = [
   { value: 'media', label: 'Media' },
   { value: 'pairs', label: 'Pairs' },
   { value: 'report', label: 'Report' },
+  { value: 'owner', label: 'Owner link' },
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
@@ -69,8 +71,10 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
       // The media feature (features/media) owns this section.
       return <JobMediaSection jobId={job.id} canSeeDeleted={roleCan(me.role, 'media.view_deleted')} />;
     case 'pairs':
-      return <PairsPanel jobId={job.id} canEdit={me.role !== 'desk'} />;
+      return <PairsPanel jobId={job.id} canEdit={roleCan(me.role, 'pairs.edit')} />;
     case 'report':
       return <ArrivesWith what="the report issue: preview, issue and e-mail the bench report" />;
+    case 'owner':
+      return <OwnerLinkPanel jobId={job.id} canManage={roleCan(me.role, 'owner_links.manage')} ownerName={job.customer.name} />;
   }
 }

@@ -1,8 +1,11 @@
 import { ScrollArea, Tabs } from '@mantine/core';
+import { useQueryClient } from '@tanstack/react-query';
+import { useCallback } from 'react';
 import { useParams, useSearchParams } from 'react-router';
 import { QueryState } from '../../../components/query-state';
 import { useCan, useSession } from '../../../features/auth';
-import { JobHeader, useJob } from '../../../features/jobs';
+import { JobHeader, jobKeys, useJob } from '../../../features/jobs';
+import { useOwnerEvents } from '../../../features/owner';
 import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';
 import { JOB_SECTIONS, JobSectionBody, type JobSection } from './job-sections';
@@ -20,6 +23,9 @@ export function JobRoute() {
   const [search, setSearch] = useSearchParams();
   const tab = search.get('section');
   const section: JobSection = isSection(tab) ? tab : 'intake';
+  const qc = useQueryClient();
+  // The owner acts on their own page; refresh everything of this job (status, findings, owner panel).
+  useOwnerEvents(jobId, useCallback(() => void qc.invalidateQueries({ queryKey: jobKeys.detail(jobId) }), [qc, jobId]));
   if (!job.data || !settings.data || !me) return <QueryState isLoading={job.isLoading || settings.isLoading} error={job.error ?? settings.error} />;
   return (
     <>

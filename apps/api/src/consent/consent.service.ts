@@ -1,0 +1,85 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { CONSENT_WORDING, type ConsentDto, type ConsentStatusDto, type OwnerConsentRequest, type RecordConsentRequest } from '@benchproof/contracts';
+import { AuditService } from '../audit';
+import type { AuthUser } from '../core/auth';
+import { DomainError } from '../core/http';
+import { CLOCK, type Clock } from '../infra/clock';
+import { JobAccess, type JobCaller } from '../jobs';
+import { type ConsentRow, ConsentRepository } from './consent.repository';
+
+const toDto = (r: ConsentRow): ConsentDto => ({
+  id: r.id,
+  jobId: r.jobId,
+  granted: r.granted,
+  nameMakeModel: r.nameMakeModel,
+  wordingVersion: r.wordingVersion,
+  method: r.method,
+  givenByName: r.givenByName,
+  recordedById: r.recordedBy,
+  at: r.at.toISOString(),
+});
+
+/** How a consent change reached us: the owner's own page, or staff recording what the owner said in person. */
+export type ConsentSource =
+  | { method: 'owner_link'; ownerLinkId: number; givenByName: string }
+  | { method: 'in_person'; recordedBy: Pick<AuthUser, 'id' | 'shopId'> };
+
+/**
+ * The owner's marketing consent per job. The showcase asks `currentConsent`
+ * before using any pair; a revocation is simply a newer row with granted=false.
+ */
+@Injectable()
+export class ConsentService {
+  constructor(
+    private readonly repo: ConsentRepository,
+    private readonly access: JobAccess,
+    private readonly audit: AuditService,
+    @Inject(CLOCK) private readonly clock: Clock,
+  ) {}
+
+  /** The consent in force for this job, or null when the owner was never asked or never answered. */
+  currentConsent(shopId: number, jobId: number): ConsentDto | null {
+    const [latest] = this.repo.history(shopId, jobId);
+    return latest ? toDto(latest) : null;
+  }
+
+  status(actor: JobCaller, jobId: number): ConsentStatusDto {
+    this.access.read(actor, jobId);
+    const history = this.repo.history(actor.shopId, jobId).map(toDto);
+    return { current: history[0] ?? null, history, wordingVersion: CONSENT_WORDING.version };
+  }
+
+  /** Staff record a consent given or withdrawn in person. */
+  recordInPerson(actor: AuthUser, jobId: number, input: RecordConsentRequest): ConsentDto {
+    return this.record(actor, jobId, input, { method: 'in_person', recordedBy: actor });
+  }
+
+  /** The one way a consent change is stored (owner page and staff alike). */
+  record(scope: JobCaller, jobId: number, input: OwnerConsentRequest, source: ConsentSource): ConsentDto {
+    this.access.read(scope, jobId);
+    if (input.wordingVersion !== CONSENT_WORDING.version) {
+      throw new DomainError('CONSENT_WORDING_CHANGED', undefined, { current: CONSENT_WORDING.version });
+    }
+    const fromStaff = source.method === 'in_person';
+    const row = this.repo.insert({
+      shopId: scope.shopId,
+      jobId,
+      granted: input.granted,
+      nameMakeModel: input.granted && input.nameMakeModel,
+      wordingVersion: input.wordingVersion,
+      method: source.method,
+      givenByName: fromStaff ? (input as RecordConsentRequest).givenByName : source.givenByName,
+      recordedBy: fromStaff ? source.recordedBy.id : null,
+      ownerLinkId: fromStaff ? null : source.ownerLinkId,
+      at: this.clock.now(),
+    });
+    const who = fromStaff ? source.recordedBy : { shopId: scope.shopId, id: null };
+    this.audit.record(who, {
+      action: input.granted ? 'consent.granted' : 'consent.revoked',
+      entityType: 'job',
+      entityId: jobId,
+      details: { method: source.method, nameMakeModel: row.nameMakeModel, wordingVersion: row.wordingVersion, givenByName: row.givenByName },
+    });
+    return toDto(row);
+  }
+}

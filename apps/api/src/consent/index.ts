@@ -1,0 +1,2 @@
+export { ConsentModule } from './consent.module';
+export { ConsentService, type ConsentSource } from './consent.service';

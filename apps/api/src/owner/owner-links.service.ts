@@ -1,0 +1,103 @@
+import { Inject, Injectable } from '@nestjs/common';
+import type { CreatedOwnerLinkDto, CreateOwnerLinkRequest, OwnerLinkDto } from '@benchproof/contracts';
+import { AuditService } from '../audit';
+import { APP_CONFIG, type AppConfig } from '../config';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { CustomersService } from '../customers';
+import { CLOCK, type Clock } from '../infra/clock';
+import { JobAccess } from '../jobs';
+import { OwnerEventsBus } from './owner-events';
+import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';
+import { hashOwnerToken, newOwnerToken, ownerTokenSignatureOk } from './owner-token';
+import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort } from './owner.ports';
+
+const DAY_MS = 24 * 3600 * 1000;
+const iso = (d: Date | null): string | null => (d ? d.toISOString() : null);
+
+/** Owner links of jobs: created and revoked by desk, resolved for every owner-route request. */
+@Injectable()
+export class OwnerLinksService {
+  constructor(
+    private readonly repo: OwnerLinksRepository,
+    private readonly access: JobAccess,
+    private readonly customers: CustomersService,
+    private readonly audit: AuditService,
+    private readonly bus: OwnerEventsBus,
+    @Inject(OWNER_LINK_MAILER) private readonly mailer: OwnerLinkMailerPort,
+    @Inject(APP_CONFIG) private readonly cfg: AppConfig,
+    @Inject(CLOCK) private readonly clock: Clock,
+  ) {}
+
+  private toDto(r: OwnerLinkRow): OwnerLinkDto {
+    const now = this.clock.now().getTime();
+    const state = r.revokedAt ? 'revoked' : r.expiresAt.getTime() <= now ? 'expired' : 'active';
+    return {
+      id: r.id, jobId: r.jobId, state, createdAt: r.createdAt.toISOString(), createdById: r.createdBy,
+      expiresAt: r.expiresAt.toISOString(), revokedAt: iso(r.revokedAt), lastViewedAt: iso(r.lastViewedAt), sentTo: r.sentTo,
+    };
+  }
+
+  list(actor: AuthUser, jobId: number): OwnerLinkDto[] {
+    this.access.read(actor, jobId);
+    return this.repo.listForJob(actor.shopId, jobId).map((r) => this.toDto(r));
+  }
+
+  /**
+   * A new link for the job; earlier links stop working so only one is live.
+   * The token leaves the server only in this answer and in the e-mail.
+   */
+  create(actor: AuthUser, jobId: number, input: CreateOwnerLinkRequest, origin: string): CreatedOwnerLinkDto {
+    const job = this.access.read(actor, jobId);
+    if (job.status === 'cancelled') throw new DomainError('CONFLICT', 'The job is cancelled; there is nothing for the owner to see.');
+    const owner = this.customers.get(actor, job.customerId);
+    const token = newOwnerToken(this.cfg.jwtSecret);
+    const now = this.clock.now();
+    const expiresAt = new Date(now.getTime() + input.expiresInDays * DAY_MS);
+    const row = this.repo.transaction(() => {
+      this.repo.revokeOpen(actor.shopId, jobId, now, actor.id);
+      return this.repo.insert({ shopId: actor.shopId, jobId, tokenHash: hashOwnerToken(token), createdBy: actor.id, createdAt: now, expiresAt });
+    });
+    const url = `${(this.cfg.PUBLIC_URL ?? origin).replace(/\/$/, '')}/o/${token}`;
+    let mail: CreatedOwnerLinkDto['mail'] = { status: 'not_sent', reason: 'Not asked to send.' };
+    if (input.send && !owner.email) mail = { status: 'not_sent', reason: 'The owner has no e-mail address; copy the link for a text message.' };
+    else if (input.send && owner.email) {
+      const sent = this.mailer.send({ shopId: actor.shopId, jobId, linkId: row.id, to: owner.email, ownerName: owner.name, url, expiresAt });
+      mail = sent.status === 'queued' ? { status: 'queued', reason: null } : sent;
+    }
+    const saved = mail.status === 'queued' && owner.email ? this.repo.update(actor.shopId, row.id, { sentTo: owner.email }) : row;
+    this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details: { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status } });
+    this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
+    return { link: this.toDto(saved), url, mail };
+  }
+
+  revoke(actor: AuthUser, jobId: number, linkId: number): OwnerLinkDto {
+    this.access.read(actor, jobId);
+    const row = this.repo.find(actor.shopId, jobId, linkId);
+    if (!row) throw notFound('Owner link');
+    if (row.revokedAt) return this.toDto(row);
+    const now = this.clock.now();
+    const saved = this.repo.update(actor.shopId, linkId, { revokedAt: now, revokedBy: actor.id });
+    this.audit.record(actor, { action: 'owner_link.revoked', entityType: 'job', entityId: jobId, details: { linkId } });
+    this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
+    return this.toDto(saved);
+  }
+
+  /** The owner actor for a token, or a clear error: tampered/unknown, revoked, expired. */
+  resolve(token: string): OwnerActor & { expiresAt: Date } {
+    if (!ownerTokenSignatureOk(this.cfg.jwtSecret, token)) throw new DomainError('OWNER_LINK_INVALID');
+    const row = this.repo.byTokenHash(hashOwnerToken(token));
+    if (!row) throw new DomainError('OWNER_LINK_INVALID');
+    if (row.revokedAt) throw new DomainError('OWNER_LINK_REVOKED');
+    if (row.expiresAt.getTime() <= this.clock.now().getTime()) throw new DomainError('OWNER_LINK_EXPIRED', undefined, { expiredAt: row.expiresAt.toISOString() });
+    return { kind: 'owner', shopId: row.shopId, jobId: row.jobId, linkId: row.id, expiresAt: row.expiresAt };
+  }
+
+  /** Every page view: kept on the link for staff, audited, and pushed to the job page. */
+  viewed(owner: OwnerActor): void {
+    const now = this.clock.now();
+    this.repo.update(owner.shopId, owner.linkId, { lastViewedAt: now });
+    this.audit.record({ shopId: owner.shopId, id: null }, { action: 'owner.viewed', entityType: 'job', entityId: owner.jobId, details: { linkId: owner.linkId } });
+    this.bus.emit(owner.shopId, { type: 'viewed', jobId: owner.jobId, at: now.toISOString() });
+  }
+}

@@ -1,0 +1,133 @@
+import type { ConsentStatusDto, FindingDto, OwnerPageDto } from '@benchproof/contracts';
+import { CONSENT_WORDING } from '@benchproof/contracts';
+import { createHash } from 'node:crypto';
+import { existsSync, readFileSync } from 'node:fs';
+import { DB, type Db } from '../../src/core/db';
+import { ownerLinks } from '../../src/db/schema';
+import { CLOCK, type Clock } from '../../src/infra/clock';
+import { startTestApp, type TestApp } from '../test-app';
+import { createLink, ownerPage, ownerScenario, seen, type OwnerScenario } from './owner-helpers';
+
+describe('owner link', () => {
+  let t: TestApp;
+  let s: OwnerScenario;
+  let other: OwnerScenario;
+  beforeAll(async () => {
+    t = await startTestApp();
+    s = await ownerScenario(t);
+    other = await ownerScenario(t);
+  });
+  afterAll(() => t.close());
+
+  it('is returned once as a URL and stored only as a SHA-256 hash', async () => {
+    const created = await createLink(s.desk, s.jobId);
+    expect(created.url).toMatch(/\/o\/[A-Za-z0-9_-]{43}\.[A-Za-z0-9_-]{22}$/);
+    expect(created.link).toMatchObject({ state: 'active', jobId: s.jobId });
+    expect(created.mail).toEqual({ status: 'not_sent', reason: expect.stringMatching(/copy the link/) });
+    const rows = t.app.get<Db>(DB).select().from(ownerLinks).all();
+    const row = rows.find((r) => r.id === created.link.id);
+    expect(row?.tokenHash).toBe(createHash('sha256').update(created.token).digest('hex'));
+    const files = [t.cfg.DATABASE_PATH, `${t.cfg.DATABASE_PATH}-wal`].filter((f) => existsSync(f));
+    for (const f of files) expect(readFileSync(f).includes(Buffer.from(created.token.split('.')[0]))).toBe(false);
+    const listed = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-links`).expect(200)).body as { expiresAt: string }[];
+    expect(new Date(listed[0].expiresAt).getTime()).toBeGreaterThan(Date.now() + 6 * 24 * 3600e3);
+  });
+
+  it('shows the owner only owner-facing data: derivatives via owner routes, no originals, no internal notes', async () => {
+    const { token } = await createLink(s.desk, s.jobId);
+    await s.desk.agent.post(`/api/jobs/${s.jobId}/recommendations/${s.chainRec}/decision`).send({ status: 'pending', channel: 'phone', decidedByName: 'Ottilie', note: 'INTERNAL: owner haggles' }).expect(201);
+    const page = await ownerPage(t, token);
+    const text = JSON.stringify(page);
+    expect(page.bike).toMatchObject({ maker: 'Quillon Works', model: 'Stratus 11' });
+    expect(page.job.reportedSymptoms).toBe('Chain skips under load');
+    expect(text).not.toMatch(/INTERNAL|original|tobin@|desk@|recordedBy|decisions/);
+    const shots = page.findings.find((f) => f.id === s.chainFinding)?.shots ?? [];
+    expect(shots.map((x) => x.id)).toEqual([s.linkedAsset]);
+    const screen = await t.http().get(shots[0].screenUrl).expect(200);
+    expect(screen.headers['content-type']).toBe('image/jpeg');
+    await t.http().get(`/api/owner/${token}/media/${s.linkedAsset}/original`).expect(400);
+    await t.http().get(`/api/owner/${token}/media/${s.linkedAsset}/print`).expect(400);
+    await t.http().get(`/api/owner/${token}/media/${s.unlinkedAsset}/screen`).expect(404);
+    await t.http().get(`/api/owner/${token}/media/${other.linkedAsset}/screen`).expect(404);
+  });
+
+  it('refuses another job: its media, its recommendations, and staff routes of either job', async () => {
+    const { token } = await createLink(s.desk, s.jobId);
+    const page = await ownerPage(t, token);
+    const res = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(page, s.chainRec), recommendationId: other.chainRec, status: 'approved' }] }).expect(404);
+    expect(res.body.code).toBe('NOT_FOUND');
+    const otherFindings = (await other.desk.agent.get(`/api/jobs/${other.jobId}/findings`).expect(200)).body as FindingDto[];
+    expect(otherFindings.every((f) => f.recommendation?.decisionStatus === 'pending')).toBe(true);
+    for (const path of [`/api/jobs/${s.jobId}`, `/api/jobs/${other.jobId}`, `/api/jobs/${s.jobId}/findings`, `/api/jobs/${s.jobId}/owner-links`, `/api/jobs/${s.jobId}/media`, `/api/media/${s.linkedAsset}/screen`]) {
+      expect((await t.http().get(path).set('authorization', `Bearer ${token}`)).status).toBe(401);
+      expect((await t.http().get(path).set('cookie', `bp_session=${token}`)).status).toBe(401);
+    }
+  });
+
+  it('refuses tampered, revoked and expired links with their own codes', async () => {
+    const { token, link } = await createLink(s.desk, s.jobId);
+    const tampered = (token[0] === 'A' ? 'B' : 'A') + token.slice(1);
+    expect((await t.http().get(`/api/owner/${tampered}`).expect(404)).body.code).toBe('OWNER_LINK_INVALID');
+    expect((await t.http().get('/api/owner/1').expect(404)).body.code).toBe('OWNER_LINK_INVALID');
+    const clock = t.app.get<Clock>(CLOCK);
+    const realNow = clock.now.bind(clock);
+    const spy = vi.spyOn(clock, 'now').mockImplementation(() => new Date(realNow().getTime() + 8 * 24 * 3600e3));
+    try {
+      expect((await t.http().get(`/api/owner/${token}`).expect(410)).body.code).toBe('OWNER_LINK_EXPIRED');
+      expect(((await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-links`).expect(200)).body as { id: number; state: string }[]).find((l) => l.id === link.id)?.state).toBe('expired');
+    } finally {
+      spy.mockRestore();
+    }
+    await ownerPage(t, token);
+    await s.desk.agent.post(`/api/jobs/${s.jobId}/owner-links/${link.id}/revoke`).expect(200);
+    expect((await t.http().get(`/api/owner/${token}`).expect(410)).body.code).toBe('OWNER_LINK_REVOKED');
+    const next = await createLink(s.desk, s.jobId);
+    await ownerPage(t, next.token);
+    expect((await t.http().get(`/api/owner/${token}`).expect(410)).body.code).toBe('OWNER_LINK_REVOKED');
+  });
+
+  it('refuses a decision on a price the owner did not see (desk re-priced meanwhile), storing nothing', async () => {
+    const { token } = await createLink(s.desk, s.jobId);
+    const before = await ownerPage(t, token);
+    await s.desk.agent.post(`/api/jobs/${s.jobId}/findings/${s.padsFinding}/recommendation`).send({ summary: 'New rear pads', parts: [{ description: 'Pads', qty: 1, unitPriceMinor: 2900 }], labourHundredths: 30 }).expect(201);
+    const res = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(before, s.chainRec), status: 'approved' }, { ...seen(before, s.padsRec), status: 'approved' }] }).expect(409);
+    const after = await ownerPage(t, token);
+    expect(res.body).toMatchObject({ code: 'PRICE_CHANGED', details: { recommendationId: s.padsRec, grossMinor: seen(after, s.padsRec).seenGrossMinor } });
+    expect(seen(after, s.padsRec).seenGrossMinor).toBeGreaterThan(seen(before, s.padsRec).seenGrossMinor);
+    expect(after.findings.every((f) => f.recommendation?.decisionStatus === 'pending')).toBe(true);
+  });
+
+  it('records approve and decline through the staff decision path, asks twice for a safety decline, and moves the job on', async () => {
+    const { token } = await createLink(s.desk, s.jobId);
+    const page = await ownerPage(t, token);
+    const decline = { ...seen(page, s.padsRec), status: 'declined' };
+    const res = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(page, s.chainRec), status: 'approved' }, decline] }).expect(422);
+    expect(res.body.code).toBe('SAFETY_CONFIRMATION_REQUIRED');
+    const done = (await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(page, s.chainRec), status: 'approved' }, { ...decline, safetyConfirmed: true }] }).expect(200)).body as OwnerPageDto;
+    expect(done.findings.map((f) => f.recommendation?.decisionStatus)).toEqual(['approved', 'declined']);
+    const staff = (await s.desk.agent.get(`/api/jobs/${s.jobId}/findings`).expect(200)).body as FindingDto[];
+    const last = staff[0].recommendation?.decisions.at(-1);
+    expect(last).toMatchObject({ status: 'approved', channel: 'owner_link', recordedById: null, decidedByName: 'Ottilie Fernsby' });
+    expect((await s.desk.agent.get(`/api/jobs/${s.jobId}`).expect(200)).body.status).toBe('in_work');
+    const again = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(done, s.chainRec), status: 'declined' }] }).expect(409);
+    expect(again.body.code).toBe('CONFLICT');
+    const activity = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-activity`).expect(200)).body as { action: string; details: { channel?: string } }[];
+    expect(activity.filter((a) => a.action === 'recommendation.decided' && a.details.channel === 'owner_link')).toHaveLength(2);
+    expect(activity.some((a) => a.action === 'owner.viewed')).toBe(true);
+  });
+
+  it('records consent from the owner and in person, versioned, with history and audit', async () => {
+    const { token } = await createLink(other.desk, other.jobId);
+    const wrong = await t.http().post(`/api/owner/${token}/consent`).send({ granted: true, nameMakeModel: true, wordingVersion: 'old-v0' }).expect(409);
+    expect(wrong.body.code).toBe('CONSENT_WORDING_CHANGED');
+    await t.http().post(`/api/owner/${token}/consent`).send({ granted: true, nameMakeModel: true, wordingVersion: CONSENT_WORDING.version }).expect(200);
+    expect((await ownerPage(t, token)).consent).toMatchObject({ granted: true, nameMakeModel: true, method: 'owner_link' });
+    await other.desk.agent.post(`/api/jobs/${other.jobId}/consent`).send({ granted: false, nameMakeModel: false, wordingVersion: CONSENT_WORDING.version, givenByName: 'Ottilie Fernsby' }).expect(201);
+    const status = (await other.desk.agent.get(`/api/jobs/${other.jobId}/consent`).expect(200)).body as ConsentStatusDto;
+    expect(status.current).toMatchObject({ granted: false, method: 'in_person', recordedById: other.desk.user.id });
+    expect(status.history.map((h) => h.method)).toEqual(['in_person', 'owner_link']);
+    await other.mech.agent.post(`/api/jobs/${other.jobId}/consent`).send({ granted: true, nameMakeModel: false, wordingVersion: CONSENT_WORDING.version, givenByName: 'X' }).expect(403);
+    const activity = (await other.desk.agent.get(`/api/jobs/${other.jobId}/owner-activity`).expect(200)).body as { action: string }[];
+    expect(activity.map((a) => a.action)).toEqual(expect.arrayContaining(['consent.granted', 'consent.revoked']));
+  });
+});

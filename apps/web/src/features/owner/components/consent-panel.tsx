@@ -1,0 +1,49 @@
+import { CONSENT_WORDING } from '@benchproof/contracts';
+import { Alert, Badge, Button, Card, Checkbox, Group, Spoiler, Stack, Text, TextInput, Title } from '@mantine/core';
+import { useState } from 'react';
+import type { ApiError } from '../../../lib/api-client';
+import { useConsentStatus, useRecordConsent } from '../api/owner-links';
+
+/** Marketing consent of the job: in force, history, and a form for consent given in person. */
+export function ConsentPanel({ jobId, canRecord, ownerName }: { jobId: number; canRecord: boolean; ownerName: string }) {
+  const status = useConsentStatus(jobId);
+  const record = useRecordConsent(jobId);
+  const [name, setName] = useState(ownerName);
+  const [makeModel, setMakeModel] = useState(false);
+  const current = status.data?.current ?? null;
+  const save = (granted: boolean) => record.mutate({ granted, nameMakeModel: makeModel, givenByName: name, wordingVersion: CONSENT_WORDING.version });
+  return (
+    <Card withBorder padding="md">
+      <Stack gap="sm">
+        <Group justify="space-between">
+          <Title order={3}>Marketing consent</Title>
+          <Badge size="lg" color={current?.granted ? 'teal' : 'gray'} data-testid="consent-state">
+            {current ? (current.granted ? 'Granted' : 'Refused / withdrawn') : 'Not asked'}
+          </Badge>
+        </Group>
+        {current && (
+          <Text size="sm">
+            {current.granted ? (current.nameMakeModel ? 'Bike photos; make and model may be named.' : 'Bike photos; make and model not named.') : 'Photos may not be used.'} {current.method === 'owner_link' ? 'On the owner page' : 'In person'}, {new Date(current.at).toLocaleString()} ({current.wordingVersion}).
+          </Text>
+        )}
+        <Spoiler maxHeight={0} showLabel="Show the wording" hideLabel="Hide the wording">
+          {CONSENT_WORDING.paragraphs.map((p) => (
+            <Text key={p} size="sm">{p}</Text>
+          ))}
+        </Spoiler>
+        {canRecord && (
+          <Stack gap="xs">
+            <Text fw={600} size="sm">Record an answer given in person (read the wording to the owner first)</Text>
+            <TextInput label="Given by" value={name} onChange={(e) => setName(e.currentTarget.value)} size="md" />
+            <Checkbox label={CONSENT_WORDING.makeModelLabel} checked={makeModel} onChange={(e) => setMakeModel(e.currentTarget.checked)} size="md" />
+            <Group>
+              <Button mih={44} onClick={() => save(true)} loading={record.isPending}>Record consent</Button>
+              <Button mih={44} variant="light" color="gray" onClick={() => save(false)} loading={record.isPending}>Record refusal</Button>
+            </Group>
+            {record.error && <Alert color="red">{(record.error as ApiError).message}</Alert>}
+          </Stack>
+        )}
+      </Stack>
+    </Card>
+  );
+}
