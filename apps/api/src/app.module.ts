@@ -1,5 +1,6 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { ThrottlerModule } from '@nestjs/throttler';
+import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
 import { BikesModule } from './bikes';
@@ -20,7 +21,7 @@ import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, AnnotationsModule];
 
 @Module({})
 export class AppModule {

@@ -1,4 +1,4 @@
 export { MediaModule } from './media.module';
-export { MediaService } from './media.service';
+export { MediaService, type UprightImage } from './media.service';
 export { MediaIntakeService, type IncomingFile } from './media-intake.service';
 export { MediaDerivativesService } from './media-derivatives.service';
