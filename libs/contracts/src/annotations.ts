@@ -76,7 +76,8 @@ export type AnnotatedSize = z.infer<typeof AnnotatedSizeSchema>;
 export const ChainFromPhotoSchema = z.strictObject({
   rulerId: z.string().min(1).max(40),
   pitches: z.number().int().min(2, 'Count at least 2 pitches.').max(240),
-  checkpointId: z.number().int().positive(),
+  /** Defaults to the job's chain-wear checkpoint. */
+  checkpointId: z.number().int().positive().optional(),
   /** The annotation version the mechanic saw; a newer one means the ruler may have moved. */
   version: z.number().int().positive(),
 });

@@ -70,12 +70,19 @@ export class AnnotationsService {
     }
     if (!reading || reading.measuredMm === null) throw fail('Set a scale on the photo first (draw it over the steel rule).');
     const lengthValue = Math.round(reading.measuredMm * 100) / 100;
-    const m = this.inspection.addMeasurement(actor, img.jobId, req.checkpointId, {
+    const checkpointId = req.checkpointId ?? this.chainCheckpoint(actor, img.jobId);
+    const m = this.inspection.addMeasurement(actor, img.jobId, checkpointId, {
       kind: 'chain_elongation', method: 'ruler', pitches: req.pitches, lengthValue, lengthUnit: 'mm',
     });
     this.repo.addEvidence({ shopId: actor.shopId, measurementId: m.id, assetId, annotationVersion: latest.version });
     this.audit.record(actor, { action: 'measurement.from_photo', entityType: 'job', entityId: img.jobId, details: { measurementId: m.id, assetId, version: latest.version, lengthValue, pitches: req.pitches } });
     return m;
+  }
+
+  private chainCheckpoint(actor: AuthUser, jobId: number): number {
+    const cp = this.inspection.get(actor, jobId).areas.flatMap((a) => a.checkpoints).find((c) => c.key === 'chain_wear');
+    if (!cp) throw new DomainError('NOT_FOUND', 'This job has no chain checkpoint.');
+    return cp.id;
   }
 }
 
