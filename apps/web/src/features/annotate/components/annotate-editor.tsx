@@ -94,7 +94,7 @@ function EditorBody({ mediaId, backTo, title, image, initial, version }: Annotat
 
   const [label, colour] = SAVE_LABEL[save.state];
   return (
-    <Box pos="fixed" inset={0} bg="dark.8" style={{ zIndex: 300, display: 'flex', flexDirection: 'column' }} data-testid="annotate-editor">
+    <Box pos="fixed" inset={0} bg="dark.8" style={{ zIndex: 300, display: 'flex', flexDirection: 'column' }} data-testid="annotate-editor" data-shapes={history.present.length} data-zoom={view.zoom.toFixed(2)}>
       <Group justify="space-between" p={6} c="white" wrap="nowrap">
         <Group gap="xs" wrap="nowrap" style={{ minWidth: 0 }}>
           <ActionIcon component={Link} to={backTo} size={48} variant="subtle" color="gray.0" aria-label="Back"><IconArrowLeft /></ActionIcon>
