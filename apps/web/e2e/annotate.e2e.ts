@@ -84,6 +84,7 @@ describe('annotate a photo on a tablet with touch', () => {
     await drag(page, [0.2, 0.2], [0.42, 0.36]);
     await tool(page, /^Measure/);
     await drag(page, [0.1, 0.65], [0.45, 0.65]);
+    await shot(page, 'annotate-tablet-drawn');
     expect(await shapes(page)).toBe(4);
     // 0.35 of the stage against a 0.20 scale line of 25.4 mm: 1.75 × 25.4 = 44.45 mm, give or take a pixel.
     await page.getByTestId('chain-preview').waitFor();
@@ -129,7 +130,7 @@ describe('annotate a photo on a tablet with touch', () => {
     await pinchOut(page);
     await page.waitForFunction(() => Number(document.querySelector('[data-testid="annotate-editor"]')?.getAttribute('data-zoom')) > 1.5);
     await shot(page, 'annotate-tablet-zoomed');
-  });
+  }, 240_000);
 
   it.each([
     ['phone', PHONE],
@@ -140,7 +141,8 @@ describe('annotate a photo on a tablet with touch', () => {
     const { jobId, mediaId } = await demoPhoto(b.page);
     await b.page.goto(`/jobs/${jobId}/media/${mediaId}/annotate`);
     await b.page.getByTestId('annotate-stage').waitFor();
-    await b.page.waitForFunction(() => Number(document.querySelector('[data-testid="annotate-editor"]')?.getAttribute('data-shapes')) > 0);
+    await b.page.getByTestId('save-state').waitFor();
+    await b.page.locator('[data-testid="annotate-stage"] canvas').first().waitFor();
     await shot(b.page, `annotate-${name}`);
-  });
+  }, 120_000);
 });

@@ -111,7 +111,6 @@ export function AnnotateCanvas({ doc, image, box, view, tool, style, selectedId,
         }
       }}
       style={{ touchAction: 'none', cursor: tool === 'select' ? 'default' : 'crosshair' }}
-      data-testid="annotate-stage"
     >
       <Layer name="photo">
         <KImage image={image} width={size.width} height={size.height} />

@@ -113,7 +113,7 @@ function EditorBody({ mediaId, backTo, title, image, initial, version }: Annotat
         onUndo={() => setHistory(undo)} onRedo={() => setHistory(redo)} onDelete={selected ? remove : null}
         onZoomIn={view.zoomIn} onZoomOut={view.zoomOut}
       />
-      <Box ref={boxRef} style={{ flex: 1, minHeight: 0, overflow: 'hidden' }}>
+      <Box ref={boxRef} style={{ flex: 1, minHeight: 0, overflow: 'hidden' }} data-testid="annotate-stage">
         <AnnotateCanvas doc={doc} image={image} box={box} view={view} tool={tool} style={style} selectedId={selectedId} onSelect={setSelectedId} onCommit={onCommit} stageRef={stageRef} />
       </Box>
       {selected?.kind === 'ruler' && (
