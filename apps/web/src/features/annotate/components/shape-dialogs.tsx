@@ -7,7 +7,7 @@ export function ScaleDialog({ opened, onDone, onCancel }: { opened: boolean; onD
   const [mm, setMm] = useState<number | string>('');
   const valid = typeof mm === 'number' && mm > 0 && mm <= 2000;
   return (
-    <Modal opened={opened} onClose={onCancel} title="How long is the line you drew?" centered>
+    <Modal opened={opened} onClose={onCancel} title="How long is the line you drew?" centered zIndex={400}>
       <Stack>
         <Text size="sm">Draw it over something of known length in the same plane as what you measure, e.g. a steel rule beside the chain.</Text>
         {SCALE_PRESETS.map((p) => (
@@ -27,7 +27,7 @@ export function LabelDialog({ opened, initial, onDone, onCancel }: { opened: boo
   const [text, setText] = useState(initial);
   const ok = text.trim().length > 0 && text.length <= 120;
   return (
-    <Modal opened={opened} onClose={onCancel} title="Label" centered>
+    <Modal opened={opened} onClose={onCancel} title="Label" centered zIndex={400}>
       <Stack>
         <TextInput size="lg" label="Text" value={text} onChange={(e) => setText(e.currentTarget.value)} maxLength={120} error={!ok ? 'A label needs 1 to 120 characters.' : undefined} data-autofocus />
         <Group justify="flex-end">
