@@ -87,8 +87,7 @@ describe('annotate a photo on a tablet with touch', () => {
     await shot(page, 'annotate-tablet-drawn');
     expect(await shapes(page)).toBe(4);
     // 0.35 of the stage against a 0.20 scale line of 25.4 mm: 1.75 × 25.4 = 44.45 mm, give or take a pixel.
-    await page.getByTestId('chain-preview').waitFor();
-    const mm = Number(/^([\d.]+) mm/.exec((await page.getByTestId('chain-preview').textContent()) ?? '')?.[1]);
+    const mm = Number(/^Ruler: ([\d.]+) mm/.exec((await page.getByTestId('ruler-length').textContent()) ?? '')?.[1]);
     expect(Math.abs(mm - 44.45)).toBeLessThan(0.6);
 
     await page.getByRole('button', { name: /^Undo/ }).click();

@@ -1,4 +1,4 @@
-import { chainReadingFromRuler, formatMm, type AnnotationDocument, type RulerShape } from '@benchproof/annotation';
+import { chainReadingFromRuler, formatMm, rulerLengthMm, type AnnotationDocument, type RulerShape } from '@benchproof/annotation';
 import { Alert, Button, Group, NumberInput, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
@@ -49,6 +49,7 @@ export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Pro
           Record chain wear
         </Button>
       </Group>
+      <Text fw={700} data-testid="ruler-length">{(() => { const mm = rulerLengthMm(doc, ruler.id); return mm === null ? 'No scale yet' : `Ruler: ${formatMm(mm)}`; })()}</Text>
       <Text fw={600} data-testid="chain-preview">{p.text}</Text>
       {record.data && <Text c="green.8" data-testid="chain-recorded">Recorded: {record.data.result.message}</Text>}
       {error && <Text c="red.8">{error}</Text>}
