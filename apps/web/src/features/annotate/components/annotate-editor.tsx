@@ -84,8 +84,14 @@ function EditorBody({ mediaId, backTo, title, image, initial, version }: Annotat
     if (!stage) return;
     const handles = stage.findOne('.handles');
     handles?.hide();
-    const url = stage.toDataURL({ x: view.position.x, y: view.position.y, width: doc.image.width * view.scale, height: doc.image.height * view.scale, pixelRatio: 1 / view.scale });
+    const src = stage.toCanvas({ x: view.position.x, y: view.position.y, width: doc.image.width * view.scale, height: doc.image.height * view.scale, pixelRatio: 1 / view.scale });
     handles?.show();
+    // Rounding in the pixel ratio can lose a row; draw into a canvas of exactly the photo's size.
+    const out = document.createElement('canvas');
+    out.width = doc.image.width;
+    out.height = doc.image.height;
+    out.getContext('2d')?.drawImage(src, 0, 0, out.width, out.height);
+    const url = out.toDataURL('image/png');
     const a = document.createElement('a');
     a.href = url;
     a.download = `annotated-${mediaId}.png`;
