@@ -107,7 +107,7 @@ describe('annotate a photo on a tablet with touch', () => {
 
     // Same picture on both sides: the editor's export and the server's render of the saved version, same size.
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download the annotated image' }).click()]);
-    const editor = readFileSync((await download.path())!);
+    const editor = readFileSync((await download.path()));
     const server = Buffer.from(await (await page.request.get(`/api/media/${mediaId}/annotated/screen`)).body());
     const plain = Buffer.from(await (await page.request.get(`/api/media/${mediaId}/screen`)).body());
     // The mask: pixels the server render changed by more than 48 (sum over channels) from the plain photo.
