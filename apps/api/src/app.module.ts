@@ -1,6 +1,7 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { EventEmitterModule } from '@nestjs/event-emitter';
 import { LoggerModule } from 'nestjs-pino';
+import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
 import { BikesModule } from './bikes';
@@ -25,7 +26,7 @@ import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule];
 
 @Module({})
 export class AppModule {

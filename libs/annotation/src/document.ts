@@ -1,28 +1,39 @@
+import { DEFAULT_WIDTH, PALETTE, PALETTE_COLOURS, type PaletteColour, type StrokeWidth } from './palette';
+
 /**
  * The annotation document: a versioned list of shapes over one photo, in coordinates
  * normalised to the upright image (0..1 on each axis), so the editor and the server
- * renderer draw the same thing at any resolution.
+ * renderer draw the same thing at any resolution. Ring radii are normalised too:
+ * rx to the image width, ry to the height.
  */
-export const ANNOTATION_SCHEMA_VERSION = 1;
+export const ANNOTATION_SCHEMA_VERSION = 2;
+
+export const SHAPE_KINDS = ['ring', 'arrow', 'pen', 'label', 'ruler', 'scale', 'blur'] as const;
+export type ShapeKind = (typeof SHAPE_KINDS)[number];
 
 export interface Point {
   x: number;
   y: number;
 }
 
-interface ShapeBase {
+export interface ShapeBase {
   id: string;
-  colour: string;
+  colour: PaletteColour;
+  width: StrokeWidth;
 }
 
-export type Shape =
-  | (ShapeBase & { kind: 'ring'; centre: Point; rx: number; ry: number })
-  | (ShapeBase & { kind: 'arrow'; from: Point; to: Point })
-  | (ShapeBase & { kind: 'pen'; points: Point[] })
-  | (ShapeBase & { kind: 'label'; at: Point; text: string })
-  | (ShapeBase & { kind: 'ruler'; from: Point; to: Point })
-  | (ShapeBase & { kind: 'scale'; from: Point; to: Point; knownMm: number })
-  | (ShapeBase & { kind: 'blur'; topLeft: Point; bottomRight: Point });
+export type RingShape = ShapeBase & { kind: 'ring'; centre: Point; rx: number; ry: number };
+export type ArrowShape = ShapeBase & { kind: 'arrow'; from: Point; to: Point };
+export type PenShape = ShapeBase & { kind: 'pen'; points: Point[] };
+export type LabelShape = ShapeBase & { kind: 'label'; at: Point; text: string };
+/** A measured line; `pitches` is set when it was laid over that many chain pitches. */
+export type RulerShape = ShapeBase & { kind: 'ruler'; from: Point; to: Point; pitches?: number };
+/** A line over something of known length: the photo's calibration. */
+export type ScaleShape = ShapeBase & { kind: 'scale'; from: Point; to: Point; knownMm: number };
+/** Redaction: everything inside is pixelated wherever the image leaves the shop. */
+export type BlurShape = ShapeBase & { kind: 'blur'; topLeft: Point; bottomRight: Point };
+
+export type Shape = RingShape | ArrowShape | PenShape | LabelShape | RulerShape | ScaleShape | BlurShape;
 
 export interface AnnotationDocument {
   schemaVersion: typeof ANNOTATION_SCHEMA_VERSION;
@@ -37,16 +48,59 @@ export const emptyDocument = (width: number, height: number): AnnotationDocument
   shapes: [],
 });
 
+type Migration = (doc: Record<string, unknown>) => Record<string, unknown>;
+
+/**
+ * Version 1 stored free hex colours and no stroke width. Version 2 keeps only
+ * palette colours (each has an outline that keeps it readable): a v1 colour
+ * becomes the palette ink nearest to it in RGB, and every stroke is medium.
+ */
+const v1ToV2: Migration = (doc) => ({
+  ...doc,
+  schemaVersion: 2,
+  shapes: (Array.isArray(doc.shapes) ? doc.shapes : []).map((s: Record<string, unknown>) => ({
+    ...s,
+    colour: nearestPaletteColour(typeof s.colour === 'string' ? s.colour : ''),
+    width: DEFAULT_WIDTH,
+  })),
+});
+
+/** MIGRATIONS[n] turns version n into n + 1. */
+const MIGRATIONS: Record<number, Migration> = { 1: v1ToV2 };
+
 /**
  * Reads a stored document of any known version and returns the current version.
- * Unknown or future versions are refused rather than guessed at.
+ * Unknown or future versions are refused rather than guessed at. Shapes are not
+ * validated here: the API edge validates with the contracts schema.
  */
 export function migrateDocument(raw: unknown): AnnotationDocument {
-  const doc = raw as Partial<AnnotationDocument> | null;
-  if (!doc || typeof doc !== 'object') throw new TypeError('Annotation document must be an object');
-  if (doc.schemaVersion !== ANNOTATION_SCHEMA_VERSION) {
-    throw new RangeError(`Unsupported annotation schemaVersion ${String(doc.schemaVersion)}`);
+  if (!raw || typeof raw !== 'object') throw new TypeError('Annotation document must be an object');
+  let doc = raw as Record<string, unknown>;
+  const start = doc.schemaVersion;
+  if (typeof start !== 'number' || !Number.isInteger(start) || start < 1 || start > ANNOTATION_SCHEMA_VERSION) {
+    throw new RangeError(`Unsupported annotation schemaVersion ${String(start)}`);
   }
-  if (!doc.image || !(doc.image.width > 0) || !(doc.image.height > 0)) throw new RangeError('Annotation document needs the image size');
-  return { schemaVersion: ANNOTATION_SCHEMA_VERSION, image: doc.image, shapes: Array.isArray(doc.shapes) ? doc.shapes : [] };
+  for (let v = start; v < ANNOTATION_SCHEMA_VERSION; v++) doc = MIGRATIONS[v](doc);
+  const image = doc.image as { width?: number; height?: number } | undefined;
+  if (!image || !(Number(image.width) > 0) || !(Number(image.height) > 0)) throw new RangeError('Annotation document needs the image size');
+  return {
+    schemaVersion: ANNOTATION_SCHEMA_VERSION,
+    image: { width: Number(image.width), height: Number(image.height) },
+    shapes: (Array.isArray(doc.shapes) ? doc.shapes : []) as Shape[],
+  };
+}
+
+function nearestPaletteColour(hex: string): PaletteColour {
+  const m = /^#?([0-9a-f]{6})$/i.exec(hex.trim());
+  if (!m) return 'amber';
+  const rgb = (h: string) => [0, 2, 4].map((i) => parseInt(h.slice(i, i + 2), 16));
+  const [r, g, b] = rgb(m[1]);
+  let best: PaletteColour = 'amber';
+  let bestD = Infinity;
+  for (const name of PALETTE_COLOURS) {
+    const [pr, pg, pb] = rgb(PALETTE[name].ink.slice(1));
+    const d = (r - pr) ** 2 + (g - pg) ** 2 + (b - pb) ** 2;
+    if (d < bestD) [best, bestD] = [name, d];
+  }
+  return best;
 }

@@ -1,2 +1,6 @@
+export * from './palette';
 export * from './document';
+export * from './geometry';
 export * from './calibration';
+export * from './marks';
+export * from './svg';

@@ -69,6 +69,7 @@ export const ACCESS_POLICY = {
   'media.edit': staff(...ALL_STAFF),
   'media.view_deleted': staff('manager'),
   'media.purge': staff('manager'),
+  'annotations.edit': staff('manager', 'mechanic'),
   'pairs.view': staff(...ALL_STAFF),
   'pairs.edit': staff('manager', 'mechanic'),
   'owner_links.view': staff(...ALL_STAFF),

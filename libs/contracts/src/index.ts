@@ -19,3 +19,4 @@ export * from './work-log';
 export * from './pairs';
 export * from './consent';
 export * from './owner';
+export * from './annotations';

@@ -1,5 +1,5 @@
 export { MediaModule } from './media.module';
-export { MediaService, type ShotForPairing } from './media.service';
+export { MediaService, type ShotForPairing, type UprightImage } from './media.service';
 export { MediaIntakeService, type IncomingFile } from './media-intake.service';
 export { MediaDerivativesService } from './media-derivatives.service';
 export { MediaFilesService, type FileReply } from './media-files.service';

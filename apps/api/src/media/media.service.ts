@@ -12,6 +12,16 @@ import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 
+/** An upright derivative in storage and its pixel size. */
+export interface UprightImage {
+  assetId: number;
+  jobId: number;
+  key: string;
+  width: number;
+  height: number;
+  sha256: string;
+}
+
 /** Media of a job: listing, tags, soft delete and purge, and the shots linked to a finding. */
 @Injectable()
 export class MediaService {
@@ -140,6 +150,18 @@ export class MediaService {
     const row = this.repo.findInShop(actor.shopId, id);
     if (!row || row.deletedAt || row.purgedAt) throw notFound('Media');
     return { dto: this.toDtos([row])[0], shot: toPairShot(row), jobId: row.jobId };
+  }
+
+  /**
+   * The stored upright derivative of a live asset in the shop (for renders made from it,
+   * e.g. annotated images). Soft-deleted assets are not found unless `includeDeleted`.
+   */
+  uprightImage(shopId: number, id: number, variant: 'screen' | 'print', opts: { includeDeleted?: boolean } = {}): UprightImage {
+    const row = this.repo.findInShop(shopId, id);
+    if (!row || row.purgedAt || (row.deletedAt && !opts.includeDeleted) || (row.kind !== 'photo' && row.kind !== 'scope_still')) throw notFound('Media');
+    const d = this.repo.findDerivative(id, variant);
+    if (!d) throw new DomainError('NOT_FOUND', 'This photo has no derivatives yet.');
+    return { assetId: id, jobId: row.jobId, key: d.key, width: d.width, height: d.height, sha256: d.sha256 };
   }
 
   toDtos(rows: MediaAssetRow[]): MediaAssetDto[] {

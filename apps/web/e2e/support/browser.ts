@@ -21,7 +21,8 @@ export interface Browser {
   close: () => Promise<void>;
 }
 
-export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
+/** `touch` makes a touch-screen context (tablet or phone with touch events). */
+export async function openBrowser(viewport = DESKTOP, opts: { touch?: boolean } = {}): Promise<Browser> {
   const profile = mkdtempSync(join(tmpdir(), 'benchproof-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -30,6 +31,7 @@ export async function openBrowser(viewport = DESKTOP): Promise<Browser> {
     viewport,
     baseURL: inject('baseURL'),
     permissions: ['camera'],
+    hasTouch: opts.touch ?? false,
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

@@ -18,6 +18,7 @@ const signedIn: RouteObject[] = [
   { path: 'jobs/new', loader: requireAction('jobs.book_in'), lazy: page(() => import('./routes/jobs/book-in.route'), (m) => m.BookInRoute) },
   { path: 'jobs/:jobId', lazy: page(() => import('./routes/jobs/job.route'), (m) => m.JobRoute) },
   { path: 'jobs/:jobId/capture', lazy: page(() => import('./routes/jobs/capture.route'), (m) => m.CaptureRoute) },
+  { path: 'jobs/:jobId/media/:mediaId/annotate', lazy: page(() => import('./routes/jobs/annotate.route'), (m) => m.AnnotateRoute) },
   { path: 'jobs/:jobId/scope', lazy: page(() => import('./routes/jobs/scope.route'), (m) => m.ScopeRoute) },
   { path: 'customers', lazy: page(() => import('./routes/customers/customers.route'), (m) => m.CustomersRoute) },
   { path: 'customers/:customerId', lazy: page(() => import('./routes/customers/customer.route'), (m) => m.CustomerRoute) },

@@ -21,3 +21,5 @@ export * from './sessions.table';
 export * from './shot-pairs.table';
 export * from './owner-links.table';
 export * from './consents.table';
+export * from './annotation-versions.table';
+export * from './measurement-evidence.table';

@@ -5,7 +5,7 @@ import { BikeSpecs } from '../../../features/bikes';
 import { FindingsPanel } from '../../../features/findings';
 import { InspectionPanel } from '../../../features/inspection';
 import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
-import { JobMediaSection } from '../../../features/media';
+import { FindingMediaPicker, JobMediaSection } from '../../../features/media';
 import { PairsPanel } from '../../../features/pairs';
 import { OwnerLinkPanel } from '../../../features/owner';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
@@ -40,6 +40,7 @@ function Findings({ job, me, settings }: SectionProps) {
       ownerName={job.customer.name}
       me={{ id: me.id, name: me.name }}
       staffName={staffName}
+      evidence={(findingId) => <FindingMediaPicker jobId={job.id} findingId={findingId} canEdit={me.role !== 'desk'} />}
     />
   );
 }

@@ -3,6 +3,7 @@ import { DECLINED_SAFETY_NOTICE, defaultUrgency, INSPECTION_AREA_LABELS, formatM
 import { Alert, Badge, Button, Card, Group, Modal, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconEdit, IconMessageCircle, IconReceipt } from '@tabler/icons-react';
+import type { ReactNode } from 'react';
 import { ConditionBadge } from '../../../components/condition-badge';
 import { SafetyNote } from '../../../components/safety-note';
 import { DecisionForm } from './decision-form';
@@ -24,6 +25,8 @@ export interface FindingCardProps {
   ownerName: string;
   me: { id: number; name: string };
   staffName: (id: number | null) => string;
+  /** Slot for the finding's shots (the media feature's picker, composed in the route). */
+  evidence?: (findingId: number) => ReactNode;
 }
 
 function Recommendation({ finding }: { finding: FindingDto }) {
@@ -43,7 +46,7 @@ function Recommendation({ finding }: { finding: FindingDto }) {
 }
 
 /** One finding with its priced recommendation, the owner's decision and its history. */
-export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerName, me, staffName }: FindingCardProps) {
+export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerName, me, staffName, evidence }: FindingCardProps) {
   const [edit, editModal] = useDisclosure();
   const [price, priceModal] = useDisclosure();
   const [decide, decideModal] = useDisclosure();
@@ -61,6 +64,7 @@ export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerNa
           <UrgencyBadge urgency={urgency} />
         </Group>
         <Text style={{ whiteSpace: 'pre-wrap' }}>{finding.description}</Text>
+        {evidence?.(finding.id)}
         {finding.cautions.map((c) => <SafetyNote key={c} text={c} />)}
         {declinedUnsafe && <Alert color="red" variant="filled">{DECLINED_SAFETY_NOTICE}</Alert>}
         <Recommendation finding={finding} />

@@ -2,7 +2,7 @@ import type { MediaAssetDto } from '@benchproof/contracts';
 import { isVideoKind } from '@benchproof/domain';
 import { ActionIcon, Box, Button, Group, Modal, Stack, Text } from '@mantine/core';
 import { useDisclosure, useWindowEvent } from '@mantine/hooks';
-import { IconChevronLeft, IconChevronRight, IconScan, IconTrash, IconX } from '@tabler/icons-react';
+import { IconChevronLeft, IconChevronRight, IconPencil, IconScan, IconTrash, IconX } from '@tabler/icons-react';
 import { Link } from 'react-router';
 import { useDeleteMedia } from '../api/media';
 import { ConfirmDelete } from '../components/confirm-delete';
@@ -26,6 +26,9 @@ function ViewerActions({ jobId, asset, onDeleted }: { jobId: number; asset: Medi
       <LinkToFinding key={asset.id} jobId={jobId} assetId={asset.id} />
       {isVideoKind(asset.kind) && (
         <Button component={Link} to={`/jobs/${jobId}/scope?video=${asset.id}`} variant="light" leftSection={<IconScan size={18} />}>Grab stills</Button>
+      )}
+      {(asset.kind === 'photo' || asset.kind === 'scope_still') && asset.status === 'ready' && !asset.deletedAt && (
+        <Button component={Link} to={`/jobs/${jobId}/media/${asset.id}/annotate`} variant="light" leftSection={<IconPencil size={18} />}>Annotate</Button>
       )}
       {!asset.deletedAt && <Button color="red" variant="light" leftSection={<IconTrash size={18} />} onClick={confirm.open}>Delete</Button>}
       <ConfirmDelete count={1} opened={confirming} onClose={confirm.close} busy={remove.isPending} onConfirm={() => remove.mutate([asset.id], { onSuccess: () => { confirm.close(); onDeleted(); } })} />

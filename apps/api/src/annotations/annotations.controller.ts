@@ -1,0 +1,62 @@
+import { Body, Controller, Get, Param, ParseIntPipe, Post, Put, Res } from '@nestjs/common';
+import { ApiParam, ApiTags } from '@nestjs/swagger';
+import {
+  ANNOTATED_SIZES,
+  AnnotatedSizeSchema,
+  ChainFromPhotoSchema,
+  SaveAnnotationSchema,
+  type AnnotatedSize,
+  type ChainFromPhotoRequest,
+  type SaveAnnotationRequest,
+} from '@benchproof/contracts';
+import type { Response } from 'express';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
+import { ApiZodBody, zod } from '../core/http';
+import { AnnotationFilesService } from './annotation-files.service';
+import { AnnotationsService } from './annotations.service';
+
+@ApiTags('annotations')
+@Controller()
+export class AnnotationsController {
+  constructor(
+    private readonly annotations: AnnotationsService,
+    private readonly files: AnnotationFilesService,
+  ) {}
+
+  @Get('annotations/:mediaId')
+  @Can('media.view')
+  get(@CurrentUser() user: AuthUser, @Param('mediaId', ParseIntPipe) mediaId: number) {
+    return this.annotations.get(user, mediaId);
+  }
+
+  /** Autosave: every save is a new version; the original photo is never changed. */
+  @Put('annotations/:mediaId')
+  @Can('annotations.edit')
+  @ApiZodBody(SaveAnnotationSchema)
+  save(@CurrentUser() user: AuthUser, @Param('mediaId', ParseIntPipe) mediaId: number, @Body(zod(SaveAnnotationSchema)) body: SaveAnnotationRequest) {
+    return this.annotations.save(user, mediaId, body);
+  }
+
+  @Post('annotations/:mediaId/chain-reading')
+  @Can('inspection.record')
+  @ApiZodBody(ChainFromPhotoSchema)
+  chain(@CurrentUser() user: AuthUser, @Param('mediaId', ParseIntPipe) mediaId: number, @Body(zod(ChainFromPhotoSchema)) body: ChainFromPhotoRequest) {
+    return this.annotations.chainReading(user, mediaId, body);
+  }
+
+  /** The annotated JPEG (blur boxes pixelated, shapes burned in); the plain derivative when not annotated. */
+  @Get('media/:id/annotated/:size')
+  @Can('media.view')
+  @ApiParam({ name: 'size', enum: ANNOTATED_SIZES })
+  async annotated(
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Param('size', zod(AnnotatedSizeSchema)) size: AnnotatedSize,
+    @Res() res: Response,
+  ): Promise<void> {
+    const reply = await this.files.open(user.shopId, id, size);
+    res.status(200).set(reply.headers);
+    reply.body.on('error', () => res.destroy());
+    reply.body.pipe(res);
+  }
+}

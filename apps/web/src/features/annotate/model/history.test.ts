@@ -1,0 +1,25 @@
+import type { Shape } from '@benchproof/annotation';
+import { commit, redo, startHistory, undo, upsert } from './history';
+
+const ring = (id: string): Shape => ({ id, kind: 'ring', colour: 'amber', width: 'medium', centre: { x: 0.5, y: 0.5 }, rx: 0.1, ry: 0.1 });
+
+describe('editor history', () => {
+  it('undoes and redoes a drawn ring, and a new edit drops the redo branch', () => {
+    let h = startHistory([]);
+    h = commit(h, upsert(h.present, ring('a')));
+    h = commit(h, upsert(h.present, ring('b')));
+    h = undo(h);
+    expect(h.present.map((s) => s.id)).toEqual(['a']);
+    h = redo(h);
+    expect(h.present.map((s) => s.id)).toEqual(['a', 'b']);
+    h = undo(undo(h));
+    expect(h.present).toEqual([]);
+    h = commit(h, [ring('c')]);
+    expect(redo(h).present.map((s) => s.id)).toEqual(['c']);
+  });
+
+  it('moves a shape in place rather than adding a copy', () => {
+    const moved = { ...ring('a'), centre: { x: 0.2, y: 0.2 } };
+    expect(upsert([ring('a'), ring('b')], moved)).toEqual([moved, ring('b')]);
+  });
+});
