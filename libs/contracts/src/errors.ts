@@ -23,6 +23,7 @@ export const ERROR_CODES = {
   FILE_EMPTY: { status: 422, message: 'The file is empty.' },
   FILE_CORRUPT: { status: 422, message: 'The file could not be read.' },
   IMAGE_TOO_LARGE: { status: 422, message: 'The image has too many pixels to process.' },
+  REPORT_NOT_READY: { status: 409, message: 'The report is still rendering or failed to render.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
 } as const satisfies Record<string, { status: number; message: string }>;

@@ -47,6 +47,6 @@ import { MAX_FILES_PER_BATCH } from './upload-form';
     { provide: SNIFFER, useClass: FileSniffer },
     { provide: VIDEO_PROBE, useClass: VideoProbe },
   ],
-  exports: [MediaService, MediaIntakeService, MediaDerivativesService],
+  exports: [MediaService, MediaIntakeService, MediaDerivativesService, MediaFilesService],
 })
 export class MediaModule {}
