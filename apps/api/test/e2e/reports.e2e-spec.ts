@@ -1,3 +1,4 @@
+import { writeFileSync } from 'node:fs';
 import { binary } from '../media/media-fixtures';
 import { FINDINGS, OWNER, jobWithRecords, settled } from '../reports/report-fixtures';
 import { pdffonts, pdfimages, pdfPages, sha256 } from '../reports/pdf-readback';
@@ -35,6 +36,8 @@ describe('bench report: draft, issue, read back', () => {
     issued = list.find((r) => r.kind === 'issued')!;
     expect(issued).toMatchObject({ version: 1, state: 'ready', pageSize: 'A4' });
     pdf = await getPdf(issued.urls.pdf);
+    // For looking at the pages: REPORT_PDF_OUT=/tmp/r.pdf, then pdftoppm -png.
+    if (process.env.REPORT_PDF_OUT) writeFileSync(process.env.REPORT_PDF_OUT, pdf);
     expect(sha256(pdf)).toBe(issued.sha256);
     expect(pdf.length).toBe(issued.byteSize);
   });

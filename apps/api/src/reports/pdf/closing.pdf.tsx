@@ -9,8 +9,8 @@ export function Closing({ snap, stamp }: { snap: ReportSnapshot; stamp: IssueSta
   const ink = snap.shop.palette.primaryInk.used;
   const fc = snap.finalCheck;
   return (
-    <View break>
-      <Text style={[styles.h1, { color: ink }]}>Safety notes</Text>
+    <View>
+      <Text style={[styles.h1, styles.sectionGap, { color: ink }]} minPresenceAhead={80}>Safety notes</Text>
       {snap.cautions.map((c) => (
         <Text key={c} style={{ marginBottom: 5 }}>
           {c}

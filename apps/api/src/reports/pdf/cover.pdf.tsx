@@ -40,6 +40,7 @@ export function Cover({ snap, pageSize, logo, stamp }: Props) {
           <Field label="Ready" value={fmtDate(snap.job.readyAt)} ink={primaryInk.used} />
           <Field label="Mechanic" value={snap.job.mechanic ?? '—'} ink={primaryInk.used} />
         </View>
+        <Field label="What you told us" value="" sub={snap.job.symptoms} ink={primaryInk.used} />
         {snap.overall && (
           <View style={{ marginTop: 8 }}>
             <Text style={[styles.small, { marginBottom: 3 }]}>OVERALL</Text>
@@ -47,8 +48,9 @@ export function Cover({ snap, pageSize, logo, stamp }: Props) {
           </View>
         )}
       </View>
-      <View style={{ position: 'absolute', bottom: 28, left: MARGIN, right: MARGIN, fontSize: 8.5, color: MUTED }}>
+      <View style={{ position: 'absolute', bottom: 24, left: MARGIN, right: MARGIN, fontSize: 8.5, color: MUTED, flexDirection: 'row', justifyContent: 'space-between' }}>
         <Text>{snap.shop.contact}</Text>
+        <Text render={({ pageNumber, totalPages }) => `Job ${snap.job.number} · Page ${pageNumber} of ${totalPages}`} />
       </View>
     </Page>
   );
@@ -58,7 +60,7 @@ function Field({ label, value, sub, ink }: { label: string; value: string; sub?:
   return (
     <View style={{ marginBottom: 14 }}>
       <Text style={{ fontSize: 8.5, color: ink, fontWeight: 600, letterSpacing: 0.8 }}>{label.toUpperCase()}</Text>
-      <Text style={{ fontSize: 15, fontWeight: 600 }}>{value}</Text>
+      {value ? <Text style={{ fontSize: 15, fontWeight: 600 }}>{value}</Text> : null}
       {sub ? <Text style={{ color: MUTED }}>{sub}</Text> : null}
     </View>
   );

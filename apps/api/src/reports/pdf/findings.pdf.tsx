@@ -51,8 +51,8 @@ export function Findings({ snap, images, slot }: { snap: ReportSnapshot; images:
 export function Pairs({ snap, images, slot }: { snap: ReportSnapshot; images: Images; slot: number }) {
   if (snap.pairs.length === 0) return null;
   return (
-    <View break>
-      <Text style={[styles.h1, { color: snap.shop.palette.primaryInk.used }]}>Before and after</Text>
+    <View>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={200}>Before and after</Text>
       {snap.pairs.map((p, i) => (
         <View key={i} wrap={false} style={{ marginBottom: 14 }}>
           <View style={[styles.row, { gap: GUTTER }]}>
@@ -69,8 +69,8 @@ export function Pairs({ snap, images, slot }: { snap: ReportSnapshot; images: Im
 export function ScopeStills({ snap, images, slot, caution }: { snap: ReportSnapshot; images: Images; slot: number; caution: string }) {
   if (snap.scopeStills.length === 0) return null;
   return (
-    <View break>
-      <Text style={[styles.h1, { color: snap.shop.palette.primaryInk.used }]}>Inside the frame</Text>
+    <View>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={200}>Inside the frame</Text>
       <Text style={styles.small}>{caution}</Text>
       <ShotGrid shots={snap.scopeStills.map((s) => ({ ...s, label: s.timecodeMs !== null ? `at ${fmtTimecode(s.timecodeMs)}` : undefined }))} images={images} slot={slot} />
     </View>

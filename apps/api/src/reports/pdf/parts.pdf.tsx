@@ -27,7 +27,7 @@ export function PageChrome({ shop, jobNumber, draft }: { shop: string; jobNumber
         <Text>{shop} · Bench report</Text>
         <Text>{draft ? 'DRAFT — not issued · ' : ''}Job {jobNumber}</Text>
       </View>
-      <View fixed style={{ position: 'absolute', bottom: 24, left: 40, right: 40, flexDirection: 'row', justifyContent: 'space-between', fontSize: 8.5, color: MUTED }}>
+      <View fixed style={{ position: 'absolute', bottom: 24, left: 40, right: 40, height: 12, flexDirection: 'row', justifyContent: 'space-between', fontSize: 8.5, color: MUTED }}>
         <Text>Job {jobNumber}</Text>
         <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
       </View>

@@ -16,8 +16,9 @@ export function Measurements({ snap }: { snap: ReportSnapshot }) {
   const ink = snap.shop.palette.primaryInk.used;
   if (snap.measurements.length === 0 && snap.torque.length === 0) return null;
   return (
-    <View break>
-      <Text style={[styles.h1, { color: ink }]}>Measurements</Text>
+    <View>
+      <Text style={[styles.h1, styles.sectionGap, { color: ink }]} minPresenceAhead={80}>Measurements</Text>
+      {snap.measurements.length === 0 && <Text style={styles.muted}>No measurements were taken at this visit.</Text>}
       {snap.measurements.map((m, i) => (
         <View key={i} style={styles.tableRow} wrap={false}>
           <Cell w="24%" bold>{m.label}</Cell>
@@ -34,19 +35,19 @@ export function Measurements({ snap }: { snap: ReportSnapshot }) {
             <Cell w="24%">Fastener</Cell>
             <Cell w="14%">Specified</Cell>
             <Cell w="12%">Applied</Cell>
-            <Cell w="18%">Verdict</Cell>
-            <Cell w="32%">Source · wrench (calibrated)</Cell>
+            <Cell w="22%">Verdict</Cell>
+            <Cell w="28%">Source · wrench (calibrated)</Cell>
           </View>
           {snap.torque.map((t, i) => (
             <View key={i} style={styles.tableRow} wrap={false}>
               <Cell w="24%">{t.fastener}</Cell>
               <Cell w="14%">{t.specified}</Cell>
               <Cell w="12%">{t.applied}</Cell>
-              <View style={[styles.row, { width: '18%', paddingRight: 6, alignItems: 'center' }]}>
+              <View style={[styles.row, { width: '22%', paddingRight: 6, alignItems: 'flex-start', paddingTop: 2 }]}>
                 <ConditionMark condition={t.verdict === 'within' ? 'sound' : 'unsafe'} size={8} label={false} />
                 <Text style={{ marginLeft: 3, fontWeight: 600, color: t.verdict === 'within' ? CONDITION_MARK.sound.colour : CONDITION_MARK.unsafe.colour }}>{TORQUE_VERDICT[t.verdict]}</Text>
               </View>
-              <Cell w="32%">{[t.source, t.tool && `${t.tool}${t.calibratedOn ? ` (${fmtDate(t.calibratedOn)})` : ''}`].filter(Boolean).join(' · ')}</Cell>
+              <Cell w="28%">{[t.source, t.tool && `${t.tool}${t.calibratedOn ? ` (${fmtDate(t.calibratedOn)})` : ''}`].filter(Boolean).join(' · ')}</Cell>
             </View>
           ))}
         </View>
@@ -58,8 +59,8 @@ export function Measurements({ snap }: { snap: ReportSnapshot }) {
 export function WorkDone({ snap }: { snap: ReportSnapshot }) {
   if (snap.work.length === 0) return null;
   return (
-    <View break>
-      <Text style={[styles.h1, { color: snap.shop.palette.primaryInk.used }]}>Work done and parts</Text>
+    <View>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={80}>Work done and parts</Text>
       <View style={styles.tableHead}>
         <Cell w="46%">Work</Cell>
         <Cell w="30%">Parts</Cell>
@@ -85,8 +86,8 @@ export function Recommendations({ snap }: { snap: ReportSnapshot }) {
   const cur = snap.shop.currency;
   const t = snap.totals;
   return (
-    <View break>
-      <Text style={[styles.h1, { color: snap.shop.palette.primaryInk.used }]}>Recommendations and prices</Text>
+    <View>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={80}>Recommendations and prices</Text>
       <View style={styles.tableHead}>
         <Cell w="50%">Recommendation</Cell>
         <Cell w="16%">Urgency</Cell>

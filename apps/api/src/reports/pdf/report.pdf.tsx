@@ -28,7 +28,7 @@ export function ReportDocument({ snap, pageSize, images, logo, stamp }: ReportDo
       <Cover snap={snap} pageSize={pageSize} logo={logo} stamp={stamp} />
       <Page size={size} style={styles.page}>
         <PageChrome shop={snap.shop.name} jobNumber={snap.job.number} draft={!stamp} />
-        <View>
+        <View style={styles.body}>
           <Summary snap={snap} />
           <Findings snap={snap} images={images} slot={slot} />
           <Pairs snap={snap} images={images} slot={slot} />

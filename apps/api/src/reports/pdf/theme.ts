@@ -24,9 +24,12 @@ export const CONDITION_MARK: Record<Condition, { colour: string; shape: 'circle'
 };
 
 export const styles = StyleSheet.create({
-  page: { fontFamily: PDF_FONT, fontSize: 10, color: INK, paddingTop: 58, paddingBottom: 56, paddingHorizontal: MARGIN, lineHeight: 1.35 },
+  page: { fontFamily: PDF_FONT, fontSize: 10, color: INK, paddingTop: 58, paddingBottom: 56, paddingHorizontal: MARGIN },
+  // On the content, not the page: a page-level lineHeight hides react-pdf's render-prop page numbers.
+  body: { lineHeight: 1.35 },
   coverPage: { fontFamily: PDF_FONT, fontSize: 11, color: INK, padding: 0 },
   h1: { fontSize: 20, fontWeight: 700, marginBottom: 10 },
+  sectionGap: { marginTop: 18 },
   h2: { fontSize: 14, fontWeight: 700, marginTop: 14, marginBottom: 6 },
   h3: { fontSize: 11, fontWeight: 600, marginBottom: 3 },
   muted: { color: MUTED },

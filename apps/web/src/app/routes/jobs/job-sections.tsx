@@ -6,6 +6,7 @@ import { FindingsPanel } from '../../../features/findings';
 import { InspectionPanel } from '../../../features/inspection';
 import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
 import { JobMediaSection } from '../../../features/media';
+import { ReportSection } from '../../../features/reports';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
 
@@ -70,6 +71,6 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
     case 'pairs':
       return <ArrivesWith what="the pairs issue: before/after pairs suggested from the media" />;
     case 'report':
-      return <ArrivesWith what="the report issue: preview, issue and e-mail the bench report" />;
+      return <ReportSection jobId={job.id} canIssue={me.role !== 'mechanic'} />;
   }
 }
