@@ -20,7 +20,7 @@ export function ReportPreview({ report }: { report: ReportDto }) {
         <SegmentedControl
           size="md"
           value={mode}
-          onChange={(v) => setMode(v as 'pdf' | 'pages')}
+          onChange={setMode}
           data={[
             { value: 'pdf', label: 'PDF' },
             { value: 'pages', label: 'Page images' },

@@ -1,7 +1,8 @@
 import { VerifyHashSchema, type VerifyResult } from '@benchproof/contracts';
 import { Alert, Button, FileButton, Group, Stack, Text, TextInput, Title } from '@mantine/core';
 import { IconCircleCheck, IconFileSearch, IconAlertTriangle } from '@tabler/icons-react';
-import { useEffect, useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { verifyReport } from '../api/reports';
 
@@ -30,40 +31,31 @@ function Answer({ result }: { result: VerifyResult }) {
 
 /** The public check: drop in the PDF or type the fingerprint; answers only who issued it, for which job, and when. */
 export function VerifyReport({ initialCode }: { initialCode?: string }) {
+  const initial = VerifyHashSchema.safeParse(initialCode ?? '');
   const [typed, setTyped] = useState(initialCode ?? '');
   const [fieldError, setFieldError] = useState<string | null>(null);
-  const [result, setResult] = useState<VerifyResult | null>(null);
-  const [busy, setBusy] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
-
-  const check = async (hash: string) => {
-    setBusy(true);
-    setFailure(null);
-    setResult(null);
-    try {
-      setResult(await verifyReport(hash));
-    } catch (e) {
-      setFailure(e instanceof ApiError ? e.message : 'The check could not be made. Try again.');
-    } finally {
-      setBusy(false);
-    }
-  };
+  const [hash, setHash] = useState<string | null>(initial.success ? initial.data : null);
+  const [hashing, setHashing] = useState(false);
+  const answer = useQuery({ queryKey: ['verify', hash], queryFn: () => verifyReport(hash ?? ''), enabled: hash !== null, retry: false, staleTime: Infinity });
 
   const checkTyped = () => {
     const parsed = VerifyHashSchema.safeParse(typed);
     setFieldError(parsed.success ? null : (parsed.error.issues[0]?.message ?? 'Not a fingerprint'));
-    if (parsed.success) void check(parsed.data);
+    if (parsed.success) setHash(parsed.data);
   };
-
-  useEffect(() => {
-    if (initialCode && VerifyHashSchema.safeParse(initialCode).success) void check(initialCode.toLowerCase());
-  }, [initialCode]);
+  const checkFile = (file: File) => {
+    setHashing(true);
+    void sha256Hex(file)
+      .then(setHash)
+      .finally(() => setHashing(false));
+  };
+  const busy = hashing || answer.isFetching;
 
   return (
     <Stack gap="lg" maw={640}>
       <Title order={2}>Check a bench report</Title>
       <Text>Choose the PDF you were given. It is checked in this browser; the file is not uploaded.</Text>
-      <FileButton accept="application/pdf" onChange={(f) => f && void sha256Hex(f).then(check)}>
+      <FileButton accept="application/pdf" onChange={(f) => f && checkFile(f)}>
         {(props) => (
           <Button {...props} size="lg" leftSection={<IconFileSearch />} loading={busy}>
             Choose the PDF
@@ -82,10 +74,12 @@ export function VerifyReport({ initialCode }: { initialCode?: string }) {
           ff="monospace"
           autoComplete="off"
         />
-        <Button size="md" mt={28} onClick={checkTyped} loading={busy}>Check</Button>
+        <Button size="md" mt={28} onClick={checkTyped} loading={busy}>
+          Check
+        </Button>
       </Group>
-      {failure && <Alert color="red">{failure}</Alert>}
-      {result && <Answer result={result} />}
+      {answer.error && <Alert color="red">{answer.error instanceof ApiError ? answer.error.message : 'The check could not be made. Try again.'}</Alert>}
+      {answer.data && !busy && <Answer result={answer.data} />}
     </Stack>
   );
 }
