@@ -28,7 +28,7 @@ describe('bench report: branding, draft, issue, public verify', () => {
     await shot(page, 'report-branding-desktop');
   });
 
-  it('desk makes a draft, previews its pages, issues version 1; the PDF verifies on the public page and a changed copy does not', async () => {
+  it('desk makes a draft, previews its pages, issues version 1; the PDF verifies on the public page and a changed copy does not', { timeout: 240_000 }, async () => {
     const { page, context } = await browser(PHONE);
     await signIn(page, DESK);
     await page.goto(`/jobs/${JOB_ID}?section=report`);
