@@ -52,7 +52,7 @@ export function ReportSection({ jobId, canIssue, extra }: { jobId: number; canIs
             </Group>
             {draft.state === 'rendering' && <Rendering report={draft} />}
             {draft.state === 'failed' && <Alert color="red">The draft could not be rendered: {draft.error}</Alert>}
-            {draft.state === 'ready' && canIssue && (
+            {draft.state === 'ready' && canIssue && !issued.some((r) => r.fromDraftId === draft.id) && (
               <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={() => issue.mutate(draft.id)} loading={issue.isPending}>
                 Issue this draft as version {(issued[0]?.version ?? 0) + 1}
               </Button>
