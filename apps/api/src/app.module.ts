@@ -20,13 +20,14 @@ import { ClockModule } from './infra/clock';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
+import { ReportsModule } from './reports';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule, ReportsModule];
 
 @Module({})
 export class AppModule {

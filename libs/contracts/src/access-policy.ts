@@ -76,6 +76,8 @@ export const ACCESS_POLICY = {
   'owner_links.manage': staff('manager', 'desk'),
   'consent.view': staff(...ALL_STAFF),
   'consent.record': staff('manager', 'desk'),
+  'reports.view': staff(...ALL_STAFF),
+  'reports.issue': staff('manager', 'desk'),
   'owner.view': ownerOnly,
   'owner.decide': ownerOnly,
   'owner.consent': ownerOnly,

@@ -41,6 +41,7 @@ export const ERROR_CODES = {
   PRICE_CHANGED: { status: 409, message: 'The shop changed this price after you opened the page. Check the new price and decide again.' },
   SAFETY_CONFIRMATION_REQUIRED: { status: 422, message: 'Declining a safety item needs a second confirmation.' },
   CONSENT_WORDING_CHANGED: { status: 409, message: 'The consent wording has changed. Read it again before deciding.' },
+  REPORT_NOT_READY: { status: 409, message: 'The report is still rendering or failed to render.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
   NOT_READY: { status: 503, message: 'The server is starting or cannot reach its database or task runner.' },

@@ -55,7 +55,12 @@ const settingsFields = {
   chainLimits: ChainLimitsSchema.nullable(),
 };
 
-export const ShopSettingsDtoSchema = z.object({ id: IdSchema, ...settingsFields });
+export const ShopSettingsDtoSchema = z.object({
+  id: IdSchema,
+  ...settingsFields,
+  /** The report logo (a shop-level image made by the media pipeline), or null. */
+  logo: z.object({ url: z.string(), width: z.number().int(), height: z.number().int() }).nullable(),
+});
 export type ShopSettingsDto = z.infer<typeof ShopSettingsDtoSchema>;
 
 /** Partial update: only the fields sent change; chainLimits null resets to defaults. */

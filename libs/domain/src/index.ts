@@ -25,3 +25,4 @@ export * from './recommendation-urgency';
 export * from './perceptual-hash';
 export * from './pair-suggestion';
 export * from './owner-explanations';
+export * from './report-palette';

@@ -1,2 +1,2 @@
 export { ShopsModule } from './shops.module';
-export { ShopsService } from './shops.service';
+export { ShopsService, type ShopLogo } from './shops.service';

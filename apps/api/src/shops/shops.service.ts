@@ -21,7 +21,16 @@ const toDto = (s: ShopRow): ShopSettingsDto => ({
   brandPrimary: s.brandPrimary,
   brandAccent: s.brandAccent,
   reportFooter: s.reportFooter,
+  logo: s.logoKey && s.logoWidth && s.logoHeight ? { url: `/api/shop/logo?v=${s.logoSha256?.slice(0, 12)}`, width: s.logoWidth, height: s.logoHeight } : null,
 });
+
+/** The stored report logo of a shop. */
+export interface ShopLogo {
+  key: string;
+  sha256: string;
+  width: number;
+  height: number;
+}
 
 /** The shop is the tenant: its settings drive money, units, chain limits and the report. */
 @Injectable()
@@ -41,6 +50,26 @@ export class ShopsService {
     const updated = this.repo.update(actor.shopId, patch);
     this.audit.record(actor, { action: 'shop.settings_updated', entityType: 'shop', entityId: actor.shopId, details: { fields: Object.keys(patch) } });
     return toDto(updated);
+  }
+
+  /** The shop's report logo, or null when none was uploaded. */
+  logo(shopId: number): ShopLogo | null {
+    const s = this.repo.find(shopId);
+    if (!s?.logoKey || !s.logoSha256 || !s.logoWidth || !s.logoHeight) return null;
+    return { key: s.logoKey, sha256: s.logoSha256, width: s.logoWidth, height: s.logoHeight };
+  }
+
+  /** Records a new logo (null removes it); returns the previous one so the caller can delete its file. */
+  setLogo(actor: AuthUser, logo: ShopLogo | null): { settings: ShopSettingsDto; previous: ShopLogo | null } {
+    const previous = this.logo(actor.shopId);
+    const updated = this.repo.update(actor.shopId, {
+      logoKey: logo?.key ?? null,
+      logoSha256: logo?.sha256 ?? null,
+      logoWidth: logo?.width ?? null,
+      logoHeight: logo?.height ?? null,
+    });
+    this.audit.record(actor, { action: logo ? 'shop.logo_set' : 'shop.logo_removed', entityType: 'shop', entityId: actor.shopId, details: { sha256: logo?.sha256 ?? null } });
+    return { settings: toDto(updated), previous };
   }
 
   /** The next job sequence number for this shop, used once. */

@@ -32,6 +32,8 @@ const signedIn: RouteObject[] = [
 export const routes: RouteObject[] = [
   { path: '/sign-in', element: <SignInRoute />, errorElement: <RouteError /> },
   { path: '/o/:token', lazy: page(() => import('./routes/owner/owner.route'), (m) => m.OwnerRoute), errorElement: <RouteError /> },
+  // Public: a warranty desk or insurer checks a report without an account.
+  { path: '/verify', lazy: page(() => import('./routes/verify/verify.route'), (m) => m.VerifyRoute), errorElement: <RouteError /> },
   {
     path: '/',
     loader: requireSession,

@@ -20,6 +20,11 @@ export const shops = sqliteTable('shops', {
   brandPrimary: text('brand_primary').notNull().default('#1F5F5B'),
   brandAccent: text('brand_accent').notNull().default('#E0A526'),
   reportFooter: text('report_footer').notNull().default(''),
+  /** Report logo: a JPEG made from the upload by the media pipeline, stored under an opaque key. */
+  logoKey: text('logo_key'),
+  logoSha256: text('logo_sha256'),
+  logoWidth: integer('logo_width'),
+  logoHeight: integer('logo_height'),
   nextJobSeq: integer('next_job_seq').notNull().default(1),
   createdAt: timestamp('created_at').notNull(),
 });

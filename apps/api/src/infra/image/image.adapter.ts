@@ -11,8 +11,13 @@ export interface Rendition {
   height: number;
 }
 
-/** Long-edge limits of the derivatives, in pixels. */
-export const DERIVATIVE_SIZES = { thumb: 320, screen: 1600, print: 2400 } as const;
+/**
+ * Long-edge limits of the derivatives, in pixels. Print: a two-up report slot is about
+ * 3.5 in wide (A4 or Letter with 40 pt margins), so 1000 px lands near 285 dpi there —
+ * inside the 200–300 dpi the report aims for (CHECKS.md B.7: 80 mm at 300 dpi = 945 px) —
+ * and the PDF embeds these bytes as they are.
+ */
+export const DERIVATIVE_SIZES = { thumb: 320, screen: 1600, print: 1000 } as const;
 export type SizedVariant = keyof typeof DERIVATIVE_SIZES;
 
 /** EXIF data a demo or test image is written with (sharp's withExif/withMetadata). */
@@ -57,6 +62,13 @@ export class ImageAdapter {
       return failure((err as Error).message);
     }
     return { ok: true, width, height, format: format ?? 'unknown', orientation: meta.orientation ?? 1 };
+  }
+
+  /** Pixel size from the header only (no decode, no re-encode). */
+  async size(input: Buffer): Promise<{ width: number; height: number }> {
+    const meta = await this.open(input).metadata();
+    if (!meta.width || !meta.height) throw new Error('No image dimensions');
+    return { width: meta.width, height: meta.height };
   }
 
   /** Whether this libvips build decodes HEIC (HEVC); prebuilt sharp reads only AVIF from the HEIF family. */

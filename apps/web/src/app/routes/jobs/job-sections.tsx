@@ -1,6 +1,5 @@
 import { roleCan, type JobDetail, type SessionUser, type ShopSettingsDto } from '@benchproof/contracts';
 import { Stack } from '@mantine/core';
-import { ArrivesWith } from '../../../components/arrives-with';
 import { BikeSpecs } from '../../../features/bikes';
 import { FindingsPanel } from '../../../features/findings';
 import { InspectionPanel } from '../../../features/inspection';
@@ -8,6 +7,7 @@ import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
 import { FindingMediaPicker, JobMediaSection } from '../../../features/media';
 import { PairsPanel } from '../../../features/pairs';
 import { OwnerLinkPanel } from '../../../features/owner';
+import { ReportSection } from '../../../features/reports';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
 
@@ -74,7 +74,7 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
     case 'pairs':
       return <PairsPanel jobId={job.id} canEdit={roleCan(me.role, 'pairs.edit')} />;
     case 'report':
-      return <ArrivesWith what="the report issue: preview, issue and e-mail the bench report" />;
+      return <ReportSection jobId={job.id} canIssue={roleCan(me.role, 'reports.issue')} />;
     case 'owner':
       return <OwnerLinkPanel jobId={job.id} canManage={roleCan(me.role, 'owner_links.manage')} ownerName={job.customer.name} />;
   }

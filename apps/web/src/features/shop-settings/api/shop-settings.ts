@@ -13,3 +13,24 @@ export function useUpdateShopSettings() {
     onSuccess: (s) => qc.setQueryData(shopSettingsQuery.queryKey, s),
   });
 }
+
+/** Multipart upload of the report logo (field `file`). */
+export function useUploadLogo() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (file: File) => {
+      const body = new FormData();
+      body.append('file', file);
+      return api<ShopSettingsDto>('/shop/logo', { method: 'POST', body });
+    },
+    onSuccess: (s) => qc.setQueryData(shopSettingsQuery.queryKey, s),
+  });
+}
+
+export function useRemoveLogo() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<ShopSettingsDto>('/shop/logo', { method: 'DELETE' }),
+    onSuccess: (s) => qc.setQueryData(shopSettingsQuery.queryKey, s),
+  });
+}

@@ -1,12 +1,14 @@
 import { UpdateShopSettingsRequestSchema, type ShopSettingsDto } from '@benchproof/contracts';
 import { DEFAULT_CHAIN_LIMIT_POLICY, majorTextToMinor, minorToMajorText } from '@benchproof/domain';
-import { Alert, Button, ColorInput, NumberInput, Paper, SegmentedControl, SimpleGrid, Stack, Switch, Text, Textarea, TextInput, Title } from '@mantine/core';
+import { Alert, Button, ColorInput, Group, NumberInput, Paper, SegmentedControl, SimpleGrid, Stack, Switch, Text, Textarea, TextInput, Title } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
 import type { ReactNode } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useUpdateShopSettings } from '../api/shop-settings';
 import { ContrastCheck } from './contrast-check';
+import { CoverPreview } from './cover-preview';
+import { LogoUpload } from './logo-upload';
 import { fromDto, toRequest, type SettingsValues } from './settings-values';
 
 type Form = UseFormReturnType<SettingsValues>;
@@ -55,7 +57,7 @@ function WorkshopSection({ form }: { form: Form }) {
   );
 }
 
-function BrandSection({ form }: { form: Form }) {
+function BrandSection({ form, settings }: { form: Form; settings: ShopSettingsDto }) {
   const v = form.getValues();
   return (
     <Section title="Branding and contact">
@@ -70,6 +72,13 @@ function BrandSection({ form }: { form: Form }) {
         <Stack gap="xs"><ColorInput label="Accent colour" format="hex" {...form.getInputProps('brandAccent')} /><ContrastCheck colour={v.brandAccent} /></Stack>
       </SimpleGrid>
       <Textarea label="Report footer" autosize minRows={2} {...form.getInputProps('reportFooter')} />
+      <Group align="flex-start" gap="xl" wrap="wrap">
+        <LogoUpload settings={settings} />
+        <Stack gap={4}>
+          <Text fw={600} size="sm">Cover preview</Text>
+          <CoverPreview name={v.name} primary={v.brandPrimary} accent={v.brandAccent} logoUrl={settings.logo?.url ?? null} pageSize={v.pageSize} />
+        </Stack>
+      </Group>
     </Section>
   );
 }
@@ -89,7 +98,7 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettingsDto }) {
       <Stack maw={900}>
         <MoneySection form={form} />
         <WorkshopSection form={form} />
-        <BrandSection form={form} />
+        <BrandSection form={form} settings={settings} />
         {update.error instanceof ApiError && update.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{update.error.message}</Alert>}
         {Object.keys(form.errors).length > 0 && <Alert color="red" variant="light">Some fields need attention; nothing you typed is lost.</Alert>}
         <Button type="submit" size="lg" loading={update.isPending}>Save settings</Button>

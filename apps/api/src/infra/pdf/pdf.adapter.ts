@@ -1,0 +1,48 @@
+import { Font, renderToBuffer } from '@react-pdf/renderer';
+import type { ReactElement } from 'react';
+
+/** The one family the report uses; registered once per process. */
+export const PDF_FONT = 'Inter';
+
+let registered = false;
+
+/**
+ * Inter TTF from @expo-google-fonts/inter (SIL OFL 1.1; the full glyph set, so
+ * owner names with ő, ł, ş render — the web's woff subsets do not, see STACK.md).
+ * react-pdf embeds a subset of it in every PDF.
+ */
+function registerFonts(): void {
+  if (registered) return;
+  const file = (path: string) => require.resolve(`@expo-google-fonts/inter/${path}`);
+  Font.register({
+    family: PDF_FONT,
+    fonts: [
+      { src: file('400Regular/Inter_400Regular.ttf'), fontWeight: 400 },
+      { src: file('400Regular_Italic/Inter_400Regular_Italic.ttf'), fontWeight: 400, fontStyle: 'italic' },
+      { src: file('600SemiBold/Inter_600SemiBold.ttf'), fontWeight: 600 },
+      { src: file('700Bold/Inter_700Bold.ttf'), fontWeight: 700 },
+    ],
+  });
+  // Words are never split with hyphens we did not write (names, part numbers).
+  Font.registerHyphenationCallback((word) => [word]);
+  registered = true;
+}
+
+/** Renders react-pdf documents to PDF bytes. */
+export class PdfAdapter {
+  constructor() {
+    registerFonts();
+  }
+
+  async render(document: ReactElement): Promise<Buffer> {
+    // renderToBuffer's type wants a <Document> element; our callers always pass one.
+    return renderToBuffer(document as Parameters<typeof renderToBuffer>[0]);
+  }
+
+  /** Pages in a PDF written by react-pdf (pdfkit writes one "/Type /Page" object per page, uncompressed). */
+  pageCount(pdf: Buffer): number {
+    return (pdf.toString('latin1').match(/\/Type\s*\/Page(?![a-zA-Z])/g) ?? []).length;
+  }
+}
+
+export const PDF = Symbol('PDF');

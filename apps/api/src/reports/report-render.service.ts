@@ -1,0 +1,105 @@
+import { Inject, Injectable, type OnApplicationBootstrap } from '@nestjs/common';
+import { createElement } from 'react';
+import { Readable } from 'node:stream';
+import { buffer } from 'node:stream/consumers';
+import { APP_CONFIG, type AppConfig } from '../config';
+import type { AuthUser } from '../core/auth';
+import { CLOCK, type Clock } from '../infra/clock';
+import { IMAGE, type ImageAdapter } from '../infra/image';
+import { PDF, type PdfAdapter } from '../infra/pdf';
+import { STORAGE, type Storage } from '../infra/storage';
+import { TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
+import { ReportDocument } from './pdf/report.pdf';
+import type { IssueStamp, ReportImage, ReportSnapshot } from './report-data';
+import { ANNOTATED_IMAGE_SOURCE, type AnnotatedImageSource } from './report-sources';
+import { ReportsRepository, type ReportRow } from './reports.repository';
+
+export const RENDER_TASK = 'report.render';
+
+/** Who asked for the render: the shots are fetched with that person's access. */
+export type RenderActor = Pick<AuthUser, 'id' | 'shopId' | 'role' | 'email' | 'name'>;
+
+/**
+ * Renders a report row to PDF in the background (task kind 'report.render', keyed
+ * by report id). Idempotent: a row already `ready` is never rendered again, so an
+ * issued PDF and its SHA-256 never change.
+ */
+@Injectable()
+export class ReportRenderService implements OnApplicationBootstrap {
+  constructor(
+    private readonly repo: ReportsRepository,
+    @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
+    @Inject(PDF) private readonly pdf: PdfAdapter,
+    @Inject(STORAGE) private readonly storage: Storage,
+    @Inject(IMAGE) private readonly image: ImageAdapter,
+    @Inject(ANNOTATED_IMAGE_SOURCE) private readonly shots: AnnotatedImageSource,
+    @Inject(CLOCK) private readonly clock: Clock,
+    @Inject(APP_CONFIG) private readonly cfg: AppConfig,
+  ) {}
+
+  onApplicationBootstrap(): void {
+    this.tasks.register(RENDER_TASK, (task) => this.run(task), { concurrency: 1, maxAttempts: 3 });
+  }
+
+  enqueue(row: ReportRow, actor: RenderActor): void {
+    this.tasks.enqueue({ kind: RENDER_TASK, key: String(row.id), shopId: row.shopId, payload: { reportId: row.id, actor } });
+  }
+
+  progress(reportId: number): number {
+    return this.tasks.status(RENDER_TASK, String(reportId))?.progress ?? 0;
+  }
+
+  private async run(task: TaskContext): Promise<void> {
+    const row = this.repo.findById(Number(task.payload.reportId));
+    if (!row || row.state === 'ready') return;
+    if (row.state === 'failed') this.repo.update(row.id, { state: 'rendering', error: null });
+    try {
+      const pdf = await this.renderPdf(row, task.payload.actor as AuthUser, (f) => task.progress(f));
+      const stored = await this.storage.put(`reports/${row.shopId}/${row.id}.pdf`, Readable.from([pdf]));
+      this.repo.update(row.id, { state: 'ready', storageKey: stored.key, sha256: stored.sha256, byteSize: stored.bytes, pageCount: this.pdf.pageCount(pdf), renderedAt: this.clock.now() });
+      task.progress(1);
+    } catch (err) {
+      this.repo.update(row.id, { state: 'failed', error: (err as Error).message.slice(0, 500) });
+      throw err;
+    }
+  }
+
+  /** Loads every shot (the prepared print JPEGs), then lays out and writes the PDF. */
+  async renderPdf(row: ReportRow, actor: AuthUser, progress: (f: number) => void = () => undefined): Promise<Buffer> {
+    const snap = row.snapshot as ReportSnapshot;
+    const ids = [...new Set([...snap.findings.flatMap((f) => f.shots), ...snap.pairs.flatMap((p) => [p.before, p.after]), ...snap.scopeStills].map((s) => s.assetId))];
+    const images = new Map<number, ReportImage>();
+    for (const [i, id] of ids.entries()) {
+      const img = await this.shots.printJpeg(actor, id);
+      if (img) images.set(id, img);
+      progress(0.05 + (0.6 * (i + 1)) / ids.length);
+    }
+    const logo = await this.logo(snap.shop.logoKey);
+    const doc = createElement(ReportDocument, { snap, pageSize: row.pageSize, images, logo, stamp: this.stamp(row) });
+    progress(0.7);
+    const pdf = await this.pdf.render(doc);
+    progress(0.95);
+    return pdf;
+  }
+
+  private stamp(row: ReportRow): IssueStamp | null {
+    if (row.kind !== 'issued' || !row.version || !row.issuedAt || !row.fingerprint) return null;
+    return { version: row.version, issuedAt: row.issuedAt.toISOString(), fingerprint: row.fingerprint, verifyUrl: this.verifyUrl(row.fingerprint) };
+  }
+
+  /** The short link printed on the last page: 16 hex of the fingerprint (64 bits) is enough to find one report. */
+  verifyUrl(fingerprint: string): string {
+    const base = (this.cfg.PUBLIC_URL ?? `http://localhost:${this.cfg.PORT}`).replace(/\/$/, '');
+    return `${base}/verify?c=${fingerprint.slice(0, 16)}`;
+  }
+
+  private async logo(key: string | null): Promise<ReportImage | null> {
+    if (!key) return null;
+    try {
+      const data = await buffer(this.storage.createReadStream(key));
+      return { data, ...(await this.image.size(data)) };
+    } catch {
+      return null;
+    }
+  }
+}

@@ -1,0 +1,89 @@
+import type { ReportDto } from '@benchproof/contracts';
+import { Alert, Badge, Button, Card, Group, Progress, Stack, Text, Title } from '@mantine/core';
+import { IconDownload, IconFileCheck } from '@tabler/icons-react';
+import { useState } from 'react';
+import { ApiError } from '../../../lib/api-client';
+import { useCreateDraft, useIssueReport, useReports } from '../api/reports';
+import { ReportPreview } from './report-preview';
+
+const dateTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const kb = (bytes: number | null) => (bytes === null ? '' : `${Math.round(bytes / 1024)} kB`);
+
+function Rendering({ report }: { report: ReportDto }) {
+  return (
+    <Stack gap={4}>
+      <Text size="sm">Rendering… {Math.round(report.progress * 100)} %</Text>
+      <Progress value={report.progress * 100} size="lg" aria-label="Render progress" animated />
+    </Stack>
+  );
+}
+
+/**
+ * The job's bench report: make a draft (rendered in the background), preview it,
+ * issue it as the next version; every issued version stays downloadable.
+ */
+export function ReportSection({ jobId, canIssue, extra }: { jobId: number; canIssue: boolean; extra?: (issued: ReportDto) => React.ReactNode }) {
+  const reports = useReports(jobId);
+  const createDraft = useCreateDraft(jobId);
+  const issue = useIssueReport(jobId);
+  const [previewId, setPreviewId] = useState<number | null>(null);
+  const list = reports.data ?? [];
+  const draft = list.find((r) => r.kind === 'draft');
+  const issued = list.filter((r) => r.kind === 'issued');
+  const preview = list.find((r) => r.id === previewId) ?? (draft?.state === 'ready' ? draft : undefined);
+  const error = [createDraft.error, issue.error].find((e) => e instanceof ApiError);
+  return (
+    <Stack gap="lg">
+      <Group justify="space-between" wrap="wrap">
+        <Title order={3}>Bench report</Title>
+        {canIssue && (
+          <Button size="lg" onClick={() => createDraft.mutate(undefined, { onSuccess: (d) => setPreviewId(d.id) })} loading={createDraft.isPending}>
+            {draft ? 'Make a new draft' : 'Make a draft'}
+          </Button>
+        )}
+      </Group>
+      {error && <Alert color="red">{error.message}</Alert>}
+      {draft && (
+        <Card withBorder>
+          <Stack gap="sm">
+            <Group justify="space-between" wrap="wrap">
+              <Text fw={600}>Draft of {dateTime(draft.createdAt)}</Text>
+              <Badge color={draft.state === 'failed' ? 'red' : 'gray'} size="lg">{draft.state === 'ready' ? `${draft.pageCount} pages · ${kb(draft.byteSize)}` : draft.state}</Badge>
+            </Group>
+            {draft.state === 'rendering' && <Rendering report={draft} />}
+            {draft.state === 'failed' && <Alert color="red">The draft could not be rendered: {draft.error}</Alert>}
+            {draft.state === 'ready' && canIssue && !issued.some((r) => r.fromDraftId === draft.id) && (
+              <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={() => issue.mutate(draft.id)} loading={issue.isPending}>
+                Issue this draft as version {(issued[0]?.version ?? 0) + 1}
+              </Button>
+            )}
+          </Stack>
+        </Card>
+      )}
+      {preview && <ReportPreview key={preview.id} report={preview} />}
+      <Stack gap="xs">
+        <Title order={4}>Issued versions</Title>
+        {issued.length === 0 && <Text c="dimmed">No version issued yet.</Text>}
+        {issued.map((r) => (
+          <Card key={r.id} withBorder padding="sm">
+            <Group justify="space-between" wrap="wrap">
+              <Stack gap={0}>
+                <Text fw={700}>Version {r.version}</Text>
+                <Text size="sm" c="dimmed">Issued {r.issuedAt && dateTime(r.issuedAt)}{r.createdBy ? ` by ${r.createdBy.name}` : ''} · {kb(r.byteSize)}</Text>
+                {r.fingerprint && <Text size="xs" c="dimmed" ff="monospace" style={{ wordBreak: 'break-all' }}>Fingerprint {r.fingerprint}</Text>}
+              </Stack>
+              {r.state === 'rendering' && <Rendering report={r} />}
+              {r.state === 'ready' && r.urls.download && (
+                <Group gap="xs">
+                  <Button variant="light" size="md" onClick={() => setPreviewId(r.id)}>Preview</Button>
+                  <Button component="a" href={r.urls.download} size="md" leftSection={<IconDownload />}>Download</Button>
+                </Group>
+              )}
+            </Group>
+            {r.state === 'ready' && extra?.(r)}
+          </Card>
+        ))}
+      </Stack>
+    </Stack>
+  );
+}
