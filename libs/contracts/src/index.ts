@@ -15,3 +15,4 @@ export * from './bike-history';
 export * from './inspection';
 export * from './findings';
 export * from './work-log';
+export * from './mail';

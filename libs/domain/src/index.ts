@@ -22,3 +22,4 @@ export * from './cautions';
 export * from './wear-trend';
 export * from './torque-wrench';
 export * from './recommendation-urgency';
+export * from './retry';

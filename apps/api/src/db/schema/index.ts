@@ -16,3 +16,4 @@ export * from './final-checks.table';
 export * from './media-assets.table';
 export * from './media-derivatives.table';
 export * from './finding-media.table';
+export * from './outbox-messages.table';
