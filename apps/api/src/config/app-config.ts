@@ -38,6 +38,8 @@ const EnvSchema = z.object({
   /** First retry after this many ms; each later one waits twice as long (capped at an hour). */
   MAIL_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
   MAIL_MAX_ATTEMPTS: z.coerce.number().int().positive().default(8),
+  /** A message 'sending' for longer than this is taken as lost with its process and tried again. */
+  MAIL_SEND_LEASE_MS: z.coerce.number().int().positive().default(10 * 60_000),
   /** How often the outbox looks for messages whose next try has come. */
   MAIL_SWEEP_MS: z.coerce.number().int().positive().default(5_000),
   MAX_PHOTO_BYTES: z.coerce.number().int().positive().default(40 * 1024 * 1024),

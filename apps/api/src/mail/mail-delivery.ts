@@ -8,9 +8,6 @@ import type { TaskContext } from '../infra/tasks';
 import { type OutboxRow, MailRepository } from './mail.repository';
 import type { IssuedPdf, ReportFiles } from './report-files';
 
-/** A 'sending' row older than this belongs to a process that died mid-send (transport timeouts are far shorter). */
-export const SEND_LEASE_MS = 10 * 60_000;
-
 /** Thrown when retrying cannot help (relay refused for good, report changed): the message fails at once. */
 class PermanentFailure extends Error {}
 
@@ -52,7 +49,8 @@ export class MailDelivery {
     const id = Number(task.key.split('.')[0]);
     const shopId = task.shopId ?? 0;
     const now = this.clock.now();
-    const row = this.repo.claim(shopId, id, now, new Date(now.getTime() - SEND_LEASE_MS));
+    // The lease (MAIL_SEND_LEASE_MS) is far longer than the transport's timeouts, so a live attempt is never taken over.
+    const row = this.repo.claim(shopId, id, now, new Date(now.getTime() - this.cfg.MAIL_SEND_LEASE_MS));
     if (!row) {
       const current = this.repo.find(shopId, id);
       if (!current || current.status === 'sent' || current.status === 'failed') return;

@@ -2,7 +2,7 @@ import { Inject, Injectable, type OnApplicationShutdown, type OnModuleInit } fro
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../infra/clock';
 import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
-import { MailDelivery, SEND_LEASE_MS } from './mail-delivery';
+import { MailDelivery } from './mail-delivery';
 import { MailRepository } from './mail.repository';
 
 export const MAIL_SEND = 'mail.send';
@@ -43,7 +43,7 @@ export class MailRelay implements OnModuleInit, OnApplicationShutdown {
   /** Hands every due message to the runner. */
   sweep(): void {
     const now = this.clock.now();
-    for (const row of this.repo.due(now, new Date(now.getTime() - SEND_LEASE_MS))) {
+    for (const row of this.repo.due(now, new Date(now.getTime() - this.cfg.MAIL_SEND_LEASE_MS))) {
       this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(row), shopId: row.shopId });
     }
   }
