@@ -5,6 +5,7 @@ import { BikeSpecs } from '../../../features/bikes';
 import { FindingsPanel } from '../../../features/findings';
 import { InspectionPanel } from '../../../features/inspection';
 import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
+import { MessagesPanel } from '../../../features/mail';
 import { JobMediaSection } from '../../../features/media';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
@@ -23,6 +24,7 @@ export const JOB_SECTIONS = [
   { value: 'media', label: 'Media' },
   { value: 'pairs', label: 'Pairs' },
   { value: 'report', label: 'Report' },
+  { value: 'messages', label: 'E-mails' },
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
@@ -71,5 +73,8 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
       return <ArrivesWith what="the pairs issue: before/after pairs suggested from the media" />;
     case 'report':
       return <ArrivesWith what="the report issue: preview, issue and e-mail the bench report" />;
+    case 'messages':
+      // The mail feature (features/mail) owns this section: delivery status and resend.
+      return <MessagesPanel jobId={job.id} canResend={me.role !== 'mechanic'} />;
   }
 }

@@ -3,6 +3,7 @@ import { useParams, useSearchParams } from 'react-router';
 import { QueryState } from '../../../components/query-state';
 import { useSession } from '../../../features/auth';
 import { JobHeader, useJob } from '../../../features/jobs';
+import { FailedMessagesNotice } from '../../../features/mail';
 import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';
 import { JOB_SECTIONS, JobSectionBody, type JobSection } from './job-sections';
@@ -23,6 +24,7 @@ export function JobRoute() {
   return (
     <>
       <JobHeader job={job.data} mechanics={mechanics} canAssign={me.role !== 'mechanic'} />
+      {section !== 'messages' && <FailedMessagesNotice jobId={jobId} onOpen={() => setSearch({ section: 'messages' }, { replace: true })} />}
       <Tabs value={section} onChange={(v) => v && setSearch({ section: v }, { replace: true })} keepMounted={false}>
         <ScrollArea type="never" mb="md">
           <Tabs.List style={{ flexWrap: 'nowrap' }}>
