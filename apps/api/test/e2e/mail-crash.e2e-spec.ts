@@ -2,7 +2,6 @@ import type { OutboxMessageDto } from '@benchproof/contracts';
 import { DEMO_PASSWORD } from '@benchproof/seeds';
 import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import type { Server } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import request from 'supertest';
@@ -21,11 +20,11 @@ const built = resolve(__dirname, '../../../../dist/apps/api/apps/api/src/main.js
 describe.runIf(existsSync(built))('mail: crash between queueing and sending', () => {
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-mail-crash-'));
   let server: ChildProcess | null = null;
-  let hole: Server | null = null;
+  let hole: { close: () => Promise<void> } | null = null;
   let catcher: MailCatcher | null = null;
   afterAll(async () => {
     server?.kill('SIGKILL');
-    hole?.close();
+    await hole?.close();
     await catcher?.close();
     rmSync(dir, { recursive: true, force: true });
   });
@@ -72,7 +71,7 @@ describe.runIf(existsSync(built))('mail: crash between queueing and sending', ()
 
     server.kill('SIGKILL');
     await new Promise((r) => server?.once('exit', r));
-    await new Promise<void>((r) => hole?.close(() => r()));
+    await hole.close();
     catcher = await startMailCatcher({ smtpPort, httpPort: 0 });
     server = await boot(httpPort, smtpPort);
     desk = await login();
@@ -85,5 +84,5 @@ describe.runIf(existsSync(built))('mail: crash between queueing and sending', ()
     expect(sent.id).toBe(inFlight.id);
     await new Promise((r) => setTimeout(r, 1500));
     expect(catcher.messages()).toHaveLength(1);
-  });
+  }, 180_000);
 });

@@ -1,6 +1,6 @@
 import { Document, Page, renderToBuffer, Text } from '@react-pdf/renderer';
 import { createHash } from 'node:crypto';
-import { createServer, type Server } from 'node:net';
+import { createServer, type Server, type Socket } from 'node:net';
 import { Readable } from 'node:stream';
 import { createElement } from 'react';
 import type { IssuedPdf, ReportFiles } from '../../src/mail';
@@ -43,14 +43,19 @@ export const freePort = (): Promise<number> =>
   });
 
 /** Accepts TCP connections and never says a word: an SMTP attempt hangs before the relay accepts anything. */
-export function blackHole(port: number): Promise<Server> {
-  const sockets = new Set<import('node:net').Socket>();
-  const srv = createServer((s) => {
+export async function blackHole(port: number): Promise<{ close: () => Promise<void> }> {
+  const sockets = new Set<Socket>();
+  const srv: Server = createServer((s) => {
     sockets.add(s);
     s.on('close', () => sockets.delete(s));
   });
-  srv.on('close', () => sockets.forEach((s) => s.destroy()));
-  return new Promise((ok) => srv.listen(port, '127.0.0.1', () => ok(srv)));
+  await new Promise<void>((ok) => srv.listen(port, '127.0.0.1', () => ok()));
+  return {
+    close: () => new Promise<void>((ok) => {
+      sockets.forEach((s) => s.destroy());
+      srv.close(() => ok());
+    }),
+  };
 }
 
 /** Polls until `check` returns a value (not undefined) or the time is up. */
