@@ -1,2 +1,3 @@
 export { JobsModule } from './jobs.module';
-export { JobsService, type JobRef, type BookedInListener, type ReportSentCheck } from './jobs.service';
+export { JobsService, type JobRef, type BookedInListener } from './jobs.service';
+export type { ReportSentCheck } from './report-sent';

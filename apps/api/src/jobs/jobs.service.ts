@@ -23,6 +23,7 @@ import { CLOCK, type Clock } from '../infra/clock';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import { type JobRow, JobsRepository } from './jobs.repository';
+import { ReportSentChecks } from './report-sent';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, type SummaryContext } from './jobs.view';
 
 /** What other features get from getOwned: enough to scope and label their own rows. */
@@ -39,9 +40,6 @@ export interface JobRef {
 /** Runs inside the book-in transaction, e.g. to lay out the job's inspection checklist. */
 export type BookedInListener = (actor: AuthUser, job: JobRef, bike: BikeListItem) => void;
 
-/** True when the owner was sent a report for the job (the mail feature answers this). */
-export type ReportSentCheck = (shopId: number, jobId: number) => boolean;
-
 type Actor = Pick<AuthUser, 'id' | 'shopId'>;
 
 const toRef = (j: JobRow): JobRef => ({ id: j.id, shopId: j.shopId, number: j.number, status: j.status, bikeId: j.bikeId, customerId: j.customerId, mechanicId: j.mechanicId });
@@ -49,7 +47,8 @@ const toRef = (j: JobRow): JobRef => ({ id: j.id, shopId: j.shopId, number: j.nu
 @Injectable()
 export class JobsService {
   private readonly bookedInListeners: BookedInListener[] = [];
-  private readonly reportSentChecks: ReportSentCheck[] = [];
+  /** The hand-over rule; the feature that sends reports adds its check here. */
+  readonly reportSent = new ReportSentChecks();
 
   constructor(
     private readonly repo: JobsRepository,
@@ -64,11 +63,6 @@ export class JobsService {
   /** Lets a feature that depends on jobs add rows in the same transaction as a new job. */
   onBookedIn(listener: BookedInListener): void {
     this.bookedInListeners.push(listener);
-  }
-
-  /** Lets the feature that sends reports tell the hand-over whether one went out. */
-  onReportSentCheck(check: ReportSentCheck): void {
-    this.reportSentChecks.push(check);
   }
 
   private today(): string {
@@ -187,21 +181,14 @@ export class JobsService {
         throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to: input.to, allowed: allowedNextStatuses(job.status) });
       }
       if (input.to === 'ready') this.requirePassedCheck(actor, job);
-      const withoutReport = input.to === 'collected' && !this.reportSent(actor.shopId, id, input.confirmNoReport);
+      const withoutReport = input.to === 'collected' && !this.reportSent.require(actor.shopId, id, input.confirmNoReport);
       const now = this.clock.now();
-      this.repo.update(actor.shopId, id, { status: input.to, [STATUS_TIME_FIELD[input.to]]: now, updatedAt: now, ...(input.to === 'collected' ? { collectedWithoutReport: withoutReport } : {}) });
-      const note = input.note ?? (withoutReport ? 'Handed over without a report' : '');
-      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: input.to, userId: actor.id, note, at: now });
+      // Collected is terminal, so only the hand-over ever sets collectedWithoutReport.
+      this.repo.update(actor.shopId, id, { status: input.to, [STATUS_TIME_FIELD[input.to]]: now, updatedAt: now, collectedWithoutReport: withoutReport });
+      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: input.to, userId: actor.id, note: input.note ?? (withoutReport ? 'Handed over without a report' : ''), at: now });
       this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details: { from: job.status, to: input.to, ...(withoutReport ? { withoutReport } : {}) } });
     });
     return this.get(actor, id);
-  }
-
-  /** Hand-over with no report sent needs desk's explicit confirmation (issue: the job records it left without one). */
-  private reportSent(shopId: number, jobId: number, confirmed: boolean | undefined): boolean {
-    const sent = this.reportSentChecks.some((check) => check(shopId, jobId));
-    if (!sent && !confirmed) throw new DomainError('REPORT_NOT_SENT');
-    return sent;
   }
 
   /** Ready needs a passed final check taken since the job last entered final check. */

@@ -54,7 +54,7 @@ export class MailService implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
-    this.jobs.onReportSentCheck((shopId, jobId) => this.repo.hasReportMessage(shopId, jobId));
+    this.jobs.reportSent.add((shopId, jobId) => this.repo.hasReportMessage(shopId, jobId));
   }
 
   /** The reports feature binds its issued PDFs here at start-up (see report-files.ts). */
