@@ -26,7 +26,7 @@ const PAGE_STYLE = 'body{font:16px/1.45 system-ui,sans-serif;margin:0;color:#1b1
   + 'main{padding:12px 16px;max-width:960px}a{color:#0b4f8a}table{border-collapse:collapse;width:100%;background:#fff}td,th{padding:10px 8px;border-bottom:1px solid #ddd;text-align:left;vertical-align:top}'
   + '.row a{display:block;min-height:24px}.att{display:inline-block;padding:10px 12px;margin:4px 4px 0 0;border:1px solid #1f5f5b;border-radius:6px;min-height:24px}'
   + 'iframe{width:100%;height:60vh;border:1px solid #ccc;background:#fff}pre{white-space:pre-wrap;background:#fff;padding:12px;border:1px solid #ddd}dl{display:grid;grid-template-columns:max-content 1fr;gap:4px 12px}dt{font-weight:600}'
-  + '@media (max-width:600px){.wide{display:none}}';
+  + '.narrow{display:none;color:#4a4f55;word-break:break-all}@media (max-width:600px){.wide{display:none}.narrow{display:block}}';
 
 const page = (title, body) => `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1">`
   + `<title>${esc(title)}</title><style>${PAGE_STYLE}</style></head><body><header><strong>Local mail catcher</strong> · nothing here leaves this machine</header><main>${body}</main></body></html>`;
@@ -36,9 +36,10 @@ function listPage(messages) {
   const rows = [...messages].reverse().map((m) => {
     const s = summary(m);
     const atts = s.attachments.map((a) => `<a class="att" href="/messages/${s.id}/attachments/${a.index}">${esc(a.filename)}</a>`).join(' ');
-    return `<tr class="row"><td><a href="/messages/${s.id}">${esc(s.subject || '(no subject)')}</a><div>${atts}</div></td><td>${esc(s.to)}</td><td class="wide">${esc(s.date)}</td></tr>`;
+    // On a phone the To and Received columns fold away and the recipient sits under the subject.
+    return `<tr class="row"><td><a href="/messages/${s.id}">${esc(s.subject || '(no subject)')}</a><div class="narrow">To ${esc(s.to)}</div><div>${atts}</div></td><td class="wide">${esc(s.to)}</td><td class="wide">${esc(s.date)}</td></tr>`;
   });
-  return page('Inbox', `<h1>Inbox (${messages.length})</h1><table><thead><tr><th>Subject</th><th>To</th><th class="wide">Received</th></tr></thead><tbody>${rows.join('')}</tbody></table>`);
+  return page('Inbox', `<h1>Inbox (${messages.length})</h1><table><thead><tr><th>Subject</th><th class="wide">To</th><th class="wide">Received</th></tr></thead><tbody>${rows.join('')}</tbody></table>`);
 }
 
 function messagePage(m) {

@@ -53,4 +53,4 @@ export function htmlButton(shop: ShopBrand, href: string, label: string): string
 export const paragraphs = (lines: string[]): string => lines.map((l) => `<p style="margin:0 0 14px">${esc(l)}</p>`).join('');
 
 /** Plain text of the same message: paragraphs, then the shop's name and contact lines. */
-export const textFrame = (shop: ShopBrand, lines: string[]): string => [...lines, '', '--', shop.name, ...contactLines(shop)].join('\n\n').replace(/\n\n--\n\n/, '\n\n--\n') + '\n';
+export const textFrame = (shop: ShopBrand, lines: string[]): string => `${lines.join('\n\n')}\n\n-- \n${[shop.name, ...contactLines(shop)].join('\n')}\n`;

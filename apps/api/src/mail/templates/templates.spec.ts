@@ -14,6 +14,11 @@ describe('mail templates', () => {
     expect(pale.html).toContain('background:#F7E27A;color:#000000');
   });
 
+  it('ends the plain text with the usual "-- " signature line and the shop contact, one per line', () => {
+    const mail = reportReadyMail({ ...base, shop: shop('#1F5F5B') });
+    expect(mail.text.endsWith('\n\n-- \nSpoke & "Sons"\n1 Canal Row\n+44 1632 960000\ndesk@shop.example.test\n')).toBe(true);
+  });
+
   it('says a re-issued report replaces the earlier one, in both bodies', () => {
     const mail = reportReadyMail({ ...base, shop: shop('#1F5F5B'), version: 2 });
     expect(mail.text).toContain('version 2 of the report');
