@@ -17,7 +17,11 @@ const built = resolve(__dirname, '../../../../dist/apps/api/apps/api/src/main.js
  * relay has not accepted a byte). After a restart on the same database the message goes out
  * exactly once. Runs against the built API (npm run build:api), as a real crash needs a process.
  */
-describe.runIf(existsSync(built))('mail: crash between queueing and sending', () => {
+describe('mail: crash between queueing and sending', () => {
+  beforeAll(() => {
+    // npm test builds before the API e2e run; a missing build must fail here, never skip.
+    if (!existsSync(built)) throw new Error(`No built API at ${built}: run npm run build:api first`);
+  });
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-mail-crash-'));
   let server: ChildProcess | null = null;
   let hole: { close: () => Promise<void> } | null = null;
