@@ -21,9 +21,14 @@ run('npm', ['run', 'build']);
 
 const children = [];
 const catcher = resolve(root, 'apps/api/scripts/mail-catcher.mjs');
-const mailToCatcher = process.env.MAIL_CATCHER !== 'false' && ['127.0.0.1', 'localhost', undefined].includes(process.env.SMTP_HOST);
-if (mailToCatcher && existsSync(catcher)) {
+// The local catcher starts only when mail is meant for it: SMTP_URL unset or the default local port.
+const smtpUrl = process.env.SMTP_URL ?? 'smtp://127.0.0.1:1025';
+const local = /^smtp:\/\/(127\.0\.0\.1|localhost):1025\/?$/.test(smtpUrl);
+if (process.env.MAIL_CATCHER !== 'false' && local && existsSync(catcher)) {
+  // The catcher prints its own addresses: "[mail] Catching SMTP on …; inbox at http://127.0.0.1:1080".
   children.push(spawn(process.execPath, [catcher], { cwd: root, stdio: 'inherit' }));
+} else {
+  console.log(`[start] Mail goes to ${smtpUrl.replace(/\/\/[^@/]*@/, '//***@')} (no local catcher)`);
 }
 
 // Fewer glibc malloc arenas so memory freed after a burst of photo work goes back to the

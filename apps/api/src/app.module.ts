@@ -21,13 +21,14 @@ import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { ReportsModule } from './reports';
+import { MailModule } from './mail';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule, ReportsModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule, ReportsModule, MailModule];
 
 @Module({})
 export class AppModule {

@@ -21,3 +21,4 @@ export * from './consent';
 export * from './owner';
 export * from './annotations';
 export * from './reports';
+export * from './mail';

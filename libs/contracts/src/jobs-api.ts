@@ -43,6 +43,8 @@ export const JobDetailSchema = JobDtoSchema.extend({
   finalCheck: FinalCheckDtoSchema.nullable(),
   /** Shop setting: the final check must be by someone other than the job's mechanic. */
   finalCheckSecondPerson: z.boolean(),
+  /** The bike was handed over with no report sent, confirmed by desk. */
+  collectedWithoutReport: z.boolean(),
 });
 export type JobDetail = z.infer<typeof JobDetailSchema>;
 

@@ -82,6 +82,8 @@ export type JobListQuery = z.infer<typeof JobListQuerySchema>;
 export const TransitionRequestSchema = z.object({
   to: JobStatusSchema,
   note: optionalText(500),
+  /** Desk confirms handing the bike over although no report was sent (else REPORT_NOT_SENT). */
+  confirmNoReport: z.boolean().optional(),
 });
 export type TransitionRequest = z.infer<typeof TransitionRequestSchema>;
 

@@ -36,10 +36,19 @@ const EnvSchema = z.object({
   PUBLIC_URL: z.string().url().optional(),
   /** The origin the web app is served from; the only one allowed cross-origin (tus CORS). Default: PUBLIC_URL's origin, else http://localhost:PORT. */
   APP_ORIGIN: z.string().url().optional(),
-  SMTP_HOST: z.string().default('127.0.0.1'),
-  SMTP_PORT: z.coerce.number().int().default(1025),
+  /** smtp://host:port (STARTTLS when offered), smtps:// for TLS from the start, user:pass@ for auth. */
+  SMTP_URL: z.string().regex(/^smtps?:\/\//, 'must start with smtp:// or smtps://').default('smtp://127.0.0.1:1025'),
   MAIL_FROM: z.string().default('BenchProof <reports@benchproof.localhost>'),
   MAIL_CATCHER: bool.default(true),
+  /** Reports larger than this go as a link instead of an attachment (many providers refuse 10-25 MB). */
+  MAIL_ATTACHMENT_BUDGET: z.coerce.number().int().positive().default(8 * 1024 * 1024),
+  /** First retry after this many ms; each later one waits twice as long (capped at an hour). */
+  MAIL_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
+  MAIL_MAX_ATTEMPTS: z.coerce.number().int().positive().default(8),
+  /** A message 'sending' for longer than this is taken as lost with its process and tried again. */
+  MAIL_SEND_LEASE_MS: z.coerce.number().int().positive().default(10 * 60_000),
+  /** How often the outbox looks for messages whose next try has come. */
+  MAIL_SWEEP_MS: z.coerce.number().int().positive().default(5_000),
   MAX_PHOTO_BYTES: z.coerce.number().int().positive().default(40 * 1024 * 1024),
   MAX_VIDEO_BYTES: z.coerce.number().int().positive().default(4 * 1024 * 1024 * 1024),
   MAX_IMAGE_PIXELS: z.coerce.number().int().positive().default(100_000_000),

@@ -20,6 +20,11 @@ export interface JobRef {
 /** A staff user as the session guard hands it over, or an actor from the policy guard / owner-link guard. */
 export type JobCaller = AuthUser | Actor;
 
+/** Work done for one shop without a person behind it (renders, e-mails, tasks): any job of that shop. */
+export interface ShopScope {
+  shopId: number;
+}
+
 /** The record a change touches, named in JOB_CLOSED details and in the override's audit entry. */
 export type EvidenceKind = 'job' | 'media' | 'inspection' | 'finding' | 'recommendation' | 'decision' | 'work_log';
 
@@ -43,9 +48,9 @@ export class JobAccess {
   ) {}
 
   /** The job if the caller may see it, else NOT_FOUND. */
-  read(caller: JobCaller, jobId: number): JobRef {
-    const actor = asActor(caller);
-    const job = actor.kind === 'owner' && actor.jobId !== jobId ? undefined : this.repo.find(actor.shopId, jobId);
+  read(caller: JobCaller | ShopScope, jobId: number): JobRef {
+    const owner = 'kind' in caller && caller.kind === 'owner' ? caller : null;
+    const job = owner && owner.jobId !== jobId ? undefined : this.repo.find(caller.shopId, jobId);
     if (!job) throw notFound('Job');
     return toJobRef(job);
   }

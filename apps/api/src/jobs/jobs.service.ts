@@ -26,6 +26,7 @@ import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import { JobAccess, type JobRef, toJobRef } from './job-access.service';
 import { type JobRow, JobsRepository } from './jobs.repository';
+import { ReportSentChecks } from './report-sent';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
 
 
@@ -33,6 +34,9 @@ type Actor = Pick<AuthUser, 'shopId'>;
 
 @Injectable()
 export class JobsService {
+  /** The hand-over rule; the feature that sends reports adds its check here. */
+  readonly reportSent = new ReportSentChecks();
+
   constructor(
     private readonly repo: JobsRepository,
     private readonly customers: CustomersService,
@@ -145,7 +149,7 @@ export class JobsService {
 
   /** Moves the job along JOB_TRANSITIONS (libs/domain); anything else is ILLEGAL_TRANSITION. */
   transition(actor: AuthUser, id: number, input: TransitionRequest): JobDetail {
-    this.move(actor, id, input.to, input.note ?? '');
+    this.move(actor, id, input.to, input.note ?? '', input.confirmNoReport);
     return this.get(actor, id);
   }
 
@@ -160,15 +164,17 @@ export class JobsService {
     this.move({ shopId: scope.shopId, id: null }, id, to, note);
   }
 
-  private move(actor: { shopId: number; id: number | null }, id: number, to: JobRow['status'], note: string): void {
+  private move(actor: { shopId: number; id: number | null }, id: number, to: JobRow['status'], note: string, confirmNoReport?: boolean): void {
     this.repo.transaction((tx) => {
       const job = this.load(actor, id);
       if (!canTransition(job.status, to)) throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to, allowed: allowedNextStatuses(job.status) });
       if (to === 'ready') this.requirePassedCheck(actor, job);
+      // Collected is terminal, so only the hand-over ever sets collectedWithoutReport.
+      const withoutReport = to === 'collected' && !this.reportSent.require(actor.shopId, id, confirmNoReport);
       const now = this.clock.now();
-      this.repo.update(actor.shopId, id, { status: to, [STATUS_TIME_FIELD[to]]: now, updatedAt: now });
-      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: to, userId: actor.id, note, at: now });
-      const details = actor.id === null ? { from: job.status, to, by: 'owner_link' } : { from: job.status, to };
+      this.repo.update(actor.shopId, id, { status: to, [STATUS_TIME_FIELD[to]]: now, updatedAt: now, collectedWithoutReport: withoutReport });
+      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: to, userId: actor.id, note: note || (withoutReport ? 'Handed over without a report' : ''), at: now });
+      const details = { from: job.status, to, ...(actor.id === null ? { by: 'owner_link' } : {}), ...(withoutReport ? { withoutReport } : {}) };
       this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details });
       publish(this.emitter, new JobMovedEvent(tx, actor.shopId, id, job.status, to, actor.id));
     });

@@ -93,5 +93,6 @@ export function toDetail(
     statusTimes: times,
     finalCheck: extra.finalCheck ? toFinalCheckDto(extra.finalCheck, ctx.staff) : null,
     finalCheckSecondPerson: extra.finalCheckSecondPerson,
+    collectedWithoutReport: job.collectedWithoutReport,
   };
 }

@@ -70,7 +70,8 @@ export class SeedRecords {
         const checker = a.byEmail.get(job.checker ?? '') ?? a.manager;
         this.jobs.recordFinalCheck(checker, id, { items: ALL_PASS, passed: true, testRideNotes: 'Short loop round the yard', note: null });
       }
-      this.jobs.transition(to === 'collected' ? a.desk : mechanic, id, { to, note: null });
+      // Demo history predates reports, so its hand-overs are confirmed without one.
+      this.jobs.transition(to === 'collected' ? a.desk : mechanic, id, { to, note: null, confirmNoReport: to === 'collected' });
       if (to === 'on_stand') this.inspect(job, id, mechanic, a);
       if (to === 'in_work') this.logWork(job, id, mechanic);
     }

@@ -45,7 +45,7 @@ describe('jobs: book-in and the status machine', () => {
       const job = await bookIn(manager, { mechanicId: mech.user.id });
       await driveTo(t, job.id, tr.from);
       if (tr.to === 'ready') await (await t.signIn(DEMO.mechanic2)).agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
-      const res = await manager.agent.post(`/api/jobs/${job.id}/transitions`).send({ to: tr.to });
+      const res = await manager.agent.post(`/api/jobs/${job.id}/transitions`).send({ to: tr.to, confirmNoReport: tr.to === 'collected' });
       expect({ move: `${tr.from}->${tr.to}`, status: res.status }).toEqual({ move: `${tr.from}->${tr.to}`, status: 200 });
       expect(res.body.status).toBe(tr.to);
     }
@@ -101,6 +101,6 @@ async function driveTo(t: TestApp, jobId: number, target: string): Promise<void>
     if (to === 'ready') {
             await checker.agent.post(`/api/jobs/${jobId}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
     }
-    await manager.agent.post(`/api/jobs/${jobId}/transitions`).send({ to }).expect(200);
+    await manager.agent.post(`/api/jobs/${jobId}/transitions`).send({ to, confirmNoReport: to === 'collected' }).expect(200);
   }
 }

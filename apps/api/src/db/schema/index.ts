@@ -24,3 +24,4 @@ export * from './consents.table';
 export * from './annotation-versions.table';
 export * from './measurement-evidence.table';
 export * from './reports.table';
+export * from './outbox-messages.table';

@@ -31,6 +31,8 @@ export const jobs = sqliteTable(
     readyAt: timestamp('ready_at'),
     collectedAt: timestamp('collected_at'),
     cancelledAt: timestamp('cancelled_at'),
+    /** Desk confirmed handing the bike over with no report sent. */
+    collectedWithoutReport: integer('collected_without_report', { mode: 'boolean' }).notNull().default(false),
     createdAt: timestamp('created_at').notNull(),
     updatedAt: timestamp('updated_at').notNull(),
   },

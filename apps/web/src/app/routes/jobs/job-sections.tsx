@@ -8,6 +8,7 @@ import { FindingMediaPicker, JobMediaSection } from '../../../features/media';
 import { PairsPanel } from '../../../features/pairs';
 import { OwnerLinkPanel } from '../../../features/owner';
 import { ReportSection } from '../../../features/reports';
+import { MessagesPanel } from '../../../features/mail';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
 
@@ -26,6 +27,7 @@ export const JOB_SECTIONS = [
   { value: 'pairs', label: 'Pairs' },
   { value: 'report', label: 'Report' },
   { value: 'owner', label: 'Owner link' },
+  { value: 'messages', label: 'E-mails' },
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
@@ -77,5 +79,8 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
       return <ReportSection jobId={job.id} canIssue={roleCan(me.role, 'reports.issue')} />;
     case 'owner':
       return <OwnerLinkPanel jobId={job.id} canManage={roleCan(me.role, 'owner_links.manage')} ownerName={job.customer.name} />;
+    case 'messages':
+      // The mail feature (features/mail) owns this section: delivery status and resend.
+      return <MessagesPanel jobId={job.id} canResend={roleCan(me.role, 'reports.issue')} />;
   }
 }

@@ -6,6 +6,7 @@ import { QueryState } from '../../../components/query-state';
 import { useCan, useSession } from '../../../features/auth';
 import { JobHeader, jobKeys, useJob } from '../../../features/jobs';
 import { useOwnerEvents } from '../../../features/owner';
+import { FailedMessagesNotice } from '../../../features/mail';
 import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';
 import { JOB_SECTIONS, JobSectionBody, type JobSection } from './job-sections';
@@ -30,6 +31,7 @@ export function JobRoute() {
   return (
     <>
       <JobHeader job={job.data} mechanics={mechanics} canAssign={can('jobs.edit')} />
+      {section !== 'messages' && <FailedMessagesNotice jobId={jobId} onOpen={() => setSearch({ section: 'messages' }, { replace: true })} />}
       <Tabs value={section} onChange={(v) => v && setSearch({ section: v }, { replace: true })} keepMounted={false}>
         <ScrollArea type="never" mb="md">
           <Tabs.List style={{ flexWrap: 'nowrap' }}>

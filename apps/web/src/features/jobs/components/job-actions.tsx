@@ -26,14 +26,32 @@ function ConfirmMove({ move, onClose, onConfirm, pending }: { move: Move | null;
   );
 }
 
+/** Handing over with no report sent: desk confirms, and the job records that the bike left without one. */
+function ConfirmNoReport({ opened, onClose, onConfirm, pending }: { opened: boolean; onClose: () => void; onConfirm: () => void; pending: boolean }) {
+  return (
+    <Modal opened={opened} onClose={onClose} title="No report sent yet">
+      <Stack>
+        <Text>No bench report has been e-mailed to the owner for this job. If the bike leaves now, the job records that it was handed over without one.</Text>
+        <Button size="lg" color="orange" loading={pending} onClick={onConfirm}>Hand over without a report</Button>
+        <Button size="lg" variant="default" onClick={onClose}>Not yet — send the report first</Button>
+      </Stack>
+    </Modal>
+  );
+}
+
 /** The next sensible move as one big button, the other allowed moves in a menu. */
 export function JobActions({ job }: { job: JobDetail }) {
   const transition = useTransitionJob(job.id);
   const [confirm, setConfirm] = useState<Move | null>(null);
   const primary = job.nextAction ?? nextAction(job.status);
   const others: Move[] = (job.allowedTransitions.length ? job.allowedTransitions : allowedTransitions(job.status)).filter((t) => t.to !== primary?.to);
-  const move = (to: JobStatus, note = '') => transition.mutate({ to, note }, { onSuccess: () => setConfirm(null) });
-  const error = transition.error instanceof ApiError ? transition.error.message : transition.error ? 'The move did not go through. Try again.' : null;
+  const [pendingNote, setPendingNote] = useState('');
+  const move = (to: JobStatus, note = '', confirmNoReport = false) => {
+    setPendingNote(note);
+    transition.mutate({ to, note, confirmNoReport }, { onSuccess: () => setConfirm(null) });
+  };
+  const noReport = transition.error instanceof ApiError && transition.error.code === 'REPORT_NOT_SENT';
+  const error = noReport ? null : transition.error instanceof ApiError ? transition.error.message : transition.error ? 'The move did not go through. Try again.' : null;
   return (
     <Stack gap="xs">
       <Group gap="xs" wrap="wrap">
@@ -62,6 +80,7 @@ export function JobActions({ job }: { job: JobDetail }) {
           {error}
         </Alert>
       )}
+      <ConfirmNoReport opened={noReport} onClose={() => transition.reset()} onConfirm={() => move('collected', pendingNote, true)} pending={transition.isPending} />
       <ConfirmMove key={confirm?.to ?? 'none'} move={confirm} onClose={() => setConfirm(null)} onConfirm={(note) => confirm && move(confirm.to, note)} pending={transition.isPending} />
     </Stack>
   );

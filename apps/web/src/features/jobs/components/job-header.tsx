@@ -1,5 +1,5 @@
 import type { JobDetail } from '@benchproof/contracts';
-import { Anchor, Group, Paper, Select, SimpleGrid, Stack, Text, Title } from '@mantine/core';
+import { Anchor, Badge, Group, Paper, Select, SimpleGrid, Stack, Text, Title } from '@mantine/core';
 import { IconMail, IconMessage, IconPhone } from '@tabler/icons-react';
 import { Link } from 'react-router';
 import { useUpdateJob } from '../api/jobs';
@@ -48,6 +48,7 @@ export function JobHeader({ job, mechanics, canAssign }: { job: JobDetail; mecha
           <Group gap="xs">
             <Text fw={700} c="dimmed">Job {job.number}</Text>
             <JobStatusBadge status={job.status} size="lg" />
+            {job.collectedWithoutReport && <Badge color="orange" variant="outline" size="lg" radius="sm" style={{ textTransform: 'none' }}>Left without a report</Badge>}
           </Group>
           <Title order={2}>
             <Anchor component={Link} to={`/bikes/${job.bike.id}`} inherit c="inherit">{jobBikeLabel(job)}</Anchor>

@@ -1,0 +1,50 @@
+import { index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { id, timestamp } from './columns';
+import { jobs } from './jobs.table';
+import { shops } from './shops.table';
+
+/** Where an attachment's bytes are read at send time; the outbox never keeps a second copy. */
+export type OutboxAttachmentRef = {
+  filename: string;
+  contentType: string;
+  /** Size and SHA-256 when queued; a send that finds other bytes fails rather than mail the wrong file. */
+  size: number | null;
+  sha256: string | null;
+  source: { kind: 'storage'; key: string } | { kind: 'report'; reportId: number };
+};
+
+export type OutboxStatus = 'queued' | 'sending' | 'sent' | 'failed';
+
+/** One e-mail on its way: written in the same transaction as its cause, sent by the 'mail.send' task. */
+export const outboxMessages = sqliteTable(
+  'outbox_messages',
+  {
+    id: id(),
+    shopId: integer('shop_id').notNull().references(() => shops.id),
+    jobId: integer('job_id').references(() => jobs.id),
+    /** What the message is about, e.g. 'report_ready', 'estimate_decision'. */
+    kind: text('kind').notNull(),
+    /** The report it carries, when it carries one (send history per report). */
+    reportId: integer('report_id'),
+    toAddress: text('to_address').notNull(),
+    subject: text('subject').notNull(),
+    textBody: text('text_body').notNull(),
+    htmlBody: text('html_body').notNull(),
+    attachments: text('attachments', { mode: 'json' }).$type<OutboxAttachmentRef[]>().notNull(),
+    status: text('status').$type<OutboxStatus>().notNull(),
+    /** Attempts in the current round; desk's resend starts a new round. */
+    attempts: integer('attempts').notNull().default(0),
+    round: integer('round').notNull().default(0),
+    lastError: text('last_error'),
+    nextTryAt: timestamp('next_try_at'),
+    /** Set when an attempt starts; a 'sending' row older than the lease belongs to a process that died. */
+    sendingSince: timestamp('sending_since'),
+    sentAt: timestamp('sent_at'),
+    /** Fixed when queued and reused on every attempt. */
+    messageId: text('message_id').notNull(),
+    smtpResponse: text('smtp_response'),
+    createdBy: integer('created_by'),
+    createdAt: timestamp('created_at').notNull(),
+  },
+  (t) => [index('outbox_shop_job_idx').on(t.shopId, t.jobId), index('outbox_status_next_idx').on(t.status, t.nextTryAt)],
+);

@@ -1,0 +1,156 @@
+import { Inject, Injectable, type OnModuleInit } from '@nestjs/common';
+import type { OutboxMessageDto, SendReportRequest } from '@benchproof/contracts';
+import { randomBytes } from 'node:crypto';
+import { AuditService } from '../audit';
+import { BikesService } from '../bikes';
+import { APP_CONFIG, type AppConfig } from '../config';
+import type { AuthUser } from '../core/auth';
+import { DomainError, notFound } from '../core/http';
+import { CustomersService } from '../customers';
+import { CLOCK, type Clock } from '../infra/clock';
+import { TASK_RUNNER, type DbTx, type TaskRunner } from '../infra/tasks';
+import { JobAccess, JobsService } from '../jobs';
+import { ShopsService } from '../shops';
+import type { OutboxAttachmentRef } from '../db/schema';
+import { MailDelivery } from './mail-delivery';
+import { MAIL_SEND, mailTaskKey } from './mail-relay';
+import { type OutboxRow, MailRepository } from './mail.repository';
+import type { ReportFiles } from './report-files';
+import { estimateDecisionMail } from './templates/estimate-decision';
+import type { RenderedMail, ShopBrand } from './templates/layout';
+import { reportReadyMail } from './templates/report-ready';
+
+/** A message to queue. Attachments are references, opened at send time. */
+export interface QueuedMail {
+  shopId: number;
+  jobId: number | null;
+  /** e.g. 'report_ready', 'estimate_decision' */
+  kind: string;
+  reportId?: number | null;
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+  attachments: OutboxAttachmentRef[];
+  createdBy?: number | null;
+}
+
+type Actor = Pick<AuthUser, 'id' | 'shopId'>;
+
+/** The outbox: every e-mail is a row written with its cause, delivered by the 'mail.send' task. */
+@Injectable()
+export class MailService implements OnModuleInit {
+  constructor(
+    private readonly repo: MailRepository,
+    private readonly delivery: MailDelivery,
+    private readonly jobs: JobsService,
+    private readonly access: JobAccess,
+    private readonly customers: CustomersService,
+    private readonly bikes: BikesService,
+    private readonly shops: ShopsService,
+    private readonly audit: AuditService,
+    @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
+    @Inject(CLOCK) private readonly clock: Clock,
+    @Inject(APP_CONFIG) private readonly cfg: AppConfig,
+  ) {}
+
+  onModuleInit(): void {
+    this.jobs.reportSent.add((shopId, jobId) => this.repo.hasReportMessage(shopId, jobId));
+  }
+
+  /** The reports feature binds its issued PDFs here at start-up (see report-files.ts). */
+  useReportFiles(files: ReportFiles): void {
+    this.delivery.useReportFiles(files);
+  }
+
+  /** Writes the outbox row and its task; pass the cause's transaction so both commit or neither. */
+  queue(mail: QueuedMail, tx?: DbTx): OutboxMessageDto {
+    const write = (t: DbTx) => {
+      const row = this.repo.insert({
+        shopId: mail.shopId, jobId: mail.jobId, kind: mail.kind, reportId: mail.reportId ?? null, toAddress: mail.to, subject: mail.subject,
+        textBody: mail.text, htmlBody: mail.html, attachments: mail.attachments, status: 'queued', messageId: this.newMessageId(mail.shopId),
+        createdBy: mail.createdBy ?? null, createdAt: this.clock.now(),
+      }, t);
+      this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(row), shopId: row.shopId }, t);
+      return row;
+    };
+    return this.toDto(tx ? write(tx) : this.repo.transaction(write));
+  }
+
+  /** Every message of a job, newest first, with where it is on its way. */
+  listForJob(actor: Actor, jobId: number): OutboxMessageDto[] {
+    this.access.read(actor, jobId);
+    return this.repo.listByJob(actor.shopId, jobId).map((r) => this.toDto(r));
+  }
+
+  /** Desk sends a finally failed message again: a new round of attempts, same Message-ID. */
+  resend(actor: Actor, jobId: number, id: number): OutboxMessageDto {
+    this.access.read(actor, jobId);
+    const row = this.repo.find(actor.shopId, id);
+    if (!row || row.jobId !== jobId) throw notFound('Message');
+    const again = this.repo.transaction((tx) => {
+      const updated = this.repo.requeue(actor.shopId, id, tx);
+      if (!updated) throw new DomainError('MESSAGE_NOT_RESENDABLE', undefined, { status: row.status });
+      this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(updated), shopId: updated.shopId }, tx);
+      this.audit.record(actor, { action: 'mail.resent', entityType: 'outbox_message', entityId: id, details: { jobId } });
+      return updated;
+    });
+    return this.toDto(again);
+  }
+
+  /** Queues "your bench report is ready" to the owner: the PDF attached within the budget, else a link. */
+  async sendReport(actor: Actor, jobId: number, reportId: number, input: SendReportRequest): Promise<OutboxMessageDto> {
+    const job = this.access.read(actor, jobId);
+    const pdf = await this.delivery.issuedPdf(actor.shopId, reportId);
+    if (!pdf || pdf.jobId !== jobId) throw notFound('Report');
+    const to = this.recipient(actor, job.customerId, input.to);
+    const attached = pdf.size <= this.cfg.MAIL_ATTACHMENT_BUDGET;
+    const rendered = reportReadyMail({
+      ...this.context(actor, job), version: pdf.version, attached, sizeBytes: pdf.size, budgetBytes: this.cfg.MAIL_ATTACHMENT_BUDGET, link: pdf.link,
+    });
+    const attachments: OutboxAttachmentRef[] = attached
+      ? [{ filename: pdf.filename, contentType: 'application/pdf', size: pdf.size, sha256: pdf.sha256, source: { kind: 'report', reportId } }]
+      : [];
+    return this.repo.transaction((tx) => {
+      const dto = this.queue({ shopId: actor.shopId, jobId, kind: 'report_ready', reportId, to, ...rendered, attachments, createdBy: actor.id }, tx);
+      this.audit.record(actor, { action: 'report.sent', entityType: 'report', entityId: reportId, details: { jobId, to, attached, messageId: dto.id } });
+      return dto;
+    });
+  }
+
+  /** Queues "your estimate needs your decision" with the owner link; the owner feature calls this, in its transaction if it has one. */
+  queueEstimateDecision(actor: Actor, jobId: number, ownerLink: string, tx?: DbTx): OutboxMessageDto {
+    const job = this.access.read(actor, jobId);
+    const to = this.recipient(actor, job.customerId, undefined);
+    const rendered: RenderedMail = estimateDecisionMail({ ...this.context(actor, job), link: ownerLink });
+    return this.queue({ shopId: actor.shopId, jobId, kind: 'estimate_decision', to, ...rendered, attachments: [], createdBy: actor.id }, tx);
+  }
+
+  private recipient(actor: Actor, customerId: number, override: string | undefined): string {
+    const to = override ?? this.customers.get(actor, customerId).email;
+    if (!to) throw new DomainError('NO_OWNER_EMAIL', undefined, { field: 'to' });
+    return to;
+  }
+
+  private context(actor: Actor, job: { number: string; customerId: number; bikeId: number }): { shop: ShopBrand; ownerName: string; jobNumber: string; bikeLabel: string } {
+    const shop = this.shops.settings(actor.shopId);
+    const bike = this.bikes.get(actor, job.bikeId);
+    const ownerName = this.customers.get(actor, job.customerId).name;
+    return { shop, ownerName, jobNumber: job.number, bikeLabel: [bike.maker, bike.model].filter(Boolean).join(' ') || 'bike' };
+  }
+
+  /** Fixed when queued: a retry after a crash mid-send carries the same id, so receivers can drop the copy. */
+  private newMessageId(shopId: number): string {
+    const domain = /@([^>\s]+)>?\s*$/.exec(this.cfg.MAIL_FROM)?.[1] ?? 'benchproof.localhost';
+    return `<bp-${shopId}-${randomBytes(12).toString('hex')}@${domain}>`;
+  }
+
+  private toDto(r: OutboxRow): OutboxMessageDto {
+    return {
+      id: r.id, jobId: r.jobId, kind: r.kind, reportId: r.reportId, to: r.toAddress, subject: r.subject, status: r.status,
+      attempts: r.attempts, maxAttempts: this.cfg.MAIL_MAX_ATTEMPTS, lastError: r.lastError, nextTryAt: r.nextTryAt?.toISOString() ?? null,
+      sentAt: r.sentAt?.toISOString() ?? null, createdAt: r.createdAt.toISOString(), messageId: r.messageId,
+      attachments: r.attachments.map((a) => ({ filename: a.filename, size: a.size })), canResend: r.status === 'failed',
+    };
+  }
+}

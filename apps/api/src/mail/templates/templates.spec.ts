@@ -1,0 +1,41 @@
+import { estimateDecisionMail } from './estimate-decision';
+import type { ShopBrand } from './layout';
+import { reportReadyMail } from './report-ready';
+
+const shop = (brandPrimary: string): ShopBrand => ({ name: 'Spoke & "Sons"', brandPrimary, email: 'desk@shop.example.test', phone: '+44 1632 960000', address: '1 Canal Row' });
+const base = { ownerName: 'Ada', jobNumber: 'J-2026-0042', bikeLabel: 'Quillon Stratus', version: 1, attached: true, sizeBytes: 200_000, budgetBytes: 8 * 1024 * 1024, link: null };
+
+describe('mail templates', () => {
+  it('escapes the shop name and picks the header text colour by WCAG contrast (white on dark teal, black on pale yellow)', () => {
+    const dark = reportReadyMail({ ...base, shop: shop('#1F5F5B') });
+    expect(dark.html).toContain('Spoke &amp; &quot;Sons&quot;');
+    expect(dark.html).toContain('background:#1F5F5B;color:#FFFFFF');
+    const pale = reportReadyMail({ ...base, shop: shop('#F7E27A') });
+    expect(pale.html).toContain('background:#F7E27A;color:#000000');
+  });
+
+  it('ends the plain text with the usual "-- " signature line and the shop contact, one per line', () => {
+    const mail = reportReadyMail({ ...base, shop: shop('#1F5F5B') });
+    expect(mail.text.endsWith('\n\n-- \nSpoke & "Sons"\n1 Canal Row\n+44 1632 960000\ndesk@shop.example.test\n')).toBe(true);
+  });
+
+  it('says a re-issued report replaces the earlier one, in both bodies', () => {
+    const mail = reportReadyMail({ ...base, shop: shop('#1F5F5B'), version: 2 });
+    expect(mail.text).toContain('version 2 of the report');
+    expect(mail.html).toContain('version 2 of the report');
+  });
+
+  it('over the budget without an owner page, tells the owner to ask for a copy and shows no link', () => {
+    const mail = reportReadyMail({ ...base, shop: shop('#1F5F5B'), attached: false, sizeBytes: 12 * 1024 * 1024, link: null });
+    expect(mail.text).toContain('The report is 12.0 MB, larger than the 8.0 MB we attach');
+    expect(mail.text).toContain('Ask us and we will hand you a copy.');
+    expect(mail.html).not.toContain('href=');
+  });
+
+  it('puts the owner link on the estimate e-mail and refuses anything but http(s)', () => {
+    const mail = estimateDecisionMail({ shop: shop('#1F5F5B'), ownerName: 'Ada', jobNumber: 'J-1', bikeLabel: 'Stratus', link: 'https://bench.example.test/o/k3y' });
+    expect(mail.text).toContain('Your estimate: https://bench.example.test/o/k3y');
+    expect(mail.html).toContain('href="https://bench.example.test/o/k3y"');
+    expect(() => estimateDecisionMail({ shop: shop('#1F5F5B'), ownerName: 'Ada', jobNumber: 'J-1', bikeLabel: 'Stratus', link: 'javascript:alert(1)' })).toThrow(/http/);
+  });
+});
