@@ -1,4 +1,4 @@
-import { cos, matrix, multiply, pi, sqrt, transpose, type Matrix } from 'mathjs';
+import { matrix, multiply, transpose, type Matrix } from 'mathjs';
 import { DomainInputError } from './errors';
 import { dctCoefficient, hammingDistance, hashBit, perceptualHash, PHASH_SAMPLE } from './perceptual-hash';
 
@@ -61,7 +61,7 @@ describe('dctCoefficient: independent check with mathjs matrices (F = C·X·Cᵀ
   // C[k][n] = α(k) cos(π (2n+1) k / 2N): the textbook orthonormal DCT-II matrix.
   const C: Matrix = matrix(
     Array.from({ length: N }, (_, k) =>
-      Array.from({ length: N }, (_, n) => sqrt((k === 0 ? 1 : 2) / N) * cos((pi * (2 * n + 1) * k) / (2 * N))),
+      Array.from({ length: N }, (_, n) => Math.sqrt((k === 0 ? 1 : 2) / N) * Math.cos((Math.PI * (2 * n + 1) * k) / (2 * N))),
     ),
   );
   const pseudoRandom = image((x, y) => (x * 37 + y * 91 + ((x * y) % 13) * 17) % 256);
