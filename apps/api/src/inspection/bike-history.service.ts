@@ -7,7 +7,6 @@ import { CLOCK, type Clock } from '../infra/clock';
 import { JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import { InspectionRepository, type MeasurementRow } from './inspection.repository';
-import type { StoredResult } from './measurement-assess';
 
 const DAY_MS = 86_400_000;
 const isoDay = (day: number): string => new Date(day * DAY_MS).toISOString().slice(0, 10);
