@@ -1,6 +1,7 @@
 // A 40-photo bench report, rendered by the built API, against a bare react-pdf document holding
 // the same 40 JPEGs measured in the same run. Prints time, size and ratios; asserts nothing.
 // Needs `npm run build` first; run alone with `node apps/api/bench/report.bench.mjs`.
+import { atMost, emitRow } from './table.mjs';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
@@ -116,6 +117,8 @@ async function main() {
     console.log(`${PHOTOS}-photo report: ${report.secs.toFixed(2)} s (request to ready, background render), ${mb(report.bytes)}, ${report.pages} pages`);
     console.log(`bare react-pdf, same ${PHOTOS} JPEGs: ${bare.secs.toFixed(2)} s, ${mb(bare.bytes)}`);
     console.log(`embedded images (print derivatives): ${mb(imageBytes)}`);
+    emitRow(atMost(`${PHOTOS}-photo report: request to ready vs bare react-pdf with the same JPEGs`, bare.secs, report.secs, 's', 3, `, ${mb(report.bytes)}, ${report.pages} pages`));
+    emitRow(atMost(`${PHOTOS}-photo report: PDF bytes vs the sum of its embedded JPEGs`, imageBytes / 2 ** 20, report.bytes / 2 ** 20, 'MB', 1.1));
     console.log(`ratios — time report/bare: ${(report.secs / bare.secs).toFixed(2)} · PDF bytes / image bytes: report ${(report.bytes / imageBytes).toFixed(3)}, bare ${(bare.bytes / imageBytes).toFixed(3)}`);
   } catch (err) {
     console.error('API alive after failure:', child.exitCode === null, 'exit', child.exitCode, child.signalCode);
