@@ -39,6 +39,8 @@ const ownerOnly: Rule = { staff: [], owner: true };
 
 export const ACCESS_POLICY = {
   'session.view': staff(...ALL_STAFF),
+  /** Every signed-in staff member may change their own password. */
+  'account.change_password': staff(...ALL_STAFF),
   'users.view': staff(...ALL_STAFF),
   'users.manage': staff('manager'),
   'shop.view': staff(...ALL_STAFF),

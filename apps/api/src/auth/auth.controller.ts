@@ -33,6 +33,7 @@ export class AuthController {
 
   /** Changes the caller's password, ends all their sessions and starts a new one on this device. */
   @Post('password')
+  @Can('account.change_password')
   @HttpCode(200)
   @ApiZodBody(ChangePasswordRequestSchema)
   async changePassword(@CurrentUser() user: AuthUser, @Body(zod(ChangePasswordRequestSchema)) body: ChangePasswordRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {

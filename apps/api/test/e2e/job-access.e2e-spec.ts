@@ -11,7 +11,8 @@ async function collectedJob(t: TestApp, desk: SignedIn, manager: SignedIn): Prom
   const checker = await t.signIn(DEMO.mechanic2);
   for (const to of ['on_stand', 'in_work', 'final_check', 'ready', 'collected']) {
     if (to === 'ready') await checker.agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
-    await manager.agent.post(`/api/jobs/${job.id}/transitions`).send({ to }).expect(200);
+    // No report in this test: desk confirms the bike leaves without one.
+    await manager.agent.post(`/api/jobs/${job.id}/transitions`).send({ to, ...(to === 'collected' ? { confirmNoReport: true } : {}) }).expect(200);
   }
   return job.id;
 }

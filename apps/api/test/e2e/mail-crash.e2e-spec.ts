@@ -39,6 +39,8 @@ describe('mail: crash between queueing and sending', () => {
         ...process.env, PORT: String(httpPort), DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), WEB_DIST: join(dir, 'no-web'),
         SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, TEST_REPORT_FILE: join(dir, 'report.json'), MAIL_SWEEP_MS: '100', MAIL_SEND_LEASE_MS: '1500',
         MAIL_RETRY_BASE_MS: '200', LOGIN_THROTTLE_LIMIT: '1000',
+        // The killed process held the task's lease: a short one lets the restarted runner take it back soon.
+        TASK_LEASE_MS: '1500',
       },
       stdio: ['ignore', 'pipe', 'inherit'],
     });

@@ -1,8 +1,8 @@
 import type { MediaAssetDto, PairSuggestionsDto, ShotPairDto } from '@benchproof/contracts';
 import { DEMO_SHOTS } from '@benchproof/seeds';
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { DB, type Db } from '../../src/core/db';
-import { mediaAssets } from '../../src/db/schema';
+import { mediaAssets, tasks } from '../../src/db/schema';
 import { TASK_RUNNER, type TaskRunner } from '../../src/infra/tasks';
 import { createApp } from '../../src/app.factory';
 import { derivativesSettled } from '../media/media-fixtures';
@@ -127,7 +127,9 @@ describe('before/after shot pairs', () => {
     const id = byLabel('tube_interior-after').id;
     const had = db.select({ phash: mediaAssets.phash }).from(mediaAssets).where(eq(mediaAssets.id, id)).get()!.phash;
     expect(had).toMatch(/^[0-9a-f]{16}$/);
+    // Before the feature there was no hash and no hash task for the asset.
     db.update(mediaAssets).set({ phash: null }).where(eq(mediaAssets.id, id)).run();
+    db.delete(tasks).where(and(eq(tasks.kind, 'media.phash'), eq(tasks.key, String(id)))).run();
     expect(((await mech.agent.get(`/api/jobs/${jobId}/pair-suggestions`).expect(200)).body as PairSuggestionsDto).pendingHashes).toBe(1);
     // A second server on the same database, as after a deploy: its boot finds the gap.
     const rebooted = await createApp(t.cfg, { logger: false });

@@ -22,7 +22,7 @@ async function operations(t: TestApp): Promise<Operation[]> {
 }
 
 /** Fills `{id}`-style path parameters with an id that exists in the demo shop (1), and a real variant name. */
-const concrete = (path: string) => path.replace('{variant}', MEDIA_VARIANTS[0]).replace(/\{[^}]+\}/g, '1');
+const concrete = (path: string) => path.replace('{variant}', MEDIA_VARIANTS[0]).replace('{size}', 'screen').replace(/\{[^}]+\}/g, '1');
 const call = (who: SignedIn, op: Operation) => who.agent[op.method](concrete(op.path)).send({});
 
 describe('route matrix from the OpenAPI document and ACCESS_POLICY', () => {

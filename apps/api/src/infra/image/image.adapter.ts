@@ -103,7 +103,7 @@ export class ImageAdapter {
    * Several sizes from ONE decode: the photo is decoded, turned upright, converted to
    * sRGB and scaled to the largest size once; each size is then resized from those
    * pixels in memory. Plain libjpeg at quality 82 with optimised Huffman tables:
-   * mozjpeg saved about 8 % of bytes at 3–4× the encode time (bench, photo row).
+   * mozjpeg made the 2400 px size 14 % smaller (784 vs 913 KB) at 3.8× the encode time (863 vs 230 ms, median of 5, textured 12 MP bench photo).
    */
   async renditions(input: string | Buffer, longEdges: readonly number[]): Promise<Rendition[]> {
     const largest = Math.max(...longEdges);
@@ -165,7 +165,7 @@ export class ImageAdapter {
     );
     return this.open(upright)
       .composite([...tiles, { input: Buffer.from(svg), left: 0, top: 0 }])
-      .jpeg({ quality: 88, mozjpeg: true })
+      .jpeg({ quality: 88, optimiseCoding: true })
       .toBuffer();
   }
 
