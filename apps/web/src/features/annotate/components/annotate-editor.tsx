@@ -1,18 +1,18 @@
 import { emptyDocument, type AnnotationDocument, type Shape } from '@benchproof/annotation';
-import { ActionIcon, Badge, Box, Button, Center, Group, Loader, Text } from '@mantine/core';
+import { Box, Center, Loader } from '@mantine/core';
 import { useElementSize } from '@mantine/hooks';
-import { IconArrowLeft, IconDownload } from '@tabler/icons-react';
 import type Konva from 'konva';
 import { useEffect, useRef, useState } from 'react';
-import { Link } from 'react-router';
 import { useAnnotation } from '../api/annotation';
 import type { Style, Tool } from '../model/edit';
 import { commit, redo, startHistory, undo, upsert } from '../model/history';
 import { AnnotateCanvas } from './annotate-canvas';
 import { AnnotateToolbar } from './annotate-toolbar';
+import { AskDialogs } from './ask-dialogs';
 import { ChainPanel } from './chain-panel';
-import { LabelDialog, ScaleDialog } from './shape-dialogs';
-import { useAutosave, type SaveState } from './use-autosave';
+import { EditorHeader } from './editor-header';
+import { exportStagePng } from './export-png';
+import { useAutosave } from './use-autosave';
 import { useEditorKeys } from './use-keys';
 import { useView } from './use-view';
 
@@ -23,14 +23,6 @@ export interface AnnotateEditorProps {
   backTo: string;
   title: string;
 }
-
-const SAVE_LABEL: Record<SaveState, [string, string]> = {
-  saved: ['Saved', 'green'],
-  dirty: ['Unsaved changes', 'yellow'],
-  saving: ['Saving…', 'blue'],
-  conflict: ['Changed elsewhere: reload', 'red'],
-  error: ['Not saved: retrying on next change', 'red'],
-};
 
 function useLoadedImage(url: string): HTMLImageElement | null {
   const [img, setImg] = useState<HTMLImageElement | null>(null);
@@ -78,40 +70,11 @@ function EditorBody({ mediaId, backTo, title, image, initial, version }: Annotat
     else put(s);
   };
 
-  /** The editor's own picture at the photo's pixel size (what the server burns in), as a PNG download. */
-  const exportPng = () => {
-    const stage = stageRef.current;
-    if (!stage) return;
-    const handles = stage.findOne('.handles');
-    handles?.hide();
-    const src = stage.toCanvas({ x: view.position.x, y: view.position.y, width: doc.image.width * view.scale, height: doc.image.height * view.scale, pixelRatio: 1 / view.scale });
-    handles?.show();
-    // Rounding in the pixel ratio can lose a row; draw into a canvas of exactly the photo's size.
-    const out = document.createElement('canvas');
-    out.width = doc.image.width;
-    out.height = doc.image.height;
-    out.getContext('2d')?.drawImage(src, 0, 0, out.width, out.height);
-    const url = out.toDataURL('image/png');
-    const a = document.createElement('a');
-    a.href = url;
-    a.download = `annotated-${mediaId}.png`;
-    a.click();
-  };
+  const exportPng = () => exportStagePng(stageRef.current, view, doc.image, mediaId);
 
-  const [label, colour] = SAVE_LABEL[save.state];
   return (
     <Box pos="fixed" inset={0} bg="dark.8" style={{ zIndex: 300, display: 'flex', flexDirection: 'column' }} data-testid="annotate-editor" data-shapes={history.present.length} data-zoom={view.zoom.toFixed(2)}>
-      <Group justify="space-between" p={6} c="white" wrap="nowrap">
-        <Group gap="xs" wrap="nowrap" style={{ minWidth: 0 }}>
-          <ActionIcon component={Link} to={backTo} size={48} variant="subtle" color="gray.0" aria-label="Back"><IconArrowLeft /></ActionIcon>
-          <Text fw={600} truncate>{title}</Text>
-        </Group>
-        <Group gap="xs" wrap="nowrap">
-          <Badge color={colour} size="lg" data-testid="save-state">{label}</Badge>
-          <Button size="md" h={48} onClick={() => void save.flush()} disabled={save.state === 'saved'}>Save</Button>
-          <ActionIcon size={48} variant="light" aria-label="Download the annotated image" onClick={exportPng}><IconDownload /></ActionIcon>
-        </Group>
-      </Group>
+      <EditorHeader backTo={backTo} title={title} save={save} onExport={exportPng} />
       <AnnotateToolbar
         tool={tool} onTool={(t) => { setTool(t); if (t !== 'select') setSelectedId(null); }} style={style}
         onStyle={(s) => { setStyle(s); if (selected) put({ ...selected, ...s }); }}
@@ -125,10 +88,7 @@ function EditorBody({ mediaId, backTo, title, image, initial, version }: Annotat
       {selected?.kind === 'ruler' && (
         <ChainPanel key={selected.id} mediaId={mediaId} doc={doc} ruler={selected} savedVersion={save.version} onPitches={(n) => put({ ...selected, pitches: n })} />
       )}
-      <ScaleDialog opened={asking?.kind === 'scale'} onCancel={() => setAsking(null)} onDone={(mm) => { if (asking?.kind === 'scale') put({ ...asking, knownMm: mm }); setAsking(null); }} />
-      {asking?.kind === 'label' && (
-        <LabelDialog opened initial="" onCancel={() => setAsking(null)} onDone={(text) => { put({ ...asking, text }); setAsking(null); }} />
-      )}
+      <AskDialogs asking={asking} onDone={put} onClose={() => setAsking(null)} />
     </Box>
   );
 }

@@ -1,33 +1,22 @@
 import type Konva from 'konva';
 import { useCallback, useRef, useState } from 'react';
+import { home, pinchView, twoFingers, zoomAround, type PinchStart, type View } from './view-math';
 
-export interface View {
-  zoom: number;
-  x: number;
-  y: number;
-}
-
-const MIN_ZOOM = 1;
-const MAX_ZOOM = 8;
+export type { View } from './view-math';
 
 /**
  * Zoom and pan of the stage: wheel zooms at the pointer, two fingers pinch and pan,
  * keys zoom at the centre. The fitted image is zoom 1; it never shrinks below that.
  */
 export function useView(fit: number, box: { width: number; height: number }, image: { width: number; height: number }) {
-  const [view, setView] = useState<View>({ zoom: 1, x: 0, y: 0 });
-  const pinch = useRef<{ dist: number; centre: { x: number; y: number }; view: View } | null>(null);
+  const [view, setView] = useState<View>(home);
+  const pinch = useRef<PinchStart | null>(null);
   const scale = fit * view.zoom;
   // Centre the fitted image when it is smaller than the box.
   const offset = { x: (box.width - image.width * fit) / 2, y: (box.height - image.height * fit) / 2 };
 
   const zoomAt = useCallback(
-    (factor: number, at: { x: number; y: number }) =>
-      setView((v) => {
-        const zoom = Math.min(MAX_ZOOM, Math.max(MIN_ZOOM, v.zoom * factor));
-        const k = zoom / v.zoom;
-        return zoom === 1 ? { zoom: 1, x: 0, y: 0 } : { zoom, x: at.x - offset.x - (at.x - offset.x - v.x) * k, y: at.y - offset.y - (at.y - offset.y - v.y) * k };
-      }),
+    (factor: number, at: { x: number; y: number }) => setView((v) => zoomAround(v, factor, at, { x: offset.x, y: offset.y })),
     [offset.x, offset.y],
   );
 
@@ -45,21 +34,9 @@ export function useView(fit: number, box: { width: number; height: number }, ima
       return false;
     }
     e.evt.preventDefault();
-    const rect = e.target.getStage()?.container().getBoundingClientRect();
-    const centre = { x: (t[0].clientX + t[1].clientX) / 2 - (rect?.left ?? 0), y: (t[0].clientY + t[1].clientY) / 2 - (rect?.top ?? 0) };
-    const dist = Math.hypot(t[0].clientX - t[1].clientX, t[0].clientY - t[1].clientY);
-    if (!pinch.current) {
-      pinch.current = { dist, centre, view };
-      return true;
-    }
-    const start = pinch.current;
-    const zoom = Math.min(MAX_ZOOM, Math.max(MIN_ZOOM, start.view.zoom * (dist / start.dist)));
-    const k = zoom / start.view.zoom;
-    setView({
-      zoom,
-      x: centre.x - offset.x - (start.centre.x - offset.x - start.view.x) * k,
-      y: centre.y - offset.y - (start.centre.y - offset.y - start.view.y) * k,
-    });
+    const { centre, dist } = twoFingers(t, e.target.getStage()?.container().getBoundingClientRect());
+    if (pinch.current) setView(pinchView(pinch.current, dist, centre, offset));
+    else pinch.current = { dist, centre, view };
     return true;
   };
 
@@ -74,6 +51,6 @@ export function useView(fit: number, box: { width: number; height: number }, ima
     panBy,
     zoomIn: () => zoomAt(1.25, centre),
     zoomOut: () => zoomAt(1 / 1.25, centre),
-    reset: () => setView({ zoom: 1, x: 0, y: 0 }),
+    reset: () => setView(home()),
   };
 }

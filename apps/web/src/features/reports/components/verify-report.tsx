@@ -1,16 +1,8 @@
-import { VerifyHashSchema, type VerifyResult } from '@benchproof/contracts';
+import type { VerifyResult } from '@benchproof/contracts';
 import { Alert, Button, FileButton, Group, Stack, Text, TextInput, Title } from '@mantine/core';
 import { IconCircleCheck, IconFileSearch, IconAlertTriangle } from '@tabler/icons-react';
-import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
-import { verifyReport } from '../api/reports';
-
-/** SHA-256 of a file, computed in this browser (Web Crypto); the file never leaves the device. */
-async function sha256Hex(file: File): Promise<string> {
-  const digest = await crypto.subtle.digest('SHA-256', await file.arrayBuffer());
-  return [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
-}
+import { useVerify } from './use-verify';
 
 function Answer({ result }: { result: VerifyResult }) {
   if (!result.issued) {
@@ -31,25 +23,7 @@ function Answer({ result }: { result: VerifyResult }) {
 
 /** The public check: drop in the PDF or type the fingerprint; answers only who issued it, for which job, and when. */
 export function VerifyReport({ initialCode }: { initialCode?: string }) {
-  const initial = VerifyHashSchema.safeParse(initialCode ?? '');
-  const [typed, setTyped] = useState(initialCode ?? '');
-  const [fieldError, setFieldError] = useState<string | null>(null);
-  const [hash, setHash] = useState<string | null>(initial.success ? initial.data : null);
-  const [hashing, setHashing] = useState(false);
-  const answer = useQuery({ queryKey: ['verify', hash], queryFn: () => verifyReport(hash ?? ''), enabled: hash !== null, retry: false, staleTime: Infinity });
-
-  const checkTyped = () => {
-    const parsed = VerifyHashSchema.safeParse(typed);
-    setFieldError(parsed.success ? null : (parsed.error.issues[0]?.message ?? 'Not a fingerprint'));
-    if (parsed.success) setHash(parsed.data);
-  };
-  const checkFile = (file: File) => {
-    setHashing(true);
-    void sha256Hex(file)
-      .then(setHash)
-      .finally(() => setHashing(false));
-  };
-  const busy = hashing || answer.isFetching;
+  const { typed, setTyped, fieldError, answer, checkTyped, checkFile, busy } = useVerify(initialCode);
 
   return (
     <Stack gap="lg" maw={640}>
