@@ -15,10 +15,10 @@ function renderForm() {
   );
 }
 
-/** The message Mantine shows under a box: the element its input names in aria-describedby. */
+/** The error Mantine shows under a box: the `…-error` element its input names in aria-describedby. */
 function messageUnder(label: string): string | null {
   const input = screen.getByLabelText(label, { exact: false, selector: 'input' });
-  const ids = (input.getAttribute('aria-describedby') ?? '').split(' ').filter(Boolean);
+  const ids = (input.getAttribute('aria-describedby') ?? '').split(' ').filter((id) => id.endsWith('-error'));
   return ids.map((id) => document.getElementById(id)?.textContent ?? '').find((t) => t.length > 0) ?? null;
 }
 
