@@ -26,6 +26,7 @@ const signedIn: RouteObject[] = [
   { path: 'showcase', loader: requireAction('showcase.manage'), lazy: page(() => import('./routes/showcase/showcase.route'), (m) => m.ShowcaseRoute) },
   { path: 'settings/users', loader: requireAction('users.manage'), lazy: page(() => import('./routes/settings/users.route'), (m) => m.UsersRoute) },
   { path: 'settings/shop', loader: requireAction('shop.edit'), lazy: page(() => import('./routes/settings/shop.route'), (m) => m.ShopSettingsRoute) },
+  { path: 'account/password', lazy: page(() => import('./routes/account/password.route'), (m) => m.PasswordRoute) },
   { path: '*', element: <NotFoundRoute /> },
 ];
 

@@ -11,10 +11,13 @@ export class ApiError extends Error {
     super(message);
   }
 
-  /** Field messages from a VALIDATION_FAILED body, keyed by field path, for Mantine forms. */
-  fieldErrors(): Record<string, string> {
+  /**
+   * Field messages from a VALIDATION_FAILED body, keyed by field path, for Mantine forms.
+   * `toField` renames request paths to the form's boxes where the two differ (e.g. taxRateBp → taxRatePct).
+   */
+  fieldErrors(toField: (path: string) => string = (p) => p): Record<string, string> {
     const issues = (this.details as { issues?: { path: string; message: string }[] } | null)?.issues ?? [];
-    return Object.fromEntries(issues.map((i) => [i.path, i.message]));
+    return Object.fromEntries(issues.map((i) => [toField(i.path), i.message]));
   }
 }
 

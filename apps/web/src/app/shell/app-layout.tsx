@@ -1,8 +1,8 @@
 import { ROLE_LABELS } from '@benchproof/contracts';
-import { AppShell, Burger, Button, Group, ScrollArea, Stack, Text } from '@mantine/core';
+import { ActionIcon, AppShell, Burger, Button, Group, ScrollArea, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconLogout } from '@tabler/icons-react';
-import { Outlet, useNavigate } from 'react-router';
+import { IconKey, IconLogout } from '@tabler/icons-react';
+import { Link, Outlet, useNavigate } from 'react-router';
 import { Logo } from '../../components/logo';
 import { useCan, useLogout, useSession } from '../../features/auth';
 import { Navigation } from './navigation';
@@ -31,6 +31,9 @@ export function AppLayout() {
               <Text size="sm" fw={600}>{user.name}</Text>
               <Text size="xs" c="dimmed">{ROLE_LABELS[user.role]}</Text>
             </Stack>
+            <ActionIcon component={Link} to="/account/password" variant="subtle" color="gray" size={44} aria-label="Change password" title="Change password">
+              <IconKey size={22} />
+            </ActionIcon>
             <Button variant="subtle" color="gray" leftSection={<IconLogout size={20} />} onClick={signOut} loading={logout.isPending}>
               Sign out
             </Button>

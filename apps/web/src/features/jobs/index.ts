@@ -1,6 +1,6 @@
 export { jobKeys, jobQuery, jobsQuery, useJob } from './api/jobs';
 export { BookInForm, type BookInSlots, type FieldGetter, type PickedCustomer } from './components/book-in-form';
-export type { BikeFormModel } from './components/book-in-values';
+export type { BikeFormModel, CustomerFormModel, FormModel } from './components/book-in-values';
 export { FinalCheckPanel } from './components/final-check-panel';
 export { IntakeSection } from './components/intake-section';
 export { JobHeader } from './components/job-header';

@@ -2,7 +2,7 @@ import { notifications } from '@mantine/notifications';
 import { useNavigate } from 'react-router';
 import { PageHeader } from '../../../components/page-header';
 import { BIKE_FORM_MODEL, BikeChooser, BikeSpecFields } from '../../../features/bikes';
-import { CustomerFields, CustomerSearch } from '../../../features/customers';
+import { CUSTOMER_FORM_MODEL, CustomerFields, CustomerSearch } from '../../../features/customers';
 import { BookInForm, type BookInSlots } from '../../../features/jobs';
 import { useStaff } from '../staff';
 
@@ -13,6 +13,7 @@ const slots: BookInSlots = {
   bikeChooser: (p) => <BikeChooser {...p} />,
   bikeFields: (field) => <BikeSpecFields field={field} />,
   bikeModel: BIKE_FORM_MODEL,
+  customerModel: CUSTOMER_FORM_MODEL,
 };
 
 export function BookInRoute() {

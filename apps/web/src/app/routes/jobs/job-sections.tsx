@@ -16,6 +16,8 @@ export interface SectionProps {
   job: JobDetail;
   me: SessionUser;
   settings: ShopSettingsDto;
+  /** Handed over and the caller may not correct evidence: editing controls are hidden. */
+  frozen: boolean;
 }
 
 export const JOB_SECTIONS = [
@@ -31,28 +33,28 @@ export const JOB_SECTIONS = [
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
-function Findings({ job, me, settings }: SectionProps) {
+function Findings({ job, me, settings, frozen }: SectionProps) {
   const { staffName } = useStaff();
   return (
     <FindingsPanel
       jobId={job.id}
       rates={{ labourRateMinor: settings.labourRateMinor, taxRateBp: settings.taxRateBp, currency: settings.currency }}
-      canDecide={roleCan(me.role, 'recommendations.decide')}
-      canEdit={roleCan(me.role, 'findings.edit')}
+      canDecide={roleCan(me.role, 'recommendations.decide') && !frozen}
+      canEdit={roleCan(me.role, 'findings.edit') && !frozen}
       ownerName={job.customer.name}
       me={{ id: me.id, name: me.name }}
       staffName={staffName}
-      evidence={(findingId) => <FindingMediaPicker jobId={job.id} findingId={findingId} canEdit={me.role !== 'desk'} />}
+      evidence={(findingId) => <FindingMediaPicker jobId={job.id} findingId={findingId} canEdit={roleCan(me.role, 'findings.edit') && !frozen} />}
     />
   );
 }
 
-function Work({ job, me }: SectionProps) {
+function Work({ job, me, frozen }: SectionProps) {
   const { checkers } = useStaff();
   return (
     <Stack gap="xl">
-      <WorkEntries jobId={job.id} />
-      <TorqueEntries jobId={job.id} />
+      <WorkEntries jobId={job.id} canRecord={roleCan(me.role, 'work_log.record') && !frozen} />
+      <TorqueEntries jobId={job.id} canRecord={roleCan(me.role, 'work_log.record') && !frozen} />
       <FinalCheckPanel job={job} me={me} checkers={checkers} />
     </Stack>
   );
@@ -60,12 +62,12 @@ function Work({ job, me }: SectionProps) {
 
 /** One section of the job page; each comes from its own feature. */
 export function JobSectionBody({ section, ...props }: SectionProps & { section: JobSection }) {
-  const { job, me, settings } = props;
+  const { job, me, settings, frozen } = props;
   switch (section) {
     case 'intake':
       return <IntakeSection job={job} bikeSpecs={<BikeSpecs bike={job.bikeDetail} />} />;
     case 'inspection':
-      return <InspectionPanel jobId={job.id} chainPolicy={settings.chainLimits ?? undefined} lengthUnit={settings.units === 'imperial' ? 'in' : 'mm'} carbonFrame={job.bikeDetail.frameMaterial === 'carbon'} />;
+      return <InspectionPanel jobId={job.id} chainPolicy={settings.chainLimits ?? undefined} lengthUnit={settings.units === 'imperial' ? 'in' : 'mm'} carbonFrame={job.bikeDetail.frameMaterial === 'carbon'} canRecord={roleCan(me.role, 'inspection.record') && !frozen} />;
     case 'findings':
       return <Findings {...props} />;
     case 'work':
@@ -74,7 +76,7 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
       // The media feature (features/media) owns this section.
       return <JobMediaSection jobId={job.id} canSeeDeleted={roleCan(me.role, 'media.view_deleted')} />;
     case 'pairs':
-      return <PairsPanel jobId={job.id} canEdit={roleCan(me.role, 'pairs.edit')} />;
+      return <PairsPanel jobId={job.id} canEdit={roleCan(me.role, 'pairs.edit') && !frozen} />;
     case 'report':
       return <ReportSection jobId={job.id} canIssue={roleCan(me.role, 'reports.issue')} />;
     case 'owner':

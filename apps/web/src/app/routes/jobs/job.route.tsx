@@ -1,7 +1,9 @@
+import { isTerminalStatus } from '@benchproof/domain';
 import { ScrollArea, Tabs } from '@mantine/core';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { useParams, useSearchParams } from 'react-router';
+import { FrozenNotice } from '../../../components/frozen-notice';
 import { QueryState } from '../../../components/query-state';
 import { useCan, useSession } from '../../../features/auth';
 import { JobHeader, jobKeys, useJob } from '../../../features/jobs';
@@ -28,9 +30,13 @@ export function JobRoute() {
   // The owner acts on their own page; refresh everything of this job (status, findings, owner panel).
   useOwnerEvents(jobId, useCallback(() => void qc.invalidateQueries({ queryKey: jobKeys.detail(jobId) }), [qc, jobId]));
   if (!job.data || !settings.data || !me) return <QueryState isLoading={job.isLoading || settings.isLoading} error={job.error ?? settings.error} />;
+  // Evidence freezes at handover; only `jobs.reopen_evidence` may still correct it (the API audits each change).
+  const closed = isTerminalStatus(job.data.status);
+  const frozen = closed && !can('jobs.reopen_evidence');
   return (
     <>
       <JobHeader job={job.data} mechanics={mechanics} canAssign={can('jobs.edit')} />
+      {closed && <FrozenNotice canCorrect={!frozen} />}
       {section !== 'messages' && <FailedMessagesNotice jobId={jobId} onOpen={() => setSearch({ section: 'messages' }, { replace: true })} />}
       <Tabs value={section} onChange={(v) => v && setSearch({ section: v }, { replace: true })} keepMounted={false}>
         <ScrollArea type="never" mb="md">
@@ -41,7 +47,7 @@ export function JobRoute() {
           </Tabs.List>
         </ScrollArea>
         <Tabs.Panel value={section}>
-          <JobSectionBody section={section} job={job.data} me={me} settings={settings.data} />
+          <JobSectionBody section={section} job={job.data} me={me} settings={settings.data} frozen={frozen} />
         </Tabs.Panel>
       </Tabs>
     </>

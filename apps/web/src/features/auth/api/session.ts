@@ -1,4 +1,4 @@
-import type { LoginRequest, LoginResponse, SessionResponse } from '@benchproof/contracts';
+import type { ChangePasswordRequest, LoginRequest, LoginResponse, SessionResponse } from '@benchproof/contracts';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, ApiError, setCsrfToken } from '../../../lib/api-client';
 
@@ -48,6 +48,22 @@ export function useLogout() {
       setCsrfToken(null);
       qc.clear();
       qc.setQueryData(sessionKey, null);
+    },
+  });
+}
+
+/**
+ * The signed-in user's own password. The API ends every session of theirs and
+ * opens a fresh one here, so the new CSRF token must replace the old one.
+ * quietAuth: a wrong current password answers 401 and must not sign this device out.
+ */
+export function useChangePassword() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: ChangePasswordRequest) => api<LoginResponse>('/auth/password', { method: 'POST', body, quietAuth: true }),
+    onSuccess: (res) => {
+      setCsrfToken(res.csrfToken);
+      qc.setQueryData(sessionKey, res.user);
     },
   });
 }

@@ -1,36 +1,22 @@
 import { CustomerInputSchema, type CustomerDto } from '@benchproof/contracts';
 import { Alert, Button, Stack } from '@mantine/core';
-import { schemaResolver, useForm } from '@mantine/form';
-import { ApiError } from '../../../lib/api-client';
+import { useForm } from '@mantine/form';
+import { contractResolver, formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useSaveCustomer } from '../api/customers';
 import { CustomerFields } from './customer-fields';
-
-export interface CustomerFormValues {
-  name: string;
-  email: string;
-  phone: string;
-  preferredChannel: CustomerDto['preferredChannel'];
-  notes: string;
-}
-
-export const EMPTY_CUSTOMER: CustomerFormValues = { name: '', email: '', phone: '', preferredChannel: 'phone', notes: '' };
+import { customerFormToInput, customerToForm, EMPTY_CUSTOMER, type CustomerFormValues } from './customer-model';
 
 /** Create or edit a customer; validated with the API's schema, server field errors land on the fields. */
 export function CustomerForm({ customer, onDone }: { customer?: CustomerDto; onDone: (c: CustomerDto) => void }) {
   const save = useSaveCustomer(customer?.id);
   const form = useForm<CustomerFormValues>({
-    initialValues: customer
-      ? { name: customer.name, email: customer.email ?? '', phone: customer.phone ?? '', preferredChannel: customer.preferredChannel, notes: customer.notes ?? '' }
-      : EMPTY_CUSTOMER,
-    validate: schemaResolver(CustomerInputSchema, { sync: true }),
+    initialValues: customer ? customerToForm(customer) : EMPTY_CUSTOMER,
+    validate: contractResolver(CustomerInputSchema, customerFormToInput),
   });
   const submit = form.onSubmit((values) =>
-    save.mutate(CustomerInputSchema.parse(values), {
-      onSuccess: onDone,
-      onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()),
-    }),
+    save.mutate(CustomerInputSchema.parse(customerFormToInput(values)), { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e) }),
   );
-  const failure = save.error instanceof ApiError && save.error.code !== 'VALIDATION_FAILED' ? save.error.message : null;
+  const failure = formFailure(save.error);
   return (
     <form onSubmit={submit} noValidate>
       <Stack>

@@ -3,7 +3,7 @@ import { Alert, Button, SegmentedControl, Stack, Text, Textarea, TextInput } fro
 import { DateTimePicker } from '@mantine/dates';
 import { useForm } from '@mantine/form';
 import dayjs from 'dayjs';
-import { ApiError } from '../../../lib/api-client';
+import { contractResolver, formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useRecordDecision } from '../api/findings';
 
 interface Values {
@@ -21,16 +21,14 @@ export function DecisionForm({ jobId, recommendationId, ownerName, recorderName,
   const record = useRecordDecision(jobId, recommendationId);
   const form = useForm<Values>({
     initialValues: { status: 'approved', channel: 'phone', decidedByName: ownerName, decidedAt: dayjs().format('YYYY-MM-DD HH:mm:ss'), note: '' },
-    validate: (v) => {
-      const r = RecordDecisionRequestSchema.safeParse(toRequest(v));
-      return r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [i.path.join('.'), i.message]));
-    },
+    validate: contractResolver(RecordDecisionRequestSchema, toRequest),
   });
-  const submit = form.onSubmit((v) => record.mutate(RecordDecisionRequestSchema.parse(toRequest(v)), { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  const submit = form.onSubmit((v) => record.mutate(RecordDecisionRequestSchema.parse(toRequest(v)), { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e) }));
+  const failure = formFailure(record.error);
   return (
     <form onSubmit={submit} noValidate>
       <Stack>
-        {record.error instanceof ApiError && record.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{record.error.message}</Alert>}
+        {failure && <Alert color="red">{failure}</Alert>}
         <SegmentedControl fullWidth size="lg" data={[{ value: 'approved', label: 'Approved' }, { value: 'declined', label: 'Declined' }, { value: 'pending', label: 'Undecided' }]} {...form.getInputProps('status')} />
         <SegmentedControl fullWidth size="md" data={[{ value: 'phone', label: 'Phone' }, { value: 'in_person', label: 'In person' }, { value: 'email', label: 'E-mail' }]} {...form.getInputProps('channel')} />
         <TextInput label="Who decided" description="The owner, or the person they named" {...form.getInputProps('decidedByName')} />

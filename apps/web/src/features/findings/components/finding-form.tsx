@@ -3,7 +3,7 @@ import { INSPECTION_AREAS, INSPECTION_AREA_LABELS } from '@benchproof/domain';
 import { Alert, Button, Select, Stack, Text, Textarea } from '@mantine/core';
 import { schemaResolver, useForm } from '@mantine/form';
 import { ConditionPicker } from '../../../components/condition-picker';
-import { ApiError } from '../../../lib/api-client';
+import { formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useSaveFinding } from '../api/findings';
 
 const AREA_OPTIONS = INSPECTION_AREAS.map((a) => ({ value: a, label: INSPECTION_AREA_LABELS[a] }));
@@ -15,8 +15,8 @@ export function FindingForm({ jobId, finding, onDone }: { jobId: number; finding
     initialValues: { area: finding?.area ?? 'drivetrain', condition: finding?.condition ?? 'worn', description: finding?.description ?? '', checkpointId: finding?.checkpointId ?? null },
     validate: schemaResolver(CreateFindingRequestSchema, { sync: true }),
   });
-  const submit = form.onSubmit((v) => save.mutate(v, { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
-  const failure = save.error instanceof ApiError && save.error.code !== 'VALIDATION_FAILED' ? save.error.message : null;
+  const submit = form.onSubmit((v) => save.mutate(v, { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e) }));
+  const failure = formFailure(save.error);
   return (
     <form onSubmit={submit} noValidate>
       <Stack>

@@ -3,7 +3,7 @@ import { defaultUrgency, URGENCIES, URGENCY_LABELS, type Condition, type Estimat
 import { ActionIcon, Alert, Button, Group, NumberInput, Paper, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconPlus, IconTrash } from '@tabler/icons-react';
-import { ApiError } from '../../../lib/api-client';
+import { contractResolver, formFailure, pathTable, showServerFieldErrors } from '../../../lib/form';
 import { useSaveRecommendation } from '../api/findings';
 import { EstimatePreview, type ShopRates } from './estimate-preview';
 
@@ -21,6 +21,8 @@ interface Values {
 
 const URGENCY_OPTIONS = URGENCIES.map((u) => ({ value: u, label: URGENCY_LABELS[u] }));
 const emptyPart = (): PartRow => ({ description: '', qty: 1, price: '' });
+/** Request paths → the boxes that hold them (minor units and hundredths are typed as major units and hours). */
+const toField = (p: string) => pathTable({ labourHundredths: 'hours' })(p).replace(/^parts\.(\d+)\.unitPriceMinor$/, 'parts.$1.price');
 
 function toRequest(v: Values, currency: string) {
   return {
@@ -50,7 +52,7 @@ function PartLine({ form, i, currency }: { form: UseFormReturnType<Values>; i: n
         </Group>
         <Group grow gap="xs">
           <NumberInput label="Qty" inputMode="decimal" min={0} step={1} decimalScale={4} {...form.getInputProps(`parts.${i}.qty`)} />
-          <TextInput label={`Unit price (${currency})`} inputMode="decimal" placeholder="0.00" {...form.getInputProps(`parts.${i}.price`)} error={form.errors[`parts.${i}.unitPriceMinor`] ?? form.errors[`parts.${i}.price`]} />
+          <TextInput label={`Unit price (${currency})`} inputMode="decimal" placeholder="0.00" {...form.getInputProps(`parts.${i}.price`)} />
         </Group>
       </Stack>
     </Paper>
@@ -68,17 +70,15 @@ export function RecommendationEditor({ jobId, findingId, condition, current, rat
       parts: current?.parts.map((p) => ({ description: p.description, qty: p.qty, price: minorToMajorText(p.unitPriceMinor, rates.currency) })) ?? [],
       hours: current ? current.labourHundredths / 100 : 0.5,
     },
-    validate: (v) => {
-      const r = RecommendationRequestSchema.safeParse(toRequest(v, rates.currency));
-      return r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [i.path.join('.'), i.message]));
-    },
+    validate: contractResolver(RecommendationRequestSchema, (v: Values) => toRequest(v, rates.currency), toField),
   });
-  const submit = form.onSubmit((v) => save.mutate(RecommendationRequestSchema.parse(toRequest(v, rates.currency)), { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  const submit = form.onSubmit((v) => save.mutate(RecommendationRequestSchema.parse(toRequest(v, rates.currency)), { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e, toField) }));
+  const failure = formFailure(save.error);
   const values = form.getValues();
   return (
     <form onSubmit={submit} noValidate>
       <Stack>
-        {save.error instanceof ApiError && save.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{save.error.message}</Alert>}
+        {failure && <Alert color="red">{failure}</Alert>}
         <TextInput label="What we recommend" withAsterisk {...form.getInputProps('summary')} />
         <Stack gap={4}>
           <Text size="sm" fw={500} id={`urgency-${findingId}`}>Urgency</Text>
@@ -88,7 +88,7 @@ export function RecommendationEditor({ jobId, findingId, condition, current, rat
         <Text fw={600}>Parts</Text>
         {values.parts.map((_, i) => <PartLine key={i} form={form as unknown as UseFormReturnType<Values>} i={i} currency={rates.currency} />)}
         <Button variant="light" leftSection={<IconPlus />} onClick={() => form.insertListItem('parts', emptyPart())}>Add a part</Button>
-        <NumberInput label="Labour hours" description="In quarter hours" inputMode="decimal" min={0} step={0.25} decimalScale={2} size="lg" {...form.getInputProps('hours')} error={form.errors.labourHundredths ?? form.errors.hours} />
+        <NumberInput label="Labour hours" description="In quarter hours" inputMode="decimal" min={0} step={0.25} decimalScale={2} size="lg" {...form.getInputProps('hours')} />
         <Paper withBorder p="sm" bg="gray.0"><EstimatePreview lines={linesOf(values, rates)} rates={rates} /></Paper>
         <Text size="xs" c="dimmed">Prices are net; tax is added once on the total. The server stores the figures with the rates of today.</Text>
         <Button type="submit" size="lg" loading={save.isPending}>Save recommendation</Button>

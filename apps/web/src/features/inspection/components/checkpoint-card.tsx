@@ -7,7 +7,7 @@ import dayjs from 'dayjs';
 import { useState } from 'react';
 import { ConditionBadge } from '../../../components/condition-badge';
 import { ConditionPicker } from '../../../components/condition-picker';
-import { ApiError } from '../../../lib/api-client';
+import { formFailure } from '../../../lib/form';
 import { useAddMeasurement, useUpdateCheckpoint } from '../api/inspection';
 import { MeasurementForm } from './measurement-form';
 
@@ -17,6 +17,8 @@ interface Props {
   speeds: number;
   chainPolicy?: Partial<ChainLimitPolicy>;
   lengthUnit: LengthUnit;
+  /** False for a role that may not record, or a handed-over job it may not correct: read only. */
+  canRecord?: boolean;
 }
 
 function SavedReadings({ checkpoint }: { checkpoint: CheckpointDto }) {
@@ -33,11 +35,13 @@ function SavedReadings({ checkpoint }: { checkpoint: CheckpointDto }) {
   );
 }
 
-function Readings({ jobId, checkpoint, speeds, chainPolicy, lengthUnit }: Props) {
+function Readings(props: Props) {
+  const { jobId, checkpoint, speeds, chainPolicy, lengthUnit } = props;
   const add = useAddMeasurement(jobId, checkpoint.id);
   const [opened, { toggle }] = useDisclosure(checkpoint.measurements.length === 0);
   const [round, setRound] = useState(0);
   if (checkpoint.measurementKinds.length === 0) return null;
+  if (props.canRecord === false) return <SavedReadings checkpoint={checkpoint} />;
   return (
     <Stack gap="xs">
       <SavedReadings checkpoint={checkpoint} />
@@ -49,7 +53,7 @@ function Readings({ jobId, checkpoint, speeds, chainPolicy, lengthUnit }: Props)
           {checkpoint.measurementKinds.map((kind) => (
             <MeasurementForm key={`${kind}-${round}`} kind={kind} ctx={{ checkpointKey: checkpoint.key, lengthUnit }} speeds={speeds} chainPolicy={chainPolicy} saving={add.isPending} onSave={(input) => add.mutate(input, { onSuccess: () => setRound((r) => r + 1) })} />
           ))}
-          {add.error && <Alert color="red" role="alert">{add.error instanceof ApiError ? add.error.message : 'Not saved; try again.'}</Alert>}
+          {add.error && <Alert color="red" role="alert">{formFailure(add.error)}</Alert>}
         </Stack>
       </Collapse>
     </Stack>
@@ -58,7 +62,7 @@ function Readings({ jobId, checkpoint, speeds, chainPolicy, lengthUnit }: Props)
 
 /** One checkpoint: condition by one tap, notes, and its typed readings with the live verdict. */
 export function CheckpointCard(props: Props) {
-  const { jobId, checkpoint } = props;
+  const { jobId, checkpoint, canRecord = true } = props;
   const update = useUpdateCheckpoint(jobId, checkpoint.id);
   const [notes, setNotes] = useState(checkpoint.notes);
   return (
@@ -68,10 +72,10 @@ export function CheckpointCard(props: Props) {
           <Text fw={700}>{checkpoint.label}</Text>
           {checkpoint.safetyCritical && <Badge color="brass" variant="light" radius="sm" style={{ flexShrink: 0 }}>Safety</Badge>}
         </Group>
-        <ConditionPicker label={`Condition of ${checkpoint.label}`} value={checkpoint.condition} disabled={update.isPending} onChange={(condition) => update.mutate({ condition })} />
+        <ConditionPicker label={`Condition of ${checkpoint.label}`} value={checkpoint.condition} disabled={update.isPending || !canRecord} onChange={(condition) => update.mutate({ condition })} />
         <Readings {...props} />
-        <Textarea aria-label={`Notes on ${checkpoint.label}`} placeholder="Notes" autosize minRows={1} value={notes} onChange={(e) => setNotes(e.currentTarget.value)} onBlur={() => notes !== checkpoint.notes && update.mutate({ notes })} />
-        {update.error && <Alert color="red" role="alert">{update.error.message}</Alert>}
+        <Textarea aria-label={`Notes on ${checkpoint.label}`} placeholder="Notes" readOnly={!canRecord} autosize minRows={1} value={notes} onChange={(e) => setNotes(e.currentTarget.value)} onBlur={() => notes !== checkpoint.notes && update.mutate({ notes })} />
+        {update.error && <Alert color="red" role="alert">{formFailure(update.error)}</Alert>}
       </Stack>
     </Card>
   );

@@ -28,10 +28,12 @@ interface Props {
   chainPolicy?: Partial<ChainLimitPolicy>;
   lengthUnit: LengthUnit;
   carbonFrame: boolean;
+  /** Recording allowed now (role and a job not frozen at handover); read only otherwise. */
+  canRecord?: boolean;
 }
 
 /** The inspection: one accordion item per area, each checkpoint a card. */
-export function InspectionPanel({ jobId, chainPolicy, lengthUnit, carbonFrame }: Props) {
+export function InspectionPanel({ jobId, chainPolicy, lengthUnit, carbonFrame, canRecord = true }: Props) {
   const inspection = useInspection(jobId);
   const data = inspection.data;
   if (!data) return <QueryState isLoading={inspection.isLoading} error={inspection.error} />;
@@ -56,7 +58,7 @@ export function InspectionPanel({ jobId, chainPolicy, lengthUnit, carbonFrame }:
             <Accordion.Panel>
               <Stack>
                 {areaCautions(area.area, area.cautions, carbonFrame).map((t) => <SafetyNote key={t} text={t} />)}
-                {area.checkpoints.map((cp) => <CheckpointCard key={cp.id} jobId={jobId} checkpoint={cp} speeds={data.drivetrainSpeeds} chainPolicy={chainPolicy} lengthUnit={lengthUnit} />)}
+                {area.checkpoints.map((cp) => <CheckpointCard key={cp.id} jobId={jobId} checkpoint={cp} speeds={data.drivetrainSpeeds} chainPolicy={chainPolicy} lengthUnit={lengthUnit} canRecord={canRecord} />)}
               </Stack>
             </Accordion.Panel>
           </Accordion.Item>

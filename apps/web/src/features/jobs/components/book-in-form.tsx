@@ -4,9 +4,9 @@ import { DatePickerInput } from '@mantine/dates';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconAlertTriangle, IconCheck } from '@tabler/icons-react';
 import type { ReactNode } from 'react';
-import { ApiError } from '../../../lib/api-client';
+import { formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useBookIn } from '../api/jobs';
-import { initialBookIn, parseBookIn, validateBookIn, type BikeFormModel, type BookInValues } from './book-in-values';
+import { initialBookIn, parseBookIn, validateBookIn, type BikeFormModel, type BookInValues, type CustomerFormModel } from './book-in-values';
 import type { Option } from './job-filters';
 
 type FieldProps = ReturnType<UseFormReturnType<BookInValues>['getInputProps']>;
@@ -23,6 +23,7 @@ export interface BookInSlots {
   bikeChooser: (p: { customerId: number; selectedId: number | null; onPick: (id: number | null) => void; error?: ReactNode }) => ReactNode;
   bikeFields: (field: FieldGetter) => ReactNode;
   bikeModel: BikeFormModel;
+  customerModel: CustomerFormModel;
 }
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
@@ -75,16 +76,10 @@ function BikeSection({ form, slots }: { form: UseFormReturnType<BookInValues>; s
 /** Booking-in: owner, bike, symptoms, promised day and mechanic in one submit. */
 export function BookInForm({ slots, mechanics, onBooked }: { slots: BookInSlots; mechanics: Option[]; onBooked: (job: JobDetail) => void }) {
   const bookIn = useBookIn();
-  const form = useForm<BookInValues>({ mode: 'controlled', initialValues: initialBookIn(slots.bikeModel), validate: validateBookIn(slots.bikeModel) });
-  const submit = form.onSubmit((values) =>
-    bookIn.mutate(parseBookIn(values, slots.bikeModel), {
-      onSuccess: onBooked,
-      onError: (e) => {
-        if (e instanceof ApiError && e.code === 'VALIDATION_FAILED') form.setErrors(e.fieldErrors());
-      },
-    }),
-  );
-  const failure = bookIn.error instanceof ApiError && bookIn.error.code !== 'VALIDATION_FAILED' ? bookIn.error.message : null;
+  const models = { customer: slots.customerModel, bike: slots.bikeModel };
+  const form = useForm<BookInValues>({ mode: 'controlled', initialValues: initialBookIn(models), validate: validateBookIn(models) });
+  const submit = form.onSubmit((values) => bookIn.mutate(parseBookIn(values, models), { onSuccess: onBooked, onError: (e) => showServerFieldErrors(form, e) }));
+  const failure = formFailure(bookIn.error);
   const hasErrors = Object.keys(form.errors).length > 0;
   return (
     <form onSubmit={submit} noValidate>

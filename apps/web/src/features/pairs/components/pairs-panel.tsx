@@ -3,7 +3,7 @@ import { Alert, Button, Collapse, Group, Loader, Stack, Text, Title } from '@man
 import { useDisclosure } from '@mantine/hooks';
 import { IconPlus } from '@tabler/icons-react';
 import { useState } from 'react';
-import { ApiError } from '../../../lib/api-client';
+import { formFailure } from '../../../lib/form';
 import { useCreatePair, usePairableShots, usePairs, usePairSuggestions, useReorderPairs } from '../api/pairs';
 import { PairBuilder } from './pair-builder';
 import { PairCard } from './pair-card';
@@ -49,7 +49,7 @@ export function PairsPanel({ jobId, canEdit }: { jobId: number; canEdit: boolean
           <Text size="sm" c="dimmed">
             From the area tags, Before/After phases, when each shot was taken, and how alike the framing is. Check each before you pair it: a hint, not a verdict.
           </Text>
-          {create.error && <Alert color="red">{create.error instanceof ApiError ? create.error.message : 'Could not save the pair.'}</Alert>}
+          {create.error && <Alert color="red">{formFailure(create.error)}</Alert>}
           {(suggestions.data?.pendingHashes ?? 0) > 0 && <Text size="sm">Comparing framing of {suggestions.data?.pendingHashes} new shot(s)…</Text>}
           {suggestions.data && <SuggestionList suggestions={suggestions.data.suggestions} onPick={pick} busyKey={busyKey} />}
           <Group>

@@ -1,5 +1,6 @@
 import { UpdateShopSettingsRequestSchema, type ShopSettingsDto } from '@benchproof/contracts';
 import { DEFAULT_CHAIN_LIMIT_POLICY } from '@benchproof/domain';
+import { contractResolver } from '../../../lib/form';
 
 export interface SettingsValues {
   name: string;
@@ -30,11 +31,11 @@ export function fromDto(s: ShopSettingsDto, toMajor: (minor: number, currency: s
   };
 }
 
-/** Request field paths → form field paths, so each message lands under its box. */
+/** Request field paths → form field paths, so each message lands under its box (client and server alike). */
 const PATHS: Record<string, string> = { labourRateMinor: 'labourRate', taxRateBp: 'taxRatePct' };
-const toFormPath = (p: string) => PATHS[p] ?? p.replace(/^chainLimits\./, 'chain.');
+export const toFormPath = (p: string) => PATHS[p] ?? p.replace(/^chainLimits\./, 'chain.');
 
-/** Builds the PATCH body (major units → minor, % → basis points) and checks it with the API's schema. */
+/** Builds the PATCH body: major units → minor, % → basis points. A rate that does not read as money becomes NaN for the schema to refuse. */
 export function toRequest(v: SettingsValues, toMinor: (text: string, currency: string) => number | null) {
   const { labourRate, taxRatePct, ownChainLimits, chain, ...rest } = v;
   let labourRateMinor: number | null;
@@ -43,14 +44,20 @@ export function toRequest(v: SettingsValues, toMinor: (text: string, currency: s
   } catch {
     labourRateMinor = null;
   }
-  const request = {
+  return {
     ...rest,
     labourRateMinor: labourRateMinor ?? Number.NaN,
     taxRateBp: taxRatePct === '' ? Number.NaN : Math.round(Number(taxRatePct) * 100),
     chainLimits: ownChainLimits ? { replaceAt11Pct: Number(chain.replaceAt11Pct), replaceAt10Pct: Number(chain.replaceAt10Pct), cassettePct: Number(chain.cassettePct) } : null,
   };
-  const r = UpdateShopSettingsRequestSchema.safeParse(request);
-  const errors: Record<string, string> = r.success ? {} : Object.fromEntries(r.error.issues.map((i) => [toFormPath(i.path.join('.')), i.message]));
-  if (labourRateMinor === null) errors.labourRate = 'Enter the hourly rate, e.g. 52.50';
-  return { request, errors };
+}
+
+/** The contract's schema through the form resolver; an unreadable rate gets a worked example instead of "NaN". */
+export function validateSettings(toMinor: (text: string, currency: string) => number | null) {
+  const resolve = contractResolver(UpdateShopSettingsRequestSchema, (v: SettingsValues) => toRequest(v, toMinor), toFormPath);
+  return (v: SettingsValues): Record<string, string> => {
+    const errors = resolve(v);
+    if (errors.labourRate && Number.isNaN(toRequest(v, toMinor).labourRateMinor)) errors.labourRate = 'Enter the hourly rate, e.g. 52.50';
+    return errors;
+  };
 }

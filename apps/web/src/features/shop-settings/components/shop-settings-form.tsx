@@ -4,12 +4,12 @@ import { Alert, Button, ColorInput, Group, NumberInput, Paper, SegmentedControl,
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
 import type { ReactNode } from 'react';
-import { ApiError } from '../../../lib/api-client';
+import { formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useUpdateShopSettings } from '../api/shop-settings';
 import { ContrastCheck } from './contrast-check';
 import { CoverPreview } from './cover-preview';
 import { LogoUpload } from './logo-upload';
-import { fromDto, toRequest, type SettingsValues } from './settings-values';
+import { fromDto, toFormPath, toRequest, validateSettings, type SettingsValues } from './settings-values';
 
 type Form = UseFormReturnType<SettingsValues>;
 
@@ -86,20 +86,21 @@ function BrandSection({ form, settings }: { form: Form; settings: ShopSettingsDt
 /** The manager's settings: rates, units, the final-check rule, chain limits and branding. */
 export function ShopSettingsForm({ settings }: { settings: ShopSettingsDto }) {
   const update = useUpdateShopSettings();
-  const form = useForm<SettingsValues>({ mode: 'controlled', initialValues: fromDto(settings, minorToMajorText), validate: (v) => toRequest(v, majorTextToMinor).errors });
+  const form = useForm<SettingsValues>({ mode: 'controlled', initialValues: fromDto(settings, minorToMajorText), validate: validateSettings(majorTextToMinor) });
   const submit = form.onSubmit((v) =>
-    update.mutate(UpdateShopSettingsRequestSchema.parse(toRequest(v, majorTextToMinor).request), {
+    update.mutate(UpdateShopSettingsRequestSchema.parse(toRequest(v, majorTextToMinor)), {
       onSuccess: () => notifications.show({ color: 'teal', message: 'Settings saved.' }),
-      onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()),
+      onError: (e) => showServerFieldErrors(form, e, toFormPath),
     }),
   );
+  const failure = formFailure(update.error);
   return (
     <form onSubmit={submit} noValidate>
       <Stack maw={900}>
         <MoneySection form={form} />
         <WorkshopSection form={form} />
         <BrandSection form={form} settings={settings} />
-        {update.error instanceof ApiError && update.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{update.error.message}</Alert>}
+        {failure && <Alert color="red">{failure}</Alert>}
         {Object.keys(form.errors).length > 0 && <Alert color="red" variant="light">Some fields need attention; nothing you typed is lost.</Alert>}
         <Button type="submit" size="lg" loading={update.isPending}>Save settings</Button>
       </Stack>

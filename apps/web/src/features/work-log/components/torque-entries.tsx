@@ -38,8 +38,8 @@ function TorqueEntryCard({ entry: e }: { entry: TorqueEntryDto }) {
   );
 }
 
-/** The torque log with its cautions always in view. */
-export function TorqueEntries({ jobId }: { jobId: number }) {
+/** The torque log with its cautions always in view; the form only for those who may record now. */
+export function TorqueEntries({ jobId, canRecord = true }: { jobId: number; canRecord?: boolean }) {
   const entries = useTorqueEntries(jobId);
   return (
     <Stack>
@@ -48,7 +48,7 @@ export function TorqueEntries({ jobId }: { jobId: number }) {
       <SafetyNote title="Carbon parts" text={CARBON_CAUTION} />
       <QueryState isLoading={entries.isLoading} error={entries.error} />
       {entries.data?.map((e) => <TorqueEntryCard key={e.id} entry={e} />)}
-      <Card withBorder padding="md" bg="gray.0"><TorqueForm jobId={jobId} /></Card>
+      {canRecord && <Card withBorder padding="md" bg="gray.0"><TorqueForm jobId={jobId} /></Card>}
     </Stack>
   );
 }

@@ -5,7 +5,7 @@ import { DatePickerInput } from '@mantine/dates';
 import { useForm } from '@mantine/form';
 import dayjs from 'dayjs';
 import { SafetyNote } from '../../../components/safety-note';
-import { ApiError } from '../../../lib/api-client';
+import { contractResolver, formFailure, pathTable, showServerFieldErrors } from '../../../lib/form';
 import { useAddTorqueEntry } from '../api/work-log';
 import { CalibrationNotice } from './calibration-notice';
 import { TorqueLive } from './torque-live';
@@ -42,6 +42,9 @@ function toRequest(v: Values) {
   };
 }
 
+/** Request paths → the boxes that hold them. */
+const toField = pathTable({ 'specified.min': 'specMin', 'specified.max': 'specMax', 'specified.unit': 'specUnit', 'applied.value': 'applied', 'applied.unit': 'appliedUnit' });
+
 const INITIAL: Values = { fastener: '', specSource: '', isRange: false, specMin: '', specMax: '', specUnit: 'nm', applied: '', appliedUnit: 'nm', tool: '', toolCalibratedOn: null, threadlocker: null, carbonPart: false };
 
 /** One fastener: the maker's value and where it came from, what was applied, with which wrench. */
@@ -50,17 +53,13 @@ export function TorqueForm({ jobId }: { jobId: number }) {
   const form = useForm<Values>({
     mode: 'controlled',
     initialValues: INITIAL,
-    validate: (v) => {
-      const r = TorqueEntryRequestSchema.safeParse(toRequest(v));
-      if (r.success) return {};
-      const map: Record<string, string> = { 'specified.min': 'specMin', 'specified.max': 'specMax', 'applied.value': 'applied' };
-      return Object.fromEntries(r.error.issues.map((i) => [map[i.path.join('.')] ?? i.path.join('.'), i.message]));
-    },
+    validate: contractResolver(TorqueEntryRequestSchema, toRequest, toField),
   });
   const v = form.getValues();
   const specMin = num(v.specMin);
   const applied = num(v.applied);
-  const submit = form.onSubmit((values) => add.mutate(TorqueEntryRequestSchema.parse(toRequest(values)), { onSuccess: () => form.reset(), onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  const submit = form.onSubmit((values) => add.mutate(TorqueEntryRequestSchema.parse(toRequest(values)), { onSuccess: () => form.reset(), onError: (e) => showServerFieldErrors(form, e, toField) }));
+  const failure = formFailure(add.error);
   return (
     <form onSubmit={submit} noValidate>
       <Stack gap="sm">
@@ -85,7 +84,7 @@ export function TorqueForm({ jobId }: { jobId: number }) {
         <Select label="Threadlocker" placeholder="Not recorded" data={THREADLOCKER_OPTIONS} clearable size="md" {...form.getInputProps('threadlocker')} />
         <Checkbox label="Carbon part" size="md" {...form.getInputProps('carbonPart', { type: 'checkbox' })} />
         {v.carbonPart && <SafetyNote title="Carbon" text={CARBON_CAUTION} />}
-        {add.error instanceof ApiError && add.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{add.error.message}</Alert>}
+        {failure && <Alert color="red">{failure}</Alert>}
         <Button type="submit" size="lg" loading={add.isPending}>Log torque</Button>
       </Stack>
     </form>

@@ -1,30 +1,31 @@
 import { WorkEntryRequestSchema, type WorkEntryRequest } from '@benchproof/contracts';
 import { Alert, Button, Card, Group, NumberInput, Stack, Text, Textarea, Title } from '@mantine/core';
-import { schemaResolver, useForm } from '@mantine/form';
+import { useForm } from '@mantine/form';
 import dayjs from 'dayjs';
 import { QueryState } from '../../../components/query-state';
-import { ApiError } from '../../../lib/api-client';
+import { contractResolver, formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useAddWorkEntry, useWorkEntries } from '../api/work-log';
 
 function WorkEntryForm({ jobId }: { jobId: number }) {
   const add = useAddWorkEntry(jobId);
-  const form = useForm<WorkEntryRequest>({ initialValues: { description: '', partsUsed: '', minutes: 15 }, validate: schemaResolver(WorkEntryRequestSchema, { sync: true }) });
-  const submit = form.onSubmit((v) => add.mutate(v, { onSuccess: () => form.reset(), onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }));
+  const form = useForm<WorkEntryRequest>({ initialValues: { description: '', partsUsed: '', minutes: 15 }, validate: contractResolver(WorkEntryRequestSchema, (v: WorkEntryRequest) => v) });
+  const submit = form.onSubmit((v) => add.mutate(v, { onSuccess: () => form.reset(), onError: (e) => showServerFieldErrors(form, e) }));
+  const failure = formFailure(add.error);
   return (
     <form onSubmit={submit} noValidate>
       <Stack gap="sm">
         <Textarea label="What was done" autosize minRows={2} withAsterisk {...form.getInputProps('description')} />
         <Textarea label="Parts used" autosize minRows={1} {...form.getInputProps('partsUsed')} />
         <NumberInput label="Minutes" inputMode="numeric" min={0} max={1440} step={5} allowDecimal={false} size="lg" {...form.getInputProps('minutes')} />
-        {add.error instanceof ApiError && add.error.code !== 'VALIDATION_FAILED' && <Alert color="red">{add.error.message}</Alert>}
+        {failure && <Alert color="red">{failure}</Alert>}
         <Button type="submit" size="lg" loading={add.isPending}>Log work</Button>
       </Stack>
     </form>
   );
 }
 
-/** What was done on the bench, with parts and time. */
-export function WorkEntries({ jobId }: { jobId: number }) {
+/** What was done on the bench, with parts and time; the form only for those who may record now. */
+export function WorkEntries({ jobId, canRecord = true }: { jobId: number; canRecord?: boolean }) {
   const entries = useWorkEntries(jobId);
   const total = entries.data?.reduce((s, e) => s + e.minutes, 0) ?? 0;
   return (
@@ -38,7 +39,7 @@ export function WorkEntries({ jobId }: { jobId: number }) {
           <Text size="xs" c="dimmed">{e.minutes} min · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}</Text>
         </Card>
       ))}
-      <Card withBorder padding="md" bg="gray.0"><WorkEntryForm jobId={jobId} /></Card>
+      {canRecord && <Card withBorder padding="md" bg="gray.0"><WorkEntryForm jobId={jobId} /></Card>}
     </Stack>
   );
 }

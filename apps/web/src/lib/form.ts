@@ -1,0 +1,58 @@
+import { schemaResolver, type UseFormReturnType } from '@mantine/form';
+import { z } from 'zod';
+import { ApiError } from './api-client';
+
+/** Renames a request path to the form box that holds it; unknown paths stay as they are. */
+export type PathMap = (path: string) => string;
+const samePath: PathMap = (p) => p;
+
+/** A PathMap from a table of request path → form path (exact matches only). */
+export const pathTable =
+  (table: Readonly<Record<string, string>>): PathMap =>
+  (p) =>
+    table[p] ?? p;
+
+/**
+ * The web's one validation pattern: the contract's zod schema through Mantine's
+ * schemaResolver, applied to what the form would send (`toRequest`). Messages come
+ * back under the request's paths; `toField` moves them under the boxes that hold them.
+ */
+export function contractResolver<V>(schema: z.ZodType, toRequest: (values: V) => unknown, toField: PathMap = samePath) {
+  const resolve = schemaResolver(
+    z.preprocess((v) => toRequest(v as V), schema),
+    { sync: true },
+  );
+  return (values: V): Record<string, string> => {
+    const errors: Record<string, string> = {};
+    for (const [path, message] of Object.entries(resolve(values))) errors[toField(path)] ??= typeof message === 'string' ? message : 'Check this field';
+    return errors;
+  };
+}
+
+/**
+ * The one server-error step of every form: a VALIDATION_FAILED answer puts each
+ * `details.issues` message under its box. Returns true when it did, so the caller
+ * shows only other codes in its alert.
+ */
+export function showServerFieldErrors<V>(form: UseFormReturnType<V>, error: unknown, toField: PathMap = samePath): boolean {
+  if (!(error instanceof ApiError) || error.code !== 'VALIDATION_FAILED') return false;
+  form.setErrors(error.fieldErrors(toField));
+  return true;
+}
+
+/** What the web says when evidence is frozen at hand-over (409 JOB_CLOSED). */
+export const JOB_CLOSED_MESSAGE = 'This job was handed over; its records are frozen. A manager can still correct them — every change is recorded.';
+
+/** Codes whose wording on a form differs from the server's default message; null = shown under the boxes instead. */
+const FORM_MESSAGES: Partial<Record<ApiError['code'], string | null>> = {
+  VALIDATION_FAILED: null,
+  JOB_CLOSED: JOB_CLOSED_MESSAGE,
+};
+
+/** The message for a failed save, looked up by error code; field problems give null (they sit under the boxes). */
+export function formFailure(error: unknown): string | null {
+  if (!error) return null;
+  if (!(error instanceof ApiError)) return 'Something went wrong. Your input is kept; try again.';
+  const special = FORM_MESSAGES[error.code];
+  return special === undefined ? error.message : special;
+}
