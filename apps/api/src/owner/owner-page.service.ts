@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { ConsentDto, FindingDto, OwnerConsentRequest, OwnerDecisionsRequest, OwnerPageDto, OwnerShot } from '@benchproof/contracts';
-import { type Condition, MEASUREMENT_PLAIN_WORDS, statusAfterOwnerAnswer } from '@benchproof/domain';
+import { MEASUREMENT_PLAIN_WORDS, statusAfterOwnerAnswer } from '@benchproof/domain';
 import { BikesService } from '../bikes';
 import { ConsentService } from '../consent';
 import { DomainError } from '../core/http';
@@ -60,7 +60,7 @@ export class OwnerPageService {
         },
       })),
       measurements: this.inspection.measurementsOfJobs(owner, [owner.jobId]).map((m) => ({
-        id: m.id, kind: m.kind, condition: m.result.condition as Condition, verdict: typeof m.result.message === 'string' ? m.result.message : '',
+        id: m.id, kind: m.kind, condition: m.result.condition, verdict: typeof m.result.message === 'string' ? m.result.message : '',
         explanation: MEASUREMENT_PLAIN_WORDS[m.kind],
       })),
       pairs: this.pairs.pairsOf(scope).map((p) => ({ id: p.id, caption: p.caption, before: shot(p.before), after: shot(p.after) })),
