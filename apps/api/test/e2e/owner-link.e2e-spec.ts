@@ -5,6 +5,8 @@ import { existsSync, readFileSync } from 'node:fs';
 import { DB, type Db } from '../../src/core/db';
 import { ownerLinks } from '../../src/db/schema';
 import { CLOCK, type Clock } from '../../src/infra/clock';
+import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { derivativesSettled, solidJpeg } from '../media/media-fixtures';
 import { startTestApp, type TestApp } from '../test-app';
 import { createLink, ownerPage, ownerScenario, seen, type OwnerScenario } from './owner-helpers';
 
@@ -12,18 +14,24 @@ describe('owner link', () => {
   let t: TestApp;
   let s: OwnerScenario;
   let other: OwnerScenario;
+  let catcher: MailCatcher;
   beforeAll(async () => {
-    t = await startTestApp();
+    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
+    t = await startTestApp({ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100' });
     s = await ownerScenario(t);
     other = await ownerScenario(t);
   });
-  afterAll(() => t.close());
+  afterAll(async () => {
+    await t.close();
+    await catcher.close();
+  });
 
   it('is returned once as a URL and stored only as a SHA-256 hash', async () => {
     const created = await createLink(s.desk, s.jobId);
     expect(created.url).toMatch(/\/o\/[A-Za-z0-9_-]{43}\.[A-Za-z0-9_-]{22}$/);
     expect(created.link).toMatchObject({ state: 'active', jobId: s.jobId });
-    expect(created.mail).toEqual({ status: 'not_sent', reason: expect.stringMatching(/copy the link/) });
+    expect(created.mail).toEqual({ status: 'queued', reason: null });
+    expect(created.link.sentTo).toBe('ottilie@example.test');
     const rows = t.app.get<Db>(DB).select().from(ownerLinks).all();
     const row = rows.find((r) => r.id === created.link.id);
     expect(row?.tokenHash).toBe(createHash('sha256').update(created.token).digest('hex'));
@@ -31,6 +39,33 @@ describe('owner link', () => {
     for (const f of files) expect(readFileSync(f).includes(Buffer.from(created.token.split('.')[0]))).toBe(false);
     const listed = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-links`).expect(200)).body as { expiresAt: string }[];
     expect(new Date(listed[0].expiresAt).getTime()).toBeGreaterThan(Date.now() + 6 * 24 * 3600e3);
+  });
+
+  it('e-mails the owner the link once, through the outbox, as the estimate to decide on', async () => {
+    const before = catcher.messages().length;
+    const created = await createLink(s.desk, s.jobId);
+    const arrived = (await catcher.waitFor(before + 1)).slice(before);
+    await new Promise((r) => setTimeout(r, 300));
+    expect(catcher.messages().length).toBe(before + 1);
+    expect(arrived[0].envelopeTo).toEqual(['ottilie@example.test']);
+    expect(arrived[0].text).toContain(created.url);
+    const messages = (await s.desk.agent.get(`/api/jobs/${s.jobId}/messages`).expect(200)).body as { kind: string; status: string }[];
+    expect(messages[0]).toMatchObject({ kind: 'estimate_decision', status: 'sent' });
+  });
+
+  it('shows the job\'s before/after pairs and serves their shots through the owner route only', async () => {
+    const j = `/api/jobs/${s.jobId}`;
+    const upload = await s.mech.agent.post(`${j}/media`).field('phase', 'after').field('area', 'drivetrain').attach('files', await solidJpeg(900, 600, '#3333aa'), 'after.jpg').expect(201);
+    const afterId = (upload.body as { assets: { id: number }[] }).assets[0].id;
+    await derivativesSettled(t);
+    await s.mech.agent.post(`${j}/pairs`).send({ beforeAssetId: s.unlinkedAsset, afterAssetId: afterId, caption: 'Chain before and after cleaning' }).expect(201);
+    const { token } = await createLink(s.desk, s.jobId);
+    const page = await ownerPage(t, token);
+    expect(page.pairs.map((p) => ({ caption: p.caption, before: p.before.id, after: p.after.id }))).toEqual([{ caption: 'Chain before and after cleaning', before: s.unlinkedAsset, after: afterId }]);
+    const shot = await t.http().get(page.pairs[0].after.screenUrl).expect(200);
+    expect(shot.headers['content-type']).toBe('image/jpeg');
+    await t.http().get(`/api/owner/${token}/media/${afterId}/original`).expect(400);
+    expect(page.report).toBeNull();
   });
 
   it('shows the owner only owner-facing data: derivatives via owner routes, no originals, no internal notes', async () => {
