@@ -62,7 +62,7 @@ export class OwnerLinksService {
     let mail: CreatedOwnerLinkDto['mail'] = { status: 'not_sent', reason: 'Not asked to send.' };
     if (input.send && !owner.email) mail = { status: 'not_sent', reason: 'The owner has no e-mail address; copy the link for a text message.' };
     else if (input.send && owner.email) {
-      const sent = this.mailer.send({ shopId: actor.shopId, jobId, linkId: row.id, to: owner.email, ownerName: owner.name, url, expiresAt });
+      const sent = this.mailer.send({ shopId: actor.shopId, jobId, linkId: row.id, createdBy: actor.id, to: owner.email, ownerName: owner.name, url, expiresAt });
       mail = sent.status === 'queued' ? { status: 'queued', reason: null } : sent;
     }
     const saved = mail.status === 'queued' && owner.email ? this.repo.update(actor.shopId, row.id, { sentTo: owner.email }) : row;

@@ -1,13 +1,12 @@
-import { Inject, Injectable } from '@nestjs/common';
-import { buffer } from 'node:stream/consumers';
+import { Injectable } from '@nestjs/common';
+import { AnnotationRenderService } from '../annotations';
 import type { AuthUser } from '../core/auth';
-import { IMAGE, type ImageAdapter } from '../infra/image';
-import { MediaFilesService } from '../media';
+import { PairsService } from '../pairs';
 import type { ReportImage, ShotRef } from './report-data';
 
 /**
- * The JPEG the report prints for a shot: the asset's print derivative, or —
- * once annotations exist — the annotated print render with its blur boxes burned in.
+ * The JPEG the report prints for a shot: the annotated print render with its
+ * blur boxes burned in (the plain print derivative when there is no annotation).
  * The bytes are embedded as they are, so they must already be sized for print.
  */
 export interface AnnotatedImageSource {
@@ -28,31 +27,29 @@ export interface PairsSource {
 }
 export const PAIRS_SOURCE = Symbol('PAIRS_SOURCE');
 
-/** Default shot source: the plain print derivative (no annotations yet). */
+/** Shots as the report prints them: the annotated print render (blur boxes burned in), or the plain print derivative without an annotation. */
 @Injectable()
-export class PrintDerivativeSource implements AnnotatedImageSource {
-  constructor(
-    private readonly files: MediaFilesService,
-    @Inject(IMAGE) private readonly image: ImageAdapter,
-  ) {}
+export class AnnotatedPrintSource implements AnnotatedImageSource {
+  constructor(private readonly renders: AnnotationRenderService) {}
 
   async printJpeg(actor: AuthUser, assetId: number): Promise<ReportImage | null> {
     try {
-      const reply = await this.files.open(actor, assetId, 'print', {});
-      if (!reply.body || !reply.headers['Content-Type']?.includes('jpeg')) return null;
-      const data = await buffer(reply.body);
-      const { width, height } = await this.image.size(data);
-      return { data, width, height };
+      const { width, height } = await this.renders.annotated(actor.shopId, assetId, 'print');
+      return { data: await this.renders.annotatedJpeg(actor.shopId, assetId, 'print'), width, height };
     } catch {
+      // A video, or a photo whose derivatives are not made yet: the report prints the caption without the picture.
       return null;
     }
   }
 }
 
-/** Default pairs source until the pairs feature is bound: none. */
+/** The job's pairs from the pairs feature, each shot with its own caption. */
 @Injectable()
-export class NoPairsSource implements PairsSource {
-  listPairs(): Promise<ReportPair[]> {
-    return Promise.resolve([]);
+export class PairsFromPairsService implements PairsSource {
+  constructor(private readonly pairs: PairsService) {}
+
+  listPairs(actor: AuthUser, jobId: number): Promise<ReportPair[]> {
+    const ref = (m: { id: number; caption: string }): ShotRef => ({ assetId: m.id, caption: m.caption });
+    return Promise.resolve(this.pairs.list(actor, jobId).map((p) => ({ before: ref(p.before), after: ref(p.after), caption: p.caption })));
   }
 }

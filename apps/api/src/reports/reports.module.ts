@@ -1,6 +1,7 @@
 import { ThrottlerModule } from '@nestjs/throttler';
 import { Module } from '@nestjs/common';
 import { MulterModule } from '@nestjs/platform-express';
+import { AnnotationsModule } from '../annotations';
 import { AuditModule } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { FindingsModule } from '../findings';
@@ -8,23 +9,26 @@ import { PdfModule } from '../infra/pdf';
 import { StorageModule, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { InspectionModule } from '../inspection';
 import { JobsModule } from '../jobs';
+import { MailModule } from '../mail';
 import { MediaModule } from '../media';
+import { PairsModule } from '../pairs';
 import { ShopsModule } from '../shops';
 import { WorkLogModule } from '../work-log';
 import { BrandingController } from './branding.controller';
 import { BrandingService } from './branding.service';
 import { ReportRenderService } from './report-render.service';
 import { ReportSnapshotService } from './report-snapshot.service';
-import { ANNOTATED_IMAGE_SOURCE, NoPairsSource, PAIRS_SOURCE, PrintDerivativeSource } from './report-sources';
+import { ReportMailBinding } from './report-mail.binding';
+import { ANNOTATED_IMAGE_SOURCE, AnnotatedPrintSource, PAIRS_SOURCE, PairsFromPairsService } from './report-sources';
 import { ReportsController } from './reports.controller';
 import { ReportsRepository } from './reports.repository';
 import { ReportsService } from './reports.service';
 import { VerifyController } from './verify.controller';
 
 /**
- * The bench report. Shots and pairs come through two small ports so the annotation
- * and pairs features can be bound later: override ANNOTATED_IMAGE_SOURCE and
- * PAIRS_SOURCE with their services (see index.ts).
+ * The bench report. Shots come from the annotated print renders and pairs from the
+ * pairs feature, each through a small port (report-sources.ts); issued PDFs are
+ * handed to the mail outbox at start-up (report-mail.binding.ts).
  */
 @Module({
   imports: [
@@ -36,6 +40,9 @@ import { VerifyController } from './verify.controller';
     InspectionModule,
     WorkLogModule,
     MediaModule,
+    AnnotationsModule,
+    PairsModule,
+    MailModule,
     StorageModule,
     PdfModule,
     MulterModule.registerAsync({
@@ -50,8 +57,9 @@ import { VerifyController } from './verify.controller';
     ReportSnapshotService,
     ReportRenderService,
     BrandingService,
-    { provide: ANNOTATED_IMAGE_SOURCE, useClass: PrintDerivativeSource },
-    { provide: PAIRS_SOURCE, useClass: NoPairsSource },
+    ReportMailBinding,
+    { provide: ANNOTATED_IMAGE_SOURCE, useClass: AnnotatedPrintSource },
+    { provide: PAIRS_SOURCE, useClass: PairsFromPairsService },
   ],
   exports: [ReportsService],
 })

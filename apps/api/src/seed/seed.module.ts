@@ -3,13 +3,14 @@ import { FindingsModule } from '../findings';
 import { InspectionModule } from '../inspection';
 import { JobsModule } from '../jobs';
 import { MediaModule } from '../media';
+import { PairsModule } from '../pairs';
 import { WorkLogModule } from '../work-log';
 import { DemoMediaSeeder } from './demo-media.seeder';
 import { SeedRecords } from './seed-records';
 import { SeedService } from './seed.service';
 
 @Module({
-  imports: [JobsModule, InspectionModule, FindingsModule, WorkLogModule, MediaModule],
+  imports: [JobsModule, InspectionModule, FindingsModule, WorkLogModule, MediaModule, PairsModule],
   providers: [SeedService, SeedRecords, DemoMediaSeeder],
   exports: [SeedService],
 })

@@ -1,10 +1,14 @@
 import type { ConsentStatusDto, FindingDto, OwnerPageDto } from '@benchproof/contracts';
 import { CONSENT_WORDING } from '@benchproof/contracts';
 import { createHash } from 'node:crypto';
-import { existsSync, readFileSync } from 'node:fs';
 import { DB, type Db } from '../../src/core/db';
-import { ownerLinks } from '../../src/db/schema';
+import { outboxMessages, ownerLinks } from '../../src/db/schema';
+import type { AuthUser } from '../../src/core/auth';
 import { CLOCK, type Clock } from '../../src/infra/clock';
+import { OwnerLinksService } from '../../src/owner';
+import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { eventually } from '../mail/mail-fixtures';
+import { derivativesSettled, solidJpeg } from '../media/media-fixtures';
 import { startTestApp, type TestApp } from '../test-app';
 import { createLink, ownerPage, ownerScenario, seen, type OwnerScenario } from './owner-helpers';
 
@@ -12,25 +16,61 @@ describe('owner link', () => {
   let t: TestApp;
   let s: OwnerScenario;
   let other: OwnerScenario;
+  let catcher: MailCatcher;
   beforeAll(async () => {
-    t = await startTestApp();
+    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
+    t = await startTestApp({ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100' });
     s = await ownerScenario(t);
     other = await ownerScenario(t);
   });
-  afterAll(() => t.close());
+  afterAll(async () => {
+    await t.close();
+    await catcher.close();
+  });
 
   it('is returned once as a URL and stored only as a SHA-256 hash', async () => {
     const created = await createLink(s.desk, s.jobId);
     expect(created.url).toMatch(/\/o\/[A-Za-z0-9_-]{43}\.[A-Za-z0-9_-]{22}$/);
     expect(created.link).toMatchObject({ state: 'active', jobId: s.jobId });
-    expect(created.mail).toEqual({ status: 'not_sent', reason: expect.stringMatching(/copy the link/) });
+    expect(created.mail).toEqual({ status: 'queued', reason: null });
+    expect(created.link.sentTo).toBe('ottilie@example.test');
     const rows = t.app.get<Db>(DB).select().from(ownerLinks).all();
     const row = rows.find((r) => r.id === created.link.id);
     expect(row?.tokenHash).toBe(createHash('sha256').update(created.token).digest('hex'));
-    const files = [t.cfg.DATABASE_PATH, `${t.cfg.DATABASE_PATH}-wal`].filter((f) => existsSync(f));
-    for (const f of files) expect(readFileSync(f).includes(Buffer.from(created.token.split('.')[0]))).toBe(false);
+    // The only copy is the e-mail to the owner (the outbox row keeps the message as sent); without it nothing holds the token.
+    const secret = created.token.split('.')[0];
+    expect(t.app.get<Db>(DB).select().from(ownerLinks).all().some((r) => JSON.stringify(r).includes(secret))).toBe(false);
+    const outbox = t.app.get<Db>(DB).select().from(outboxMessages).all().filter((m) => m.textBody.includes(secret) || m.htmlBody.includes(secret));
+    expect(outbox.map((m) => ({ kind: m.kind, to: m.toAddress }))).toEqual([{ kind: 'estimate_decision', to: 'ottilie@example.test' }]);
     const listed = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-links`).expect(200)).body as { expiresAt: string }[];
     expect(new Date(listed[0].expiresAt).getTime()).toBeGreaterThan(Date.now() + 6 * 24 * 3600e3);
+  });
+
+  it('e-mails the owner the link once, through the outbox, as the estimate to decide on', async () => {
+    const created = await createLink(s.desk, s.jobId);
+    const mine = () => catcher.messages().filter((m) => m.text.includes(created.url));
+    await eventually(() => Promise.resolve(mine().length ? true : undefined), 'the owner-link e-mail');
+    await new Promise((r) => setTimeout(r, 300));
+    expect(mine()).toHaveLength(1);
+    expect(mine()[0].envelopeTo).toEqual(['ottilie@example.test']);
+    const messages = (await s.desk.agent.get(`/api/jobs/${s.jobId}/messages`).expect(200)).body as { kind: string; status: string }[];
+    expect(messages[0]).toMatchObject({ kind: 'estimate_decision', status: 'sent' });
+  });
+
+  it('shows the job\'s before/after pairs and serves their shots through the owner route only', async () => {
+    const p = await ownerScenario(t);
+    const j = `/api/jobs/${p.jobId}`;
+    const upload = await p.mech.agent.post(`${j}/media`).field('phase', 'after').field('area', 'drivetrain').attach('files', await solidJpeg(900, 600, '#3333aa'), 'after.jpg').expect(201);
+    const afterId = (upload.body as { assets: { id: number }[] }).assets[0].id;
+    await derivativesSettled(t);
+    await p.mech.agent.post(`${j}/pairs`).send({ beforeAssetId: p.unlinkedAsset, afterAssetId: afterId, caption: 'Chain before and after cleaning' }).expect(201);
+    const { token } = await createLink(p.desk, p.jobId);
+    const page = await ownerPage(t, token);
+    expect(page.pairs.map((x) => ({ caption: x.caption, before: x.before.id, after: x.after.id }))).toEqual([{ caption: 'Chain before and after cleaning', before: p.unlinkedAsset, after: afterId }]);
+    const shot = await t.http().get(page.pairs[0].after.screenUrl).expect(200);
+    expect(shot.headers['content-type']).toBe('image/jpeg');
+    await t.http().get(`/api/owner/${token}/media/${afterId}/original`).expect(400);
+    expect(page.report).toBeNull();
   });
 
   it('shows the owner only owner-facing data: derivatives via owner routes, no originals, no internal notes', async () => {
@@ -74,7 +114,9 @@ describe('owner link', () => {
     const spy = vi.spyOn(clock, 'now').mockImplementation(() => new Date(realNow().getTime() + 8 * 24 * 3600e3));
     try {
       expect((await t.http().get(`/api/owner/${token}`).expect(410)).body.code).toBe('OWNER_LINK_EXPIRED');
-      expect(((await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-links`).expect(200)).body as { id: number; state: string }[]).find((l) => l.id === link.id)?.state).toBe('expired');
+      // Read through the service: eight days on, the desk's own session has expired too.
+      const desk = { ...s.desk.user, email: '', name: '' } as AuthUser;
+      expect(t.app.get(OwnerLinksService).list(desk, s.jobId).find((l) => l.id === link.id)?.state).toBe('expired');
     } finally {
       spy.mockRestore();
     }

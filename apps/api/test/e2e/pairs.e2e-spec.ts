@@ -32,7 +32,9 @@ describe('before/after shot pairs', () => {
     mech = await t.signIn(DEMO.mechanic);
     const jobs = (await mech.agent.get('/api/jobs').query({ open: 'true', pageSize: 50 }).expect(200)).body.items as { id: number }[];
     const withMedia: number[] = [];
-    for (const j of jobs) if (((await mech.agent.get(`/api/jobs/${j.id}/media`).expect(200)).body as unknown[]).length) withMedia.push(j.id);
+    // The demo's ready job already has its pairs (it shows them in the report); these tests start from unpaired shots.
+    const unpaired = async (id: number) => !((await mech.agent.get(`/api/jobs/${id}/pairs`).expect(200)).body as unknown[]).length;
+    for (const j of jobs) if (((await mech.agent.get(`/api/jobs/${j.id}/media`).expect(200)).body as unknown[]).length && (await unpaired(j.id))) withMedia.push(j.id);
     [jobId, otherJobId] = withMedia;
     media = (await mech.agent.get(`/api/jobs/${jobId}/media`).expect(200)).body as MediaAssetDto[];
   });

@@ -1,6 +1,6 @@
 import { writeFileSync } from 'node:fs';
 import { binary } from '../media/media-fixtures';
-import { FINDINGS, OWNER, jobWithRecords, settled } from '../reports/report-fixtures';
+import { FINDINGS, OWNER, jobWithRecords, photo, settled } from '../reports/report-fixtures';
 import { pdffonts, pdfimages, pdfPages, sha256 } from '../reports/pdf-readback';
 import { startTestApp, type TestApp } from '../test-app';
 
@@ -131,5 +131,17 @@ describe('bench report: draft, issue, read back', () => {
     const res = await ctx.m.agent.post(`${ctx.base}/reports/issue`).send({ draftId: pending.id });
     if (res.status !== 202) expect(res.body.code).toBe('REPORT_NOT_READY');
     await settled(t);
+  });
+
+  it('prints the before/after pairs of the job with the pair caption and both shot captions', async () => {
+    const after = await ctx.m.agent.post(`${ctx.base}/media`).field('phase', 'after').field('area', 'brakes').field('caption', 'Pads after fitting').attach('files', await photo(7), { filename: 'after.jpg', contentType: 'image/jpeg' }).expect(201);
+    const afterId = (after.body as { results: { asset: { id: number } }[] }).results[0].asset.id;
+    await settled(t);
+    await ctx.m.agent.post(`${ctx.base}/pairs`).send({ beforeAssetId: ctx.shots[0], afterAssetId: afterId, caption: 'Front brake: glazed pads, then new pads bedded in' }).expect(201);
+    const draft = (await ctx.m.agent.post(`${ctx.base}/reports/drafts`).expect(202)).body as ReportBody;
+    await settled(t);
+    const ready = (await ctx.m.agent.get(`${ctx.base}/reports/${draft.id}`).expect(200)).body as ReportBody;
+    const text = (await pdfPages(await getPdf(ready.urls.pdf))).map((p) => p.text).join(' ').replace(/\s+/g, ' ');
+    for (const caption of ['Front brake: glazed pads, then new pads bedded in', 'Pads after fitting', 'Shot 1']) expect(text).toContain(caption);
   });
 });

@@ -8,7 +8,7 @@ import { FindingMediaPicker, JobMediaSection } from '../../../features/media';
 import { PairsPanel } from '../../../features/pairs';
 import { OwnerLinkPanel } from '../../../features/owner';
 import { ReportSection } from '../../../features/reports';
-import { MessagesPanel } from '../../../features/mail';
+import { MessagesPanel, SendReportButton } from '../../../features/mail';
 import { TorqueEntries, WorkEntries } from '../../../features/work-log';
 import { useStaff } from '../staff';
 
@@ -78,7 +78,14 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
     case 'pairs':
       return <PairsPanel jobId={job.id} canEdit={roleCan(me.role, 'pairs.edit') && !frozen} />;
     case 'report':
-      return <ReportSection jobId={job.id} canIssue={roleCan(me.role, 'reports.issue')} />;
+      // Mail (features/mail) adds "Send to owner" under each issued version.
+      return (
+        <ReportSection
+          jobId={job.id}
+          canIssue={roleCan(me.role, 'reports.issue')}
+          extra={roleCan(me.role, 'reports.issue') ? (r) => <SendReportButton jobId={job.id} reportId={r.id} /> : undefined}
+        />
+      );
     case 'owner':
       return <OwnerLinkPanel jobId={job.id} canManage={roleCan(me.role, 'owner_links.manage')} ownerName={job.customer.name} />;
     case 'messages':

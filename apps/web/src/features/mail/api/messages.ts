@@ -25,3 +25,12 @@ export function useResendMessage(jobId: number) {
     onSettled: () => qc.invalidateQueries({ queryKey: mailKeys.messages(jobId) }),
   });
 }
+
+/** Queues "your bench report is ready" to the owner's e-mail on file. */
+export function useSendReport(jobId: number) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (reportId: number) => api<OutboxMessageDto>(`/jobs/${jobId}/reports/${reportId}/send`, { method: 'POST', body: {} }),
+    onSettled: () => qc.invalidateQueries({ queryKey: mailKeys.messages(jobId) }),
+  });
+}

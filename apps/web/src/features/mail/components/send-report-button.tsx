@@ -1,0 +1,27 @@
+import type { OutboxMessageDto } from '@benchproof/contracts';
+import { Button, Stack, Text } from '@mantine/core';
+import { IconMail } from '@tabler/icons-react';
+import { ApiError } from '../../../lib/api-client';
+import { useMessages, useSendReport } from '../api/messages';
+
+const sentBefore = (list: OutboxMessageDto[] | undefined, reportId: number) => list?.find((m) => m.kind === 'report_ready' && m.reportId === reportId);
+
+/** "Send to owner" for one issued version; says when it was already queued or sent so desk does not send it twice by accident. */
+export function SendReportButton({ jobId, reportId }: { jobId: number; reportId: number }) {
+  const send = useSendReport(jobId);
+  const messages = useMessages(jobId);
+  const earlier = sentBefore(messages.data, reportId);
+  const error = send.error instanceof ApiError
+    ? (send.error.code === 'NO_OWNER_EMAIL' ? 'The owner has no e-mail address on file. Add one to the customer, or hand over a printed copy.' : send.error.message)
+    : send.error ? 'Sending did not go through. Try again.' : null;
+  return (
+    <Stack gap={4} mt="xs">
+      <Button size="lg" variant={earlier ? 'light' : 'filled'} leftSection={<IconMail />} loading={send.isPending} onClick={() => send.mutate(reportId)} style={{ alignSelf: 'flex-start' }}>
+        {earlier ? 'Send to owner again' : 'Send to owner'}
+      </Button>
+      {send.isSuccess && <Text size="sm" c="teal" role="status">Queued for {send.data.to}. Its progress shows under E-mails.</Text>}
+      {!send.isSuccess && earlier && <Text size="sm" c="dimmed">Already {earlier.status === 'sent' ? 'sent' : 'queued'} to {earlier.to}.</Text>}
+      {error && <Text size="sm" c="red" role="alert">{error}</Text>}
+    </Stack>
+  );
+}
