@@ -20,3 +20,4 @@ export * from './pairs';
 export * from './consent';
 export * from './owner';
 export * from './annotations';
+export * from './showcase';

@@ -5,12 +5,13 @@ import { JobsModule } from '../jobs';
 import { MediaModule } from '../media';
 import { WorkLogModule } from '../work-log';
 import { DemoMediaSeeder } from './demo-media.seeder';
+import { DemoShowcaseSeeder } from './demo-showcase.seeder';
 import { SeedRecords } from './seed-records';
 import { SeedService } from './seed.service';
 
 @Module({
   imports: [JobsModule, InspectionModule, FindingsModule, WorkLogModule, MediaModule],
-  providers: [SeedService, SeedRecords, DemoMediaSeeder],
+  providers: [SeedService, SeedRecords, DemoMediaSeeder, DemoShowcaseSeeder],
   exports: [SeedService],
 })
 export class SeedModule {}

@@ -23,3 +23,4 @@ export * from './owner-links.table';
 export * from './consents.table';
 export * from './annotation-versions.table';
 export * from './measurement-evidence.table';
+export * from './showcase-items.table';
