@@ -84,6 +84,7 @@ export class ShowcaseExportService implements OnModuleInit {
     const done = new Promise<void>((resolve, reject) => {
       out.on('finish', resolve).on('close', resolve).on('error', reject);
     });
+    done.catch(() => undefined); // a failure is reported by the throw below, not twice
     try {
       for (const [i, item] of req.items.entries()) {
         const f = await this.file(actor, item.pairId, item);
@@ -130,8 +131,7 @@ export class ShowcaseExportService implements OnModuleInit {
   private async runTask(p: TaskPayload, key: string, progress: (f: number) => void): Promise<void> {
     const sink = new PassThrough();
     const stored = this.storage.put(zipKey(key), sink);
-    await this.writeZip(p.actor, p.req, sink, progress);
-    await stored;
+    await Promise.all([this.writeZip(p.actor, p.req, sink, progress), stored]);
     await this.storage.put(listKey(key), Readable.from(Buffer.from(JSON.stringify(p.req.items.map((i) => i.pairId)))));
   }
 }

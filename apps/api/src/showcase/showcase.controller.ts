@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Query, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import {
@@ -55,6 +55,7 @@ export class ShowcaseController {
 
   /** A zip of a selection, streamed as it is made. */
   @Post('zip')
+  @HttpCode(200)
   @Can('showcase.manage')
   @ApiZodBody(ShowcaseZipRequestSchema)
   async zip(@CurrentUser() user: AuthUser, @Body(zod(ShowcaseZipRequestSchema)) body: ShowcaseZipRequest, @Res() res: Response) {
