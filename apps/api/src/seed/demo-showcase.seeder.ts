@@ -7,10 +7,10 @@ import { consents, mediaAssets, shops, shotPairs } from '../db/schema';
 import { CLOCK, type Clock } from '../infra/clock';
 
 /**
- * Showcase demo: in every shop the second job with shots gets its true before/after
+ * Showcase demo: in every shop the older job with shots gets its true before/after
  * pairs and a granted consent (make and model may be named); in the second shop the
- * first job gets pairs and no consent, so the showcase has something to leave out.
- * The first shop's first job stays unpaired: the pair builder's suggestions start there.
+ * newer one gets pairs and no consent, so the showcase has something to leave out.
+ * The first shop's newer job stays unpaired: the pair builder's suggestions start there.
  */
 @Injectable()
 export class DemoShowcaseSeeder {
@@ -25,11 +25,11 @@ export class DemoShowcaseSeeder {
     let pairs = 0;
     for (const [i, shop] of this.db.select({ id: shops.id }).from(shops).orderBy(asc(shops.id)).all().entries()) {
       const jobIds = [...new Set(this.db.select({ jobId: mediaAssets.jobId }).from(mediaAssets).where(eq(mediaAssets.shopId, shop.id)).orderBy(asc(mediaAssets.jobId)).all().map((r) => r.jobId))];
-      if (jobIds[1]) {
-        pairs += this.pairUp(shop.id, jobIds[1]);
-        this.grant(shop.id, jobIds[1]);
+      if (jobIds[0]) {
+        pairs += this.pairUp(shop.id, jobIds[0]);
+        this.grant(shop.id, jobIds[0]);
       }
-      if (i > 0 && jobIds[0]) pairs += this.pairUp(shop.id, jobIds[0]);
+      if (i > 0 && jobIds[1]) pairs += this.pairUp(shop.id, jobIds[1]);
     }
     if (pairs) this.logger.log(`Seeded ${pairs} showcase demo pairs`);
   }

@@ -10,7 +10,7 @@ import { eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import yauzl from 'yauzl';
 import { DB, type Db } from '../../src/core/db';
-import { consents } from '../../src/db/schema';
+import { auditEvents, consents } from '../../src/db/schema';
 import { TASK_RUNNER, type TaskRunner } from '../../src/infra/tasks';
 import { binary, bookJob, derivativesSettled } from '../media/media-fixtures';
 import { BOX, blurDoc, checkerboard, exifrAll, exiftoolGroups, H, meanAbsDiff, setConsent, W } from '../showcase/showcase-fixtures';
@@ -153,17 +153,17 @@ describe('showcase: consent on the server, clean exports', () => {
     expect(downloads.length).toBeLessThan(1 + many.length);
   });
 
-  it('a zip of 50 exports streams: bytes flow before the last file is made, and memory stays bounded', async () => {
+  it('a zip of 50 exports streams: bytes flow before the last file is made, and memory stays bounded', { timeout: 180_000 }, async () => {
     const selection = Array.from({ length: 50 }, (_, i) => ({ pairId: seeded[i % seeded.length].pairId, size: (['square', 'portrait', 'banner'] as const)[i % 3] }));
     // A real socket (supertest would buffer): sign in over fetch and keep the session cookie and CSRF token.
-    const server = t.app.getHttpServer() as Server;
+    const server: Server = t.app.getHttpServer();
     if (!server.listening) await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
     const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
     const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: DEMO.manager, password: DEMO_PASSWORD }) });
     const session = { cookie: login.headers.getSetCookie().map((c) => c.split(';')[0]).join('; '), 'x-csrf-token': ((await login.json()) as { csrfToken: string }).csrfToken };
     const path = join(mkdtempSync(join(tmpdir(), 'showcase-zip-')), 'out.zip');
     const db = t.app.get<Db>(DB);
-    const exportedSoFar = () => (db.$client.prepare("select count(*) as n from audit_events where action = 'showcase.exported'").get() as { n: number }).n;
+    const exportedSoFar = () => db.select({ id: auditEvents.id }).from(auditEvents).where(eq(auditEvents.action, 'showcase.exported')).all().length;
     const before = exportedSoFar();
     global.gc?.();
     const rss0 = process.memoryUsage().rss;
