@@ -39,8 +39,8 @@ describe('showcase: only consented pairs; export; the owner revokes and the pair
 
     // Square, both shots composed (the defaults), one tap: the file downloads.
     const first = cards.first();
-    await first.getByRole('textbox', { name: 'Size' }).click();
-    await mgr.page.getByRole('option', { name: 'Square post 1080×1080' }).click();
+    expect(await first.getByLabel('Size', { exact: true }).inputValue()).toBe('Square post 1080×1080');
+    expect(await first.getByLabel('What', { exact: true }).inputValue()).toBe('Before and after together');
     const [download] = await Promise.all([mgr.page.waitForEvent('download'), first.getByRole('button', { name: 'Export' }).click()]);
     expect(download.suggestedFilename()).toMatch(/^pair-\d+-pair-square\.jpg$/);
     const meta = await sharp(await download.path()).metadata();

@@ -48,9 +48,9 @@ export function ShowcaseCard({ item, selected, onSelect }: Props) {
         </Group>
         <Group gap={6}>
           <Badge variant="light" size="lg">{area}</Badge>
-          <Badge variant="outline" size="lg" color="teal" title={`Consent wording ${item.consent.wordingVersion}`}>
+          <Text size="sm" c="teal.8" fw={600} title={`Consent wording ${item.consent.wordingVersion}`}>
             Consent {day(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
-          </Badge>
+          </Text>
         </Group>
         <ExportControls pairId={item.pairId} selected={selected} onSelect={onSelect} onCaption={open} />
       </Stack>
@@ -78,10 +78,10 @@ function ExportControls({ pairId, selected, onSelect, onCaption }: { pairId: num
   };
   return (
     <>
-      <Group grow>
+      <Stack gap={6}>
         <Select size="md" label="What" data={VARIANT_OPTIONS} value={variant} onChange={(v) => v && setVariant(v)} allowDeselect={false} />
         <Select size="md" label="Size" data={SIZE_OPTIONS} value={size} onChange={(v) => v && setSize(v)} allowDeselect={false} />
-      </Group>
+      </Stack>
       {error && <Text c="red" size="sm" role="alert">{error}</Text>}
       <Group justify="space-between">
         <Checkbox size="md" label="Select for zip" checked={selected} onChange={(e) => onSelect(e.currentTarget.checked)} />
