@@ -52,7 +52,7 @@ function overlay(req: ComposeRequest, cells: { left: number; top: number }[]): s
   const labels = req.labels
     .map((text, i) => {
       const { left, top } = cells[i];
-      const w = Math.round(fs * 0.68 * text.length + pad * 2);
+      const w = Math.round(fs * 0.82 * text.length + pad * 2);
       const h = Math.round(fs * 1.6);
       return `<g transform="translate(${left + pad},${top + pad})"><rect width="${w}" height="${h}" rx="${h / 2}" fill="#14181c" fill-opacity="0.82"/><text x="${w / 2}" y="${h * 0.68}" text-anchor="middle" font-family="DejaVu Sans, sans-serif" font-weight="bold" letter-spacing="${fs * 0.08}" font-size="${fs}" fill="#ffffff">${escapeXml(text.toUpperCase())}</text></g>`;
     })

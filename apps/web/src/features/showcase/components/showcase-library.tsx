@@ -33,11 +33,11 @@ export function ShowcaseLibrary() {
   };
   return (
     <Stack>
-      <Group grow align="flex-end" wrap="wrap">
+      <SimpleGrid cols={{ base: 1, sm: 3 }}>
         <Select size="md" label="Area" placeholder="All areas" clearable data={AREA_OPTIONS} value={query.area ?? null} onChange={(v) => set({ area: (v ?? undefined) })} />
         <TextInput size="md" type="date" label="From" value={query.from ?? ''} onChange={(e) => set({ from: e.currentTarget.value || undefined })} />
         <TextInput size="md" type="date" label="To" value={query.to ?? ''} onChange={(e) => set({ to: e.currentTarget.value || undefined })} />
-      </Group>
+      </SimpleGrid>
       <Switch size="lg" label="Favourites only" checked={query.favourites === 'true'} onChange={(e) => set({ favourites: e.currentTarget.checked ? 'true' : undefined })} />
       {items.isError && <Alert color="red">{items.error.message}</Alert>}
       {items.isSuccess && list.length === 0 && (
