@@ -15,6 +15,7 @@ import { HealthController } from './health/health.controller';
 import { MediaModule } from './media';
 import { PairsModule } from './pairs';
 import { ConsentModule } from './consent';
+import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
 import { ClockModule } from './infra/clock';
 import { TasksModule } from './infra/tasks';
@@ -28,7 +29,7 @@ import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule, ReportsModule, MailModule];
+const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule, ReportsModule, MailModule, ShowcaseModule];
 
 @Module({})
 export class AppModule {

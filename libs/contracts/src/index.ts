@@ -22,3 +22,4 @@ export * from './owner';
 export * from './annotations';
 export * from './reports';
 export * from './mail';
+export * from './showcase';

@@ -24,4 +24,9 @@ export class ConsentRepository {
       .orderBy(desc(consents.at), desc(consents.id))
       .all();
   }
+
+  /** Every consent row of the shop, newest first (the showcase keeps the first per job). */
+  allNewestFirst(shopId: number): ConsentRow[] {
+    return this.db.select().from(consents).where(eq(consents.shopId, shopId)).orderBy(desc(consents.at), desc(consents.id)).all();
+  }
 }

@@ -43,6 +43,13 @@ export class ConsentService {
     return latest ? toDto(latest) : null;
   }
 
+  /** The consents in force that are grants, one per job (the showcase's candidate jobs). */
+  currentGrants(shopId: number): ConsentDto[] {
+    const seen = new Set<number>();
+    const current = this.repo.allNewestFirst(shopId).filter((r) => !seen.has(r.jobId) && seen.add(r.jobId));
+    return current.filter((r) => r.granted).map(toDto);
+  }
+
   status(actor: JobCaller, jobId: number): ConsentStatusDto {
     this.access.read(actor, jobId);
     const history = this.repo.history(actor.shopId, jobId).map(toDto);

@@ -25,6 +25,11 @@ export class PairsRepository {
       .all();
   }
 
+  /** The job a pair belongs to (shop-scoped), for callers that only hold the pair id. */
+  jobOf(shopId: number, id: number): number | null {
+    return this.db.select({ jobId: shotPairs.jobId }).from(shotPairs).where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id))).get()?.jobId ?? null;
+  }
+
   find(shopId: number, jobId: number, id: number): ShotPairRow | undefined {
     return this.db.select().from(shotPairs).where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.jobId, jobId), eq(shotPairs.id, id))).get();
   }

@@ -43,6 +43,11 @@ export class PairsService {
     });
   }
 
+  /** The job of a pair in the caller's shop, or null (the showcase holds only pair ids). */
+  jobOf(shopId: number, pairId: number): number | null {
+    return this.repo.jobOf(shopId, pairId);
+  }
+
   create(actor: AuthUser, jobId: number, input: CreatePairRequest): ShotPairDto {
     this.openJob(actor, jobId);
     const req = CreatePairRequestSchema.parse(input);

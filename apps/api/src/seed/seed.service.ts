@@ -8,6 +8,7 @@ import { SeedRecords, type ShopActors } from './seed-records';
 import { CLOCK, type Clock } from '../infra/clock';
 import { hashPassword } from '../users';
 import { DemoMediaSeeder } from './demo-media.seeder';
+import { DemoShowcaseSeeder } from './demo-showcase.seeder';
 
 /**
  * Loads the invented demo scenario into an empty database. Staff and shops are
@@ -22,6 +23,7 @@ export class SeedService {
     @Inject(DB) private readonly db: Db,
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly demoMedia: DemoMediaSeeder,
+    private readonly demoShowcase: DemoShowcaseSeeder,
     private readonly records: SeedRecords,
   ) {}
 
@@ -45,6 +47,7 @@ export class SeedService {
   /** Generated before/after shots and scope stills for the most recent demo jobs of each shop. */
   async seedDemoMedia(): Promise<void> {
     await this.demoMedia.seed();
+    this.demoShowcase.seed();
   }
 
   /** The demo staff as request actors, the way the session guard would see them. */

@@ -26,6 +26,8 @@ const reportFiles = {
 (async () => {
   const cfg = loadConfig();
   const app = await createApp(cfg, { logger: false });
+  // init first: the reports module binds the real report files at init, and this test's files replace them.
+  await app.init();
   app.get(MailService).useReportFiles(reportFiles);
   await app.listen(cfg.PORT, '127.0.0.1');
   process.stdout.write('ready\n');

@@ -25,3 +25,4 @@ export * from './annotation-versions.table';
 export * from './measurement-evidence.table';
 export * from './reports.table';
 export * from './outbox-messages.table';
+export * from './showcase-items.table';

@@ -1,5 +1,6 @@
 import exifr from 'exifr';
 import sharp, { type Sharp } from 'sharp';
+import { composeShowcase, type ComposeRequest } from './showcase-compose';
 
 export type ImageCheck =
   | { ok: true; width: number; height: number; format: string; orientation: number }
@@ -167,6 +168,11 @@ export class ImageAdapter {
       .composite([...tiles, { input: Buffer.from(svg), left: 0, top: 0 }])
       .jpeg({ quality: 88, optimiseCoding: true })
       .toBuffer();
+  }
+
+  /** A showcase image (composed pair or one shot), exactly the requested size, no metadata (showcase-compose.ts). */
+  compose(req: ComposeRequest): Promise<Buffer> {
+    return composeShowcase(req);
   }
 
   /**

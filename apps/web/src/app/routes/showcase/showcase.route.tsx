@@ -1,5 +1,12 @@
-import { ComingLater } from '../../../components/coming-later';
+import { Stack } from '@mantine/core';
+import { PageHeader } from '../../../components/page-header';
+import { ShowcaseLibrary } from '../../../features/showcase';
 
 export function ShowcaseRoute() {
-  return <ComingLater title="Showcase" arrivesWith="the showcase issue: consented before/after pairs, exported watermarked and metadata-free" />;
+  return (
+    <Stack>
+      <PageHeader title="Showcase" />
+      <ShowcaseLibrary />
+    </Stack>
+  );
 }

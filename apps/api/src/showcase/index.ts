@@ -1,0 +1,2 @@
+export { ShowcaseModule } from './showcase.module';
+export { ShowcaseService } from './showcase.service';

@@ -1,0 +1,95 @@
+import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Query, Res } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
+import {
+  ShowcaseExportQuerySchema,
+  ShowcaseQuerySchema,
+  ShowcaseZipRequestSchema,
+  UpdateShowcaseItemRequestSchema,
+  type ShowcaseExportQuery,
+  type ShowcaseQuery,
+  type ShowcaseZipRequest,
+  type UpdateShowcaseItemRequest,
+} from '@benchproof/contracts';
+import { Can, CurrentUser, type AuthUser } from '../core/auth';
+import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ShowcaseExportService } from './showcase-export.service';
+import { ShowcaseService } from './showcase.service';
+
+@ApiTags('showcase')
+@Controller('showcase')
+export class ShowcaseController {
+  constructor(
+    private readonly showcase: ShowcaseService,
+    private readonly exports: ShowcaseExportService,
+  ) {}
+
+  @Get('items')
+  @Can('showcase.manage')
+  @ApiZodQuery(ShowcaseQuerySchema)
+  list(@CurrentUser() user: AuthUser, @Query(zod(ShowcaseQuerySchema)) q: ShowcaseQuery) {
+    return this.showcase.list(user, q);
+  }
+
+  @Patch('items/:pairId')
+  @Can('showcase.manage')
+  @ApiZodBody(UpdateShowcaseItemRequestSchema)
+  update(@CurrentUser() user: AuthUser, @Param('pairId', ParseIntPipe) pairId: number, @Body(zod(UpdateShowcaseItemRequestSchema)) body: UpdateShowcaseItemRequest) {
+    return this.showcase.update(user, pairId, body);
+  }
+
+  @Get('items/:pairId/caption-draft')
+  @Can('showcase.manage')
+  draft(@CurrentUser() user: AuthUser, @Param('pairId', ParseIntPipe) pairId: number) {
+    return { caption: this.showcase.draft(user, pairId) };
+  }
+
+  /** One image made on request (small): a composed pair or one shot, at a named size. */
+  @Get('items/:pairId/export')
+  @Can('showcase.manage')
+  @ApiZodQuery(ShowcaseExportQuerySchema)
+  async file(@CurrentUser() user: AuthUser, @Param('pairId', ParseIntPipe) pairId: number, @Query(zod(ShowcaseExportQuerySchema)) q: ShowcaseExportQuery, @Res() res: Response) {
+    const f = await this.exports.file(user, pairId, q);
+    res.set({ 'Content-Type': 'image/jpeg', 'Content-Disposition': `attachment; filename="${f.name}"`, 'Cache-Control': 'no-store' }).send(f.data);
+  }
+
+  /** A zip of a selection, streamed as it is made. */
+  @Post('zip')
+  @HttpCode(200)
+  @Can('showcase.manage')
+  @ApiZodBody(ShowcaseZipRequestSchema)
+  async zip(@CurrentUser() user: AuthUser, @Body(zod(ShowcaseZipRequestSchema)) body: ShowcaseZipRequest, @Res() res: Response) {
+    for (const item of body.items) this.showcase.clear(user, item.pairId);
+    res.set({ 'Content-Type': 'application/zip', 'Content-Disposition': 'attachment; filename="showcase.zip"', 'Cache-Control': 'no-store' });
+    await this.exports.streamZip(user, body, res).catch(() => undefined);
+  }
+
+  /** A large selection as a background task with progress. */
+  @Post('exports')
+  @Can('showcase.manage')
+  @ApiZodBody(ShowcaseZipRequestSchema)
+  start(@CurrentUser() user: AuthUser, @Body(zod(ShowcaseZipRequestSchema)) body: ShowcaseZipRequest) {
+    return this.exports.start(user, body);
+  }
+
+  @Get('exports/:key')
+  @Can('showcase.manage')
+  status(@CurrentUser() user: AuthUser, @Param('key') key: string) {
+    return this.exports.status(user, key);
+  }
+
+  @Get('exports/:key/download')
+  @Can('showcase.manage')
+  async download(@CurrentUser() user: AuthUser, @Param('key') key: string, @Res() res: Response) {
+    const stream = await this.exports.download(user, key);
+    res.set({ 'Content-Type': 'application/zip', 'Content-Disposition': 'attachment; filename="showcase.zip"' });
+    stream.pipe(res);
+  }
+
+  /** What was exported from a job's items: the take-down list after a revocation. */
+  @Get('jobs/:jobId/downloads')
+  @Can('showcase.manage')
+  downloads(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number) {
+    return this.showcase.downloads(user, jobId);
+  }
+}

@@ -1,0 +1,21 @@
+import { Module } from '@nestjs/common';
+import { AnnotationsModule } from '../annotations';
+import { AuditModule } from '../audit';
+import { ConsentModule } from '../consent';
+import { FindingsModule } from '../findings';
+import { JobsModule } from '../jobs';
+import { PairsModule } from '../pairs';
+import { ShopsModule } from '../shops';
+import { WorkLogModule } from '../work-log';
+import { ShowcaseExportService } from './showcase-export.service';
+import { ShowcaseController } from './showcase.controller';
+import { ShowcaseRepository } from './showcase.repository';
+import { ShowcaseService } from './showcase.service';
+
+@Module({
+  imports: [AnnotationsModule, AuditModule, ConsentModule, FindingsModule, JobsModule, PairsModule, ShopsModule, WorkLogModule],
+  controllers: [ShowcaseController],
+  providers: [ShowcaseRepository, ShowcaseService, ShowcaseExportService],
+  exports: [ShowcaseService],
+})
+export class ShowcaseModule {}

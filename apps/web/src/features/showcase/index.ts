@@ -1,0 +1,1 @@
+export { ShowcaseLibrary } from './components/showcase-library';
