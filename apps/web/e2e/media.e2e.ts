@@ -72,10 +72,7 @@ describe('media on a phone', () => {
     await b.page.waitForFunction((t) => document.querySelector('[data-testid="viewer-position"]')?.textContent !== t, first);
     expect(await position.textContent()).toMatch(/^2 of \d+$/);
     await b.page.getByTestId('viewer-image').waitFor();
-    await b.page
-      .getByTestId('media-details')
-      .getByText(/SHA-256 [0-9a-f]{12}…/)
-      .waitFor();
+    await b.page.getByTestId('media-details').getByText(/SHA-256 [0-9a-f]{12}…/).waitFor();
     await shot(b.page, 'viewer-phone');
     await swipe(b.page, 60, 320);
     await b.page.getByText(/^1 of \d+$/).waitFor();

@@ -57,3 +57,4 @@ export const JobEventSchema = z.object({
   at: IsoDateTimeSchema,
 });
 export type JobEvent = z.infer<typeof JobEventSchema>;
+

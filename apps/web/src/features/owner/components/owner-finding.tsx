@@ -52,26 +52,10 @@ export function OwnerFindingCard({ finding: f, choice, onChoose }: Props) {
             </Group>
             {rec.decisionStatus === 'pending' ? (
               <Group grow gap="sm">
-                <Button
-                  size="lg"
-                  mih={52}
-                  color="teal"
-                  variant={choice === 'approved' ? 'filled' : 'outline'}
-                  leftSection={<IconCheck />}
-                  onClick={() => onChoose('approved')}
-                  aria-pressed={choice === 'approved'}
-                >
+                <Button size="lg" mih={52} color="teal" variant={choice === 'approved' ? 'filled' : 'outline'} leftSection={<IconCheck />} onClick={() => onChoose('approved')} aria-pressed={choice === 'approved'}>
                   Approve
                 </Button>
-                <Button
-                  size="lg"
-                  mih={52}
-                  color="gray"
-                  variant={choice === 'declined' ? 'filled' : 'outline'}
-                  leftSection={<IconX />}
-                  onClick={() => onChoose('declined')}
-                  aria-pressed={choice === 'declined'}
-                >
+                <Button size="lg" mih={52} color="gray" variant={choice === 'declined' ? 'filled' : 'outline'} leftSection={<IconX />} onClick={() => onChoose('declined')} aria-pressed={choice === 'declined'}>
                   Decline
                 </Button>
               </Group>
