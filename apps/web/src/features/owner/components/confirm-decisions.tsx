@@ -55,28 +55,40 @@ export function ConfirmDecisions({ token, opened, onClose, onDone, onPriceChange
           Approved work: <b>{formatMoney(approvedMinor, currency)}</b> including tax
         </Text>
         {declinedSafety.map((f) => (
-          <Alert key={f.id} color="red" variant="light" title={`You are declining a safety item: ${f.recommendation?.summary ?? ''}`}>
-            <Stack gap="xs">
-              <Text>{DECLINED_SAFETY_NOTICE}</Text>
-              {f.cautions.map((c) => (
-                <Text key={c} size="sm">{c}</Text>
-              ))}
-              <Checkbox size="lg" label="I understand, and I still decline this work" checked={Boolean(safetyOk[f.id])} onChange={(e) => setSafetyOk((p) => ({ ...p, [f.id]: e.currentTarget.checked }))} />
-            </Stack>
-          </Alert>
+          <SafetyDecline key={f.id} finding={f} confirmed={Boolean(safetyOk[f.id])} onConfirm={(ok) => setSafetyOk((p) => ({ ...p, [f.id]: ok }))} />
         ))}
-        {err && (
-          <Alert color={err.code === 'PRICE_CHANGED' ? 'orange' : 'red'} title={err.code === 'PRICE_CHANGED' ? 'The price has changed' : 'Not sent'}>
-            {err.code === 'PRICE_CHANGED'
-              ? `${err.message} New price: ${formatMoney((err.details as { grossMinor: number }).grossMinor, (err.details as { currency: string }).currency)}. Nothing was sent; the page now shows the new price.`
-              : err.message}
-          </Alert>
-        )}
+        {err && <SendError err={err} />}
         <Group grow>
           <Button size="lg" mih={52} variant="default" onClick={onClose}>Back</Button>
           <Button size="lg" mih={52} onClick={submit} loading={send.isPending} disabled={!ready || chosen.length === 0}>Send answers</Button>
         </Group>
       </Stack>
     </Modal>
+  );
+}
+
+/** A declined safety item: the caution in full and a second confirmation. */
+function SafetyDecline({ finding: f, confirmed, onConfirm }: { finding: Props['chosen'][number]; confirmed: boolean; onConfirm: (ok: boolean) => void }) {
+  return (
+    <Alert color="red" variant="light" title={`You are declining a safety item: ${f.recommendation?.summary ?? ''}`}>
+      <Stack gap="xs">
+        <Text>{DECLINED_SAFETY_NOTICE}</Text>
+        {f.cautions.map((c) => (
+          <Text key={c} size="sm">{c}</Text>
+        ))}
+        <Checkbox size="lg" label="I understand, and I still decline this work" checked={confirmed} onChange={(e) => onConfirm(e.currentTarget.checked)} />
+      </Stack>
+    </Alert>
+  );
+}
+
+/** Why the answers were not sent; a changed price names the new one. */
+function SendError({ err }: { err: ApiError }) {
+  return (
+    <Alert color={err.code === 'PRICE_CHANGED' ? 'orange' : 'red'} title={err.code === 'PRICE_CHANGED' ? 'The price has changed' : 'Not sent'}>
+      {err.code === 'PRICE_CHANGED'
+        ? `${err.message} New price: ${formatMoney((err.details as { grossMinor: number }).grossMinor, (err.details as { currency: string }).currency)}. Nothing was sent; the page now shows the new price.`
+        : err.message}
+    </Alert>
   );
 }

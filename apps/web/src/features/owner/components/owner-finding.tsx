@@ -50,23 +50,28 @@ export function OwnerFindingCard({ finding: f, choice, onChoose }: Props) {
                 {formatMoney(rec.totals.grossMinor, rec.currency)}
               </Text>
             </Group>
-            {rec.decisionStatus === 'pending' ? (
-              <Group grow gap="sm">
-                <Button size="lg" mih={52} color="teal" variant={choice === 'approved' ? 'filled' : 'outline'} leftSection={<IconCheck />} onClick={() => onChoose('approved')} aria-pressed={choice === 'approved'}>
-                  Approve
-                </Button>
-                <Button size="lg" mih={52} color="gray" variant={choice === 'declined' ? 'filled' : 'outline'} leftSection={<IconX />} onClick={() => onChoose('declined')} aria-pressed={choice === 'declined'}>
-                  Decline
-                </Button>
-              </Group>
-            ) : (
-              <Badge size="lg" color={DECIDED[rec.decisionStatus].color} variant="light">
-                {DECIDED[rec.decisionStatus].label}
-              </Badge>
-            )}
+            <Choice rec={rec} choice={choice} onChoose={onChoose} />
           </Stack>
         )}
       </Stack>
     </Card>
+  );
+}
+
+/** Approve / Decline while the item is pending; the recorded answer once decided. */
+function Choice({ rec, choice, onChoose }: { rec: NonNullable<Props['finding']['recommendation']>; choice: Props['choice']; onChoose: Props['onChoose'] }) {
+  return rec.decisionStatus === 'pending' ? (
+    <Group grow gap="sm">
+      <Button size="lg" mih={52} color="teal" variant={choice === 'approved' ? 'filled' : 'outline'} leftSection={<IconCheck />} onClick={() => onChoose('approved')} aria-pressed={choice === 'approved'}>
+        Approve
+      </Button>
+      <Button size="lg" mih={52} color="gray" variant={choice === 'declined' ? 'filled' : 'outline'} leftSection={<IconX />} onClick={() => onChoose('declined')} aria-pressed={choice === 'declined'}>
+        Decline
+      </Button>
+    </Group>
+  ) : (
+    <Badge size="lg" color={DECIDED[rec.decisionStatus].color} variant="light">
+      {DECIDED[rec.decisionStatus].label}
+    </Badge>
   );
 }

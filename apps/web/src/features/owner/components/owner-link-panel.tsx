@@ -32,19 +32,7 @@ export function OwnerLinkPanel({ jobId, canManage, ownerName }: { jobId: number;
             </Group>
           )}
           {create.error && <Alert color="red">{(create.error as ApiError).message}</Alert>}
-          {created && (
-            <Alert color="teal" title="Link created — shown only now" data-testid="owner-link-created">
-              <Stack gap="xs">
-                <TextInput value={created.url} readOnly aria-label="Owner link" onFocus={(e) => e.currentTarget.select()} />
-                <CopyButton value={created.url}>
-                  {({ copied, copy }) => (
-                    <Button size="md" mih={44} variant="light" leftSection={<IconCopy />} onClick={copy}>{copied ? 'Copied' : 'Copy for a text message'}</Button>
-                  )}
-                </CopyButton>
-                <Text size="sm">{created.mail.status === 'queued' ? 'E-mail queued to the owner.' : `Not e-mailed: ${created.mail.reason ?? ''}`}</Text>
-              </Stack>
-            </Alert>
-          )}
+          {created && <CreatedLink created={created} />}
           {links.data?.map((l) => (
             <Group key={l.id} justify="space-between" data-testid={`owner-link-${l.id}`}>
               <div>
@@ -62,5 +50,22 @@ export function OwnerLinkPanel({ jobId, canManage, ownerName }: { jobId: number;
       <ConsentPanel jobId={jobId} canRecord={canManage} ownerName={ownerName} />
       <OwnerActivity jobId={jobId} />
     </Stack>
+  );
+}
+
+/** The new link, shown once: copy it for a text message, and whether the e-mail went out. */
+function CreatedLink({ created }: { created: CreatedOwnerLinkDto }) {
+  return (
+    <Alert color="teal" title="Link created — shown only now" data-testid="owner-link-created">
+      <Stack gap="xs">
+        <TextInput value={created.url} readOnly aria-label="Owner link" onFocus={(e) => e.currentTarget.select()} />
+        <CopyButton value={created.url}>
+          {({ copied, copy }) => (
+            <Button size="md" mih={44} variant="light" leftSection={<IconCopy />} onClick={copy}>{copied ? 'Copied' : 'Copy for a text message'}</Button>
+          )}
+        </CopyButton>
+        <Text size="sm">{created.mail.status === 'queued' ? 'E-mail queued to the owner.' : `Not e-mailed: ${created.mail.reason ?? ''}`}</Text>
+      </Stack>
+    </Alert>
   );
 }

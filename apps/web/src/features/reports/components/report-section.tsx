@@ -65,25 +65,32 @@ export function ReportSection({ jobId, canIssue, extra }: { jobId: number; canIs
         <Title order={4}>Issued versions</Title>
         {issued.length === 0 && <Text c="dimmed">No version issued yet.</Text>}
         {issued.map((r) => (
-          <Card key={r.id} withBorder padding="sm">
-            <Group justify="space-between" wrap="wrap">
-              <Stack gap={0}>
-                <Text fw={700}>Version {r.version}</Text>
-                <Text size="sm" c="dimmed">Issued {r.issuedAt && dateTime(r.issuedAt)}{r.createdBy ? ` by ${r.createdBy.name}` : ''} · {kb(r.byteSize)}</Text>
-                {r.fingerprint && <Text size="xs" c="dimmed" ff="monospace" style={{ wordBreak: 'break-all' }}>Fingerprint {r.fingerprint}</Text>}
-              </Stack>
-              {r.state === 'rendering' && <Rendering report={r} />}
-              {r.state === 'ready' && r.urls.download && (
-                <Group gap="xs">
-                  <Button variant="light" size="md" onClick={() => setPreviewId(r.id)}>Preview</Button>
-                  <Button component="a" href={r.urls.download} size="md" leftSection={<IconDownload />}>Download</Button>
-                </Group>
-              )}
-            </Group>
-            {r.state === 'ready' && extra?.(r)}
-          </Card>
+          <IssuedCard key={r.id} report={r} onPreview={() => setPreviewId(r.id)} extra={extra} />
         ))}
       </Stack>
     </Stack>
+  );
+}
+
+/** One issued version: who issued it when, its fingerprint, preview and download, and the slot (e.g. send to owner). */
+function IssuedCard({ report: r, onPreview, extra }: { report: ReportDto; onPreview: () => void; extra?: (issued: ReportDto) => React.ReactNode }) {
+  return (
+    <Card withBorder padding="sm">
+      <Group justify="space-between" wrap="wrap">
+        <Stack gap={0}>
+          <Text fw={700}>Version {r.version}</Text>
+          <Text size="sm" c="dimmed">Issued {r.issuedAt && dateTime(r.issuedAt)}{r.createdBy ? ` by ${r.createdBy.name}` : ''} · {kb(r.byteSize)}</Text>
+          {r.fingerprint && <Text size="xs" c="dimmed" ff="monospace" style={{ wordBreak: 'break-all' }}>Fingerprint {r.fingerprint}</Text>}
+        </Stack>
+        {r.state === 'rendering' && <Rendering report={r} />}
+        {r.state === 'ready' && r.urls.download && (
+          <Group gap="xs">
+            <Button variant="light" size="md" onClick={onPreview}>Preview</Button>
+            <Button component="a" href={r.urls.download} size="md" leftSection={<IconDownload />}>Download</Button>
+          </Group>
+        )}
+      </Group>
+      {r.state === 'ready' && extra?.(r)}
+    </Card>
   );
 }
