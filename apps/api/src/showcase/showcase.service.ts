@@ -6,7 +6,7 @@ import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { FindingsService } from '../findings';
 import { CLOCK, type Clock } from '../infra/clock';
-import { JobsService } from '../jobs';
+import { JobAccess, JobsService } from '../jobs';
 import { PairsService } from '../pairs';
 import { WorkLogService } from '../work-log';
 import { draftCaption } from './showcase-caption';
@@ -31,6 +31,7 @@ export class ShowcaseService {
     private readonly consent: ConsentService,
     private readonly pairs: PairsService,
     private readonly jobs: JobsService,
+    private readonly access: JobAccess,
     private readonly findings: FindingsService,
     private readonly work: WorkLogService,
     private readonly repo: ShowcaseRepository,
@@ -80,6 +81,7 @@ export class ShowcaseService {
 
   /** Everything exported from a job's items (audit), e.g. to take down after a revocation. */
   downloads(actor: AuthUser, jobId: number): ShowcaseDownloadDto[] {
+    this.access.read(actor, jobId);
     return this.audit
       .list(actor.shopId, 'job', jobId)
       .filter((e) => e.action === 'showcase.exported')

@@ -32,10 +32,17 @@ describe('before/after shot pairs', () => {
     mech = await t.signIn(DEMO.mechanic);
     const jobs = (await mech.agent.get('/api/jobs').query({ open: 'true', pageSize: 50 }).expect(200)).body.items as { id: number }[];
     const withMedia: number[] = [];
-    // The demo's ready job already has its pairs (it shows them in the report); these tests start from unpaired shots.
+    const unpairedWithMedia: number[] = [];
+    // Some demo jobs already have their pairs (report and showcase demos); these tests start from unpaired shots.
     const unpaired = async (id: number) => !((await mech.agent.get(`/api/jobs/${id}/pairs`).expect(200)).body as unknown[]).length;
-    for (const j of jobs) if (((await mech.agent.get(`/api/jobs/${j.id}/media`).expect(200)).body as unknown[]).length && (await unpaired(j.id))) withMedia.push(j.id);
-    [jobId, otherJobId] = withMedia;
+    for (const j of jobs) {
+      if (!((await mech.agent.get(`/api/jobs/${j.id}/media`).expect(200)).body as unknown[]).length) continue;
+      withMedia.push(j.id);
+      if (await unpaired(j.id)) unpairedWithMedia.push(j.id);
+    }
+    jobId = unpairedWithMedia[0];
+    // Any other job of the shop with shots: its after shot must be refused as "another job".
+    otherJobId = withMedia.find((id) => id !== jobId)!;
     media = (await mech.agent.get(`/api/jobs/${jobId}/media`).expect(200)).body as MediaAssetDto[];
   });
   afterAll(() => t.close());
