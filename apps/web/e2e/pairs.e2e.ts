@@ -3,15 +3,19 @@ import { DESKTOP, openBrowser, PHONE, shot, signIn, type Browser } from './suppo
 
 const MECHANIC = 'tobin@lantern-spoke.test';
 
-/** An open demo job that has seeded before/after shots. */
+/** An open demo job with seeded before/after shots and no pairs yet (other demo jobs show ready-made pairs). */
 async function jobWithShots(page: Page): Promise<number> {
   const jobs = (await (await page.request.get('/api/jobs?open=true&pageSize=50')).json()) as { items: { id: number }[] };
   for (const j of jobs.items) {
     const media = (await (await page.request.get(`/api/jobs/${j.id}/media`)).json()) as unknown[];
-    if (media.length) return j.id;
+    const pairs = (await (await page.request.get(`/api/jobs/${j.id}/pairs`)).json()) as unknown[];
+    if (media.length && pairs.length === 0) return j.id;
   }
-  throw new Error('No demo job with media');
+  throw new Error('No demo job with unpaired media');
 }
+
+/** The job the phone test built its pair on; the desktop test views that pair. */
+let pairedJobId: number | undefined;
 
 /** Suggestions appear once the background hashes of every seeded shot are in. */
 async function openPairs(page: Page, jobId: number) {
@@ -55,6 +59,7 @@ describe('before/after pairs', () => {
     b = await openBrowser(PHONE);
     await signIn(b.page, MECHANIC);
     const jobId = await jobWithShots(b.page);
+    pairedJobId = jobId;
     await openPairs(b.page, jobId);
     await shot(b.page, 'pairs-suggestions-phone');
 
@@ -87,7 +92,7 @@ describe('before/after pairs', () => {
   it('on a desktop: drags the slider with the mouse and switches to side by side', async () => {
     b = await openBrowser(DESKTOP);
     await signIn(b.page, MECHANIC);
-    const jobId = await jobWithShots(b.page);
+    const jobId = pairedJobId ?? (await jobWithShots(b.page));
     await b.page.goto(`/jobs/${jobId}?section=pairs`);
     await b.page.getByTestId('pair-card').first().waitFor();
     await b.page.waitForFunction(() => [...document.querySelectorAll('[data-testid="compare-slider"] img')].every((i) => (i as HTMLImageElement).naturalWidth > 0));
