@@ -2,6 +2,9 @@ import { createHash } from 'node:crypto';
 import { binary, bookJob, derivativesSettled, filesUnder, patternBytes, solidJpeg, paddedMp4, CLIP_MP4 } from '../media/media-fixtures';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 
+/** A supertest agent indexed by HTTP verb, so one loop can call every route of the table. */
+type AnyVerb = Record<string, (p: string) => { send: (b?: object) => Promise<{ status: number }> }>;
+
 describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
   let t: TestApp;
   let mech: SignedIn;
@@ -126,9 +129,9 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
       ['get', `/api/media/${videoAsset.id}/poster`],
     ];
     for (const [method, path, body] of routes) {
-      const res = await (other.agent as unknown as Record<string, (p: string) => { send: (b?: object) => Promise<{ status: number }> }>)[method](path).send(body);
+      const res = await (other.agent as unknown as AnyVerb)[method](path).send(body);
       expect({ method, path, status: res.status }).toEqual({ method, path, status: 404 });
-      const anon = await (t.http() as unknown as Record<string, (p: string) => { send: (b?: object) => Promise<{ status: number }> }>)[method](path).send(body);
+      const anon = await (t.http() as unknown as AnyVerb)[method](path).send(body);
       expect({ method, path, status: anon.status }).toEqual({ method, path, status: 401 });
     }
   });
