@@ -22,7 +22,10 @@ export default tseslint.config(
   {
     plugins: { 'import-x': importX },
     languageOptions: {
-      parserOptions: { projectService: { allowDefaultProject: ['*.mjs', '*.mts', 'apps/*/scripts/*.mjs', 'apps/*/bench/*.mjs'] }, tsconfigRootDir: import.meta.dirname },
+      parserOptions: {
+        projectService: { allowDefaultProject: ['*.mjs', '*.mts', 'apps/*/scripts/*.mjs', 'apps/*/bench/*.mjs'] },
+        tsconfigRootDir: import.meta.dirname,
+      },
       globals: { ...globals.node },
     },
     settings: {
@@ -52,7 +55,9 @@ export default tseslint.config(
   },
   {
     files: ['libs/contracts/src/**'],
-    rules: { 'no-restricted-imports': restrict(['^(?!\\.{1,2}/|zod$|@benchproof/domain$)', 'libs/contracts depends only on zod and @benchproof/domain (rule 3).']) },
+    rules: {
+      'no-restricted-imports': restrict(['^(?!\\.{1,2}/|zod$|@benchproof/domain$)', 'libs/contracts depends only on zod and @benchproof/domain (rule 3).']),
+    },
   },
   {
     files: ['libs/annotation/src/**'],
@@ -82,7 +87,11 @@ export default tseslint.config(
   {
     files: ['**/*.test.ts', '**/*.test.tsx', '**/*.spec.ts', '**/*.e2e-spec.ts', '**/*.e2e.ts', 'apps/api/test/**', 'apps/web/e2e/**'],
     rules: {
-      '@typescript-eslint/no-unsafe-member-access': 'off', '@typescript-eslint/no-unsafe-assignment': 'off', '@typescript-eslint/no-unsafe-argument': 'off', '@typescript-eslint/no-unsafe-call': 'off', '@typescript-eslint/no-unsafe-return': 'off',
+      '@typescript-eslint/no-unsafe-member-access': 'off',
+      '@typescript-eslint/no-unsafe-assignment': 'off',
+      '@typescript-eslint/no-unsafe-argument': 'off',
+      '@typescript-eslint/no-unsafe-call': 'off',
+      '@typescript-eslint/no-unsafe-return': 'off',
       // A describe() callback holds a whole suite, so a function-length limit would measure the suite, not a function.
       'max-lines-per-function': 'off',
     },

@@ -3,7 +3,10 @@
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 
-const dirs = (root, parent) => readdirSync(join(root, parent), { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
+const dirs = (root, parent) =>
+  readdirSync(join(root, parent), { withFileTypes: true })
+    .filter((d) => d.isDirectory())
+    .map((d) => d.name);
 
 /** Api folders that are not features: shared plumbing every feature may use. */
 const API_SHARED = ['core', 'infra', 'config', 'db'];
@@ -13,7 +16,11 @@ export function boundaryZones(root) {
   const apiFeatures = dirs(root, 'apps/api/src').filter((d) => !API_SHARED.includes(d));
   const webFeatures = dirs(root, 'apps/web/src/features');
   return [
-    { target: 'libs/domain', from: ['libs/contracts', 'libs/annotation', 'apps', 'seeds'], message: 'libs/domain is pure: it imports nothing of the repo (rule 1).' },
+    {
+      target: 'libs/domain',
+      from: ['libs/contracts', 'libs/annotation', 'apps', 'seeds'],
+      message: 'libs/domain is pure: it imports nothing of the repo (rule 1).',
+    },
     { target: 'libs/annotation', from: ['libs/contracts', 'apps', 'seeds'], message: 'libs/annotation may use only libs/domain (rule 2).' },
     { target: 'libs/contracts', from: ['libs/annotation', 'apps', 'seeds'], message: 'libs/contracts depends only on zod and libs/domain (rule 3).' },
     { target: 'apps/api', from: 'apps/web', message: 'The apps never import each other (rule 4).' },
@@ -21,9 +28,18 @@ export function boundaryZones(root) {
     ...apiFeatures.flatMap((f) =>
       apiFeatures
         .filter((g) => g !== f)
-        .map((g) => ({ target: `apps/api/src/${f}`, from: `apps/api/src/${g}`, except: ['./index.ts'], message: `A feature uses another only through its index.ts (rule 5): import ../${g}.` })),
+        .map((g) => ({
+          target: `apps/api/src/${f}`,
+          from: `apps/api/src/${g}`,
+          except: ['./index.ts'],
+          message: `A feature uses another only through its index.ts (rule 5): import ../${g}.`,
+        })),
     ),
-    { target: ['apps/api/src/core', 'apps/api/src/infra'], from: apiFeatures.map((f) => `apps/api/src/${f}`), message: 'core/ and infra/ never import features (rule 5).' },
+    {
+      target: ['apps/api/src/core', 'apps/api/src/infra'],
+      from: apiFeatures.map((f) => `apps/api/src/${f}`),
+      message: 'core/ and infra/ never import features (rule 5).',
+    },
     ...webFeatures.map((f) => ({
       target: `apps/web/src/features/${f}`,
       from: webFeatures.filter((g) => g !== f).map((g) => `apps/web/src/features/${g}`),
@@ -32,10 +48,21 @@ export function boundaryZones(root) {
     // app/theme.ts is the one exception: component tests render inside the real theme.
     { target: 'apps/web/src/features', from: 'apps/web/src/app', except: ['./theme.ts'], message: 'Features do not reach up into app/ (rule 6).' },
     { target: ['apps/web/src/components', 'apps/web/src/lib'], from: 'apps/web/src/features', message: 'Shared UI and lib know no features (rule 6).' },
-    { target: ['apps/web/src/components', 'apps/web/src/lib'], from: 'apps/web/src/app', except: ['./theme.ts'], message: 'Shared UI and lib know no features or app/ (rule 6).' },
+    {
+      target: ['apps/web/src/components', 'apps/web/src/lib'],
+      from: 'apps/web/src/app',
+      except: ['./theme.ts'],
+      message: 'Shared UI and lib know no features or app/ (rule 6).',
+    },
     {
       // Everything in the web app except features/annotate: its other folders, its root files and the other features.
-      target: [...dirs(root, 'apps/web/src').filter((d) => d !== 'features').map((d) => `apps/web/src/${d}`), 'apps/web/src/*.{ts,tsx}', ...webFeatures.filter((f) => f !== 'annotate').map((f) => `apps/web/src/features/${f}`)],
+      target: [
+        ...dirs(root, 'apps/web/src')
+          .filter((d) => d !== 'features')
+          .map((d) => `apps/web/src/${d}`),
+        'apps/web/src/*.{ts,tsx}',
+        ...webFeatures.filter((f) => f !== 'annotate').map((f) => `apps/web/src/features/${f}`),
+      ],
       from: ['node_modules/react-konva', 'node_modules/konva', 'apps/web/node_modules/react-konva', 'apps/web/node_modules/konva'],
       message: 'Only features/annotate draws with Konva (STYLE.md layout).',
     },

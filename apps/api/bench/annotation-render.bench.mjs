@@ -48,9 +48,16 @@ async function main() {
     for (let i = 0; i < 3; i++) {
       const d = doc(width, height, i);
       const t0 = performance.now();
-      await sharp(print).composite([{ input: Buffer.from(renderSvg(d, { width, height })) }]).jpeg({ quality: 85 }).toBuffer();
+      await sharp(print)
+        .composite([{ input: Buffer.from(renderSvg(d, { width, height })) }])
+        .jpeg({ quality: 85 })
+        .toBuffer();
       bare.push(performance.now() - t0);
-      const saved = await fetch(`${api.base}/api/annotations/${asset.id}`, { method: 'PUT', headers, body: JSON.stringify({ baseVersion: version, document: d }) });
+      const saved = await fetch(`${api.base}/api/annotations/${asset.id}`, {
+        method: 'PUT',
+        headers,
+        body: JSON.stringify({ baseVersion: version, document: d }),
+      });
       if (!saved.ok) throw new Error(`save ${saved.status} ${await saved.text()}`);
       version = (await saved.json()).version;
       const t1 = performance.now();

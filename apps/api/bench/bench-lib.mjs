@@ -6,7 +6,9 @@ import { createServer } from 'node:net';
 
 /** Resident set size of a process in bytes, from /proc/<pid>/status (VmRSS, in kB). */
 export function rssOf(pid) {
-  const line = readFileSync(`/proc/${pid}/status`, 'utf8').split('\n').find((l) => l.startsWith('VmRSS:'));
+  const line = readFileSync(`/proc/${pid}/status`, 'utf8')
+    .split('\n')
+    .find((l) => l.startsWith('VmRSS:'));
   return Number(line.replace(/\D+/g, '')) * 1024;
 }
 
@@ -87,8 +89,14 @@ export async function startDemoApi(root, dir, env = {}) {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   const child = startApi(`${root}/${ENTRY_REL}`, {
-    PORT: String(port), DATABASE_PATH: `${dir}/bench.sqlite`, UPLOADS_DIR: `${dir}/uploads`, WEB_DIST: `${dir}/no-web`,
-    MAIL_CATCHER: 'false', LOG_LEVEL: 'warn', LOGIN_THROTTLE_LIMIT: '1000', ...env,
+    PORT: String(port),
+    DATABASE_PATH: `${dir}/bench.sqlite`,
+    UPLOADS_DIR: `${dir}/uploads`,
+    WEB_DIST: `${dir}/no-web`,
+    MAIL_CATCHER: 'false',
+    LOG_LEVEL: 'warn',
+    LOGIN_THROTTLE_LIMIT: '1000',
+    ...env,
   });
   await waitForHealth(base, child);
   return { base, child, stop: () => new Promise((ok) => (child.exitCode !== null ? ok() : (child.once('exit', ok), child.kill()))) };
@@ -96,9 +104,16 @@ export async function startDemoApi(root, dir, env = {}) {
 
 /** Signs in a demo user; returns the session cookie header and the CSRF token. */
 export async function signIn(base, email = 'desk@lantern-spoke.test') {
-  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: 'bench-demo-2026' }) });
+  const res = await fetch(`${base}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password: 'bench-demo-2026' }),
+  });
   if (!res.ok) throw new Error(`login ${res.status}`);
-  const cookie = res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  const cookie = res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
   const { csrfToken } = await res.json();
   return { cookie, csrf: csrfToken };
 }

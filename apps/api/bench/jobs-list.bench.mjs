@@ -17,7 +17,11 @@ const { seedBulkRecords } = require(join(root, 'dist/apps/api/apps/api/src/seed/
 const JOBS = Number(process.env.BENCH_JOBS ?? 10_000);
 
 const load = (url, headers) =>
-  new Promise((ok, fail) => autocannon({ url, connections: 50, duration: 5, headers }, (err, r) => (err ? fail(err) : ok({ rps: r.requests.average, p99: r.latency.p99, errors: r.errors + r.non2xx }))));
+  new Promise((ok, fail) =>
+    autocannon({ url, connections: 50, duration: 5, headers }, (err, r) =>
+      err ? fail(err) : ok({ rps: r.requests.average, p99: r.latency.p99, errors: r.errors + r.non2xx }),
+    ),
+  );
 
 function bareServer(payload) {
   const app = express();

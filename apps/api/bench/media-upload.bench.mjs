@@ -27,7 +27,10 @@ async function bareRun(dir, file) {
   const rss = sampleRss(child.pid);
   const t0 = process.hrtime.bigint();
   await new Promise((ok, fail) => {
-    const req = request({ host: '127.0.0.1', port, method: 'POST', path: '/', headers: { 'Content-Length': SIZE } }, (res) => (res.resume(), res.on('end', ok)));
+    const req = request(
+      { host: '127.0.0.1', port, method: 'POST', path: '/', headers: { 'Content-Length': SIZE } },
+      (res) => (res.resume(), res.on('end', ok)),
+    );
     req.on('error', fail);
     pipeline(createReadStream(file), req).catch(fail);
   });
@@ -38,9 +41,16 @@ async function bareRun(dir, file) {
 }
 
 async function login(base) {
-  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'tobin@lantern-spoke.test', password: 'bench-demo-2026' }) });
+  const res = await fetch(`${base}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'tobin@lantern-spoke.test', password: 'bench-demo-2026' }),
+  });
   if (!res.ok) throw new Error(`login ${res.status}`);
-  const cookie = res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  const cookie = res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
   const { csrfToken } = await res.json();
   const jobs = await (await fetch(`${base}/api/jobs?pageSize=1`, { headers: { cookie } })).json();
   return { cookie, csrf: csrfToken, jobId: (jobs.items ?? jobs)[0].id };
@@ -50,8 +60,12 @@ async function apiRun(dir, file) {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   const child = startApi(ENTRY, {
-    PORT: String(port), DATABASE_PATH: join(dir, 'bench.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), WEB_DIST: join(dir, 'no-web'),
-    MAX_VIDEO_BYTES: String(4 * 1024 ** 3), MAIL_CATCHER: 'false',
+    PORT: String(port),
+    DATABASE_PATH: join(dir, 'bench.sqlite'),
+    UPLOADS_DIR: join(dir, 'uploads'),
+    WEB_DIST: join(dir, 'no-web'),
+    MAX_VIDEO_BYTES: String(4 * 1024 ** 3),
+    MAIL_CATCHER: 'false',
   });
   try {
     await waitForHealth(base, child);
@@ -90,11 +104,27 @@ async function main() {
     const bare = await bareRun(dir, file);
     rmSync(join(dir, 'upload-0'), { force: true });
     const api = await apiRun(dir, file);
-    const rows = [bare, api].map((r) => ({ run: r.name, 'MB/s': (SIZE / MB / r.secs).toFixed(1), seconds: r.secs.toFixed(2), 'peak RSS growth MB': (r.growth / MB).toFixed(1) }));
+    const rows = [bare, api].map((r) => ({
+      run: r.name,
+      'MB/s': (SIZE / MB / r.secs).toFixed(1),
+      seconds: r.secs.toFixed(2),
+      'peak RSS growth MB': (r.growth / MB).toFixed(1),
+    }));
     console.table(rows);
-    console.log(`throughput ratio (tus / bare): ${(bare.secs / api.secs).toFixed(2)}   RSS growth ratio: ${(api.growth / Math.max(bare.growth, 1)).toFixed(2)}`);
+    console.log(
+      `throughput ratio (tus / bare): ${(bare.secs / api.secs).toFixed(2)}   RSS growth ratio: ${(api.growth / Math.max(bare.growth, 1)).toFixed(2)}`,
+    );
     const mbps = (r) => SIZE / MB / r.secs;
-    emitRow(atLeast(`${(SIZE / MB).toFixed(0)} MB upload (tus) vs bare stream to disk`, mbps(bare), mbps(api), 'MB/s', 0.5, `, RSS +${(api.growth / MB).toFixed(0)} MB`));
+    emitRow(
+      atLeast(
+        `${(SIZE / MB).toFixed(0)} MB upload (tus) vs bare stream to disk`,
+        mbps(bare),
+        mbps(api),
+        'MB/s',
+        0.5,
+        `, RSS +${(api.growth / MB).toFixed(0)} MB`,
+      ),
+    );
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -7,7 +7,10 @@ export async function phonePhoto(seed = 0) {
   const h = 3000;
   const tile = Buffer.alloc(400 * 300 * 3);
   for (let i = 0; i < tile.length; i++) tile[i] = (i * 7 + seed * 13 + ((i / 1200) | 0) * 3) % 251;
-  const noise = await sharp(tile, { raw: { width: 400, height: 300, channels: 3 } }).resize(w, h, { kernel: 'cubic' }).png().toBuffer();
+  const noise = await sharp(tile, { raw: { width: 400, height: 300, channels: 3 } })
+    .resize(w, h, { kernel: 'cubic' })
+    .png()
+    .toBuffer();
   return sharp(noise)
     .withMetadata({ orientation: 6 })
     .withExif({ IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' } })

@@ -33,9 +33,11 @@ async function uploadAndWait(api, s, jobId, buf, name) {
 
 async function pool(items, n, fn) {
   const queue = [...items];
-  await Promise.all(Array.from({ length: n }, async () => {
-    while (queue.length) await fn(queue.shift());
-  }));
+  await Promise.all(
+    Array.from({ length: n }, async () => {
+      while (queue.length) await fn(queue.shift());
+    }),
+  );
 }
 
 async function main() {
@@ -71,7 +73,11 @@ async function main() {
     const idleBefore = rssOf(api.child.pid);
     const burst = await medianOf3(async (run) => {
       const t0 = performance.now();
-      await pool(photos.map((p, i) => [p, i]), 4, ([p, i]) => uploadAndWait(api, s, jobId, p, `burst-${run}-${i}.jpg`));
+      await pool(
+        photos.map((p, i) => [p, i]),
+        4,
+        ([p, i]) => uploadAndWait(api, s, jobId, p, `burst-${run}-${i}.jpg`),
+      );
       return { rate: 20 / ((performance.now() - t0) / 1000) };
     }, 'rate');
     await sleep(5000);

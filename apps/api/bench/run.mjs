@@ -6,7 +6,15 @@ import { fileURLToPath } from 'node:url';
 import { printTable } from './table.mjs';
 
 const here = dirname(fileURLToPath(import.meta.url));
-const BENCHES = ['jobs-list.bench.mjs', 'photo.bench.mjs', 'media-serve.bench.mjs', 'web-load.bench.mjs', 'annotation-render.bench.mjs', 'report.bench.mjs', 'media-upload.bench.mjs'];
+const BENCHES = [
+  'jobs-list.bench.mjs',
+  'photo.bench.mjs',
+  'media-serve.bench.mjs',
+  'web-load.bench.mjs',
+  'annotation-render.bench.mjs',
+  'report.bench.mjs',
+  'media-upload.bench.mjs',
+];
 const only = process.argv.slice(2);
 const rows = [];
 

@@ -19,13 +19,27 @@ export async function medianOf3(fn, key) {
 /** A row where higher product/baseline is better (throughput), target as a minimum ratio. */
 export function atLeast(benchmark, baseline, product, unit, minRatio, extra = '') {
   const ratio = product / baseline;
-  return { benchmark, baseline: `${fmt(baseline)} ${unit}`, product: `${fmt(product)} ${unit}${extra}`, ratio: ratio.toFixed(2), target: `≥ ${minRatio}×`, met: ratio >= minRatio };
+  return {
+    benchmark,
+    baseline: `${fmt(baseline)} ${unit}`,
+    product: `${fmt(product)} ${unit}${extra}`,
+    ratio: ratio.toFixed(2),
+    target: `≥ ${minRatio}×`,
+    met: ratio >= minRatio,
+  };
 }
 
 /** A row where lower is better (time, memory), target as a maximum ratio to the baseline. */
 export function atMost(benchmark, baseline, product, unit, maxRatio, extra = '') {
   const ratio = product / baseline;
-  return { benchmark, baseline: `${fmt(baseline)} ${unit}`, product: `${fmt(product)} ${unit}${extra}`, ratio: ratio.toFixed(2), target: `≤ ${maxRatio}×`, met: ratio <= maxRatio };
+  return {
+    benchmark,
+    baseline: `${fmt(baseline)} ${unit}`,
+    product: `${fmt(product)} ${unit}${extra}`,
+    ratio: ratio.toFixed(2),
+    target: `≤ ${maxRatio}×`,
+    met: ratio <= maxRatio,
+  };
 }
 
 export const fmt = (n) => (n >= 100 ? n.toFixed(0) : n >= 10 ? n.toFixed(1) : n.toFixed(2));

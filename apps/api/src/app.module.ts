@@ -29,7 +29,26 @@ import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
-const FEATURES = [AuditModule, AuthModule, UsersModule, ShopsModule, MediaModule, CustomersModule, BikesModule, JobsModule, InspectionModule, FindingsModule, WorkLogModule, PairsModule, ConsentModule, OwnerModule, AnnotationsModule, ReportsModule, MailModule, ShowcaseModule];
+const FEATURES = [
+  AuditModule,
+  AuthModule,
+  UsersModule,
+  ShopsModule,
+  MediaModule,
+  CustomersModule,
+  BikesModule,
+  JobsModule,
+  InspectionModule,
+  FindingsModule,
+  WorkLogModule,
+  PairsModule,
+  ConsentModule,
+  OwnerModule,
+  AnnotationsModule,
+  ReportsModule,
+  MailModule,
+  ShowcaseModule,
+];
 
 @Module({})
 export class AppModule {

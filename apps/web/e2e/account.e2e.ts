@@ -12,7 +12,10 @@ describe('changing your own password', () => {
     await b.page.getByLabel('Current password', { exact: true }).fill('not-the-password');
     await b.page.getByLabel('New password', { exact: true }).fill('a-long-new-password');
     await b.page.getByRole('button', { name: 'Change password' }).click();
-    await b.page.getByText('The current password is not right.').waitFor({ timeout: 10_000 }).finally(() => shot(b.page, 'password-wrong-current-phone'));
+    await b.page
+      .getByText('The current password is not right.')
+      .waitFor({ timeout: 10_000 })
+      .finally(() => shot(b.page, 'password-wrong-current-phone'));
     // Still signed in: a wrong current password is a field problem, not a lost session.
     expect(new URL(b.page.url()).pathname).toBe('/account/password');
   });

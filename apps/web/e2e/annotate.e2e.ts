@@ -35,7 +35,10 @@ async function pinchOut(page: Page) {
   const cx = box.x + box.width / 2;
   const cy = box.y + box.height / 2;
   const cdp = await page.context().newCDPSession(page);
-  const at = (d: number) => [{ x: cx - d, y: cy, id: 1 }, { x: cx + d, y: cy, id: 2 }];
+  const at = (d: number) => [
+    { x: cx - d, y: cy, id: 1 },
+    { x: cx + d, y: cy, id: 2 },
+  ];
   await cdp.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: at(40) });
   for (const d of [60, 90, 120, 150]) await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: at(d) });
   await cdp.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
@@ -107,7 +110,7 @@ describe('annotate a photo on a tablet with touch', () => {
 
     // Same picture on both sides: the editor's export and the server's render of the saved version, same size.
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download the annotated image' }).click()]);
-    const editor = readFileSync((await download.path()));
+    const editor = readFileSync(await download.path());
     const server = Buffer.from(await (await page.request.get(`/api/media/${mediaId}/annotated/screen`)).body());
     const plain = Buffer.from(await (await page.request.get(`/api/media/${mediaId}/screen`)).body());
     // The mask: pixels the server render changed by more than 48 (sum over channels) from the plain photo.
@@ -118,8 +121,16 @@ describe('annotate a photo on a tablet with touch', () => {
       const d = Math.abs(data[i] - bare[i]) + Math.abs(data[i + 1] - bare[i + 1]) + Math.abs(data[i + 2] - bare[i + 2]);
       if (d > 48) mask.fill(255, i, i + 3);
     }
-    const diff = await difference(editor, server, await sharp(mask, { raw: { width: info.width, height: info.height, channels: 3 } }).png().toBuffer());
-    console.info(`editor vs server: mean abs diff ${diff.all.toFixed(2)} over all pixels, ${diff.marked.toFixed(2)} over ${diff.markedPixels} annotation pixels`);
+    const diff = await difference(
+      editor,
+      server,
+      await sharp(mask, { raw: { width: info.width, height: info.height, channels: 3 } })
+        .png()
+        .toBuffer(),
+    );
+    console.info(
+      `editor vs server: mean abs diff ${diff.all.toFixed(2)} over all pixels, ${diff.marked.toFixed(2)} over ${diff.markedPixels} annotation pixels`,
+    );
     expect(diff.markedPixels).toBeGreaterThan(1000);
     // Stated tolerances (0–255 per channel): whole image ≤ 3 (JPEG re-encoding, anti-aliasing);
     // annotation pixels ≤ 30 (stroke edges and glyph shapes differ between Chromium canvas and librsvg).
@@ -134,14 +145,18 @@ describe('annotate a photo on a tablet with touch', () => {
   it.each([
     ['phone', PHONE],
     ['desktop', DESKTOP],
-  ] as const)('shows the editor on a %s', async (name, viewport) => {
-    b = await openBrowser(viewport, { touch: name === 'phone' });
-    await signIn(b.page, MECHANIC);
-    const { jobId, mediaId } = await demoPhoto(b.page);
-    await b.page.goto(`/jobs/${jobId}/media/${mediaId}/annotate`);
-    await b.page.getByTestId('annotate-stage').waitFor();
-    await b.page.getByTestId('save-state').waitFor();
-    await b.page.locator('[data-testid="annotate-stage"] canvas').first().waitFor();
-    await shot(b.page, `annotate-${name}`);
-  }, 120_000);
+  ] as const)(
+    'shows the editor on a %s',
+    async (name, viewport) => {
+      b = await openBrowser(viewport, { touch: name === 'phone' });
+      await signIn(b.page, MECHANIC);
+      const { jobId, mediaId } = await demoPhoto(b.page);
+      await b.page.goto(`/jobs/${jobId}/media/${mediaId}/annotate`);
+      await b.page.getByTestId('annotate-stage').waitFor();
+      await b.page.getByTestId('save-state').waitFor();
+      await b.page.locator('[data-testid="annotate-stage"] canvas').first().waitFor();
+      await shot(b.page, `annotate-${name}`);
+    },
+    120_000,
+  );
 });

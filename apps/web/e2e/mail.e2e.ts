@@ -12,13 +12,14 @@ const root = resolve(import.meta.dirname, '../../..');
 const DEMO_DESK = 'desk@lantern-spoke.test';
 const DEMO_PASSWORD = 'bench-demo-2026';
 
-const freePort = () => new Promise<number>((ok) => {
-  const srv = createServer();
-  srv.listen(0, '127.0.0.1', () => {
-    const { port } = srv.address() as { port: number };
-    srv.close(() => ok(port));
+const freePort = () =>
+  new Promise<number>((ok) => {
+    const srv = createServer();
+    srv.listen(0, '127.0.0.1', () => {
+      const { port } = srv.address() as { port: number };
+      srv.close(() => ok(port));
+    });
   });
-});
 
 function start(args: string[], env: Record<string, string>, readyText: string): Promise<ChildProcess> {
   const proc = spawn(process.execPath, args, { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'inherit'] });
@@ -46,10 +47,22 @@ describe('mail: failed report e-mail, resend, and the local inbox', () => {
 
   it('shows the failure, resends, and the owner’s e-mail with the PDF appears in the inbox', async () => {
     const [httpPort, smtpPort, inboxPort] = [await freePort(), await freePort(), await freePort()];
-    procs.push(await start([join(root, 'apps/api/test/support/mail-child.cjs')], {
-      PORT: String(httpPort), DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-      TEST_REPORT_FILE: join(dir, 'report.json'), MAIL_MAX_ATTEMPTS: '1', MAIL_SWEEP_MS: '200', LOGIN_THROTTLE_LIMIT: '1000',
-    }, 'ready'));
+    procs.push(
+      await start(
+        [join(root, 'apps/api/test/support/mail-child.cjs')],
+        {
+          PORT: String(httpPort),
+          DATABASE_PATH: join(dir, 'db.sqlite'),
+          UPLOADS_DIR: join(dir, 'uploads'),
+          SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+          TEST_REPORT_FILE: join(dir, 'report.json'),
+          MAIL_MAX_ATTEMPTS: '1',
+          MAIL_SWEEP_MS: '200',
+          LOGIN_THROTTLE_LIMIT: '1000',
+        },
+        'ready',
+      ),
+    );
     const base = `http://127.0.0.1:${httpPort}`;
     browser = await openBrowser(PHONE);
     const { page, context } = browser;
@@ -57,10 +70,14 @@ describe('mail: failed report e-mail, resend, and the local inbox', () => {
     const headers = { 'x-csrf-token': ((await login.json()) as { csrfToken: string }).csrfToken };
     const jobs = (await (await context.request.get(`${base}/api/jobs?pageSize=50`)).json()) as { items: { id: number; status: string; number: string }[] };
     const job = jobs.items.find((j) => j.status === 'ready') ?? jobs.items[0];
-    const pdf = await renderToBuffer(createElement(Document, null, createElement(PdfPage, { size: 'A4' }, createElement(Text, null, `Bench report ${job.number}`))));
+    const pdf = await renderToBuffer(
+      createElement(Document, null, createElement(PdfPage, { size: 'A4' }, createElement(Text, null, `Bench report ${job.number}`))),
+    );
     writeFileSync(join(dir, 'report.pdf'), pdf);
     writeFileSync(join(dir, 'report.json'), JSON.stringify({ reportId: 1, jobId: job.id, pdf: join(dir, 'report.pdf') }));
-    expect((await context.request.post(`${base}/api/jobs/${job.id}/reports/1/send`, { headers, data: { to: 'owner.browser@example.test' } })).status()).toBe(202);
+    expect((await context.request.post(`${base}/api/jobs/${job.id}/reports/1/send`, { headers, data: { to: 'owner.browser@example.test' } })).status()).toBe(
+      202,
+    );
 
     await page.goto(`${base}/jobs/${job.id}`);
     await page.getByText('An e-mail to the owner was not delivered').waitFor({ timeout: 20_000 });
@@ -69,7 +86,9 @@ describe('mail: failed report e-mail, resend, and the local inbox', () => {
     await page.getByText('Not delivered').waitFor();
     await shot(page, 'mail-failed-phone');
 
-    procs.push(await start([join(root, 'apps/api/scripts/mail-catcher.mjs')], { MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(inboxPort) }, 'inbox at'));
+    procs.push(
+      await start([join(root, 'apps/api/scripts/mail-catcher.mjs')], { MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(inboxPort) }, 'inbox at'),
+    );
     await page.getByRole('button', { name: 'Send again' }).click();
     await page.getByText('Delivered to mail server').waitFor({ timeout: 20_000 });
     await shot(page, 'mail-delivered-phone');

@@ -74,7 +74,10 @@ describe('media on a phone', () => {
     await b.page.waitForFunction((t) => document.querySelector('[data-testid="viewer-position"]')?.textContent !== t, first);
     expect(await position.textContent()).toBe(`${k + 1} of ${n}`);
     await b.page.getByTestId('viewer-image').waitFor();
-    await b.page.getByTestId('media-details').getByText(/SHA-256 [0-9a-f]{12}…/).waitFor();
+    await b.page
+      .getByTestId('media-details')
+      .getByText(/SHA-256 [0-9a-f]{12}…/)
+      .waitFor();
     await shot(b.page, 'viewer-phone');
     await swipe(b.page, 60, 320);
     await b.page.getByText(`${k} of ${n}`, { exact: true }).waitFor();

@@ -93,7 +93,10 @@ describe('the owner page: desk sends the link, the owner decides and consents, d
 
     // The findings section shows the same decisions with their channel.
     await desk.page.getByRole('tab', { name: 'Findings & estimate' }).click();
-    await desk.page.getByText(/Approved/).first().waitFor();
+    await desk.page
+      .getByText(/Approved/)
+      .first()
+      .waitFor();
     await snap(desk.page, 'owner-desk-findings');
   }, 180_000);
 

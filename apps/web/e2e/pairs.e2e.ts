@@ -68,11 +68,16 @@ describe('before/after pairs', () => {
     await first.getByRole('button', { name: 'Pair these' }).click();
     await b.page.getByTestId('pair-card').first().waitFor();
     // The paired shots leave the suggestions.
-    await b.page.waitForFunction((alt) => ![...document.querySelectorAll('[data-testid="pair-suggestion"] img')].some((i) => i.getAttribute('alt') === alt), beforeAlt);
+    await b.page.waitForFunction(
+      (alt) => ![...document.querySelectorAll('[data-testid="pair-suggestion"] img')].some((i) => i.getAttribute('alt') === alt),
+      beforeAlt,
+    );
 
     const slider = b.page.getByTestId('compare-slider');
     await slider.scrollIntoViewIfNeeded();
-    await b.page.waitForFunction(() => [...document.querySelectorAll('[data-testid="compare-slider"] img')].every((i) => (i as HTMLImageElement).naturalWidth > 0));
+    await b.page.waitForFunction(() =>
+      [...document.querySelectorAll('[data-testid="compare-slider"] img')].every((i) => (i as HTMLImageElement).naturalWidth > 0),
+    );
     expect(await divider(b.page)).toBe(50);
 
     await touchDrag(b.page, 0.5, 0.2);
@@ -95,7 +100,9 @@ describe('before/after pairs', () => {
     const jobId = pairedJobId ?? (await jobWithShots(b.page));
     await b.page.goto(`/jobs/${jobId}?section=pairs`);
     await b.page.getByTestId('pair-card').first().waitFor();
-    await b.page.waitForFunction(() => [...document.querySelectorAll('[data-testid="compare-slider"] img')].every((i) => (i as HTMLImageElement).naturalWidth > 0));
+    await b.page.waitForFunction(() =>
+      [...document.querySelectorAll('[data-testid="compare-slider"] img')].every((i) => (i as HTMLImageElement).naturalWidth > 0),
+    );
 
     await b.page.getByTestId('compare-slider').first().scrollIntoViewIfNeeded();
     await mouseDrag(b.page, 0.5, 0.75);

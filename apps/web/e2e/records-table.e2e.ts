@@ -53,7 +53,10 @@ describe('the jobs table and the moves a job offers', () => {
     expect(statuses.length).toBeGreaterThan(0);
     expect(new Set(statuses)).toEqual(new Set(['Booked in']));
     expect(await b.page.getByText(/^\d+ jobs?$/).textContent()).toBe(`${statuses.length} job${statuses.length === 1 ? '' : 's'}`);
-    await rows.filter({ hasText: /Overdue · / }).first().waitFor();
+    await rows
+      .filter({ hasText: /Overdue · / })
+      .first()
+      .waitFor();
     await snap(b.page, 'records-jobs-filter-desktop');
 
     // A second status adds its jobs; clearing brings every status back.
@@ -69,7 +72,10 @@ describe('the jobs table and the moves a job offers', () => {
     b = await openBrowser(PHONE);
     await signIn(b.page, DESK);
     await b.page.goto('/jobs?status=booked_in');
-    const overdueCard = b.page.getByRole('link', { name: /^Job J-/ }).filter({ hasText: /Overdue · / }).first();
+    const overdueCard = b.page
+      .getByRole('link', { name: /^Job J-/ })
+      .filter({ hasText: /Overdue · / })
+      .first();
     await overdueCard.waitFor();
     const edge = await overdueCard.locator('.mantine-Card-root').evaluate((c) => getComputedStyle(c).borderLeftWidth);
     expect(edge).toBe('6px');
@@ -81,14 +87,22 @@ describe('the jobs table and the moves a job offers', () => {
     b = await openBrowser(PHONE);
     await signIn(b.page, TOBIN);
     await b.page.goto(`/jobs/${job.id}`);
-    for (const [status, next] of [['booked_in', 'on_stand'], ['on_stand', 'waiting_owner'], ['waiting_owner', 'in_work'], ['in_work', null]] as const) {
+    for (const [status, next] of [
+      ['booked_in', 'on_stand'],
+      ['on_stand', 'waiting_owner'],
+      ['waiting_owner', 'in_work'],
+      ['in_work', null],
+    ] as const) {
       await headerStatus(b.page, JOB_STATUS_LABELS[status]);
       const want = expectedMoves(status);
       expect(await jobHeader(b.page).getByRole('button', { name: want.primary!, exact: true }).isVisible()).toBe(true);
       expect(await menuItems(b.page)).toEqual(want.others);
       // A move that is not allowed from here is not on offer (e.g. straight to Ready).
       expect(want.others).not.toContain('Mark ready');
-      if (next) await jobHeader(b.page).getByRole('button', { name: nextAction(status)!.label, exact: true }).click();
+      if (next)
+        await jobHeader(b.page)
+          .getByRole('button', { name: nextAction(status)!.label, exact: true })
+          .click();
     }
   });
 

@@ -65,7 +65,9 @@ describe('the workshop records: booking-in to In work', () => {
 
     await desk.page.waitForURL(/\/jobs\/\d+$/);
     const jobPath = new URL(desk.page.url()).pathname;
-    const numberText = await jobHeader(desk.page).getByText(/^Job J-\d{4}-\d{4}$/).textContent();
+    const numberText = await jobHeader(desk.page)
+      .getByText(/^Job J-\d{4}-\d{4}$/)
+      .textContent();
     const jobNumber = numberText!.replace(/^Job /, '');
     expect(jobNumber).toMatch(new RegExp(`^J-${new Date().getFullYear()}-\\d{4}$`));
     await desk.page.getByText(`Booked in as ${jobNumber}`).waitFor();
@@ -183,7 +185,11 @@ describe('the workshop records: booking-in to In work', () => {
     await deskFinding.getByText(/recorded by Dev Okonjo-Hale/).waitFor();
     const badge = deskFinding.locator('.mantine-Badge-root').filter({ hasText: /^Approved$/ });
     await badge.first().waitFor();
-    const totalCard = (label: string) => deskPc.page.locator('.mantine-Paper-root:not(.mantine-Card-root)').filter({ has: deskPc.page.getByText(label, { exact: true }) }).filter({ hasText: /item\(s\)|tax/ });
+    const totalCard = (label: string) =>
+      deskPc.page
+        .locator('.mantine-Paper-root:not(.mantine-Card-root)')
+        .filter({ has: deskPc.page.getByText(label, { exact: true }) })
+        .filter({ hasText: /item\(s\)|tax/ });
     await totalCard('Approved').getByText(gbp(EXPECTED.grossMinor), { exact: true }).waitFor();
     expect(await totalCard('Approved').textContent()).toContain('1 item(s)');
     expect(await totalCard('Waiting').textContent()).toContain('£0.00');
@@ -211,11 +217,17 @@ describe('the workshop records: booking-in to In work', () => {
     await b.page.getByRole('link', { name: /Stratus 11/ }).click();
     await b.page.waitForURL(/\/bikes\/\d+$/);
     await b.page.getByRole('heading', { name: 'Wear across visits' }).waitFor();
-    const chain = b.page.locator('.mantine-Paper-root').filter({ has: b.page.getByRole('heading', { name: /Chain/ }) }).first();
+    const chain = b.page
+      .locator('.mantine-Paper-root')
+      .filter({ has: b.page.getByRole('heading', { name: /Chain/ }) })
+      .first();
     await chain.locator('svg .recharts-line').first().waitFor();
     const readings = (await chain.getByText(/J-\d{4}-\d{4}: /).textContent()) ?? '';
     expect(readings.match(/J-\d{4}-\d{4}: [\d.]+ %/g)).toHaveLength(3);
-    await b.page.getByText(/Replace at 0\.5 %/).first().waitFor();
+    await b.page
+      .getByText(/Replace at 0\.5 %/)
+      .first()
+      .waitFor();
     expect(await b.page.getByRole('table').getByRole('row').count()).toBe(4); // header + three visits
     await snap(b.page, 'records-bike-history-desktop');
   });

@@ -6,10 +6,14 @@ const MECHANIC = 'tobin@lantern-spoke.test';
 
 /** Chromium's fake camera (--use-fake-device-for-media-stream) is playing once frames have a size. */
 async function waitForLivePicture(page: Page) {
-  await page.waitForFunction(() => {
-    const v = document.querySelector<HTMLVideoElement>('[data-testid="live-video"]');
-    return Boolean(v && v.videoWidth > 0 && v.readyState >= 2);
-  }, undefined, { timeout: 20_000 });
+  await page.waitForFunction(
+    () => {
+      const v = document.querySelector<HTMLVideoElement>('[data-testid="live-video"]');
+      return Boolean(v && v.videoWidth > 0 && v.readyState >= 2);
+    },
+    undefined,
+    { timeout: 20_000 },
+  );
 }
 
 describe('scope capture', () => {

@@ -33,8 +33,13 @@ describe('showcase: only consented pairs; export; the owner revokes and the pair
     expect(items.length).toBeGreaterThan(0);
     expect(await cards.count()).toBe(items.length);
     const jobId = items[0].jobId;
-    await mgr.page.getByText(/^Consent .* make & model may be named$/).first().waitFor();
-    await mgr.page.waitForFunction(() => [...document.querySelectorAll('[data-testid=showcase-item] img')].every((i) => (i as HTMLImageElement).naturalWidth > 0));
+    await mgr.page
+      .getByText(/^Consent .* make & model may be named$/)
+      .first()
+      .waitFor();
+    await mgr.page.waitForFunction(() =>
+      [...document.querySelectorAll('[data-testid=showcase-item] img')].every((i) => (i as HTMLImageElement).naturalWidth > 0),
+    );
     await snap(mgr.page, 'showcase-library-desktop');
 
     // Square, both shots composed (the defaults), one tap: the file downloads.

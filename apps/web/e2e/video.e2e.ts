@@ -63,11 +63,14 @@ describe('video from a phone', () => {
     // The server has no video decoder: the poster arrives from the browser after the upload.
     let video: Asset | undefined;
     await expect
-      .poll(async () => {
-        const videos = await videosOf(b.page, jobId);
-        video = videos.find((v) => v.urls.poster);
-        return { count: videos.length, poster: Boolean(video) };
-      }, { timeout: 30_000, interval: 500 })
+      .poll(
+        async () => {
+          const videos = await videosOf(b.page, jobId);
+          video = videos.find((v) => v.urls.poster);
+          return { count: videos.length, poster: Boolean(video) };
+        },
+        { timeout: 30_000, interval: 500 },
+      )
       .toEqual({ count: before + 1, poster: true });
     expect(video).toMatchObject({ kind: 'video', mime: 'video/webm' });
     const poster = await b.page.request.get(video!.urls.poster!);

@@ -9,7 +9,10 @@ describe('annotation document versions', () => {
   });
 
   it('keeps a current document as it is', () => {
-    const doc = { ...emptyDocument(4000, 3000), shapes: [{ id: 'a', kind: 'ring', colour: 'cyan', width: 'bold', centre: { x: 0.5, y: 0.5 }, rx: 0.1, ry: 0.1 }] };
+    const doc = {
+      ...emptyDocument(4000, 3000),
+      shapes: [{ id: 'a', kind: 'ring', colour: 'cyan', width: 'bold', centre: { x: 0.5, y: 0.5 }, rx: 0.1, ry: 0.1 }],
+    };
     expect(migrateDocument(JSON.parse(JSON.stringify(doc)))).toEqual(doc);
   });
 

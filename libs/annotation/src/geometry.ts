@@ -85,8 +85,10 @@ export function hitsShape(shape: Shape, pointPx: Point, size: Size, tolerancePx:
     case 'scale':
       return distanceToSegment(pointPx, px(shape.from), px(shape.to)) <= tolerancePx;
     case 'pen':
-      return shape.points.some((p, i) => i > 0 && distanceToSegment(pointPx, px(shape.points[i - 1]), px(p)) <= tolerancePx) ||
-        (shape.points.length === 1 && Math.hypot(pointPx.x - px(shape.points[0]).x, pointPx.y - px(shape.points[0]).y) <= tolerancePx);
+      return (
+        shape.points.some((p, i) => i > 0 && distanceToSegment(pointPx, px(shape.points[i - 1]), px(p)) <= tolerancePx) ||
+        (shape.points.length === 1 && Math.hypot(pointPx.x - px(shape.points[0]).x, pointPx.y - px(shape.points[0]).y) <= tolerancePx)
+      );
     case 'label':
     case 'blur': {
       const b = boundingBox(shape);

@@ -28,7 +28,13 @@ export function endTicks(from: Point, to: Point, stroke: number): [Point, Point]
   const len = Math.hypot(to.x - from.x, to.y - from.y) || 1;
   const nx = (-(to.y - from.y) / len) * 3 * stroke;
   const ny = ((to.x - from.x) / len) * 3 * stroke;
-  return [from, to].map((p) => [{ x: p.x - nx, y: p.y - ny }, { x: p.x + nx, y: p.y + ny }] as [Point, Point]);
+  return [from, to].map(
+    (p) =>
+      [
+        { x: p.x - nx, y: p.y - ny },
+        { x: p.x + nx, y: p.y + ny },
+      ] as [Point, Point],
+  );
 }
 
 /** The caption drawn beside a ruler or scale line, or on a label. */

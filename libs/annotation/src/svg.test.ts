@@ -8,13 +8,27 @@ const shapes: Shape[] = [
   { ...base, id: 's', kind: 'scale', from: { x: 0.1, y: 0.9 }, to: { x: 0.3, y: 0.9 }, knownMm: 10 },
   { ...base, id: 'g', kind: 'ring', centre: { x: 0.5, y: 0.5 }, rx: 0.1, ry: 0.2 },
   { ...base, id: 'a', kind: 'arrow', from: { x: 0.1, y: 0.1 }, to: { x: 0.4, y: 0.1 } },
-  { ...base, id: 'p', kind: 'pen', points: [{ x: 0, y: 0 }, { x: 0.5, y: 0.5 }, { x: 1, y: 0 }] },
+  {
+    ...base,
+    id: 'p',
+    kind: 'pen',
+    points: [
+      { x: 0, y: 0 },
+      { x: 0.5, y: 0.5 },
+      { x: 1, y: 0 },
+    ],
+  },
   { ...base, id: 'l', kind: 'label', at: { x: 0.5, y: 0.2 }, text: 'Crack <2 mm> & wear' },
   { ...base, id: 'r', kind: 'ruler', from: { x: 0.1, y: 0.7 }, to: { x: 0.45, y: 0.7 } },
   { ...base, id: 'b', kind: 'blur', topLeft: { x: 0.8, y: 0.8 }, bottomRight: { x: 0.9, y: 0.9 } },
 ];
 const doc: AnnotationDocument = { schemaVersion: 2, image: size, shapes };
-const svgOf = (id: string) => shapeToSvg(doc, shapes.find((s) => s.id === id)!, size);
+const svgOf = (id: string) =>
+  shapeToSvg(
+    doc,
+    shapes.find((s) => s.id === id)!,
+    size,
+  );
 
 describe('SVG rendering', () => {
   it('is an SVG of exactly the image size, so it composites pixel for pixel', () => {
@@ -52,6 +66,12 @@ describe('SVG rendering', () => {
 
   it('says so on a ruler while the photo has no scale', () => {
     const noScale = { ...doc, shapes: shapes.filter((s) => s.kind !== 'scale') };
-    expect(shapeToSvg(noScale, shapes.find((s) => s.id === 'r')!, size)).toContain('>no scale</text>');
+    expect(
+      shapeToSvg(
+        noScale,
+        shapes.find((s) => s.id === 'r')!,
+        size,
+      ),
+    ).toContain('>no scale</text>');
   });
 });

@@ -34,7 +34,9 @@ function lineMark(doc: AnnotationDocument, shape: Shape & { from: Point; to: Poi
   const b = toPixel(shape.to, size);
   const w = strokePx(shape.width, size);
   const dash = dashed ? ` stroke-dasharray="${f(3 * w)} ${f(2 * w)}"` : '';
-  const ticks = endTicks(a, b, w).map(([p, q]) => twice(line(p, q), shape, size)).join('');
+  const ticks = endTicks(a, b, w)
+    .map(([p, q]) => twice(line(p, q), shape, size))
+    .join('');
   const text = captionOf(doc, shape);
   const cap = text ? caption(text, captionAnchor(a, b, fontPx(size)), shape, size) : '';
   return twice(line(a, b, dash), shape, size) + ticks + cap;
@@ -54,11 +56,16 @@ export function shapeToSvg(doc: AnnotationDocument, shape: Shape, size: Size): s
       const b = toPixel(shape.to, size);
       const w = strokePx(shape.width, size);
       const head = arrowHead(a, b, w);
-      const headSvg = (s: string, sw: number) => `<polygon points="${pts(head)}" fill="${PALETTE[shape.colour].ink}" stroke="${s}" stroke-width="${f(sw - w)}"/>`;
+      const headSvg = (s: string, sw: number) =>
+        `<polygon points="${pts(head)}" fill="${PALETTE[shape.colour].ink}" stroke="${s}" stroke-width="${f(sw - w)}"/>`;
       return twice(line(a, arrowShaftEnd(a, b, w)), shape, size) + headSvg(PALETTE[shape.colour].outline, outlinePx(shape.width, size));
     }
     case 'pen':
-      return twice((s, w) => `<polyline points="${pts(shape.points.map((p) => toPixel(p, size)))}" fill="none" stroke="${s}" stroke-width="${f(w)}"/>`, shape, size);
+      return twice(
+        (s, w) => `<polyline points="${pts(shape.points.map((p) => toPixel(p, size)))}" fill="none" stroke="${s}" stroke-width="${f(w)}"/>`,
+        shape,
+        size,
+      );
     case 'label':
       return caption(shape.text, toPixel(shape.at, size), shape, size);
     case 'ruler':

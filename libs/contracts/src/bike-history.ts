@@ -29,8 +29,6 @@ export const BikeHistorySchema = z.object({
   jobs: z.array(JobDtoSchema),
   series: z.array(WearSeriesSchema),
   /** Straight-line estimate from the chain readings' trend; null when the trend cannot say. */
-  nextChainDue: z
-    .object({ dueOn: IsoDateSchema, limitPct: z.number(), ratePctPer30Days: z.number(), basis: z.string() })
-    .nullable(),
+  nextChainDue: z.object({ dueOn: IsoDateSchema, limitPct: z.number(), ratePctPer30Days: z.number(), basis: z.string() }).nullable(),
 });
 export type BikeHistory = z.infer<typeof BikeHistorySchema>;

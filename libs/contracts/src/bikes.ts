@@ -1,12 +1,4 @@
-import {
-  BRAKE_TYPES,
-  CABLE_ROUTINGS,
-  DROPOUT_TYPES,
-  FRAME_MATERIALS,
-  MAX_DRIVETRAIN_SPEEDS,
-  MIN_DRIVETRAIN_SPEEDS,
-  isTyreSize,
-} from '@benchproof/domain';
+import { BRAKE_TYPES, CABLE_ROUTINGS, DROPOUT_TYPES, FRAME_MATERIALS, MAX_DRIVETRAIN_SPEEDS, MIN_DRIVETRAIN_SPEEDS, isTyreSize } from '@benchproof/domain';
 import { z } from 'zod';
 import { IdSchema, IdParamSchema, IsoDateTimeSchema, optionalText, pagingQuerySchema, requiredText } from './common';
 
@@ -24,10 +16,7 @@ const YearSchema = z
   .transform((v) => v ?? null);
 
 /** ISO 5775 tyre designation like 28-622 (domain parseTyreSize), or empty. */
-const TyreSizeSchema = optionalText(10).refine(
-  (v) => v === null || isTyreSize(v),
-  'Use the ISO 5775 size printed on the tyre, e.g. 28-622',
-);
+const TyreSizeSchema = optionalText(10).refine((v) => v === null || isTyreSize(v), 'Use the ISO 5775 size printed on the tyre, e.g. 28-622');
 
 const bikeFields = {
   maker: requiredText(80),

@@ -79,8 +79,5 @@ export interface Paged<T> {
 
 /** A query-string list: "a,b" or repeated keys (?status=a&status=b). */
 export function queryList<T extends z.ZodType>(item: T) {
-  return z.preprocess(
-    (v) => (typeof v === 'string' ? v.split(',').filter((s) => s.length > 0) : v),
-    z.array(item),
-  );
+  return z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter((s) => s.length > 0) : v), z.array(item));
 }

@@ -57,4 +57,3 @@ export const JobEventSchema = z.object({
   at: IsoDateTimeSchema,
 });
 export type JobEvent = z.infer<typeof JobEventSchema>;
-

@@ -1,16 +1,7 @@
 import { FINAL_CHECK_ITEMS, JOB_STATUSES, type FinalCheckItem } from '@benchproof/domain';
 import { z } from 'zod';
 import { NewBikeInputSchema } from './bikes';
-import {
-  IdParamSchema,
-  IdSchema,
-  IsoDateSchema,
-  IsoDateTimeSchema,
-  optionalText,
-  pagingQuerySchema,
-  queryList,
-  requiredText,
-} from './common';
+import { IdParamSchema, IdSchema, IsoDateSchema, IsoDateTimeSchema, optionalText, pagingQuerySchema, queryList, requiredText } from './common';
 import { CustomerInputSchema } from './customers';
 
 export const JobStatusSchema = z.enum(JOB_STATUSES);
@@ -87,10 +78,7 @@ export const TransitionRequestSchema = z.object({
 });
 export type TransitionRequest = z.infer<typeof TransitionRequestSchema>;
 
-const finalCheckItems = Object.fromEntries(FINAL_CHECK_ITEMS.map((item) => [item, z.boolean()])) as Record<
-  FinalCheckItem,
-  z.ZodBoolean
->;
+const finalCheckItems = Object.fromEntries(FINAL_CHECK_ITEMS.map((item) => [item, z.boolean()])) as Record<FinalCheckItem, z.ZodBoolean>;
 
 /**
  * The final check, signed off by the signed-in user (the api applies

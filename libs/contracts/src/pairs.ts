@@ -31,7 +31,10 @@ export type UpdatePairRequest = z.infer<typeof UpdatePairRequestSchema>;
 
 /** The job's pairs in their new order: every pair id exactly once. */
 export const ReorderPairsRequestSchema = z.object({
-  ids: z.array(z.number().int().positive()).min(1).refine((ids) => new Set(ids).size === ids.length, { message: 'A pair is listed twice.' }),
+  ids: z
+    .array(z.number().int().positive())
+    .min(1)
+    .refine((ids) => new Set(ids).size === ids.length, { message: 'A pair is listed twice.' }),
 });
 export type ReorderPairsRequest = z.infer<typeof ReorderPairsRequestSchema>;
 

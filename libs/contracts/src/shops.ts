@@ -20,15 +20,13 @@ const limitPct = z.number().positive().max(MAX_BICYCLE_CHAIN_LIMIT_PCT);
  * computation uses (domain chainWearLimits): positive, at most 2 %, cassette
  * limit not below a chain limit.
  */
-export const ChainLimitsSchema = z
-  .object({ replaceAt11Pct: limitPct, replaceAt10Pct: limitPct, cassettePct: limitPct })
-  .superRefine((policy, ctx) => {
-    try {
-      chainWearLimits(11, policy);
-    } catch (error) {
-      ctx.addIssue({ code: 'custom', path: ['cassettePct'], message: (error as Error).message });
-    }
-  });
+export const ChainLimitsSchema = z.object({ replaceAt11Pct: limitPct, replaceAt10Pct: limitPct, cassettePct: limitPct }).superRefine((policy, ctx) => {
+  try {
+    chainWearLimits(11, policy);
+  } catch (error) {
+    ctx.addIssue({ code: 'custom', path: ['cassettePct'], message: (error as Error).message });
+  }
+});
 export type ChainLimits = z.infer<typeof ChainLimitsSchema>;
 
 const hexColour = z.string().regex(/^#[0-9a-fA-F]{6}$/, 'A colour like #1F5F5B');

@@ -65,7 +65,10 @@ export const ShowcaseExportQuerySchema = z.object({
 export type ShowcaseExportQuery = z.infer<typeof ShowcaseExportQuerySchema>;
 
 export const ShowcaseZipRequestSchema = z.object({
-  items: z.array(ShowcaseExportQuerySchema.extend({ pairId: z.number().int() })).min(1, 'Pick at least one item.').max(500),
+  items: z
+    .array(ShowcaseExportQuerySchema.extend({ pairId: z.number().int() }))
+    .min(1, 'Pick at least one item.')
+    .max(500),
 });
 export type ShowcaseZipRequest = z.infer<typeof ShowcaseZipRequestSchema>;
 

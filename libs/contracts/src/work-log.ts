@@ -5,7 +5,11 @@ import { IsoDateSchema, IsoDateTimeSchema } from './common';
 export const WorkEntryRequestSchema = z.object({
   description: z.string().trim().min(1).max(2000),
   partsUsed: z.string().trim().max(2000).default(''),
-  minutes: z.number().int().min(0).max(24 * 60),
+  minutes: z
+    .number()
+    .int()
+    .min(0)
+    .max(24 * 60),
 });
 export type WorkEntryRequest = z.infer<typeof WorkEntryRequestSchema>;
 

@@ -43,11 +43,7 @@ const GRADE_RESULT: Readonly<Record<BearingPlayGrade, { condition: Condition; ve
  * An optional dial-gauge reading is kept for comparison between visits and
  * never judged against a limit.
  */
-export function bearingPlayVerdict(
-  grade: BearingPlayGrade,
-  bearing: Bearing,
-  dialGaugeMm?: number | null,
-): CheckResult<BearingPlayVerdictCode> {
+export function bearingPlayVerdict(grade: BearingPlayGrade, bearing: Bearing, dialGaugeMm?: number | null): CheckResult<BearingPlayVerdictCode> {
   const r = GRADE_RESULT[grade];
   let dial = '';
   if (dialGaugeMm !== undefined && dialGaugeMm !== null) {

@@ -1,10 +1,4 @@
-import {
-  CHAIN_MONITOR_FRACTION,
-  DEFAULT_CHAIN_LIMIT_POLICY,
-  MAX_BICYCLE_CHAIN_LIMIT_PCT,
-  chainWearLimits,
-  chainWearVerdict,
-} from './chain-limits';
+import { CHAIN_MONITOR_FRACTION, DEFAULT_CHAIN_LIMIT_POLICY, MAX_BICYCLE_CHAIN_LIMIT_PCT, chainWearLimits, chainWearVerdict } from './chain-limits';
 import { chainElongationFromGauge, chainElongationFromRuler, type ChainReading } from './chain-wear';
 import { DomainInputError } from './errors';
 

@@ -55,10 +55,7 @@ function checkPolicy(policy: ChainLimitPolicy): void {
  * ≤ 10, cassette at 1.0 % (DEFAULT_CHAIN_LIMIT_POLICY) unless the shop's
  * policy says otherwise.
  */
-export function chainWearLimits(
-  speeds: number,
-  policy: Partial<ChainLimitPolicy> = {},
-): ChainWearLimits {
+export function chainWearLimits(speeds: number, policy: Partial<ChainLimitPolicy> = {}): ChainWearLimits {
   requireInteger('drivetrain speeds', speeds, { min: 1, max: 13 });
   const merged: ChainLimitPolicy = { ...DEFAULT_CHAIN_LIMIT_POLICY, ...policy };
   checkPolicy(merged);
@@ -117,11 +114,7 @@ const VERDICT_ADVICE: Readonly<Record<ChainWearVerdictCode, string>> = {
  * Example message: "Chain elongation 0.52 % (ruler over 24 pitches; replace
  * at 0.5 % for 11-speed per shop policy; the chain maker's advice governs)."
  */
-export function chainWearVerdict(
-  reading: ChainReading,
-  speeds: number,
-  policy: Partial<ChainLimitPolicy> = {},
-): ChainWearVerdict {
+export function chainWearVerdict(reading: ChainReading, speeds: number, policy: Partial<ChainLimitPolicy> = {}): ChainWearVerdict {
   const limits = chainWearLimits(speeds, policy);
   const pct = reading.elongationPct;
   const { condition, verdict } = classify(pct, limits);

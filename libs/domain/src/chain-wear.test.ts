@@ -80,9 +80,7 @@ describe('12-inch ruler rule of thumb (Sheldon Brown via pushbikes.org.uk, CHECK
 
   it('a ruler in inches and in millimetres give the same reading', () => {
     // NIST SP 811 App. B: 12.0625 in = 306.3875 mm exactly.
-    expect(chainElongationFromRuler(24, 12.0625, 'in').elongationPct).toBe(
-      chainElongationFromRuler(24, 306.3875, 'mm').elongationPct,
-    );
+    expect(chainElongationFromRuler(24, 12.0625, 'in').elongationPct).toBe(chainElongationFromRuler(24, 306.3875, 'mm').elongationPct);
   });
 });
 
@@ -151,10 +149,7 @@ describe('input validation', () => {
 
   it('dispatches each measurement method', () => {
     expect(readChainElongation({ method: 'ruler', pitches: 24, lengthValue: 306.324, lengthUnit: 'mm' }).elongationPct).toBe(0.5);
-    expect(
-      readChainElongation({ method: 'caliper', pitches: 24, insideValue: 298.574, outsideValue: 314.074, lengthUnit: 'mm' })
-        .elongationPct,
-    ).toBe(0.5);
+    expect(readChainElongation({ method: 'caliper', pitches: 24, insideValue: 298.574, outsideValue: 314.074, lengthUnit: 'mm' }).elongationPct).toBe(0.5);
     expect(readChainElongation({ method: 'gauge', gaugePct: 0.75 }).elongationPct).toBe(0.75);
   });
 });

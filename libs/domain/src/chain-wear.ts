@@ -82,12 +82,7 @@ export function chainElongationFromRuler(pitches: number, lengthValue: number, u
  * readings over the same pitches cancels the roller diameter (industrial
  * practice, CHECKS.md B.1, common practice, no source).
  */
-export function chainElongationFromCaliper(
-  pitches: number,
-  insideValue: number,
-  outsideValue: number,
-  unit: LengthUnit,
-): ChainReading {
+export function chainElongationFromCaliper(pitches: number, insideValue: number, outsideValue: number, unit: LengthUnit): ChainReading {
   const inside = toMillimetres(insideValue, unit);
   const outside = toMillimetres(outsideValue, unit);
   requireInRange('inside reading', inside, { min: 0, minExclusive: true });

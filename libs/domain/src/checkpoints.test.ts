@@ -1,11 +1,5 @@
 import { DEFAULT_CHECKPOINTS, checkpointsForArea, checkpointsForBike, findCheckpoint } from './checkpoints';
-import {
-  INSPECTION_AREAS,
-  INSPECTION_AREA_LABELS,
-  MEASUREMENT_KINDS,
-  MEASUREMENT_KIND_LABELS,
-  isInspectionArea,
-} from './inspection-areas';
+import { INSPECTION_AREAS, INSPECTION_AREA_LABELS, MEASUREMENT_KINDS, MEASUREMENT_KIND_LABELS, isInspectionArea } from './inspection-areas';
 
 describe('inspection areas (DESIGN.md)', () => {
   it('have the screen labels in walk-round order', () => {

@@ -67,11 +67,7 @@ export const MIN_TYRE_CLEARANCE_MM = 1.6;
  * (default 1 mm, common practice, no source) above it reads wearing: check
  * with the wheel flexed and mud in mind.
  */
-export function tyreClearanceVerdict(
-  clearanceMm: number,
-  minMm = MIN_TYRE_CLEARANCE_MM,
-  warnMarginMm = 1,
-): CheckResult<'ok' | 'tight' | 'below_minimum'> {
+export function tyreClearanceVerdict(clearanceMm: number, minMm = MIN_TYRE_CLEARANCE_MM, warnMarginMm = 1): CheckResult<'ok' | 'tight' | 'below_minimum'> {
   requireInRange('tyre clearance', clearanceMm, { min: 0, max: 100 });
   const value = roundTo(clearanceMm, 6);
   const rule = `minimum ${mm(minMm)}`;
@@ -134,7 +130,11 @@ export function cableDiameterCheck(kind: 'brake' | 'shift', diameterMm: number):
   const typical = `typical ${kind} inner ${formatNumber(t.typicalMin, 1)}–${mm(t.typicalMax, 1)}`;
   const warnBelow = CABLE_DIAMETERS_MM.brake.warnBelow;
   if (kind === 'brake' && value < warnBelow) {
-    return { condition: 'unsafe', verdict: 'too_thin_for_brake', message: `Brake inner ${mm(value)} is under ${mm(warnBelow, 1)}: likely a shift cable. Fit a brake inner before riding.` };
+    return {
+      condition: 'unsafe',
+      verdict: 'too_thin_for_brake',
+      message: `Brake inner ${mm(value)} is under ${mm(warnBelow, 1)}: likely a shift cable. Fit a brake inner before riding.`,
+    };
   }
   if (value < t.typicalMin || value > t.typicalMax) {
     return { condition: 'wearing', verdict: 'check', message: `Inner ${mm(value)} is outside the ${typical}: check the part.` };
@@ -156,7 +156,11 @@ export function stemGapCheck(gapMm: number, maxMm = MAX_STEM_GAP_MM): CheckResul
   const value = roundTo(gapMm, 6);
   const rule = `at most ${mm(maxMm, 1)}`;
   if (value > maxMm) {
-    return { condition: 'unsafe', verdict: 'too_large', message: `Steerer top ${mm(value)} below the stem top (${rule}). Do not ride; the stem and steerer maker's instructions govern.` };
+    return {
+      condition: 'unsafe',
+      verdict: 'too_large',
+      message: `Steerer top ${mm(value)} below the stem top (${rule}). Do not ride; the stem and steerer maker's instructions govern.`,
+    };
   }
   return { condition: 'sound', verdict: 'ok', message: `Steerer top ${mm(value)} below the stem top (${rule}).` };
 }

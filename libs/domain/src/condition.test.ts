@@ -1,12 +1,4 @@
-import {
-  CONDITIONS,
-  CONDITION_LABELS,
-  compareConditions,
-  isCondition,
-  needsAction,
-  worstCondition,
-  type Condition,
-} from './condition';
+import { CONDITIONS, CONDITION_LABELS, compareConditions, isCondition, needsAction, worstCondition, type Condition } from './condition';
 
 describe('condition scale (DESIGN.md: sound, wearing, worn, unsafe)', () => {
   it('labels, with "do not ride" on unsafe', () => {

@@ -1,13 +1,5 @@
 import { DomainInputError } from './errors';
-import {
-  WCAG_THRESHOLDS,
-  contrastRatio,
-  meetsContrast,
-  normaliseHexColour,
-  parseHexColour,
-  readableTextOn,
-  relativeLuminance,
-} from './contrast';
+import { WCAG_THRESHOLDS, contrastRatio, meetsContrast, normaliseHexColour, parseHexColour, readableTextOn, relativeLuminance } from './contrast';
 
 // CHECKS.md B.8 worked pairs [V] (own implementation = wcag-contrast = culori.wcagContrast),
 // formulas from W3C WCAG 2.2 "relative luminance" and "contrast ratio".

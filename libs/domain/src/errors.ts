@@ -8,13 +8,7 @@
  * Results that are valid but bad news (a worn chain, a torque outside the
  * spec) are never errors: they come back as a verdict.
  */
-export type DomainInputErrorCode =
-  | 'NOT_A_NUMBER'
-  | 'OUT_OF_RANGE'
-  | 'NOT_AN_INTEGER'
-  | 'TOO_MANY_DECIMALS'
-  | 'MISREAD'
-  | 'INVALID_FORMAT';
+export type DomainInputErrorCode = 'NOT_A_NUMBER' | 'OUT_OF_RANGE' | 'NOT_AN_INTEGER' | 'TOO_MANY_DECIMALS' | 'MISREAD' | 'INVALID_FORMAT';
 
 export class DomainInputError extends RangeError {
   readonly code: DomainInputErrorCode;

@@ -1,14 +1,5 @@
 /** The statuses of a job (one workshop visit), in forward order (DESIGN.md). */
-export const JOB_STATUSES = [
-  'booked_in',
-  'on_stand',
-  'waiting_owner',
-  'in_work',
-  'final_check',
-  'ready',
-  'collected',
-  'cancelled',
-] as const;
+export const JOB_STATUSES = ['booked_in', 'on_stand', 'waiting_owner', 'in_work', 'final_check', 'ready', 'collected', 'cancelled'] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
 export const JOB_STATUS_LABELS: Readonly<Record<JobStatus, string>> = {
@@ -104,11 +95,7 @@ export function nextAction(status: JobStatus): { to: JobStatus; label: string } 
  * otherwise anyone may sign the check off. With no mechanic recorded, any
  * checker counts as a second person.
  */
-export function finalCheckAllowed(input: {
-  requiresSecondPerson: boolean;
-  mechanicId: number | null | undefined;
-  checkerId: number;
-}): boolean {
+export function finalCheckAllowed(input: { requiresSecondPerson: boolean; mechanicId: number | null | undefined; checkerId: number }): boolean {
   if (!input.requiresSecondPerson) return true;
   const { mechanicId } = input;
   return mechanicId === null || mechanicId === undefined || mechanicId !== input.checkerId;

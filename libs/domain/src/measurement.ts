@@ -1,13 +1,7 @@
 import { bearingPlayVerdict, type Bearing, type BearingPlayGrade } from './bearing-play';
 import { chainWearVerdict, type ChainLimitPolicy } from './chain-limits';
 import { readChainElongation, type ChainMeasurement } from './chain-wear';
-import {
-  cableDiameterCheck,
-  stemGapCheck,
-  thicknessVerdict,
-  tyreClearanceVerdict,
-  wheelCentringOffset,
-} from './clearance';
+import { cableDiameterCheck, stemGapCheck, thicknessVerdict, tyreClearanceVerdict, wheelCentringOffset } from './clearance';
 import type { Condition } from './condition';
 import type { WheelPosition } from './inspection-areas';
 

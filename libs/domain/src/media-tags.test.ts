@@ -1,14 +1,5 @@
 import { INSPECTION_AREAS } from './inspection-areas';
-import {
-  MEDIA_AREAS,
-  MEDIA_AREA_LABELS,
-  MEDIA_KINDS,
-  MEDIA_KIND_LABELS,
-  MEDIA_PHASES,
-  MEDIA_SOURCES,
-  isVideoKind,
-  mediaKindFor,
-} from './media-tags';
+import { MEDIA_AREAS, MEDIA_AREA_LABELS, MEDIA_KINDS, MEDIA_KIND_LABELS, MEDIA_PHASES, MEDIA_SOURCES, isVideoKind, mediaKindFor } from './media-tags';
 
 describe('media tags (DESIGN.md: Media asset)', () => {
   it('phases, sources, kinds', () => {

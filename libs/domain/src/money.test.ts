@@ -18,8 +18,7 @@ import {
  * zero) — the same rule as roundMinor. Values below were also worked by hand.
  */
 const ROUND_HALF_UP = 4;
-const exactRound = (a: string, b: string): number =>
-  bignumber(a).times(bignumber(b)).toDecimalPlaces(0, ROUND_HALF_UP).toNumber();
+const exactRound = (a: string, b: string): number => bignumber(a).times(bignumber(b)).toDecimalPlaces(0, ROUND_HALF_UP).toNumber();
 
 describe('roundMinor: round half away from zero (half up for positive amounts)', () => {
   it.each([
@@ -167,7 +166,14 @@ describe('prices typed in major units', () => {
     expect(majorTextToMinor(text, currency)).toBe(minor);
   });
 
-  it.each([['12.345', 'GBP'], ['12.5', 'JPY'], ['', 'GBP'], ['.', 'GBP'], ['-3', 'GBP'], ['12a', 'GBP']])('refuses %s %s', (text, currency) => {
+  it.each([
+    ['12.345', 'GBP'],
+    ['12.5', 'JPY'],
+    ['', 'GBP'],
+    ['.', 'GBP'],
+    ['-3', 'GBP'],
+    ['12a', 'GBP'],
+  ])('refuses %s %s', (text, currency) => {
     expect(majorTextToMinor(text, currency)).toBeNull();
   });
 

@@ -72,9 +72,7 @@ export function taxMinor(netMinor: number, taxRateBasisPoints: number): number {
   return roundMinor(netMinor * taxRateBasisPoints, BASIS_POINTS);
 }
 
-export type EstimateLine =
-  | { kind: 'part'; qty: number; unitPriceMinor: number }
-  | { kind: 'labour'; hours: number; rateMinorPerHour: number };
+export type EstimateLine = { kind: 'part'; qty: number; unitPriceMinor: number } | { kind: 'labour'; hours: number; rateMinorPerHour: number };
 
 export interface EstimateTotals {
   readonly partsMinor: number;

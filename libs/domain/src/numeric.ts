@@ -11,11 +11,7 @@ export function requireFinite(name: string, value: number): number {
 }
 
 /** Throws unless `min <= value <= max` (bounds optional). */
-export function requireInRange(
-  name: string,
-  value: number,
-  range: { min?: number; max?: number; minExclusive?: boolean },
-): number {
+export function requireInRange(name: string, value: number, range: { min?: number; max?: number; minExclusive?: boolean }): number {
   requireFinite(name, value);
   const { min, max, minExclusive = false } = range;
   const belowMin = min !== undefined && (minExclusive ? value <= min : value < min);

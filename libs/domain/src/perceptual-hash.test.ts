@@ -5,8 +5,7 @@ import { dctCoefficient, hammingDistance, hashBit, perceptualHash, PHASH_SAMPLE 
 const N = PHASH_SAMPLE;
 
 /** A 32×32 row-major image from f(x, y). */
-const image = (f: (x: number, y: number) => number): number[] =>
-  Array.from({ length: N * N }, (_, i) => f(i % N, Math.floor(i / N)));
+const image = (f: (x: number, y: number) => number): number[] => Array.from({ length: N * N }, (_, i) => f(i % N, Math.floor(i / N)));
 
 /** One DCT-II basis function (u across, v down) over mid-grey: its only non-DC coefficient is (u, v). */
 const basis = (u: number, v: number, amplitude: number) =>
@@ -18,7 +17,11 @@ const basis = (u: number, v: number, amplitude: number) =>
 // mean c/64 < c and every other coefficient 0 < mean: exactly one bit.
 const FIXTURES = [
   { name: 'flat grey: all AC coefficients 0, none above the mean 0', pixels: image(() => 128), hash: '0000000000000000' },
-  { name: 'left half dark, right half light (grid-aligned step along x only: DCT lives in the v = 0 row, outside the block)', pixels: image((x) => (x < 16 ? 40 : 220)), hash: '0000000000000000' },
+  {
+    name: 'left half dark, right half light (grid-aligned step along x only: DCT lives in the v = 0 row, outside the block)',
+    pixels: image((x) => (x < 16 ? 40 : 220)),
+    hash: '0000000000000000',
+  },
   { name: 'top half dark (step along y only: u = 0 column, outside the block)', pixels: image((_x, y) => (y < 16 ? 40 : 220)), hash: '0000000000000000' },
   { name: 'basis (1,1) → bit 0', pixels: basis(1, 1, 100), hash: '8000000000000000' },
   { name: 'basis (1,2) → bit 1', pixels: basis(1, 2, 100), hash: '4000000000000000' },

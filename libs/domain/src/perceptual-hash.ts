@@ -49,7 +49,10 @@ export function dctCoefficient(pixels: ArrayLike<number>, u: number, v: number):
  */
 export function perceptualHash(pixels: ArrayLike<number>): string {
   if (pixels.length !== PHASH_SAMPLE * PHASH_SAMPLE) {
-    throw new DomainInputError('OUT_OF_RANGE', `pHash needs ${PHASH_SAMPLE}×${PHASH_SAMPLE} = ${PHASH_SAMPLE * PHASH_SAMPLE} greyscale values, got ${pixels.length}`);
+    throw new DomainInputError(
+      'OUT_OF_RANGE',
+      `pHash needs ${PHASH_SAMPLE}×${PHASH_SAMPLE} = ${PHASH_SAMPLE * PHASH_SAMPLE} greyscale values, got ${pixels.length}`,
+    );
   }
   const block: number[] = [];
   for (let u = 1; u <= PHASH_BLOCK; u++) {

@@ -36,7 +36,7 @@ export const BRAKE_CAUTION =
 export const STEERING_CAUTION =
   'If you feel knocking when braking with the front brake, or the bars turn roughly, have the ' +
   "headset checked. Stem bolts are tightened to the stem maker's specified torque. Do not change " +
-  'the stem height on a carbon steerer without the correct expander and the maker\'s instructions.';
+  "the stem height on a carbon steerer without the correct expander and the maker's instructions.";
 
 /** Shown with wheels, tyres and axles. */
 export const WHEEL_CAUTION =
@@ -45,12 +45,10 @@ export const WHEEL_CAUTION =
 
 /** Shown with borescope stills and frame-interior checkpoints. */
 export const SCOPE_CAUTION =
-  'Views inside the frame are limited to what the camera can reach. Not seeing corrosion or damage ' +
-  'in these images does not prove the tube is free of it.';
+  'Views inside the frame are limited to what the camera can reach. Not seeing corrosion or damage ' + 'in these images does not prove the tube is free of it.';
 
 /** Printed in its own box when the owner declines work we flagged unsafe. */
-export const DECLINED_SAFETY_NOTICE =
-  'You chose not to have this work done. We advise you not to ride the bike until it is fixed.';
+export const DECLINED_SAFETY_NOTICE = 'You chose not to have this work done. We advise you not to ride the bike until it is fixed.';
 
 /** The words every unsafe item carries on the report and the owner page. */
 export const DO_NOT_RIDE = 'Do not ride';

@@ -1,15 +1,7 @@
 import { unit } from 'mathjs';
 import { DomainInputError } from './errors';
 import { CARBON_CAUTION, TORQUE_CAUTION } from './safety';
-import {
-  NEWTON_METRES_PER_UNIT,
-  TORQUE_UNITS,
-  TORQUE_UNIT_LABELS,
-  convertTorque,
-  defaultTorqueTolerancePct,
-  formatTorque,
-  torqueVerdict,
-} from './torque';
+import { NEWTON_METRES_PER_UNIT, TORQUE_UNITS, TORQUE_UNIT_LABELS, convertTorque, defaultTorqueTolerancePct, formatTorque, torqueVerdict } from './torque';
 
 /** Relative closeness; CHECKS.md B.2: never assert exact equality of converted floats. */
 function expectRelClose(actual: number, expected: number, rel = 1e-12): void {

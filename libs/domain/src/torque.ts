@@ -104,9 +104,7 @@ function bandFor(spec: TorqueSpec, tolerancePct: number | undefined): Band {
 
 function specText(spec: TorqueSpec, band: Band): string {
   const range = band.tolerancePct === null;
-  const value = range
-    ? `${formatNumber(spec.min, 2)}–${formatTorque(spec.max ?? spec.min, spec.unit)}`
-    : formatTorque(spec.min, spec.unit);
+  const value = range ? `${formatNumber(spec.min, 2)}–${formatTorque(spec.max ?? spec.min, spec.unit)}` : formatTorque(spec.min, spec.unit);
   return range ? `the maker's range ${value}` : `the maker's ${value} (±${formatNumber(band.tolerancePct ?? 0, 1)} % wrench tolerance)`;
 }
 
@@ -118,12 +116,7 @@ function specText(spec: TorqueSpec, band: Band): string {
  * comparison is in N·m. Never a default table: the spec always comes from
  * the maker (ISO 4210-5 lab test loads are not settings).
  */
-export function torqueVerdict(input: {
-  specified: TorqueSpec;
-  applied: TorqueReading;
-  tolerancePct?: number;
-  carbonPart?: boolean;
-}): TorqueVerdict {
+export function torqueVerdict(input: { specified: TorqueSpec; applied: TorqueReading; tolerancePct?: number; carbonPart?: boolean }): TorqueVerdict {
   const band = bandFor(input.specified, input.tolerancePct);
   const appliedValue = requireInRange('applied torque', input.applied.value, { min: 0, minExclusive: true });
   const appliedNm = convertTorque(appliedValue, input.applied.unit, 'nm');

@@ -32,14 +32,11 @@ export function parseTyreSize(text: string): TyreSize {
   const match = TYRE_SIZE_PATTERN.exec(designation);
   const widthMm = match ? Number(match[1]) : 0;
   const bsdMm = match ? Number(match[2]) : 0;
-  const plausible =
-    widthMm >= WIDTH_MM.min && widthMm <= WIDTH_MM.max && bsdMm >= BSD_MM.min && bsdMm <= BSD_MM.max;
+  const plausible = widthMm >= WIDTH_MM.min && widthMm <= WIDTH_MM.max && bsdMm >= BSD_MM.min && bsdMm <= BSD_MM.max;
   if (!match || !plausible) {
-    throw new DomainInputError(
-      'INVALID_FORMAT',
-      `Not a tyre size: "${text}". Use the ISO 5775 width-BSD form printed on the tyre, e.g. 28-622.`,
-      { value: text },
-    );
+    throw new DomainInputError('INVALID_FORMAT', `Not a tyre size: "${text}". Use the ISO 5775 width-BSD form printed on the tyre, e.g. 28-622.`, {
+      value: text,
+    });
   }
   const name = COMMON_BSD_NAMES[bsdMm];
   return { widthMm, bsdMm, label: name ? `${designation} (${name})` : designation };

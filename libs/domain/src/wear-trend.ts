@@ -30,10 +30,7 @@ const sided = (kind: MeasurementKind, position: string | undefined, unit: '%' | 
  * centring offset in mm, clearance in mm), or null for kinds without a
  * meaningful trend (graded bearing play, cable diameter, stem gap).
  */
-export function trendValue(
-  input: MeasurementInput,
-  ctx: { drivetrainSpeeds: number; chainPolicy?: Partial<ChainLimitPolicy> },
-): TrendValue | null {
+export function trendValue(input: MeasurementInput, ctx: { drivetrainSpeeds: number; chainPolicy?: Partial<ChainLimitPolicy> }): TrendValue | null {
   switch (input.kind) {
     case 'chain_elongation': {
       const limit = chainWearLimits(ctx.drivetrainSpeeds, ctx.chainPolicy).replaceAtPct;

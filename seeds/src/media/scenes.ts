@@ -106,8 +106,16 @@ function tubeInterior(state: SceneState): Drawn {
   body += `<circle cx="600" cy="400" r="380" fill="url(#bore)"/>`;
   for (let r = 120; r < 380; r += 55) body += `<circle cx="600" cy="400" r="${r}" fill="none" stroke="#a9a59b" stroke-width="2" opacity="0.35"/>`;
   if (state === 'before') {
-    const spots = [[430, 260, 34], [760, 300, 22], [700, 560, 40], [480, 540, 18], [820, 460, 26], [380, 400, 15]];
-    for (const [x, y, r] of spots) body += `<circle cx="${x}" cy="${y}" r="${r}" fill="#9a4a1c" opacity="0.85"/><circle cx="${x + 6}" cy="${y - 5}" r="${Math.round(r / 2)}" fill="#c0682a" opacity="0.8"/>`;
+    const spots = [
+      [430, 260, 34],
+      [760, 300, 22],
+      [700, 560, 40],
+      [480, 540, 18],
+      [820, 460, 26],
+      [380, 400, 15],
+    ];
+    for (const [x, y, r] of spots)
+      body += `<circle cx="${x}" cy="${y}" r="${r}" fill="#9a4a1c" opacity="0.85"/><circle cx="${x + 6}" cy="${y - 5}" r="${Math.round(r / 2)}" fill="#c0682a" opacity="0.8"/>`;
   } else {
     body += `<circle cx="600" cy="400" r="330" fill="none" stroke="#c8b37a" stroke-width="18" opacity="0.35"/>`;
   }

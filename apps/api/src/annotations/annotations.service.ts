@@ -45,10 +45,20 @@ export class AnnotationsService {
         throw new DomainError('CONFLICT', 'Someone saved this annotation after you opened it. Reload to see their version.', { currentVersion: current });
       }
       return this.repo.insert({
-        shopId: actor.shopId, assetId, version: current + 1, document: JSON.stringify(doc), savedAt: this.clock.now(), savedBy: actor.id,
+        shopId: actor.shopId,
+        assetId,
+        version: current + 1,
+        document: JSON.stringify(doc),
+        savedAt: this.clock.now(),
+        savedBy: actor.id,
       });
     });
-    this.audit.record(actor, { action: 'annotation.saved', entityType: 'media_asset', entityId: assetId, details: { version: row.version, shapes: doc.shapes.length } });
+    this.audit.record(actor, {
+      action: 'annotation.saved',
+      entityType: 'media_asset',
+      entityId: assetId,
+      details: { version: row.version, shapes: doc.shapes.length },
+    });
     this.render.enqueue(actor.shopId, assetId, row.version);
     return toDto(assetId, row);
   }
@@ -57,7 +67,8 @@ export class AnnotationsService {
   chainReading(actor: AuthUser, assetId: number, req: ChainFromPhotoRequest): MeasurementDto {
     const img = this.media.uprightImage(actor.shopId, assetId, 'screen');
     const latest = this.repo.latest(actor.shopId, assetId);
-    if (!latest || latest.version !== req.version) throw new DomainError('CONFLICT', 'Save the annotation before recording the reading.', { currentVersion: latest?.version ?? 0 });
+    if (!latest || latest.version !== req.version)
+      throw new DomainError('CONFLICT', 'Save the annotation before recording the reading.', { currentVersion: latest?.version ?? 0 });
     const doc = migrateDocument(JSON.parse(latest.document));
     const fail = (message: string) => new DomainError('VALIDATION_FAILED', message, { issues: [{ path: 'rulerId', message }] });
     if (!doc.shapes.some((s) => s.id === req.rulerId && s.kind === 'ruler')) throw fail('Draw a ruler over the chain first.');
@@ -72,15 +83,27 @@ export class AnnotationsService {
     const lengthValue = Math.round(reading.measuredMm * 100) / 100;
     const checkpointId = req.checkpointId ?? this.chainCheckpoint(actor, img.jobId);
     const m = this.inspection.addMeasurement(actor, img.jobId, checkpointId, {
-      kind: 'chain_elongation', method: 'ruler', pitches: req.pitches, lengthValue, lengthUnit: 'mm',
+      kind: 'chain_elongation',
+      method: 'ruler',
+      pitches: req.pitches,
+      lengthValue,
+      lengthUnit: 'mm',
     });
     this.repo.addEvidence({ shopId: actor.shopId, measurementId: m.id, assetId, annotationVersion: latest.version });
-    this.audit.record(actor, { action: 'measurement.from_photo', entityType: 'job', entityId: img.jobId, details: { measurementId: m.id, assetId, version: latest.version, lengthValue, pitches: req.pitches } });
+    this.audit.record(actor, {
+      action: 'measurement.from_photo',
+      entityType: 'job',
+      entityId: img.jobId,
+      details: { measurementId: m.id, assetId, version: latest.version, lengthValue, pitches: req.pitches },
+    });
     return m;
   }
 
   private chainCheckpoint(actor: AuthUser, jobId: number): number {
-    const cp = this.inspection.get(actor, jobId).areas.flatMap((a) => a.checkpoints).find((c) => c.key === 'chain_wear');
+    const cp = this.inspection
+      .get(actor, jobId)
+      .areas.flatMap((a) => a.checkpoints)
+      .find((c) => c.key === 'chain_wear');
     if (!cp) throw new DomainError('NOT_FOUND', 'This job has no chain checkpoint.');
     return cp.id;
   }
@@ -88,5 +111,11 @@ export class AnnotationsService {
 
 function toDto(assetId: number, row: AnnotationVersionRow | undefined): AnnotationDto {
   if (!row) return { mediaId: assetId, version: 0, document: null, savedAt: null, savedBy: null };
-  return { mediaId: assetId, version: row.version, document: migrateDocument(JSON.parse(row.document)), savedAt: row.savedAt.toISOString(), savedBy: row.savedBy };
+  return {
+    mediaId: assetId,
+    version: row.version,
+    document: migrateDocument(JSON.parse(row.document)),
+    savedAt: row.savedAt.toISOString(),
+    savedBy: row.savedBy,
+  };
 }

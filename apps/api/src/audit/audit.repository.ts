@@ -17,6 +17,12 @@ export class AuditRepository {
     const where = [eq(auditEvents.shopId, shopId)];
     if (entityType) where.push(eq(auditEvents.entityType, entityType));
     if (entityId) where.push(eq(auditEvents.entityId, entityId));
-    return this.db.select().from(auditEvents).where(and(...where)).orderBy(desc(auditEvents.at), desc(auditEvents.id)).limit(limit).all();
+    return this.db
+      .select()
+      .from(auditEvents)
+      .where(and(...where))
+      .orderBy(desc(auditEvents.at), desc(auditEvents.id))
+      .limit(limit)
+      .all();
   }
 }

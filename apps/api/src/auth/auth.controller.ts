@@ -4,7 +4,18 @@ import { ChangePasswordRequestSchema, LoginRequestSchema, type ChangePasswordReq
 import type { DoubleCsrfUtilities } from 'csrf-csrf';
 import type { Request, Response } from 'express';
 import { APP_CONFIG, type AppConfig } from '../config';
-import { Can, CSRF, CSRF_COOKIE, CurrentUser, issueCsrfToken, Public, SESSION_COOKIE, sessionCookieOptions, sessionTokenFrom, type AuthUser } from '../core/auth';
+import {
+  Can,
+  CSRF,
+  CSRF_COOKIE,
+  CurrentUser,
+  issueCsrfToken,
+  Public,
+  SESSION_COOKIE,
+  sessionCookieOptions,
+  sessionTokenFrom,
+  type AuthUser,
+} from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { AuthService, type IssuedSession } from './auth.service';
 
@@ -36,7 +47,12 @@ export class AuthController {
   @Can('account.change_password')
   @HttpCode(200)
   @ApiZodBody(ChangePasswordRequestSchema)
-  async changePassword(@CurrentUser() user: AuthUser, @Body(zod(ChangePasswordRequestSchema)) body: ChangePasswordRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async changePassword(
+    @CurrentUser() user: AuthUser,
+    @Body(zod(ChangePasswordRequestSchema)) body: ChangePasswordRequest,
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ) {
     const session = await this.auth.changePassword(user, body.currentPassword, body.newPassword);
     return this.startSession(session, req, res);
   }

@@ -48,12 +48,20 @@ export class BikesRepository {
   }
 
   find(shopId: number, id: number): BikeRow | undefined {
-    return this.db.select().from(bikes).where(and(eq(bikes.shopId, shopId), eq(bikes.id, id))).get();
+    return this.db
+      .select()
+      .from(bikes)
+      .where(and(eq(bikes.shopId, shopId), eq(bikes.id, id)))
+      .get();
   }
 
   findMany(shopId: number, ids: number[]): BikeRow[] {
     if (ids.length === 0) return [];
-    return this.db.select().from(bikes).where(and(eq(bikes.shopId, shopId), inArray(bikes.id, ids))).all();
+    return this.db
+      .select()
+      .from(bikes)
+      .where(and(eq(bikes.shopId, shopId), inArray(bikes.id, ids)))
+      .all();
   }
 
   insert(row: NewBikeRow): BikeRow {
@@ -61,6 +69,11 @@ export class BikesRepository {
   }
 
   update(shopId: number, id: number, patch: Partial<NewBikeRow>): BikeRow | undefined {
-    return this.db.update(bikes).set(patch).where(and(eq(bikes.shopId, shopId), eq(bikes.id, id))).returning().get();
+    return this.db
+      .update(bikes)
+      .set(patch)
+      .where(and(eq(bikes.shopId, shopId), eq(bikes.id, id)))
+      .returning()
+      .get();
   }
 }

@@ -43,7 +43,10 @@ export class BikesService {
   ) {}
 
   private withOwners(actor: Pick<AuthUser, 'shopId'>, rows: BikeRow[]): BikeListItem[] {
-    const owners = this.customers.byIds(actor, rows.map((r) => r.customerId));
+    const owners = this.customers.byIds(
+      actor,
+      rows.map((r) => r.customerId),
+    );
     return rows.map((r) => toDto(r, owners.get(r.customerId)?.name ?? ''));
   }
 
@@ -83,7 +86,6 @@ export class BikesService {
     if (!row) throw notFound('Bike');
     return this.withOwners(actor, [row])[0];
   }
-
 
   byIds(actor: Pick<AuthUser, 'shopId'>, ids: number[]): Map<number, BikeListItem> {
     const rows = this.repo.findMany(actor.shopId, [...new Set(ids)]);

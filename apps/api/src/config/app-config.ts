@@ -24,33 +24,60 @@ const EnvSchema = z.object({
   UPLOADS_DIR: z.string().default(resolve(REPO_ROOT, 'uploads')),
   WEB_DIST: z.string().default(resolve(REPO_ROOT, 'dist/apps/web')),
   JWT_SECRET: z.string().min(32).optional(),
-  SESSION_TTL_SECONDS: z.coerce.number().int().positive().default(8 * 3600),
+  SESSION_TTL_SECONDS: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(8 * 3600),
   SEED_DEMO: bool.default(true),
   COOKIE_SECURE: bool.default(false),
   /** Failed sign-ins allowed per account, and per address, within the window. */
   LOGIN_THROTTLE_LIMIT: z.coerce.number().int().positive().default(10),
   LOGIN_THROTTLE_ADDRESS_LIMIT: z.coerce.number().int().positive().default(50),
-  LOGIN_THROTTLE_WINDOW_SECONDS: z.coerce.number().int().positive().default(15 * 60),
+  LOGIN_THROTTLE_WINDOW_SECONDS: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(15 * 60),
   /** Express 'trust proxy' (e.g. `loopback`, `1`, `10.0.0.0/8`). Unset: X-Forwarded-For is ignored. */
   TRUST_PROXY: z.string().min(1).optional(),
   PUBLIC_URL: z.string().url().optional(),
   /** The origin the web app is served from; the only one allowed cross-origin (tus CORS). Default: PUBLIC_URL's origin, else http://localhost:PORT. */
   APP_ORIGIN: z.string().url().optional(),
   /** smtp://host:port (STARTTLS when offered), smtps:// for TLS from the start, user:pass@ for auth. */
-  SMTP_URL: z.string().regex(/^smtps?:\/\//, 'must start with smtp:// or smtps://').default('smtp://127.0.0.1:1025'),
+  SMTP_URL: z
+    .string()
+    .regex(/^smtps?:\/\//, 'must start with smtp:// or smtps://')
+    .default('smtp://127.0.0.1:1025'),
   MAIL_FROM: z.string().default('BenchProof <reports@benchproof.localhost>'),
   MAIL_CATCHER: bool.default(true),
   /** Reports larger than this go as a link instead of an attachment (many providers refuse 10-25 MB). */
-  MAIL_ATTACHMENT_BUDGET: z.coerce.number().int().positive().default(8 * 1024 * 1024),
+  MAIL_ATTACHMENT_BUDGET: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(8 * 1024 * 1024),
   /** First retry after this many ms; each later one waits twice as long (capped at an hour). */
   MAIL_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
   MAIL_MAX_ATTEMPTS: z.coerce.number().int().positive().default(8),
   /** A message 'sending' for longer than this is taken as lost with its process and tried again. */
-  MAIL_SEND_LEASE_MS: z.coerce.number().int().positive().default(10 * 60_000),
+  MAIL_SEND_LEASE_MS: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(10 * 60_000),
   /** How often the outbox looks for messages whose next try has come. */
   MAIL_SWEEP_MS: z.coerce.number().int().positive().default(5_000),
-  MAX_PHOTO_BYTES: z.coerce.number().int().positive().default(40 * 1024 * 1024),
-  MAX_VIDEO_BYTES: z.coerce.number().int().positive().default(4 * 1024 * 1024 * 1024),
+  MAX_PHOTO_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(40 * 1024 * 1024),
+  MAX_VIDEO_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(4 * 1024 * 1024 * 1024),
   MAX_IMAGE_PIXELS: z.coerce.number().int().positive().default(100_000_000),
   /** Background tasks (infra/tasks): only 'sqlite' is built; see DEVELOPERS.md for a BullMQ driver. */
   TASKS_DRIVER: z.enum(['sqlite']).default('sqlite'),

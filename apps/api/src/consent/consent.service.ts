@@ -21,8 +21,7 @@ const toDto = (r: ConsentRow): ConsentDto => ({
 
 /** How a consent change reached us: the owner's own page, or staff recording what the owner said in person. */
 export type ConsentSource =
-  | { method: 'owner_link'; ownerLinkId: number; givenByName: string }
-  | { method: 'in_person'; recordedBy: Pick<AuthUser, 'id' | 'shopId'> };
+  { method: 'owner_link'; ownerLinkId: number; givenByName: string } | { method: 'in_person'; recordedBy: Pick<AuthUser, 'id' | 'shopId'> };
 
 /**
  * The owner's marketing consent per job. The showcase asks `currentConsent`

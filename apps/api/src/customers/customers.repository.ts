@@ -35,12 +35,20 @@ export class CustomersRepository {
   }
 
   find(shopId: number, id: number): CustomerRow | undefined {
-    return this.db.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id))).get();
+    return this.db
+      .select()
+      .from(customers)
+      .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
+      .get();
   }
 
   findMany(shopId: number, ids: number[]): CustomerRow[] {
     if (ids.length === 0) return [];
-    return this.db.select().from(customers).where(and(eq(customers.shopId, shopId), inArray(customers.id, ids))).all();
+    return this.db
+      .select()
+      .from(customers)
+      .where(and(eq(customers.shopId, shopId), inArray(customers.id, ids)))
+      .all();
   }
 
   insert(row: NewCustomerRow): CustomerRow {
@@ -48,6 +56,11 @@ export class CustomersRepository {
   }
 
   update(shopId: number, id: number, patch: Partial<NewCustomerRow>): CustomerRow | undefined {
-    return this.db.update(customers).set(patch).where(and(eq(customers.shopId, shopId), eq(customers.id, id))).returning().get();
+    return this.db
+      .update(customers)
+      .set(patch)
+      .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
+      .returning()
+      .get();
   }
 }

@@ -55,7 +55,6 @@ export class CustomersService {
     return toCustomerDto(row);
   }
 
-
   /** Customers by id, keyed by id; ids of other shops are simply absent. */
   byIds(actor: Pick<AuthUser, 'shopId'>, ids: number[]): Map<number, CustomerDto> {
     return new Map(this.repo.findMany(actor.shopId, [...new Set(ids)]).map((c) => [c.id, toCustomerDto(c)]));

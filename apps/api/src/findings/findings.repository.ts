@@ -22,11 +22,20 @@ export class FindingsRepository {
   }
 
   list(shopId: number, jobId: number): FindingRow[] {
-    return this.db.select().from(findings).where(and(eq(findings.shopId, shopId), eq(findings.jobId, jobId))).orderBy(asc(findings.id)).all();
+    return this.db
+      .select()
+      .from(findings)
+      .where(and(eq(findings.shopId, shopId), eq(findings.jobId, jobId)))
+      .orderBy(asc(findings.id))
+      .all();
   }
 
   find(shopId: number, jobId: number, id: number): FindingRow | undefined {
-    return this.db.select().from(findings).where(and(eq(findings.shopId, shopId), eq(findings.jobId, jobId), eq(findings.id, id))).get();
+    return this.db
+      .select()
+      .from(findings)
+      .where(and(eq(findings.shopId, shopId), eq(findings.jobId, jobId), eq(findings.id, id)))
+      .get();
   }
 
   insert(row: NewFindingRow): FindingRow {
@@ -34,25 +43,47 @@ export class FindingsRepository {
   }
 
   update(shopId: number, id: number, patch: Partial<NewFindingRow>): FindingRow {
-    return this.db.update(findings).set(patch).where(and(eq(findings.shopId, shopId), eq(findings.id, id))).returning().get();
+    return this.db
+      .update(findings)
+      .set(patch)
+      .where(and(eq(findings.shopId, shopId), eq(findings.id, id)))
+      .returning()
+      .get();
   }
 
   /** Removes a finding with its recommendation and decision history. */
   delete(shopId: number, id: number): void {
     const rec = this.recommendationOf(shopId, id);
     if (rec) {
-      this.db.delete(decisions).where(and(eq(decisions.shopId, shopId), eq(decisions.recommendationId, rec.id))).run();
-      this.db.delete(recommendations).where(and(eq(recommendations.shopId, shopId), eq(recommendations.id, rec.id))).run();
+      this.db
+        .delete(decisions)
+        .where(and(eq(decisions.shopId, shopId), eq(decisions.recommendationId, rec.id)))
+        .run();
+      this.db
+        .delete(recommendations)
+        .where(and(eq(recommendations.shopId, shopId), eq(recommendations.id, rec.id)))
+        .run();
     }
-    this.db.delete(findings).where(and(eq(findings.shopId, shopId), eq(findings.id, id))).run();
+    this.db
+      .delete(findings)
+      .where(and(eq(findings.shopId, shopId), eq(findings.id, id)))
+      .run();
   }
 
   recommendations(shopId: number, jobId: number): RecommendationRow[] {
-    return this.db.select().from(recommendations).where(and(eq(recommendations.shopId, shopId), eq(recommendations.jobId, jobId))).all();
+    return this.db
+      .select()
+      .from(recommendations)
+      .where(and(eq(recommendations.shopId, shopId), eq(recommendations.jobId, jobId)))
+      .all();
   }
 
   recommendationOf(shopId: number, findingId: number): RecommendationRow | undefined {
-    return this.db.select().from(recommendations).where(and(eq(recommendations.shopId, shopId), eq(recommendations.findingId, findingId))).get();
+    return this.db
+      .select()
+      .from(recommendations)
+      .where(and(eq(recommendations.shopId, shopId), eq(recommendations.findingId, findingId)))
+      .get();
   }
 
   recommendation(shopId: number, jobId: number, id: number): RecommendationRow | undefined {
@@ -68,7 +99,12 @@ export class FindingsRepository {
   }
 
   updateRecommendation(shopId: number, id: number, patch: Partial<NewRecommendationRow>): RecommendationRow {
-    return this.db.update(recommendations).set(patch).where(and(eq(recommendations.shopId, shopId), eq(recommendations.id, id))).returning().get();
+    return this.db
+      .update(recommendations)
+      .set(patch)
+      .where(and(eq(recommendations.shopId, shopId), eq(recommendations.id, id)))
+      .returning()
+      .get();
   }
 
   decisions(shopId: number, recommendationIds: number[]): DecisionRow[] {

@@ -73,8 +73,18 @@ export class FindingsService {
   private dtos(actor: Pick<AuthUser, 'shopId'>, job: JobRef, rows: FindingRow[]): FindingDto[] {
     const carbon = this.bikes.get(actor, job.bikeId).frameMaterial === 'carbon';
     const recs = this.repo.recommendations(actor.shopId, job.id);
-    const decisions = this.repo.decisions(actor.shopId, recs.map((r) => r.id));
-    return rows.map((f) => toFindingDto(f, recs.find((r) => r.findingId === f.id), decisions, carbon));
+    const decisions = this.repo.decisions(
+      actor.shopId,
+      recs.map((r) => r.id),
+    );
+    return rows.map((f) =>
+      toFindingDto(
+        f,
+        recs.find((r) => r.findingId === f.id),
+        decisions,
+        carbon,
+      ),
+    );
   }
 
   list(actor: JobCaller, jobId: number): FindingDto[] {
@@ -105,7 +115,8 @@ export class FindingsService {
       this.repo.transaction(() => this.repo.delete(actor.shopId, findingId));
     } catch (e) {
       // finding_media (media feature) still points at it: the shots must be unlinked first.
-      if ((e as { code?: string }).code === 'SQLITE_CONSTRAINT_FOREIGNKEY') throw new DomainError('CONFLICT', 'Unlink the shots of this finding before deleting it.');
+      if ((e as { code?: string }).code === 'SQLITE_CONSTRAINT_FOREIGNKEY')
+        throw new DomainError('CONFLICT', 'Unlink the shots of this finding before deleting it.');
       throw e;
     }
     this.audit.record(actor, { action: 'finding.deleted', entityType: 'job', entityId: jobId, details: { findingId } });
@@ -118,19 +129,35 @@ export class FindingsService {
     const shop = this.shops.settings(actor.shopId);
     const now = this.clock.now();
     const urgency = input.urgency ?? defaultUrgency(finding.condition);
-    const priced = { summary: input.summary, urgency, parts: input.parts, labourHundredths: input.labourHundredths, labourRateMinor: shop.labourRateMinor, taxRateBp: shop.taxRateBp, currency: shop.currency, updatedAt: now };
+    const priced = {
+      summary: input.summary,
+      urgency,
+      parts: input.parts,
+      labourHundredths: input.labourHundredths,
+      labourRateMinor: shop.labourRateMinor,
+      taxRateBp: shop.taxRateBp,
+      currency: shop.currency,
+      updatedAt: now,
+    };
     const existing = this.repo.recommendationOf(actor.shopId, findingId);
     // A changed price needs the owner's word again.
     const row = existing
       ? this.repo.updateRecommendation(actor.shopId, existing.id, { ...priced, decisionStatus: 'pending' })
       : this.repo.insertRecommendation({ ...priced, shopId: actor.shopId, jobId, findingId, createdBy: actor.id, createdAt: now });
-    this.audit.record(actor, { action: existing ? 'recommendation.replaced' : 'recommendation.created', entityType: 'job', entityId: jobId, details: { recommendationId: row.id, previousDecision: existing?.decisionStatus ?? null } });
+    this.audit.record(actor, {
+      action: existing ? 'recommendation.replaced' : 'recommendation.created',
+      entityType: 'job',
+      entityId: jobId,
+      details: { recommendationId: row.id, previousDecision: existing?.decisionStatus ?? null },
+    });
     return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]), finding.condition);
   }
 
   estimate(actor: JobCaller, jobId: number): EstimateDto {
     const job = this.jobs.read(actor, jobId);
-    const items = this.dtos(actor, job, this.repo.list(actor.shopId, jobId)).flatMap((f) => (f.recommendation ? [{ ...f, recommendation: f.recommendation }] : []));
+    const items = this.dtos(actor, job, this.repo.list(actor.shopId, jobId)).flatMap((f) =>
+      f.recommendation ? [{ ...f, recommendation: f.recommendation }] : [],
+    );
     const totals = { all: ZERO_TOTALS, approved: ZERO_TOTALS, pending: ZERO_TOTALS, declined: ZERO_TOTALS };
     for (const { recommendation: r } of items) {
       totals.all = addTotals(totals.all, r.totals);

@@ -25,7 +25,13 @@ export class BikeHistoryService {
   history(actor: AuthUser, bikeId: number): BikeHistory {
     const bike = this.bikes.get(actor, bikeId);
     const jobs = this.jobs.listForBike(actor, bikeId).filter((j) => j.status !== 'cancelled');
-    const series = this.series(jobs, this.repo.measurements(actor.shopId, jobs.map((j) => j.id)));
+    const series = this.series(
+      jobs,
+      this.repo.measurements(
+        actor.shopId,
+        jobs.map((j) => j.id),
+      ),
+    );
     const { chainLimits } = this.shops.settings(actor.shopId);
     const limitPct = chainWearLimits(bike.drivetrainSpeeds, chainLimits ?? undefined).replaceAtPct;
     return { bike, jobs: this.jobs.listForBike(actor, bikeId), series, nextChainDue: this.chainDue(series, limitPct) };
@@ -57,6 +63,11 @@ export class BikeHistoryService {
     const basis = est.alreadyDue
       ? 'The latest reading is at or past the replace-at limit: replace the chain now.'
       : `Straight line through ${est.pointsUsed} readings of the current chain; an estimate for planning, not a verdict. Measure again at each visit.`;
-    return { dueOn: isoDay(Math.max(est.dueDay, est.alreadyDue ? est.dueDay : today)), limitPct, ratePctPer30Days: Math.round(est.pctPerDay * 30 * 10_000) / 10_000, basis };
+    return {
+      dueOn: isoDay(Math.max(est.dueDay, est.alreadyDue ? est.dueDay : today)),
+      limitPct,
+      ratePctPer30Days: Math.round(est.pctPerDay * 30 * 10_000) / 10_000,
+      basis,
+    };
   }
 }

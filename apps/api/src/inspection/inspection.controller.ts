@@ -1,11 +1,6 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import {
-  MeasurementInputSchema,
-  UpdateCheckpointRequestSchema,
-  type MeasurementInputDto,
-  type UpdateCheckpointRequest,
-} from '@benchproof/contracts';
+import { MeasurementInputSchema, UpdateCheckpointRequestSchema, type MeasurementInputDto, type UpdateCheckpointRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { BikeHistoryService } from './bike-history.service';

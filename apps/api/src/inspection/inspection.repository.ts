@@ -35,7 +35,12 @@ export class InspectionRepository {
   }
 
   updateCheckpoint(shopId: number, id: number, patch: Partial<NewCheckpointRow>): CheckpointRow {
-    return this.db.update(checkpoints).set(patch).where(and(eq(checkpoints.shopId, shopId), eq(checkpoints.id, id))).returning().get();
+    return this.db
+      .update(checkpoints)
+      .set(patch)
+      .where(and(eq(checkpoints.shopId, shopId), eq(checkpoints.id, id)))
+      .returning()
+      .get();
   }
 
   measurements(shopId: number, jobIds: number[]): MeasurementRow[] {
@@ -61,6 +66,9 @@ export class InspectionRepository {
   }
 
   deleteMeasurement(shopId: number, id: number): void {
-    this.db.delete(measurements).where(and(eq(measurements.shopId, shopId), eq(measurements.id, id))).run();
+    this.db
+      .delete(measurements)
+      .where(and(eq(measurements.shopId, shopId), eq(measurements.id, id)))
+      .run();
   }
 }

@@ -1,13 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { EventEmitter2 } from '@nestjs/event-emitter';
-import type {
-  CheckpointDto,
-  InspectionDto,
-  MeasurementDto,
-  MeasurementInputDto,
-  MeasurementResultDto,
-  UpdateCheckpointRequest,
-} from '@benchproof/contracts';
+import type { CheckpointDto, InspectionDto, MeasurementDto, MeasurementInputDto, MeasurementResultDto, UpdateCheckpointRequest } from '@benchproof/contracts';
 import {
   areaCautions,
   DEFAULT_CHECKPOINTS,
@@ -130,7 +123,15 @@ export class InspectionService {
     const result = this.assessFor(actor, job, input);
     const now = this.clock.now();
     const row = this.repo.insertMeasurement({
-      shopId: actor.shopId, jobId, checkpointId, kind: input.kind, input: { ...input }, result: { ...result }, unit: unitOf(input), userId: actor.id, at: now,
+      shopId: actor.shopId,
+      jobId,
+      checkpointId,
+      kind: input.kind,
+      input: { ...input },
+      result: { ...result },
+      unit: unitOf(input),
+      userId: actor.id,
+      at: now,
     });
     // A reading on an unassessed checkpoint gives it the computed condition; a mechanic's own call is kept.
     if (cp.condition === null) this.repo.updateCheckpoint(actor.shopId, cp.id, { condition: result.condition, inspectedBy: actor.id, inspectedAt: now });

@@ -1,11 +1,5 @@
 import type { MeasurementInputDto, ShopSettingsDto } from '@benchproof/contracts';
-import {
-  assessMeasurement,
-  isDomainInputError,
-  measurementCautions,
-  trendValue,
-  type MeasurementContext,
-} from '@benchproof/domain';
+import { assessMeasurement, isDomainInputError, measurementCautions, trendValue, type MeasurementContext } from '@benchproof/domain';
 import { DomainError } from '../core/http';
 import type { StoredMeasurementResult } from '../db/schema';
 

@@ -28,7 +28,15 @@ export interface ShopScope {
 /** The record a change touches, named in JOB_CLOSED details and in the override's audit entry. */
 export type EvidenceKind = 'job' | 'media' | 'inspection' | 'finding' | 'recommendation' | 'decision' | 'work_log';
 
-export const toJobRef = (j: JobRow): JobRef => ({ id: j.id, shopId: j.shopId, number: j.number, status: j.status, bikeId: j.bikeId, customerId: j.customerId, mechanicId: j.mechanicId });
+export const toJobRef = (j: JobRow): JobRef => ({
+  id: j.id,
+  shopId: j.shopId,
+  number: j.number,
+  status: j.status,
+  bikeId: j.bikeId,
+  customerId: j.customerId,
+  mechanicId: j.mechanicId,
+});
 
 const asActor = (c: JobCaller): Actor => ('kind' in c ? c : staffActor(c));
 
@@ -61,7 +69,10 @@ export class JobAccess {
     if (!isTerminalStatus(job.status)) return job;
     const actor = asActor(caller);
     if (actor.kind === 'staff' && actorCan(actor, 'jobs.reopen_evidence')) {
-      this.audit.record({ id: actor.userId, shopId: actor.shopId }, { action: 'job.closed_override', entityType: 'job', entityId: jobId, details: { status: job.status, what } });
+      this.audit.record(
+        { id: actor.userId, shopId: actor.shopId },
+        { action: 'job.closed_override', entityType: 'job', entityId: jobId, details: { status: job.status, what } },
+      );
       return job;
     }
     throw new DomainError('JOB_CLOSED', undefined, { status: job.status, what });

@@ -85,11 +85,20 @@ export class JobsRepository {
   }
 
   listByBike(shopId: number, bikeId: number): JobRow[] {
-    return this.db.select().from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.bikeId, bikeId))).orderBy(asc(jobs.bookedInAt), asc(jobs.id)).all();
+    return this.db
+      .select()
+      .from(jobs)
+      .where(and(eq(jobs.shopId, shopId), eq(jobs.bikeId, bikeId)))
+      .orderBy(asc(jobs.bookedInAt), asc(jobs.id))
+      .all();
   }
 
   find(shopId: number, id: number): JobRow | undefined {
-    return this.db.select().from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id))).get();
+    return this.db
+      .select()
+      .from(jobs)
+      .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
+      .get();
   }
 
   insert(row: NewJobRow): JobRow {
@@ -97,7 +106,12 @@ export class JobsRepository {
   }
 
   update(shopId: number, id: number, patch: Partial<NewJobRow>): JobRow {
-    return this.db.update(jobs).set(patch).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id))).returning().get();
+    return this.db
+      .update(jobs)
+      .set(patch)
+      .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
+      .returning()
+      .get();
   }
 
   insertEvent(row: typeof jobStatusEvents.$inferInsert): void {

@@ -29,7 +29,6 @@ import { type JobRow, JobsRepository } from './jobs.repository';
 import { ReportSentChecks } from './report-sent';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
 
-
 type Actor = Pick<AuthUser, 'shopId'>;
 
 @Injectable()
@@ -55,8 +54,14 @@ export class JobsService {
 
   private context(actor: AuthUser, rows: JobRow[]): SummaryContext {
     return {
-      owners: this.customers.byIds(actor, rows.map((r) => r.customerId)),
-      bikes: this.bikes.byIds(actor, rows.map((r) => r.bikeId)),
+      owners: this.customers.byIds(
+        actor,
+        rows.map((r) => r.customerId),
+      ),
+      bikes: this.bikes.byIds(
+        actor,
+        rows.map((r) => r.bikeId),
+      ),
       staff: new Map(this.users.list(actor).map((u) => [u.id, u.name])),
       today: this.today(),
     };
@@ -134,7 +139,9 @@ export class JobsService {
     if (input.newBike) return this.bikes.insert(actor, owner.id, input.newBike);
     const bike = this.bikes.get(actor, input.bikeId ?? 0);
     if (bike.customerId !== owner.id) {
-      throw new DomainError('VALIDATION_FAILED', 'bikeId: that bike belongs to another customer.', { issues: [{ path: 'bikeId', message: 'Belongs to another customer' }] });
+      throw new DomainError('VALIDATION_FAILED', 'bikeId: that bike belongs to another customer.', {
+        issues: [{ path: 'bikeId', message: 'Belongs to another customer' }],
+      });
     }
     return bike;
   }
@@ -167,13 +174,22 @@ export class JobsService {
   private move(actor: { shopId: number; id: number | null }, id: number, to: JobRow['status'], note: string, confirmNoReport?: boolean): void {
     this.repo.transaction((tx) => {
       const job = this.load(actor, id);
-      if (!canTransition(job.status, to)) throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to, allowed: allowedNextStatuses(job.status) });
+      if (!canTransition(job.status, to))
+        throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to, allowed: allowedNextStatuses(job.status) });
       if (to === 'ready') this.requirePassedCheck(actor, job);
       // Collected is terminal, so only the hand-over ever sets collectedWithoutReport.
       const withoutReport = to === 'collected' && !this.reportSent.require(actor.shopId, id, confirmNoReport);
       const now = this.clock.now();
       this.repo.update(actor.shopId, id, { status: to, [STATUS_TIME_FIELD[to]]: now, updatedAt: now, collectedWithoutReport: withoutReport });
-      this.repo.insertEvent({ shopId: actor.shopId, jobId: id, fromStatus: job.status, toStatus: to, userId: actor.id, note: note || (withoutReport ? 'Handed over without a report' : ''), at: now });
+      this.repo.insertEvent({
+        shopId: actor.shopId,
+        jobId: id,
+        fromStatus: job.status,
+        toStatus: to,
+        userId: actor.id,
+        note: note || (withoutReport ? 'Handed over without a report' : ''),
+        at: now,
+      });
       const details = { from: job.status, to, ...(actor.id === null ? { by: 'owner_link' } : {}), ...(withoutReport ? { withoutReport } : {}) };
       this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details });
       publish(this.emitter, new JobMovedEvent(tx, actor.shopId, id, job.status, to, actor.id));
@@ -211,7 +227,14 @@ export class JobsService {
     const now = this.clock.now();
     const row = this.repo.transaction(() => {
       const check = this.repo.insertFinalCheck({
-        shopId: actor.shopId, jobId: id, checkerId: actor.id, passed: input.passed, items: input.items, testRideNotes: input.testRideNotes, notes: input.note ?? '', at: now,
+        shopId: actor.shopId,
+        jobId: id,
+        checkerId: actor.id,
+        passed: input.passed,
+        items: input.items,
+        testRideNotes: input.testRideNotes,
+        notes: input.note ?? '',
+        at: now,
       });
       this.repo.update(actor.shopId, id, { finalCheckerId: input.passed ? actor.id : job.finalCheckerId, updatedAt: now });
       this.audit.record(actor, { action: 'job.final_check', entityType: 'job', entityId: id, details: { passed: input.passed } });

@@ -64,24 +64,18 @@ export function toFinalCheckDto(row: FinalCheckRow, staff: Map<number, string>):
     id: row.id,
     checker: { id: row.checkerId, name: staff.get(row.checkerId) ?? '' },
     passed: row.passed,
-    items: (row.items ?? {}),
+    items: row.items ?? {},
     testRideNotes: row.testRideNotes,
     note: row.notes || null,
     at: row.at.toISOString(),
   };
 }
 
-export function toDetail(
-  job: JobRow,
-  ctx: SummaryContext,
-  extra: { finalCheck: FinalCheckRow | undefined; finalCheckSecondPerson: boolean },
-): JobDetail {
+export function toDetail(job: JobRow, ctx: SummaryContext, extra: { finalCheck: FinalCheckRow | undefined; finalCheckSecondPerson: boolean }): JobDetail {
   const bike = ctx.bikes.get(job.bikeId);
   const customer = ctx.owners.get(job.customerId);
   if (!bike || !customer) throw new Error(`Job ${job.id} points at a missing bike or customer`);
-  const times = Object.fromEntries(
-    JOB_STATUSES.map((s) => [s, (job[STATUS_TIME_FIELD[s]] as Date | null)?.toISOString() ?? null]),
-  ) as JobDetail['statusTimes'];
+  const times = Object.fromEntries(JOB_STATUSES.map((s) => [s, (job[STATUS_TIME_FIELD[s]] as Date | null)?.toISOString() ?? null])) as JobDetail['statusTimes'];
   return {
     ...toJobDto(job, ctx),
     statusLabel: JOB_STATUS_LABELS[job.status],

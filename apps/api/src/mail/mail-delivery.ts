@@ -59,7 +59,13 @@ export class MailDelivery {
     try {
       const attachments = await this.attachments(row);
       const receipt = await this.transport.send({
-        from: this.cfg.MAIL_FROM, to: row.toAddress, subject: row.subject, text: row.textBody, html: row.htmlBody, messageId: row.messageId, attachments,
+        from: this.cfg.MAIL_FROM,
+        to: row.toAddress,
+        subject: row.subject,
+        text: row.textBody,
+        html: row.htmlBody,
+        messageId: row.messageId,
+        attachments,
       });
       this.repo.markSent(shopId, id, this.clock.now(), receipt.response);
     } catch (err) {

@@ -21,17 +21,30 @@ export class MailRepository {
   }
 
   find(shopId: number, id: number): OutboxRow | undefined {
-    return this.db.select().from(outboxMessages).where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id))).get();
+    return this.db
+      .select()
+      .from(outboxMessages)
+      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id)))
+      .get();
   }
 
   listByJob(shopId: number, jobId: number): OutboxRow[] {
-    return this.db.select().from(outboxMessages).where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.jobId, jobId))).orderBy(desc(outboxMessages.id)).all();
+    return this.db
+      .select()
+      .from(outboxMessages)
+      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.jobId, jobId)))
+      .orderBy(desc(outboxMessages.id))
+      .all();
   }
 
   /** A report message that is sent or on its way (a finally failed one does not count). */
   hasReportMessage(shopId: number, jobId: number): boolean {
-    const row = this.db.select({ id: outboxMessages.id }).from(outboxMessages)
-      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.jobId, jobId), eq(outboxMessages.kind, 'report_ready'), ne(outboxMessages.status, 'failed')))
+    const row = this.db
+      .select({ id: outboxMessages.id })
+      .from(outboxMessages)
+      .where(
+        and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.jobId, jobId), eq(outboxMessages.kind, 'report_ready'), ne(outboxMessages.status, 'failed')),
+      )
       .get();
     return !!row;
   }
@@ -42,28 +55,45 @@ export class MailRepository {
    * a process that died mid-send and may be taken again.
    */
   claim(shopId: number, id: number, now: Date, staleBefore: Date): OutboxRow | undefined {
-    return this.db.update(outboxMessages)
+    return this.db
+      .update(outboxMessages)
       .set({ status: 'sending', attempts: sql`${outboxMessages.attempts} + 1`, sendingSince: now, nextTryAt: null })
-      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id),
-        or(eq(outboxMessages.status, 'queued'), and(eq(outboxMessages.status, 'sending'), lte(outboxMessages.sendingSince, staleBefore)))))
-      .returning().get();
+      .where(
+        and(
+          eq(outboxMessages.shopId, shopId),
+          eq(outboxMessages.id, id),
+          or(eq(outboxMessages.status, 'queued'), and(eq(outboxMessages.status, 'sending'), lte(outboxMessages.sendingSince, staleBefore))),
+        ),
+      )
+      .returning()
+      .get();
   }
 
   markSent(shopId: number, id: number, at: Date, response: string): void {
-    this.db.update(outboxMessages).set({ status: 'sent', sentAt: at, smtpResponse: response, lastError: null, sendingSince: null })
-      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id))).run();
+    this.db
+      .update(outboxMessages)
+      .set({ status: 'sent', sentAt: at, smtpResponse: response, lastError: null, sendingSince: null })
+      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id)))
+      .run();
   }
 
   /** After a failed attempt: back to the queue with its next try, or failed for good. */
   markAttemptFailed(shopId: number, id: number, error: string, nextTryAt: Date | null): void {
-    this.db.update(outboxMessages).set({ status: nextTryAt ? 'queued' : 'failed', lastError: error.slice(0, 1000), nextTryAt, sendingSince: null })
-      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id))).run();
+    this.db
+      .update(outboxMessages)
+      .set({ status: nextTryAt ? 'queued' : 'failed', lastError: error.slice(0, 1000), nextTryAt, sendingSince: null })
+      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id)))
+      .run();
   }
 
   /** Desk's resend of a finally failed message: a new round of attempts. */
   requeue(shopId: number, id: number, tx: DbTx): OutboxRow | undefined {
-    return tx.update(outboxMessages).set({ status: 'queued', attempts: 0, round: sql`${outboxMessages.round} + 1`, nextTryAt: null })
-      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id), eq(outboxMessages.status, 'failed'))).returning().get();
+    return tx
+      .update(outboxMessages)
+      .set({ status: 'queued', attempts: 0, round: sql`${outboxMessages.round} + 1`, nextTryAt: null })
+      .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id), eq(outboxMessages.status, 'failed')))
+      .returning()
+      .get();
   }
 
   /**
@@ -71,11 +101,16 @@ export class MailRepository {
    * past the lease. The one cross-shop query: the outbox relay works for all shops at once.
    */
   due(now: Date, staleBefore: Date): Pick<OutboxRow, 'id' | 'shopId' | 'round'>[] {
-    return this.db.select({ id: outboxMessages.id, shopId: outboxMessages.shopId, round: outboxMessages.round }).from(outboxMessages)
-      .where(or(
-        and(eq(outboxMessages.status, 'queued'), or(isNull(outboxMessages.nextTryAt), lte(outboxMessages.nextTryAt, now))),
-        and(inArray(outboxMessages.status, ['sending']), lte(outboxMessages.sendingSince, staleBefore)),
-      ))
-      .limit(200).all();
+    return this.db
+      .select({ id: outboxMessages.id, shopId: outboxMessages.shopId, round: outboxMessages.round })
+      .from(outboxMessages)
+      .where(
+        or(
+          and(eq(outboxMessages.status, 'queued'), or(isNull(outboxMessages.nextTryAt), lte(outboxMessages.nextTryAt, now))),
+          and(inArray(outboxMessages.status, ['sending']), lte(outboxMessages.sendingSince, staleBefore)),
+        ),
+      )
+      .limit(200)
+      .all();
   }
 }

@@ -66,11 +66,24 @@ export class MailService implements OnModuleInit {
   /** Writes the outbox row and its task; pass the cause's transaction so both commit or neither. */
   queue(mail: QueuedMail, tx?: DbTx): OutboxMessageDto {
     const write = (t: DbTx) => {
-      const row = this.repo.insert({
-        shopId: mail.shopId, jobId: mail.jobId, kind: mail.kind, reportId: mail.reportId ?? null, toAddress: mail.to, subject: mail.subject,
-        textBody: mail.text, htmlBody: mail.html, attachments: mail.attachments, status: 'queued', messageId: this.newMessageId(mail.shopId),
-        createdBy: mail.createdBy ?? null, createdAt: this.clock.now(),
-      }, t);
+      const row = this.repo.insert(
+        {
+          shopId: mail.shopId,
+          jobId: mail.jobId,
+          kind: mail.kind,
+          reportId: mail.reportId ?? null,
+          toAddress: mail.to,
+          subject: mail.subject,
+          textBody: mail.text,
+          htmlBody: mail.html,
+          attachments: mail.attachments,
+          status: 'queued',
+          messageId: this.newMessageId(mail.shopId),
+          createdBy: mail.createdBy ?? null,
+          createdAt: this.clock.now(),
+        },
+        t,
+      );
       this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(row), shopId: row.shopId }, t);
       return row;
     };
@@ -106,7 +119,12 @@ export class MailService implements OnModuleInit {
     const to = this.recipient(actor, job.customerId, input.to);
     const attached = pdf.size <= this.cfg.MAIL_ATTACHMENT_BUDGET;
     const rendered = reportReadyMail({
-      ...this.context(actor, job), version: pdf.version, attached, sizeBytes: pdf.size, budgetBytes: this.cfg.MAIL_ATTACHMENT_BUDGET, link: pdf.link,
+      ...this.context(actor, job),
+      version: pdf.version,
+      attached,
+      sizeBytes: pdf.size,
+      budgetBytes: this.cfg.MAIL_ATTACHMENT_BUDGET,
+      link: pdf.link,
     });
     const attachments: OutboxAttachmentRef[] = attached
       ? [{ filename: pdf.filename, contentType: 'application/pdf', size: pdf.size, sha256: pdf.sha256, source: { kind: 'report', reportId } }]
@@ -132,7 +150,10 @@ export class MailService implements OnModuleInit {
     return to;
   }
 
-  private context(actor: Actor, job: { number: string; customerId: number; bikeId: number }): { shop: ShopBrand; ownerName: string; jobNumber: string; bikeLabel: string } {
+  private context(
+    actor: Actor,
+    job: { number: string; customerId: number; bikeId: number },
+  ): { shop: ShopBrand; ownerName: string; jobNumber: string; bikeLabel: string } {
     const shop = this.shops.settings(actor.shopId);
     const bike = this.bikes.get(actor, job.bikeId);
     const ownerName = this.customers.get(actor, job.customerId).name;
@@ -147,10 +168,22 @@ export class MailService implements OnModuleInit {
 
   private toDto(r: OutboxRow): OutboxMessageDto {
     return {
-      id: r.id, jobId: r.jobId, kind: r.kind, reportId: r.reportId, to: r.toAddress, subject: r.subject, status: r.status,
-      attempts: r.attempts, maxAttempts: this.cfg.MAIL_MAX_ATTEMPTS, lastError: r.lastError, nextTryAt: r.nextTryAt?.toISOString() ?? null,
-      sentAt: r.sentAt?.toISOString() ?? null, createdAt: r.createdAt.toISOString(), messageId: r.messageId,
-      attachments: r.attachments.map((a) => ({ filename: a.filename, size: a.size })), canResend: r.status === 'failed',
+      id: r.id,
+      jobId: r.jobId,
+      kind: r.kind,
+      reportId: r.reportId,
+      to: r.toAddress,
+      subject: r.subject,
+      status: r.status,
+      attempts: r.attempts,
+      maxAttempts: this.cfg.MAIL_MAX_ATTEMPTS,
+      lastError: r.lastError,
+      nextTryAt: r.nextTryAt?.toISOString() ?? null,
+      sentAt: r.sentAt?.toISOString() ?? null,
+      createdAt: r.createdAt.toISOString(),
+      messageId: r.messageId,
+      attachments: r.attachments.map((a) => ({ filename: a.filename, size: a.size })),
+      canResend: r.status === 'failed',
     };
   }
 }

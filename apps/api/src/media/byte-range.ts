@@ -1,7 +1,4 @@
-export type RangeResult =
-  | { kind: 'full' }
-  | { kind: 'partial'; start: number; end: number }
-  | { kind: 'unsatisfiable' };
+export type RangeResult = { kind: 'full' } | { kind: 'partial'; start: number; end: number } | { kind: 'unsatisfiable' };
 
 /**
  * Reads a `Range` header for a representation of `size` bytes (RFC 9110 §14.1.2 and

@@ -57,7 +57,10 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
     if (!row || row.derivativeStatus !== 'pending' || !row.originalKey) return;
     try {
       const original = await buffer(this.storage.createReadStream(row.originalKey));
-      const made = await this.image.renditions(original, IMAGE_VARIANTS.map((v) => DERIVATIVE_SIZES[v]));
+      const made = await this.image.renditions(
+        original,
+        IMAGE_VARIANTS.map((v) => DERIVATIVE_SIZES[v]),
+      );
       for (const [i, variant] of IMAGE_VARIANTS.entries()) {
         await this.save(row, variant, made[i]);
         task.progress((i + 1) / IMAGE_VARIANTS.length);
@@ -65,7 +68,8 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
       this.repo.update(assetId, { derivativeStatus: 'ready', derivativeError: null });
       this.phash.enqueue(row);
     } catch (err) {
-      if (task.attempt >= DERIVATIVES_MAX_ATTEMPTS) this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
+      if (task.attempt >= DERIVATIVES_MAX_ATTEMPTS)
+        this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
       throw err;
     }
   }

@@ -13,7 +13,14 @@ export interface FileReply {
   body: Readable | null;
 }
 
-const EXT: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'video/mp4': 'mp4', 'video/quicktime': 'mov', 'video/webm': 'webm' };
+const EXT: Record<string, string> = {
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+  'video/mp4': 'mp4',
+  'video/quicktime': 'mov',
+  'video/webm': 'webm',
+};
 
 /**
  * Answers for media bytes: only staff of the owning shop (404 for anyone else, as
@@ -35,7 +42,12 @@ export class MediaFilesService {
    * A screen-sized derivative of a live asset of this job, for the owner page:
    * never the original, never another job's media.
    */
-  async openDerivativeOfJob(scope: { shopId: number; jobId: number }, id: number, variant: 'thumb' | 'screen', req: { range?: string; ifNoneMatch?: string }): Promise<FileReply> {
+  async openDerivativeOfJob(
+    scope: { shopId: number; jobId: number },
+    id: number,
+    variant: 'thumb' | 'screen',
+    req: { range?: string; ifNoneMatch?: string },
+  ): Promise<FileReply> {
     const row = this.repo.findInShop(scope.shopId, id);
     if (!row || row.jobId !== scope.jobId || row.deletedAt || row.purgedAt) throw notFound('Media');
     const d = this.repo.findDerivative(row.id, variant) ?? this.repo.findDerivative(row.id, 'poster');
@@ -43,7 +55,12 @@ export class MediaFilesService {
     return this.serve({ key: d.key, sha256: d.sha256, mime: 'image/jpeg' }, id, variant, req);
   }
 
-  private async serve(file: { key: string; sha256: string; mime: string }, id: number, variant: string, req: { range?: string; ifNoneMatch?: string }): Promise<FileReply> {
+  private async serve(
+    file: { key: string; sha256: string; mime: string },
+    id: number,
+    variant: string,
+    req: { range?: string; ifNoneMatch?: string },
+  ): Promise<FileReply> {
     const stat = await this.storage.stat(file.key);
     if (!stat) throw notFound('Media file');
     const etag = `"${file.sha256}"`;

@@ -43,7 +43,8 @@ export class MediaSweepService implements OnModuleInit {
     const removed = await this.removeLeftovers(new Date(now.getTime() - LIVE_WRITE_GRACE_MS));
     const expired = await this.tus.expireAbandoned();
     const pruned = this.tasks.prune?.(new Date(now.getTime() - DONE_TASK_RETENTION_MS)) ?? 0;
-    if (removed.length + expired + pruned > 0) this.logger.log(`Sweep: ${removed.length} leftover file(s), ${expired} expired upload(s), ${pruned} old task row(s)`);
+    if (removed.length + expired + pruned > 0)
+      this.logger.log(`Sweep: ${removed.length} leftover file(s), ${expired} expired upload(s), ${pruned} old task row(s)`);
     this.scheduleNext(now);
   }
 

@@ -38,7 +38,13 @@ export class MediaUploadService {
     }
   }
 
-  private async one(actor: AuthUser, jobId: number, file: IncomingFile, meta: ReturnType<typeof UploadMetaSchema.parse>, index: number): Promise<UploadFileResult> {
+  private async one(
+    actor: AuthUser,
+    jobId: number,
+    file: IncomingFile,
+    meta: ReturnType<typeof UploadMetaSchema.parse>,
+    index: number,
+  ): Promise<UploadFileResult> {
     const name = file.originalName;
     try {
       return { ok: true, index, name, asset: await this.intake.intake(actor, jobId, file, meta, 'multipart') };

@@ -8,7 +8,9 @@ export type MediaAssetRow = typeof mediaAssets.$inferSelect;
 export type NewMediaAssetRow = typeof mediaAssets.$inferInsert;
 export type MediaDerivativeRow = typeof mediaDerivatives.$inferSelect;
 export type NewMediaDerivativeRow = typeof mediaDerivatives.$inferInsert;
-export type AssetPatch = Partial<Pick<MediaAssetRow, 'phase' | 'area' | 'caption' | 'derivativeStatus' | 'derivativeError' | 'deletedAt' | 'deletedBy' | 'purgedAt' | 'originalKey' | 'phash'>>;
+export type AssetPatch = Partial<
+  Pick<MediaAssetRow, 'phase' | 'area' | 'caption' | 'derivativeStatus' | 'derivativeError' | 'deletedAt' | 'deletedBy' | 'purgedAt' | 'originalKey' | 'phash'>
+>;
 
 @Injectable()
 export class MediaRepository {
@@ -19,7 +21,11 @@ export class MediaRepository {
   }
 
   findInShop(shopId: number, id: number): MediaAssetRow | undefined {
-    return this.db.select().from(mediaAssets).where(and(eq(mediaAssets.shopId, shopId), eq(mediaAssets.id, id))).get();
+    return this.db
+      .select()
+      .from(mediaAssets)
+      .where(and(eq(mediaAssets.shopId, shopId), eq(mediaAssets.id, id)))
+      .get();
   }
 
   findById(id: number): MediaAssetRow | undefined {
@@ -32,7 +38,12 @@ export class MediaRepository {
     if (q.phase) where.push(eq(mediaAssets.phase, q.phase));
     if (q.area) where.push(eq(mediaAssets.area, q.area));
     if (q.kind) where.push(eq(mediaAssets.kind, q.kind));
-    return this.db.select().from(mediaAssets).where(and(...where)).orderBy(asc(mediaAssets.uploadedAt), asc(mediaAssets.id)).all();
+    return this.db
+      .select()
+      .from(mediaAssets)
+      .where(and(...where))
+      .orderBy(asc(mediaAssets.uploadedAt), asc(mediaAssets.id))
+      .all();
   }
 
   listByIds(shopId: number, jobId: number, ids: number[]): MediaAssetRow[] {
@@ -58,7 +69,14 @@ export class MediaRepository {
     return this.db
       .select()
       .from(mediaAssets)
-      .where(and(eq(mediaAssets.derivativeStatus, 'ready'), isNull(mediaAssets.phash), isNull(mediaAssets.purgedAt), inArray(mediaAssets.kind, ['photo', 'scope_still'])))
+      .where(
+        and(
+          eq(mediaAssets.derivativeStatus, 'ready'),
+          isNull(mediaAssets.phash),
+          isNull(mediaAssets.purgedAt),
+          inArray(mediaAssets.kind, ['photo', 'scope_still']),
+        ),
+      )
       .all();
   }
 

@@ -33,7 +33,12 @@ export class OwnerLinksController {
   @Post('owner-links')
   @Can('owner_links.manage')
   @ApiZodBody(CreateOwnerLinkRequestSchema)
-  create(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(CreateOwnerLinkRequestSchema)) body: CreateOwnerLinkRequest, @Req() req: Request) {
+  create(
+    @CurrentUser() user: AuthUser,
+    @Param('jobId', ParseIntPipe) jobId: number,
+    @Body(zod(CreateOwnerLinkRequestSchema)) body: CreateOwnerLinkRequest,
+    @Req() req: Request,
+  ) {
     return this.links.create(user, jobId, body, `${req.protocol}://${req.get('host') ?? 'localhost'}`);
   }
 

@@ -24,11 +24,20 @@ export class OwnerLinksRepository {
   }
 
   listForJob(shopId: number, jobId: number): OwnerLinkRow[] {
-    return this.db.select().from(ownerLinks).where(and(eq(ownerLinks.shopId, shopId), eq(ownerLinks.jobId, jobId))).orderBy(desc(ownerLinks.createdAt), desc(ownerLinks.id)).all();
+    return this.db
+      .select()
+      .from(ownerLinks)
+      .where(and(eq(ownerLinks.shopId, shopId), eq(ownerLinks.jobId, jobId)))
+      .orderBy(desc(ownerLinks.createdAt), desc(ownerLinks.id))
+      .all();
   }
 
   find(shopId: number, jobId: number, id: number): OwnerLinkRow | undefined {
-    return this.db.select().from(ownerLinks).where(and(eq(ownerLinks.shopId, shopId), eq(ownerLinks.jobId, jobId), eq(ownerLinks.id, id))).get();
+    return this.db
+      .select()
+      .from(ownerLinks)
+      .where(and(eq(ownerLinks.shopId, shopId), eq(ownerLinks.jobId, jobId), eq(ownerLinks.id, id)))
+      .get();
   }
 
   revokeOpen(shopId: number, jobId: number, at: Date, by: number): void {
@@ -40,6 +49,11 @@ export class OwnerLinksRepository {
   }
 
   update(shopId: number, id: number, patch: Partial<NewOwnerLinkRow>): OwnerLinkRow {
-    return this.db.update(ownerLinks).set(patch).where(and(eq(ownerLinks.shopId, shopId), eq(ownerLinks.id, id))).returning().get();
+    return this.db
+      .update(ownerLinks)
+      .set(patch)
+      .where(and(eq(ownerLinks.shopId, shopId), eq(ownerLinks.id, id)))
+      .returning()
+      .get();
   }
 }

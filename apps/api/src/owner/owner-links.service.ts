@@ -33,8 +33,15 @@ export class OwnerLinksService {
     const now = this.clock.now().getTime();
     const state = r.revokedAt ? 'revoked' : r.expiresAt.getTime() <= now ? 'expired' : 'active';
     return {
-      id: r.id, jobId: r.jobId, state, createdAt: r.createdAt.toISOString(), createdById: r.createdBy,
-      expiresAt: r.expiresAt.toISOString(), revokedAt: iso(r.revokedAt), lastViewedAt: iso(r.lastViewedAt), sentTo: r.sentTo,
+      id: r.id,
+      jobId: r.jobId,
+      state,
+      createdAt: r.createdAt.toISOString(),
+      createdById: r.createdBy,
+      expiresAt: r.expiresAt.toISOString(),
+      revokedAt: iso(r.revokedAt),
+      lastViewedAt: iso(r.lastViewedAt),
+      sentTo: r.sentTo,
     };
   }
 
@@ -62,11 +69,25 @@ export class OwnerLinksService {
     let mail: CreatedOwnerLinkDto['mail'] = { status: 'not_sent', reason: 'Not asked to send.' };
     if (input.send && !owner.email) mail = { status: 'not_sent', reason: 'The owner has no e-mail address; copy the link for a text message.' };
     else if (input.send && owner.email) {
-      const sent = this.mailer.send({ shopId: actor.shopId, jobId, linkId: row.id, createdBy: actor.id, to: owner.email, ownerName: owner.name, url, expiresAt });
+      const sent = this.mailer.send({
+        shopId: actor.shopId,
+        jobId,
+        linkId: row.id,
+        createdBy: actor.id,
+        to: owner.email,
+        ownerName: owner.name,
+        url,
+        expiresAt,
+      });
       mail = sent.status === 'queued' ? { status: 'queued', reason: null } : sent;
     }
     const saved = mail.status === 'queued' && owner.email ? this.repo.update(actor.shopId, row.id, { sentTo: owner.email }) : row;
-    this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details: { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status } });
+    this.audit.record(actor, {
+      action: 'owner_link.created',
+      entityType: 'job',
+      entityId: jobId,
+      details: { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status },
+    });
     this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
     return { link: this.toDto(saved), url, mail };
   }
@@ -89,7 +110,8 @@ export class OwnerLinksService {
     const row = this.repo.byTokenHash(hashOwnerToken(token));
     if (!row) throw new DomainError('OWNER_LINK_INVALID');
     if (row.revokedAt) throw new DomainError('OWNER_LINK_REVOKED');
-    if (row.expiresAt.getTime() <= this.clock.now().getTime()) throw new DomainError('OWNER_LINK_EXPIRED', undefined, { expiredAt: row.expiresAt.toISOString() });
+    if (row.expiresAt.getTime() <= this.clock.now().getTime())
+      throw new DomainError('OWNER_LINK_EXPIRED', undefined, { expiredAt: row.expiresAt.toISOString() });
     return { kind: 'owner', shopId: row.shopId, jobId: row.jobId, linkId: row.id, expiresAt: row.expiresAt };
   }
 
@@ -97,7 +119,10 @@ export class OwnerLinksService {
   viewed(owner: OwnerActor): void {
     const now = this.clock.now();
     this.repo.update(owner.shopId, owner.linkId, { lastViewedAt: now });
-    this.audit.record({ shopId: owner.shopId, id: null }, { action: 'owner.viewed', entityType: 'job', entityId: owner.jobId, details: { linkId: owner.linkId } });
+    this.audit.record(
+      { shopId: owner.shopId, id: null },
+      { action: 'owner.viewed', entityType: 'job', entityId: owner.jobId, details: { linkId: owner.linkId } },
+    );
     this.bus.emit(owner.shopId, { type: 'viewed', jobId: owner.jobId, at: now.toISOString() });
   }
 }

@@ -1,7 +1,16 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { notFound } from '../core/http';
 import { FindingsService } from '../findings';
-import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerActor, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type StreamReply } from './owner.ports';
+import {
+  OWNER_MEDIA,
+  OWNER_PAIRS,
+  OWNER_REPORT,
+  type OwnerActor,
+  type OwnerMediaPort,
+  type OwnerPairsPort,
+  type OwnerReportPort,
+  type StreamReply,
+} from './owner.ports';
 
 /**
  * Bytes for the owner page. Only shots the page itself shows (linked to a

@@ -11,7 +11,16 @@ import { InspectionService } from '../inspection';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import { OwnerEventsBus } from './owner-events';
-import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerActor, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
+import {
+  OWNER_MEDIA,
+  OWNER_PAIRS,
+  OWNER_REPORT,
+  type OwnerActor,
+  type OwnerMediaPort,
+  type OwnerPairsPort,
+  type OwnerReportPort,
+  type OwnerShotSource,
+} from './owner.ports';
 
 /**
  * Everything the owner page shows and does, for one owner actor (one job).
@@ -42,8 +51,15 @@ export class OwnerPageService {
     const shop = this.shops.settings(owner.shopId);
     const bike = this.bikes.get(owner, job.bikeId);
     const findings = this.findings.list(owner, owner.jobId);
-    const shots = this.media.shotsOfFindings(scope, findings.map((f) => f.id));
-    const shot = (s: OwnerShotSource): OwnerShot => ({ ...s, thumbUrl: `/api/owner/${token}/media/${s.id}/thumb`, screenUrl: `/api/owner/${token}/media/${s.id}/screen` });
+    const shots = this.media.shotsOfFindings(
+      scope,
+      findings.map((f) => f.id),
+    );
+    const shot = (s: OwnerShotSource): OwnerShot => ({
+      ...s,
+      thumbUrl: `/api/owner/${token}/media/${s.id}/thumb`,
+      screenUrl: `/api/owner/${token}/media/${s.id}/screen`,
+    });
     const report = this.report.latest(scope);
     return {
       shop: { name: shop.name, phone: shop.phone, email: shop.email, brandPrimary: shop.brandPrimary, brandAccent: shop.brandAccent },
@@ -52,15 +68,28 @@ export class OwnerPageService {
       ownerName: this.customers.get(owner, job.customerId).name,
       expiresAt: owner.expiresAt.toISOString(),
       findings: findings.map((f) => ({
-        id: f.id, area: f.area, condition: f.condition, description: f.description, doNotRide: f.doNotRide, cautions: f.cautions,
+        id: f.id,
+        area: f.area,
+        condition: f.condition,
+        description: f.description,
+        doNotRide: f.doNotRide,
+        cautions: f.cautions,
         shots: (shots.get(f.id) ?? []).map(shot),
         recommendation: f.recommendation && {
-          id: f.recommendation.id, summary: f.recommendation.summary, urgency: f.recommendation.urgency, currency: f.recommendation.currency,
-          totals: f.recommendation.totals, decisionStatus: f.recommendation.decisionStatus, updatedAt: f.recommendation.updatedAt,
+          id: f.recommendation.id,
+          summary: f.recommendation.summary,
+          urgency: f.recommendation.urgency,
+          currency: f.recommendation.currency,
+          totals: f.recommendation.totals,
+          decisionStatus: f.recommendation.decisionStatus,
+          updatedAt: f.recommendation.updatedAt,
         },
       })),
       measurements: this.inspection.measurementsOfJobs(owner, [owner.jobId]).map((m) => ({
-        id: m.id, kind: m.kind, condition: m.result.condition, verdict: typeof m.result.message === 'string' ? m.result.message : '',
+        id: m.id,
+        kind: m.kind,
+        condition: m.result.condition,
+        verdict: typeof m.result.message === 'string' ? m.result.message : '',
         explanation: MEASUREMENT_PLAIN_WORDS[m.kind],
       })),
       pairs: this.pairs.pairsOf(scope).map((p) => ({ id: p.id, caption: p.caption, before: shot(p.before), after: shot(p.after) })),
@@ -81,7 +110,12 @@ export class OwnerPageService {
     const decidedAt = this.clock.now();
     for (const item of input.items) {
       this.findings.decide(owner, owner.jobId, item.recommendationId, {
-        status: item.status, channel: 'owner_link', decidedByName: ownerName, recordedBy: null, decidedAt, note: '',
+        status: item.status,
+        channel: 'owner_link',
+        decidedByName: ownerName,
+        recordedBy: null,
+        decidedAt,
+        note: '',
         seen: { updatedAt: item.seenUpdatedAt, grossMinor: item.seenGrossMinor },
       });
     }
@@ -92,9 +126,15 @@ export class OwnerPageService {
   private check(f: FindingDto | undefined, item: OwnerDecisionsRequest['items'][number]): void {
     const rec = f?.recommendation;
     if (!rec) throw new DomainError('NOT_FOUND', 'That item is not part of this job.', { recommendationId: item.recommendationId });
-    if (rec.decisionStatus !== 'pending') throw new DomainError('CONFLICT', 'This item was already decided.', { recommendationId: rec.id, decisionStatus: rec.decisionStatus });
+    if (rec.decisionStatus !== 'pending')
+      throw new DomainError('CONFLICT', 'This item was already decided.', { recommendationId: rec.id, decisionStatus: rec.decisionStatus });
     if (rec.updatedAt !== item.seenUpdatedAt || rec.totals.grossMinor !== item.seenGrossMinor) {
-      throw new DomainError('PRICE_CHANGED', undefined, { recommendationId: rec.id, grossMinor: rec.totals.grossMinor, currency: rec.currency, updatedAt: rec.updatedAt });
+      throw new DomainError('PRICE_CHANGED', undefined, {
+        recommendationId: rec.id,
+        grossMinor: rec.totals.grossMinor,
+        currency: rec.currency,
+        updatedAt: rec.updatedAt,
+      });
     }
     if (item.status === 'declined' && rec.urgency === 'safety' && !item.safetyConfirmed) {
       throw new DomainError('SAFETY_CONFIRMATION_REQUIRED', undefined, { recommendationId: rec.id, cautions: f.cautions });

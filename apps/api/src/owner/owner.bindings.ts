@@ -28,7 +28,10 @@ export class AnnotatedOwnerMedia implements OwnerMediaPort {
   shotsOfFindings(scope: Scope, findingIds: number[]): Map<number, OwnerShotSource[]> {
     const out = new Map<number, OwnerShotSource[]>();
     for (const [findingId, assets] of this.media.shotsOfFindings(scope, findingIds)) {
-      out.set(findingId, assets.filter((a) => STILLS.has(a.kind)).map((a) => ({ id: a.id, caption: a.caption, width: a.width, height: a.height })));
+      out.set(
+        findingId,
+        assets.filter((a) => STILLS.has(a.kind)).map((a) => ({ id: a.id, caption: a.caption, width: a.width, height: a.height })),
+      );
     }
     return out;
   }
@@ -52,8 +55,15 @@ export class OwnerPairsFromPairs implements OwnerPairsPort {
   constructor(private readonly pairs: PairsService) {}
 
   pairsOf(scope: Scope): ReturnType<OwnerPairsPort['pairsOf']> {
-    const shot = (m: { id: number; caption: string; width: number | null; height: number | null }): OwnerShotSource => ({ id: m.id, caption: m.caption, width: m.width, height: m.height });
-    return this.pairs.list({ kind: 'owner', ...scope }, scope.jobId).map((p) => ({ id: p.id, caption: p.caption, before: shot(p.before), after: shot(p.after) }));
+    const shot = (m: { id: number; caption: string; width: number | null; height: number | null }): OwnerShotSource => ({
+      id: m.id,
+      caption: m.caption,
+      width: m.width,
+      height: m.height,
+    });
+    return this.pairs
+      .list({ kind: 'owner', ...scope }, scope.jobId)
+      .map((p) => ({ id: p.id, caption: p.caption, before: shot(p.before), after: shot(p.after) }));
   }
 }
 
@@ -78,8 +88,11 @@ export class OwnerReportFromReports implements OwnerReportPort {
     return Promise.resolve({
       status: 200,
       headers: {
-        'Content-Type': pdf.contentType, 'Content-Length': String(pdf.byteSize), 'Cache-Control': 'private, no-cache',
-        ETag: `"${pdf.sha256}"`, 'Content-Disposition': `attachment; filename="${pdf.filename}"`,
+        'Content-Type': pdf.contentType,
+        'Content-Length': String(pdf.byteSize),
+        'Cache-Control': 'private, no-cache',
+        ETag: `"${pdf.sha256}"`,
+        'Content-Disposition': `attachment; filename="${pdf.filename}"`,
       },
       body: pdf.stream(),
     });

@@ -31,8 +31,23 @@ import { OWNER_LINK_MAILER, OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT } from './own
  */
 @Module({
   // Owner routes are public: each address gets its own budget (ThrottlerGuard on the controller).
-  imports: [ThrottlerModule.forRoot([{ ttl: 60_000, limit: 120 }]), AuditModule, BikesModule, ConsentModule, CustomersModule, FindingsModule, InspectionModule, JobsModule, MediaModule, ShopsModule,
-    AnnotationsModule, MailModule, PairsModule, ReportsModule, StorageModule],
+  imports: [
+    ThrottlerModule.forRoot([{ ttl: 60_000, limit: 120 }]),
+    AuditModule,
+    BikesModule,
+    ConsentModule,
+    CustomersModule,
+    FindingsModule,
+    InspectionModule,
+    JobsModule,
+    MediaModule,
+    ShopsModule,
+    AnnotationsModule,
+    MailModule,
+    PairsModule,
+    ReportsModule,
+    StorageModule,
+  ],
   controllers: [OwnerController, OwnerLinksController],
   providers: [
     OwnerLinksRepository,

@@ -27,7 +27,12 @@ export interface OwnerShotSource {
 export const OWNER_MEDIA = Symbol('OWNER_MEDIA');
 export interface OwnerMediaPort {
   shotsOfFindings(scope: { shopId: number; jobId: number }, findingIds: number[]): Map<number, OwnerShotSource[]>;
-  open(scope: { shopId: number; jobId: number }, assetId: number, variant: 'thumb' | 'screen', req: { range?: string; ifNoneMatch?: string }): Promise<StreamReply>;
+  open(
+    scope: { shopId: number; jobId: number },
+    assetId: number,
+    variant: 'thumb' | 'screen',
+    req: { range?: string; ifNoneMatch?: string },
+  ): Promise<StreamReply>;
 }
 
 /** Before/after pairs of the job, in the shop's order. */

@@ -27,23 +27,39 @@ export class PairsRepository {
 
   /** The job a pair belongs to (shop-scoped), for callers that only hold the pair id. */
   jobOf(shopId: number, id: number): number | null {
-    return this.db.select({ jobId: shotPairs.jobId }).from(shotPairs).where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id))).get()?.jobId ?? null;
+    return (
+      this.db
+        .select({ jobId: shotPairs.jobId })
+        .from(shotPairs)
+        .where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id)))
+        .get()?.jobId ?? null
+    );
   }
 
   find(shopId: number, jobId: number, id: number): ShotPairRow | undefined {
-    return this.db.select().from(shotPairs).where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.jobId, jobId), eq(shotPairs.id, id))).get();
+    return this.db
+      .select()
+      .from(shotPairs)
+      .where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.jobId, jobId), eq(shotPairs.id, id)))
+      .get();
   }
 
   findByShots(shopId: number, jobId: number, beforeAssetId: number, afterAssetId: number): ShotPairRow | undefined {
     return this.db
       .select()
       .from(shotPairs)
-      .where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.jobId, jobId), eq(shotPairs.beforeAssetId, beforeAssetId), eq(shotPairs.afterAssetId, afterAssetId)))
+      .where(
+        and(eq(shotPairs.shopId, shopId), eq(shotPairs.jobId, jobId), eq(shotPairs.beforeAssetId, beforeAssetId), eq(shotPairs.afterAssetId, afterAssetId)),
+      )
       .get();
   }
 
   nextPosition(shopId: number, jobId: number): number {
-    const row = this.db.select({ top: max(shotPairs.position) }).from(shotPairs).where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.jobId, jobId))).get();
+    const row = this.db
+      .select({ top: max(shotPairs.position) })
+      .from(shotPairs)
+      .where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.jobId, jobId)))
+      .get();
     return (row?.top ?? -1) + 1;
   }
 
@@ -52,10 +68,18 @@ export class PairsRepository {
   }
 
   update(shopId: number, id: number, patch: ShotPairPatch): ShotPairRow {
-    return this.db.update(shotPairs).set(patch).where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id))).returning().get();
+    return this.db
+      .update(shotPairs)
+      .set(patch)
+      .where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id)))
+      .returning()
+      .get();
   }
 
   delete(shopId: number, id: number): void {
-    this.db.delete(shotPairs).where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id))).run();
+    this.db
+      .delete(shotPairs)
+      .where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id)))
+      .run();
   }
 }

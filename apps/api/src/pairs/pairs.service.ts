@@ -74,7 +74,12 @@ export class PairsService {
         updatedAt: now,
       }),
     );
-    this.audit.record(actor, { action: 'pair.created', entityType: 'job', entityId: jobId, details: { pairId: row.id, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId } });
+    this.audit.record(actor, {
+      action: 'pair.created',
+      entityType: 'job',
+      entityId: jobId,
+      details: { pairId: row.id, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId },
+    });
     return toPairDto(row, before.dto, after.dto);
   }
 
@@ -91,7 +96,12 @@ export class PairsService {
     this.openJob(actor, jobId);
     const row = this.owned(actor, jobId, pairId);
     this.repo.delete(actor.shopId, pairId);
-    this.audit.record(actor, { action: 'pair.deleted', entityType: 'job', entityId: jobId, details: { pairId, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId } });
+    this.audit.record(actor, {
+      action: 'pair.deleted',
+      entityType: 'job',
+      entityId: jobId,
+      details: { pairId, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId },
+    });
   }
 
   /** Sets the order; the request must name every pair of the job exactly once. */
@@ -100,7 +110,9 @@ export class PairsService {
     const rows = this.repo.list(actor.shopId, jobId);
     const known = new Set(rows.map((r) => r.id));
     if (req.ids.length !== rows.length || req.ids.some((id) => !known.has(id))) {
-      throw new DomainError('VALIDATION_FAILED', 'List every pair of this job once.', { issues: [{ path: 'ids', message: 'List every pair of this job once.' }] });
+      throw new DomainError('VALIDATION_FAILED', 'List every pair of this job once.', {
+        issues: [{ path: 'ids', message: 'List every pair of this job once.' }],
+      });
     }
     const now = this.clock.now();
     this.repo.transaction(() => req.ids.forEach((id, position) => this.repo.update(actor.shopId, id, { position, updatedAt: now })));
@@ -113,7 +125,10 @@ export class PairsService {
     const shots = this.media.pairShots(actor, jobId).filter((s) => PAIRABLE_KINDS.includes(s.shot.kind));
     const byId = new Map(shots.map((s) => [s.shot.id, s]));
     const paired = new Set(this.repo.list(actor.shopId, jobId).flatMap((r) => [r.beforeAssetId, r.afterAssetId]));
-    const ranked = suggestPairs(shots.map((s) => s.shot), paired).slice(0, limit);
+    const ranked = suggestPairs(
+      shots.map((s) => s.shot),
+      paired,
+    ).slice(0, limit);
     return {
       suggestions: ranked.map(({ beforeId, afterId, ...rest }) => ({ before: byId.get(beforeId)!.dto, after: byId.get(afterId)!.dto, ...rest })),
       pendingHashes: shots.filter((s) => !s.shot.phash && (s.shot.phase === 'before' || s.shot.phase === 'after')).length,

@@ -53,7 +53,15 @@ export interface ReportSnapshot {
   overall: Condition | null;
   findings: SnapshotFinding[];
   measurements: { label: string; verdict: string; message: string; condition: Condition }[];
-  torque: { fastener: string; specified: string; applied: string; verdict: 'within' | 'under' | 'over'; source: string; tool: string; calibratedOn: string | null }[];
+  torque: {
+    fastener: string;
+    specified: string;
+    applied: string;
+    verdict: 'within' | 'under' | 'over';
+    source: string;
+    tool: string;
+    calibratedOn: string | null;
+  }[];
   work: { description: string; parts: string; minutes: number; by: string | null }[];
   recommendations: SnapshotRecommendation[];
   totals: SnapshotTotals;

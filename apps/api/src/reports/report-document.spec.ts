@@ -14,12 +14,38 @@ import type { ReportImage, ReportSnapshot } from './report-data';
 function snapshot(over: Partial<ReportSnapshot> = {}): ReportSnapshot {
   return {
     schemaVersion: 1,
-    shop: { name: 'Quarry Lane Cycles', contact: '1 Quarry Lane', footer: 'Re-adjustments free within 30 days.', palette: reportPalette('#FFD400', '#0057B8'), logoKey: null, units: 'metric', currency: 'EUR' },
-    job: { id: 1, number: 'J-2026-0777', bookedAt: '2026-11-30T09:00:00.000Z', readyAt: null, promisedOn: '2026-12-03', symptoms: 'Squeaks.', mechanic: 'Ines Marlow' },
+    shop: {
+      name: 'Quarry Lane Cycles',
+      contact: '1 Quarry Lane',
+      footer: 'Re-adjustments free within 30 days.',
+      palette: reportPalette('#FFD400', '#0057B8'),
+      logoKey: null,
+      units: 'metric',
+      currency: 'EUR',
+    },
+    job: {
+      id: 1,
+      number: 'J-2026-0777',
+      bookedAt: '2026-11-30T09:00:00.000Z',
+      readyAt: null,
+      promisedOn: '2026-12-03',
+      symptoms: 'Squeaks.',
+      mechanic: 'Ines Marlow',
+    },
     owner: { name: 'Łucja Őry-Şenol' },
     bike: { title: 'Vantor Trail', detail: '2021', serial: null },
     overall: 'worn',
-    findings: [{ id: 1, title: 'Drivetrain', condition: 'worn', description: 'Chain stretched.', doNotRide: false, cautions: [], shots: [{ assetId: 7, caption: 'Chain on the gauge' }] }],
+    findings: [
+      {
+        id: 1,
+        title: 'Drivetrain',
+        condition: 'worn',
+        description: 'Chain stretched.',
+        doNotRide: false,
+        cautions: [],
+        shots: [{ assetId: 7, caption: 'Chain on the gauge' }],
+      },
+    ],
     measurements: [],
     torque: [],
     work: [],
@@ -64,7 +90,9 @@ describe('ReportDocument (react-pdf, read back with poppler)', { timeout: 60_000
   const pdf = new PdfAdapter();
   let image: ReportImage;
   beforeAll(async () => {
-    const data = await sharp({ create: { width: 1000, height: 750, channels: 3, background: '#556677' } }).jpeg().toBuffer();
+    const data = await sharp({ create: { width: 1000, height: 750, channels: 3, background: '#556677' } })
+      .jpeg()
+      .toBuffer();
     image = { data, width: 1000, height: 750 };
   });
 
@@ -80,7 +108,9 @@ describe('ReportDocument (react-pdf, read back with poppler)', { timeout: 60_000
 
   it('numbers every page and prints the job number on each, with the owner in ő, ł, ş', async () => {
     const out = await render(snapshot(), 'A4');
-    const pages = poppler(out, 'pdftotext').split('\f').filter((p) => p.trim());
+    const pages = poppler(out, 'pdftotext')
+      .split('\f')
+      .filter((p) => p.trim());
     expect(pages.length).toBe(pdf.pageCount(out));
     pages.forEach((text, i) => {
       expect(text).toContain('J-2026-0777');

@@ -23,7 +23,16 @@ export class ReportMailBinding implements OnModuleInit {
       const f = this.reports.issuedPdf(shopId, reportId);
       // No link: the owner page's address holds a token that is stored only hashed, and the
       // staff download needs a sign-in. Over the attachment budget the mail says to ask the shop.
-      return { reportId: f.reportId, jobId: f.jobId, version: f.version, filename: f.filename, sha256: f.sha256, size: f.byteSize, link: null, open: () => f.stream() };
+      return {
+        reportId: f.reportId,
+        jobId: f.jobId,
+        version: f.version,
+        filename: f.filename,
+        sha256: f.sha256,
+        size: f.byteSize,
+        link: null,
+        open: () => f.stream(),
+      };
     } catch (err) {
       if (err instanceof DomainError && err.code === 'NOT_FOUND') return null;
       throw err;

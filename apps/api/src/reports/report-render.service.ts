@@ -56,7 +56,14 @@ export class ReportRenderService implements OnApplicationBootstrap {
     try {
       const pdf = await this.renderPdf(row, task.payload.actor as AuthUser, (f) => task.progress(f));
       const stored = await this.storage.put(`reports/${row.shopId}/${row.id}.pdf`, Readable.from([pdf]));
-      this.repo.update(row.id, { state: 'ready', storageKey: stored.key, sha256: stored.sha256, byteSize: stored.bytes, pageCount: this.pdf.pageCount(pdf), renderedAt: this.clock.now() });
+      this.repo.update(row.id, {
+        state: 'ready',
+        storageKey: stored.key,
+        sha256: stored.sha256,
+        byteSize: stored.bytes,
+        pageCount: this.pdf.pageCount(pdf),
+        renderedAt: this.clock.now(),
+      });
       task.progress(1);
     } catch (err) {
       this.repo.update(row.id, { state: 'failed', error: (err as Error).message.slice(0, 500) });
@@ -67,7 +74,9 @@ export class ReportRenderService implements OnApplicationBootstrap {
   /** Loads every shot (the prepared print JPEGs), then lays out and writes the PDF. */
   async renderPdf(row: ReportRow, actor: AuthUser, progress: (f: number) => void = () => undefined): Promise<Buffer> {
     const snap = row.snapshot as ReportSnapshot;
-    const ids = [...new Set([...snap.findings.flatMap((f) => f.shots), ...snap.pairs.flatMap((p) => [p.before, p.after]), ...snap.scopeStills].map((s) => s.assetId))];
+    const ids = [
+      ...new Set([...snap.findings.flatMap((f) => f.shots), ...snap.pairs.flatMap((p) => [p.before, p.after]), ...snap.scopeStills].map((s) => s.assetId)),
+    ];
     const images = new Map<number, ReportImage>();
     for (const [i, id] of ids.entries()) {
       const img = await this.shots.printJpeg(actor, id);

@@ -71,7 +71,10 @@ export class ReportSnapshotService {
           description: f.description,
           doNotRide: f.doNotRide,
           cautions: f.cautions,
-          shots: this.media.findingMedia(actor, jobId, f.id).assets.filter((a) => a.kind !== 'video' && a.kind !== 'scope_video').map((a) => ({ assetId: a.id, caption: a.caption })),
+          shots: this.media
+            .findingMedia(actor, jobId, f.id)
+            .assets.filter((a) => a.kind !== 'video' && a.kind !== 'scope_video')
+            .map((a) => ({ assetId: a.id, caption: a.caption })),
         })),
       measurements: this.measurementsPart(inspection),
       torque: torque.map((t) => this.torqueRow(t)),
@@ -108,13 +111,19 @@ export class ReportSnapshotService {
   private measurementsPart(inspection: InspectionDto): ReportSnapshot['measurements'] {
     return inspection.areas.flatMap((a) =>
       a.checkpoints.flatMap((c) =>
-        c.measurements.map((m) => ({ label: MEASUREMENT_KIND_LABELS[m.kind], verdict: m.result.verdict, message: m.result.message, condition: m.result.condition })),
+        c.measurements.map((m) => ({
+          label: MEASUREMENT_KIND_LABELS[m.kind],
+          verdict: m.result.verdict,
+          message: m.result.message,
+          condition: m.result.condition,
+        })),
       ),
     );
   }
 
   private torqueRow(t: TorqueEntryDto): ReportSnapshot['torque'][number] {
-    const spec = t.specified.max !== null ? `${t.specified.min}–${formatTorque(t.specified.max, t.specified.unit)}` : formatTorque(t.specified.min, t.specified.unit);
+    const spec =
+      t.specified.max !== null ? `${t.specified.min}–${formatTorque(t.specified.max, t.specified.unit)}` : formatTorque(t.specified.min, t.specified.unit);
     return {
       fastener: t.fastener,
       specified: spec,

@@ -42,7 +42,13 @@ export class ReportsController {
 
   @Get(':id/pdf')
   @Can('reports.view')
-  pdf(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('id', ParseIntPipe) id: number, @Query('download') download: string | undefined, @Res() res: Response) {
+  pdf(
+    @CurrentUser() user: AuthUser,
+    @Param('jobId', ParseIntPipe) jobId: number,
+    @Param('id', ParseIntPipe) id: number,
+    @Query('download') download: string | undefined,
+    @Res() res: Response,
+  ) {
     const file = this.reports.pdf(user, jobId, id);
     res.set({
       'Content-Type': 'application/pdf',

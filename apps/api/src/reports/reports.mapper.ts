@@ -22,6 +22,8 @@ export function toReportDto(r: ReportRow & { createdByName: string | null }, pro
     createdAt: r.createdAt.toISOString(),
     createdBy: r.createdBy !== null && r.createdByName !== null ? { id: r.createdBy, name: r.createdByName } : null,
     issuedAt: r.issuedAt?.toISOString() ?? null,
-    urls: ready ? { pdf: `${base}/pdf`, download: `${base}/pdf?download=1`, pagePng: `${base}/pages/{page}.png` } : { pdf: null, download: null, pagePng: null },
+    urls: ready
+      ? { pdf: `${base}/pdf`, download: `${base}/pdf?download=1`, pagePng: `${base}/pages/{page}.png` }
+      : { pdf: null, download: null, pagePng: null },
   };
 }

@@ -25,7 +25,11 @@ export class ReportsRepository {
   }
 
   findInShop(shopId: number, jobId: number, id: number): ReportRow | undefined {
-    return this.db.select().from(reports).where(and(eq(reports.shopId, shopId), eq(reports.jobId, jobId), eq(reports.id, id))).get();
+    return this.db
+      .select()
+      .from(reports)
+      .where(and(eq(reports.shopId, shopId), eq(reports.jobId, jobId), eq(reports.id, id)))
+      .get();
   }
 
   listForJob(shopId: number, jobId: number): (ReportRow & { createdByName: string | null })[] {
@@ -45,7 +49,11 @@ export class ReportsRepository {
   }
 
   nextVersion(shopId: number, jobId: number): number {
-    const row = this.db.select({ v: max(reports.version) }).from(reports).where(and(eq(reports.shopId, shopId), eq(reports.jobId, jobId))).get();
+    const row = this.db
+      .select({ v: max(reports.version) })
+      .from(reports)
+      .where(and(eq(reports.shopId, shopId), eq(reports.jobId, jobId)))
+      .get();
     return (row?.v ?? 0) + 1;
   }
 

@@ -71,8 +71,14 @@ export class ReportsService implements OnApplicationBootstrap {
     this.jobs.read(actor, jobId);
     const snapshot = { ...(await this.snapshots.build(actor, jobId)), renderedFor: actorOf(actor) };
     const row = this.repo.insert({
-      shopId: actor.shopId, jobId, kind: 'draft', state: 'rendering', pageSize: this.shops.settings(actor.shopId).pageSize,
-      snapshot, createdBy: actor.id, createdAt: this.clock.now(),
+      shopId: actor.shopId,
+      jobId,
+      kind: 'draft',
+      state: 'rendering',
+      pageSize: this.shops.settings(actor.shopId).pageSize,
+      snapshot,
+      createdBy: actor.id,
+      createdAt: this.clock.now(),
     });
     this.renderer.enqueue(row, actorOf(actor));
     return this.get(actor, jobId, row.id);
@@ -89,14 +95,31 @@ export class ReportsService implements OnApplicationBootstrap {
     const issuedAt = this.clock.now();
     const row = this.repo.transaction(() => {
       const version = this.repo.nextVersion(actor.shopId, jobId);
-      const fingerprint = createHash('sha256').update(JSON.stringify({ shopId: actor.shopId, jobId, version, issuedAt: issuedAt.toISOString(), snapshot: draft.snapshot })).digest('hex');
+      const fingerprint = createHash('sha256')
+        .update(JSON.stringify({ shopId: actor.shopId, jobId, version, issuedAt: issuedAt.toISOString(), snapshot: draft.snapshot }))
+        .digest('hex');
       return this.repo.insert({
-        shopId: actor.shopId, jobId, kind: 'issued', version, state: 'rendering', pageSize: draft.pageSize, snapshot: draft.snapshot,
-        fromDraftId: draft.id, fingerprint, createdBy: actor.id, createdAt: issuedAt, issuedAt,
+        shopId: actor.shopId,
+        jobId,
+        kind: 'issued',
+        version,
+        state: 'rendering',
+        pageSize: draft.pageSize,
+        snapshot: draft.snapshot,
+        fromDraftId: draft.id,
+        fingerprint,
+        createdBy: actor.id,
+        createdAt: issuedAt,
+        issuedAt,
       });
     });
     this.renderer.enqueue(row, actorOf(actor));
-    this.audit.record(actor, { action: 'report.issued', entityType: 'report', entityId: row.id, details: { jobId, version: row.version, fingerprint: row.fingerprint } });
+    this.audit.record(actor, {
+      action: 'report.issued',
+      entityType: 'report',
+      entityId: row.id,
+      details: { jobId, version: row.version, fingerprint: row.fingerprint },
+    });
     return this.get(actor, jobId, row.id);
   }
 
@@ -119,8 +142,13 @@ export class ReportsService implements OnApplicationBootstrap {
     const row = this.ready(found);
     const key = row.storageKey;
     return {
-      reportId: row.id, jobId: row.jobId, version: found.version, filename: this.filename(row), contentType: 'application/pdf',
-      sha256: row.sha256, byteSize: row.byteSize,
+      reportId: row.id,
+      jobId: row.jobId,
+      version: found.version,
+      filename: this.filename(row),
+      contentType: 'application/pdf',
+      sha256: row.sha256,
+      byteSize: row.byteSize,
       stream: () => this.storage.createReadStream(key),
       bytes: () => buffer(this.storage.createReadStream(key)),
     };

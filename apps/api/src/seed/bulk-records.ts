@@ -5,8 +5,14 @@ import { formatJobNumber, JOB_STATUSES } from '@benchproof/domain';
 const FIRST = ['Ada', 'Bram', 'Cleo', 'Dorian', 'Elske', 'Fintan', 'Greta', 'Hallam', 'Ilse', 'Joss', 'Kestrel', 'Linnea', 'Merrit', 'Nell', 'Orrin', 'Petra'];
 const LAST = ['Ashgrove', 'Bellweather', 'Coldharbour', 'Dunmore', 'Eastry', 'Fallowby', 'Greenhithe', 'Holloway', 'Inchcape', 'Juniper'];
 const LINES = [
-  ['Quillon Works', 'Stratus 11'], ['Marrowgate', 'Filbert 3'], ['Brackenfold', 'Harrier Loop'], ['Quillon Works', 'Tern Mill 10'],
-  ['Marrowgate', 'Cobble Dray 9'], ['Brackenfold', 'Lumen Step 7'], ['Saltmarsh Cycles', 'Heron 105'], ['Saltmarsh Cycles', 'Curlew SL'],
+  ['Quillon Works', 'Stratus 11'],
+  ['Marrowgate', 'Filbert 3'],
+  ['Brackenfold', 'Harrier Loop'],
+  ['Quillon Works', 'Tern Mill 10'],
+  ['Marrowgate', 'Cobble Dray 9'],
+  ['Brackenfold', 'Lumen Step 7'],
+  ['Saltmarsh Cycles', 'Heron 105'],
+  ['Saltmarsh Cycles', 'Curlew SL'],
 ] as const;
 
 export interface BulkCounts {

@@ -39,7 +39,11 @@ export class DemoMediaSeeder {
           count++;
         }
       }
-      count += await this.seedFinishedWithPairs(actor, shop.id, underWay.map((j) => j.id));
+      count += await this.seedFinishedWithPairs(
+        actor,
+        shop.id,
+        underWay.map((j) => j.id),
+      );
     }
     if (count) this.logger.log(`Seeded ${count} demo media assets`);
   }
@@ -61,22 +65,31 @@ export class DemoMediaSeeder {
    * The jobs above stay unpaired: they are where the pair builder is demonstrated.
    */
   private async seedFinishedWithPairs(actor: AuthUser, shopId: number, skip: number[]): Promise<number> {
-    const job = this.db.select({ id: jobs.id }).from(jobs)
+    const job = this.db
+      .select({ id: jobs.id })
+      .from(jobs)
       .where(and(eq(jobs.shopId, shopId), eq(jobs.status, 'ready'), notInArray(jobs.id, skip)))
-      .orderBy(desc(jobs.id)).limit(1).get();
+      .orderBy(desc(jobs.id))
+      .limit(1)
+      .get();
     if (!job) return 0;
     const shots = DEMO_SHOTS.filter((s) => !s.decoy);
     const ids = new Map<DemoShot, number>();
     for (const shot of shots) ids.set(shot, await this.upload(actor, job.id, shot));
     for (const before of shots.filter((s) => s.phase === 'before')) {
       const after = shots.find((s) => s.phase === 'after' && s.scene === before.scene);
-      if (after) this.pairs.create(actor, job.id, { beforeAssetId: ids.get(before)!, afterAssetId: ids.get(after)!, caption: `${before.caption} → ${after.caption}` });
+      if (after)
+        this.pairs.create(actor, job.id, { beforeAssetId: ids.get(before)!, afterAssetId: ids.get(after)!, caption: `${before.caption} → ${after.caption}` });
     }
     return shots.length;
   }
 
   private mechanicOf(shopId: number): AuthUser | null {
-    const u = this.db.select().from(users).where(and(eq(users.shopId, shopId), eq(users.role, 'mechanic'))).get();
+    const u = this.db
+      .select()
+      .from(users)
+      .where(and(eq(users.shopId, shopId), eq(users.role, 'mechanic')))
+      .get();
     return u ? { id: u.id, shopId: u.shopId, role: u.role, email: u.email, name: u.name } : null;
   }
 

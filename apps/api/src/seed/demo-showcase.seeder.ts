@@ -24,7 +24,17 @@ export class DemoShowcaseSeeder {
   seed(): void {
     let pairs = 0;
     for (const [i, shop] of this.db.select({ id: shops.id }).from(shops).orderBy(asc(shops.id)).all().entries()) {
-      const jobIds = [...new Set(this.db.select({ jobId: mediaAssets.jobId }).from(mediaAssets).where(eq(mediaAssets.shopId, shop.id)).orderBy(asc(mediaAssets.jobId)).all().map((r) => r.jobId))];
+      const jobIds = [
+        ...new Set(
+          this.db
+            .select({ jobId: mediaAssets.jobId })
+            .from(mediaAssets)
+            .where(eq(mediaAssets.shopId, shop.id))
+            .orderBy(asc(mediaAssets.jobId))
+            .all()
+            .map((r) => r.jobId),
+        ),
+      ];
       if (jobIds[0]) {
         pairs += this.pairUp(shop.id, jobIds[0]);
         this.grant(shop.id, jobIds[0]);
@@ -35,7 +45,11 @@ export class DemoShowcaseSeeder {
   }
 
   private pairUp(shopId: number, jobId: number): number {
-    const shots = this.db.select().from(mediaAssets).where(and(eq(mediaAssets.shopId, shopId), eq(mediaAssets.jobId, jobId), inArray(mediaAssets.phase, ['before', 'after']))).all();
+    const shots = this.db
+      .select()
+      .from(mediaAssets)
+      .where(and(eq(mediaAssets.shopId, shopId), eq(mediaAssets.jobId, jobId), inArray(mediaAssets.phase, ['before', 'after'])))
+      .all();
     const byCaption = new Map(shots.map((s) => [s.caption, s]));
     const now = this.clock.now();
     let position = 0;
@@ -44,7 +58,20 @@ export class DemoShowcaseSeeder {
       const b = byCaption.get(before.caption);
       const a = after && byCaption.get(after.caption);
       if (!b || !a) continue;
-      this.db.insert(shotPairs).values({ shopId, jobId, beforeAssetId: b.id, afterAssetId: a.id, caption: '', position: position++, createdBy: b.uploadedBy, createdAt: now, updatedAt: now }).run();
+      this.db
+        .insert(shotPairs)
+        .values({
+          shopId,
+          jobId,
+          beforeAssetId: b.id,
+          afterAssetId: a.id,
+          caption: '',
+          position: position++,
+          createdBy: b.uploadedBy,
+          createdAt: now,
+          updatedAt: now,
+        })
+        .run();
     }
     return position;
   }
@@ -52,7 +79,18 @@ export class DemoShowcaseSeeder {
   private grant(shopId: number, jobId: number): void {
     this.db
       .insert(consents)
-      .values({ shopId, jobId, granted: true, nameMakeModel: true, wordingVersion: CONSENT_WORDING.version, method: 'in_person', givenByName: 'The owner, at the counter (demo)', recordedBy: null, ownerLinkId: null, at: this.clock.now() })
+      .values({
+        shopId,
+        jobId,
+        granted: true,
+        nameMakeModel: true,
+        wordingVersion: CONSENT_WORDING.version,
+        method: 'in_person',
+        givenByName: 'The owner, at the counter (demo)',
+        recordedBy: null,
+        ownerLinkId: null,
+        at: this.clock.now(),
+      })
       .run();
   }
 }

@@ -5,7 +5,18 @@ const DAY_MS = 86_400_000;
 
 /** Rows of a job that carry times, with their time columns. Past demo visits are moved back as a whole. */
 const TIME_COLUMNS: Record<string, string[]> = {
-  jobs: ['booked_in_at', 'on_stand_at', 'waiting_owner_at', 'in_work_at', 'final_check_at', 'ready_at', 'collected_at', 'cancelled_at', 'created_at', 'updated_at'],
+  jobs: [
+    'booked_in_at',
+    'on_stand_at',
+    'waiting_owner_at',
+    'in_work_at',
+    'final_check_at',
+    'ready_at',
+    'collected_at',
+    'cancelled_at',
+    'created_at',
+    'updated_at',
+  ],
   job_status_events: ['at'],
   checkpoints: ['inspected_at'],
   measurements: ['at'],

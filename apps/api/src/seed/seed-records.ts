@@ -104,8 +104,14 @@ export class SeedRecords {
       // The entry is backdated by the job's daysAgo afterwards; the calibration day is counted from then.
       const toolCalibratedOn = t.toolCalibratedDaysBefore === undefined ? undefined : this.daysBeforeNow(job.daysAgo + t.toolCalibratedDaysBefore);
       this.workLog.addTorque(mech, jobId, {
-        fastener: t.fastener, specified: { min: t.spec, max: null, unit: t.unit }, applied: { value: t.applied, unit: t.unit }, specSource: t.specSource, tool: t.tool,
-        toolCalibratedOn, threadlocker: t.threadlocker, carbonPart: t.carbonPart,
+        fastener: t.fastener,
+        specified: { min: t.spec, max: null, unit: t.unit },
+        applied: { value: t.applied, unit: t.unit },
+        specSource: t.specSource,
+        tool: t.tool,
+        toolCalibratedOn,
+        threadlocker: t.threadlocker,
+        carbonPart: t.carbonPart,
       });
     }
   }

@@ -63,9 +63,16 @@ export class SeedService {
   private insertShop(demo: DemoShop, passwordHash: string): number {
     const { staff, key: _key, ...settings } = demo;
     const now = this.clock.now();
-    const shop = this.db.insert(shops).values({ ...settings, createdAt: now }).returning().get();
+    const shop = this.db
+      .insert(shops)
+      .values({ ...settings, createdAt: now })
+      .returning()
+      .get();
     for (const s of staff) {
-      this.db.insert(users).values({ ...s, shopId: shop.id, passwordHash, active: true, createdAt: now }).run();
+      this.db
+        .insert(users)
+        .values({ ...s, shopId: shop.id, passwordHash, active: true, createdAt: now })
+        .run();
     }
     return shop.id;
   }

@@ -68,7 +68,12 @@ export class ShopsService {
       logoWidth: logo?.width ?? null,
       logoHeight: logo?.height ?? null,
     });
-    this.audit.record(actor, { action: logo ? 'shop.logo_set' : 'shop.logo_removed', entityType: 'shop', entityId: actor.shopId, details: { sha256: logo?.sha256 ?? null } });
+    this.audit.record(actor, {
+      action: logo ? 'shop.logo_set' : 'shop.logo_removed',
+      entityType: 'shop',
+      entityId: actor.shopId,
+      details: { sha256: logo?.sha256 ?? null },
+    });
     return { settings: toDto(updated), previous };
   }
 

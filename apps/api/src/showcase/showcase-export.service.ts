@@ -39,7 +39,10 @@ export class ShowcaseExportService implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
-    this.tasks.register(EXPORT_TASK, async (t) => this.runTask(t.payload as unknown as TaskPayload, t.key, (f) => t.progress(f)), { concurrency: 1, maxAttempts: 1 });
+    this.tasks.register(EXPORT_TASK, async (t) => this.runTask(t.payload as unknown as TaskPayload, t.key, (f) => t.progress(f)), {
+      concurrency: 1,
+      maxAttempts: 1,
+    });
   }
 
   /** One file, consent checked before rendering and again before it is returned. */
@@ -59,7 +62,12 @@ export class ShowcaseExportService implements OnModuleInit {
       watermark: this.shops.settings(actor.shopId).name,
     });
     this.showcase.clear(actor, pairId);
-    this.audit.record(actor, { action: 'showcase.exported', entityType: 'job', entityId: pair.jobId, details: { pairId, jobId: pair.jobId, variant: q.variant, size: q.size, layout, bytes: data.length } });
+    this.audit.record(actor, {
+      action: 'showcase.exported',
+      entityType: 'job',
+      entityId: pair.jobId,
+      details: { pairId, jobId: pair.jobId, variant: q.variant, size: q.size, layout, bytes: data.length },
+    });
     return { name: `pair-${pairId}-${q.variant}-${q.size}.jpg`, data };
   }
 
@@ -107,7 +115,12 @@ export class ShowcaseExportService implements OnModuleInit {
   start(actor: AuthUser, req: ShowcaseZipRequest): ShowcaseExportTaskDto {
     for (const item of req.items) this.showcase.clear(actor, item.pairId);
     const key = `${actor.id}-${Date.now().toString(36)}`;
-    this.tasks.enqueue({ kind: EXPORT_TASK, key, shopId: actor.shopId, payload: { actor: { id: actor.id, shopId: actor.shopId, role: actor.role, email: actor.email, name: actor.name }, req } });
+    this.tasks.enqueue({
+      kind: EXPORT_TASK,
+      key,
+      shopId: actor.shopId,
+      payload: { actor: { id: actor.id, shopId: actor.shopId, role: actor.role, email: actor.email, name: actor.name }, req },
+    });
     return this.status(actor, key);
   }
 

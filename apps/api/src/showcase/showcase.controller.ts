@@ -34,7 +34,11 @@ export class ShowcaseController {
   @Patch('items/:pairId')
   @Can('showcase.manage')
   @ApiZodBody(UpdateShowcaseItemRequestSchema)
-  update(@CurrentUser() user: AuthUser, @Param('pairId', ParseIntPipe) pairId: number, @Body(zod(UpdateShowcaseItemRequestSchema)) body: UpdateShowcaseItemRequest) {
+  update(
+    @CurrentUser() user: AuthUser,
+    @Param('pairId', ParseIntPipe) pairId: number,
+    @Body(zod(UpdateShowcaseItemRequestSchema)) body: UpdateShowcaseItemRequest,
+  ) {
     return this.showcase.update(user, pairId, body);
   }
 
@@ -48,7 +52,12 @@ export class ShowcaseController {
   @Get('items/:pairId/export')
   @Can('showcase.manage')
   @ApiZodQuery(ShowcaseExportQuerySchema)
-  async file(@CurrentUser() user: AuthUser, @Param('pairId', ParseIntPipe) pairId: number, @Query(zod(ShowcaseExportQuerySchema)) q: ShowcaseExportQuery, @Res() res: Response) {
+  async file(
+    @CurrentUser() user: AuthUser,
+    @Param('pairId', ParseIntPipe) pairId: number,
+    @Query(zod(ShowcaseExportQuerySchema)) q: ShowcaseExportQuery,
+    @Res() res: Response,
+  ) {
     const f = await this.exports.file(user, pairId, q);
     res.set({ 'Content-Type': 'image/jpeg', 'Content-Disposition': `attachment; filename="${f.name}"`, 'Cache-Control': 'no-store' }).send(f.data);
   }

@@ -16,7 +16,11 @@ export class ShowcaseRepository {
   }
 
   mark(shopId: number, pairId: number): ShowcaseMarkRow | undefined {
-    return this.db.select().from(showcaseItems).where(and(eq(showcaseItems.shopId, shopId), eq(showcaseItems.pairId, pairId))).get();
+    return this.db
+      .select()
+      .from(showcaseItems)
+      .where(and(eq(showcaseItems.shopId, shopId), eq(showcaseItems.pairId, pairId)))
+      .get();
   }
 
   upsert(shopId: number, pairId: number, patch: { favourite?: boolean; caption?: string | null }, at: Date): void {

@@ -43,7 +43,10 @@ export class ShowcaseService {
     const marks = this.repo.marks(actor.shopId);
     const items = this.consent.currentGrants(actor.shopId).flatMap((c) => {
       if (consentProblem(c)) return [];
-      return this.pairs.list(actor, c.jobId).filter(pairInScope).map((p) => this.toItem(actor, p, c, marks.get(p.id)));
+      return this.pairs
+        .list(actor, c.jobId)
+        .filter(pairInScope)
+        .map((p) => this.toItem(actor, p, c, marks.get(p.id)));
     });
     return items
       .filter((i) => (!q.area || i.area === q.area) && (!q.from || i.date.slice(0, 10) >= q.from) && (!q.to || i.date.slice(0, 10) <= q.to))
@@ -86,7 +89,7 @@ export class ShowcaseService {
       .list(actor.shopId, 'job', jobId)
       .filter((e) => e.action === 'showcase.exported')
       .map((e) => {
-        const d = (e.details ?? {});
+        const d = e.details ?? {};
         return { at: e.at, userId: e.userId, pairId: Number(d.pairId), variant: String(d.variant), size: String(d.size), bytes: Number(d.bytes) };
       });
   }

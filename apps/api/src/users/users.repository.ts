@@ -15,7 +15,11 @@ export class UsersRepository {
   }
 
   findInShop(shopId: number, id: number): UserRow | undefined {
-    return this.db.select().from(users).where(and(eq(users.shopId, shopId), eq(users.id, id))).get();
+    return this.db
+      .select()
+      .from(users)
+      .where(and(eq(users.shopId, shopId), eq(users.id, id)))
+      .get();
   }
 
   findByEmail(email: string): UserRow | undefined {
@@ -27,11 +31,20 @@ export class UsersRepository {
   }
 
   update(shopId: number, id: number, patch: Partial<Pick<UserRow, 'role' | 'active' | 'name'>>): UserRow {
-    return this.db.update(users).set(patch).where(and(eq(users.shopId, shopId), eq(users.id, id))).returning().get();
+    return this.db
+      .update(users)
+      .set(patch)
+      .where(and(eq(users.shopId, shopId), eq(users.id, id)))
+      .returning()
+      .get();
   }
 
   setPasswordHash(shopId: number, id: number, passwordHash: string): void {
-    this.db.update(users).set({ passwordHash }).where(and(eq(users.shopId, shopId), eq(users.id, id))).run();
+    this.db
+      .update(users)
+      .set({ passwordHash })
+      .where(and(eq(users.shopId, shopId), eq(users.id, id)))
+      .run();
   }
 
   /** Runs `fn` in one SQLite transaction so the last-manager rule cannot race. */

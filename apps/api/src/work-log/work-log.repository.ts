@@ -12,11 +12,20 @@ export class WorkLogRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
   workEntries(shopId: number, jobId: number): WorkEntryRow[] {
-    return this.db.select().from(workEntries).where(and(eq(workEntries.shopId, shopId), eq(workEntries.jobId, jobId))).orderBy(asc(workEntries.at), asc(workEntries.id)).all();
+    return this.db
+      .select()
+      .from(workEntries)
+      .where(and(eq(workEntries.shopId, shopId), eq(workEntries.jobId, jobId)))
+      .orderBy(asc(workEntries.at), asc(workEntries.id))
+      .all();
   }
 
   workEntry(shopId: number, jobId: number, id: number): WorkEntryRow | undefined {
-    return this.db.select().from(workEntries).where(and(eq(workEntries.shopId, shopId), eq(workEntries.jobId, jobId), eq(workEntries.id, id))).get();
+    return this.db
+      .select()
+      .from(workEntries)
+      .where(and(eq(workEntries.shopId, shopId), eq(workEntries.jobId, jobId), eq(workEntries.id, id)))
+      .get();
   }
 
   insertWorkEntry(row: typeof workEntries.$inferInsert): WorkEntryRow {
@@ -24,11 +33,19 @@ export class WorkLogRepository {
   }
 
   deleteWorkEntry(shopId: number, id: number): void {
-    this.db.delete(workEntries).where(and(eq(workEntries.shopId, shopId), eq(workEntries.id, id))).run();
+    this.db
+      .delete(workEntries)
+      .where(and(eq(workEntries.shopId, shopId), eq(workEntries.id, id)))
+      .run();
   }
 
   torqueEntries(shopId: number, jobId: number): TorqueEntryRow[] {
-    return this.db.select().from(torqueEntries).where(and(eq(torqueEntries.shopId, shopId), eq(torqueEntries.jobId, jobId))).orderBy(asc(torqueEntries.at), asc(torqueEntries.id)).all();
+    return this.db
+      .select()
+      .from(torqueEntries)
+      .where(and(eq(torqueEntries.shopId, shopId), eq(torqueEntries.jobId, jobId)))
+      .orderBy(asc(torqueEntries.at), asc(torqueEntries.id))
+      .all();
   }
 
   insertTorqueEntry(row: typeof torqueEntries.$inferInsert): TorqueEntryRow {

@@ -10,7 +10,6 @@ import { UsersService } from '../users';
 import type { StoredTorqueInput } from '../db/schema';
 import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
 
-
 const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto => ({
   id: w.id,
   description: w.description,

@@ -15,7 +15,9 @@ const BOX = { x0: 400, y0: 300, x1: 560, y1: 420 };
 function checkerboard(): Promise<Buffer> {
   const raw = Buffer.alloc(W * H * 3);
   for (let y = 0; y < H; y++) for (let x = 0; x < W; x++) raw.fill(((x >> 2) + (y >> 2)) % 2 ? 235 : 20, (y * W + x) * 3, (y * W + x) * 3 + 3);
-  return sharp(raw, { raw: { width: W, height: H, channels: 3 } }).jpeg({ quality: 95 }).toBuffer();
+  return sharp(raw, { raw: { width: W, height: H, channels: 3 } })
+    .jpeg({ quality: 95 })
+    .toBuffer();
 }
 
 const blurDoc = (): AnnotationDocumentDto => ({
@@ -52,7 +54,14 @@ describe('annotations: versions, validation, server render', () => {
     t = await startTestApp();
     mech = await t.signIn(DEMO.mechanic);
     jobId = await bookJob(t);
-    asset = (await mech.agent.post(`/api/jobs/${jobId}/media`).field('phase', 'before').field('area', 'drivetrain').attach('files', await checkerboard(), 'chain.jpg').expect(201)).body.assets[0];
+    asset = (
+      await mech.agent
+        .post(`/api/jobs/${jobId}/media`)
+        .field('phase', 'before')
+        .field('area', 'drivetrain')
+        .attach('files', await checkerboard(), 'chain.jpg')
+        .expect(201)
+    ).body.assets[0];
     await derivativesSettled(t);
   });
   afterAll(() => t.close());
@@ -60,18 +69,33 @@ describe('annotations: versions, validation, server render', () => {
   const fetch = async (path: string): Promise<Buffer> => (await mech.agent.get(path).buffer(true).parse(binary).expect(200)).body as Buffer;
 
   it('serves the plain screen derivative while a photo has no annotation', async () => {
-    expect((await mech.agent.get(`/api/annotations/${asset.id}`).expect(200)).body).toEqual({ mediaId: asset.id, version: 0, document: null, savedAt: null, savedBy: null });
+    expect((await mech.agent.get(`/api/annotations/${asset.id}`).expect(200)).body).toEqual({
+      mediaId: asset.id,
+      version: 0,
+      document: null,
+      savedAt: null,
+      savedBy: null,
+    });
     expect((await fetch(`/api/media/${asset.id}/annotated/screen`)).equals(await fetch(`/api/media/${asset.id}/screen`))).toBe(true);
   });
 
   it('refuses malformed documents with VALIDATION_FAILED and the field path', async () => {
-    const bad = (shapes: unknown[]) => mech.agent.put(`/api/annotations/${asset.id}`).send({ baseVersion: 0, document: { ...blurDoc(), shapes } }).expect(400);
+    const bad = (shapes: unknown[]) =>
+      mech.agent
+        .put(`/api/annotations/${asset.id}`)
+        .send({ baseVersion: 0, document: { ...blurDoc(), shapes } })
+        .expect(400);
     const unknownKind = (await bad([{ ...base, id: 'x', kind: 'star', at: { x: 0.5, y: 0.5 } }])).body;
     expect(unknownKind.code).toBe('VALIDATION_FAILED');
     expect(unknownKind.details.issues).toContainEqual({ path: 'document.shapes.0.kind', message: 'Unknown shape kind.' });
     const outside = (await bad([{ ...base, id: 'x', kind: 'arrow', from: { x: 0.5, y: 0.5 }, to: { x: 1.5, y: 0.5 } }])).body;
     expect(outside.details.issues).toContainEqual({ path: 'document.shapes.0.to.x', message: 'Points must lie on the image (0 to 1).' });
-    const wrongImage = (await mech.agent.put(`/api/annotations/${asset.id}`).send({ baseVersion: 0, document: { ...blurDoc(), image: { width: 600, height: 800 } } }).expect(400)).body;
+    const wrongImage = (
+      await mech.agent
+        .put(`/api/annotations/${asset.id}`)
+        .send({ baseVersion: 0, document: { ...blurDoc(), image: { width: 600, height: 800 } } })
+        .expect(400)
+    ).body;
     expect(wrongImage.details.issues[0].path).toBe('document.image');
   });
 
@@ -132,9 +156,13 @@ describe('annotations: versions, validation, server render', () => {
     await mech.agent.put(`/api/annotations/${asset.id}`).send({ baseVersion: 2, document: doc }).expect(200);
     const insp = (await mech.agent.get(`/api/jobs/${jobId}/inspection`).expect(200)).body;
     const cp = insp.areas.flatMap((a: { checkpoints: { key: string; id: number }[] }) => a.checkpoints).find((c: { key: string }) => c.key === 'chain_wear').id;
-    const stale = await mech.agent.post(`/api/annotations/${asset.id}/chain-reading`).send({ rulerId: 'r', pitches: 4, checkpointId: cp, version: 2 }).expect(409);
+    const stale = await mech.agent
+      .post(`/api/annotations/${asset.id}/chain-reading`)
+      .send({ rulerId: 'r', pitches: 4, checkpointId: cp, version: 2 })
+      .expect(409);
     expect(stale.body.code).toBe('CONFLICT');
-    const m = (await mech.agent.post(`/api/annotations/${asset.id}/chain-reading`).send({ rulerId: 'r', pitches: 4, checkpointId: cp, version: 3 }).expect(201)).body;
+    const m = (await mech.agent.post(`/api/annotations/${asset.id}/chain-reading`).send({ rulerId: 'r', pitches: 4, checkpointId: cp, version: 3 }).expect(201))
+      .body;
     expect(m.input).toEqual({ kind: 'chain_elongation', method: 'ruler', pitches: 4, lengthValue: 51.18, lengthUnit: 'mm' });
     expect(m.result).toMatchObject({ condition: 'worn', verdict: 'replace_chain' });
     const miscount = (await mech.agent.post(`/api/annotations/${asset.id}/chain-reading`).send({ rulerId: 'r', pitches: 3, version: 3 }).expect(400)).body;

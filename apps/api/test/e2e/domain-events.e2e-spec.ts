@@ -15,16 +15,27 @@ describe('domain events (@nestjs/event-emitter)', () => {
 
   it('publishes job booked in, job moved and recommendation decided with their ids', async () => {
     const seen: string[] = [];
-    const record = (name: string) => (e: JobBookedInEvent | JobMovedEvent | RecommendationDecidedEvent) => seen.push(`${name}:${e.jobId}:${'to' in e ? e.to : 'status' in e ? e.status : ''}`);
+    const record = (name: string) => (e: JobBookedInEvent | JobMovedEvent | RecommendationDecidedEvent) =>
+      seen.push(`${name}:${e.jobId}:${'to' in e ? e.to : 'status' in e ? e.status : ''}`);
     const listeners = Object.values(DOMAIN_EVENTS).map((name) => [name, record(name)] as const);
     for (const [name, fn] of listeners) emitter.on(name, fn);
     const desk = await t.signIn(DEMO.desk);
     const mech = await t.signIn(DEMO.mechanic);
     const job = await bookIn(desk);
     await desk.agent.post(`/api/jobs/${job.id}/transitions`).send({ to: 'on_stand' }).expect(200);
-    const f = (await mech.agent.post(`/api/jobs/${job.id}/findings`).send({ area: 'drivetrain', condition: 'worn', description: 'Chain past its limit' }).expect(201)).body;
-    const rec = (await desk.agent.post(`/api/jobs/${job.id}/findings/${f.id}/recommendation`).send({ summary: 'Replace chain', parts: [], labourHundredths: 25 }).expect(201)).body;
-    await desk.agent.post(`/api/jobs/${job.id}/recommendations/${rec.id}/decision`).send({ status: 'declined', channel: 'phone', decidedByName: 'Ottilie Fernsby' }).expect(201);
+    const f = (
+      await mech.agent.post(`/api/jobs/${job.id}/findings`).send({ area: 'drivetrain', condition: 'worn', description: 'Chain past its limit' }).expect(201)
+    ).body;
+    const rec = (
+      await desk.agent
+        .post(`/api/jobs/${job.id}/findings/${f.id}/recommendation`)
+        .send({ summary: 'Replace chain', parts: [], labourHundredths: 25 })
+        .expect(201)
+    ).body;
+    await desk.agent
+      .post(`/api/jobs/${job.id}/recommendations/${rec.id}/decision`)
+      .send({ status: 'declined', channel: 'phone', decidedByName: 'Ottilie Fernsby' })
+      .expect(201);
     for (const [name, fn] of listeners) emitter.off(name, fn);
     expect(seen).toEqual([`job.booked_in:${job.id}:`, `job.moved:${job.id}:on_stand`, `recommendation.decided:${job.id}:declined`]);
   });

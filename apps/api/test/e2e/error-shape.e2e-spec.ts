@@ -22,7 +22,12 @@ describe('one error shape everywhere', () => {
   const jsonError = (text: string) => ErrorBodySchema.parse(JSON.parse(text));
 
   it('answers an oversized JSON body with 413 BODY_TOO_LARGE, not a file error', async () => {
-    const res = await t.http().post('/api/auth/login').set('Content-Type', 'application/json').send(JSON.stringify({ email: 'a@b.test', password: 'x'.repeat(2_000_000) })).expect(413);
+    const res = await t
+      .http()
+      .post('/api/auth/login')
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify({ email: 'a@b.test', password: 'x'.repeat(2_000_000) }))
+      .expect(413);
     expect(res.body).toEqual({ code: 'BODY_TOO_LARGE', message: 'The request is too large.', details: { limitBytes: expect.any(Number) } });
   });
 
@@ -40,25 +45,57 @@ describe('one error shape everywhere', () => {
 
   it('answers a wrong offset with JSON UPLOAD_OFFSET_CONFLICT and a missing length with TUS_HEADER_INVALID', async () => {
     const created = await t.http().post('/api/media/tus').set(tus).set('Upload-Length', '10').set('Upload-Metadata', meta).expect(201);
-    const conflict = await t.http().patch(created.headers.location).set(tus).set('Upload-Offset', '5').set('Content-Type', 'application/offset+octet-stream').send(Buffer.alloc(5)).expect(409);
+    const conflict = await t
+      .http()
+      .patch(created.headers.location)
+      .set(tus)
+      .set('Upload-Offset', '5')
+      .set('Content-Type', 'application/offset+octet-stream')
+      .send(Buffer.alloc(5))
+      .expect(409);
     expect(jsonError(conflict.text)).toMatchObject({ code: 'UPLOAD_OFFSET_CONFLICT', details: { tus: 'Upload-Offset conflict' } });
     const noLength = await t.http().post('/api/media/tus').set(tus).set('Upload-Metadata', meta).expect(400);
     expect(jsonError(noLength.text).code).toBe('TUS_HEADER_INVALID');
-    const tooBig = await t.http().post('/api/media/tus').set(tus).set('Upload-Length', String(t.cfg.MAX_VIDEO_BYTES + 1)).set('Upload-Metadata', meta).expect(413);
+    const tooBig = await t
+      .http()
+      .post('/api/media/tus')
+      .set(tus)
+      .set('Upload-Length', String(t.cfg.MAX_VIDEO_BYTES + 1))
+      .set('Upload-Metadata', meta)
+      .expect(413);
     expect(jsonError(tooBig.text).code).toBe('FILE_TOO_LARGE');
   });
 
   it('keeps the validation error of the metadata hook as it is', async () => {
-    const res = await t.http().post('/api/media/tus').set(tus).set('Upload-Length', '10').set('Upload-Metadata', `phase ${b64('before')}`).expect(400);
+    const res = await t
+      .http()
+      .post('/api/media/tus')
+      .set(tus)
+      .set('Upload-Length', '10')
+      .set('Upload-Metadata', `phase ${b64('before')}`)
+      .expect(400);
     expect(jsonError(res.text).code).toBe('VALIDATION_FAILED');
   });
 
   it('allows only the app origin cross-origin on the tus route, never *', async () => {
     const foreign = await t.http().options('/api/media/tus').set('Origin', 'https://evil.example').set('Access-Control-Request-Method', 'POST');
     expect(foreign.headers['access-control-allow-origin']).toBeUndefined();
-    const foreignPost = await t.http().post('/api/media/tus').set(tus).set('Origin', 'https://evil.example').set('Upload-Length', '10').set('Upload-Metadata', meta);
+    const foreignPost = await t
+      .http()
+      .post('/api/media/tus')
+      .set(tus)
+      .set('Origin', 'https://evil.example')
+      .set('Upload-Length', '10')
+      .set('Upload-Metadata', meta);
     expect(foreignPost.headers['access-control-allow-origin']).toBeUndefined();
-    const own = await t.http().post('/api/media/tus').set(tus).set('Origin', 'https://bench.example').set('Upload-Length', '10').set('Upload-Metadata', meta).expect(201);
+    const own = await t
+      .http()
+      .post('/api/media/tus')
+      .set(tus)
+      .set('Origin', 'https://bench.example')
+      .set('Upload-Length', '10')
+      .set('Upload-Metadata', meta)
+      .expect(201);
     expect(own.headers['access-control-allow-origin']).toBe('https://bench.example');
   });
 });

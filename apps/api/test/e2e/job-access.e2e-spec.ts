@@ -1,7 +1,16 @@
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 import { bookIn } from './records-helpers';
 
-const ALL_PASS = { brakes: true, shifting: true, steering: true, fasteners_torqued: true, wheels_true_centred: true, tyres_pressure: true, axles_closed: true, test_ride: true };
+const ALL_PASS = {
+  brakes: true,
+  shifting: true,
+  steering: true,
+  fasteners_torqued: true,
+  wheels_true_centred: true,
+  tyres_pressure: true,
+  axles_closed: true,
+  test_ride: true,
+};
 const WORK = { description: 'Trued rear wheel', minutes: 15 };
 const FINDING = { area: 'drivetrain', condition: 'worn', description: 'Chain at 0.5 % elongation' };
 
@@ -12,7 +21,10 @@ async function collectedJob(t: TestApp, desk: SignedIn, manager: SignedIn): Prom
   for (const to of ['on_stand', 'in_work', 'final_check', 'ready', 'collected']) {
     if (to === 'ready') await checker.agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
     // No report in this test: desk confirms the bike leaves without one.
-    await manager.agent.post(`/api/jobs/${job.id}/transitions`).send({ to, ...(to === 'collected' ? { confirmNoReport: true } : {}) }).expect(200);
+    await manager.agent
+      .post(`/api/jobs/${job.id}/transitions`)
+      .send({ to, ...(to === 'collected' ? { confirmNoReport: true } : {}) })
+      .expect(200);
   }
   return job.id;
 }
@@ -54,7 +66,11 @@ describe('JobAccess: evidence freezes at handover', () => {
   it('lets a manager correct a collected job, and audits every override', async () => {
     const before = (await manager.agent.get(`/api/audit?entityType=job&entityId=${jobId}`).expect(200)).body as { action: string }[];
     await manager.agent.post(`/api/jobs/${jobId}/work-entries`).send(WORK).expect(201);
-    const after = (await manager.agent.get(`/api/audit?entityType=job&entityId=${jobId}`).expect(200)).body as { action: string; userId: number; details: { what: string; status: string } }[];
+    const after = (await manager.agent.get(`/api/audit?entityType=job&entityId=${jobId}`).expect(200)).body as {
+      action: string;
+      userId: number;
+      details: { what: string; status: string };
+    }[];
     const overrides = after.filter((e) => e.action === 'job.closed_override');
     expect(overrides.length).toBe(before.filter((e) => e.action === 'job.closed_override').length + 1);
     expect(overrides.at(-1)).toMatchObject({ userId: manager.user.id, details: { what: 'work_log', status: 'collected' } });

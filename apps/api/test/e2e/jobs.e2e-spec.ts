@@ -2,7 +2,16 @@ import { JOB_TRANSITIONS, TERMINAL_STATUSES, JOB_STATUSES } from '@benchproof/do
 import { DEMO, startTestApp, type TestApp } from '../test-app';
 import { bookIn } from './records-helpers';
 
-const ALL_PASS = { brakes: true, shifting: true, steering: true, fasteners_torqued: true, wheels_true_centred: true, tyres_pressure: true, axles_closed: true, test_ride: true };
+const ALL_PASS = {
+  brakes: true,
+  shifting: true,
+  steering: true,
+  fasteners_torqued: true,
+  wheels_true_centred: true,
+  tyres_pressure: true,
+  axles_closed: true,
+  test_ride: true,
+};
 
 describe('jobs: book-in and the status machine', () => {
   let t: TestApp;
@@ -32,7 +41,9 @@ describe('jobs: book-in and the status machine', () => {
     const before = (await desk.agent.get('/api/customers?pageSize=100').expect(200)).body.total;
     const res = await desk.agent.post('/api/jobs').send({
       newCustomer: { name: 'Brand New Owner', email: 'new@example.test', preferredChannel: 'email' },
-      bikeId: a.bike.id, reportedSymptoms: 'x', promisedOn: '2030-01-10',
+      bikeId: a.bike.id,
+      reportedSymptoms: 'x',
+      promisedOn: '2030-01-10',
     });
     expect(res.status).toBe(400);
     expect((await desk.agent.get('/api/customers?pageSize=100').expect(200)).body.total).toBe(before);
@@ -44,7 +55,8 @@ describe('jobs: book-in and the status machine', () => {
     for (const tr of JOB_TRANSITIONS) {
       const job = await bookIn(manager, { mechanicId: mech.user.id });
       await driveTo(t, job.id, tr.from);
-      if (tr.to === 'ready') await (await t.signIn(DEMO.mechanic2)).agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
+      if (tr.to === 'ready')
+        await (await t.signIn(DEMO.mechanic2)).agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
       const res = await manager.agent.post(`/api/jobs/${job.id}/transitions`).send({ to: tr.to, confirmNoReport: tr.to === 'collected' });
       expect({ move: `${tr.from}->${tr.to}`, status: res.status }).toEqual({ move: `${tr.from}->${tr.to}`, status: 200 });
       expect(res.body.status).toBe(tr.to);
@@ -69,7 +81,7 @@ describe('jobs: book-in and the status machine', () => {
     const job = await bookIn(manager, { mechanicId: mech.user.id });
     await driveTo(t, job.id, 'final_check');
     expect((await manager.agent.post(`/api/jobs/${job.id}/transitions`).send({ to: 'ready' }).expect(409)).body.code).toBe('FINAL_CHECK_REQUIRED');
-        const same = await mech.agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true });
+    const same = await mech.agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true });
     expect(same.status).toBe(409);
     expect(same.body.code).toBe('FINAL_CHECK_SAME_PERSON');
     await mech2.agent.post(`/api/jobs/${job.id}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
@@ -79,7 +91,17 @@ describe('jobs: book-in and the status machine', () => {
 
   it('filters the jobs table by status list and free text', async () => {
     const desk = await t.signIn(DEMO.desk);
-    const job = await bookIn(desk, { newBike: { maker: 'Marrowgate', model: 'Filbert 3', frameMaterial: 'steel', drivetrainSpeeds: 8, brakeType: 'rim', cableRouting: 'external', dropoutType: 'horizontal' } });
+    const job = await bookIn(desk, {
+      newBike: {
+        maker: 'Marrowgate',
+        model: 'Filbert 3',
+        frameMaterial: 'steel',
+        drivetrainSpeeds: 8,
+        brakeType: 'rim',
+        cableRouting: 'external',
+        dropoutType: 'horizontal',
+      },
+    });
     const page = (await desk.agent.get('/api/jobs?q=filbert&status=booked_in,on_stand').expect(200)).body;
     expect(page.items.map((j: { id: number }) => j.id)).toContain(job.id);
     expect(page.items.every((j: { status: string }) => ['booked_in', 'on_stand'].includes(j.status))).toBe(true);
@@ -99,8 +121,11 @@ async function driveTo(t: TestApp, jobId: number, target: string): Promise<void>
   const checker = await t.signIn(DEMO.mechanic2);
   for (const to of path.slice(1, path.indexOf(target) + 1)) {
     if (to === 'ready') {
-            await checker.agent.post(`/api/jobs/${jobId}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
+      await checker.agent.post(`/api/jobs/${jobId}/final-check`).send({ items: ALL_PASS, passed: true }).expect(201);
     }
-    await manager.agent.post(`/api/jobs/${jobId}/transitions`).send({ to, confirmNoReport: to === 'collected' }).expect(200);
+    await manager.agent
+      .post(`/api/jobs/${jobId}/transitions`)
+      .send({ to, confirmNoReport: to === 'collected' })
+      .expect(200);
   }
 }

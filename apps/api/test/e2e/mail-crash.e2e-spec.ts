@@ -36,9 +36,17 @@ describe('mail: crash between queueing and sending', () => {
   async function boot(httpPort: number, smtpPort: number): Promise<ChildProcess> {
     const proc = spawn(process.execPath, [child], {
       env: {
-        ...process.env, PORT: String(httpPort), DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), WEB_DIST: join(dir, 'no-web'),
-        SMTP_URL: `smtp://127.0.0.1:${smtpPort}`, TEST_REPORT_FILE: join(dir, 'report.json'), MAIL_SWEEP_MS: '100', MAIL_SEND_LEASE_MS: '1500',
-        MAIL_RETRY_BASE_MS: '200', LOGIN_THROTTLE_LIMIT: '1000',
+        ...process.env,
+        PORT: String(httpPort),
+        DATABASE_PATH: join(dir, 'db.sqlite'),
+        UPLOADS_DIR: join(dir, 'uploads'),
+        WEB_DIST: join(dir, 'no-web'),
+        SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+        TEST_REPORT_FILE: join(dir, 'report.json'),
+        MAIL_SWEEP_MS: '100',
+        MAIL_SEND_LEASE_MS: '1500',
+        MAIL_RETRY_BASE_MS: '200',
+        LOGIN_THROTTLE_LIMIT: '1000',
         // The killed process held the task's lease: a short one lets the restarted runner take it back soon.
         TASK_LEASE_MS: '1500',
       },
@@ -63,11 +71,30 @@ describe('mail: crash between queueing and sending', () => {
       return agent;
     };
     let desk = await login();
-    const job = (await desk.post('/api/jobs').send({
-      newCustomer: { name: 'Halvard Nyquist', email: 'halvard@example.test', phone: null, preferredChannel: 'email', notes: null },
-      newBike: { maker: 'Quillon Works', model: 'Stratus 11', year: 2022, frameMaterial: 'aluminium', size: 'M', colour: 'Slate', serialNumber: 'QW-CRASH-1', drivetrainSpeeds: 11, brakeType: 'hydraulic_disc', cableRouting: 'internal', dropoutType: 'vertical', tyreSize: '28-622' },
-      reportedSymptoms: 'Creak from the bottom bracket', promisedOn: '2030-01-10',
-    }).expect(201)).body as { id: number };
+    const job = (
+      await desk
+        .post('/api/jobs')
+        .send({
+          newCustomer: { name: 'Halvard Nyquist', email: 'halvard@example.test', phone: null, preferredChannel: 'email', notes: null },
+          newBike: {
+            maker: 'Quillon Works',
+            model: 'Stratus 11',
+            year: 2022,
+            frameMaterial: 'aluminium',
+            size: 'M',
+            colour: 'Slate',
+            serialNumber: 'QW-CRASH-1',
+            drivetrainSpeeds: 11,
+            brakeType: 'hydraulic_disc',
+            cableRouting: 'internal',
+            dropoutType: 'vertical',
+            tyreSize: '28-622',
+          },
+          reportedSymptoms: 'Creak from the bottom bracket',
+          promisedOn: '2030-01-10',
+        })
+        .expect(201)
+    ).body as { id: number };
     const pdf = await makePdf('Crash report');
     writeFileSync(join(dir, 'report.pdf'), pdf);
     writeFileSync(join(dir, 'report.json'), JSON.stringify({ reportId: 9, jobId: job.id, pdf: join(dir, 'report.pdf') }));

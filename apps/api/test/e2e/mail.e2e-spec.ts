@@ -77,7 +77,22 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
     const checker = await t.signIn(DEMO.mechanic2);
     const drive = async (jobId: number) => {
       for (const to of ['on_stand', 'in_work', 'final_check']) await manager.agent.post(`/api/jobs/${jobId}/transitions`).send({ to }).expect(200);
-      await checker.agent.post(`/api/jobs/${jobId}/final-check`).send({ items: { brakes: true, shifting: true, steering: true, fasteners_torqued: true, wheels_true_centred: true, tyres_pressure: true, axles_closed: true, test_ride: true }, passed: true }).expect(201);
+      await checker.agent
+        .post(`/api/jobs/${jobId}/final-check`)
+        .send({
+          items: {
+            brakes: true,
+            shifting: true,
+            steering: true,
+            fasteners_torqued: true,
+            wheels_true_centred: true,
+            tyres_pressure: true,
+            axles_closed: true,
+            test_ride: true,
+          },
+          passed: true,
+        })
+        .expect(201);
       await manager.agent.post(`/api/jobs/${jobId}/transitions`).send({ to: 'ready' }).expect(200);
     };
     const bare = await bookIn(desk);

@@ -36,13 +36,24 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
   };
 
   it('probes the video and serves it whole with type, private caching and the SHA-256 as ETag', async () => {
-    expect(videoAsset).toMatchObject({ kind: 'scope_video', mime: 'video/mp4', durationMs: CLIP_MP4.durationMs, width: CLIP_MP4.width, height: CLIP_MP4.height, status: 'ready' });
+    expect(videoAsset).toMatchObject({
+      kind: 'scope_video',
+      mime: 'video/mp4',
+      durationMs: CLIP_MP4.durationMs,
+      width: CLIP_MP4.width,
+      height: CLIP_MP4.height,
+      status: 'ready',
+    });
     const res = await get(videoAsset.urls.original!).expect(200);
     expect(res.headers['content-type']).toBe('video/mp4');
     expect(res.headers['cache-control']).toMatch(/^private/);
     expect(res.headers.etag).toBe(`"${videoAsset.sha256}"`);
     expect(res.headers['accept-ranges']).toBe('bytes');
-    expect(createHash('sha256').update(res.body as Buffer).digest('hex')).toBe(createHash('sha256').update(video).digest('hex'));
+    expect(
+      createHash('sha256')
+        .update(res.body as Buffer)
+        .digest('hex'),
+    ).toBe(createHash('sha256').update(video).digest('hex'));
     await mech.agent.get(videoAsset.urls.original!).set('If-None-Match', `"${videoAsset.sha256}"`).expect(304);
   });
 
@@ -68,7 +79,10 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
 
   it('takes a poster frame from the browser for a video and makes its thumb', async () => {
     expect(videoAsset.urls.poster).toBeNull();
-    const res = await mech.agent.put(`/api/jobs/${jobId}/media/${videoAsset.id}/poster`).attach('file', await solidJpeg(640, 480, '#204060'), 'frame.jpg').expect(200);
+    const res = await mech.agent
+      .put(`/api/jobs/${jobId}/media/${videoAsset.id}/poster`)
+      .attach('file', await solidJpeg(640, 480, '#204060'), 'frame.jpg')
+      .expect(200);
     expect(res.body.urls).toMatchObject({ poster: `/api/media/${videoAsset.id}/poster`, thumb: `/api/media/${videoAsset.id}/thumb` });
     expect((await get(res.body.urls.poster).expect(200)).headers['content-type']).toBe('image/jpeg');
     const bad = await mech.agent.put(`/api/jobs/${jobId}/media/${videoAsset.id}/poster`).attach('file', Buffer.from('nope'), 'frame.jpg').expect(415);
@@ -91,24 +105,48 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
   it('filters and re-tags in bulk and one by one', async () => {
     const scope = (await mech.agent.get(`/api/jobs/${jobId}/media?kind=scope_video`).expect(200)).body;
     expect(scope.map((a: { id: number }) => a.id)).toEqual([videoAsset.id]);
-    const bulk = await mech.agent.patch(`/api/jobs/${jobId}/media`).send({ ids: [videoAsset.id, photo.id], phase: 'during' }).expect(200);
+    const bulk = await mech.agent
+      .patch(`/api/jobs/${jobId}/media`)
+      .send({ ids: [videoAsset.id, photo.id], phase: 'during' })
+      .expect(200);
     expect(bulk.body.map((a: { phase: string }) => a.phase)).toEqual(['during', 'during']);
     const one = await mech.agent.patch(`/api/jobs/${jobId}/media/${photo.id}`).send({ area: 'bearings', caption: 'Cup pitting' }).expect(200);
     expect(one.body).toMatchObject({ phase: 'during', area: 'bearings', caption: 'Cup pitting' });
     expect((await mech.agent.get(`/api/jobs/${jobId}/media?area=bearings`).expect(200)).body).toHaveLength(1);
-    expect((await mech.agent.patch(`/api/jobs/${jobId}/media`).send({ ids: [photo.id, 999999], phase: 'after' }).expect(404)).body.details.missing).toEqual([999999]);
+    expect(
+      (
+        await mech.agent
+          .patch(`/api/jobs/${jobId}/media`)
+          .send({ ids: [photo.id, 999999], phase: 'after' })
+          .expect(404)
+      ).body.details.missing,
+    ).toEqual([999999]);
   });
 
   it('links shots to a finding in the chosen order, only live media of the same job', async () => {
-    const finding = (await mech.agent.post(`/api/jobs/${jobId}/findings`).send({ area: 'frame_interior', condition: 'worn', description: 'Rust spots inside the seat tube' }).expect(201)).body;
+    const finding = (
+      await mech.agent
+        .post(`/api/jobs/${jobId}/findings`)
+        .send({ area: 'frame_interior', condition: 'worn', description: 'Rust spots inside the seat tube' })
+        .expect(201)
+    ).body;
     const path = `/api/jobs/${jobId}/findings/${finding.id}/media`;
-    const linked = await mech.agent.put(path).send({ assetIds: [photo.id, videoAsset.id] }).expect(200);
+    const linked = await mech.agent
+      .put(path)
+      .send({ assetIds: [photo.id, videoAsset.id] })
+      .expect(200);
     expect(linked.body.assets.map((a: { id: number }) => a.id)).toEqual([photo.id, videoAsset.id]);
     expect((await mech.agent.get(path).expect(200)).body.assets.map((a: { id: number }) => a.id)).toEqual([photo.id, videoAsset.id]);
     const otherJob = await bookJob(t);
-    const res = await mech.agent.put(`/api/jobs/${otherJob}/findings/${finding.id}/media`).send({ assetIds: [photo.id] }).expect(404);
+    const res = await mech.agent
+      .put(`/api/jobs/${otherJob}/findings/${finding.id}/media`)
+      .send({ assetIds: [photo.id] })
+      .expect(404);
     expect(res.body.code).toBe('NOT_FOUND');
-    const foreign = await mech.agent.put(path).send({ assetIds: [999999] }).expect(400);
+    const foreign = await mech.agent
+      .put(path)
+      .send({ assetIds: [999999] })
+      .expect(400);
     expect(foreign.body.details.missing).toEqual([999999]);
     const other = await t.signIn(DEMO.otherShopManager);
     await other.agent.get(path).expect(404);

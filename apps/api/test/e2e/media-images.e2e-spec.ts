@@ -47,20 +47,33 @@ async function orientedJpeg(orientation: number): Promise<Buffer> {
       raw.set(uprightPixel(x, y), (sy * sw + sx) * 3);
     }
   }
-  return sharp(raw, { raw: { width: sw, height: sh, channels: 3 } }).jpeg({ quality: 95 }).withMetadata({ orientation }).toBuffer();
+  return sharp(raw, { raw: { width: sw, height: sh, channels: 3 } })
+    .jpeg({ quality: 95 })
+    .withMetadata({ orientation })
+    .toBuffer();
 }
 
 /** GPS written by piexifjs (an independent EXIF writer), read back by exifr below. */
 async function jpegWithGps(): Promise<Buffer> {
-  const plain = await sharp({ create: { width: 90, height: 60, channels: 3, background: '#777' } }).jpeg().toBuffer();
+  const plain = await sharp({ create: { width: 90, height: 60, channels: 3, background: '#777' } })
+    .jpeg()
+    .toBuffer();
   const exif = piexif.dump({
     '0th': { [piexif.ImageIFD.Make]: 'BenchCam', [piexif.ImageIFD.Model]: 'Unit 7' },
     Exif: { [piexif.ExifIFD.DateTimeOriginal]: '2026:02:03 09:08:07', [piexif.ExifIFD.BodySerialNumber]: 'SN-123456' },
     GPS: {
       [piexif.GPSIFD.GPSLatitudeRef]: 'N',
-      [piexif.GPSIFD.GPSLatitude]: [[51, 1], [30, 1], [0, 1]],
+      [piexif.GPSIFD.GPSLatitude]: [
+        [51, 1],
+        [30, 1],
+        [0, 1],
+      ],
       [piexif.GPSIFD.GPSLongitudeRef]: 'W',
-      [piexif.GPSIFD.GPSLongitude]: [[0, 1], [7, 1], [396, 10]],
+      [piexif.GPSIFD.GPSLongitude]: [
+        [0, 1],
+        [7, 1],
+        [396, 10],
+      ],
     },
   });
   return Buffer.from(piexif.insert(exif, plain.toString('binary')), 'binary');
@@ -80,7 +93,8 @@ describe('media derivatives: upright, sRGB, no metadata; originals untouched', (
   afterAll(() => t.close());
 
   const upload = async (bytes: Buffer, name = 'shot.jpg'): Promise<MediaAssetDto> =>
-    (await mech.agent.post(`/api/jobs/${jobId}/media`).field('phase', 'before').field('area', 'frame_fork').attach('files', bytes, name).expect(201)).body.assets[0];
+    (await mech.agent.post(`/api/jobs/${jobId}/media`).field('phase', 'before').field('area', 'frame_fork').attach('files', bytes, name).expect(201)).body
+      .assets[0];
   const fetch = (path: string) => mech.agent.get(path).buffer(true).parse(binary).expect(200);
 
   it.each([1, 2, 3, 4, 5, 6, 7, 8])('orientation %i gives an upright thumb and screen image', async (orientation) => {
@@ -97,7 +111,12 @@ describe('media derivatives: upright, sRGB, no metadata; originals untouched', (
       expect({ variant, w: meta.width, h: meta.height, orientation: meta.orientation ?? 1 }).toEqual({ variant, w: W, h: H, orientation: 1 });
       for (const [corner, [x, y]] of Object.entries({ tl: [15, 15], tr: [W - 15, 15], bl: [15, H - 15], br: [W - 15, H - 15] })) {
         const seen = await colourAt(img, x, y);
-        expect({ orientation, variant, corner, close: distance(seen, QUADRANTS[corner as keyof typeof QUADRANTS]) < 40 }).toEqual({ orientation, variant, corner, close: true });
+        expect({ orientation, variant, corner, close: distance(seen, QUADRANTS[corner as keyof typeof QUADRANTS]) < 40 }).toEqual({
+          orientation,
+          variant,
+          corner,
+          close: true,
+        });
       }
     }
   });

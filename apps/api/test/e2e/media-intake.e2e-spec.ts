@@ -29,7 +29,12 @@ function pngClaiming(width: number, height: number): Buffer {
   ihdr.writeUInt32BE(height, 4);
   ihdr.set([8, 2, 0, 0, 0], 8);
   const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-  return Buffer.concat([signature, chunk('IHDR', ihdr), chunk('IDAT', Buffer.from([0x78, 0x9c, 0x03, 0x00, 0x00, 0x00, 0x00, 0x01])), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    signature,
+    chunk('IHDR', ihdr),
+    chunk('IDAT', Buffer.from([0x78, 0x9c, 0x03, 0x00, 0x00, 0x00, 0x00, 0x01])),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 describe('media intake: the type comes from the bytes, and a refused file leaves nothing behind', () => {
@@ -51,7 +56,13 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
 
   it.each([
     ['a shell script named .jpg', 'photo.jpg', () => Buffer.from('#!/bin/sh\nrm -rf /\n'), 415, 'UNSUPPORTED_MEDIA_TYPE'],
-    ['an SVG named .png', 'drawing.png', () => Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><script>alert(1)</script></svg>'), 415, 'UNSUPPORTED_MEDIA_TYPE'],
+    [
+      'an SVG named .png',
+      'drawing.png',
+      () => Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="10" height="10"><script>alert(1)</script></svg>'),
+      415,
+      'UNSUPPORTED_MEDIA_TYPE',
+    ],
     ['an HTML page named .png', 'page.png', () => Buffer.from('<!doctype html><html><body>hi</body></html>'), 415, 'UNSUPPORTED_MEDIA_TYPE'],
     ['a PDF named .jpg', 'scan.jpg', () => Buffer.from('%PDF-1.7\n%âãÏÓ\n1 0 obj\n<<>>\nendobj\n'), 415, 'UNSUPPORTED_MEDIA_TYPE'],
     ['an empty file', 'empty.jpg', () => Buffer.alloc(0), 422, 'FILE_EMPTY'],
@@ -63,7 +74,9 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
   });
 
   it('refuses a truncated JPEG as FILE_CORRUPT', async () => {
-    const whole = await sharp({ create: { width: 400, height: 300, channels: 3, background: '#884422' } }).jpeg().toBuffer();
+    const whole = await sharp({ create: { width: 400, height: 300, channels: 3, background: '#884422' } })
+      .jpeg()
+      .toBuffer();
     const res = await upload('cut.jpg', whole.subarray(0, Math.floor(whole.length / 2))).expect(422);
     expect(res.body.code).toBe('FILE_CORRUPT');
   });
@@ -90,7 +103,13 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
       .field('caption', 'Pads replaced')
       .attach('files', await solidJpeg(64, 48), 'good-1.jpg')
       .attach('files', Buffer.from('plain text'), 'notes.jpg')
-      .attach('files', await sharp({ create: { width: 30, height: 20, channels: 3, background: '#fff' } }).webp().toBuffer(), 'good-2.webp')
+      .attach(
+        'files',
+        await sharp({ create: { width: 30, height: 20, channels: 3, background: '#fff' } })
+          .webp()
+          .toBuffer(),
+        'good-2.webp',
+      )
       .expect(207);
     expect(res.body.results.map((r: { ok: boolean; name: string }) => [r.name, r.ok])).toEqual([
       ['good-1.jpg', true],
@@ -99,7 +118,17 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
     ]);
     expect(res.body.results[1].error.code).toBe('UNSUPPORTED_MEDIA_TYPE');
     expect(res.body.assets).toHaveLength(2);
-    expect(res.body.assets[0]).toMatchObject({ jobId, phase: 'after', area: 'brakes', caption: 'Pads replaced', kind: 'photo', source: 'upload', mime: 'image/jpeg', width: 64, height: 48 });
+    expect(res.body.assets[0]).toMatchObject({
+      jobId,
+      phase: 'after',
+      area: 'brakes',
+      caption: 'Pads replaced',
+      kind: 'photo',
+      source: 'upload',
+      mime: 'image/jpeg',
+      width: 64,
+      height: 48,
+    });
     expect(res.body.assets[1]).toMatchObject({ mime: 'image/webp' });
   });
 
@@ -113,7 +142,12 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
   });
 
   it('validates the tags and cleans up the temp files when they are wrong', async () => {
-    const res = await mech.agent.post(`/api/jobs/${jobId}/media`).field('phase', 'sometime').field('area', 'drivetrain').attach('files', await solidJpeg(20, 20), 'x.jpg').expect(400);
+    const res = await mech.agent
+      .post(`/api/jobs/${jobId}/media`)
+      .field('phase', 'sometime')
+      .field('area', 'drivetrain')
+      .attach('files', await solidJpeg(20, 20), 'x.jpg')
+      .expect(400);
     expect(res.body.code).toBe('VALIDATION_FAILED');
     expect(filesUnder(t.cfg.UPLOADS_DIR).filter((f) => f.startsWith('/tmp/'))).toEqual([]);
   });
@@ -134,7 +168,12 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
   it('answers 404 for a job of another shop, and stores nothing', async () => {
     const other = await t.signIn(DEMO.otherShopMechanic);
     const before = filesUnder(t.cfg.UPLOADS_DIR).length;
-    const res = await other.agent.post(`/api/jobs/${jobId}/media`).field('phase', 'before').field('area', 'drivetrain').attach('files', await solidJpeg(20, 20), 'x.jpg').expect(404);
+    const res = await other.agent
+      .post(`/api/jobs/${jobId}/media`)
+      .field('phase', 'before')
+      .field('area', 'drivetrain')
+      .attach('files', await solidJpeg(20, 20), 'x.jpg')
+      .expect(404);
     expect(res.body.code).toBe('NOT_FOUND');
     expect(filesUnder(t.cfg.UPLOADS_DIR).length).toBe(before);
   });

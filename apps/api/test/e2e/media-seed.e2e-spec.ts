@@ -41,7 +41,12 @@ describe('demo media in the seeded shop', () => {
         expect(await exifr.gps(derived)).toBeUndefined();
         const meta = await sharp(derived).metadata();
         // The scenes are drawn landscape (1200×800); an upright derivative keeps that shape.
-        expect({ id: a.id, variant, landscape: meta.width > meta.height, orientation: meta.orientation ?? 1 }).toEqual({ id: a.id, variant, landscape: true, orientation: 1 });
+        expect({ id: a.id, variant, landscape: meta.width > meta.height, orientation: meta.orientation ?? 1 }).toEqual({
+          id: a.id,
+          variant,
+          landscape: true,
+          orientation: 1,
+        });
       }
     }
     expect(withGps.length).toBeGreaterThan(0);

@@ -47,7 +47,14 @@ describe('video intake: a video must be one', () => {
     const meta = `jobId ${b64(String(jobId))},phase ${b64('before')},area ${b64('drivetrain')},filename ${b64('clip.mp4')}`;
     const headers = tus;
     const created = await t.http().post('/api/media/tus').set(headers).set('Upload-Length', String(bytes.length)).set('Upload-Metadata', meta).expect(201);
-    const res = await t.http().patch(created.headers.location).set(headers).set('Upload-Offset', '0').set('Content-Type', 'application/offset+octet-stream').send(bytes).expect(422);
+    const res = await t
+      .http()
+      .patch(created.headers.location)
+      .set(headers)
+      .set('Upload-Offset', '0')
+      .set('Content-Type', 'application/offset+octet-stream')
+      .send(bytes)
+      .expect(422);
     expect(JSON.parse(res.text)).toMatchObject({ code: 'VIDEO_UNREADABLE', details: null });
     expect(await videosOfJob()).toEqual([]);
     expect(filesUnder(t.cfg.UPLOADS_DIR)).toEqual(seeded);

@@ -39,8 +39,20 @@ describe('owner link', () => {
     expect(row?.tokenHash).toBe(createHash('sha256').update(created.token).digest('hex'));
     // The only copy is the e-mail to the owner (the outbox row keeps the message as sent); without it nothing holds the token.
     const secret = created.token.split('.')[0];
-    expect(t.app.get<Db>(DB).select().from(ownerLinks).all().some((r) => JSON.stringify(r).includes(secret))).toBe(false);
-    const outbox = t.app.get<Db>(DB).select().from(outboxMessages).all().filter((m) => m.textBody.includes(secret) || m.htmlBody.includes(secret));
+    expect(
+      t.app
+        .get<Db>(DB)
+        .select()
+        .from(ownerLinks)
+        .all()
+        .some((r) => JSON.stringify(r).includes(secret)),
+    ).toBe(false);
+    const outbox = t.app
+      .get<Db>(DB)
+      .select()
+      .from(outboxMessages)
+      .all()
+      .filter((m) => m.textBody.includes(secret) || m.htmlBody.includes(secret));
     expect(outbox.map((m) => ({ kind: m.kind, to: m.toAddress }))).toEqual([{ kind: 'estimate_decision', to: 'ottilie@example.test' }]);
     const listed = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-links`).expect(200)).body as { expiresAt: string }[];
     expect(new Date(listed[0].expiresAt).getTime()).toBeGreaterThan(Date.now() + 6 * 24 * 3600e3);
@@ -57,16 +69,26 @@ describe('owner link', () => {
     expect(messages[0]).toMatchObject({ kind: 'estimate_decision', status: 'sent' });
   });
 
-  it('shows the job\'s before/after pairs and serves their shots through the owner route only', async () => {
+  it("shows the job's before/after pairs and serves their shots through the owner route only", async () => {
     const p = await ownerScenario(t);
     const j = `/api/jobs/${p.jobId}`;
-    const upload = await p.mech.agent.post(`${j}/media`).field('phase', 'after').field('area', 'drivetrain').attach('files', await solidJpeg(900, 600, '#3333aa'), 'after.jpg').expect(201);
+    const upload = await p.mech.agent
+      .post(`${j}/media`)
+      .field('phase', 'after')
+      .field('area', 'drivetrain')
+      .attach('files', await solidJpeg(900, 600, '#3333aa'), 'after.jpg')
+      .expect(201);
     const afterId = (upload.body as { assets: { id: number }[] }).assets[0].id;
     await derivativesSettled(t);
-    await p.mech.agent.post(`${j}/pairs`).send({ beforeAssetId: p.unlinkedAsset, afterAssetId: afterId, caption: 'Chain before and after cleaning' }).expect(201);
+    await p.mech.agent
+      .post(`${j}/pairs`)
+      .send({ beforeAssetId: p.unlinkedAsset, afterAssetId: afterId, caption: 'Chain before and after cleaning' })
+      .expect(201);
     const { token } = await createLink(p.desk, p.jobId);
     const page = await ownerPage(t, token);
-    expect(page.pairs.map((x) => ({ caption: x.caption, before: x.before.id, after: x.after.id }))).toEqual([{ caption: 'Chain before and after cleaning', before: p.unlinkedAsset, after: afterId }]);
+    expect(page.pairs.map((x) => ({ caption: x.caption, before: x.before.id, after: x.after.id }))).toEqual([
+      { caption: 'Chain before and after cleaning', before: p.unlinkedAsset, after: afterId },
+    ]);
     const shot = await t.http().get(page.pairs[0].after.screenUrl).expect(200);
     expect(shot.headers['content-type']).toBe('image/jpeg');
     await t.http().get(`/api/owner/${token}/media/${afterId}/original`).expect(400);
@@ -75,7 +97,10 @@ describe('owner link', () => {
 
   it('shows the owner only owner-facing data: derivatives via owner routes, no originals, no internal notes', async () => {
     const { token } = await createLink(s.desk, s.jobId);
-    await s.desk.agent.post(`/api/jobs/${s.jobId}/recommendations/${s.chainRec}/decision`).send({ status: 'pending', channel: 'phone', decidedByName: 'Ottilie', note: 'INTERNAL: owner haggles' }).expect(201);
+    await s.desk.agent
+      .post(`/api/jobs/${s.jobId}/recommendations/${s.chainRec}/decision`)
+      .send({ status: 'pending', channel: 'phone', decidedByName: 'Ottilie', note: 'INTERNAL: owner haggles' })
+      .expect(201);
     const page = await ownerPage(t, token);
     const text = JSON.stringify(page);
     expect(page.bike).toMatchObject({ maker: 'Quillon Works', model: 'Stratus 11' });
@@ -94,11 +119,22 @@ describe('owner link', () => {
   it('refuses another job: its media, its recommendations, and staff routes of either job', async () => {
     const { token } = await createLink(s.desk, s.jobId);
     const page = await ownerPage(t, token);
-    const res = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(page, s.chainRec), recommendationId: other.chainRec, status: 'approved' }] }).expect(404);
+    const res = await t
+      .http()
+      .post(`/api/owner/${token}/decisions`)
+      .send({ items: [{ ...seen(page, s.chainRec), recommendationId: other.chainRec, status: 'approved' }] })
+      .expect(404);
     expect(res.body.code).toBe('NOT_FOUND');
     const otherFindings = (await other.desk.agent.get(`/api/jobs/${other.jobId}/findings`).expect(200)).body as FindingDto[];
     expect(otherFindings.every((f) => f.recommendation?.decisionStatus === 'pending')).toBe(true);
-    for (const path of [`/api/jobs/${s.jobId}`, `/api/jobs/${other.jobId}`, `/api/jobs/${s.jobId}/findings`, `/api/jobs/${s.jobId}/owner-links`, `/api/jobs/${s.jobId}/media`, `/api/media/${s.linkedAsset}/screen`]) {
+    for (const path of [
+      `/api/jobs/${s.jobId}`,
+      `/api/jobs/${other.jobId}`,
+      `/api/jobs/${s.jobId}/findings`,
+      `/api/jobs/${s.jobId}/owner-links`,
+      `/api/jobs/${s.jobId}/media`,
+      `/api/media/${s.linkedAsset}/screen`,
+    ]) {
       expect((await t.http().get(path).set('authorization', `Bearer ${token}`)).status).toBe(401);
       expect((await t.http().get(path).set('cookie', `bp_session=${token}`)).status).toBe(401);
     }
@@ -116,7 +152,12 @@ describe('owner link', () => {
       expect((await t.http().get(`/api/owner/${token}`).expect(410)).body.code).toBe('OWNER_LINK_EXPIRED');
       // Read through the service: eight days on, the desk's own session has expired too.
       const desk = { ...s.desk.user, email: '', name: '' } as AuthUser;
-      expect(t.app.get(OwnerLinksService).list(desk, s.jobId).find((l) => l.id === link.id)?.state).toBe('expired');
+      expect(
+        t.app
+          .get(OwnerLinksService)
+          .list(desk, s.jobId)
+          .find((l) => l.id === link.id)?.state,
+      ).toBe('expired');
     } finally {
       spy.mockRestore();
     }
@@ -131,8 +172,20 @@ describe('owner link', () => {
   it('refuses a decision on a price the owner did not see (desk re-priced meanwhile), storing nothing', async () => {
     const { token } = await createLink(s.desk, s.jobId);
     const before = await ownerPage(t, token);
-    await s.desk.agent.post(`/api/jobs/${s.jobId}/findings/${s.padsFinding}/recommendation`).send({ summary: 'New rear pads', parts: [{ description: 'Pads', qty: 1, unitPriceMinor: 2900 }], labourHundredths: 30 }).expect(201);
-    const res = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(before, s.chainRec), status: 'approved' }, { ...seen(before, s.padsRec), status: 'approved' }] }).expect(409);
+    await s.desk.agent
+      .post(`/api/jobs/${s.jobId}/findings/${s.padsFinding}/recommendation`)
+      .send({ summary: 'New rear pads', parts: [{ description: 'Pads', qty: 1, unitPriceMinor: 2900 }], labourHundredths: 30 })
+      .expect(201);
+    const res = await t
+      .http()
+      .post(`/api/owner/${token}/decisions`)
+      .send({
+        items: [
+          { ...seen(before, s.chainRec), status: 'approved' },
+          { ...seen(before, s.padsRec), status: 'approved' },
+        ],
+      })
+      .expect(409);
     const after = await ownerPage(t, token);
     expect(res.body).toMatchObject({ code: 'PRICE_CHANGED', details: { recommendationId: s.padsRec, grossMinor: seen(after, s.padsRec).seenGrossMinor } });
     expect(seen(after, s.padsRec).seenGrossMinor).toBeGreaterThan(seen(before, s.padsRec).seenGrossMinor);
@@ -143,15 +196,34 @@ describe('owner link', () => {
     const { token } = await createLink(s.desk, s.jobId);
     const page = await ownerPage(t, token);
     const decline = { ...seen(page, s.padsRec), status: 'declined' };
-    const res = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(page, s.chainRec), status: 'approved' }, decline] }).expect(422);
+    const res = await t
+      .http()
+      .post(`/api/owner/${token}/decisions`)
+      .send({ items: [{ ...seen(page, s.chainRec), status: 'approved' }, decline] })
+      .expect(422);
     expect(res.body.code).toBe('SAFETY_CONFIRMATION_REQUIRED');
-    const done = (await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(page, s.chainRec), status: 'approved' }, { ...decline, safetyConfirmed: true }] }).expect(200)).body as OwnerPageDto;
+    const done = (
+      await t
+        .http()
+        .post(`/api/owner/${token}/decisions`)
+        .send({
+          items: [
+            { ...seen(page, s.chainRec), status: 'approved' },
+            { ...decline, safetyConfirmed: true },
+          ],
+        })
+        .expect(200)
+    ).body as OwnerPageDto;
     expect(done.findings.map((f) => f.recommendation?.decisionStatus)).toEqual(['approved', 'declined']);
     const staff = (await s.desk.agent.get(`/api/jobs/${s.jobId}/findings`).expect(200)).body as FindingDto[];
     const last = staff[0].recommendation?.decisions.at(-1);
     expect(last).toMatchObject({ status: 'approved', channel: 'owner_link', recordedById: null, decidedByName: 'Ottilie Fernsby' });
     expect((await s.desk.agent.get(`/api/jobs/${s.jobId}`).expect(200)).body.status).toBe('in_work');
-    const again = await t.http().post(`/api/owner/${token}/decisions`).send({ items: [{ ...seen(done, s.chainRec), status: 'declined' }] }).expect(409);
+    const again = await t
+      .http()
+      .post(`/api/owner/${token}/decisions`)
+      .send({ items: [{ ...seen(done, s.chainRec), status: 'declined' }] })
+      .expect(409);
     expect(again.body.code).toBe('CONFLICT');
     const activity = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-activity`).expect(200)).body as { action: string; details: { channel?: string } }[];
     expect(activity.filter((a) => a.action === 'recommendation.decided' && a.details.channel === 'owner_link')).toHaveLength(2);
@@ -164,11 +236,17 @@ describe('owner link', () => {
     expect(wrong.body.code).toBe('CONSENT_WORDING_CHANGED');
     await t.http().post(`/api/owner/${token}/consent`).send({ granted: true, nameMakeModel: true, wordingVersion: CONSENT_WORDING.version }).expect(200);
     expect((await ownerPage(t, token)).consent).toMatchObject({ granted: true, nameMakeModel: true, method: 'owner_link' });
-    await other.desk.agent.post(`/api/jobs/${other.jobId}/consent`).send({ granted: false, nameMakeModel: false, wordingVersion: CONSENT_WORDING.version, givenByName: 'Ottilie Fernsby' }).expect(201);
+    await other.desk.agent
+      .post(`/api/jobs/${other.jobId}/consent`)
+      .send({ granted: false, nameMakeModel: false, wordingVersion: CONSENT_WORDING.version, givenByName: 'Ottilie Fernsby' })
+      .expect(201);
     const status = (await other.desk.agent.get(`/api/jobs/${other.jobId}/consent`).expect(200)).body as ConsentStatusDto;
     expect(status.current).toMatchObject({ granted: false, method: 'in_person', recordedById: other.desk.user.id });
     expect(status.history.map((h) => h.method)).toEqual(['in_person', 'owner_link']);
-    await other.mech.agent.post(`/api/jobs/${other.jobId}/consent`).send({ granted: true, nameMakeModel: false, wordingVersion: CONSENT_WORDING.version, givenByName: 'X' }).expect(403);
+    await other.mech.agent
+      .post(`/api/jobs/${other.jobId}/consent`)
+      .send({ granted: true, nameMakeModel: false, wordingVersion: CONSENT_WORDING.version, givenByName: 'X' })
+      .expect(403);
     const activity = (await other.desk.agent.get(`/api/jobs/${other.jobId}/owner-activity`).expect(200)).body as { action: string }[];
     expect(activity.map((a) => a.action)).toEqual(expect.arrayContaining(['consent.granted', 'consent.revoked']));
   });

@@ -58,7 +58,9 @@ describe('before/after shot pairs', () => {
     for (const b of befores) {
       const mine = res.suggestions.filter((s) => s.before.id === b.id);
       const rank = mine.findIndex((s) => demoShotOf(s.after).scene === demoShotOf(b).scene) + 1;
-      report.push(`${label(b)}: true pair rank ${rank} of ${mine.length} (d=${mine[rank - 1]?.distance}, runner-up ${mine[1] ? `${label(mine[1].after)} d=${mine[1].distance}` : 'none'})`);
+      report.push(
+        `${label(b)}: true pair rank ${rank} of ${mine.length} (d=${mine[rank - 1]?.distance}, runner-up ${mine[1] ? `${label(mine[1].after)} d=${mine[1].distance}` : 'none'})`,
+      );
       expect({ before: label(b), rank }).toEqual({ before: label(b), rank: 1 });
     }
     // The one-to-one picks (what the builder offers first) are exactly the four true pairs.
@@ -70,23 +72,48 @@ describe('before/after shot pairs', () => {
   });
 
   it('creates, lists, edits, reorders and deletes pairs, and a paired shot leaves the suggestions', async () => {
-    const chain = { beforeAssetId: byLabel('chain-before').id, afterAssetId: byLabel('chain-after').id, caption: 'Chain: before and after', crop: { x: 0.1, y: 0.2, w: 0.6, h: 0.5 } };
+    const chain = {
+      beforeAssetId: byLabel('chain-before').id,
+      afterAssetId: byLabel('chain-after').id,
+      caption: 'Chain: before and after',
+      crop: { x: 0.1, y: 0.2, w: 0.6, h: 0.5 },
+    };
     const created = (await mech.agent.post(`/api/jobs/${jobId}/pairs`).send(chain).expect(201)).body as ShotPairDto;
-    expect(created).toMatchObject({ caption: chain.caption, crop: chain.crop, position: 0, before: { id: chain.beforeAssetId }, after: { id: chain.afterAssetId } });
+    expect(created).toMatchObject({
+      caption: chain.caption,
+      crop: chain.crop,
+      position: 0,
+      before: { id: chain.beforeAssetId },
+      after: { id: chain.afterAssetId },
+    });
     expect(created.before.urls.screen).toMatch(/^\/api\/media\/\d+\/screen$/);
 
     const sugg = (await mech.agent.get(`/api/jobs/${jobId}/pair-suggestions`).expect(200)).body as PairSuggestionsDto;
     expect(sugg.suggestions.some((s) => s.before.id === chain.beforeAssetId || s.after.id === chain.afterAssetId)).toBe(false);
 
-    const rotor = (await mech.agent.post(`/api/jobs/${jobId}/pairs`).send({ beforeAssetId: byLabel('rotor-before').id, afterAssetId: byLabel('rotor-after').id }).expect(201)).body as ShotPairDto;
+    const rotor = (
+      await mech.agent
+        .post(`/api/jobs/${jobId}/pairs`)
+        .send({ beforeAssetId: byLabel('rotor-before').id, afterAssetId: byLabel('rotor-after').id })
+        .expect(201)
+    ).body as ShotPairDto;
     expect(rotor).toMatchObject({ position: 1, caption: '', crop: null });
 
-    const edited = (await mech.agent.patch(`/api/jobs/${jobId}/pairs/${created.id}`).send({ caption: 'New chain', crop: null }).expect(200)).body as ShotPairDto;
+    const edited = (await mech.agent.patch(`/api/jobs/${jobId}/pairs/${created.id}`).send({ caption: 'New chain', crop: null }).expect(200))
+      .body as ShotPairDto;
     expect(edited).toMatchObject({ caption: 'New chain', crop: null });
 
-    const reordered = (await mech.agent.put(`/api/jobs/${jobId}/pairs/order`).send({ ids: [rotor.id, created.id] }).expect(200)).body as ShotPairDto[];
+    const reordered = (
+      await mech.agent
+        .put(`/api/jobs/${jobId}/pairs/order`)
+        .send({ ids: [rotor.id, created.id] })
+        .expect(200)
+    ).body as ShotPairDto[];
     expect(reordered.map((p) => p.id)).toEqual([rotor.id, created.id]);
-    await mech.agent.put(`/api/jobs/${jobId}/pairs/order`).send({ ids: [rotor.id] }).expect(400);
+    await mech.agent
+      .put(`/api/jobs/${jobId}/pairs/order`)
+      .send({ ids: [rotor.id] })
+      .expect(400);
 
     await mech.agent.delete(`/api/jobs/${jobId}/pairs/${rotor.id}`).expect(204);
     const list = (await mech.agent.get(`/api/jobs/${jobId}/pairs`).expect(200)).body as ShotPairDto[];
@@ -109,7 +136,11 @@ describe('before/after shot pairs', () => {
     const foreign = await post({ beforeAssetId: byLabel('cassette-before').id, afterAssetId: other.find((a) => a.phase === 'after')!.id }).expect(422);
     expect(foreign.body).toMatchObject({ code: 'PAIR_OTHER_JOB', details: { issues: [{ path: 'afterAssetId' }] } });
 
-    const offEdge = await post({ beforeAssetId: byLabel('cassette-before').id, afterAssetId: byLabel('cassette-after').id, crop: { x: 0.5, y: 0, w: 0.6, h: 0.5 } }).expect(400);
+    const offEdge = await post({
+      beforeAssetId: byLabel('cassette-before').id,
+      afterAssetId: byLabel('cassette-after').id,
+      crop: { x: 0.5, y: 0, w: 0.6, h: 0.5 },
+    }).expect(400);
     expect(offEdge.body).toMatchObject({ code: 'VALIDATION_FAILED', details: { issues: [{ path: 'crop.w' }] } });
 
     await post({ beforeAssetId: byLabel('cassette-before').id, afterAssetId: byLabel('cassette-after').id }).expect(201);
@@ -120,14 +151,19 @@ describe('before/after shot pairs', () => {
   it('keeps pairs inside the shop and to the roles that build them', async () => {
     const desk = await t.signIn(DEMO.desk);
     await desk.agent.get(`/api/jobs/${jobId}/pairs`).expect(200);
-    await desk.agent.post(`/api/jobs/${jobId}/pairs`).send({ beforeAssetId: byLabel('tube_interior-before').id, afterAssetId: byLabel('tube_interior-after').id }).expect(403);
+    await desk.agent
+      .post(`/api/jobs/${jobId}/pairs`)
+      .send({ beforeAssetId: byLabel('tube_interior-before').id, afterAssetId: byLabel('tube_interior-after').id })
+      .expect(403);
 
     const stranger = await t.signIn(DEMO.otherShopMechanic);
     await stranger.agent.get(`/api/jobs/${jobId}/pairs`).expect(404);
     await stranger.agent.get(`/api/jobs/${jobId}/pair-suggestions`).expect(404);
     const strangerJobs = (await stranger.agent.get('/api/jobs').query({ open: 'true' }).expect(200)).body.items as { id: number }[];
     // Another shop's shot id is simply not found from here (no hint that it exists).
-    const res = await stranger.agent.post(`/api/jobs/${strangerJobs[0].id}/pairs`).send({ beforeAssetId: byLabel('tube_interior-before').id, afterAssetId: byLabel('tube_interior-after').id });
+    const res = await stranger.agent
+      .post(`/api/jobs/${strangerJobs[0].id}/pairs`)
+      .send({ beforeAssetId: byLabel('tube_interior-before').id, afterAssetId: byLabel('tube_interior-after').id });
     expect([res.status, res.body.code]).toEqual([404, 'NOT_FOUND']);
   });
 
@@ -138,7 +174,9 @@ describe('before/after shot pairs', () => {
     expect(had).toMatch(/^[0-9a-f]{16}$/);
     // Before the feature there was no hash and no hash task for the asset.
     db.update(mediaAssets).set({ phash: null }).where(eq(mediaAssets.id, id)).run();
-    db.delete(tasks).where(and(eq(tasks.kind, 'media.phash'), eq(tasks.key, String(id)))).run();
+    db.delete(tasks)
+      .where(and(eq(tasks.kind, 'media.phash'), eq(tasks.key, String(id))))
+      .run();
     expect(((await mech.agent.get(`/api/jobs/${jobId}/pair-suggestions`).expect(200)).body as PairSuggestionsDto).pendingHashes).toBe(1);
     // A second server on the same database, as after a deploy: its boot finds the gap.
     const rebooted = await createApp(t.cfg, { logger: false });

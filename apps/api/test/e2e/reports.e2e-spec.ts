@@ -4,7 +4,17 @@ import { FINDINGS, OWNER, jobWithRecords, photo, settled } from '../reports/repo
 import { pdffonts, pdfimages, pdfPages, sha256 } from '../reports/pdf-readback';
 import { startTestApp, type TestApp } from '../test-app';
 
-interface ReportBody { id: number; state: string; kind: string; version: number | null; sha256: string; fingerprint: string | null; pageSize: string; byteSize: number; urls: { pdf: string } }
+interface ReportBody {
+  id: number;
+  state: string;
+  kind: string;
+  version: number | null;
+  sha256: string;
+  fingerprint: string | null;
+  pageSize: string;
+  byteSize: number;
+  urls: { pdf: string };
+}
 
 describe('bench report: draft, issue, read back', () => {
   let t: TestApp;
@@ -103,7 +113,10 @@ describe('bench report: draft, issue, read back', () => {
     await ctx.m.agent.post(`${ctx.base}/reports/issue`).send({ draftId: draft.id }).expect(202);
     await settled(t);
     const list = (await ctx.m.agent.get(`${ctx.base}/reports`).expect(200)).body as ReportBody[];
-    const versions = list.filter((r) => r.kind === 'issued').map((r) => r.version).sort();
+    const versions = list
+      .filter((r) => r.kind === 'issued')
+      .map((r) => r.version)
+      .sort();
     expect(versions).toEqual([1, 2]);
     const v1 = list.find((r) => r.version === 1)!;
     expect(v1.sha256).toBe(issued.sha256);
@@ -112,14 +125,33 @@ describe('bench report: draft, issue, read back', () => {
   });
 
   it('verify: the genuine file hash and the printed fingerprint verify; one changed byte does not', async () => {
-    const ok = (await t.http().get(`/api/verify/${sha256(pdf)}`).expect(200)).body;
+    const ok = (
+      await t
+        .http()
+        .get(`/api/verify/${sha256(pdf)}`)
+        .expect(200)
+    ).body;
     expect(ok).toEqual({ issued: true, shopName: expect.any(String), jobNumber: ctx.job.number, version: 1, issuedAt: expect.any(String) });
     expect(Object.keys(ok).sort()).toEqual(['issued', 'issuedAt', 'jobNumber', 'shopName', 'version']);
     expect((await t.http().get(`/api/verify/${issued.fingerprint}`).expect(200)).body).toMatchObject({ issued: true, version: 1 });
-    expect((await t.http().get(`/api/verify/${issued.fingerprint!.slice(0, 16)}`).expect(200)).body).toMatchObject({ issued: true, version: 1 });
+    expect(
+      (
+        await t
+          .http()
+          .get(`/api/verify/${issued.fingerprint!.slice(0, 16)}`)
+          .expect(200)
+      ).body,
+    ).toMatchObject({ issued: true, version: 1 });
     const tampered = Buffer.from(pdf);
     tampered[Math.floor(tampered.length / 2)] ^= 0x01;
-    expect((await t.http().get(`/api/verify/${sha256(tampered)}`).expect(200)).body).toEqual({ issued: false });
+    expect(
+      (
+        await t
+          .http()
+          .get(`/api/verify/${sha256(tampered)}`)
+          .expect(200)
+      ).body,
+    ).toEqual({ issued: false });
     await t.http().get('/api/verify/not-a-hash').expect(400);
   });
 
@@ -134,14 +166,26 @@ describe('bench report: draft, issue, read back', () => {
   });
 
   it('prints the before/after pairs of the job with the pair caption and both shot captions', async () => {
-    const after = await ctx.m.agent.post(`${ctx.base}/media`).field('phase', 'after').field('area', 'brakes').field('caption', 'Pads after fitting').attach('files', await photo(7), { filename: 'after.jpg', contentType: 'image/jpeg' }).expect(201);
+    const after = await ctx.m.agent
+      .post(`${ctx.base}/media`)
+      .field('phase', 'after')
+      .field('area', 'brakes')
+      .field('caption', 'Pads after fitting')
+      .attach('files', await photo(7), { filename: 'after.jpg', contentType: 'image/jpeg' })
+      .expect(201);
     const afterId = (after.body as { results: { asset: { id: number } }[] }).results[0].asset.id;
     await settled(t);
-    await ctx.m.agent.post(`${ctx.base}/pairs`).send({ beforeAssetId: ctx.shots[0], afterAssetId: afterId, caption: 'Front brake: glazed pads, then new pads bedded in' }).expect(201);
+    await ctx.m.agent
+      .post(`${ctx.base}/pairs`)
+      .send({ beforeAssetId: ctx.shots[0], afterAssetId: afterId, caption: 'Front brake: glazed pads, then new pads bedded in' })
+      .expect(201);
     const draft = (await ctx.m.agent.post(`${ctx.base}/reports/drafts`).expect(202)).body as ReportBody;
     await settled(t);
     const ready = (await ctx.m.agent.get(`${ctx.base}/reports/${draft.id}`).expect(200)).body as ReportBody;
-    const text = (await pdfPages(await getPdf(ready.urls.pdf))).map((p) => p.text).join(' ').replace(/\s+/g, ' ');
+    const text = (await pdfPages(await getPdf(ready.urls.pdf)))
+      .map((p) => p.text)
+      .join(' ')
+      .replace(/\s+/g, ' ');
     for (const caption of ['Front brake: glazed pads, then new pads bedded in', 'Pads after fitting', 'Shot 1']) expect(text).toContain(caption);
   });
 });

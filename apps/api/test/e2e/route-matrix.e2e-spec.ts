@@ -16,13 +16,21 @@ async function operations(t: TestApp): Promise<Operation[]> {
   };
   return Object.entries(doc.paths).flatMap(([path, ops]) =>
     Object.entries(ops).map(([method, op]) => ({
-      route: `${method.toUpperCase()} ${path}`, path, method: method as Operation['method'], public: op['x-public'] === true, action: op['x-action'],
+      route: `${method.toUpperCase()} ${path}`,
+      path,
+      method: method as Operation['method'],
+      public: op['x-public'] === true,
+      action: op['x-action'],
     })),
   );
 }
 
 /** Fills `{id}`-style path parameters with an id that exists in the demo shop (1), and a real variant name. */
-const concrete = (path: string) => path.replace('{variant}', MEDIA_VARIANTS[0]).replace('{size}', 'screen').replace(/\{[^}]+\}/g, '1');
+const concrete = (path: string) =>
+  path
+    .replace('{variant}', MEDIA_VARIANTS[0])
+    .replace('{size}', 'screen')
+    .replace(/\{[^}]+\}/g, '1');
 /** A server-sent events stream never ends when let through: an open stream after 1.5 s counts as let through. */
 const call = async (who: SignedIn, op: Operation): Promise<{ status: number; body: { code?: string } }> => {
   if (!op.path.endsWith('-events')) return who.agent[op.method](concrete(op.path)).send({});
@@ -45,7 +53,9 @@ describe('route matrix from the OpenAPI document and ACCESS_POLICY', () => {
   afterAll(() => t.close());
 
   it('documents the foundation routes', () => {
-    expect(ops.map((o) => o.route)).toEqual(expect.arrayContaining(['GET /api/health', 'POST /api/auth/login', 'GET /api/users', 'PATCH /api/users/{id}', 'GET /api/shop/settings']));
+    expect(ops.map((o) => o.route)).toEqual(
+      expect.arrayContaining(['GET /api/health', 'POST /api/auth/login', 'GET /api/users', 'PATCH /api/users/{id}', 'GET /api/shop/settings']),
+    );
   });
 
   it('names a policy action on every signed-in route', () => {
@@ -75,7 +85,11 @@ describe('route matrix from the OpenAPI document and ACCESS_POLICY', () => {
         const res = await call(who, op);
         // A bad body may be refused before the lookup (400); it must never succeed or reveal the record.
         const expected = op.method === 'get' || op.method === 'delete' || op.route.endsWith('/purge') ? [404] : [400, 404];
-        expect({ route: op.route, role: who.user.role, status: expected.includes(res.status) ? 'hidden' : res.status }).toEqual({ route: op.route, role: who.user.role, status: 'hidden' });
+        expect({ route: op.route, role: who.user.role, status: expected.includes(res.status) ? 'hidden' : res.status }).toEqual({
+          route: op.route,
+          role: who.user.role,
+          status: 'hidden',
+        });
       }
     }
   });

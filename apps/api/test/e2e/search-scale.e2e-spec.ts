@@ -3,17 +3,25 @@ import { TERMINAL_STATUSES } from '@benchproof/domain';
 import { seedBulkRecords } from '../../src/seed/bulk-records';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 
-interface RefJob { id: number; status: string; promised: string | null; words: string[] }
+interface RefJob {
+  id: number;
+  status: string;
+  promised: string | null;
+  words: string[];
+}
 
 /** Words as a person reads them: runs of letters and digits, lower-cased. */
-const words = (...texts: string[]) => texts.join(' ').toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? [];
+const words = (...texts: string[]) =>
+  texts
+    .join(' ')
+    .toLowerCase()
+    .match(/[\p{L}\p{N}]+/gu) ?? [];
 
 /** A straightforward reference: every typed word must start some word of the job's number, owner or bike. */
 const matches = (job: RefJob, q: string) => words(q).every((w) => job.words.some((x) => x.startsWith(w)));
 
 /** SQLite sorts NULL first ascending; ties by newest id, as the list does. */
-const byPromised = (a: RefJob, b: RefJob) =>
-  (a.promised ?? '') < (b.promised ?? '') ? -1 : (a.promised ?? '') > (b.promised ?? '') ? 1 : b.id - a.id;
+const byPromised = (a: RefJob, b: RefJob) => ((a.promised ?? '') < (b.promised ?? '') ? -1 : (a.promised ?? '') > (b.promised ?? '') ? 1 : b.id - a.id);
 
 describe('search at scale: 50,000 customers and bikes, 50,000 jobs in one shop', () => {
   let t: TestApp;
@@ -34,8 +42,8 @@ describe('search at scale: 50,000 customers and bikes, 50,000 jobs in one shop',
         )
         .all(desk.user.shopId) as (RefJob & Record<string, string>)[]
     ).map((r) => ({ id: r.id, status: r.status, promised: r.promised, words: words(r.number, r.name, r.email, r.phone, r.maker, r.model, r.serial) }));
-    refCustomers = (sqlite.prepare('SELECT name, email, phone FROM customers WHERE shop_id = ?').all(desk.user.shopId) as Record<string, string>[]).map(
-      (c) => words(c.name, c.email, c.phone),
+    refCustomers = (sqlite.prepare('SELECT name, email, phone FROM customers WHERE shop_id = ?').all(desk.user.shopId) as Record<string, string>[]).map((c) =>
+      words(c.name, c.email, c.phone),
     );
     sqlite.close();
   }, 120_000);

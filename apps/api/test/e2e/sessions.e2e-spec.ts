@@ -69,14 +69,18 @@ describe('sessions end when they should', () => {
   it('ends every session on a password change; the new password works, the old one does not', async () => {
     const other = await bearer(t, DEMO.otherShopMechanic);
     const elsewhere = await bearer(t, DEMO.otherShopMechanic);
-    const res = await t.http()
+    const res = await t
+      .http()
       .post('/api/auth/password')
       .set('Authorization', `Bearer ${other}`)
       .send({ currentPassword: DEMO_PASSWORD, newPassword: 'a-new-bench-password' })
       .expect(200);
     await me(other).expect(401);
     await me(elsewhere).expect(401);
-    const fresh = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('bp_session='))!.split(';')[0].slice('bp_session='.length);
+    const fresh = (res.headers['set-cookie'] as unknown as string[])
+      .find((c) => c.startsWith('bp_session='))!
+      .split(';')[0]
+      .slice('bp_session='.length);
     await me(fresh).expect(200);
     await t.http().post('/api/auth/login').send({ email: DEMO.otherShopMechanic, password: DEMO_PASSWORD }).expect(401);
     await me(await bearer(t, DEMO.otherShopMechanic, 'a-new-bench-password')).expect(200);
@@ -84,7 +88,12 @@ describe('sessions end when they should', () => {
 
   it('refuses a password change when the current password is wrong, and keeps the session', async () => {
     const token = await bearer(t, DEMO.desk);
-    const res = await t.http().post('/api/auth/password').set('Authorization', `Bearer ${token}`).send({ currentPassword: 'not-it', newPassword: 'another-long-one' }).expect(401);
+    const res = await t
+      .http()
+      .post('/api/auth/password')
+      .set('Authorization', `Bearer ${token}`)
+      .send({ currentPassword: 'not-it', newPassword: 'another-long-one' })
+      .expect(401);
     expect(res.body).toMatchObject({ code: 'INVALID_CREDENTIALS', details: { field: 'currentPassword' } });
     await me(token).expect(200);
   });

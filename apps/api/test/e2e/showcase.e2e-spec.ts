@@ -35,12 +35,24 @@ describe('showcase: consent on the server, clean exports', () => {
   async function blurredPair(crop: ShotPairDto['crop']): Promise<{ jobId: number; pairId: number; before: MediaAssetDto }> {
     const jobId = await bookJob(t);
     const up = async (phase: string) =>
-      (await mech.agent.post(`/api/jobs/${jobId}/media`).field('phase', phase).field('area', 'drivetrain').attach('files', await checkerboard(), `${phase}.jpg`).expect(201)).body.assets[0] as MediaAssetDto;
+      (
+        await mech.agent
+          .post(`/api/jobs/${jobId}/media`)
+          .field('phase', phase)
+          .field('area', 'drivetrain')
+          .attach('files', await checkerboard(), `${phase}.jpg`)
+          .expect(201)
+      ).body.assets[0] as MediaAssetDto;
     const before = await up('before');
     const after = await up('after');
     await settled(t);
     await mech.agent.put(`/api/annotations/${before.id}`).send({ baseVersion: 0, document: blurDoc() }).expect(200);
-    const pair = (await mech.agent.post(`/api/jobs/${jobId}/pairs`).send({ beforeAssetId: before.id, afterAssetId: after.id, caption: 'Chain cleaned on the Testwerk Bench One', crop }).expect(201)).body as ShotPairDto;
+    const pair = (
+      await mech.agent
+        .post(`/api/jobs/${jobId}/pairs`)
+        .send({ beforeAssetId: before.id, afterAssetId: after.id, caption: 'Chain cleaned on the Testwerk Bench One', crop })
+        .expect(201)
+    ).body as ShotPairDto;
     return { jobId, pairId: pair.id, before };
   }
 
@@ -74,7 +86,20 @@ describe('showcase: consent on the server, clean exports', () => {
 
     // A consent under a wording that never mentioned marketing photos does not cover the showcase.
     const db = t.app.get<Db>(DB);
-    db.insert(consents).values({ shopId: 1, jobId, granted: true, nameMakeModel: false, wordingVersion: 'service-updates-v0', method: 'in_person', givenByName: 'x', recordedBy: null, ownerLinkId: null, at: new Date() }).run();
+    db.insert(consents)
+      .values({
+        shopId: 1,
+        jobId,
+        granted: true,
+        nameMakeModel: false,
+        wordingVersion: 'service-updates-v0',
+        method: 'in_person',
+        givenByName: 'x',
+        recordedBy: null,
+        ownerLinkId: null,
+        at: new Date(),
+      })
+      .run();
     expect(await listed()).toBe(false);
     expect((await exportOf(pairId, 'size=square').expect(409)).body.toString()).toContain('NO_CONSENT');
 
@@ -104,11 +129,23 @@ describe('showcase: consent on the server, clean exports', () => {
     for (const [q, w, h] of cases) {
       const img = (await exportOf(pairId, q).expect(200).expect('content-type', 'image/jpeg')).body as Buffer;
       const meta = await sharp(img).metadata();
-      expect({ q, w: meta.width, h: meta.height, exif: meta.exif, icc: meta.icc, xmp: meta.xmp, iptc: meta.iptc }).toEqual({ q, w, h, exif: undefined, icc: undefined, xmp: undefined, iptc: undefined });
+      expect({ q, w: meta.width, h: meta.height, exif: meta.exif, icc: meta.icc, xmp: meta.xmp, iptc: meta.iptc }).toEqual({
+        q,
+        w,
+        h,
+        exif: undefined,
+        icc: undefined,
+        xmp: undefined,
+        iptc: undefined,
+      });
       expect(await exifrAll(img)).toBeUndefined();
       expect(exiftoolGroups(img)).toEqual([]);
     }
-    const downloads = (await mgr.agent.get(`/api/showcase/jobs/${seeded[0].jobId}/downloads`).expect(200)).body as { pairId: number; bytes: number; size: string }[];
+    const downloads = (await mgr.agent.get(`/api/showcase/jobs/${seeded[0].jobId}/downloads`).expect(200)).body as {
+      pairId: number;
+      bytes: number;
+      size: string;
+    }[];
     expect(downloads.filter((d) => d.pairId === pairId)).toHaveLength(cases.length);
     expect(downloads.every((d) => d.bytes > 1000)).toBe(true);
   });
@@ -119,7 +156,10 @@ describe('showcase: consent on the server, clean exports', () => {
     const { jobId, pairId } = await blurredPair(crop);
     await setConsent(mgr, jobId, true);
     const out = (await exportOf(pairId, 'variant=before&size=banner').expect(200)).body as Buffer;
-    const reference = await sharp(await checkerboard()).extract({ left: 0, top: 300, width: W, height: H / 2 }).resize(1600, 600).toBuffer();
+    const reference = await sharp(await checkerboard())
+      .extract({ left: 0, top: 300, width: W, height: H / 2 })
+      .resize(1600, 600)
+      .toBuffer();
     const inBox = (x: number, y: number) => x >= BOX.x0 * 2 + 8 && x < BOX.x1 * 2 - 8 && y >= (BOX.y0 - 300) * 2 + 8 && y < (BOX.y1 - 300) * 2 - 8;
     const clear = (x: number, y: number) => !(x >= BOX.x0 * 2 - 40 && x < BOX.x1 * 2 + 40 && y < (BOX.y1 - 300) * 2 + 40) && !(x > 1100 && y > 520);
     const inside = await meanAbsDiff(out, reference, 1600, 600, inBox);
@@ -137,7 +177,10 @@ describe('showcase: consent on the server, clean exports', () => {
     await setConsent(mgr, jobId, false);
     const res = await mgr.agent.get(`/api/showcase/items/${pairId}/export?size=square`).expect(409);
     expect(res.body).toMatchObject({ code: 'CONSENT_REVOKED' });
-    await mgr.agent.post('/api/showcase/zip').send({ items: [{ pairId }] }).expect(409);
+    await mgr.agent
+      .post('/api/showcase/zip')
+      .send({ items: [{ pairId }] })
+      .expect(409);
 
     await setConsent(mgr, jobId, true);
     const many = Array.from({ length: 20 }, () => ({ pairId, size: 'banner' }));
@@ -154,13 +197,26 @@ describe('showcase: consent on the server, clean exports', () => {
   });
 
   it('a zip of 50 exports streams: bytes flow before the last file is made, and memory stays bounded', { timeout: 180_000 }, async () => {
-    const selection = Array.from({ length: 50 }, (_, i) => ({ pairId: seeded[i % seeded.length].pairId, size: (['square', 'portrait', 'banner'] as const)[i % 3] }));
+    const selection = Array.from({ length: 50 }, (_, i) => ({
+      pairId: seeded[i % seeded.length].pairId,
+      size: (['square', 'portrait', 'banner'] as const)[i % 3],
+    }));
     // A real socket (supertest would buffer): sign in over fetch and keep the session cookie and CSRF token.
     const server: Server = t.app.getHttpServer();
     if (!server.listening) await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
     const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-    const login = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: DEMO.manager, password: DEMO_PASSWORD }) });
-    const session = { cookie: login.headers.getSetCookie().map((c) => c.split(';')[0]).join('; '), 'x-csrf-token': ((await login.json()) as { csrfToken: string }).csrfToken };
+    const login = await fetch(`${base}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: DEMO.manager, password: DEMO_PASSWORD }),
+    });
+    const session = {
+      cookie: login.headers
+        .getSetCookie()
+        .map((c) => c.split(';')[0])
+        .join('; '),
+      'x-csrf-token': ((await login.json()) as { csrfToken: string }).csrfToken,
+    };
     const path = join(mkdtempSync(join(tmpdir(), 'showcase-zip-')), 'out.zip');
     const db = t.app.get<Db>(DB);
     const exportedSoFar = () => db.select({ id: auditEvents.id }).from(auditEvents).where(eq(auditEvents.action, 'showcase.exported')).all().length;
@@ -170,7 +226,11 @@ describe('showcase: consent on the server, clean exports', () => {
     let peak = rss0;
     const timer = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 10);
     let atFirstByte = -1;
-    const res = await fetch(`${base}/api/showcase/zip`, { method: 'POST', headers: { ...session, 'content-type': 'application/json' }, body: JSON.stringify({ items: selection }) });
+    const res = await fetch(`${base}/api/showcase/zip`, {
+      method: 'POST',
+      headers: { ...session, 'content-type': 'application/json' },
+      body: JSON.stringify({ items: selection }),
+    });
     expect(res.status).toBe(200);
     const file = createWriteStream(path);
     for await (const c of Readable.fromWeb(res.body as never)) {
@@ -181,7 +241,9 @@ describe('showcase: consent on the server, clean exports', () => {
     clearInterval(timer);
     const zipBytes = statSync(path).size;
     const growthMb = (peak - rss0) / 2 ** 20;
-    console.info(`zip of 50 exports: ${(zipBytes / 2 ** 20).toFixed(1)} MiB streamed; first bytes after ${atFirstByte} of 50 files; peak RSS growth ${growthMb.toFixed(1)} MiB`);
+    console.info(
+      `zip of 50 exports: ${(zipBytes / 2 ** 20).toFixed(1)} MiB streamed; first bytes after ${atFirstByte} of 50 files; peak RSS growth ${growthMb.toFixed(1)} MiB`,
+    );
     expect(atFirstByte).toBeLessThan(50);
     const names = await new Promise<string[]>((resolve, reject) =>
       yauzl.open(path, { lazyEntries: false }, (err, zip) => {

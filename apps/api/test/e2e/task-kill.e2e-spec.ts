@@ -47,8 +47,15 @@ describe('a server killed with SIGKILL during a derivative task', () => {
   async function boot(): Promise<ChildProcess> {
     const env = {
       ...process.env,
-      PORT: String(port), DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: uploads, WEB_DIST: join(dir, 'no-web'),
-      LOGIN_THROTTLE_LIMIT: '1000', MAIL_CATCHER: 'false', LOG_LEVEL: 'warn', TASK_LEASE_MS: '1500', TASK_POLL_MS: '200',
+      PORT: String(port),
+      DATABASE_PATH: join(dir, 'db.sqlite'),
+      UPLOADS_DIR: uploads,
+      WEB_DIST: join(dir, 'no-web'),
+      LOGIN_THROTTLE_LIMIT: '1000',
+      MAIL_CATCHER: 'false',
+      LOG_LEVEL: 'warn',
+      TASK_LEASE_MS: '1500',
+      TASK_POLL_MS: '200',
     };
     const proc = spawn(process.execPath, [ENTRY], { env, stdio: ['ignore', 'pipe', 'pipe'] });
     proc.stdout?.on('data', (d) => (output += String(d)));
@@ -87,7 +94,9 @@ describe('a server killed with SIGKILL during a derivative task', () => {
     port = await freePort();
     child = await boot();
     // Let the demo seed's own derivative tasks finish first.
-    await until('seed derivatives', () => (query<{ n: number }>("select count(*) n from tasks where kind = 'media.derivatives' and status in ('queued','running')")[0].n === 0 ? true : undefined));
+    await until('seed derivatives', () =>
+      query<{ n: number }>("select count(*) n from tasks where kind = 'media.derivatives' and status in ('queued','running')")[0].n === 0 ? true : undefined,
+    );
 
     const agent = request.agent(base());
     const login = await agent.post('/api/auth/login').send({ email: DEMO.mechanic, password: 'bench-demo-2026' }).expect(200);
@@ -97,11 +106,21 @@ describe('a server killed with SIGKILL during a derivative task', () => {
     desk.set('x-csrf-token', deskLogin.body.csrfToken as string);
     const job = await bookIn({ agent: desk, csrf: deskLogin.body.csrfToken as string, user: deskLogin.body.user });
     // A 35-megapixel noisy photo: slow enough to resize that the task is caught running.
-    const photo = await sharp({ create: { width: 7000, height: 5000, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 40 } } }).jpeg({ quality: 70 }).toBuffer();
-    const asset = (await agent.post(`/api/jobs/${job.id}/media`).field('phase', 'before').field('area', 'frame_fork').attach('files', photo, 'big.jpg').expect(201)).body.assets[0] as { id: number };
+    const photo = await sharp({ create: { width: 7000, height: 5000, channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 40 } } })
+      .jpeg({ quality: 70 })
+      .toBuffer();
+    const asset = (
+      await agent.post(`/api/jobs/${job.id}/media`).field('phase', 'before').field('area', 'frame_fork').attach('files', photo, 'big.jpg').expect(201)
+    ).body.assets[0] as { id: number };
 
     const key = String(asset.id);
-    await until('the task to run', () => (query<{ status: string }>("select status from tasks where kind = 'media.derivatives' and key = ?", key)[0]?.status === 'running' ? true : undefined), 60_000, 5);
+    await until(
+      'the task to run',
+      () =>
+        query<{ status: string }>("select status from tasks where kind = 'media.derivatives' and key = ?", key)[0]?.status === 'running' ? true : undefined,
+      60_000,
+      5,
+    );
     child.kill('SIGKILL');
     await new Promise((r) => child?.once('exit', r));
     const [killed] = query<{ status: string; attempts: number }>("select status, attempts from tasks where kind = 'media.derivatives' and key = ?", key);
@@ -109,16 +128,30 @@ describe('a server killed with SIGKILL during a derivative task', () => {
     expect(query<{ s: string }>('select derivative_status s from media_assets where id = ?', asset.id)[0].s).toBe('pending');
 
     child = await boot();
-    await until('the asset to be ready', () => (query<{ s: string }>('select derivative_status s from media_assets where id = ?', asset.id)[0].s === 'ready' ? true : undefined));
+    await until('the asset to be ready', () =>
+      query<{ s: string }>('select derivative_status s from media_assets where id = ?', asset.id)[0].s === 'ready' ? true : undefined,
+    );
     const [task] = query<{ status: string; attempts: number }>("select status, attempts from tasks where kind = 'media.derivatives' and key = ?", key);
     expect(task).toEqual({ status: 'done', attempts: 2 });
 
-    const rows = query<{ variant: string; key: string; sha256: string }>('select variant, key, sha256 from media_derivatives where asset_id = ? order by variant', asset.id);
+    const rows = query<{ variant: string; key: string; sha256: string }>(
+      'select variant, key, sha256 from media_derivatives where asset_id = ? order by variant',
+      asset.id,
+    );
     expect(rows.map((r) => r.variant)).toEqual(['print', 'screen', 'thumb']);
     const shopDir = join(uploads, 'derivatives', rows[0].key.split('/')[1]);
-    expect(readdirSync(shopDir).filter((f) => f.startsWith(`${asset.id}-`)).sort()).toEqual([`${asset.id}-print.jpg`, `${asset.id}-screen.jpg`, `${asset.id}-thumb.jpg`]);
+    expect(
+      readdirSync(shopDir)
+        .filter((f) => f.startsWith(`${asset.id}-`))
+        .sort(),
+    ).toEqual([`${asset.id}-print.jpg`, `${asset.id}-screen.jpg`, `${asset.id}-thumb.jpg`]);
     expect(filesUnder(uploads).filter((f) => f.endsWith('.partial'))).toEqual([]);
-    for (const r of rows) expect(createHash('sha256').update(readFileSync(join(uploads, r.key))).digest('hex')).toBe(r.sha256);
+    for (const r of rows)
+      expect(
+        createHash('sha256')
+          .update(readFileSync(join(uploads, r.key)))
+          .digest('hex'),
+      ).toBe(r.sha256);
     const screen = await agent.get(`/api/media/${asset.id}/screen`).expect(200);
     expect(screen.headers['content-type']).toBe('image/jpeg');
   }

@@ -9,7 +9,10 @@ describe('users admin and shop isolation', () => {
 
   it('lets a manager add a user who can then sign in', async () => {
     const { agent } = await t.signIn(DEMO.manager);
-    const res = await agent.post('/api/users').send({ name: 'Wren Talbot', email: 'wren@lantern-spoke.test', role: 'mechanic', password: 'a-long-password' }).expect(201);
+    const res = await agent
+      .post('/api/users')
+      .send({ name: 'Wren Talbot', email: 'wren@lantern-spoke.test', role: 'mechanic', password: 'a-long-password' })
+      .expect(201);
     expect(res.body).toMatchObject({ name: 'Wren Talbot', role: 'mechanic', active: true });
     expect(res.body.passwordHash).toBeUndefined();
     await t.http().post('/api/auth/login').send({ email: 'wren@lantern-spoke.test', password: 'a-long-password' }).expect(200);

@@ -19,17 +19,26 @@ async function lintProbe(filePath: string, code: string): Promise<string[]> {
 // The first lint loads the whole config and resolver, which takes seconds on a shared machine.
 describe('import boundaries hold on resolved paths (STYLE.md dependency rules)', { timeout: 60_000 }, () => {
   it('refuses a web feature importing another feature through a deep relative path', async () => {
-    const messages = await lintProbe('apps/web/src/features/jobs/components/probe.tsx', "import { CustomerForm } from '../../../features/customers/components/customer-form';\nexport const x = CustomerForm;\n");
+    const messages = await lintProbe(
+      'apps/web/src/features/jobs/components/probe.tsx',
+      "import { CustomerForm } from '../../../features/customers/components/customer-form';\nexport const x = CustomerForm;\n",
+    );
     expect(messages).toEqual([expect.stringMatching(/No cross-feature imports/)]);
   });
 
   it('refuses it even when the path takes a detour through app/', async () => {
-    const messages = await lintProbe('apps/web/src/features/jobs/components/probe.tsx', "import * as c from '../../../app/../features/customers';\nexport const x = c;\n");
+    const messages = await lintProbe(
+      'apps/web/src/features/jobs/components/probe.tsx',
+      "import * as c from '../../../app/../features/customers';\nexport const x = c;\n",
+    );
     expect(messages).toEqual([expect.stringMatching(/No cross-feature imports/)]);
   });
 
   it("refuses an api feature reaching past another feature's index.ts, but allows the index", async () => {
-    const deep = await lintProbe('apps/api/src/jobs/probe.ts', "import { CustomersRepository } from '../customers/customers.repository';\nexport const x = CustomersRepository;\n");
+    const deep = await lintProbe(
+      'apps/api/src/jobs/probe.ts',
+      "import { CustomersRepository } from '../customers/customers.repository';\nexport const x = CustomersRepository;\n",
+    );
     expect(deep).toEqual([expect.stringMatching(/only through its index\.ts/)]);
     const viaIndex = await lintProbe('apps/api/src/jobs/probe.ts', "import { CustomersService } from '../customers';\nexport const x = CustomersService;\n");
     expect(viaIndex).toEqual([]);

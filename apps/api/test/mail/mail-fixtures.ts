@@ -25,7 +25,13 @@ export class FakeReportFiles implements ReportFiles {
     const r = this.reports.get(reportId);
     if (!r || r.shopId !== shopId) return Promise.resolve(null);
     return Promise.resolve({
-      reportId, jobId: r.jobId, version: 1, filename: `bench-report-${reportId}.pdf`, sha256: sha256(r.bytes), size: r.bytes.length, link: r.link,
+      reportId,
+      jobId: r.jobId,
+      version: 1,
+      filename: `bench-report-${reportId}.pdf`,
+      sha256: sha256(r.bytes),
+      size: r.bytes.length,
+      link: r.link,
       open: () => Readable.from([r.bytes]),
     });
   }
@@ -51,10 +57,11 @@ export async function blackHole(port: number): Promise<{ close: () => Promise<vo
   });
   await new Promise<void>((ok) => srv.listen(port, '127.0.0.1', () => ok()));
   return {
-    close: () => new Promise<void>((ok) => {
-      sockets.forEach((s) => s.destroy());
-      srv.close(() => ok());
-    }),
+    close: () =>
+      new Promise<void>((ok) => {
+        sockets.forEach((s) => s.destroy());
+        srv.close(() => ok());
+      }),
   };
 }
 

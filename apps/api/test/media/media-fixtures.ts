@@ -8,27 +8,25 @@ import { DEMO, type TestApp } from '../test-app';
 /** Books a fresh job in the first demo shop through the public API, as the desk would (new customer, new bike). */
 export async function bookJob(t: TestApp): Promise<number> {
   const { agent } = await t.signIn(DEMO.desk);
-  const res = await agent
-    .post('/api/jobs')
-    .send({
-      newCustomer: { name: 'Media Test Owner', email: 'owner@media.test', phone: null, preferredChannel: 'email', notes: null },
-      newBike: {
-        maker: 'Testwerk',
-        model: 'Bench One',
-        year: 2020,
-        frameMaterial: FRAME_MATERIALS[0],
-        size: null,
-        colour: null,
-        serialNumber: null,
-        drivetrainSpeeds: 11,
-        brakeType: BRAKE_TYPES[0],
-        cableRouting: CABLE_ROUTINGS[0],
-        dropoutType: DROPOUT_TYPES[0],
-        tyreSize: null,
-      },
-      reportedSymptoms: 'Creaks under load',
-      promisedOn: '2030-01-15',
-    });
+  const res = await agent.post('/api/jobs').send({
+    newCustomer: { name: 'Media Test Owner', email: 'owner@media.test', phone: null, preferredChannel: 'email', notes: null },
+    newBike: {
+      maker: 'Testwerk',
+      model: 'Bench One',
+      year: 2020,
+      frameMaterial: FRAME_MATERIALS[0],
+      size: null,
+      colour: null,
+      serialNumber: null,
+      drivetrainSpeeds: 11,
+      brakeType: BRAKE_TYPES[0],
+      cableRouting: CABLE_ROUTINGS[0],
+      dropoutType: DROPOUT_TYPES[0],
+      tyreSize: null,
+    },
+    reportedSymptoms: 'Creaks under load',
+    promisedOn: '2030-01-15',
+  });
   if (res.status !== 201) throw new Error(`Booking a job failed: ${res.status} ${JSON.stringify(res.body)}`);
   return (res.body as { id: number }).id;
 }
@@ -52,7 +50,9 @@ export function filesUnder(dir: string): string[] {
 
 /** A plain JPEG of one colour. */
 export const solidJpeg = (w: number, h: number, colour = '#3a6ea5'): Promise<Buffer> =>
-  sharp({ create: { width: w, height: h, channels: 3, background: colour } }).jpeg().toBuffer();
+  sharp({ create: { width: w, height: h, channels: 3, background: colour } })
+    .jpeg()
+    .toBuffer();
 
 /** Reads the average colour of a small square around (x, y) of an image, as [r, g, b]. */
 export async function colourAt(img: Buffer, x: number, y: number, box = 6): Promise<[number, number, number]> {

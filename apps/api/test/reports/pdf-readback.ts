@@ -12,7 +12,10 @@ export async function pdfPages(pdf: Buffer): Promise<{ text: string; width: numb
   for (let i = 1; i <= doc.numPages; i++) {
     const page = await doc.getPage(i);
     const content = await page.getTextContent();
-    const text = content.items.map((it) => ('str' in it ? it.str : '')).join(' ').replace(/\s+/g, ' ');
+    const text = content.items
+      .map((it) => ('str' in it ? it.str : ''))
+      .join(' ')
+      .replace(/\s+/g, ' ');
     const [x0, y0, x1, y1] = page.view;
     pages.push({ text, width: x1 - x0, height: y1 - y0 });
   }
@@ -48,12 +51,24 @@ export function pdffonts(pdf: Buffer): { name: string; type: string; embedded: b
 /** poppler's pdfimages -all: every embedded image as stored, with its SHA-256 and pixel size (-list). */
 export function pdfimages(pdf: Buffer): { sha256: string; width: number; height: number; ext: string }[] {
   return withFile(pdf, (p, dir) => {
-    const list = execFileSync('pdfimages', ['-list', p], { encoding: 'utf8' }).split('\n').slice(2).filter((l) => l.trim());
+    const list = execFileSync('pdfimages', ['-list', p], { encoding: 'utf8' })
+      .split('\n')
+      .slice(2)
+      .filter((l) => l.trim());
     execFileSync('pdfimages', ['-all', p, join(dir, 'img')]);
-    const files = readdirSync(dir).filter((f) => f.startsWith('img-')).sort();
+    const files = readdirSync(dir)
+      .filter((f) => f.startsWith('img-'))
+      .sort();
     return files.map((f, i) => {
       const cols = list[i].trim().split(/\s+/);
-      return { sha256: createHash('sha256').update(readFileSync(join(dir, f))).digest('hex'), width: Number(cols[3]), height: Number(cols[4]), ext: f.split('.').pop() ?? '' };
+      return {
+        sha256: createHash('sha256')
+          .update(readFileSync(join(dir, f)))
+          .digest('hex'),
+        width: Number(cols[3]),
+        height: Number(cols[4]),
+        ext: f.split('.').pop() ?? '',
+      };
     });
   });
 }

@@ -48,31 +48,73 @@ function ok(res: { status: number; body: unknown }, what: string): unknown {
  */
 export async function jobWithRecords(t: TestApp, photos = 3) {
   const m = await t.signIn(DEMO.manager);
-  const job = (ok(
+  const job = ok(
     await m.agent.post('/api/jobs').send({
       newCustomer: { name: OWNER, email: 'zsofia@example.test', phone: null, preferredChannel: 'email', notes: null },
-      newBike: { maker: 'Quillon Works', model: 'Stratus 11', year: 2022, frameMaterial: 'aluminium', size: 'M', colour: 'Slate', serialNumber: 'QW-RPT-1', drivetrainSpeeds: 11, brakeType: 'hydraulic_disc', cableRouting: 'internal', dropoutType: 'vertical', tyreSize: '28-622' },
+      newBike: {
+        maker: 'Quillon Works',
+        model: 'Stratus 11',
+        year: 2022,
+        frameMaterial: 'aluminium',
+        size: 'M',
+        colour: 'Slate',
+        serialNumber: 'QW-RPT-1',
+        drivetrainSpeeds: 11,
+        brakeType: 'hydraulic_disc',
+        cableRouting: 'internal',
+        dropoutType: 'vertical',
+        tyreSize: '28-622',
+      },
       reportedSymptoms: 'Brakes feel weak; chain skips.',
       promisedOn: '2030-01-10',
     }),
     'book-in',
-  )) as { id: number; number: string };
+  ) as { id: number; number: string };
   const base = `/api/jobs/${job.id}`;
-  const brake = (ok(await m.agent.post(`${base}/findings`).send({ area: 'brakes', condition: 'unsafe', description: FINDINGS.brake }), 'finding')) as { id: number };
-  const chain = (ok(await m.agent.post(`${base}/findings`).send({ area: 'drivetrain', condition: 'worn', description: FINDINGS.chain }), 'finding')) as { id: number };
-  const brakeRec = (ok(await m.agent.post(`${base}/findings/${brake.id}/recommendation`).send({ summary: 'Bleed front brake and fit new pads', urgency: 'safety', parts: [{ description: 'Disc pads', qty: 1, unitPriceMinor: 1899 }], labourHundredths: 50 }), 'rec')) as { id: number };
-  const chainRec = (ok(await m.agent.post(`${base}/findings/${chain.id}/recommendation`).send({ summary: 'Replace chain', urgency: 'soon', parts: [{ description: 'Chain, 11-speed', qty: 1, unitPriceMinor: 3499 }], labourHundredths: 25 }), 'rec')) as { id: number };
+  const brake = ok(await m.agent.post(`${base}/findings`).send({ area: 'brakes', condition: 'unsafe', description: FINDINGS.brake }), 'finding') as {
+    id: number;
+  };
+  const chain = ok(await m.agent.post(`${base}/findings`).send({ area: 'drivetrain', condition: 'worn', description: FINDINGS.chain }), 'finding') as {
+    id: number;
+  };
+  const brakeRec = ok(
+    await m.agent
+      .post(`${base}/findings/${brake.id}/recommendation`)
+      .send({
+        summary: 'Bleed front brake and fit new pads',
+        urgency: 'safety',
+        parts: [{ description: 'Disc pads', qty: 1, unitPriceMinor: 1899 }],
+        labourHundredths: 50,
+      }),
+    'rec',
+  ) as { id: number };
+  const chainRec = ok(
+    await m.agent
+      .post(`${base}/findings/${chain.id}/recommendation`)
+      .send({ summary: 'Replace chain', urgency: 'soon', parts: [{ description: 'Chain, 11-speed', qty: 1, unitPriceMinor: 3499 }], labourHundredths: 25 }),
+    'rec',
+  ) as { id: number };
   ok(await m.agent.post(`${base}/recommendations/${brakeRec.id}/decision`).send({ status: 'declined', channel: 'phone', decidedByName: OWNER }), 'decline');
   ok(await m.agent.post(`${base}/recommendations/${chainRec.id}/decision`).send({ status: 'approved', channel: 'phone', decidedByName: OWNER }), 'approve');
   const shots: number[] = [];
-  for (let i = 0; i < photos; i++) shots.push(await upload(m, job.id, await photo(i + 1), { phase: 'before', area: i % 2 ? 'drivetrain' : 'brakes', caption: `Shot ${i + 1}` }));
+  for (let i = 0; i < photos; i++)
+    shots.push(await upload(m, job.id, await photo(i + 1), { phase: 'before', area: i % 2 ? 'drivetrain' : 'brakes', caption: `Shot ${i + 1}` }));
   const scope = await upload(m, job.id, await photo(99, 1280, 720), { phase: 'during', area: 'frame_fork', source: 'scope', caption: 'Down tube, inside' });
   const half = Math.ceil(shots.length / 2);
   ok(await m.agent.put(`${base}/findings/${brake.id}/media`).send({ assetIds: shots.slice(0, half) }), 'link');
   ok(await m.agent.put(`${base}/findings/${chain.id}/media`).send({ assetIds: shots.slice(half) }), 'link');
   ok(await m.agent.post(`${base}/work-entries`).send({ description: 'Fitted new 11-speed chain', partsUsed: 'Chain, 11-speed', minutes: 20 }), 'work');
   ok(
-    await m.agent.post(`${base}/torque-entries`).send({ fastener: 'Stem steerer clamp bolts', specified: { min: 5, max: null, unit: 'nm' }, applied: { value: 5, unit: 'nm' }, specSource: "Component maker's printed value", tool: 'Click wrench 2–24 N·m', toolCalibratedOn: '2025-06-01' }),
+    await m.agent
+      .post(`${base}/torque-entries`)
+      .send({
+        fastener: 'Stem steerer clamp bolts',
+        specified: { min: 5, max: null, unit: 'nm' },
+        applied: { value: 5, unit: 'nm' },
+        specSource: "Component maker's printed value",
+        tool: 'Click wrench 2–24 N·m',
+        toolCalibratedOn: '2025-06-01',
+      }),
     'torque',
   );
   await settled(t);

@@ -16,16 +16,26 @@ export const BOX = { x0: 400, y0: 300, x1: 560, y1: 420 };
 export function checkerboard(): Promise<Buffer> {
   const raw = Buffer.alloc(W * H * 3);
   for (let y = 0; y < H; y++) for (let x = 0; x < W; x++) raw.fill(((x >> 3) + (y >> 3)) % 2 ? 225 : 30, (y * W + x) * 3, (y * W + x) * 3 + 3);
-  return sharp(raw, { raw: { width: W, height: H, channels: 3 } }).jpeg({ quality: 95 }).withExif({ IFD0: { Make: 'Fixture camera', Artist: 'Someone' } }).toBuffer();
+  return sharp(raw, { raw: { width: W, height: H, channels: 3 } })
+    .jpeg({ quality: 95 })
+    .withExif({ IFD0: { Make: 'Fixture camera', Artist: 'Someone' } })
+    .toBuffer();
 }
 
 export const blurDoc = (): AnnotationDocumentDto => ({
   schemaVersion: 2,
   image: { width: W, height: H },
-  shapes: [{ colour: 'amber', width: 'medium', id: 'b1', kind: 'blur', topLeft: { x: BOX.x0 / W, y: BOX.y0 / H }, bottomRight: { x: BOX.x1 / W, y: BOX.y1 / H } }],
+  shapes: [
+    { colour: 'amber', width: 'medium', id: 'b1', kind: 'blur', topLeft: { x: BOX.x0 / W, y: BOX.y0 / H }, bottomRight: { x: BOX.x1 / W, y: BOX.y1 / H } },
+  ],
 });
 
-export const consentBody = (granted: boolean, nameMakeModel = false) => ({ granted, nameMakeModel, wordingVersion: CONSENT_WORDING.version, givenByName: 'Owner at the counter' });
+export const consentBody = (granted: boolean, nameMakeModel = false) => ({
+  granted,
+  nameMakeModel,
+  wordingVersion: CONSENT_WORDING.version,
+  givenByName: 'Owner at the counter',
+});
 
 export async function setConsent(staff: SignedIn, jobId: number, granted: boolean, nameMakeModel = false): Promise<void> {
   await staff.agent.post(`/api/jobs/${jobId}/consent`).send(consentBody(granted, nameMakeModel)).expect(201);

@@ -19,7 +19,16 @@ const reportFiles = {
     if (r.reportId !== reportId) return null;
     const bytes = readFileSync(r.pdf);
     const sha256 = createHash('sha256').update(bytes).digest('hex');
-    return { reportId, jobId: r.jobId, version: 1, filename: `bench-report-${reportId}.pdf`, sha256, size: bytes.length, link: null, open: () => Readable.from([bytes]) };
+    return {
+      reportId,
+      jobId: r.jobId,
+      version: 1,
+      filename: `bench-report-${reportId}.pdf`,
+      sha256,
+      size: bytes.length,
+      link: null,
+      open: () => Readable.from([bytes]),
+    };
   },
 };
 

@@ -20,7 +20,9 @@ const freePort = () =>
 async function waitForHealth(url: string, server: ChildProcess): Promise<void> {
   for (let i = 0; i < 150; i++) {
     if (server.exitCode !== null) throw new Error(`Server exited with ${server.exitCode}`);
-    const ok = await fetch(`${url}/api/health`).then((r) => r.ok).catch(() => false);
+    const ok = await fetch(`${url}/api/health`)
+      .then((r) => r.ok)
+      .catch(() => false);
     if (ok) return;
     await new Promise((r) => setTimeout(r, 200));
   }
@@ -33,7 +35,14 @@ export default async function setup(project: TestProject) {
   const port = await freePort();
   const server = spawn(process.execPath, [join(root, 'dist/apps/api/apps/api/src/main.js')], {
     cwd: root,
-    env: { ...process.env, PORT: String(port), DATABASE_PATH: join(dir, 'e2e.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), MAIL_CATCHER: 'false', LOGIN_THROTTLE_LIMIT: '1000' },
+    env: {
+      ...process.env,
+      PORT: String(port),
+      DATABASE_PATH: join(dir, 'e2e.sqlite'),
+      UPLOADS_DIR: join(dir, 'uploads'),
+      MAIL_CATCHER: 'false',
+      LOGIN_THROTTLE_LIMIT: '1000',
+    },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   const baseURL = `http://127.0.0.1:${port}`;

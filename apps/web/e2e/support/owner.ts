@@ -6,7 +6,9 @@ import { bookInByApi, MANAGER } from './records';
 
 /** An invented close-up: a row of chain rollers drawn as circles, as a JPEG. */
 const chainPhoto = (): Promise<Buffer> => {
-  const rollers = Array.from({ length: 9 }, (_, i) => `<circle cx="${60 + i * 95}" cy="300" r="34" fill="#6b6f75" stroke="#2b2d30" stroke-width="10"/>`).join('');
+  const rollers = Array.from({ length: 9 }, (_, i) => `<circle cx="${60 + i * 95}" cy="300" r="34" fill="#6b6f75" stroke="#2b2d30" stroke-width="10"/>`).join(
+    '',
+  );
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="960" height="600"><rect width="960" height="600" fill="#c9c2b4"/><rect x="20" y="262" width="920" height="76" rx="38" fill="#3c3f44"/>${rollers}</svg>`;
   return sharp(Buffer.from(svg)).jpeg({ quality: 85 }).toBuffer();
 };
@@ -36,10 +38,26 @@ export async function ownerJobByApi(): Promise<OwnerJob> {
     return (await res.json()) as T;
   };
   await call('post', '/transitions', { to: 'on_stand' });
-  const chain = await call<{ id: number }>('post', '/findings', { area: 'drivetrain', condition: 'worn', description: 'The chain has stretched past its limit; it is starting to wear the cogs.' });
-  const pads = await call<{ id: number }>('post', '/findings', { area: 'brakes', condition: 'unsafe', description: 'The rear brake pads are worn down to the metal backing.' });
-  await call('post', `/findings/${chain.id}/recommendation`, { summary: 'Fit a new chain', parts: [{ description: 'Chain', qty: 1, unitPriceMinor: 3500 }], labourHundredths: 25 });
-  await call('post', `/findings/${pads.id}/recommendation`, { summary: 'Fit new rear brake pads', parts: [{ description: 'Brake pads', qty: 1, unitPriceMinor: 2200 }], labourHundredths: 30 });
+  const chain = await call<{ id: number }>('post', '/findings', {
+    area: 'drivetrain',
+    condition: 'worn',
+    description: 'The chain has stretched past its limit; it is starting to wear the cogs.',
+  });
+  const pads = await call<{ id: number }>('post', '/findings', {
+    area: 'brakes',
+    condition: 'unsafe',
+    description: 'The rear brake pads are worn down to the metal backing.',
+  });
+  await call('post', `/findings/${chain.id}/recommendation`, {
+    summary: 'Fit a new chain',
+    parts: [{ description: 'Chain', qty: 1, unitPriceMinor: 3500 }],
+    labourHundredths: 25,
+  });
+  await call('post', `/findings/${pads.id}/recommendation`, {
+    summary: 'Fit new rear brake pads',
+    parts: [{ description: 'Brake pads', qty: 1, unitPriceMinor: 2200 }],
+    labourHundredths: 30,
+  });
   const upload = await req.post(`/api/jobs/${job.id}/media`, {
     headers,
     multipart: { phase: 'before', area: 'drivetrain', files: { name: 'chain.jpg', mimeType: 'image/jpeg', buffer: await chainPhoto() } },

@@ -28,7 +28,10 @@ export async function pickDay(page: Page, fieldLabel: RegExp, ariaLabel: string)
 
 /** The job page's header card (job number, status badge, owner, moves). */
 export function jobHeader(page: Page): Locator {
-  return page.locator('.mantine-Paper-root').filter({ has: page.getByText(/^Job J-\d{4}-\d{4}$/) }).first();
+  return page
+    .locator('.mantine-Paper-root')
+    .filter({ has: page.getByText(/^Job J-\d{4}-\d{4}$/) })
+    .first();
 }
 
 /** Waits until the header's status badge reads `label`. */
@@ -60,7 +63,20 @@ export async function bookInByApi(symptoms: string): Promise<{ id: number; numbe
     headers: { 'x-csrf-token': csrfToken },
     data: {
       newCustomer: { name: 'Wren Halloway', email: 'wren.halloway@example.test', phone: null, preferredChannel: 'email', notes: null },
-      newBike: { maker: 'Pellbrook', model: 'Drift 10', year: 2019, frameMaterial: 'steel', size: null, colour: null, serialNumber: null, drivetrainSpeeds: 10, brakeType: 'rim', cableRouting: 'external', dropoutType: 'horizontal', tyreSize: null },
+      newBike: {
+        maker: 'Pellbrook',
+        model: 'Drift 10',
+        year: 2019,
+        frameMaterial: 'steel',
+        size: null,
+        colour: null,
+        serialNumber: null,
+        drivetrainSpeeds: 10,
+        brakeType: 'rim',
+        cableRouting: 'external',
+        dropoutType: 'horizontal',
+        tyreSize: null,
+      },
       reportedSymptoms: symptoms,
       promisedOn: dayFromToday(5).iso,
     },

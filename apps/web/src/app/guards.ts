@@ -15,12 +15,10 @@ export async function requireSession({ request }: LoaderFunctionArgs) {
 }
 
 /** Loader for pages limited by ACCESS_POLICY; roles that may not do `action` are sent to the jobs page. */
-export const requireAction =
-  (action: Action) =>
-  async (args: LoaderFunctionArgs) => {
-    // Child loaders run alongside the parent's, so this one must send a visitor to sign-in too.
-    await requireSession(args);
-    const user = await queryClient.ensureQueryData(sessionQuery);
-    if (!user || !roleCan(user.role, action)) throw redirect('/jobs');
-    return null;
-  };
+export const requireAction = (action: Action) => async (args: LoaderFunctionArgs) => {
+  // Child loaders run alongside the parent's, so this one must send a visitor to sign-in too.
+  await requireSession(args);
+  const user = await queryClient.ensureQueryData(sessionQuery);
+  if (!user || !roleCan(user.role, action)) throw redirect('/jobs');
+  return null;
+};

@@ -10,7 +10,9 @@ import { JOB_CLOSED_MESSAGE } from '../lib/form';
 export function FrozenNotice({ canCorrect }: { canCorrect: boolean }) {
   return (
     <Alert color="gray" variant="light" icon={<IconLock />} title="Records frozen" mb="md" role="status">
-      {canCorrect ? 'This job was handed over; its records are frozen for everyone else. You can still correct them — every change you make is recorded.' : JOB_CLOSED_MESSAGE}
+      {canCorrect
+        ? 'This job was handed over; its records are frozen for everyone else. You can still correct them — every change you make is recorded.'
+        : JOB_CLOSED_MESSAGE}
     </Alert>
   );
 }

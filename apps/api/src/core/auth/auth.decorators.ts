@@ -8,8 +8,7 @@ export const IS_PUBLIC = 'benchproof:public';
 export const ACTION = 'benchproof:action';
 
 /** Lets a route answer without a session; marked `x-public` in the OpenAPI document too. */
-export const Public = (): MethodDecorator & ClassDecorator =>
-  applyDecorators(SetMetadata(IS_PUBLIC, true), ApiExtension('x-public', true));
+export const Public = (): MethodDecorator & ClassDecorator => applyDecorators(SetMetadata(IS_PUBLIC, true), ApiExtension('x-public', true));
 
 /**
  * Names the policy action a route performs (ACCESS_POLICY in libs/contracts). The

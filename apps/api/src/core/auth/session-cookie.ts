@@ -12,5 +12,4 @@ export const sessionCookieOptions = (secure: boolean, maxAgeMs: number): CookieO
   maxAge: maxAgeMs,
 });
 
-export const sessionFromCookie = (req: Request): string | null =>
-  (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE] ?? null;
+export const sessionFromCookie = (req: Request): string | null => (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE] ?? null;

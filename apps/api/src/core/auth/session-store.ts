@@ -20,7 +20,15 @@ export class SessionStore {
     @Inject(CLOCK) private readonly clock: Clock,
   ) {
     this.lookup = db
-      .select({ id: users.id, shopId: users.shopId, role: users.role, email: users.email, name: users.name, active: users.active, expiresAt: sessions.expiresAt })
+      .select({
+        id: users.id,
+        shopId: users.shopId,
+        role: users.role,
+        email: users.email,
+        name: users.name,
+        active: users.active,
+        expiresAt: sessions.expiresAt,
+      })
       .from(sessions)
       .innerJoin(users, eq(users.id, sessions.userId))
       .where(eq(sessions.id, sql.placeholder('sid')))
@@ -51,6 +59,9 @@ export class SessionStore {
 
   /** Ends every session of a user (deactivation, password change); scoped by shop like every write. */
   endAllOf(shopId: number, userId: number): void {
-    this.db.delete(sessions).where(and(eq(sessions.shopId, shopId), eq(sessions.userId, userId))).run();
+    this.db
+      .delete(sessions)
+      .where(and(eq(sessions.shopId, shopId), eq(sessions.userId, userId)))
+      .run();
   }
 }

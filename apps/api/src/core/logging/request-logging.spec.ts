@@ -25,11 +25,21 @@ async function logOf(send: (agent: request.Agent) => Promise<unknown>): Promise<
 describe('request logs (nestjs-pino options)', () => {
   it('logs request id, user, shop, route, status and duration, and no secrets', async () => {
     const [raw, ...rest] = await logOf((a) =>
-      a.get(`/api/owner/${OWNER_SECRET}?token=abc123&view=1`).set('Authorization', 'Bearer eyJhbGciOi.secret').set('Cookie', 'bp_session=eyJ.session').set('x-request-id', 'req-42'),
+      a
+        .get(`/api/owner/${OWNER_SECRET}?token=abc123&view=1`)
+        .set('Authorization', 'Bearer eyJhbGciOi.secret')
+        .set('Cookie', 'bp_session=eyJ.session')
+        .set('x-request-id', 'req-42'),
     );
     expect(rest).toEqual([]);
     const line = JSON.parse(raw) as Record<string, unknown>;
-    expect(line).toMatchObject({ userId: 7, shopId: 3, route: '/api/owner/:token', req: { id: 'req-42', method: 'GET', url: '/api/owner/[redacted]?token=%5Bredacted%5D&view=1' }, res: { statusCode: 200 } });
+    expect(line).toMatchObject({
+      userId: 7,
+      shopId: 3,
+      route: '/api/owner/:token',
+      req: { id: 'req-42', method: 'GET', url: '/api/owner/[redacted]?token=%5Bredacted%5D&view=1' },
+      res: { statusCode: 200 },
+    });
     expect(typeof line.responseTime).toBe('number');
     // Each field once (pino-http also asks for them when the request starts, before there is a user).
     expect(raw.match(/"userId"/g)).toHaveLength(1);

@@ -44,10 +44,15 @@ export function requestLogging(cfg: AppConfig): Params {
         const r = req as Req;
         return { userId: r.user?.id ?? null, shopId: r.user?.shopId ?? null, route: r.route?.path ?? null };
       },
-      customLogLevel: (_req: IncomingMessage, res: ServerResponse, err?: Error) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
+      customLogLevel: (_req: IncomingMessage, res: ServerResponse, err?: Error) =>
+        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       autoLogging: { ignore: (req: IncomingMessage) => req.url === '/api/health' || req.url === '/api/health/ready' },
       serializers: {
-        req: (req: { id: unknown; method: string; url: string; raw?: Req }) => ({ id: req.id, method: req.method, url: redactUrl(req.raw?.originalUrl ?? req.url) }),
+        req: (req: { id: unknown; method: string; url: string; raw?: Req }) => ({
+          id: req.id,
+          method: req.method,
+          url: redactUrl(req.raw?.originalUrl ?? req.url),
+        }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
       redact: {

@@ -13,12 +13,18 @@ export const annotationVersions = sqliteTable(
   'annotation_versions',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    assetId: integer('asset_id').notNull().references(() => mediaAssets.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    assetId: integer('asset_id')
+      .notNull()
+      .references(() => mediaAssets.id),
     version: integer('version').notNull(),
     document: text('document').notNull(),
     savedAt: timestamp('saved_at').notNull(),
-    savedBy: integer('saved_by').notNull().references(() => users.id),
+    savedBy: integer('saved_by')
+      .notNull()
+      .references(() => users.id),
   },
   (t) => [uniqueIndex('annotation_versions_asset_version_unique').on(t.assetId, t.version), index('annotation_versions_shop_idx').on(t.shopId)],
 );

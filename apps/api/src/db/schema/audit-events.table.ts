@@ -7,7 +7,9 @@ export const auditEvents = sqliteTable(
   'audit_events',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
     userId: integer('user_id').references(() => users.id),
     action: text('action').notNull(),
     entityType: text('entity_type').notNull(),

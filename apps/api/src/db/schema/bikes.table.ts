@@ -10,8 +10,12 @@ export const bikes = sqliteTable(
   'bikes',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    customerId: integer('customer_id').notNull().references(() => customers.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    customerId: integer('customer_id')
+      .notNull()
+      .references(() => customers.id),
     maker: text('maker').notNull(),
     model: text('model').notNull(),
     year: integer('year'),

@@ -11,8 +11,12 @@ export const checkpoints = sqliteTable(
   'checkpoints',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     area: text('area').$type<InspectionArea>().notNull(),
     key: text('key').notNull(),
     label: text('label').notNull(),

@@ -15,8 +15,12 @@ export const consents = sqliteTable(
   'consents',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     granted: integer('granted', { mode: 'boolean' }).notNull(),
     nameMakeModel: integer('name_make_model', { mode: 'boolean' }).notNull(),
     wordingVersion: text('wording_version').notNull(),

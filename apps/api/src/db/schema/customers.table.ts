@@ -9,7 +9,9 @@ export const customers = sqliteTable(
   'customers',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
     name: text('name').notNull(),
     /** '' when not given (the API shows null). */
     email: text('email').notNull().default(''),

@@ -16,9 +16,15 @@ export const decisions = sqliteTable(
   'decisions',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
-    recommendationId: integer('recommendation_id').notNull().references(() => recommendations.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
+    recommendationId: integer('recommendation_id')
+      .notNull()
+      .references(() => recommendations.id),
     status: text('status').$type<DecisionStatus>().notNull(),
     channel: text('channel').$type<DecisionChannel>().notNull(),
     decidedByName: text('decided_by_name').notNull(),

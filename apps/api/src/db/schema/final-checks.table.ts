@@ -9,9 +9,15 @@ export const finalChecks = sqliteTable(
   'final_checks',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
-    checkerId: integer('checker_id').notNull().references(() => users.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
+    checkerId: integer('checker_id')
+      .notNull()
+      .references(() => users.id),
     passed: integer('passed', { mode: 'boolean' }).notNull(),
     /** FINAL_CHECK_ITEMS (libs/domain) → passed. */
     items: text('items', { mode: 'json' }).$type<Record<string, boolean>>(),

@@ -6,8 +6,12 @@ import { mediaAssets } from './media-assets.table';
 export const findingMedia = sqliteTable(
   'finding_media',
   {
-    findingId: integer('finding_id').notNull().references(() => findings.id),
-    assetId: integer('asset_id').notNull().references(() => mediaAssets.id),
+    findingId: integer('finding_id')
+      .notNull()
+      .references(() => findings.id),
+    assetId: integer('asset_id')
+      .notNull()
+      .references(() => mediaAssets.id),
     position: integer('position').notNull(),
   },
   (t) => [primaryKey({ columns: [t.findingId, t.assetId] }), index('finding_media_asset_idx').on(t.assetId)],

@@ -12,8 +12,12 @@ export const findings = sqliteTable(
   'findings',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     checkpointId: integer('checkpoint_id').references(() => checkpoints.id),
     area: text('area').$type<InspectionArea>().notNull(),
     condition: text('condition').$type<Condition>().notNull(),

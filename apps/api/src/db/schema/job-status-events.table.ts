@@ -11,8 +11,12 @@ export const jobStatusEvents = sqliteTable(
   'job_status_events',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     fromStatus: text('from_status').$type<JobStatus>(),
     toStatus: text('to_status').$type<JobStatus>().notNull(),
     userId: integer('user_id').references(() => users.id),

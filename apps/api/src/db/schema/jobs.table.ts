@@ -12,10 +12,16 @@ export const jobs = sqliteTable(
   'jobs',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
     number: text('number').notNull(),
-    bikeId: integer('bike_id').notNull().references(() => bikes.id),
-    customerId: integer('customer_id').notNull().references(() => customers.id),
+    bikeId: integer('bike_id')
+      .notNull()
+      .references(() => bikes.id),
+    customerId: integer('customer_id')
+      .notNull()
+      .references(() => customers.id),
     status: text('status').$type<JobStatus>().notNull(),
     reportedSymptoms: text('reported_symptoms').notNull().default(''),
     /** Calendar day in the shop's terms, ISO "YYYY-MM-DD". */

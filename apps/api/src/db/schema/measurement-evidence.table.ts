@@ -10,9 +10,15 @@ import { shops } from './shops.table';
 export const measurementEvidence = sqliteTable(
   'measurement_evidence',
   {
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    measurementId: integer('measurement_id').notNull().references(() => measurements.id),
-    assetId: integer('asset_id').notNull().references(() => mediaAssets.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    measurementId: integer('measurement_id')
+      .notNull()
+      .references(() => measurements.id),
+    assetId: integer('asset_id')
+      .notNull()
+      .references(() => mediaAssets.id),
     annotationVersion: integer('annotation_version').notNull(),
   },
   (t) => [primaryKey({ columns: [t.measurementId, t.assetId] })],

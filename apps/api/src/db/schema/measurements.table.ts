@@ -16,8 +16,12 @@ export const measurements = sqliteTable(
   'measurements',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     checkpointId: integer('checkpoint_id').references(() => checkpoints.id),
     kind: text('kind').$type<MeasurementKind>().notNull(),
     input: text('input', { mode: 'json' }).$type<MeasurementInputDto>().notNull(),

@@ -16,8 +16,12 @@ export const mediaAssets = sqliteTable(
   'media_assets',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     kind: text('kind').$type<MediaKind>().notNull(),
     phase: text('phase').$type<MediaPhase>().notNull(),
     area: text('area').$type<MediaArea>().notNull(),
@@ -33,7 +37,9 @@ export const mediaAssets = sqliteTable(
     durationMs: integer('duration_ms'),
     capturedAt: timestamp('captured_at'),
     uploadedAt: timestamp('uploaded_at').notNull(),
-    uploadedBy: integer('uploaded_by').notNull().references(() => users.id),
+    uploadedBy: integer('uploaded_by')
+      .notNull()
+      .references(() => users.id),
     sourceAssetId: integer('source_asset_id').references((): AnySQLiteColumn => mediaAssets.id),
     timecodeMs: integer('timecode_ms'),
     derivativeStatus: text('derivative_status').$type<DerivativeStatus>().notNull(),
@@ -44,8 +50,5 @@ export const mediaAssets = sqliteTable(
     deletedBy: integer('deleted_by').references(() => users.id),
     purgedAt: timestamp('purged_at'),
   },
-  (t) => [
-    index('media_assets_shop_job_idx').on(t.shopId, t.jobId),
-    index('media_assets_status_idx').on(t.derivativeStatus),
-  ],
+  (t) => [index('media_assets_shop_job_idx').on(t.shopId, t.jobId), index('media_assets_status_idx').on(t.derivativeStatus)],
 );

@@ -9,7 +9,9 @@ export const mediaDerivatives = sqliteTable(
   'media_derivatives',
   {
     id: id(),
-    assetId: integer('asset_id').notNull().references(() => mediaAssets.id),
+    assetId: integer('asset_id')
+      .notNull()
+      .references(() => mediaAssets.id),
     variant: text('variant').$type<MediaVariant>().notNull(),
     key: text('key').notNull(),
     width: integer('width').notNull(),

@@ -20,7 +20,9 @@ export const outboxMessages = sqliteTable(
   'outbox_messages',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
     jobId: integer('job_id').references(() => jobs.id),
     /** What the message is about, e.g. 'report_ready', 'estimate_decision'. */
     kind: text('kind').notNull(),

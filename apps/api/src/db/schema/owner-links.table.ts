@@ -13,10 +13,16 @@ export const ownerLinks = sqliteTable(
   'owner_links',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     tokenHash: text('token_hash').notNull(),
-    createdBy: integer('created_by').notNull().references(() => users.id),
+    createdBy: integer('created_by')
+      .notNull()
+      .references(() => users.id),
     createdAt: timestamp('created_at').notNull(),
     expiresAt: timestamp('expires_at').notNull(),
     revokedAt: timestamp('revoked_at'),

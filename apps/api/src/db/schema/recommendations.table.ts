@@ -25,9 +25,15 @@ export const recommendations = sqliteTable(
   'recommendations',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
-    findingId: integer('finding_id').notNull().references(() => findings.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
+    findingId: integer('finding_id')
+      .notNull()
+      .references(() => findings.id),
     summary: text('summary').notNull(),
     /** Set by the mechanic; null on rows written before urgency existed (read as the finding condition's default). */
     urgency: text('urgency').$type<Urgency>(),

@@ -14,8 +14,12 @@ export const reports = sqliteTable(
   'reports',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     kind: text('kind', { enum: ['draft', 'issued'] }).notNull(),
     version: integer('version'),
     state: text('state', { enum: ['rendering', 'ready', 'failed'] }).notNull(),

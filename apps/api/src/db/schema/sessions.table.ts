@@ -11,8 +11,12 @@ export const sessions = sqliteTable(
   'sessions',
   {
     id: text('id').primaryKey(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    userId: integer('user_id').notNull().references(() => users.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    userId: integer('user_id')
+      .notNull()
+      .references(() => users.id),
     createdAt: timestamp('created_at').notNull(),
     expiresAt: timestamp('expires_at').notNull(),
   },

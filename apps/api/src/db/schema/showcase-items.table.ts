@@ -8,8 +8,12 @@ export const showcaseItems = sqliteTable(
   'showcase_items',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    pairId: integer('pair_id').notNull().references(() => shotPairs.id, { onDelete: 'cascade' }),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    pairId: integer('pair_id')
+      .notNull()
+      .references(() => shotPairs.id, { onDelete: 'cascade' }),
     favourite: integer('favourite', { mode: 'boolean' }).notNull().default(false),
     /** null until edited: the drafted caption is shown instead. */
     caption: text('caption'),

@@ -17,7 +17,9 @@ export const tasks = sqliteTable(
     kind: text('kind').notNull(),
     key: text('key').notNull(),
     payload: text('payload', { mode: 'json' }).$type<Record<string, unknown>>().notNull(),
-    status: text('status', { enum: ['queued', 'running', 'done', 'failed'] }).notNull().default('queued'),
+    status: text('status', { enum: ['queued', 'running', 'done', 'failed'] })
+      .notNull()
+      .default('queued'),
     attempts: integer('attempts').notNull().default(0),
     lastError: text('last_error'),
     progress: real('progress').notNull().default(0),

@@ -15,8 +15,12 @@ export const torqueEntries = sqliteTable(
   'torque_entries',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     fastener: text('fastener').notNull(),
     input: text('input', { mode: 'json' }).$type<StoredTorqueInput>().notNull(),
     result: text('result', { mode: 'json' }).$type<TorqueVerdict>().notNull(),

@@ -8,7 +8,9 @@ export const users = sqliteTable(
   'users',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
     email: text('email').notNull(),
     name: text('name').notNull(),
     role: text('role').$type<Role>().notNull(),

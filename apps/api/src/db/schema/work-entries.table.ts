@@ -9,8 +9,12 @@ export const workEntries = sqliteTable(
   'work_entries',
   {
     id: id(),
-    shopId: integer('shop_id').notNull().references(() => shops.id),
-    jobId: integer('job_id').notNull().references(() => jobs.id),
+    shopId: integer('shop_id')
+      .notNull()
+      .references(() => shops.id),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id),
     description: text('description').notNull(),
     partsUsed: text('parts_used').notNull().default(''),
     minutes: integer('minutes').notNull(),

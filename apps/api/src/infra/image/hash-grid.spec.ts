@@ -22,7 +22,9 @@ async function blockImage(seed: number, transform: (v: number, bx: number, by: n
       px[y * 256 + x] = Math.max(0, Math.min(255, Math.round(transform(blocks[by * 32 + bx], bx, by))));
     }
   }
-  return sharp(px, { raw: { width: 256, height: 256, channels: 1 } }).png().toBuffer();
+  return sharp(px, { raw: { width: 256, height: 256, channels: 1 } })
+    .png()
+    .toBuffer();
 }
 
 /** sharp-phash returns 64 '0'/'1' characters in the same bit order; as hex for comparison. */
@@ -45,7 +47,10 @@ describe('pHash of the adapter grid vs the npm reference sharp-phash 2.2.0 (CHEC
   it('+10 % brightness keeps the hash (distance ≤ 2); a mirror image moves it far (CHECKS.md B.9: 51/64 with sharp-phash)', async () => {
     const base = perceptualHash(await adapter.hashGrid(await blockImage(9, (v) => v * 0.8)));
     const brighter = perceptualHash(await adapter.hashGrid(await blockImage(9, (v) => v * 0.8 * 1.1)));
-    const mirrored = await sharp(await blockImage(9, (v) => v * 0.8)).flop().png().toBuffer();
+    const mirrored = await sharp(await blockImage(9, (v) => v * 0.8))
+      .flop()
+      .png()
+      .toBuffer();
     expect(hammingDistance(base, brighter)).toBeLessThanOrEqual(2);
     expect(hammingDistance(base, perceptualHash(await adapter.hashGrid(mirrored)))).toBeGreaterThan(16);
   });

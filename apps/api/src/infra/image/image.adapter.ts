@@ -81,9 +81,7 @@ export class ImageAdapter {
   /** Capture time from EXIF DateTimeOriginal (or CreateDate), if the camera wrote one. */
   async captureTime(path: string): Promise<Date | null> {
     try {
-      const tags = (await exifr.parse(path, { pick: ['DateTimeOriginal', 'CreateDate'] })) as
-        | { DateTimeOriginal?: Date; CreateDate?: Date }
-        | undefined;
+      const tags = (await exifr.parse(path, { pick: ['DateTimeOriginal', 'CreateDate'] })) as { DateTimeOriginal?: Date; CreateDate?: Date } | undefined;
       const at = tags?.DateTimeOriginal ?? tags?.CreateDate;
       return at instanceof Date && !Number.isNaN(at.getTime()) ? at : null;
     } catch {

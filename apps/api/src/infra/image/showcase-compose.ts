@@ -36,7 +36,12 @@ async function cell(shot: Buffer, crop: NormalisedCrop | null, width: number, he
     const H = meta.height ?? 1;
     const left = Math.min(W - 1, Math.round(crop.x * W));
     const top = Math.min(H - 1, Math.round(crop.y * H));
-    img = img.extract({ left, top, width: Math.max(1, Math.min(W - left, Math.round(crop.w * W))), height: Math.max(1, Math.min(H - top, Math.round(crop.h * H))) });
+    img = img.extract({
+      left,
+      top,
+      width: Math.max(1, Math.min(W - left, Math.round(crop.w * W))),
+      height: Math.max(1, Math.min(H - top, Math.round(crop.h * H))),
+    });
   }
   return img.resize(width, height, { fit: 'cover', position: 'attention' }).toColourspace('srgb').png().toBuffer();
 }

@@ -57,11 +57,15 @@ describe('SqliteTaskRunner', () => {
     const { runner } = setUp();
     let running = 0;
     let peak = 0;
-    runner.register('demo.slow', async () => {
-      peak = Math.max(peak, ++running);
-      await new Promise((r) => setTimeout(r, 5));
-      running--;
-    }, { concurrency: 2 });
+    runner.register(
+      'demo.slow',
+      async () => {
+        peak = Math.max(peak, ++running);
+        await new Promise((r) => setTimeout(r, 5));
+        running--;
+      },
+      { concurrency: 2 },
+    );
     runner.start();
     for (let i = 0; i < 6; i++) runner.enqueue({ kind: 'demo.slow', key: `k${i}`, shopId: null });
     await runner.settled();
@@ -92,10 +96,14 @@ describe('SqliteTaskRunner', () => {
     it('retries a handler that fails twice, then ends done after three attempts with growing delays', async () => {
       const { runner } = setUp();
       const at: number[] = [];
-      runner.register('demo.retry', (t) => {
-        at.push(Date.now());
-        return t.attempt < 3 ? Promise.reject(new Error(`try ${t.attempt} failed`)) : Promise.resolve();
-      }, { concurrency: 1 });
+      runner.register(
+        'demo.retry',
+        (t) => {
+          at.push(Date.now());
+          return t.attempt < 3 ? Promise.reject(new Error(`try ${t.attempt} failed`)) : Promise.resolve();
+        },
+        { concurrency: 1 },
+      );
       runner.start();
       runner.enqueue({ kind: 'demo.retry', key: 'job-1', shopId: null });
       const settled = runner.settled();

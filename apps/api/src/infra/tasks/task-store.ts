@@ -25,7 +25,15 @@ export class TaskStore {
 
   /** Inserts in the caller's transaction when given; a failed task with the same key is queued afresh. */
   insert(spec: TaskSpec, now: Date, tx?: DbTx): void {
-    const fresh = { status: 'queued' as const, attempts: 0, lastError: null, progress: 0, nextRunAt: spec.runAt ?? now, payload: spec.payload ?? {}, updatedAt: now };
+    const fresh = {
+      status: 'queued' as const,
+      attempts: 0,
+      lastError: null,
+      progress: 0,
+      nextRunAt: spec.runAt ?? now,
+      payload: spec.payload ?? {},
+      updatedAt: now,
+    };
     (tx ?? this.db)
       .insert(tasks)
       .values({ kind: spec.kind, key: spec.key, shopId: spec.shopId, createdAt: now, ...fresh })
@@ -34,14 +42,25 @@ export class TaskStore {
   }
 
   find(kind: string, key: string): TaskRow | undefined {
-    return this.db.select().from(tasks).where(and(eq(tasks.kind, kind), eq(tasks.key, key))).get();
+    return this.db
+      .select()
+      .from(tasks)
+      .where(and(eq(tasks.kind, kind), eq(tasks.key, key)))
+      .get();
   }
 
   /** Takes up to `limit` due tasks of one kind under a lease, atomically (one SQLite write transaction). */
   claim(kind: string, limit: number, owner: string, now: Date, leaseMs: number): TaskRow[] {
     if (limit <= 0) return [];
     return this.db.transaction((tx) => {
-      const ids = tx.select({ id: tasks.id }).from(tasks).where(claimable(kind, now)).orderBy(asc(tasks.nextRunAt)).limit(limit).all().map((r) => r.id);
+      const ids = tx
+        .select({ id: tasks.id })
+        .from(tasks)
+        .where(claimable(kind, now))
+        .orderBy(asc(tasks.nextRunAt))
+        .limit(limit)
+        .all()
+        .map((r) => r.id);
       if (ids.length === 0) return [];
       return tx
         .update(tasks)
@@ -62,16 +81,28 @@ export class TaskStore {
   }
 
   progress(id: number, owner: string, fraction: number): void {
-    this.db.update(tasks).set({ progress: Math.min(1, Math.max(0, fraction)) }).where(this.mine(id, owner)).run();
+    this.db
+      .update(tasks)
+      .set({ progress: Math.min(1, Math.max(0, fraction)) })
+      .where(this.mine(id, owner))
+      .run();
   }
 
   finish(id: number, owner: string, now: Date): void {
-    this.db.update(tasks).set({ status: 'done', progress: 1, lastError: null, leaseOwner: null, leasedUntil: null, updatedAt: now }).where(this.mine(id, owner)).run();
+    this.db
+      .update(tasks)
+      .set({ status: 'done', progress: 1, lastError: null, leaseOwner: null, leasedUntil: null, updatedAt: now })
+      .where(this.mine(id, owner))
+      .run();
   }
 
   fail(id: number, owner: string, now: Date, error: string, retryAt: Date | null): void {
     const next = retryAt ? { status: 'queued' as const, nextRunAt: retryAt } : { status: 'failed' as const };
-    this.db.update(tasks).set({ ...next, lastError: error.slice(0, 1000), leaseOwner: null, leasedUntil: null, updatedAt: now }).where(this.mine(id, owner)).run();
+    this.db
+      .update(tasks)
+      .set({ ...next, lastError: error.slice(0, 1000), leaseOwner: null, leasedUntil: null, updatedAt: now })
+      .where(this.mine(id, owner))
+      .run();
   }
 
   /**
@@ -103,12 +134,20 @@ export class TaskStore {
 
   counts(): Record<TaskRow['status'], number> {
     const out = { queued: 0, running: 0, done: 0, failed: 0 };
-    for (const r of this.db.select({ status: tasks.status, n: sql<number>`count(*)` }).from(tasks).groupBy(tasks.status).all()) out[r.status] = r.n;
+    for (const r of this.db
+      .select({ status: tasks.status, n: sql<number>`count(*)` })
+      .from(tasks)
+      .groupBy(tasks.status)
+      .all())
+      out[r.status] = r.n;
     return out;
   }
 
   prune(before: Date): number {
-    return this.db.delete(tasks).where(and(eq(tasks.status, 'done'), lt(tasks.updatedAt, before))).run().changes;
+    return this.db
+      .delete(tasks)
+      .where(and(eq(tasks.status, 'done'), lt(tasks.updatedAt, before)))
+      .run().changes;
   }
 
   /** A cheap read that proves the table answers (readiness). */

@@ -35,13 +35,15 @@ export function htmlFrame(shop: ShopBrand, title: string, bodyHtml: string): str
   const bar = shop.brandPrimary;
   const ink = readableTextOn(bar);
   const contact = contactLines(shop).map(esc).join('<br>');
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>${esc(title)}</title></head>`
-    + `<body style="margin:0;padding:0;background:#f3f4f3;font-family:Arial,Helvetica,sans-serif;color:#1b1f23">`
-    + `<table role="presentation" width="100%" cellspacing="0" cellpadding="0" style="max-width:600px;margin:0 auto;background:#ffffff">`
-    + `<tr><td style="background:${esc(bar)};color:${ink};padding:16px 20px;font-size:20px;font-weight:bold">${esc(shop.name)}</td></tr>`
-    + `<tr><td style="padding:20px;font-size:16px;line-height:1.5">${bodyHtml}</td></tr>`
-    + `<tr><td style="padding:16px 20px;border-top:1px solid #dddddd;font-size:13px;color:#4a4f55">${contact}</td></tr>`
-    + `</table></body></html>`;
+  return (
+    `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>${esc(title)}</title></head>` +
+    `<body style="margin:0;padding:0;background:#f3f4f3;font-family:Arial,Helvetica,sans-serif;color:#1b1f23">` +
+    `<table role="presentation" width="100%" cellspacing="0" cellpadding="0" style="max-width:600px;margin:0 auto;background:#ffffff">` +
+    `<tr><td style="background:${esc(bar)};color:${ink};padding:16px 20px;font-size:20px;font-weight:bold">${esc(shop.name)}</td></tr>` +
+    `<tr><td style="padding:20px;font-size:16px;line-height:1.5">${bodyHtml}</td></tr>` +
+    `<tr><td style="padding:16px 20px;border-top:1px solid #dddddd;font-size:13px;color:#4a4f55">${contact}</td></tr>` +
+    `</table></body></html>`
+  );
 }
 
 /** A big, easy-to-tap link button in the shop colour (44 px tall at least). */

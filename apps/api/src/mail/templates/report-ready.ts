@@ -30,6 +30,13 @@ export function reportReadyMail(input: ReportReadyInput): RenderedMail {
   const close = 'If anything in it is unclear, reply to this e-mail or call us.';
   const lines = [greeting, intro, ...(revised ? [revised] : []), where];
   const text = textFrame(shop, [...lines, ...(link && !input.attached ? [`Your report: ${link}`] : []), close]);
-  const html = htmlFrame(shop, subject, paragraphs(lines) + (link && !input.attached ? htmlButton(shop, link, 'Open your bench report') : '') + paragraphs([close]) + `<p style="font-size:13px;color:#4a4f55">Job ${esc(input.jobNumber)}</p>`);
+  const html = htmlFrame(
+    shop,
+    subject,
+    paragraphs(lines) +
+      (link && !input.attached ? htmlButton(shop, link, 'Open your bench report') : '') +
+      paragraphs([close]) +
+      `<p style="font-size:13px;color:#4a4f55">Job ${esc(input.jobNumber)}</p>`,
+  );
   return { subject, text, html };
 }

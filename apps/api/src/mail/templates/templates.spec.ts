@@ -2,8 +2,23 @@ import { estimateDecisionMail } from './estimate-decision';
 import type { ShopBrand } from './layout';
 import { reportReadyMail } from './report-ready';
 
-const shop = (brandPrimary: string): ShopBrand => ({ name: 'Spoke & "Sons"', brandPrimary, email: 'desk@shop.example.test', phone: '+44 1632 960000', address: '1 Canal Row' });
-const base = { ownerName: 'Ada', jobNumber: 'J-2026-0042', bikeLabel: 'Quillon Stratus', version: 1, attached: true, sizeBytes: 200_000, budgetBytes: 8 * 1024 * 1024, link: null };
+const shop = (brandPrimary: string): ShopBrand => ({
+  name: 'Spoke & "Sons"',
+  brandPrimary,
+  email: 'desk@shop.example.test',
+  phone: '+44 1632 960000',
+  address: '1 Canal Row',
+});
+const base = {
+  ownerName: 'Ada',
+  jobNumber: 'J-2026-0042',
+  bikeLabel: 'Quillon Stratus',
+  version: 1,
+  attached: true,
+  sizeBytes: 200_000,
+  budgetBytes: 8 * 1024 * 1024,
+  link: null,
+};
 
 describe('mail templates', () => {
   it('escapes the shop name and picks the header text colour by WCAG contrast (white on dark teal, black on pale yellow)', () => {
@@ -33,9 +48,17 @@ describe('mail templates', () => {
   });
 
   it('puts the owner link on the estimate e-mail and refuses anything but http(s)', () => {
-    const mail = estimateDecisionMail({ shop: shop('#1F5F5B'), ownerName: 'Ada', jobNumber: 'J-1', bikeLabel: 'Stratus', link: 'https://bench.example.test/o/k3y' });
+    const mail = estimateDecisionMail({
+      shop: shop('#1F5F5B'),
+      ownerName: 'Ada',
+      jobNumber: 'J-1',
+      bikeLabel: 'Stratus',
+      link: 'https://bench.example.test/o/k3y',
+    });
     expect(mail.text).toContain('Your estimate: https://bench.example.test/o/k3y');
     expect(mail.html).toContain('href="https://bench.example.test/o/k3y"');
-    expect(() => estimateDecisionMail({ shop: shop('#1F5F5B'), ownerName: 'Ada', jobNumber: 'J-1', bikeLabel: 'Stratus', link: 'javascript:alert(1)' })).toThrow(/http/);
+    expect(() =>
+      estimateDecisionMail({ shop: shop('#1F5F5B'), ownerName: 'Ada', jobNumber: 'J-1', bikeLabel: 'Stratus', link: 'javascript:alert(1)' }),
+    ).toThrow(/http/);
   });
 });

@@ -10,7 +10,9 @@ export function Closing({ snap, stamp }: { snap: ReportSnapshot; stamp: IssueSta
   const fc = snap.finalCheck;
   return (
     <View>
-      <Text style={[styles.h1, styles.sectionGap, { color: ink }]} minPresenceAhead={80}>Safety notes</Text>
+      <Text style={[styles.h1, styles.sectionGap, { color: ink }]} minPresenceAhead={80}>
+        Safety notes
+      </Text>
       {snap.cautions.map((c) => (
         <Text key={c} style={{ marginBottom: 5 }}>
           {c}
@@ -25,7 +27,12 @@ export function Closing({ snap, stamp }: { snap: ReportSnapshot; stamp: IssueSta
         <View style={{ flex: 1 }}>
           <Text style={styles.small}>FINAL CHECK</Text>
           <Text style={{ fontWeight: 600 }}>{fc ? `${fc.passed ? 'Passed' : 'Not passed'} · ${fc.checker}` : 'Not recorded'}</Text>
-          {fc && <Text style={styles.muted}>{fmtDate(fc.at)}{fc.notes ? ` · Test ride: ${fc.notes}` : ''}</Text>}
+          {fc && (
+            <Text style={styles.muted}>
+              {fmtDate(fc.at)}
+              {fc.notes ? ` · Test ride: ${fc.notes}` : ''}
+            </Text>
+          )}
         </View>
       </View>
       {snap.shop.footer ? <Text style={[styles.small, { marginTop: 14 }]}>{snap.shop.footer}</Text> : null}
@@ -43,7 +50,9 @@ function Verification({ stamp }: { stamp: IssueStamp }) {
       </Svg>
       <View style={{ flex: 1 }}>
         <Text style={styles.h3}>Check this report</Text>
-        <Text>Version {stamp.version}, issued {fmtDate(stamp.issuedAt)}. To check that it is a report we issued, open</Text>
+        <Text>
+          Version {stamp.version}, issued {fmtDate(stamp.issuedAt)}. To check that it is a report we issued, open
+        </Text>
         <Text style={{ fontWeight: 600 }}>{stamp.verifyUrl}</Text>
         <Text style={[styles.small, { marginTop: 4 }]}>Fingerprint (SHA-256 of the report's contents):</Text>
         <Text style={{ fontSize: 7.5, color: MUTED }}>{stamp.fingerprint}</Text>

@@ -29,11 +29,22 @@ export function Cover({ snap, pageSize, logo, stamp }: Props) {
         <Text style={{ fontSize: 14, fontWeight: 600 }}>{snap.shop.name}</Text>
         <Text style={{ fontSize: 30, fontWeight: 700, marginTop: 6 }}>Bench report</Text>
         <Text style={{ fontSize: 16, marginTop: 6 }}>Job {snap.job.number}</Text>
-        {stamp ? <Text style={{ fontSize: 11, marginTop: 4 }}>Version {stamp.version} · issued {fmtDate(stamp.issuedAt)}</Text> : <Text style={{ fontSize: 11, marginTop: 4 }}>Draft — not issued</Text>}
+        {stamp ? (
+          <Text style={{ fontSize: 11, marginTop: 4 }}>
+            Version {stamp.version} · issued {fmtDate(stamp.issuedAt)}
+          </Text>
+        ) : (
+          <Text style={{ fontSize: 11, marginTop: 4 }}>Draft — not issued</Text>
+        )}
       </View>
       <View style={{ backgroundColor: accent.background, height: 8 }} />
       <View style={{ paddingHorizontal: MARGIN, paddingTop: 28 }}>
-        <Field label="Bike" value={snap.bike.title} sub={[snap.bike.detail, snap.bike.serial && `Frame no. ${snap.bike.serial}`].filter(Boolean).join(' · ')} ink={primaryInk.used} />
+        <Field
+          label="Bike"
+          value={snap.bike.title}
+          sub={[snap.bike.detail, snap.bike.serial && `Frame no. ${snap.bike.serial}`].filter(Boolean).join(' · ')}
+          ink={primaryInk.used}
+        />
         <Field label="Owner" value={snap.owner.name} ink={primaryInk.used} />
         <View style={[styles.row, { gap: 28 }]}>
           <Field label="Booked in" value={fmtDate(snap.job.bookedAt)} ink={primaryInk.used} />
@@ -48,7 +59,18 @@ export function Cover({ snap, pageSize, logo, stamp }: Props) {
           </View>
         )}
       </View>
-      <View style={{ position: 'absolute', bottom: 24, left: MARGIN, right: MARGIN, fontSize: 8.5, color: MUTED, flexDirection: 'row', justifyContent: 'space-between' }}>
+      <View
+        style={{
+          position: 'absolute',
+          bottom: 24,
+          left: MARGIN,
+          right: MARGIN,
+          fontSize: 8.5,
+          color: MUTED,
+          flexDirection: 'row',
+          justifyContent: 'space-between',
+        }}
+      >
         <Text>{snap.shop.contact}</Text>
         <Text render={({ pageNumber, totalPages }) => `Job ${snap.job.number} · Page ${pageNumber} of ${totalPages}`} />
       </View>

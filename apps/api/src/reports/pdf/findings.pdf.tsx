@@ -18,7 +18,13 @@ function ShotGrid({ shots, images, slot }: GridProps) {
   return (
     <View style={[styles.row, { flexWrap: 'wrap', gap: GUTTER, marginTop: 6 }]}>
       {shots.map((s, i) => (
-        <Shot key={`${s.assetId}-${i}`} image={images.get(s.assetId)} width={slot} maxHeight={slot * 0.9} caption={[s.label, s.caption].filter(Boolean).join(' · ')} />
+        <Shot
+          key={`${s.assetId}-${i}`}
+          image={images.get(s.assetId)}
+          width={slot}
+          maxHeight={slot * 0.9}
+          caption={[s.label, s.caption].filter(Boolean).join(' · ')}
+        />
       ))}
     </View>
   );
@@ -52,7 +58,9 @@ export function Pairs({ snap, images, slot }: { snap: ReportSnapshot; images: Im
   if (snap.pairs.length === 0) return null;
   return (
     <View>
-      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={200}>Before and after</Text>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={200}>
+        Before and after
+      </Text>
       {snap.pairs.map((p, i) => (
         <View key={i} wrap={false} style={{ marginBottom: 14 }}>
           <View style={[styles.row, { gap: GUTTER }]}>
@@ -70,9 +78,15 @@ export function ScopeStills({ snap, images, slot, caution }: { snap: ReportSnaps
   if (snap.scopeStills.length === 0) return null;
   return (
     <View>
-      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={200}>Inside the frame</Text>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={200}>
+        Inside the frame
+      </Text>
       <Text style={styles.small}>{caution}</Text>
-      <ShotGrid shots={snap.scopeStills.map((s) => ({ ...s, label: s.timecodeMs !== null ? `at ${fmtTimecode(s.timecodeMs)}` : undefined }))} images={images} slot={slot} />
+      <ShotGrid
+        shots={snap.scopeStills.map((s) => ({ ...s, label: s.timecodeMs !== null ? `at ${fmtTimecode(s.timecodeMs)}` : undefined }))}
+        images={images}
+        slot={slot}
+      />
     </View>
   );
 }

@@ -12,7 +12,9 @@ export function ConditionMark({ condition, size = 10, label = true }: { conditio
         {shape === 'circle' && <Circle cx={5} cy={5} r={4.5} fill={colour} />}
         {shape === 'diamond' && <Polygon points="5,0 10,5 5,10 0,5" fill={colour} />}
         {shape === 'triangle' && <Polygon points="5,0.5 10,9.5 0,9.5" fill={colour} />}
-        {shape === 'cross' && <Path d="M0 0h10v10h-10z M2 3.2l1.2-1.2 1.8 1.8 1.8-1.8 1.2 1.2-1.8 1.8 1.8 1.8-1.2 1.2-1.8-1.8-1.8 1.8-1.2-1.2 1.8-1.8z" fill={colour} />}
+        {shape === 'cross' && (
+          <Path d="M0 0h10v10h-10z M2 3.2l1.2-1.2 1.8 1.8 1.8-1.8 1.2 1.2-1.8 1.8 1.8 1.8-1.2 1.2-1.8-1.8-1.8 1.8-1.2-1.2 1.8-1.8z" fill={colour} />
+        )}
       </Svg>
       {label && <Text style={{ marginLeft: 4, fontWeight: 600, color: colour }}>{CONDITION_LABELS[condition]}</Text>}
     </View>
@@ -23,11 +25,29 @@ export function ConditionMark({ condition, size = 10, label = true }: { conditio
 export function PageChrome({ shop, jobNumber, draft }: { shop: string; jobNumber: string; draft: boolean }) {
   return (
     <>
-      <View fixed style={{ position: 'absolute', top: 22, left: 40, right: 40, flexDirection: 'row', justifyContent: 'space-between', fontSize: 8.5, color: MUTED }}>
+      <View
+        fixed
+        style={{ position: 'absolute', top: 22, left: 40, right: 40, flexDirection: 'row', justifyContent: 'space-between', fontSize: 8.5, color: MUTED }}
+      >
         <Text>{shop} · Bench report</Text>
-        <Text>{draft ? 'DRAFT — not issued · ' : ''}Job {jobNumber}</Text>
+        <Text>
+          {draft ? 'DRAFT — not issued · ' : ''}Job {jobNumber}
+        </Text>
       </View>
-      <View fixed style={{ position: 'absolute', bottom: 24, left: 40, right: 40, height: 12, flexDirection: 'row', justifyContent: 'space-between', fontSize: 8.5, color: MUTED }}>
+      <View
+        fixed
+        style={{
+          position: 'absolute',
+          bottom: 24,
+          left: 40,
+          right: 40,
+          height: 12,
+          flexDirection: 'row',
+          justifyContent: 'space-between',
+          fontSize: 8.5,
+          color: MUTED,
+        }}
+      >
         <Text>Job {jobNumber}</Text>
         <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
       </View>

@@ -17,11 +17,15 @@ export function Measurements({ snap }: { snap: ReportSnapshot }) {
   if (snap.measurements.length === 0 && snap.torque.length === 0) return null;
   return (
     <View>
-      <Text style={[styles.h1, styles.sectionGap, { color: ink }]} minPresenceAhead={80}>Measurements</Text>
+      <Text style={[styles.h1, styles.sectionGap, { color: ink }]} minPresenceAhead={80}>
+        Measurements
+      </Text>
       {snap.measurements.length === 0 && <Text style={styles.muted}>No measurements were taken at this visit.</Text>}
       {snap.measurements.map((m, i) => (
         <View key={i} style={styles.tableRow} wrap={false}>
-          <Cell w="24%" bold>{m.label}</Cell>
+          <Cell w="24%" bold>
+            {m.label}
+          </Cell>
           <Text style={{ width: '56%', paddingRight: 6 }}>{m.message}</Text>
           <View style={{ width: '20%' }}>
             <ConditionMark condition={m.condition} />
@@ -45,7 +49,9 @@ export function Measurements({ snap }: { snap: ReportSnapshot }) {
               <Cell w="12%">{t.applied}</Cell>
               <View style={[styles.row, { width: '22%', paddingRight: 6, alignItems: 'flex-start', paddingTop: 2 }]}>
                 <ConditionMark condition={t.verdict === 'within' ? 'sound' : 'unsafe'} size={8} label={false} />
-                <Text style={{ marginLeft: 3, fontWeight: 600, color: t.verdict === 'within' ? CONDITION_MARK.sound.colour : CONDITION_MARK.unsafe.colour }}>{TORQUE_VERDICT[t.verdict]}</Text>
+                <Text style={{ marginLeft: 3, fontWeight: 600, color: t.verdict === 'within' ? CONDITION_MARK.sound.colour : CONDITION_MARK.unsafe.colour }}>
+                  {TORQUE_VERDICT[t.verdict]}
+                </Text>
               </View>
               <Cell w="28%">{[t.source, t.tool && `${t.tool}${t.calibratedOn ? ` (${fmtDate(t.calibratedOn)})` : ''}`].filter(Boolean).join(' · ')}</Cell>
             </View>
@@ -60,7 +66,9 @@ export function WorkDone({ snap }: { snap: ReportSnapshot }) {
   if (snap.work.length === 0) return null;
   return (
     <View>
-      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={80}>Work done and parts</Text>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={80}>
+        Work done and parts
+      </Text>
       <View style={styles.tableHead}>
         <Cell w="46%">Work</Cell>
         <Cell w="30%">Parts</Cell>
@@ -87,7 +95,9 @@ export function Recommendations({ snap }: { snap: ReportSnapshot }) {
   const t = snap.totals;
   return (
     <View>
-      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={80}>Recommendations and prices</Text>
+      <Text style={[styles.h1, styles.sectionGap, { color: snap.shop.palette.primaryInk.used }]} minPresenceAhead={80}>
+        Recommendations and prices
+      </Text>
       <View style={styles.tableHead}>
         <Cell w="50%">Recommendation</Cell>
         <Cell w="16%">Urgency</Cell>
@@ -98,7 +108,9 @@ export function Recommendations({ snap }: { snap: ReportSnapshot }) {
         <View key={i} style={styles.tableRow} wrap={false}>
           <Cell w="50%">{`${r.summary} (${r.findingTitle})`}</Cell>
           <Cell w="16%">{URGENCY_LABELS[r.urgency]}</Cell>
-          <Cell w="18%" bold={r.status === 'declined' && r.safety}>{STATUS[r.status]}</Cell>
+          <Cell w="18%" bold={r.status === 'declined' && r.safety}>
+            {STATUS[r.status]}
+          </Cell>
           <Text style={{ width: '16%', textAlign: 'right' }}>{money(r.grossMinor, cur)}</Text>
         </View>
       ))}

@@ -28,8 +28,12 @@ export function AppLayout() {
           </Group>
           <Group gap="sm" wrap="nowrap">
             <Stack gap={0} visibleFrom="xs" align="flex-end">
-              <Text size="sm" fw={600}>{user.name}</Text>
-              <Text size="xs" c="dimmed">{ROLE_LABELS[user.role]}</Text>
+              <Text size="sm" fw={600}>
+                {user.name}
+              </Text>
+              <Text size="xs" c="dimmed">
+                {ROLE_LABELS[user.role]}
+              </Text>
             </Stack>
             <ActionIcon component={Link} to="/account/password" variant="subtle" color="gray" size={44} aria-label="Change password" title="Change password">
               <IconKey size={22} />

@@ -20,14 +20,25 @@ export function BikeRoute() {
         <Group justify="space-between" align="flex-start" mb="sm">
           <Stack gap={2}>
             <Title order={2}>{bikeLabel(b)}</Title>
-            <Text>Owner: <Anchor component={Link} to={`/customers/${b.customerId}`}>{b.ownerName}</Anchor></Text>
+            <Text>
+              Owner:{' '}
+              <Anchor component={Link} to={`/customers/${b.customerId}`}>
+                {b.ownerName}
+              </Anchor>
+            </Text>
           </Stack>
-          {can('bikes.edit') && <Button variant="default" leftSection={<IconEdit size={18} />} onClick={edit.open}>Edit</Button>}
+          {can('bikes.edit') && (
+            <Button variant="default" leftSection={<IconEdit size={18} />} onClick={edit.open}>
+              Edit
+            </Button>
+          )}
         </Group>
         <BikeSpecs bike={b} />
       </Paper>
       <BikeHistoryPanel bikeId={id} />
-      <Modal opened={editing} onClose={edit.close} title="Edit bike" size="lg"><BikeForm customerId={b.customerId} bike={b} onDone={edit.close} /></Modal>
+      <Modal opened={editing} onClose={edit.close} title="Edit bike" size="lg">
+        <BikeForm customerId={b.customerId} bike={b} onDone={edit.close} />
+      </Modal>
     </Stack>
   );
 }

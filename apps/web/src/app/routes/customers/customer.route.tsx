@@ -17,14 +17,31 @@ export function CustomerRoute() {
   if (!customer.data) return <QueryState isLoading={customer.isLoading} error={customer.error} />;
   return (
     <Stack>
-      <CustomerCard customer={customer.data} actions={canEdit && <Button variant="default" leftSection={<IconEdit size={18} />} onClick={edit.open}>Edit</Button>} />
+      <CustomerCard
+        customer={customer.data}
+        actions={
+          canEdit && (
+            <Button variant="default" leftSection={<IconEdit size={18} />} onClick={edit.open}>
+              Edit
+            </Button>
+          )
+        }
+      />
       <Group justify="space-between">
         <Title order={3}>Bikes</Title>
-        {canEdit && <Button leftSection={<IconBike />} onClick={add.open}>Add bike</Button>}
+        {canEdit && (
+          <Button leftSection={<IconBike />} onClick={add.open}>
+            Add bike
+          </Button>
+        )}
       </Group>
       <CustomerBikes customerId={id} />
-      <Modal opened={editing} onClose={edit.close} title="Edit customer" size="lg"><CustomerForm customer={customer.data} onDone={edit.close} /></Modal>
-      <Modal opened={adding} onClose={add.close} title="Add a bike" size="lg"><BikeForm customerId={id} onDone={add.close} /></Modal>
+      <Modal opened={editing} onClose={edit.close} title="Edit customer" size="lg">
+        <CustomerForm customer={customer.data} onDone={edit.close} />
+      </Modal>
+      <Modal opened={adding} onClose={add.close} title="Add a bike" size="lg">
+        <BikeForm customerId={id} onDone={add.close} />
+      </Modal>
     </Stack>
   );
 }

@@ -12,10 +12,25 @@ export function CustomersRoute() {
   const canEdit = useCan()('customers.edit');
   return (
     <>
-      <PageHeader title="Customers & bikes" subtitle="Owners, their bikes, and each bike's history." actions={canEdit && <Button size="lg" leftSection={<IconUserPlus />} onClick={open}>Add customer</Button>} />
+      <PageHeader
+        title="Customers & bikes"
+        subtitle="Owners, their bikes, and each bike's history."
+        actions={
+          canEdit && (
+            <Button size="lg" leftSection={<IconUserPlus />} onClick={open}>
+              Add customer
+            </Button>
+          )
+        }
+      />
       <CustomersTable />
       <Modal opened={opened} onClose={close} title="Add a customer" size="lg">
-        <CustomerForm onDone={(c) => { close(); void navigate(`/customers/${c.id}`); }} />
+        <CustomerForm
+          onDone={(c) => {
+            close();
+            void navigate(`/customers/${c.id}`);
+          }}
+        />
       </Modal>
     </>
   );

@@ -12,9 +12,15 @@ export function RouteError() {
     <Center mih="60dvh" p="md">
       <Stack maw={520}>
         <Title order={2}>This page hit a snag</Title>
-        <Alert color="red" variant="light">{message}</Alert>
-        <Button onClick={() => window.location.reload()} size="lg">Reload</Button>
-        <Button component={Link} to="/jobs" variant="subtle">Back to jobs</Button>
+        <Alert color="red" variant="light">
+          {message}
+        </Alert>
+        <Button onClick={() => window.location.reload()} size="lg">
+          Reload
+        </Button>
+        <Button component={Link} to="/jobs" variant="subtle">
+          Back to jobs
+        </Button>
       </Stack>
     </Center>
   );

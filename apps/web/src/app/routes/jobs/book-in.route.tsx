@@ -26,7 +26,12 @@ export function BookInRoute() {
         slots={slots}
         mechanics={mechanics}
         onBooked={(job) => {
-          notifications.show({ color: 'teal', title: `Booked in as ${job.number}`, message: `${job.bike.maker} ${job.bike.model} for ${job.customer.name}.`, autoClose: 8000 });
+          notifications.show({
+            color: 'teal',
+            title: `Booked in as ${job.number}`,
+            message: `${job.bike.maker} ${job.bike.model} for ${job.customer.name}.`,
+            autoClose: 8000,
+          });
           void navigate(`/jobs/${job.id}`);
         }}
       />

@@ -24,7 +24,9 @@ export function JobMediaFrame({ jobId, title, back, children }: { jobId: number;
         </ActionIcon>
         <div style={{ minWidth: 0 }}>
           <Title order={2}>{title}</Title>
-          <Text c="dimmed" truncate>{job ? `${job.number} · ${job.bike.maker} ${job.bike.model} · ${job.customer.name}` : `Job ${jobId}`}</Text>
+          <Text c="dimmed" truncate>
+            {job ? `${job.number} · ${job.bike.maker} ${job.bike.model} · ${job.customer.name}` : `Job ${jobId}`}
+          </Text>
         </div>
       </Group>
       {children}

@@ -67,7 +67,15 @@ export function JobSectionBody({ section, ...props }: SectionProps & { section: 
     case 'intake':
       return <IntakeSection job={job} bikeSpecs={<BikeSpecs bike={job.bikeDetail} />} />;
     case 'inspection':
-      return <InspectionPanel jobId={job.id} chainPolicy={settings.chainLimits ?? undefined} lengthUnit={settings.units === 'imperial' ? 'in' : 'mm'} carbonFrame={job.bikeDetail.frameMaterial === 'carbon'} canRecord={roleCan(me.role, 'inspection.record') && !frozen} />;
+      return (
+        <InspectionPanel
+          jobId={job.id}
+          chainPolicy={settings.chainLimits ?? undefined}
+          lengthUnit={settings.units === 'imperial' ? 'in' : 'mm'}
+          carbonFrame={job.bikeDetail.frameMaterial === 'carbon'}
+          canRecord={roleCan(me.role, 'inspection.record') && !frozen}
+        />
+      );
     case 'findings':
       return <Findings {...props} />;
     case 'work':

@@ -28,7 +28,10 @@ export function JobRoute() {
   const section: JobSection = isSection(tab) ? tab : 'intake';
   const qc = useQueryClient();
   // The owner acts on their own page; refresh everything of this job (status, findings, owner panel).
-  useOwnerEvents(jobId, useCallback(() => void qc.invalidateQueries({ queryKey: jobKeys.detail(jobId) }), [qc, jobId]));
+  useOwnerEvents(
+    jobId,
+    useCallback(() => void qc.invalidateQueries({ queryKey: jobKeys.detail(jobId) }), [qc, jobId]),
+  );
   if (!job.data || !settings.data || !me) return <QueryState isLoading={job.isLoading || settings.isLoading} error={job.error ?? settings.error} />;
   // Evidence freezes at handover; only `jobs.reopen_evidence` may still correct it (the API audits each change).
   const closed = isTerminalStatus(job.data.status);
@@ -42,7 +45,9 @@ export function JobRoute() {
         <ScrollArea type="never" mb="md">
           <Tabs.List style={{ flexWrap: 'nowrap' }}>
             {JOB_SECTIONS.map((s) => (
-              <Tabs.Tab key={s.value} value={s.value} fz="md" mih={48} style={{ whiteSpace: 'nowrap' }}>{s.label}</Tabs.Tab>
+              <Tabs.Tab key={s.value} value={s.value} fz="md" mih={48} style={{ whiteSpace: 'nowrap' }}>
+                {s.label}
+              </Tabs.Tab>
             ))}
           </Tabs.List>
         </ScrollArea>

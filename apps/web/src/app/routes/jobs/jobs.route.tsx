@@ -14,7 +14,13 @@ export function JobsRoute() {
       <PageHeader
         title="Jobs"
         subtitle="Every bike in the workshop. Overdue jobs are marked with a clock and the word Overdue."
-        actions={canBook && <Button component={Link} to="/jobs/new" size="lg" leftSection={<IconPlus />}>Book a bike in</Button>}
+        actions={
+          canBook && (
+            <Button component={Link} to="/jobs/new" size="lg" leftSection={<IconPlus />}>
+              Book a bike in
+            </Button>
+          )
+        }
       />
       <JobsTable mechanics={mechanics} />
     </>

@@ -13,7 +13,11 @@ export function UsersRoute() {
       <PageHeader
         title="Users & roles"
         subtitle="Managers run settings, the front desk books bikes in and records approvals, mechanics work the stand."
-        actions={<Button leftSection={<IconUserPlus />} onClick={open}>Add user</Button>}
+        actions={
+          <Button leftSection={<IconUserPlus />} onClick={open}>
+            Add user
+          </Button>
+        }
       />
       <UsersTable me={me?.id ?? 0} />
       <Modal opened={opened} onClose={close} title="Add a user" size="md">

@@ -49,13 +49,27 @@ export function AnnotateCanvas({ doc, image, box, view, tool, style, selectedId,
     >
       <Layer name="photo">
         <KImage image={image} width={size.width} height={size.height} />
-        {shapes.map((s) => <ShapeNode key={s.id} doc={{ ...doc, shapes }} shape={s} size={size} image={image} />)}
+        {shapes.map((s) => (
+          <ShapeNode key={s.id} doc={{ ...doc, shapes }} shape={s} size={size} image={image} />
+        ))}
       </Layer>
       <Layer name="handles">
-        {tool === 'select' && selected &&
+        {tool === 'select' &&
+          selected &&
           handlesOf(selected).map((h, i) => {
             const p = toPixel(h, size);
-            return <Circle key={i} x={p.x} y={p.y} radius={TARGET_PX / view.scale} fill="rgba(255,255,255,0.35)" stroke="#141414" strokeWidth={2 / view.scale} onPointerDown={handleDown(i)} />;
+            return (
+              <Circle
+                key={i}
+                x={p.x}
+                y={p.y}
+                radius={TARGET_PX / view.scale}
+                fill="rgba(255,255,255,0.35)"
+                stroke="#141414"
+                strokeWidth={2 / view.scale}
+                onPointerDown={handleDown(i)}
+              />
+            );
           })}
       </Layer>
     </Stage>

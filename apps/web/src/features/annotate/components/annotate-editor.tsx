@@ -38,12 +38,24 @@ function useLoadedImage(url: string): HTMLImageElement | null {
 export function AnnotateEditor(props: AnnotateEditorProps) {
   const annotation = useAnnotation(props.mediaId);
   const image = useLoadedImage(props.imageUrl);
-  if (!annotation.data || !image) return <Center h="100dvh"><Loader /></Center>;
+  if (!annotation.data || !image)
+    return (
+      <Center h="100dvh">
+        <Loader />
+      </Center>
+    );
   const doc = annotation.data.document ?? emptyDocument(image.naturalWidth, image.naturalHeight);
   return <EditorBody {...props} image={image} initial={doc} version={annotation.data.version} />;
 }
 
-function EditorBody({ mediaId, backTo, title, image, initial, version }: AnnotateEditorProps & { image: HTMLImageElement; initial: AnnotationDocument; version: number }) {
+function EditorBody({
+  mediaId,
+  backTo,
+  title,
+  image,
+  initial,
+  version,
+}: AnnotateEditorProps & { image: HTMLImageElement; initial: AnnotationDocument; version: number }) {
   const [history, setHistory] = useState(() => startHistory(initial.shapes));
   const [tool, setTool] = useState<Tool>('select');
   const [style, setStyle] = useState<Style>({ colour: 'amber', width: 'medium' });
@@ -57,10 +69,26 @@ function EditorBody({ mediaId, backTo, title, image, initial, version }: Annotat
   const save = useAutosave(mediaId, doc, version);
   const selected = history.present.find((s) => s.id === selectedId) ?? null;
   const put = (s: Shape) => setHistory((h) => commit(h, upsert(h.present, s)));
-  const remove = () => selectedId && (setHistory((h) => commit(h, h.present.filter((s) => s.id !== selectedId))), setSelectedId(null));
+  const remove = () =>
+    selectedId &&
+    (setHistory((h) =>
+      commit(
+        h,
+        h.present.filter((s) => s.id !== selectedId),
+      ),
+    ),
+    setSelectedId(null));
 
   useEditorKeys(
-    { undo: () => setHistory(undo), redo: () => setHistory(redo), remove, deselect: () => setSelectedId(null), tool: setTool, zoomIn: view.zoomIn, zoomOut: view.zoomOut },
+    {
+      undo: () => setHistory(undo),
+      redo: () => setHistory(redo),
+      remove,
+      deselect: () => setSelectedId(null),
+      tool: setTool,
+      zoomIn: view.zoomIn,
+      zoomOut: view.zoomOut,
+    },
     asking === null,
   );
 
@@ -73,20 +101,58 @@ function EditorBody({ mediaId, backTo, title, image, initial, version }: Annotat
   const exportPng = () => exportStagePng(stageRef.current, view, doc.image, mediaId);
 
   return (
-    <Box pos="fixed" inset={0} bg="dark.8" style={{ zIndex: 300, display: 'flex', flexDirection: 'column' }} data-testid="annotate-editor" data-shapes={history.present.length} data-zoom={view.zoom.toFixed(2)}>
+    <Box
+      pos="fixed"
+      inset={0}
+      bg="dark.8"
+      style={{ zIndex: 300, display: 'flex', flexDirection: 'column' }}
+      data-testid="annotate-editor"
+      data-shapes={history.present.length}
+      data-zoom={view.zoom.toFixed(2)}
+    >
       <EditorHeader backTo={backTo} title={title} save={save} onExport={exportPng} />
       <AnnotateToolbar
-        tool={tool} onTool={(t) => { setTool(t); if (t !== 'select') setSelectedId(null); }} style={style}
-        onStyle={(s) => { setStyle(s); if (selected) put({ ...selected, ...s }); }}
-        canUndo={history.past.length > 0} canRedo={history.future.length > 0}
-        onUndo={() => setHistory(undo)} onRedo={() => setHistory(redo)} onDelete={selected ? remove : null}
-        onZoomIn={view.zoomIn} onZoomOut={view.zoomOut}
+        tool={tool}
+        onTool={(t) => {
+          setTool(t);
+          if (t !== 'select') setSelectedId(null);
+        }}
+        style={style}
+        onStyle={(s) => {
+          setStyle(s);
+          if (selected) put({ ...selected, ...s });
+        }}
+        canUndo={history.past.length > 0}
+        canRedo={history.future.length > 0}
+        onUndo={() => setHistory(undo)}
+        onRedo={() => setHistory(redo)}
+        onDelete={selected ? remove : null}
+        onZoomIn={view.zoomIn}
+        onZoomOut={view.zoomOut}
       />
       <Box ref={boxRef} style={{ flex: 1, minHeight: 0, overflow: 'hidden' }} data-testid="annotate-stage">
-        <AnnotateCanvas doc={doc} image={image} box={box} view={view} tool={tool} style={style} selectedId={selectedId} onSelect={setSelectedId} onCommit={onCommit} stageRef={stageRef} />
+        <AnnotateCanvas
+          doc={doc}
+          image={image}
+          box={box}
+          view={view}
+          tool={tool}
+          style={style}
+          selectedId={selectedId}
+          onSelect={setSelectedId}
+          onCommit={onCommit}
+          stageRef={stageRef}
+        />
       </Box>
       {selected?.kind === 'ruler' && (
-        <ChainPanel key={selected.id} mediaId={mediaId} doc={doc} ruler={selected} savedVersion={save.version} onPitches={(n) => put({ ...selected, pitches: n })} />
+        <ChainPanel
+          key={selected.id}
+          mediaId={mediaId}
+          doc={doc}
+          ruler={selected}
+          savedVersion={save.version}
+          onPitches={(n) => put({ ...selected, pitches: n })}
+        />
       )}
       <AskDialogs asking={asking} onDone={put} onClose={() => setAsking(null)} />
     </Box>

@@ -48,14 +48,24 @@ interface Props {
 export function AnnotateToolbar(p: Props) {
   const icon = (label: string, onClick: () => void, node: ReactNode, opts: { active?: boolean; disabled?: boolean; color?: string } = {}) => (
     <Tooltip label={label} key={label}>
-      <ActionIcon size={48} variant={opts.active ? 'filled' : 'light'} color={opts.color} disabled={opts.disabled} aria-label={label} aria-pressed={opts.active} onClick={onClick}>
+      <ActionIcon
+        size={48}
+        variant={opts.active ? 'filled' : 'light'}
+        color={opts.color}
+        disabled={opts.disabled}
+        aria-label={label}
+        aria-pressed={opts.active}
+        onClick={onClick}
+      >
         {node}
       </ActionIcon>
     </Tooltip>
   );
   return (
     <Group gap={6} p={6} wrap="wrap" bg="dark.7" data-testid="annotate-toolbar">
-      {(Object.keys(TOOL_ICONS) as Tool[]).map((t) => icon(`${TOOL_ICONS[t][1]} (${TOOL_ICONS[t][2]})`, () => p.onTool(t), TOOL_ICONS[t][0], { active: p.tool === t }))}
+      {(Object.keys(TOOL_ICONS) as Tool[]).map((t) =>
+        icon(`${TOOL_ICONS[t][1]} (${TOOL_ICONS[t][2]})`, () => p.onTool(t), TOOL_ICONS[t][0], { active: p.tool === t }),
+      )}
       {icon('Undo (Ctrl+Z)', p.onUndo, <IconArrowBackUp />, { disabled: !p.canUndo })}
       {icon('Redo (Ctrl+Shift+Z)', p.onRedo, <IconArrowForwardUp />, { disabled: !p.canRedo })}
       {icon('Delete (Del)', () => p.onDelete?.(), <IconTrash />, { disabled: !p.onDelete, color: 'red' })}
@@ -70,11 +80,21 @@ export function AnnotateToolbar(p: Props) {
             aria-label={`Colour ${c}`}
             aria-pressed={p.style.colour === c}
             onClick={() => p.onStyle({ ...p.style, colour: c })}
-            style={{ background: PALETTE[c].ink, border: `${p.style.colour === c ? 5 : 3}px solid ${PALETTE[c].outline}`, outline: p.style.colour === c ? '3px solid #fff' : undefined }}
+            style={{
+              background: PALETTE[c].ink,
+              border: `${p.style.colour === c ? 5 : 3}px solid ${PALETTE[c].outline}`,
+              outline: p.style.colour === c ? '3px solid #fff' : undefined,
+            }}
           />
         ))}
       </Group>
-      <SegmentedControl size="md" value={p.style.width} onChange={(w) => p.onStyle({ ...p.style, width: w })} data={STROKE_WIDTH_NAMES.map((w) => ({ value: w, label: w }))} aria-label="Stroke width" />
+      <SegmentedControl
+        size="md"
+        value={p.style.width}
+        onChange={(w) => p.onStyle({ ...p.style, width: w })}
+        data={STROKE_WIDTH_NAMES.map((w) => ({ value: w, label: w }))}
+        aria-label="Stroke width"
+      />
     </Group>
   );
 }

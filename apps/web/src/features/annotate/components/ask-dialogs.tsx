@@ -12,9 +12,24 @@ interface Props {
 export function AskDialogs({ asking, onDone, onClose }: Props) {
   return (
     <>
-      <ScaleDialog opened={asking?.kind === 'scale'} onCancel={onClose} onDone={(mm) => { if (asking?.kind === 'scale') onDone({ ...asking, knownMm: mm }); onClose(); }} />
+      <ScaleDialog
+        opened={asking?.kind === 'scale'}
+        onCancel={onClose}
+        onDone={(mm) => {
+          if (asking?.kind === 'scale') onDone({ ...asking, knownMm: mm });
+          onClose();
+        }}
+      />
       {asking?.kind === 'label' && (
-        <LabelDialog opened initial="" onCancel={onClose} onDone={(text) => { onDone({ ...asking, text }); onClose(); }} />
+        <LabelDialog
+          opened
+          initial=""
+          onCancel={onClose}
+          onDone={(text) => {
+            onDone({ ...asking, text });
+            onClose();
+          }}
+        />
       )}
     </>
   );

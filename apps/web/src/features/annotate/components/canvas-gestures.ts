@@ -22,14 +22,7 @@ export function withDraft(shapes: Shape[], draft: Shape | null): Shape[] {
  * The draft after the pointer moved to `p` during a draw, move or handle gesture;
  * null when the gesture does not change the draft. A pen stroke records the point.
  */
-export function draftAfterMove(
-  g: Exclude<Gesture, { kind: 'pan' }>,
-  p: Point,
-  draft: Shape | null,
-  tool: Tool,
-  style: Style,
-  aspect: number,
-): Shape | null {
+export function draftAfterMove(g: Exclude<Gesture, { kind: 'pan' }>, p: Point, draft: Shape | null, tool: Tool, style: Style, aspect: number): Shape | null {
   if (g.kind === 'draw') {
     if (!draft || tool === 'select') return null;
     if (tool === 'pen') g.pen.push(p);

@@ -28,7 +28,7 @@ export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Pro
   const [pitches, setPitches] = useState<number>(ruler.pitches ?? 24);
   const record = useChainReading(mediaId);
   const p = preview(doc, ruler, pitches);
-  const error = record.error instanceof ApiError ? record.error.fieldErrors().rulerId ?? record.error.message : null;
+  const error = record.error instanceof ApiError ? (record.error.fieldErrors().rulerId ?? record.error.message) : null;
   return (
     <Stack gap="xs" p="sm" bg="white" data-testid="chain-panel">
       <Group align="flex-end" wrap="wrap">
@@ -45,18 +45,35 @@ export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Pro
             if (Number.isInteger(n) && n >= 2) onPitches(n);
           }}
         />
-        <Button size="md" h={48} disabled={!p.ok || savedVersion === null} loading={record.isPending} onClick={() => savedVersion !== null && record.mutate({ rulerId: ruler.id, pitches, version: savedVersion })}>
+        <Button
+          size="md"
+          h={48}
+          disabled={!p.ok || savedVersion === null}
+          loading={record.isPending}
+          onClick={() => savedVersion !== null && record.mutate({ rulerId: ruler.id, pitches, version: savedVersion })}
+        >
           Record chain wear
         </Button>
       </Group>
-      <Text fw={700} data-testid="ruler-length">{(() => { const mm = rulerLengthMm(doc, ruler.id); return mm === null ? 'No scale yet' : `Ruler: ${formatMm(mm)}`; })()}</Text>
-      <Text fw={600} data-testid="chain-preview">{p.text}</Text>
-      {record.data && <Text c="green.8" data-testid="chain-recorded">Recorded: {record.data.result.message}</Text>}
+      <Text fw={700} data-testid="ruler-length">
+        {(() => {
+          const mm = rulerLengthMm(doc, ruler.id);
+          return mm === null ? 'No scale yet' : `Ruler: ${formatMm(mm)}`;
+        })()}
+      </Text>
+      <Text fw={600} data-testid="chain-preview">
+        {p.text}
+      </Text>
+      {record.data && (
+        <Text c="green.8" data-testid="chain-recorded">
+          Recorded: {record.data.result.message}
+        </Text>
+      )}
       {error && <Text c="red.8">{error}</Text>}
       <Alert color="yellow" variant="light" title="How far to trust a photo reading">
-        Common practice, no source: the camera must face the chain square-on and the rule must lie in the chain&apos;s plane; lens
-        distortion and a tilted camera each add error near the frame edges. A chain checker or a steel rule over 24 pitches at the
-        bench remains the reference; use the photo to show the owner, and confirm a borderline reading with the tool.
+        Common practice, no source: the camera must face the chain square-on and the rule must lie in the chain&apos;s plane; lens distortion and a tilted
+        camera each add error near the frame edges. A chain checker or a steel rule over 24 pitches at the bench remains the reference; use the photo to show
+        the owner, and confirm a borderline reading with the tool.
       </Alert>
     </Stack>
   );

@@ -24,13 +24,23 @@ export function EditorHeader({ backTo, title, save, onExport }: Props) {
   return (
     <Group justify="space-between" p={6} c="white" wrap="nowrap">
       <Group gap="xs" wrap="nowrap" style={{ minWidth: 0 }}>
-        <ActionIcon component={Link} to={backTo} size={48} variant="subtle" color="gray.0" aria-label="Back"><IconArrowLeft /></ActionIcon>
-        <Text fw={600} truncate>{title}</Text>
+        <ActionIcon component={Link} to={backTo} size={48} variant="subtle" color="gray.0" aria-label="Back">
+          <IconArrowLeft />
+        </ActionIcon>
+        <Text fw={600} truncate>
+          {title}
+        </Text>
       </Group>
       <Group gap="xs" wrap="nowrap">
-        <Badge color={colour} size="lg" data-testid="save-state">{label}</Badge>
-        <Button size="md" h={48} onClick={() => void save.flush()} disabled={save.state === 'saved'}>Save</Button>
-        <ActionIcon size={48} variant="light" aria-label="Download the annotated image" onClick={onExport}><IconDownload /></ActionIcon>
+        <Badge color={colour} size="lg" data-testid="save-state">
+          {label}
+        </Badge>
+        <Button size="md" h={48} onClick={() => void save.flush()} disabled={save.state === 'saved'}>
+          Save
+        </Button>
+        <ActionIcon size={48} variant="light" aria-label="Download the annotated image" onClick={onExport}>
+          <IconDownload />
+        </ActionIcon>
       </Group>
     </Group>
   );

@@ -6,7 +6,13 @@ export function exportStagePng(stage: Konva.Stage | null, view: ReturnType<typeo
   if (!stage) return;
   const handles = stage.findOne('.handles');
   handles?.hide();
-  const src = stage.toCanvas({ x: view.position.x, y: view.position.y, width: size.width * view.scale, height: size.height * view.scale, pixelRatio: 1 / view.scale });
+  const src = stage.toCanvas({
+    x: view.position.x,
+    y: view.position.y,
+    width: size.width * view.scale,
+    height: size.height * view.scale,
+    pixelRatio: 1 / view.scale,
+  });
   handles?.show();
   // Rounding in the pixel ratio can lose a row; draw into a canvas of exactly the photo's size.
   const out = document.createElement('canvas');

@@ -11,12 +11,28 @@ export function ScaleDialog({ opened, onDone, onCancel }: { opened: boolean; onD
       <Stack>
         <Text size="sm">Draw it over something of known length in the same plane as what you measure, e.g. a steel rule beside the chain.</Text>
         {SCALE_PRESETS.map((p) => (
-          <Button key={p.id} size="lg" variant="light" onClick={() => onDone(p.mm)}>{p.label}</Button>
+          <Button key={p.id} size="lg" variant="light" onClick={() => onDone(p.mm)}>
+            {p.label}
+          </Button>
         ))}
-        <NumberInput label="Or type the length (mm)" size="lg" min={0.1} max={2000} decimalScale={2} value={mm} onChange={setMm} error={mm !== '' && !valid ? 'Enter a length between 0.1 and 2000 mm.' : undefined} data-autofocus />
+        <NumberInput
+          label="Or type the length (mm)"
+          size="lg"
+          min={0.1}
+          max={2000}
+          decimalScale={2}
+          value={mm}
+          onChange={setMm}
+          error={mm !== '' && !valid ? 'Enter a length between 0.1 and 2000 mm.' : undefined}
+          data-autofocus
+        />
         <Group justify="flex-end">
-          <Button size="lg" variant="default" onClick={onCancel}>Cancel</Button>
-          <Button size="lg" disabled={!valid} onClick={() => valid && onDone(mm)}>Set scale</Button>
+          <Button size="lg" variant="default" onClick={onCancel}>
+            Cancel
+          </Button>
+          <Button size="lg" disabled={!valid} onClick={() => valid && onDone(mm)}>
+            Set scale
+          </Button>
         </Group>
       </Stack>
     </Modal>
@@ -29,10 +45,22 @@ export function LabelDialog({ opened, initial, onDone, onCancel }: { opened: boo
   return (
     <Modal opened={opened} onClose={onCancel} title="Label" centered zIndex={400}>
       <Stack>
-        <TextInput size="lg" label="Text" value={text} onChange={(e) => setText(e.currentTarget.value)} maxLength={120} error={!ok ? 'A label needs 1 to 120 characters.' : undefined} data-autofocus />
+        <TextInput
+          size="lg"
+          label="Text"
+          value={text}
+          onChange={(e) => setText(e.currentTarget.value)}
+          maxLength={120}
+          error={!ok ? 'A label needs 1 to 120 characters.' : undefined}
+          data-autofocus
+        />
         <Group justify="flex-end">
-          <Button size="lg" variant="default" onClick={onCancel}>Cancel</Button>
-          <Button size="lg" disabled={!ok} onClick={() => onDone(text.trim())}>Place label</Button>
+          <Button size="lg" variant="default" onClick={onCancel}>
+            Cancel
+          </Button>
+          <Button size="lg" disabled={!ok} onClick={() => onDone(text.trim())}>
+            Place label
+          </Button>
         </Group>
       </Stack>
     </Modal>

@@ -40,8 +40,29 @@ function Caption({ text, at, shape, size }: { text: string; at: Point; shape: Sh
   const c = PALETTE[shape.colour];
   return (
     <>
-      <Rect x={at.x - box.width / 2} y={at.y - box.height / 2} width={box.width} height={box.height} cornerRadius={font * 0.25} fill={c.ink} stroke={c.outline} strokeWidth={font * 0.08} />
-      <Text x={at.x - box.width / 2} y={at.y - box.height / 2} width={box.width} height={box.height} align="center" verticalAlign="middle" text={text} fontSize={font} fontStyle="600" fontFamily="Inter, DejaVu Sans, sans-serif" fill={c.outline} />
+      <Rect
+        x={at.x - box.width / 2}
+        y={at.y - box.height / 2}
+        width={box.width}
+        height={box.height}
+        cornerRadius={font * 0.25}
+        fill={c.ink}
+        stroke={c.outline}
+        strokeWidth={font * 0.08}
+      />
+      <Text
+        x={at.x - box.width / 2}
+        y={at.y - box.height / 2}
+        width={box.width}
+        height={box.height}
+        align="center"
+        verticalAlign="middle"
+        text={text}
+        fontSize={font}
+        fontStyle="600"
+        fontFamily="Inter, DejaVu Sans, sans-serif"
+        fill={c.outline}
+      />
     </>
   );
 }
@@ -54,7 +75,9 @@ function LineMark({ doc, shape, size }: { doc: AnnotationDocument; shape: Shape 
   return (
     <>
       <Twice shape={shape} size={size} points={[a, b]} dash={shape.kind === 'scale' ? [3 * w, 2 * w] : undefined} />
-      {endTicks(a, b, w).map((t, i) => <Twice key={i} shape={shape} size={size} points={t} />)}
+      {endTicks(a, b, w).map((t, i) => (
+        <Twice key={i} shape={shape} size={size} points={t} />
+      ))}
       {text && <Caption text={text} at={captionAnchor(a, b, fontPx(size))} shape={shape} size={size} />}
     </>
   );
@@ -73,7 +96,17 @@ function BlurNode({ shape, size, image }: { shape: Shape & { kind: 'blur' }; siz
   }, [tl.x, tl.y, w, h]);
   const sx = image.naturalWidth / size.width;
   return (
-    <KImage ref={ref} image={image} x={tl.x} y={tl.y} width={w} height={h} crop={{ x: tl.x * sx, y: tl.y * sx, width: w * sx, height: h * sx }} filters={[KonvaLib.Filters.Pixelate]} pixelSize={block} />
+    <KImage
+      ref={ref}
+      image={image}
+      x={tl.x}
+      y={tl.y}
+      width={w}
+      height={h}
+      crop={{ x: tl.x * sx, y: tl.y * sx, width: w * sx, height: h * sx }}
+      filters={[KonvaLib.Filters.Pixelate]}
+      pixelSize={block}
+    />
   );
 }
 
@@ -103,12 +136,24 @@ export function ShapeNode({ doc, shape, size, image }: { doc: AnnotationDocument
       );
     }
     case 'pen':
-      return <Group><Twice shape={shape} size={size} points={shape.points.map((pt) => toPixel(pt, size))} /></Group>;
+      return (
+        <Group>
+          <Twice shape={shape} size={size} points={shape.points.map((pt) => toPixel(pt, size))} />
+        </Group>
+      );
     case 'label':
-      return <Group><Caption text={shape.text} at={toPixel(shape.at, size)} shape={shape} size={size} /></Group>;
+      return (
+        <Group>
+          <Caption text={shape.text} at={toPixel(shape.at, size)} shape={shape} size={size} />
+        </Group>
+      );
     case 'ruler':
     case 'scale':
-      return <Group><LineMark doc={doc} shape={shape} size={size} /></Group>;
+      return (
+        <Group>
+          <LineMark doc={doc} shape={shape} size={size} />
+        </Group>
+      );
     case 'blur':
       return <BlurNode shape={shape} size={size} image={image} />;
   }

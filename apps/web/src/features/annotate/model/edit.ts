@@ -31,7 +31,13 @@ export function draftShape(tool: DrawTool, id: string, start: Point, end: Point,
     case 'label':
       return { id, ...style, kind: 'label', at: b, text: 'Note' };
     case 'blur':
-      return { id, ...style, kind: 'blur', topLeft: { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y) }, bottomRight: { x: Math.max(a.x, b.x), y: Math.max(a.y, b.y) } };
+      return {
+        id,
+        ...style,
+        kind: 'blur',
+        topLeft: { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y) },
+        bottomRight: { x: Math.max(a.x, b.x), y: Math.max(a.y, b.y) },
+      };
   }
 }
 
@@ -61,7 +67,10 @@ export function handlesOf(shape: Shape): Point[] {
     case 'scale':
       return [shape.from, shape.to];
     case 'ring':
-      return [{ x: shape.centre.x + shape.rx, y: shape.centre.y }, { x: shape.centre.x, y: shape.centre.y + shape.ry }];
+      return [
+        { x: shape.centre.x + shape.rx, y: shape.centre.y },
+        { x: shape.centre.x, y: shape.centre.y + shape.ry },
+      ];
     case 'blur':
       return [shape.topLeft, shape.bottomRight];
     case 'pen':

@@ -12,7 +12,9 @@ function renderForm() {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
   render(
     <QueryClientProvider client={qc}>
-      <MantineProvider theme={theme}><ChangePasswordForm /></MantineProvider>
+      <MantineProvider theme={theme}>
+        <ChangePasswordForm />
+      </MantineProvider>
     </QueryClientProvider>,
   );
 }
@@ -42,7 +44,9 @@ describe('change password form', () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it('shows a wrong current password under that box and keeps this device signed in', async () => {
-    fetchSpy.mockResolvedValue(json(401, { code: 'INVALID_CREDENTIALS', message: 'The current password is not right.', details: { field: 'currentPassword' } }));
+    fetchSpy.mockResolvedValue(
+      json(401, { code: 'INVALID_CREDENTIALS', message: 'The current password is not right.', details: { field: 'currentPassword' } }),
+    );
     renderForm();
     fillAndSubmit('not-my-password', 'a-long-new-password');
     await waitFor(() => expect(messageUnder('Current password')).toBe('The current password is not right.'));

@@ -11,7 +11,10 @@ const EMPTY: ChangePasswordRequest = { currentPassword: '', newPassword: '' };
 /** The signed-in user changes their own password; the API signs every other device out. */
 export function ChangePasswordForm() {
   const change = useChangePassword();
-  const form = useForm<ChangePasswordRequest>({ initialValues: EMPTY, validate: contractResolver(ChangePasswordRequestSchema, (v: ChangePasswordRequest) => v) });
+  const form = useForm<ChangePasswordRequest>({
+    initialValues: EMPTY,
+    validate: contractResolver(ChangePasswordRequestSchema, (v: ChangePasswordRequest) => v),
+  });
   const onError = (e: unknown) => {
     // A wrong current password is a field problem, not a lost session: it goes under that box.
     if (e instanceof ApiError && e.code === 'INVALID_CREDENTIALS') form.setFieldError('currentPassword', e.message);
@@ -27,10 +30,22 @@ export function ChangePasswordForm() {
             Every other device signed in as you has been signed out. This one stays signed in.
           </Alert>
         )}
-        {failure && <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert">{failure}</Alert>}
+        {failure && (
+          <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert">
+            {failure}
+          </Alert>
+        )}
         <PasswordInput label="Current password" autoComplete="current-password" size="lg" {...form.getInputProps('currentPassword')} />
-        <PasswordInput label="New password" description={`${MIN_PASSWORD_LENGTH} characters or more; a short sentence is easy to remember`} autoComplete="new-password" size="lg" {...form.getInputProps('newPassword')} />
-        <Button type="submit" size="lg" leftSection={<IconKey />} loading={change.isPending}>Change password</Button>
+        <PasswordInput
+          label="New password"
+          description={`${MIN_PASSWORD_LENGTH} characters or more; a short sentence is easy to remember`}
+          autoComplete="new-password"
+          size="lg"
+          {...form.getInputProps('newPassword')}
+        />
+        <Button type="submit" size="lg" leftSection={<IconKey />} loading={change.isPending}>
+          Change password
+        </Button>
       </Stack>
     </form>
   );

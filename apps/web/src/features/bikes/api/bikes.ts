@@ -23,8 +23,7 @@ export const useBikeHistory = (id: number) => useQuery(bikeHistoryQuery(id));
 export function useSaveBike(id?: number) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: BikeInput) =>
-      id ? api<BikeDto>(`/bikes/${id}`, { method: 'PATCH', body }) : api<BikeDto>('/bikes', { method: 'POST', body }),
+    mutationFn: (body: BikeInput) => (id ? api<BikeDto>(`/bikes/${id}`, { method: 'PATCH', body }) : api<BikeDto>('/bikes', { method: 'POST', body })),
     onSuccess: (b) => {
       qc.setQueryData(bikeKeys.detail(b.id), b);
       void qc.invalidateQueries({ queryKey: bikeKeys.all });

@@ -13,10 +13,16 @@ export function BikeForm({ customerId, bike, onDone }: { customerId: number; bik
   const form = useForm<BikeFormValues>({
     initialValues: bike ? bikeToForm(bike) : EMPTY_BIKE,
     // The web's one validation pattern: the contract's schema through Mantine's resolver (here after the form→input step).
-    validate: schemaResolver(z.preprocess((v) => ({ ...bikeFormToInput(v as BikeFormValues), customerId }), BikeInputSchema), { sync: true }),
+    validate: schemaResolver(
+      z.preprocess((v) => ({ ...bikeFormToInput(v as BikeFormValues), customerId }), BikeInputSchema),
+      { sync: true },
+    ),
   });
   const submit = form.onSubmit((v) =>
-    save.mutate(BikeInputSchema.parse({ ...bikeFormToInput(v), customerId }), { onSuccess: onDone, onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()) }),
+    save.mutate(BikeInputSchema.parse({ ...bikeFormToInput(v), customerId }), {
+      onSuccess: onDone,
+      onError: (e) => e instanceof ApiError && form.setErrors(e.fieldErrors()),
+    }),
   );
   const failure = save.error instanceof ApiError && save.error.code !== 'VALIDATION_FAILED' ? save.error.message : null;
   return (
@@ -24,7 +30,9 @@ export function BikeForm({ customerId, bike, onDone }: { customerId: number; bik
       <Stack>
         {failure && <Alert color="red">{failure}</Alert>}
         <BikeSpecFields field={(name) => form.getInputProps(name)} />
-        <Button type="submit" size="lg" loading={save.isPending}>{bike ? 'Save bike' : 'Add bike'}</Button>
+        <Button type="submit" size="lg" loading={save.isPending}>
+          {bike ? 'Save bike' : 'Add bike'}
+        </Button>
       </Stack>
     </form>
   );

@@ -8,13 +8,23 @@ import { useBikeHistory } from '../api/bikes';
 import { WearChart } from './wear-chart';
 
 function NextChainDue({ due }: { due: NonNullable<ReturnType<typeof useBikeHistory>['data']>['nextChainDue'] }) {
-  if (!due) return <Text size="sm" c="dimmed">Not enough chain readings yet to tell when the next chain is due.</Text>;
+  if (!due)
+    return (
+      <Text size="sm" c="dimmed">
+        Not enough chain readings yet to tell when the next chain is due.
+      </Text>
+    );
   const dueNow = !dayjs(due.dueOn).isAfter(dayjs(), 'day');
   return (
-    <Alert icon={<IconCalendarDue />} color="bench" variant="light" title={dueNow ? 'Chain due now' : `Next chain likely due around ${dayjs(due.dueOn).format('D MMM YYYY')}`}>
+    <Alert
+      icon={<IconCalendarDue />}
+      color="bench"
+      variant="light"
+      title={dueNow ? 'Chain due now' : `Next chain likely due around ${dayjs(due.dueOn).format('D MMM YYYY')}`}
+    >
       {due.basis}
-      {due.ratePctPer30Days > 0 && ` Wear rising about ${due.ratePctPer30Days.toFixed(2)} % a month towards the ${due.limitPct} % replace-at limit.`}
-      {' '}An estimate from past visits, not a promise; the chain maker's instructions govern.
+      {due.ratePctPer30Days > 0 && ` Wear rising about ${due.ratePctPer30Days.toFixed(2)} % a month towards the ${due.limitPct} % replace-at limit.`} An
+      estimate from past visits, not a promise; the chain maker's instructions govern.
     </Alert>
   );
 }
@@ -28,20 +38,48 @@ export function BikeHistoryPanel({ bikeId }: { bikeId: number }) {
     <Stack>
       <Title order={3}>Wear across visits</Title>
       <NextChainDue due={data.nextChainDue} />
-      {data.series.length === 0 ? <Text c="dimmed">No measurements recorded yet.</Text> : (
-        <SimpleGrid cols={{ base: 1, md: 2 }}>{data.series.map((s) => <WearChart key={s.key} series={s} />)}</SimpleGrid>
+      {data.series.length === 0 ? (
+        <Text c="dimmed">No measurements recorded yet.</Text>
+      ) : (
+        <SimpleGrid cols={{ base: 1, md: 2 }}>
+          {data.series.map((s) => (
+            <WearChart key={s.key} series={s} />
+          ))}
+        </SimpleGrid>
       )}
       <Title order={3}>Visits</Title>
       <Paper withBorder>
         <Table.ScrollContainer minWidth={480}>
           <Table verticalSpacing="sm">
-            <Table.Thead><Table.Tr><Table.Th>Job</Table.Th><Table.Th>Booked in</Table.Th><Table.Th>Status</Table.Th><Table.Th>Mechanic</Table.Th></Table.Tr></Table.Thead>
+            <Table.Thead>
+              <Table.Tr>
+                <Table.Th>Job</Table.Th>
+                <Table.Th>Booked in</Table.Th>
+                <Table.Th>Status</Table.Th>
+                <Table.Th>Mechanic</Table.Th>
+              </Table.Tr>
+            </Table.Thead>
             <Table.Tbody>
               {data.jobs.map((j) => (
                 <Table.Tr key={j.id}>
-                  <Table.Td><Anchor component={Link} to={`/jobs/${j.id}`} fw={700}>{j.number}</Anchor></Table.Td>
+                  <Table.Td>
+                    <Anchor component={Link} to={`/jobs/${j.id}`} fw={700}>
+                      {j.number}
+                    </Anchor>
+                  </Table.Td>
                   <Table.Td>{dayjs(j.createdAt).format('D MMM YYYY')}</Table.Td>
-                  <Table.Td><Group gap={4}><Badge variant="light" radius="sm">{JOB_STATUS_LABELS[j.status]}</Badge>{j.overdue && <Text size="sm" fw={700} c="red.8">Overdue</Text>}</Group></Table.Td>
+                  <Table.Td>
+                    <Group gap={4}>
+                      <Badge variant="light" radius="sm">
+                        {JOB_STATUS_LABELS[j.status]}
+                      </Badge>
+                      {j.overdue && (
+                        <Text size="sm" fw={700} c="red.8">
+                          Overdue
+                        </Text>
+                      )}
+                    </Group>
+                  </Table.Td>
                   <Table.Td>{j.mechanic?.name ?? '—'}</Table.Td>
                 </Table.Tr>
               ))}

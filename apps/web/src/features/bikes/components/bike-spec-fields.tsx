@@ -3,8 +3,18 @@ import type { ReactNode } from 'react';
 import { BRAKE_OPTIONS, DROPOUT_OPTIONS, FRAME_OPTIONS, ROUTING_OPTIONS } from './spec-labels';
 
 type Field =
-  | 'maker' | 'model' | 'year' | 'frameMaterial' | 'size' | 'colour' | 'serialNumber'
-  | 'drivetrainSpeeds' | 'brakeType' | 'cableRouting' | 'dropoutType' | 'tyreSize';
+  | 'maker'
+  | 'model'
+  | 'year'
+  | 'frameMaterial'
+  | 'size'
+  | 'colour'
+  | 'serialNumber'
+  | 'drivetrainSpeeds'
+  | 'brakeType'
+  | 'cableRouting'
+  | 'dropoutType'
+  | 'tyreSize';
 /** Mantine input props for one field (value, onChange, error, …). */
 type FieldGetter = (name: Field) => object;
 
@@ -18,9 +28,24 @@ function Segmented({ label, data, props }: { label: string; data: { value: strin
   const vertical = narrow && data.length > 2;
   return (
     <Stack gap={4}>
-      <Text size="sm" fw={500}>{label}</Text>
-      <SegmentedControl fullWidth size="md" orientation={vertical ? 'vertical' : 'horizontal'} data={data} value={value} onChange={onChange} aria-label={label} styles={TARGET} />
-      {error && <Text size="sm" c="red">{error}</Text>}
+      <Text size="sm" fw={500}>
+        {label}
+      </Text>
+      <SegmentedControl
+        fullWidth
+        size="md"
+        orientation={vertical ? 'vertical' : 'horizontal'}
+        data={data}
+        value={value}
+        onChange={onChange}
+        aria-label={label}
+        styles={TARGET}
+      />
+      {error && (
+        <Text size="sm" c="red">
+          {error}
+        </Text>
+      )}
     </Stack>
   );
 }
@@ -33,7 +58,16 @@ export function BikeSpecFields({ field }: { field: FieldGetter }) {
         <TextInput label="Maker" withAsterisk autoComplete="off" {...field('maker')} />
         <TextInput label="Model" withAsterisk autoComplete="off" {...field('model')} />
         <NumberInput label="Year" inputMode="numeric" allowDecimal={false} min={1900} max={2100} hideControls {...field('year')} />
-        <NumberInput label="Drivetrain speeds" description="Rear sprockets; 1 = single speed" inputMode="numeric" allowDecimal={false} min={1} max={13} withAsterisk {...field('drivetrainSpeeds')} />
+        <NumberInput
+          label="Drivetrain speeds"
+          description="Rear sprockets; 1 = single speed"
+          inputMode="numeric"
+          allowDecimal={false}
+          min={1}
+          max={13}
+          withAsterisk
+          {...field('drivetrainSpeeds')}
+        />
         <Select label="Frame material" data={FRAME_OPTIONS} allowDeselect={false} {...field('frameMaterial')} />
         <TextInput label="Size" placeholder="e.g. 56, M" {...field('size')} />
         <TextInput label="Colour" {...field('colour')} />

@@ -5,7 +5,9 @@ import { BRAKE_TYPE_LABELS, CABLE_ROUTING_LABELS, DROPOUT_TYPE_LABELS, FRAME_MAT
 function Spec({ label, value }: { label: string; value: string }) {
   return (
     <Stack gap={0}>
-      <Text size="xs" tt="uppercase" c="dimmed" fw={700}>{label}</Text>
+      <Text size="xs" tt="uppercase" c="dimmed" fw={700}>
+        {label}
+      </Text>
       <Text>{value || '—'}</Text>
     </Stack>
   );

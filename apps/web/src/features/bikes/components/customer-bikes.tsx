@@ -13,8 +13,12 @@ export function CustomerBikes({ customerId }: { customerId: number }) {
     <SimpleGrid cols={{ base: 1, sm: 2, lg: 3 }}>
       {bikes.data.map((b) => (
         <Card key={b.id} withBorder padding="md">
-          <Anchor component={Link} to={`/bikes/${b.id}`} fw={700} size="lg">{bikeLabel(b)}</Anchor>
-          <Text size="sm" c="dimmed">{[b.colour, b.size, `${b.drivetrainSpeeds}-speed`, BRAKE_TYPE_LABELS[b.brakeType]].filter(Boolean).join(' · ')}</Text>
+          <Anchor component={Link} to={`/bikes/${b.id}`} fw={700} size="lg">
+            {bikeLabel(b)}
+          </Anchor>
+          <Text size="sm" c="dimmed">
+            {[b.colour, b.size, `${b.drivetrainSpeeds}-speed`, BRAKE_TYPE_LABELS[b.brakeType]].filter(Boolean).join(' · ')}
+          </Text>
         </Card>
       ))}
     </SimpleGrid>

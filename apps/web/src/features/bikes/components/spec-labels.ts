@@ -36,8 +36,18 @@ export interface BikeFormValues {
 }
 
 export const EMPTY_BIKE: BikeFormValues = {
-  maker: '', model: '', year: '', frameMaterial: 'aluminium', size: '', colour: '', serialNumber: '',
-  drivetrainSpeeds: 11, brakeType: 'hydraulic_disc', cableRouting: 'external', dropoutType: 'vertical', tyreSize: '',
+  maker: '',
+  model: '',
+  year: '',
+  frameMaterial: 'aluminium',
+  size: '',
+  colour: '',
+  serialNumber: '',
+  drivetrainSpeeds: 11,
+  brakeType: 'hydraulic_disc',
+  cableRouting: 'external',
+  dropoutType: 'vertical',
+  tyreSize: '',
 };
 
 /** Form values → what the contract's bike schemas parse (empty year = unknown, empty texts = none). */

@@ -10,9 +10,27 @@ export function CustomerCard({ customer, actions }: { customer: CustomerDto; act
       <Group justify="space-between" align="flex-start">
         <Stack gap={4}>
           <Title order={2}>{customer.name}</Title>
-          {customer.phone && <Anchor href={`tel:${customer.phone}`}><Group gap={6} component="span"><IconPhone size={18} />{customer.phone}</Group></Anchor>}
-          {customer.email && <Anchor href={`mailto:${customer.email}`}><Group gap={6} component="span"><IconMail size={18} />{customer.email}</Group></Anchor>}
-          {customer.notes && <Text size="sm" c="dimmed" style={{ whiteSpace: 'pre-wrap' }}>{customer.notes}</Text>}
+          {customer.phone && (
+            <Anchor href={`tel:${customer.phone}`}>
+              <Group gap={6} component="span">
+                <IconPhone size={18} />
+                {customer.phone}
+              </Group>
+            </Anchor>
+          )}
+          {customer.email && (
+            <Anchor href={`mailto:${customer.email}`}>
+              <Group gap={6} component="span">
+                <IconMail size={18} />
+                {customer.email}
+              </Group>
+            </Anchor>
+          )}
+          {customer.notes && (
+            <Text size="sm" c="dimmed" style={{ whiteSpace: 'pre-wrap' }}>
+              {customer.notes}
+            </Text>
+          )}
         </Stack>
         {actions}
       </Group>

@@ -11,9 +11,22 @@ function ChannelPicker({ props }: { props: object }) {
   const { value, onChange, error } = props as { value: string; onChange: (v: string) => void; error?: ReactNode };
   return (
     <Stack gap={4}>
-      <Text size="sm" fw={500}>How they like to be reached</Text>
-      <SegmentedControl fullWidth size="md" data={CONTACT_CHANNELS.map((c) => ({ value: c, label: CHANNEL_LABELS[c] }))} value={value} onChange={onChange} aria-label="Preferred channel" />
-      {error && <Text size="sm" c="red">{error}</Text>}
+      <Text size="sm" fw={500}>
+        How they like to be reached
+      </Text>
+      <SegmentedControl
+        fullWidth
+        size="md"
+        data={CONTACT_CHANNELS.map((c) => ({ value: c, label: CHANNEL_LABELS[c] }))}
+        value={value}
+        onChange={onChange}
+        aria-label="Preferred channel"
+      />
+      {error && (
+        <Text size="sm" c="red">
+          {error}
+        </Text>
+      )}
     </Stack>
   );
 }

@@ -22,7 +22,9 @@ export function CustomerForm({ customer, onDone }: { customer?: CustomerDto; onD
       <Stack>
         {failure && <Alert color="red">{failure}</Alert>}
         <CustomerFields field={(name) => form.getInputProps(name)} />
-        <Button type="submit" size="lg" loading={save.isPending}>{customer ? 'Save changes' : 'Add customer'}</Button>
+        <Button type="submit" size="lg" loading={save.isPending}>
+          {customer ? 'Save changes' : 'Add customer'}
+        </Button>
       </Stack>
     </form>
   );

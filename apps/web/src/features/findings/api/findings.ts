@@ -16,8 +16,10 @@ export const findingKeys = {
   estimate: (jobId: number) => ['jobs', 'detail', jobId, 'estimate'] as const,
 };
 
-export const findingsQuery = (jobId: number) => queryOptions({ queryKey: findingKeys.ofJob(jobId), queryFn: () => api<FindingDto[]>(`/jobs/${jobId}/findings`) });
-export const estimateQuery = (jobId: number) => queryOptions({ queryKey: findingKeys.estimate(jobId), queryFn: () => api<EstimateDto>(`/jobs/${jobId}/estimate`) });
+export const findingsQuery = (jobId: number) =>
+  queryOptions({ queryKey: findingKeys.ofJob(jobId), queryFn: () => api<FindingDto[]>(`/jobs/${jobId}/findings`) });
+export const estimateQuery = (jobId: number) =>
+  queryOptions({ queryKey: findingKeys.estimate(jobId), queryFn: () => api<EstimateDto>(`/jobs/${jobId}/estimate`) });
 
 export const useFindings = (jobId: number) => useQuery(findingsQuery(jobId));
 export const useEstimate = (jobId: number) => useQuery(estimateQuery(jobId));
@@ -27,7 +29,8 @@ function useFindingMutation<B, R>(jobId: number, call: (body: B) => Promise<R>) 
   const qc = useQueryClient();
   return useMutation({
     mutationFn: call,
-    onSettled: () => Promise.all([qc.invalidateQueries({ queryKey: findingKeys.ofJob(jobId) }), qc.invalidateQueries({ queryKey: findingKeys.estimate(jobId) })]),
+    onSettled: () =>
+      Promise.all([qc.invalidateQueries({ queryKey: findingKeys.ofJob(jobId) }), qc.invalidateQueries({ queryKey: findingKeys.estimate(jobId) })]),
   });
 }
 

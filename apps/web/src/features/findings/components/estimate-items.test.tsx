@@ -7,13 +7,38 @@ import { EstimateItems } from './estimate-items';
 
 const totals = { partsMinor: 0, labourMinor: 3000, netMinor: 3000, taxMinor: 600, grossMinor: 3600 };
 
-function item(id: number, summary: string, urgency: 'safety' | 'soon' | 'advisory', decisionStatus: 'pending' | 'approved' | 'declined', condition: 'sound' | 'wearing' | 'worn' | 'unsafe' = 'worn') {
+function item(
+  id: number,
+  summary: string,
+  urgency: 'safety' | 'soon' | 'advisory',
+  decisionStatus: 'pending' | 'approved' | 'declined',
+  condition: 'sound' | 'wearing' | 'worn' | 'unsafe' = 'worn',
+) {
   return {
-    id, jobId: 1, checkpointId: null, area: 'brakes' as const, condition, description: summary, doNotRide: condition === 'unsafe', cautions: [],
-    createdAt: '2025-01-01T10:00:00.000Z', updatedAt: '2025-01-01T10:00:00.000Z',
+    id,
+    jobId: 1,
+    checkpointId: null,
+    area: 'brakes' as const,
+    condition,
+    description: summary,
+    doNotRide: condition === 'unsafe',
+    cautions: [],
+    createdAt: '2025-01-01T10:00:00.000Z',
+    updatedAt: '2025-01-01T10:00:00.000Z',
     recommendation: {
-      id, findingId: id, summary, urgency, parts: [], labourHundredths: 50, labourRateMinor: 6000, taxRateBp: 2000, currency: 'GBP', totals,
-      decisionStatus, decisions: [], updatedAt: '2025-01-01T10:00:00.000Z',
+      id,
+      findingId: id,
+      summary,
+      urgency,
+      parts: [],
+      labourHundredths: 50,
+      labourRateMinor: 6000,
+      taxRateBp: 2000,
+      currency: 'GBP',
+      totals,
+      decisionStatus,
+      decisions: [],
+      updatedAt: '2025-01-01T10:00:00.000Z',
     },
   };
 }

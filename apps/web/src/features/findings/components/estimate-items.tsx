@@ -18,15 +18,23 @@ function EstimateLine({ item, currency }: { item: Item; currency: string }) {
         <Group justify="space-between" wrap="nowrap">
           <Stack gap={0}>
             <Text fw={600}>{r.summary}</Text>
-            <Text size="xs" c="dimmed">{INSPECTION_AREA_LABELS[item.area]}</Text>
+            <Text size="xs" c="dimmed">
+              {INSPECTION_AREA_LABELS[item.area]}
+            </Text>
           </Stack>
           <Group gap="xs" wrap="nowrap">
             <UrgencyBadge urgency={r.urgency} />
-            <Badge color={DECISION_COLOURS[r.decisionStatus]} variant="filled" radius="sm">{DECISION_LABELS[r.decisionStatus]}</Badge>
+            <Badge color={DECISION_COLOURS[r.decisionStatus]} variant="filled" radius="sm">
+              {DECISION_LABELS[r.decisionStatus]}
+            </Badge>
             <Text fw={700}>{formatMoney(r.totals.grossMinor, currency)}</Text>
           </Group>
         </Group>
-        {isDeclinedSafety(r.urgency, r.decisionStatus, item.condition) && <Alert color="red" variant="filled" p="xs">{DECLINED_SAFETY_NOTICE}</Alert>}
+        {isDeclinedSafety(r.urgency, r.decisionStatus, item.condition) && (
+          <Alert color="red" variant="filled" p="xs">
+            {DECLINED_SAFETY_NOTICE}
+          </Alert>
+        )}
       </Stack>
     </Paper>
   );
@@ -39,8 +47,12 @@ export function EstimateItems({ estimate }: { estimate: EstimateDto }) {
     <Stack gap="sm">
       {groups.map((g) => (
         <Stack key={g.urgency} gap={6} role="group" aria-label={URGENCY_LABELS[g.urgency]}>
-          <Title order={4} size="h5">{URGENCY_LABELS[g.urgency]}</Title>
-          {g.items.map((i) => <EstimateLine key={i.recommendation.id} item={i} currency={estimate.currency} />)}
+          <Title order={4} size="h5">
+            {URGENCY_LABELS[g.urgency]}
+          </Title>
+          {g.items.map((i) => (
+            <EstimateLine key={i.recommendation.id} item={i} currency={estimate.currency} />
+          ))}
         </Stack>
       ))}
     </Stack>

@@ -10,8 +10,12 @@ export interface ShopRates {
 function Row({ label, value, strong }: { label: string; value: string; strong?: boolean }) {
   return (
     <Group justify="space-between">
-      <Text size={strong ? 'lg' : 'sm'} fw={strong ? 800 : 500}>{label}</Text>
-      <Text size={strong ? 'lg' : 'sm'} fw={strong ? 800 : 500}>{value}</Text>
+      <Text size={strong ? 'lg' : 'sm'} fw={strong ? 800 : 500}>
+        {label}
+      </Text>
+      <Text size={strong ? 'lg' : 'sm'} fw={strong ? 800 : 500}>
+        {value}
+      </Text>
     </Group>
   );
 }
@@ -22,7 +26,12 @@ export function EstimatePreview({ lines, rates }: { lines: EstimateLine[]; rates
   try {
     totals = estimateTotals(lines, rates.taxRateBp);
   } catch (e) {
-    if (isDomainInputError(e)) return <Text c="red" size="sm">{e.message}</Text>;
+    if (isDomainInputError(e))
+      return (
+        <Text c="red" size="sm">
+          {e.message}
+        </Text>
+      );
     throw e;
   }
   const c = rates.currency;

@@ -7,9 +7,15 @@ import { formatMoney } from '@benchproof/domain';
 function Total({ label, minor, currency, hint }: { label: string; minor: number; currency: string; hint: string }) {
   return (
     <Paper withBorder p="sm">
-      <Text size="xs" tt="uppercase" fw={700} c="dimmed">{label}</Text>
-      <Text fz="xl" fw={800}>{formatMoney(minor, currency)}</Text>
-      <Text size="xs" c="dimmed">{hint}</Text>
+      <Text size="xs" tt="uppercase" fw={700} c="dimmed">
+        {label}
+      </Text>
+      <Text fz="xl" fw={800}>
+        {formatMoney(minor, currency)}
+      </Text>
+      <Text size="xs" c="dimmed">
+        {hint}
+      </Text>
     </Paper>
   );
 }

@@ -14,7 +14,6 @@ import { FindingForm } from './finding-form';
 import { RecommendationEditor } from './recommendation-editor';
 import { UrgencyBadge } from './urgency-badge';
 
-
 export interface FindingCardProps {
   jobId: number;
   finding: FindingDto;
@@ -31,16 +30,34 @@ export interface FindingCardProps {
 
 function Recommendation({ finding }: { finding: FindingDto }) {
   const r = finding.recommendation;
-  if (!r) return <Text size="sm" c="dimmed">No recommendation priced yet.</Text>;
+  if (!r)
+    return (
+      <Text size="sm" c="dimmed">
+        No recommendation priced yet.
+      </Text>
+    );
   return (
     <Stack gap={4}>
       <Group justify="space-between" wrap="nowrap">
         <Text fw={600}>{r.summary}</Text>
-        <Badge color={DECISION_COLOURS[r.decisionStatus]} variant="filled" radius="sm" size="lg">{DECISION_LABELS[r.decisionStatus]}</Badge>
+        <Badge color={DECISION_COLOURS[r.decisionStatus]} variant="filled" radius="sm" size="lg">
+          {DECISION_LABELS[r.decisionStatus]}
+        </Badge>
       </Group>
-      {r.parts.map((p, i) => <Text key={i} size="sm">{p.qty} × {p.description} — {formatMoney(p.totalMinor, r.currency)}</Text>)}
-      <Text size="sm">Labour {(r.labourHundredths / 100).toLocaleString('en-GB')} h — {formatMoney(r.totals.labourMinor, r.currency)}</Text>
-      <Text fw={800}>Total {formatMoney(r.totals.grossMinor, r.currency)} <Text span size="xs" c="dimmed">incl. tax {formatMoney(r.totals.taxMinor, r.currency)}</Text></Text>
+      {r.parts.map((p, i) => (
+        <Text key={i} size="sm">
+          {p.qty} × {p.description} — {formatMoney(p.totalMinor, r.currency)}
+        </Text>
+      ))}
+      <Text size="sm">
+        Labour {(r.labourHundredths / 100).toLocaleString('en-GB')} h — {formatMoney(r.totals.labourMinor, r.currency)}
+      </Text>
+      <Text fw={800}>
+        Total {formatMoney(r.totals.grossMinor, r.currency)}{' '}
+        <Text span size="xs" c="dimmed">
+          incl. tax {formatMoney(r.totals.taxMinor, r.currency)}
+        </Text>
+      </Text>
     </Stack>
   );
 }
@@ -58,29 +75,58 @@ export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerNa
       <Stack gap="sm">
         <Group justify="space-between" align="flex-start">
           <Stack gap={2}>
-            <Text size="xs" tt="uppercase" fw={700} c="dimmed">{INSPECTION_AREA_LABELS[finding.area]}</Text>
+            <Text size="xs" tt="uppercase" fw={700} c="dimmed">
+              {INSPECTION_AREA_LABELS[finding.area]}
+            </Text>
             <ConditionBadge condition={finding.condition} />
           </Stack>
           <UrgencyBadge urgency={urgency} />
         </Group>
         <Text style={{ whiteSpace: 'pre-wrap' }}>{finding.description}</Text>
         {evidence?.(finding.id)}
-        {finding.cautions.map((c) => <SafetyNote key={c} text={c} />)}
-        {declinedUnsafe && <Alert color="red" variant="filled">{DECLINED_SAFETY_NOTICE}</Alert>}
+        {finding.cautions.map((c) => (
+          <SafetyNote key={c} text={c} />
+        ))}
+        {declinedUnsafe && (
+          <Alert color="red" variant="filled">
+            {DECLINED_SAFETY_NOTICE}
+          </Alert>
+        )}
         <Recommendation finding={finding} />
         {finding.recommendation && <DecisionHistory decisions={finding.recommendation.decisions} staffName={staffName} />}
         <Group gap="xs">
-          {canEdit && <Button variant="default" leftSection={<IconEdit size={18} />} onClick={editModal.open}>Edit</Button>}
-          <Button variant="light" leftSection={<IconReceipt size={18} />} onClick={priceModal.open}>{finding.recommendation ? 'Change price' : 'Price it'}</Button>
-          {canDecide && finding.recommendation && <Button leftSection={<IconMessageCircle size={18} />} onClick={decideModal.open}>Record owner’s answer</Button>}
+          {canEdit && (
+            <Button variant="default" leftSection={<IconEdit size={18} />} onClick={editModal.open}>
+              Edit
+            </Button>
+          )}
+          <Button variant="light" leftSection={<IconReceipt size={18} />} onClick={priceModal.open}>
+            {finding.recommendation ? 'Change price' : 'Price it'}
+          </Button>
+          {canDecide && finding.recommendation && (
+            <Button leftSection={<IconMessageCircle size={18} />} onClick={decideModal.open}>
+              Record owner’s answer
+            </Button>
+          )}
         </Group>
       </Stack>
-      <Modal opened={edit} onClose={editModal.close} title="Edit finding" size="lg"><FindingForm jobId={jobId} finding={finding} onDone={editModal.close} /></Modal>
+      <Modal opened={edit} onClose={editModal.close} title="Edit finding" size="lg">
+        <FindingForm jobId={jobId} finding={finding} onDone={editModal.close} />
+      </Modal>
       <Modal opened={price} onClose={priceModal.close} title="Recommendation and price" size="lg" fullScreen={false}>
-        <RecommendationEditor jobId={jobId} findingId={finding.id} condition={finding.condition} current={finding.recommendation} rates={rates} onDone={priceModal.close} />
+        <RecommendationEditor
+          jobId={jobId}
+          findingId={finding.id}
+          condition={finding.condition}
+          current={finding.recommendation}
+          rates={rates}
+          onDone={priceModal.close}
+        />
       </Modal>
       <Modal opened={decide} onClose={decideModal.close} title="Owner’s decision" size="lg">
-        {finding.recommendation && <DecisionForm jobId={jobId} recommendationId={finding.recommendation.id} ownerName={ownerName} recorderName={me.name} onDone={decideModal.close} />}
+        {finding.recommendation && (
+          <DecisionForm jobId={jobId} recommendationId={finding.recommendation.id} ownerName={ownerName} recorderName={me.name} onDone={decideModal.close} />
+        )}
       </Modal>
     </Card>
   );

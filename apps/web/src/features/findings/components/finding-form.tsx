@@ -12,7 +12,12 @@ const AREA_OPTIONS = INSPECTION_AREAS.map((a) => ({ value: a, label: INSPECTION_
 export function FindingForm({ jobId, finding, onDone }: { jobId: number; finding?: FindingDto; onDone: () => void }) {
   const save = useSaveFinding(jobId, finding?.id);
   const form = useForm<CreateFindingRequest>({
-    initialValues: { area: finding?.area ?? 'drivetrain', condition: finding?.condition ?? 'worn', description: finding?.description ?? '', checkpointId: finding?.checkpointId ?? null },
+    initialValues: {
+      area: finding?.area ?? 'drivetrain',
+      condition: finding?.condition ?? 'worn',
+      description: finding?.description ?? '',
+      checkpointId: finding?.checkpointId ?? null,
+    },
     validate: schemaResolver(CreateFindingRequestSchema, { sync: true }),
   });
   const submit = form.onSubmit((v) => save.mutate(v, { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e) }));
@@ -23,11 +28,22 @@ export function FindingForm({ jobId, finding, onDone }: { jobId: number; finding
         {failure && <Alert color="red">{failure}</Alert>}
         <Select label="Area" data={AREA_OPTIONS} allowDeselect={false} {...form.getInputProps('area')} />
         <Stack gap={4}>
-          <Text size="sm" fw={500}>Condition</Text>
+          <Text size="sm" fw={500}>
+            Condition
+          </Text>
           <ConditionPicker label="Condition" value={form.getValues().condition} onChange={(c) => form.setFieldValue('condition', c)} />
         </Stack>
-        <Textarea label="What is wrong" description="In words the owner will understand" autosize minRows={3} withAsterisk {...form.getInputProps('description')} />
-        <Button type="submit" size="lg" loading={save.isPending}>{finding ? 'Save finding' : 'Add finding'}</Button>
+        <Textarea
+          label="What is wrong"
+          description="In words the owner will understand"
+          autosize
+          minRows={3}
+          withAsterisk
+          {...form.getInputProps('description')}
+        />
+        <Button type="submit" size="lg" loading={save.isPending}>
+          {finding ? 'Save finding' : 'Add finding'}
+        </Button>
       </Stack>
     </form>
   );

@@ -17,13 +17,23 @@ export function FindingsPanel(props: Props) {
     <Stack>
       <EstimateSummary jobId={props.jobId} />
       <Group justify="space-between">
-        <Title order={3} size="h4">Findings</Title>
-        {props.canEdit && <Button leftSection={<IconPlus />} onClick={add.open}>Add finding</Button>}
+        <Title order={3} size="h4">
+          Findings
+        </Title>
+        {props.canEdit && (
+          <Button leftSection={<IconPlus />} onClick={add.open}>
+            Add finding
+          </Button>
+        )}
       </Group>
       <QueryState isLoading={findings.isLoading} error={findings.error} />
       {findings.data?.length === 0 && <Text c="dimmed">Nothing found yet. Findings from the inspection go here with their price.</Text>}
-      {findings.data?.map((f) => <FindingCard key={f.id} finding={f} {...props} />)}
-      <Modal opened={adding} onClose={add.close} title="Add a finding" size="lg"><FindingForm jobId={props.jobId} onDone={add.close} /></Modal>
+      {findings.data?.map((f) => (
+        <FindingCard key={f.id} finding={f} {...props} />
+      ))}
+      <Modal opened={adding} onClose={add.close} title="Add a finding" size="lg">
+        <FindingForm jobId={props.jobId} onDone={add.close} />
+      </Modal>
     </Stack>
   );
 }

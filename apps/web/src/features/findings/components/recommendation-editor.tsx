@@ -1,5 +1,14 @@
 import { RecommendationRequestSchema, type RecommendationDto } from '@benchproof/contracts';
-import { defaultUrgency, URGENCIES, URGENCY_LABELS, type Condition, type EstimateLine, type Urgency, majorTextToMinor, minorToMajorText } from '@benchproof/domain';
+import {
+  defaultUrgency,
+  URGENCIES,
+  URGENCY_LABELS,
+  type Condition,
+  type EstimateLine,
+  type Urgency,
+  majorTextToMinor,
+  minorToMajorText,
+} from '@benchproof/domain';
 import { ActionIcon, Alert, Button, Group, NumberInput, Paper, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconPlus, IconTrash } from '@tabler/icons-react';
@@ -48,7 +57,9 @@ function PartLine({ form, i, currency }: { form: UseFormReturnType<Values>; i: n
       <Stack gap="xs">
         <Group gap="xs" wrap="nowrap" align="flex-end">
           <TextInput label="Part" style={{ flex: 1 }} {...form.getInputProps(`parts.${i}.description`)} />
-          <ActionIcon size={44} variant="light" color="red" aria-label="Remove part" onClick={() => form.removeListItem('parts', i)}><IconTrash /></ActionIcon>
+          <ActionIcon size={44} variant="light" color="red" aria-label="Remove part" onClick={() => form.removeListItem('parts', i)}>
+            <IconTrash />
+          </ActionIcon>
         </Group>
         <Group grow gap="xs">
           <NumberInput label="Qty" inputMode="decimal" min={0} step={1} decimalScale={4} {...form.getInputProps(`parts.${i}.qty`)} />
@@ -60,7 +71,21 @@ function PartLine({ form, i, currency }: { form: UseFormReturnType<Values>; i: n
 }
 
 /** Parts and labour for one finding, priced live at the shop's rates. */
-export function RecommendationEditor({ jobId, findingId, condition, current, rates, onDone }: { jobId: number; findingId: number; condition: Condition; current: RecommendationDto | null; rates: ShopRates; onDone: () => void }) {
+export function RecommendationEditor({
+  jobId,
+  findingId,
+  condition,
+  current,
+  rates,
+  onDone,
+}: {
+  jobId: number;
+  findingId: number;
+  condition: Condition;
+  current: RecommendationDto | null;
+  rates: ShopRates;
+  onDone: () => void;
+}) {
   const save = useSaveRecommendation(jobId, findingId);
   const form = useForm<Values>({
     mode: 'controlled',
@@ -72,7 +97,12 @@ export function RecommendationEditor({ jobId, findingId, condition, current, rat
     },
     validate: contractResolver(RecommendationRequestSchema, (v: Values) => toRequest(v, rates.currency), toField),
   });
-  const submit = form.onSubmit((v) => save.mutate(RecommendationRequestSchema.parse(toRequest(v, rates.currency)), { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e, toField) }));
+  const submit = form.onSubmit((v) =>
+    save.mutate(RecommendationRequestSchema.parse(toRequest(v, rates.currency)), {
+      onSuccess: onDone,
+      onError: (e) => showServerFieldErrors(form, e, toField),
+    }),
+  );
   const failure = formFailure(save.error);
   const values = form.getValues();
   return (
@@ -81,17 +111,40 @@ export function RecommendationEditor({ jobId, findingId, condition, current, rat
         {failure && <Alert color="red">{failure}</Alert>}
         <TextInput label="What we recommend" withAsterisk {...form.getInputProps('summary')} />
         <Stack gap={4}>
-          <Text size="sm" fw={500} id={`urgency-${findingId}`}>Urgency</Text>
+          <Text size="sm" fw={500} id={`urgency-${findingId}`}>
+            Urgency
+          </Text>
           <SegmentedControl fullWidth size="md" data={URGENCY_OPTIONS} aria-labelledby={`urgency-${findingId}`} {...form.getInputProps('urgency')} />
-          <Text size="xs" c="dimmed">Starts from the finding’s condition; change it if the work is more or less pressing.</Text>
+          <Text size="xs" c="dimmed">
+            Starts from the finding’s condition; change it if the work is more or less pressing.
+          </Text>
         </Stack>
         <Text fw={600}>Parts</Text>
-        {values.parts.map((_, i) => <PartLine key={i} form={form as unknown as UseFormReturnType<Values>} i={i} currency={rates.currency} />)}
-        <Button variant="light" leftSection={<IconPlus />} onClick={() => form.insertListItem('parts', emptyPart())}>Add a part</Button>
-        <NumberInput label="Labour hours" description="In quarter hours" inputMode="decimal" min={0} step={0.25} decimalScale={2} size="lg" {...form.getInputProps('hours')} />
-        <Paper withBorder p="sm" bg="gray.0"><EstimatePreview lines={linesOf(values, rates)} rates={rates} /></Paper>
-        <Text size="xs" c="dimmed">Prices are net; tax is added once on the total. The server stores the figures with the rates of today.</Text>
-        <Button type="submit" size="lg" loading={save.isPending}>Save recommendation</Button>
+        {values.parts.map((_, i) => (
+          <PartLine key={i} form={form as unknown as UseFormReturnType<Values>} i={i} currency={rates.currency} />
+        ))}
+        <Button variant="light" leftSection={<IconPlus />} onClick={() => form.insertListItem('parts', emptyPart())}>
+          Add a part
+        </Button>
+        <NumberInput
+          label="Labour hours"
+          description="In quarter hours"
+          inputMode="decimal"
+          min={0}
+          step={0.25}
+          decimalScale={2}
+          size="lg"
+          {...form.getInputProps('hours')}
+        />
+        <Paper withBorder p="sm" bg="gray.0">
+          <EstimatePreview lines={linesOf(values, rates)} rates={rates} />
+        </Paper>
+        <Text size="xs" c="dimmed">
+          Prices are net; tax is added once on the total. The server stores the figures with the rates of today.
+        </Text>
+        <Button type="submit" size="lg" loading={save.isPending}>
+          Save recommendation
+        </Button>
       </Stack>
     </form>
   );

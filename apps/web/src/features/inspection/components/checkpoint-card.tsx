@@ -28,7 +28,12 @@ function SavedReadings({ checkpoint }: { checkpoint: CheckpointDto }) {
       {checkpoint.measurements.map((m) => (
         <Group key={m.id} gap="xs" wrap="nowrap" align="flex-start">
           <ConditionBadge condition={m.result.condition} size="sm" />
-          <Text size="sm">{m.result.message} <Text span c="dimmed" size="xs">({dayjs(m.at).format('D MMM HH:mm')})</Text></Text>
+          <Text size="sm">
+            {m.result.message}{' '}
+            <Text span c="dimmed" size="xs">
+              ({dayjs(m.at).format('D MMM HH:mm')})
+            </Text>
+          </Text>
         </Group>
       ))}
     </Stack>
@@ -46,14 +51,30 @@ function Readings(props: Props) {
     <Stack gap="xs">
       <SavedReadings checkpoint={checkpoint} />
       <UnstyledButton onClick={toggle} mih={44} aria-expanded={opened}>
-        <Group gap={6}><IconRuler2 size={20} /><Text fw={600}>{checkpoint.measurements.length ? 'Take another reading' : 'Enter the reading'}</Text><IconChevronDown size={18} /></Group>
+        <Group gap={6}>
+          <IconRuler2 size={20} />
+          <Text fw={600}>{checkpoint.measurements.length ? 'Take another reading' : 'Enter the reading'}</Text>
+          <IconChevronDown size={18} />
+        </Group>
       </UnstyledButton>
       <Collapse expanded={opened}>
         <Stack>
           {checkpoint.measurementKinds.map((kind) => (
-            <MeasurementForm key={`${kind}-${round}`} kind={kind} ctx={{ checkpointKey: checkpoint.key, lengthUnit }} speeds={speeds} chainPolicy={chainPolicy} saving={add.isPending} onSave={(input) => add.mutate(input, { onSuccess: () => setRound((r) => r + 1) })} />
+            <MeasurementForm
+              key={`${kind}-${round}`}
+              kind={kind}
+              ctx={{ checkpointKey: checkpoint.key, lengthUnit }}
+              speeds={speeds}
+              chainPolicy={chainPolicy}
+              saving={add.isPending}
+              onSave={(input) => add.mutate(input, { onSuccess: () => setRound((r) => r + 1) })}
+            />
           ))}
-          {add.error && <Alert color="red" role="alert">{formFailure(add.error)}</Alert>}
+          {add.error && (
+            <Alert color="red" role="alert">
+              {formFailure(add.error)}
+            </Alert>
+          )}
         </Stack>
       </Collapse>
     </Stack>
@@ -70,12 +91,34 @@ export function CheckpointCard(props: Props) {
       <Stack gap="sm">
         <Group justify="space-between" wrap="nowrap" align="flex-start">
           <Text fw={700}>{checkpoint.label}</Text>
-          {checkpoint.safetyCritical && <Badge color="brass" variant="light" radius="sm" style={{ flexShrink: 0 }}>Safety</Badge>}
+          {checkpoint.safetyCritical && (
+            <Badge color="brass" variant="light" radius="sm" style={{ flexShrink: 0 }}>
+              Safety
+            </Badge>
+          )}
         </Group>
-        <ConditionPicker label={`Condition of ${checkpoint.label}`} value={checkpoint.condition} disabled={update.isPending || !canRecord} onChange={(condition) => update.mutate({ condition })} />
+        <ConditionPicker
+          label={`Condition of ${checkpoint.label}`}
+          value={checkpoint.condition}
+          disabled={update.isPending || !canRecord}
+          onChange={(condition) => update.mutate({ condition })}
+        />
         <Readings {...props} />
-        <Textarea aria-label={`Notes on ${checkpoint.label}`} placeholder="Notes" readOnly={!canRecord} autosize minRows={1} value={notes} onChange={(e) => setNotes(e.currentTarget.value)} onBlur={() => notes !== checkpoint.notes && update.mutate({ notes })} />
-        {update.error && <Alert color="red" role="alert">{formFailure(update.error)}</Alert>}
+        <Textarea
+          aria-label={`Notes on ${checkpoint.label}`}
+          placeholder="Notes"
+          readOnly={!canRecord}
+          autosize
+          minRows={1}
+          value={notes}
+          onChange={(e) => setNotes(e.currentTarget.value)}
+          onBlur={() => notes !== checkpoint.notes && update.mutate({ notes })}
+        />
+        {update.error && (
+          <Alert color="red" role="alert">
+            {formFailure(update.error)}
+          </Alert>
+        )}
       </Stack>
     </Card>
   );

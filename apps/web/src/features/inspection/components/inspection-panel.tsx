@@ -16,9 +16,18 @@ function Counts({ area }: { area: Area }) {
   return (
     <Group gap={8} wrap="wrap">
       {counts.map(([c, n]) => (
-        <Group key={c} gap={2} wrap="nowrap" aria-label={`${n} ${c}`}><ConditionGlyph condition={c} size={16} /><Text size="sm" fw={600}>{n}</Text></Group>
+        <Group key={c} gap={2} wrap="nowrap" aria-label={`${n} ${c}`}>
+          <ConditionGlyph condition={c} size={16} />
+          <Text size="sm" fw={600}>
+            {n}
+          </Text>
+        </Group>
       ))}
-      {open > 0 && <Text size="sm" c="dimmed">{open} to check</Text>}
+      {open > 0 && (
+        <Text size="sm" c="dimmed">
+          {open} to check
+        </Text>
+      )}
     </Group>
   );
 }
@@ -40,7 +49,9 @@ export function InspectionPanel({ jobId, chainPolicy, lengthUnit, carbonFrame, c
   return (
     <Stack>
       <Stack gap={4}>
-        <Text fw={600}>{data.inspected} of {data.total} checkpoints done · {data.drivetrainSpeeds === 1 ? 'single speed' : `${data.drivetrainSpeeds}-speed`} chain limits</Text>
+        <Text fw={600}>
+          {data.inspected} of {data.total} checkpoints done · {data.drivetrainSpeeds === 1 ? 'single speed' : `${data.drivetrainSpeeds}-speed`} chain limits
+        </Text>
         <Progress value={data.total ? (100 * data.inspected) / data.total : 0} aria-label="Inspection progress" size="lg" />
       </Stack>
       <Accordion variant="separated" multiple chevronPosition="right">
@@ -57,8 +68,20 @@ export function InspectionPanel({ jobId, chainPolicy, lengthUnit, carbonFrame, c
             </Accordion.Control>
             <Accordion.Panel>
               <Stack>
-                {areaCautions(area.area, area.cautions, carbonFrame).map((t) => <SafetyNote key={t} text={t} />)}
-                {area.checkpoints.map((cp) => <CheckpointCard key={cp.id} jobId={jobId} checkpoint={cp} speeds={data.drivetrainSpeeds} chainPolicy={chainPolicy} lengthUnit={lengthUnit} canRecord={canRecord} />)}
+                {areaCautions(area.area, area.cautions, carbonFrame).map((t) => (
+                  <SafetyNote key={t} text={t} />
+                ))}
+                {area.checkpoints.map((cp) => (
+                  <CheckpointCard
+                    key={cp.id}
+                    jobId={jobId}
+                    checkpoint={cp}
+                    speeds={data.drivetrainSpeeds}
+                    chainPolicy={chainPolicy}
+                    lengthUnit={lengthUnit}
+                    canRecord={canRecord}
+                  />
+                ))}
               </Stack>
             </Accordion.Panel>
           </Accordion.Item>

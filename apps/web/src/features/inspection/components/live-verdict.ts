@@ -1,9 +1,7 @@
 import { assessMeasurement, isDomainInputError, readChainElongation, type ChainLimitPolicy, type Condition, type MeasurementInput } from '@benchproof/domain';
 
 export type LiveVerdict =
-  | { state: 'empty' }
-  | { state: 'error'; message: string }
-  | { state: 'ok'; condition: Condition; verdict: string; message: string; headline: string | null };
+  { state: 'empty' } | { state: 'error'; message: string } | { state: 'ok'; condition: Condition; verdict: string; message: string; headline: string | null };
 
 const pctText = (pct: number) => pct.toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 3, useGrouping: false });
 

@@ -11,7 +11,9 @@ function Field({ spec, value, onChange }: { spec: FieldSpec; value: string; onCh
   if (spec.type === 'choice') {
     return (
       <Stack gap={4}>
-        <Text size="sm" fw={500}>{spec.label}</Text>
+        <Text size="sm" fw={500}>
+          {spec.label}
+        </Text>
         <SegmentedControl fullWidth size="md" data={spec.options} value={value} onChange={onChange} aria-label={spec.label} />
       </Stack>
     );
@@ -33,13 +35,27 @@ function Field({ spec, value, onChange }: { spec: FieldSpec; value: string; onCh
 }
 
 export function VerdictView({ live }: { live: LiveVerdict }) {
-  if (live.state === 'empty') return <Text size="sm" c="dimmed">The verdict shows here as you type.</Text>;
-  if (live.state === 'error') return <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="status">{live.message}</Alert>;
+  if (live.state === 'empty')
+    return (
+      <Text size="sm" c="dimmed">
+        The verdict shows here as you type.
+      </Text>
+    );
+  if (live.state === 'error')
+    return (
+      <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="status">
+        {live.message}
+      </Alert>
+    );
   return (
     <Paper withBorder p="sm" role="status" aria-live="polite">
       <Stack gap={4}>
         <ConditionBadge condition={live.condition} size="lg" />
-        {live.headline && <Text fz="xl" fw={800}>{live.headline}</Text>}
+        {live.headline && (
+          <Text fz="xl" fw={800}>
+            {live.headline}
+          </Text>
+        )}
         <Text size="sm">{live.message}</Text>
       </Stack>
     </Paper>
@@ -66,7 +82,9 @@ export function MeasurementForm({ kind, ctx, speeds, chainPolicy, onSave, saving
     <Stack gap="sm">
       <Text fw={700}>{MEASUREMENT_KIND_LABELS[kind]}</Text>
       <SimpleGrid cols={{ base: 1, xs: 2 }} spacing="sm">
-        {spec.fields(values).map((f) => <Field key={f.key} spec={f} value={values[f.key] ?? ''} onChange={set(f.key)} />)}
+        {spec.fields(values).map((f) => (
+          <Field key={f.key} spec={f} value={values[f.key] ?? ''} onChange={set(f.key)} />
+        ))}
       </SimpleGrid>
       <VerdictView live={live} />
       {onSave && (

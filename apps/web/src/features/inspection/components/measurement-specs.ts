@@ -1,4 +1,12 @@
-import { BEARING_PLAY_GRADES, BEARING_PLAY_GRADE_LABELS, type Bearing, type LengthUnit, type MeasurementInput, type MeasurementKind, type WheelPosition } from '@benchproof/domain';
+import {
+  BEARING_PLAY_GRADES,
+  BEARING_PLAY_GRADE_LABELS,
+  type Bearing,
+  type LengthUnit,
+  type MeasurementInput,
+  type MeasurementKind,
+  type WheelPosition,
+} from '@benchproof/domain';
 
 export type Values = Record<string, string>;
 export interface NumberField {
@@ -41,7 +49,15 @@ export function readNumber(text: string | undefined): number | null {
 const positionOf = (key: string): WheelPosition => (key.startsWith('rear') ? 'rear' : 'front');
 const BEARING_BY_KEY: Record<string, Bearing> = { headset_play: 'headset', front_hub_play: 'front_hub', rear_hub_play: 'rear_hub', bb_play: 'bottom_bracket' };
 const mmField = (key: string, label: string, description?: string): NumberField => ({ type: 'number', key, label, suffix: 'mm', step: 0.1, description });
-const unitField: ChoiceField = { type: 'choice', key: 'lengthUnit', label: 'Unit', options: [{ value: 'mm', label: 'mm' }, { value: 'in', label: 'in' }] };
+const unitField: ChoiceField = {
+  type: 'choice',
+  key: 'lengthUnit',
+  label: 'Unit',
+  options: [
+    { value: 'mm', label: 'mm' },
+    { value: 'in', label: 'in' },
+  ],
+};
 
 function needAll(v: Values, keys: string[]): number[] | null {
   const nums = keys.map((k) => readNumber(v[k]));
@@ -50,14 +66,45 @@ function needAll(v: Values, keys: string[]): number[] | null {
 
 const chain: KindSpec = {
   fields: (v) => {
-    const method: ChoiceField = { type: 'choice', key: 'method', label: 'Method', options: [{ value: 'ruler', label: 'Ruler' }, { value: 'caliper', label: 'Caliper' }, { value: 'gauge', label: 'Gauge' }] };
+    const method: ChoiceField = {
+      type: 'choice',
+      key: 'method',
+      label: 'Method',
+      options: [
+        { value: 'ruler', label: 'Ruler' },
+        { value: 'caliper', label: 'Caliper' },
+        { value: 'gauge', label: 'Gauge' },
+      ],
+    };
     const suffix = v.lengthUnit;
     const pitches: NumberField = { type: 'number', key: 'pitches', label: 'Pitches measured', step: 2, description: 'Pin to pin; a full link is 2 pitches' };
-    if (v.method === 'gauge') return [method, { type: 'number', key: 'gaugePct', label: 'Gauge reading', suffix: '%', step: 0.25, description: 'The mark that dropped in (0 if none), or a dial reading' }];
+    if (v.method === 'gauge')
+      return [
+        method,
+        {
+          type: 'number',
+          key: 'gaugePct',
+          label: 'Gauge reading',
+          suffix: '%',
+          step: 0.25,
+          description: 'The mark that dropped in (0 if none), or a dial reading',
+        },
+      ];
     if (v.method === 'caliper') {
-      return [method, unitField, pitches, { type: 'number', key: 'insideValue', label: 'Inside reading', suffix, step: 0.01 }, { type: 'number', key: 'outsideValue', label: 'Outside reading', suffix, step: 0.01 }];
+      return [
+        method,
+        unitField,
+        pitches,
+        { type: 'number', key: 'insideValue', label: 'Inside reading', suffix, step: 0.01 },
+        { type: 'number', key: 'outsideValue', label: 'Outside reading', suffix, step: 0.01 },
+      ];
     }
-    return [method, unitField, pitches, { type: 'number', key: 'lengthValue', label: 'Length over those pitches', suffix, step: 0.01, description: 'Pin centre to pin centre' }];
+    return [
+      method,
+      unitField,
+      pitches,
+      { type: 'number', key: 'lengthValue', label: 'Length over those pitches', suffix, step: 0.01, description: 'Pin centre to pin centre' },
+    ];
   },
   initial: (ctx) => ({ method: 'ruler', lengthUnit: ctx.lengthUnit, pitches: '24', lengthValue: '', insideValue: '', outsideValue: '', gaugePct: '' }),
   build: (v) => {

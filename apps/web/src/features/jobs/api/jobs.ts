@@ -59,8 +59,7 @@ function useJobMutation<B>(jobId: number, call: (body: B) => Promise<unknown>) {
 export const useTransitionJob = (jobId: number) =>
   useJobMutation(jobId, (body: TransitionRequest) => api<JobDetail>(`/jobs/${jobId}/transitions`, { method: 'POST', body }));
 
-export const useUpdateJob = (jobId: number) =>
-  useJobMutation(jobId, (body: UpdateJobRequest) => api<JobDetail>(`/jobs/${jobId}`, { method: 'PATCH', body }));
+export const useUpdateJob = (jobId: number) => useJobMutation(jobId, (body: UpdateJobRequest) => api<JobDetail>(`/jobs/${jobId}`, { method: 'PATCH', body }));
 
 export const useFinalCheck = (jobId: number) =>
   useJobMutation(jobId, (body: FinalCheckRequest) => api<FinalCheckDto>(`/jobs/${jobId}/final-check`, { method: 'POST', body }));

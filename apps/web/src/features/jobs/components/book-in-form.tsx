@@ -30,7 +30,9 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
     <Paper withBorder p="md" radius="md">
       <Stack gap="sm">
-        <Title order={3} size="h4">{title}</Title>
+        <Title order={3} size="h4">
+          {title}
+        </Title>
         {children}
       </Stack>
     </Paper>
@@ -42,7 +44,15 @@ function CustomerSection({ form, slots }: { form: UseFormReturnType<BookInValues
   const picked = v.customerId ? { id: v.customerId, label: v.customerLabel } : null;
   return (
     <Section title="1 · Owner">
-      <SegmentedControl fullWidth size="md" data={[{ value: 'existing', label: 'Find a customer' }, { value: 'new', label: 'New customer' }]} {...form.getInputProps('customerMode')} />
+      <SegmentedControl
+        fullWidth
+        size="md"
+        data={[
+          { value: 'existing', label: 'Find a customer' },
+          { value: 'new', label: 'New customer' },
+        ]}
+        {...form.getInputProps('customerMode')}
+      />
       {v.customerMode === 'existing'
         ? slots.customerSearch({
             selected: picked,
@@ -59,7 +69,17 @@ function BikeSection({ form, slots }: { form: UseFormReturnType<BookInValues>; s
   const canPick = v.customerMode === 'existing';
   return (
     <Section title="2 · Bike">
-      {canPick && <SegmentedControl fullWidth size="md" data={[{ value: 'existing', label: 'One of their bikes' }, { value: 'new', label: 'New bike' }]} {...form.getInputProps('bikeMode')} />}
+      {canPick && (
+        <SegmentedControl
+          fullWidth
+          size="md"
+          data={[
+            { value: 'existing', label: 'One of their bikes' },
+            { value: 'new', label: 'New bike' },
+          ]}
+          {...form.getInputProps('bikeMode')}
+        />
+      )}
       {canPick && v.bikeMode === 'existing' ? (
         v.customerId ? (
           slots.bikeChooser({ customerId: v.customerId, selectedId: v.bikeId, error: form.errors.bikeId, onPick: (id) => form.setFieldValue('bikeId', id) })
@@ -87,15 +107,42 @@ export function BookInForm({ slots, mechanics, onBooked }: { slots: BookInSlots;
         <CustomerSection form={form} slots={slots} />
         <BikeSection form={form} slots={slots} />
         <Section title="3 · What the owner tells us">
-          <Textarea label="Reported symptoms, in the owner's words" withAsterisk description="Noises, poor shifting, anything that feels wrong — write it as they say it." autosize minRows={5} maxRows={14} {...form.getInputProps('reportedSymptoms')} />
+          <Textarea
+            label="Reported symptoms, in the owner's words"
+            withAsterisk
+            description="Noises, poor shifting, anything that feels wrong — write it as they say it."
+            autosize
+            minRows={5}
+            maxRows={14}
+            {...form.getInputProps('reportedSymptoms')}
+          />
           <SimpleGrid cols={{ base: 1, sm: 2 }}>
-            <DatePickerInput label="Promised for" withAsterisk placeholder="Pick a day" clearable size="md" minDate={new Date()} valueFormat="ddd D MMM YYYY" {...form.getInputProps('promisedOn')} />
+            <DatePickerInput
+              label="Promised for"
+              withAsterisk
+              placeholder="Pick a day"
+              clearable
+              size="md"
+              minDate={new Date()}
+              valueFormat="ddd D MMM YYYY"
+              {...form.getInputProps('promisedOn')}
+            />
             <Select label="Mechanic" placeholder="Assign later" data={mechanics} clearable {...form.getInputProps('mechanicId')} />
           </SimpleGrid>
         </Section>
-        {hasErrors && <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert">Some fields need attention — they are marked below their boxes. Nothing you typed is lost.</Alert>}
-        {failure && <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert">{failure}</Alert>}
-        <Button type="submit" size="lg" leftSection={<IconCheck />} loading={bookIn.isPending}>Book in</Button>
+        {hasErrors && (
+          <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert">
+            Some fields need attention — they are marked below their boxes. Nothing you typed is lost.
+          </Alert>
+        )}
+        {failure && (
+          <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert">
+            {failure}
+          </Alert>
+        )}
+        <Button type="submit" size="lg" leftSection={<IconCheck />} loading={bookIn.isPending}>
+          Book in
+        </Button>
       </Stack>
     </form>
   );

@@ -11,7 +11,12 @@ function Rule({ job, checkers }: { job: JobDetail; checkers: string[] }) {
   const mechanic = job.mechanic?.name;
   const eligible = job.finalCheckSecondPerson ? checkers.filter((n) => n !== mechanic) : checkers;
   const who = job.finalCheckSecondPerson ? `a second person — anyone but ${mechanic ?? 'the job’s mechanic'}` : 'any mechanic or manager';
-  return <Text size="sm">This shop asks for {who}{eligible.length ? ` (${eligible.join(', ')})` : ''}.</Text>;
+  return (
+    <Text size="sm">
+      This shop asks for {who}
+      {eligible.length ? ` (${eligible.join(', ')})` : ''}.
+    </Text>
+  );
 }
 
 function LastCheck({ job }: { job: JobDetail }) {
@@ -19,7 +24,12 @@ function LastCheck({ job }: { job: JobDetail }) {
   if (!fc) return null;
   const failed = failedFinalCheckItems(fc.items);
   return (
-    <Alert color={fc.passed ? 'teal' : 'red'} variant="light" icon={fc.passed ? <IconCircleCheck /> : <IconCircleX />} title={`${fc.passed ? 'Passed' : 'Failed'} — ${fc.checker.name}, ${dayjs(fc.at).format('D MMM YYYY HH:mm')}`}>
+    <Alert
+      color={fc.passed ? 'teal' : 'red'}
+      variant="light"
+      icon={fc.passed ? <IconCircleCheck /> : <IconCircleX />}
+      title={`${fc.passed ? 'Passed' : 'Failed'} — ${fc.checker.name}, ${dayjs(fc.at).format('D MMM YYYY HH:mm')}`}
+    >
       {failed.length > 0 && <Text size="sm">Not passed: {failed.map((i) => FINAL_CHECK_ITEM_LABELS[i]).join('; ')}</Text>}
       {fc.testRideNotes && <Text size="sm">Test ride: {fc.testRideNotes}</Text>}
       {fc.note && <Text size="sm">{fc.note}</Text>}
@@ -37,22 +47,62 @@ function CheckForm({ job, blocked }: { job: JobDetail; blocked: boolean }) {
   const allPassed = FINAL_CHECK_ITEMS.every((i) => items[i]);
   const send = (passed: boolean) => {
     const body: FinalCheckRequest = { items, passed, testRideNotes: testRideNotes || null, note: note || null };
-    check.mutate(body, { onSuccess: () => { setItems(noneTicked()); setNote(''); setTestRideNotes(''); } });
+    check.mutate(body, {
+      onSuccess: () => {
+        setItems(noneTicked());
+        setNote('');
+        setTestRideNotes('');
+      },
+    });
   };
   const error = check.error instanceof ApiError ? check.error : null;
   return (
     <Stack gap="sm">
       {FINAL_CHECK_ITEMS.map((i) => (
-        <Checkbox key={i} size="lg" label={FINAL_CHECK_ITEM_LABELS[i]} checked={items[i]} onChange={(e) => setItems({ ...items, [i]: e.currentTarget.checked })} disabled={blocked} />
+        <Checkbox
+          key={i}
+          size="lg"
+          label={FINAL_CHECK_ITEM_LABELS[i]}
+          checked={items[i]}
+          onChange={(e) => setItems({ ...items, [i]: e.currentTarget.checked })}
+          disabled={blocked}
+        />
       ))}
       <Textarea label="Test ride" autosize minRows={1} value={testRideNotes} onChange={(e) => setTestRideNotes(e.currentTarget.value)} disabled={blocked} />
-      <Textarea label="Note" description="Needed when the check fails: what to redo" autosize minRows={2} value={note} onChange={(e) => setNote(e.currentTarget.value)} disabled={blocked} error={error?.fieldErrors().note} />
+      <Textarea
+        label="Note"
+        description="Needed when the check fails: what to redo"
+        autosize
+        minRows={2}
+        value={note}
+        onChange={(e) => setNote(e.currentTarget.value)}
+        disabled={blocked}
+        error={error?.fieldErrors().note}
+      />
       <Group grow>
-        <Button size="lg" color="teal" leftSection={<IconCircleCheck />} onClick={() => send(true)} loading={check.isPending} disabled={blocked || !allPassed}>Passed</Button>
-        <Button size="lg" color="red" variant="light" leftSection={<IconCircleX />} onClick={() => send(false)} loading={check.isPending} disabled={blocked || !note.trim()}>Failed</Button>
+        <Button size="lg" color="teal" leftSection={<IconCircleCheck />} onClick={() => send(true)} loading={check.isPending} disabled={blocked || !allPassed}>
+          Passed
+        </Button>
+        <Button
+          size="lg"
+          color="red"
+          variant="light"
+          leftSection={<IconCircleX />}
+          onClick={() => send(false)}
+          loading={check.isPending}
+          disabled={blocked || !note.trim()}
+        >
+          Failed
+        </Button>
       </Group>
       {error && (
-        <Alert color="red" variant="filled" icon={<IconAlertTriangle />} role="alert" title={error.code === 'FINAL_CHECK_SAME_PERSON' ? 'Needs a second person' : 'Not recorded'}>
+        <Alert
+          color="red"
+          variant="filled"
+          icon={<IconAlertTriangle />}
+          role="alert"
+          title={error.code === 'FINAL_CHECK_SAME_PERSON' ? 'Needs a second person' : 'Not recorded'}
+        >
           {error.message}
         </Alert>
       )}
@@ -67,12 +117,26 @@ export function FinalCheckPanel({ job, me, checkers }: { job: JobDetail; me: { i
   return (
     <Paper withBorder p="md">
       <Stack gap="sm">
-        <Title order={3} size="h4">Final check</Title>
+        <Title order={3} size="h4">
+          Final check
+        </Title>
         <Rule job={job} checkers={checkers} />
         <LastCheck job={job} />
-        {job.status !== 'final_check' && <Text c="dimmed" size="sm">The check is signed off while the job is at Final check.</Text>}
-        {job.status === 'final_check' && samePerson && <Alert color="brass" variant="light">You are this job’s mechanic, so someone else must sign the check off.</Alert>}
-        {job.status === 'final_check' && wrongRole && <Alert color="gray" variant="light">A mechanic or manager signs the final check off.</Alert>}
+        {job.status !== 'final_check' && (
+          <Text c="dimmed" size="sm">
+            The check is signed off while the job is at Final check.
+          </Text>
+        )}
+        {job.status === 'final_check' && samePerson && (
+          <Alert color="brass" variant="light">
+            You are this job’s mechanic, so someone else must sign the check off.
+          </Alert>
+        )}
+        {job.status === 'final_check' && wrongRole && (
+          <Alert color="gray" variant="light">
+            A mechanic or manager signs the final check off.
+          </Alert>
+        )}
         {job.status === 'final_check' && <CheckForm job={job} blocked={wrongRole} />}
       </Stack>
     </Paper>

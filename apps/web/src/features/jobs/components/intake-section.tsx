@@ -8,12 +8,18 @@ export function IntakeSection({ job, bikeSpecs }: { job: JobDetail; bikeSpecs: R
   return (
     <Stack>
       <Paper withBorder p="md">
-        <Title order={3} size="h4" mb="xs">Reported symptoms</Title>
-        <Text size="xs" c="dimmed" mb="xs">Booked in {dayjs(job.createdAt).format('D MMM YYYY, HH:mm')} — in the owner's words</Text>
+        <Title order={3} size="h4" mb="xs">
+          Reported symptoms
+        </Title>
+        <Text size="xs" c="dimmed" mb="xs">
+          Booked in {dayjs(job.createdAt).format('D MMM YYYY, HH:mm')} — in the owner's words
+        </Text>
         <Text style={{ whiteSpace: 'pre-wrap' }}>{job.reportedSymptoms || 'Nothing recorded.'}</Text>
       </Paper>
       <Paper withBorder p="md">
-        <Title order={3} size="h4" mb="xs">Bike</Title>
+        <Title order={3} size="h4" mb="xs">
+          Bike
+        </Title>
         {bikeSpecs}
       </Paper>
     </Stack>

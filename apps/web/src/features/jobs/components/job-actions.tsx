@@ -16,8 +16,17 @@ function ConfirmMove({ move, onClose, onConfirm, pending }: { move: Move | null;
   return (
     <Modal opened={move !== null} onClose={onClose} title={move?.label ?? ''}>
       <Stack>
-        <Text>The job moves to <b>{move ? JOB_STATUS_LABELS[move.to] : ''}</b>.</Text>
-        <Textarea label="Note (optional)" placeholder="Why — shown in the job's history" value={note} onChange={(e) => setNote(e.currentTarget.value)} autosize minRows={2} />
+        <Text>
+          The job moves to <b>{move ? JOB_STATUS_LABELS[move.to] : ''}</b>.
+        </Text>
+        <Textarea
+          label="Note (optional)"
+          placeholder="Why — shown in the job's history"
+          value={note}
+          onChange={(e) => setNote(e.currentTarget.value)}
+          autosize
+          minRows={2}
+        />
         <Button size="lg" color={move?.to === 'cancelled' ? 'red' : undefined} loading={pending} onClick={() => onConfirm(note)}>
           {move?.label}
         </Button>
@@ -32,8 +41,12 @@ function ConfirmNoReport({ opened, onClose, onConfirm, pending }: { opened: bool
     <Modal opened={opened} onClose={onClose} title="No report sent yet">
       <Stack>
         <Text>No bench report has been e-mailed to the owner for this job. If the bike leaves now, the job records that it was handed over without one.</Text>
-        <Button size="lg" color="orange" loading={pending} onClick={onConfirm}>Hand over without a report</Button>
-        <Button size="lg" variant="default" onClick={onClose}>Not yet — send the report first</Button>
+        <Button size="lg" color="orange" loading={pending} onClick={onConfirm}>
+          Hand over without a report
+        </Button>
+        <Button size="lg" variant="default" onClick={onClose}>
+          Not yet — send the report first
+        </Button>
       </Stack>
     </Modal>
   );
@@ -51,19 +64,33 @@ export function JobActions({ job }: { job: JobDetail }) {
     transition.mutate({ to, note, confirmNoReport }, { onSuccess: () => setConfirm(null) });
   };
   const noReport = transition.error instanceof ApiError && transition.error.code === 'REPORT_NOT_SENT';
-  const error = noReport ? null : transition.error instanceof ApiError ? transition.error.message : transition.error ? 'The move did not go through. Try again.' : null;
+  const error = noReport
+    ? null
+    : transition.error instanceof ApiError
+      ? transition.error.message
+      : transition.error
+        ? 'The move did not go through. Try again.'
+        : null;
   return (
     <Stack gap="xs">
       <Group gap="xs" wrap="wrap">
         {primary && (
-          <Button size="lg" rightSection={<IconArrowRight />} loading={transition.isPending && !confirm} onClick={() => move(primary.to)} style={{ flex: '1 1 240px' }}>
+          <Button
+            size="lg"
+            rightSection={<IconArrowRight />}
+            loading={transition.isPending && !confirm}
+            onClick={() => move(primary.to)}
+            style={{ flex: '1 1 240px' }}
+          >
             {primary.label}
           </Button>
         )}
         {others.length > 0 && (
           <Menu position="bottom-end" withinPortal>
             <Menu.Target>
-              <Button size="lg" variant="default" aria-label="Other moves" leftSection={<IconDots />} style={{ flex: '1 0 auto' }}>More moves</Button>
+              <Button size="lg" variant="default" aria-label="Other moves" leftSection={<IconDots />} style={{ flex: '1 0 auto' }}>
+                More moves
+              </Button>
             </Menu.Target>
             <Menu.Dropdown>
               {others.map((t) => (
@@ -80,8 +107,19 @@ export function JobActions({ job }: { job: JobDetail }) {
           {error}
         </Alert>
       )}
-      <ConfirmNoReport opened={noReport} onClose={() => transition.reset()} onConfirm={() => move('collected', pendingNote, true)} pending={transition.isPending} />
-      <ConfirmMove key={confirm?.to ?? 'none'} move={confirm} onClose={() => setConfirm(null)} onConfirm={(note) => confirm && move(confirm.to, note)} pending={transition.isPending} />
+      <ConfirmNoReport
+        opened={noReport}
+        onClose={() => transition.reset()}
+        onConfirm={() => move('collected', pendingNote, true)}
+        pending={transition.isPending}
+      />
+      <ConfirmMove
+        key={confirm?.to ?? 'none'}
+        move={confirm}
+        onClose={() => setConfirm(null)}
+        onConfirm={(note) => confirm && move(confirm.to, note)}
+        pending={transition.isPending}
+      />
     </Stack>
   );
 }

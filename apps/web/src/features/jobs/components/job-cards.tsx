@@ -20,7 +20,9 @@ export function JobCards({ jobs }: { jobs: JobDto[] }) {
                   <Text fw={700}>{job.number}</Text>
                   <JobStatusBadge status={job.status} />
                 </Group>
-                <Text fw={600} truncate>{jobBikeLabel(job)}</Text>
+                <Text fw={600} truncate>
+                  {jobBikeLabel(job)}
+                </Text>
                 <Text size="sm" c="dimmed" truncate>
                   {job.customer.name} · {job.mechanic?.name ?? 'No mechanic yet'}
                 </Text>

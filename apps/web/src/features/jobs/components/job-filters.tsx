@@ -94,7 +94,11 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
       </SimpleGrid>
       {active && (
         <Group>
-          <Button variant="subtle" leftSection={<IconX size={18} />} onClick={() => update({ q: null, status: [], mechanicId: null, promisedAfter: null, promisedBefore: null, closed: null })}>
+          <Button
+            variant="subtle"
+            leftSection={<IconX size={18} />}
+            onClick={() => update({ q: null, status: [], mechanicId: null, promisedAfter: null, promisedBefore: null, closed: null })}
+          >
             Clear filters
           </Button>
         </Group>

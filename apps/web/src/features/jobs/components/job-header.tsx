@@ -15,11 +15,36 @@ function Owner({ job }: { job: JobDetail }) {
   const c = job.customerDetail;
   return (
     <Stack gap={2}>
-      <Text size="xs" tt="uppercase" c="dimmed" fw={700}>Owner · {PREFERS[c.preferredChannel]}</Text>
-      <Anchor component={Link} to={`/customers/${c.id}`} fw={600}>{c.name}</Anchor>
-      {c.phone && <Anchor href={`tel:${c.phone}`} size="sm" mih={32}><Group gap={4} component="span" wrap="nowrap"><IconPhone size={16} />{c.phone}</Group></Anchor>}
-      {c.phone && c.preferredChannel === 'sms' && <Anchor href={`sms:${c.phone}`} size="sm"><Group gap={4} component="span" wrap="nowrap"><IconMessage size={16} />Send a text</Group></Anchor>}
-      {c.email && <Anchor href={`mailto:${c.email}`} size="sm" style={{ wordBreak: 'break-all' }}><Group gap={4} component="span" wrap="nowrap"><IconMail size={16} />{c.email}</Group></Anchor>}
+      <Text size="xs" tt="uppercase" c="dimmed" fw={700}>
+        Owner · {PREFERS[c.preferredChannel]}
+      </Text>
+      <Anchor component={Link} to={`/customers/${c.id}`} fw={600}>
+        {c.name}
+      </Anchor>
+      {c.phone && (
+        <Anchor href={`tel:${c.phone}`} size="sm" mih={32}>
+          <Group gap={4} component="span" wrap="nowrap">
+            <IconPhone size={16} />
+            {c.phone}
+          </Group>
+        </Anchor>
+      )}
+      {c.phone && c.preferredChannel === 'sms' && (
+        <Anchor href={`sms:${c.phone}`} size="sm">
+          <Group gap={4} component="span" wrap="nowrap">
+            <IconMessage size={16} />
+            Send a text
+          </Group>
+        </Anchor>
+      )}
+      {c.email && (
+        <Anchor href={`mailto:${c.email}`} size="sm" style={{ wordBreak: 'break-all' }}>
+          <Group gap={4} component="span" wrap="nowrap">
+            <IconMail size={16} />
+            {c.email}
+          </Group>
+        </Anchor>
+      )}
     </Stack>
   );
 }
@@ -29,13 +54,24 @@ function Mechanic({ job, mechanics, canAssign }: { job: JobDetail; mechanics: Op
   if (!canAssign) {
     return (
       <Stack gap={2}>
-        <Text size="xs" tt="uppercase" c="dimmed" fw={700}>Mechanic</Text>
+        <Text size="xs" tt="uppercase" c="dimmed" fw={700}>
+          Mechanic
+        </Text>
         <Text>{job.mechanic?.name ?? 'Not assigned'}</Text>
       </Stack>
     );
   }
   return (
-    <Select label="Mechanic" placeholder="Not assigned" data={mechanics} value={job.mechanic ? String(job.mechanic.id) : null} onChange={(v) => update.mutate({ mechanicId: v ? Number(v) : null })} disabled={update.isPending} error={update.error?.message} clearable />
+    <Select
+      label="Mechanic"
+      placeholder="Not assigned"
+      data={mechanics}
+      value={job.mechanic ? String(job.mechanic.id) : null}
+      onChange={(v) => update.mutate({ mechanicId: v ? Number(v) : null })}
+      disabled={update.isPending}
+      error={update.error?.message}
+      clearable
+    />
   );
 }
 
@@ -46,18 +82,28 @@ export function JobHeader({ job, mechanics, canAssign }: { job: JobDetail; mecha
       <Stack gap="md">
         <Stack gap={2} miw={0}>
           <Group gap="xs">
-            <Text fw={700} c="dimmed">Job {job.number}</Text>
+            <Text fw={700} c="dimmed">
+              Job {job.number}
+            </Text>
             <JobStatusBadge status={job.status} size="lg" />
-            {job.collectedWithoutReport && <Badge color="orange" variant="outline" size="lg" radius="sm" style={{ textTransform: 'none' }}>Left without a report</Badge>}
+            {job.collectedWithoutReport && (
+              <Badge color="orange" variant="outline" size="lg" radius="sm" style={{ textTransform: 'none' }}>
+                Left without a report
+              </Badge>
+            )}
           </Group>
           <Title order={2}>
-            <Anchor component={Link} to={`/bikes/${job.bike.id}`} inherit c="inherit">{jobBikeLabel(job)}</Anchor>
+            <Anchor component={Link} to={`/bikes/${job.bike.id}`} inherit c="inherit">
+              {jobBikeLabel(job)}
+            </Anchor>
           </Title>
         </Stack>
         <SimpleGrid cols={{ base: 1, xs: 3 }} spacing="md">
           <Owner job={job} />
           <Stack gap={2}>
-            <Text size="xs" tt="uppercase" c="dimmed" fw={700}>Promised</Text>
+            <Text size="xs" tt="uppercase" c="dimmed" fw={700}>
+              Promised
+            </Text>
             <PromisedDate promisedOn={job.promisedOn} overdue={job.overdue} size="md" />
           </Stack>
           <Mechanic job={job} mechanics={mechanics} canAssign={canAssign} />

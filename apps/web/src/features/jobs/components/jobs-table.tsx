@@ -47,15 +47,27 @@ function JobRow({ job }: { job: JobDto }) {
   return (
     <Table.Tr className={job.overdue ? classes.overdueRow : undefined} onClick={() => void navigate(`/jobs/${job.id}`)} style={{ cursor: 'pointer' }}>
       <Table.Td>
-        <Link className={classes.rowLink} to={`/jobs/${job.id}`} onClick={(e) => e.stopPropagation()}>{job.number}</Link>
+        <Link className={classes.rowLink} to={`/jobs/${job.id}`} onClick={(e) => e.stopPropagation()}>
+          {job.number}
+        </Link>
       </Table.Td>
-      <Table.Td><JobStatusBadge status={job.status} /></Table.Td>
       <Table.Td>
-        <Text fw={600} size="sm">{jobBikeLabel(job)}</Text>
-        <Text size="sm" c="dimmed">{job.customer.name}</Text>
+        <JobStatusBadge status={job.status} />
       </Table.Td>
-      <Table.Td><Text size="sm">{job.mechanic?.name ?? '—'}</Text></Table.Td>
-      <Table.Td><PromisedDate promisedOn={job.promisedOn} overdue={job.overdue} /></Table.Td>
+      <Table.Td>
+        <Text fw={600} size="sm">
+          {jobBikeLabel(job)}
+        </Text>
+        <Text size="sm" c="dimmed">
+          {job.customer.name}
+        </Text>
+      </Table.Td>
+      <Table.Td>
+        <Text size="sm">{job.mechanic?.name ?? '—'}</Text>
+      </Table.Td>
+      <Table.Td>
+        <PromisedDate promisedOn={job.promisedOn} overdue={job.overdue} />
+      </Table.Td>
     </Table.Tr>
   );
 }
@@ -66,14 +78,24 @@ function DesktopTable({ jobs, sort, onSort }: { jobs: JobDto[]; sort: Sort; onSo
       <Table verticalSpacing="sm" highlightOnHover>
         <Table.Thead>
           <Table.Tr>
-            <SortHeader field="number" sort={sort} onSort={onSort}>Job</SortHeader>
-            <SortHeader field="status" sort={sort} onSort={onSort}>Status</SortHeader>
+            <SortHeader field="number" sort={sort} onSort={onSort}>
+              Job
+            </SortHeader>
+            <SortHeader field="status" sort={sort} onSort={onSort}>
+              Status
+            </SortHeader>
             <Table.Th>Bike and owner</Table.Th>
             <Table.Th>Mechanic</Table.Th>
-            <SortHeader field="promisedOn" sort={sort} onSort={onSort}>Promised</SortHeader>
+            <SortHeader field="promisedOn" sort={sort} onSort={onSort}>
+              Promised
+            </SortHeader>
           </Table.Tr>
         </Table.Thead>
-        <Table.Tbody>{jobs.map((j) => <JobRow key={j.id} job={j} />)}</Table.Tbody>
+        <Table.Tbody>
+          {jobs.map((j) => (
+            <JobRow key={j.id} job={j} />
+          ))}
+        </Table.Tbody>
       </Table>
     </Table.ScrollContainer>
   );
@@ -91,15 +113,33 @@ export function JobsTable({ mechanics, pageSize = 20 }: { mechanics: Option[]; p
     <>
       <JobFilters params={params} includeClosed={includeClosed} update={update} mechanics={mechanics} />
       <QueryState isLoading={jobs.isLoading} error={jobs.error} />
-      {data && data.items.length === 0 && <Text c="dimmed" py="lg">No jobs match these filters.</Text>}
+      {data && data.items.length === 0 && (
+        <Text c="dimmed" py="lg">
+          No jobs match these filters.
+        </Text>
+      )}
       {data && data.items.length > 0 && (
         <>
           <Group justify="space-between" mb="xs">
-            <Text size="sm" c="dimmed">{data.total} job{data.total === 1 ? '' : 's'}</Text>
-            <Select hiddenFrom="sm" aria-label="Sort" data={SORT_OPTIONS} value={`${sort.field}:${sort.order}`} onChange={(v) => v && onSort({ field: v.split(':')[0] as SortField, order: v.split(':')[1] as Order })} allowDeselect={false} w={210} />
+            <Text size="sm" c="dimmed">
+              {data.total} job{data.total === 1 ? '' : 's'}
+            </Text>
+            <Select
+              hiddenFrom="sm"
+              aria-label="Sort"
+              data={SORT_OPTIONS}
+              value={`${sort.field}:${sort.order}`}
+              onChange={(v) => v && onSort({ field: v.split(':')[0] as SortField, order: v.split(':')[1] as Order })}
+              allowDeselect={false}
+              w={210}
+            />
           </Group>
-          <Box visibleFrom="sm"><DesktopTable jobs={data.items} sort={sort} onSort={onSort} /></Box>
-          <Box hiddenFrom="sm"><JobCards jobs={data.items} /></Box>
+          <Box visibleFrom="sm">
+            <DesktopTable jobs={data.items} sort={sort} onSort={onSort} />
+          </Box>
+          <Box hiddenFrom="sm">
+            <JobCards jobs={data.items} />
+          </Box>
           {pages > 1 && (
             <Group justify="center" mt="md">
               <Pagination total={pages} value={params.page ?? 1} onChange={(p) => update({ page: String(p) })} size="lg" />

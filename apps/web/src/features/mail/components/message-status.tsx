@@ -13,7 +13,14 @@ const LOOK: Record<OutboxStatus, { label: string; color: string; icon: typeof Ic
 export function MessageStatus({ status }: { status: OutboxStatus }) {
   const { label, color, icon: Icon } = LOOK[status];
   return (
-    <Badge color={color} variant={status === 'failed' ? 'filled' : 'light'} size="lg" radius="sm" leftSection={<Icon size={14} />} style={{ textTransform: 'none' }}>
+    <Badge
+      color={color}
+      variant={status === 'failed' ? 'filled' : 'light'}
+      size="lg"
+      radius="sm"
+      leftSection={<Icon size={14} />}
+      style={{ textTransform: 'none' }}
+    >
       {label}
     </Badge>
   );

@@ -8,9 +8,23 @@ import { MessagesPanel } from './messages-panel';
 
 function message(id: number, patch: Partial<OutboxMessageDto>): OutboxMessageDto {
   return {
-    id, jobId: 1, kind: 'report_ready', reportId: 3, to: 'owner@example.test', subject: `Your bench report ${id}`, status: 'sent', attempts: 1, maxAttempts: 8,
-    lastError: null, nextTryAt: null, sentAt: '2026-03-02T10:05:00.000Z', createdAt: '2026-03-02T10:04:00.000Z', messageId: `<m${id}@x.test>`,
-    attachments: [{ filename: 'bench-report-3.pdf', size: 120_000 }], canResend: false, ...patch,
+    id,
+    jobId: 1,
+    kind: 'report_ready',
+    reportId: 3,
+    to: 'owner@example.test',
+    subject: `Your bench report ${id}`,
+    status: 'sent',
+    attempts: 1,
+    maxAttempts: 8,
+    lastError: null,
+    nextTryAt: null,
+    sentAt: '2026-03-02T10:05:00.000Z',
+    createdAt: '2026-03-02T10:04:00.000Z',
+    messageId: `<m${id}@x.test>`,
+    attachments: [{ filename: 'bench-report-3.pdf', size: 120_000 }],
+    canResend: false,
+    ...patch,
   };
 }
 
@@ -19,7 +33,9 @@ function renderPanel(list: OutboxMessageDto[], canResend = true) {
   qc.setQueryData(mailKeys.messages(1), list);
   return render(
     <QueryClientProvider client={qc}>
-      <MantineProvider theme={theme}><MessagesPanel jobId={1} canResend={canResend} /></MantineProvider>
+      <MantineProvider theme={theme}>
+        <MessagesPanel jobId={1} canResend={canResend} />
+      </MantineProvider>
     </QueryClientProvider>,
   );
 }

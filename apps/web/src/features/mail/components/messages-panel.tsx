@@ -19,9 +19,14 @@ function MessageCard({ m, canResend, jobId }: { m: OutboxMessageDto; canResend: 
           <Text fw={700}>{KIND_LABELS[m.kind] ?? m.kind}</Text>
           <MessageStatus status={m.status} />
         </Group>
-        <Text size="sm" style={{ wordBreak: 'break-word' }}>To {m.to} · {m.subject}</Text>
+        <Text size="sm" style={{ wordBreak: 'break-word' }}>
+          To {m.to} · {m.subject}
+        </Text>
         {m.attachments.map((a) => (
-          <Group key={a.filename} gap={4} c="dimmed"><IconPaperclip size={14} /><Text size="sm">{a.filename}</Text></Group>
+          <Group key={a.filename} gap={4} c="dimmed">
+            <IconPaperclip size={14} />
+            <Text size="sm">{a.filename}</Text>
+          </Group>
         ))}
         <Text size="sm" c="dimmed">
           Queued {when(m.createdAt)}
@@ -31,7 +36,8 @@ function MessageCard({ m, canResend, jobId }: { m: OutboxMessageDto; canResend: 
         </Text>
         {m.lastError && m.status !== 'sent' && (
           <Alert color={m.status === 'failed' ? 'red' : 'yellow'} variant="light" icon={<IconAlertTriangle />} p="xs">
-            {m.status === 'failed' ? 'Stopped trying: ' : 'Last attempt failed: '}{m.lastError}
+            {m.status === 'failed' ? 'Stopped trying: ' : 'Last attempt failed: '}
+            {m.lastError}
           </Alert>
         )}
         {m.canResend && canResend && (
@@ -39,7 +45,11 @@ function MessageCard({ m, canResend, jobId }: { m: OutboxMessageDto; canResend: 
             Send again
           </Button>
         )}
-        {error && <Text c="red" size="sm" role="alert">{error}</Text>}
+        {error && (
+          <Text c="red" size="sm" role="alert">
+            {error}
+          </Text>
+        )}
       </Stack>
     </Card>
   );
@@ -53,7 +63,9 @@ export function MessagesPanel({ jobId, canResend }: { jobId: number; canResend: 
     <Stack gap="sm">
       <Title order={3}>E-mails to the owner</Title>
       {messages.data.length === 0 && <Text c="dimmed">No e-mails sent for this job yet.</Text>}
-      {messages.data.map((m) => <MessageCard key={m.id} m={m} canResend={canResend} jobId={jobId} />)}
+      {messages.data.map((m) => (
+        <MessageCard key={m.id} m={m} canResend={canResend} jobId={jobId} />
+      ))}
     </Stack>
   );
 }
@@ -66,8 +78,12 @@ export function FailedMessagesNotice({ jobId, onOpen }: { jobId: number; onOpen:
   return (
     <Alert color="red" variant="light" icon={<IconAlertTriangle />} mb="md" title="An e-mail to the owner was not delivered" role="alert">
       <Stack gap="xs">
-        <Text size="sm">{failed.map((m) => `${KIND_LABELS[m.kind] ?? m.kind} to ${m.to}`).join('; ')}: {failed[0]?.lastError}</Text>
-        <Button size="lg" variant="white" color="red" onClick={onOpen} style={{ alignSelf: 'flex-start' }}>See e-mails</Button>
+        <Text size="sm">
+          {failed.map((m) => `${KIND_LABELS[m.kind] ?? m.kind} to ${m.to}`).join('; ')}: {failed[0]?.lastError}
+        </Text>
+        <Button size="lg" variant="white" color="red" onClick={onOpen} style={{ alignSelf: 'flex-start' }}>
+          See e-mails
+        </Button>
       </Stack>
     </Alert>
   );

@@ -11,17 +11,41 @@ export function SendReportButton({ jobId, reportId }: { jobId: number; reportId:
   const send = useSendReport(jobId);
   const messages = useMessages(jobId);
   const earlier = sentBefore(messages.data, reportId);
-  const error = send.error instanceof ApiError
-    ? (send.error.code === 'NO_OWNER_EMAIL' ? 'The owner has no e-mail address on file. Add one to the customer, or hand over a printed copy.' : send.error.message)
-    : send.error ? 'Sending did not go through. Try again.' : null;
+  const error =
+    send.error instanceof ApiError
+      ? send.error.code === 'NO_OWNER_EMAIL'
+        ? 'The owner has no e-mail address on file. Add one to the customer, or hand over a printed copy.'
+        : send.error.message
+      : send.error
+        ? 'Sending did not go through. Try again.'
+        : null;
   return (
     <Stack gap={4} mt="xs">
-      <Button size="lg" variant={earlier ? 'light' : 'filled'} leftSection={<IconMail />} loading={send.isPending} onClick={() => send.mutate(reportId)} style={{ alignSelf: 'flex-start' }}>
+      <Button
+        size="lg"
+        variant={earlier ? 'light' : 'filled'}
+        leftSection={<IconMail />}
+        loading={send.isPending}
+        onClick={() => send.mutate(reportId)}
+        style={{ alignSelf: 'flex-start' }}
+      >
         {earlier ? 'Send to owner again' : 'Send to owner'}
       </Button>
-      {send.isSuccess && <Text size="sm" c="teal" role="status">Queued for {send.data.to}. Its progress shows under E-mails.</Text>}
-      {!send.isSuccess && earlier && <Text size="sm" c="dimmed">Already {earlier.status === 'sent' ? 'sent' : 'queued'} to {earlier.to}.</Text>}
-      {error && <Text size="sm" c="red" role="alert">{error}</Text>}
+      {send.isSuccess && (
+        <Text size="sm" c="teal" role="status">
+          Queued for {send.data.to}. Its progress shows under E-mails.
+        </Text>
+      )}
+      {!send.isSuccess && earlier && (
+        <Text size="sm" c="dimmed">
+          Already {earlier.status === 'sent' ? 'sent' : 'queued'} to {earlier.to}.
+        </Text>
+      )}
+      {error && (
+        <Text size="sm" c="red" role="alert">
+          {error}
+        </Text>
+      )}
     </Stack>
   );
 }

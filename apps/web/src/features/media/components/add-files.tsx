@@ -34,8 +34,12 @@ export function AddFiles({ onFiles }: { onFiles: (files: File[], source: MediaSo
           <Group justify="center" gap="md" mih={90} style={{ pointerEvents: 'none' }}>
             <IconUpload size={40} stroke={1.5} />
             <div>
-              <Text size="lg" fw={600}>Drop photos or videos here</Text>
-              <Text size="sm" c="dimmed">or click to choose files from this computer</Text>
+              <Text size="lg" fw={600}>
+                Drop photos or videos here
+              </Text>
+              <Text size="sm" c="dimmed">
+                or click to choose files from this computer
+              </Text>
             </div>
           </Group>
         </Dropzone>

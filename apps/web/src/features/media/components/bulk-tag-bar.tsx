@@ -16,7 +16,9 @@ export function BulkTagBar({ tags, onTags, items }: { tags: ShotTags; onTags: (t
     <Paper withBorder radius="md" p="md">
       <Stack gap="sm">
         <Title order={4}>Tags</Title>
-        <Text size="sm" c="dimmed">New shots get these tags. Change them for the selected shots, or tag a shot on its own below.</Text>
+        <Text size="sm" c="dimmed">
+          New shots get these tags. Change them for the selected shots, or tag a shot on its own below.
+        </Text>
         <TagEditor value={tags} onChange={(patch) => onTags({ ...tags, ...patch })} name="new and selected shots" />
         {items.length > 0 && (
           <Group grow>

@@ -28,11 +28,17 @@ function SectionHeader({ jobId, count }: { jobId: number; count: number }) {
     <Group justify="space-between" align="flex-end">
       <div>
         <Title order={3}>Media</Title>
-        <Text size="sm" c="dimmed">{count === 1 ? '1 shot' : `${count} shots`}</Text>
+        <Text size="sm" c="dimmed">
+          {count === 1 ? '1 shot' : `${count} shots`}
+        </Text>
       </div>
       <Group gap="sm">
-        <Button component={Link} to={`/jobs/${jobId}/scope`} variant="light" size="lg" leftSection={<IconScan />}>Scope</Button>
-        <Button component={Link} to={`/jobs/${jobId}/capture`} size="lg" leftSection={<IconCamera />}>Add shots</Button>
+        <Button component={Link} to={`/jobs/${jobId}/scope`} variant="light" size="lg" leftSection={<IconScan />}>
+          Scope
+        </Button>
+        <Button component={Link} to={`/jobs/${jobId}/capture`} size="lg" leftSection={<IconCamera />}>
+          Add shots
+        </Button>
       </Group>
     </Group>
   );

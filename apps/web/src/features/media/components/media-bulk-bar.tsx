@@ -18,19 +18,52 @@ export function MediaBulkBar({ jobId, ids, onDone }: { jobId: number; ids: numbe
     <Paper withBorder p="sm" radius="md" bg="bench.0">
       <Group gap="sm" align="flex-end">
         <Text fw={700} mb={8}>{`${ids.length} selected`}</Text>
-        <Select label="Set phase" placeholder="Keep" clearable w={140} data={MEDIA_PHASES.map((p) => ({ value: p, label: MEDIA_PHASE_LABELS[p] }))} value={phase} onChange={(v) => setPhase(v)} />
-        <Select label="Set area" placeholder="Keep" clearable w={200} data={MEDIA_AREAS.map((a) => ({ value: a, label: MEDIA_AREA_LABELS[a] }))} value={area} onChange={(v) => setArea(v)} />
-        <Button onClick={apply} disabled={!phase && !area} loading={retag.isPending}>Re-tag</Button>
-        <Button color="red" variant="light" onClick={confirm.open}>Delete</Button>
-        <Button variant="subtle" color="gray" onClick={onDone}>Clear selection</Button>
+        <Select
+          label="Set phase"
+          placeholder="Keep"
+          clearable
+          w={140}
+          data={MEDIA_PHASES.map((p) => ({ value: p, label: MEDIA_PHASE_LABELS[p] }))}
+          value={phase}
+          onChange={(v) => setPhase(v)}
+        />
+        <Select
+          label="Set area"
+          placeholder="Keep"
+          clearable
+          w={200}
+          data={MEDIA_AREAS.map((a) => ({ value: a, label: MEDIA_AREA_LABELS[a] }))}
+          value={area}
+          onChange={(v) => setArea(v)}
+        />
+        <Button onClick={apply} disabled={!phase && !area} loading={retag.isPending}>
+          Re-tag
+        </Button>
+        <Button color="red" variant="light" onClick={confirm.open}>
+          Delete
+        </Button>
+        <Button variant="subtle" color="gray" onClick={onDone}>
+          Clear selection
+        </Button>
       </Group>
-      {error && <Alert color="red" mt="sm" role="alert">{error.message}</Alert>}
+      {error && (
+        <Alert color="red" mt="sm" role="alert">
+          {error.message}
+        </Alert>
+      )}
       <ConfirmDelete
         count={ids.length}
         opened={confirming}
         onClose={confirm.close}
         busy={remove.isPending}
-        onConfirm={() => remove.mutate(ids, { onSettled: () => { confirm.close(); onDone(); } })}
+        onConfirm={() =>
+          remove.mutate(ids, {
+            onSettled: () => {
+              confirm.close();
+              onDone();
+            },
+          })
+        }
       />
     </Paper>
   );

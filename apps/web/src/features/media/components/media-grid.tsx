@@ -23,7 +23,13 @@ export function MediaGrid({ groups, selected, onSelect, onOpen }: Props) {
               <Text size="sm" fw={600} c="dimmed">{`${MEDIA_AREA_LABELS[a.area]} · ${a.assets.length}`}</Text>
               <SimpleGrid cols={{ base: 3, xs: 4, sm: 5, md: 6, lg: 8 }} spacing={8}>
                 {a.assets.map((asset) => (
-                  <MediaTile key={asset.id} asset={asset} selected={selected.has(asset.id)} onSelect={(on) => onSelect(asset.id, on)} onOpen={() => onOpen(asset)} />
+                  <MediaTile
+                    key={asset.id}
+                    asset={asset}
+                    selected={selected.has(asset.id)}
+                    onSelect={(on) => onSelect(asset.id, on)}
+                    onOpen={() => onOpen(asset)}
+                  />
                 ))}
               </SimpleGrid>
             </Stack>

@@ -10,7 +10,9 @@ function TileBody({ asset }: { asset: MediaAssetDto }) {
       <Center h="100%" bg="red.0" p={4}>
         <Stack gap={2} align="center">
           <IconAlertTriangle color="var(--mantine-color-red-7)" />
-          <Text size="xs" ta="center" c="red.8">{asset.derivativeError ?? 'Sizes could not be made'}</Text>
+          <Text size="xs" ta="center" c="red.8">
+            {asset.derivativeError ?? 'Sizes could not be made'}
+          </Text>
         </Stack>
       </Center>
     );
@@ -26,11 +28,26 @@ function TileBody({ asset }: { asset: MediaAssetDto }) {
 }
 
 /** A square thumbnail that opens the viewer; the corner box selects it for bulk actions. */
-export function MediaTile({ asset, selected, onSelect, onOpen }: { asset: MediaAssetDto; selected: boolean; onSelect: (on: boolean) => void; onOpen: () => void }) {
+export function MediaTile({
+  asset,
+  selected,
+  onSelect,
+  onOpen,
+}: {
+  asset: MediaAssetDto;
+  selected: boolean;
+  onSelect: (on: boolean) => void;
+  onOpen: () => void;
+}) {
   const label = asset.caption || `${MEDIA_KIND_LABELS[asset.kind]} ${asset.id}`;
   return (
     <Box pos="relative" data-testid="media-tile" data-status={asset.status} data-kind={asset.kind} data-area={asset.area}>
-      <UnstyledButton onClick={onOpen} aria-label={`Open ${label}`} w="100%" style={{ borderRadius: 8, overflow: 'hidden', display: 'block', opacity: asset.deletedAt ? 0.5 : 1 }}>
+      <UnstyledButton
+        onClick={onOpen}
+        aria-label={`Open ${label}`}
+        w="100%"
+        style={{ borderRadius: 8, overflow: 'hidden', display: 'block', opacity: asset.deletedAt ? 0.5 : 1 }}
+      >
         <AspectRatio ratio={1}>
           <TileBody asset={asset} />
         </AspectRatio>
@@ -50,8 +67,16 @@ export function MediaTile({ asset, selected, onSelect, onOpen }: { asset: MediaA
           <IconPlayerPlayFilled size={22} />
         </Box>
       )}
-      {asset.source === 'scope' && <Badge pos="absolute" top={6} right={6} size="sm" color="brass" variant="filled">Scope</Badge>}
-      {asset.deletedAt && <Badge pos="absolute" bottom={6} left={6} size="sm" color="red">Deleted</Badge>}
+      {asset.source === 'scope' && (
+        <Badge pos="absolute" top={6} right={6} size="sm" color="brass" variant="filled">
+          Scope
+        </Badge>
+      )}
+      {asset.deletedAt && (
+        <Badge pos="absolute" bottom={6} left={6} size="sm" color="red">
+          Deleted
+        </Badge>
+      )}
     </Box>
   );
 }

@@ -58,11 +58,15 @@ export function ShotCard({ item, asset }: { item: QueueItem; asset?: MediaAssetD
         <ShotPreview file={item.file} asset={asset} />
         <Stack gap={6} style={{ flex: 1, minWidth: 0 }}>
           <Group justify="space-between" wrap="nowrap" gap={4}>
-            <Text fw={600} truncate>{name}</Text>
+            <Text fw={600} truncate>
+              {name}
+            </Text>
             <ShotStatusBadge item={item} />
           </Group>
           <ShotProgress item={item} />
-          <Text size="sm" c="dimmed" truncate>{summary(item.tags)}</Text>
+          <Text size="sm" c="dimmed" truncate>
+            {summary(item.tags)}
+          </Text>
         </Stack>
       </Group>
       <Group justify="space-between" mt="xs">

@@ -6,17 +6,7 @@ const PHASE_DATA = MEDIA_PHASES.map((p) => ({ value: p, label: MEDIA_PHASE_LABEL
 
 /** Before / during / after as one wide three-way switch. */
 export function PhaseControl({ value, onChange, label = 'Phase' }: { value: MediaPhase; onChange: (p: MediaPhase) => void; label?: string }) {
-  return (
-    <SegmentedControl
-      fullWidth
-      size="lg"
-      radius="md"
-      aria-label={label}
-      data={PHASE_DATA}
-      value={value}
-      onChange={(v) => onChange(v)}
-    />
-  );
+  return <SegmentedControl fullWidth size="lg" radius="md" aria-label={label} data={PHASE_DATA} value={value} onChange={(v) => onChange(v)} />;
 }
 
 /** The areas as big chips, one tap each. */
@@ -39,7 +29,9 @@ export function TagEditor({ value, onChange, name }: { value: ShotTags; onChange
   return (
     <Stack gap="sm">
       <PhaseControl value={value.phase} onChange={(phase) => onChange({ phase })} label={`Phase for ${name}`} />
-      <Text size="sm" fw={600}>Area</Text>
+      <Text size="sm" fw={600}>
+        Area
+      </Text>
       <AreaChips value={value.area} onChange={(area) => onChange({ area })} label={`Area for ${name}`} />
       <TextInput
         label="Caption (optional)"

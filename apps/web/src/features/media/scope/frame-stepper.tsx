@@ -13,7 +13,9 @@ interface Props {
 function Step({ label, onClick, children }: { label: string; onClick: () => void; children: React.ReactNode }) {
   return (
     <Tooltip label={label}>
-      <ActionIcon size={52} variant="light" aria-label={label} onClick={onClick}>{children}</ActionIcon>
+      <ActionIcon size={52} variant="light" aria-label={label} onClick={onClick}>
+        {children}
+      </ActionIcon>
     </Tooltip>
   );
 }
@@ -24,14 +26,24 @@ export function FrameStepper({ video, time, playing }: Props) {
   const toggle = () => video && togglePlay(video);
   return (
     <Group justify="center" gap={6} wrap="nowrap">
-      <Step label="Back 1 second" onClick={() => step(-1)}><IconChevronsLeft /></Step>
-      <Step label="Back 1 frame" onClick={() => step(-FRAME_S)}><IconChevronLeft /></Step>
+      <Step label="Back 1 second" onClick={() => step(-1)}>
+        <IconChevronsLeft />
+      </Step>
+      <Step label="Back 1 frame" onClick={() => step(-FRAME_S)}>
+        <IconChevronLeft />
+      </Step>
       <ActionIcon size={60} radius="xl" aria-label={playing ? 'Pause' : 'Play'} onClick={toggle}>
         {playing ? <IconPlayerPauseFilled /> : <IconPlayerPlayFilled />}
       </ActionIcon>
-      <Step label="Forward 1 frame" onClick={() => step(FRAME_S)}><IconChevronRight /></Step>
-      <Step label="Forward 1 second" onClick={() => step(1)}><IconChevronsRight /></Step>
-      <Text ff="monospace" size="sm" w={86} ta="right" data-testid="video-time">{fmt(time)}</Text>
+      <Step label="Forward 1 frame" onClick={() => step(FRAME_S)}>
+        <IconChevronRight />
+      </Step>
+      <Step label="Forward 1 second" onClick={() => step(1)}>
+        <IconChevronsRight />
+      </Step>
+      <Text ff="monospace" size="sm" w={86} ta="right" data-testid="video-time">
+        {fmt(time)}
+      </Text>
     </Group>
   );
 }

@@ -10,7 +10,12 @@ export function grabFrame(video: HTMLVideoElement, name: string): Promise<File> 
   if (!ctx || !canvas.width) return Promise.reject(new Error('The picture is not ready yet.'));
   ctx.drawImage(video, 0, 0, canvas.width, canvas.height);
   return new Promise((resolve, reject) =>
-    canvas.toBlob((blob) => (blob ? resolve(new File([blob], name, { type: 'image/jpeg', lastModified: Date.now() })) : reject(new Error('The frame could not be encoded.'))), 'image/jpeg', QUALITY),
+    canvas.toBlob(
+      (blob) =>
+        blob ? resolve(new File([blob], name, { type: 'image/jpeg', lastModified: Date.now() })) : reject(new Error('The frame could not be encoded.')),
+      'image/jpeg',
+      QUALITY,
+    ),
   );
 }
 
@@ -24,7 +29,8 @@ export function stillName(prefix: string, at = new Date()): string {
 export const FRAME_S = 1 / 30;
 
 /** The time a step lands on, kept inside the video. */
-export const stepTime = (current: number, delta: number, duration: number): number => Math.min(Math.max(0, current + delta), Number.isFinite(duration) ? duration : current + delta);
+export const stepTime = (current: number, delta: number, duration: number): number =>
+  Math.min(Math.max(0, current + delta), Number.isFinite(duration) ? duration : current + delta);
 
 /** Pauses and moves the video by `delta` seconds (a frame or a second). */
 export function stepVideo(video: HTMLVideoElement, delta: number): void {

@@ -29,10 +29,23 @@ export function LiveScope({ jobId }: { jobId: number }) {
   return (
     <Stack gap="sm">
       <Group gap="sm" align="flex-end" wrap="nowrap">
-        <Select label="Camera or scope" placeholder="Default camera" data={options} value={cam.deviceId} onChange={(v) => v && cam.setDeviceId(v)} style={{ flex: 1 }} />
-        <Button variant="default" size="md" onClick={cam.refresh} aria-label="Refresh the camera list"><IconRefresh size={20} /></Button>
+        <Select
+          label="Camera or scope"
+          placeholder="Default camera"
+          data={options}
+          value={cam.deviceId}
+          onChange={(v) => v && cam.setDeviceId(v)}
+          style={{ flex: 1 }}
+        />
+        <Button variant="default" size="md" onClick={cam.refresh} aria-label="Refresh the camera list">
+          <IconRefresh size={20} />
+        </Button>
       </Group>
-      {cam.error && <Alert color="red" role="alert">{cam.error}</Alert>}
+      {cam.error && (
+        <Alert color="red" role="alert">
+          {cam.error}
+        </Alert>
+      )}
       <Box bg="dark.9" style={{ borderRadius: 12, overflow: 'hidden', aspectRatio: '4 / 3', display: 'flex', alignItems: 'center', justifyContent: 'center' }}>
         <video ref={video} autoPlay muted playsInline data-testid="live-video" style={{ width: '100%', height: '100%', objectFit: 'contain' }} />
       </Box>

@@ -8,7 +8,8 @@ import { StillsStrip } from './stills-strip';
 import { VideoGrab } from './video-grab';
 import type { VideoSource } from './video-source';
 
-const asSource = (a: MediaAssetDto | undefined): VideoSource | null => (a ? { kind: 'asset', assetId: a.id, src: a.urls.original, name: `video ${a.id}` } : null);
+const asSource = (a: MediaAssetDto | undefined): VideoSource | null =>
+  a ? { kind: 'asset', assetId: a.id, src: a.urls.original, name: `video ${a.id}` } : null;
 
 /** Scope capture: live from a camera or borescope, or frame by frame from a recorded video. */
 export function ScopePanel({ jobId, videoId }: { jobId: number; videoId: number | null }) {
@@ -19,11 +20,19 @@ export function ScopePanel({ jobId, videoId }: { jobId: number; videoId: number 
     <Stack gap="md">
       <Tabs value={tab} onChange={setTab} keepMounted={false}>
         <Tabs.List grow>
-          <Tabs.Tab value="live" leftSection={<IconDeviceCctv size={20} />} fz="md" py="md">Live</Tabs.Tab>
-          <Tabs.Tab value="video" leftSection={<IconMovie size={20} />} fz="md" py="md">From a video</Tabs.Tab>
+          <Tabs.Tab value="live" leftSection={<IconDeviceCctv size={20} />} fz="md" py="md">
+            Live
+          </Tabs.Tab>
+          <Tabs.Tab value="video" leftSection={<IconMovie size={20} />} fz="md" py="md">
+            From a video
+          </Tabs.Tab>
         </Tabs.List>
-        <Tabs.Panel value="live" pt="md"><LiveScope jobId={jobId} /></Tabs.Panel>
-        <Tabs.Panel value="video" pt="md">{!(videoId && isLoading) && <VideoGrab key={initial?.src ?? 'none'} jobId={jobId} initial={initial} />}</Tabs.Panel>
+        <Tabs.Panel value="live" pt="md">
+          <LiveScope jobId={jobId} />
+        </Tabs.Panel>
+        <Tabs.Panel value="video" pt="md">
+          {!(videoId && isLoading) && <VideoGrab key={initial?.src ?? 'none'} jobId={jobId} initial={initial} />}
+        </Tabs.Panel>
       </Tabs>
       <Title order={4}>Grabbed stills</Title>
       <StillsStrip jobId={jobId} />

@@ -12,7 +12,9 @@ function StillCard({ item, asset }: { item: QueueItem; asset?: MediaAssetDto }) 
       <Stack gap={4} align="center">
         <ShotPreview file={item.file} asset={asset} />
         <ShotStatusBadge item={item} />
-        <div style={{ width: '100%' }}><ShotProgress item={item} /></div>
+        <div style={{ width: '100%' }}>
+          <ShotProgress item={item} />
+        </div>
       </Stack>
     </Paper>
   );
@@ -20,14 +22,23 @@ function StillCard({ item, asset }: { item: QueueItem; asset?: MediaAssetDto }) 
 
 /** The stills grabbed on this page, newest first, each with its own upload state. */
 export function StillsStrip({ jobId }: { jobId: number }) {
-  const stills = useUploadQueue(jobId).filter((i) => i.source === 'scope').reverse();
+  const stills = useUploadQueue(jobId)
+    .filter((i) => i.source === 'scope')
+    .reverse();
   const { data } = useMedia(jobId);
   const byId = new Map((data ?? []).map((a) => [a.id, a]));
-  if (!stills.length) return <Text c="dimmed" size="sm">Grabbed stills appear here.</Text>;
+  if (!stills.length)
+    return (
+      <Text c="dimmed" size="sm">
+        Grabbed stills appear here.
+      </Text>
+    );
   return (
     <ScrollArea type="auto" offsetScrollbars>
       <Group gap="sm" wrap="nowrap" aria-label="Grabbed stills">
-        {stills.map((s) => <StillCard key={s.id} item={s} asset={s.assetId ? byId.get(s.assetId) : undefined} />)}
+        {stills.map((s) => (
+          <StillCard key={s.id} item={s} asset={s.assetId ? byId.get(s.assetId) : undefined} />
+        ))}
       </Group>
     </ScrollArea>
   );

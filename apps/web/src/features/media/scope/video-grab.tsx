@@ -58,7 +58,11 @@ export function VideoGrab({ jobId, initial }: { jobId: number; initial: VideoSou
       )}
       <FrameStepper video={video} time={time} playing={playing} />
       <GrabButton onGrab={grab} disabled={!source} />
-      {error && <Alert color="red" role="alert">{error}</Alert>}
+      {error && (
+        <Alert color="red" role="alert">
+          {error}
+        </Alert>
+      )}
       <ScopeTags value={tags} onChange={setTags} />
     </Stack>
   );

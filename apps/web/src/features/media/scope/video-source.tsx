@@ -9,7 +9,10 @@ export type VideoSource = { kind: 'asset'; assetId: number; src: string; name: s
 export function VideoSourcePicker({ jobId, value, onChange }: { jobId: number; value: VideoSource | null; onChange: (v: VideoSource) => void }) {
   const { data } = useMedia(jobId);
   const videos = (data ?? []).filter((a) => isVideoKind(a.kind));
-  const options = videos.map((v) => ({ value: String(v.id), label: `Video ${v.id} · ${MEDIA_PHASE_LABELS[v.phase]} · ${MEDIA_AREA_LABELS[v.area]}${v.caption ? ` · ${v.caption}` : ''}` }));
+  const options = videos.map((v) => ({
+    value: String(v.id),
+    label: `Video ${v.id} · ${MEDIA_PHASE_LABELS[v.phase]} · ${MEDIA_AREA_LABELS[v.area]}${v.caption ? ` · ${v.caption}` : ''}`,
+  }));
   const pickAsset = (id: string | null) => {
     const v = videos.find((a) => String(a.id) === id);
     if (v) onChange({ kind: 'asset', assetId: v.id, src: v.urls.original, name: `video ${v.id}` });
@@ -25,7 +28,11 @@ export function VideoSourcePicker({ jobId, value, onChange }: { jobId: number; v
         style={{ flex: 1, minWidth: 220 }}
       />
       <FileButton accept="video/*" onChange={(f) => f && onChange({ kind: 'local', file: f, src: URL.createObjectURL(f), name: f.name })}>
-        {(props) => <Button {...props} variant="default" size="md" leftSection={<IconFileUpload size={18} />}>Video on this device</Button>}
+        {(props) => (
+          <Button {...props} variant="default" size="md" leftSection={<IconFileUpload size={18} />}>
+            Video on this device
+          </Button>
+        )}
       </FileButton>
     </Group>
   );

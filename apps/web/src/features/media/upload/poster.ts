@@ -34,7 +34,12 @@ export async function sendPoster(jobId: number, assetId: number, file: File): Pr
     const frame = await grabFrame(video, `poster-${assetId}.jpg`);
     const form = new FormData();
     form.append('file', frame, frame.name);
-    const res = await fetch(`/api/jobs/${jobId}/media/${assetId}/poster`, { method: 'PUT', body: form, credentials: 'same-origin', headers: { accept: 'application/json', ...csrfHeader() } });
+    const res = await fetch(`/api/jobs/${jobId}/media/${assetId}/poster`, {
+      method: 'PUT',
+      body: form,
+      credentials: 'same-origin',
+      headers: { accept: 'application/json', ...csrfHeader() },
+    });
     return res.ok;
   } finally {
     release();

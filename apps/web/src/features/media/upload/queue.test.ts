@@ -3,7 +3,8 @@ import { backoffMs, MAX_AUTO_ATTEMPTS, needsRetag, newItem, nextRetryAt, nextToS
 const tags = { phase: 'before', area: 'brakes', caption: '' } as const;
 const file = (name: string, type = 'image/jpeg', size = 10) => new File([new Uint8Array(size)], name, { type });
 const make = (n: number) => Array.from({ length: n }, (_, i) => newItem(7, file(`s${i}.jpg`), { ...tags }));
-const fail = (items: QueueItem[], id: string, retryable: boolean, now = 1000) => queueReducer(items, { type: 'failed', id, message: 'No connection', retryable, now });
+const fail = (items: QueueItem[], id: string, retryable: boolean, now = 1000) =>
+  queueReducer(items, { type: 'failed', id, message: 'No connection', retryable, now });
 
 describe('upload queue', () => {
   it('starts at most the parallel limit and queues the rest', () => {
@@ -30,7 +31,8 @@ describe('upload queue', () => {
   it('stops retrying on its own after the last automatic attempt, and a manual retry starts afresh', () => {
     let items = make(1);
     const id = items[0].id;
-    for (let n = 0; n < MAX_AUTO_ATTEMPTS; n++) items = queueReducer(fail(queueReducer(items, { type: 'started', id }), id, true), { type: 'retryDue', now: Infinity });
+    for (let n = 0; n < MAX_AUTO_ATTEMPTS; n++)
+      items = queueReducer(fail(queueReducer(items, { type: 'started', id }), id, true), { type: 'retryDue', now: Infinity });
     expect(items[0]).toMatchObject({ status: 'failed', attempts: MAX_AUTO_ATTEMPTS });
     items = queueReducer(items, { type: 'retryNow', id });
     expect(items[0]).toMatchObject({ status: 'queued', attempts: 0 });

@@ -106,7 +106,7 @@ export function sendTus(item: QueueItem, onProgress: (p: number) => void): Trans
       current.start();
     });
   });
-  return { done, abort: () => void (upload)?.abort() };
+  return { done, abort: () => void upload?.abort() };
 }
 
 export const startTransfer = (item: QueueItem, onProgress: (p: number) => void): Transfer =>

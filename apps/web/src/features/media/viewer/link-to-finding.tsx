@@ -15,7 +15,11 @@ export function LinkToFinding({ jobId, assetId }: { jobId: number; assetId: numb
   const qc = useQueryClient();
 
   if (!open) {
-    return <Button variant="light" leftSection={<IconLink size={18} />} onClick={() => setOpen(true)}>Link to finding</Button>;
+    return (
+      <Button variant="light" leftSection={<IconLink size={18} />} onClick={() => setOpen(true)}>
+        Link to finding
+      </Button>
+    );
   }
   const data = (findings.data ?? []).map((f) => ({ value: String(f.id), label: `${INSPECTION_AREA_LABELS[f.area]}: ${f.description}`.slice(0, 90) }));
   const save = async () => {
@@ -36,11 +40,19 @@ export function LinkToFinding({ jobId, assetId }: { jobId: number; assetId: numb
           w={280}
           comboboxProps={{ zIndex: 500 }}
         />
-        <Button onClick={() => void save()} disabled={!findingId} loading={link.isPending}>Link</Button>
-        <Button variant="subtle" color="gray" onClick={() => setOpen(false)}>Close</Button>
+        <Button onClick={() => void save()} disabled={!findingId} loading={link.isPending}>
+          Link
+        </Button>
+        <Button variant="subtle" color="gray" onClick={() => setOpen(false)}>
+          Close
+        </Button>
       </Group>
       {linked && <Text size="sm" c="green.8">{`Linked to ${linked}.`}</Text>}
-      {(findings.error ?? link.error) && <Alert color="red" role="alert">{(findings.error ?? link.error)?.message}</Alert>}
+      {(findings.error ?? link.error) && (
+        <Alert color="red" role="alert">
+          {(findings.error ?? link.error)?.message}
+        </Alert>
+      )}
     </Stack>
   );
 }

@@ -10,8 +10,12 @@ export function MediaDetails({ asset }: { asset: MediaAssetDto }) {
   return (
     <Stack gap={4} data-testid="media-details">
       <Group gap={6}>
-        <Badge size="lg" variant="filled">{MEDIA_PHASE_LABELS[asset.phase]}</Badge>
-        <Badge size="lg" variant="light">{MEDIA_AREA_LABELS[asset.area]}</Badge>
+        <Badge size="lg" variant="filled">
+          {MEDIA_PHASE_LABELS[asset.phase]}
+        </Badge>
+        <Badge size="lg" variant="light">
+          {MEDIA_AREA_LABELS[asset.area]}
+        </Badge>
         <Badge size="lg" variant="outline" color="gray">{`${MEDIA_KIND_LABELS[asset.kind]} · ${MEDIA_SOURCE_LABELS[asset.source]}`}</Badge>
       </Group>
       {asset.caption && <Text fw={600}>{asset.caption}</Text>}

@@ -9,9 +9,12 @@ export const ownerKeys = {
   consent: (jobId: number) => ['jobs', 'detail', jobId, 'owner', 'consent'] as const,
 };
 
-export const ownerLinksQuery = (jobId: number) => queryOptions({ queryKey: ownerKeys.links(jobId), queryFn: () => api<OwnerLinkDto[]>(`/jobs/${jobId}/owner-links`) });
-export const ownerActivityQuery = (jobId: number) => queryOptions({ queryKey: ownerKeys.activity(jobId), queryFn: () => api<AuditEvent[]>(`/jobs/${jobId}/owner-activity`) });
-export const consentQuery = (jobId: number) => queryOptions({ queryKey: ownerKeys.consent(jobId), queryFn: () => api<ConsentStatusDto>(`/jobs/${jobId}/consent`) });
+export const ownerLinksQuery = (jobId: number) =>
+  queryOptions({ queryKey: ownerKeys.links(jobId), queryFn: () => api<OwnerLinkDto[]>(`/jobs/${jobId}/owner-links`) });
+export const ownerActivityQuery = (jobId: number) =>
+  queryOptions({ queryKey: ownerKeys.activity(jobId), queryFn: () => api<AuditEvent[]>(`/jobs/${jobId}/owner-activity`) });
+export const consentQuery = (jobId: number) =>
+  queryOptions({ queryKey: ownerKeys.consent(jobId), queryFn: () => api<ConsentStatusDto>(`/jobs/${jobId}/consent`) });
 
 export const useOwnerLinks = (jobId: number) => useQuery(ownerLinksQuery(jobId));
 export const useOwnerActivity = (jobId: number) => useQuery(ownerActivityQuery(jobId));

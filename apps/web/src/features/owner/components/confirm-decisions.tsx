@@ -31,14 +31,25 @@ export function ConfirmDecisions({ token, opened, onClose, onDone, onPriceChange
       const rec = f.recommendation;
       if (!rec) return [];
       const status = choices[rec.id];
-      return [{ recommendationId: rec.id, status, seenUpdatedAt: rec.updatedAt, seenGrossMinor: rec.totals.grossMinor, safetyConfirmed: status === 'declined' && Boolean(safetyOk[f.id]) }];
+      return [
+        {
+          recommendationId: rec.id,
+          status,
+          seenUpdatedAt: rec.updatedAt,
+          seenGrossMinor: rec.totals.grossMinor,
+          safetyConfirmed: status === 'declined' && Boolean(safetyOk[f.id]),
+        },
+      ];
     });
-    send.mutate({ items }, {
-      onSuccess: onDone,
-      onError: (e) => {
-        if ((e as ApiError).code === 'PRICE_CHANGED') onPriceChanged();
+    send.mutate(
+      { items },
+      {
+        onSuccess: onDone,
+        onError: (e) => {
+          if ((e as ApiError).code === 'PRICE_CHANGED') onPriceChanged();
+        },
       },
-    });
+    );
   };
 
   return (
@@ -47,7 +58,10 @@ export function ConfirmDecisions({ token, opened, onClose, onDone, onPriceChange
         <List spacing="xs">
           {chosen.map((f) => (
             <List.Item key={f.id}>
-              <Text span fw={600}>{choices[f.recommendation?.id ?? 0] === 'approved' ? 'Approve' : 'Decline'}:</Text> {f.recommendation?.summary} ({INSPECTION_AREA_LABELS[f.area]})
+              <Text span fw={600}>
+                {choices[f.recommendation?.id ?? 0] === 'approved' ? 'Approve' : 'Decline'}:
+              </Text>{' '}
+              {f.recommendation?.summary} ({INSPECTION_AREA_LABELS[f.area]})
             </List.Item>
           ))}
         </List>
@@ -59,8 +73,12 @@ export function ConfirmDecisions({ token, opened, onClose, onDone, onPriceChange
         ))}
         {err && <SendError err={err} />}
         <Group grow>
-          <Button size="lg" mih={52} variant="default" onClick={onClose}>Back</Button>
-          <Button size="lg" mih={52} onClick={submit} loading={send.isPending} disabled={!ready || chosen.length === 0}>Send answers</Button>
+          <Button size="lg" mih={52} variant="default" onClick={onClose}>
+            Back
+          </Button>
+          <Button size="lg" mih={52} onClick={submit} loading={send.isPending} disabled={!ready || chosen.length === 0}>
+            Send answers
+          </Button>
         </Group>
       </Stack>
     </Modal>
@@ -74,7 +92,9 @@ function SafetyDecline({ finding: f, confirmed, onConfirm }: { finding: Props['c
       <Stack gap="xs">
         <Text>{DECLINED_SAFETY_NOTICE}</Text>
         {f.cautions.map((c) => (
-          <Text key={c} size="sm">{c}</Text>
+          <Text key={c} size="sm">
+            {c}
+          </Text>
         ))}
         <Checkbox size="lg" label="I understand, and I still decline this work" checked={confirmed} onChange={(e) => onConfirm(e.currentTarget.checked)} />
       </Stack>

@@ -13,7 +13,9 @@ export function ConsentCard({ token, consent }: { token: string; consent: Consen
   return (
     <Card withBorder radius="md" padding="md">
       <Stack gap="sm">
-        <Title order={2} size="h3">{CONSENT_WORDING.title}</Title>
+        <Title order={2} size="h3">
+          {CONSENT_WORDING.title}
+        </Title>
         {CONSENT_WORDING.paragraphs.map((p) => (
           <Text key={p}>{p}</Text>
         ))}

@@ -23,22 +23,35 @@ export function ConsentPanel({ jobId, canRecord, ownerName }: { jobId: number; c
         </Group>
         {current && (
           <Text size="sm">
-            {current.granted ? (current.nameMakeModel ? 'Bike photos; make and model may be named.' : 'Bike photos; make and model not named.') : 'Photos may not be used.'} {current.method === 'owner_link' ? 'On the owner page' : 'In person'}, {new Date(current.at).toLocaleString()} ({current.wordingVersion}).
+            {current.granted
+              ? current.nameMakeModel
+                ? 'Bike photos; make and model may be named.'
+                : 'Bike photos; make and model not named.'
+              : 'Photos may not be used.'}{' '}
+            {current.method === 'owner_link' ? 'On the owner page' : 'In person'}, {new Date(current.at).toLocaleString()} ({current.wordingVersion}).
           </Text>
         )}
         <Spoiler maxHeight={0} showLabel="Show the wording" hideLabel="Hide the wording">
           {CONSENT_WORDING.paragraphs.map((p) => (
-            <Text key={p} size="sm">{p}</Text>
+            <Text key={p} size="sm">
+              {p}
+            </Text>
           ))}
         </Spoiler>
         {canRecord && (
           <Stack gap="xs">
-            <Text fw={600} size="sm">Record an answer given in person (read the wording to the owner first)</Text>
+            <Text fw={600} size="sm">
+              Record an answer given in person (read the wording to the owner first)
+            </Text>
             <TextInput label="Given by" value={name} onChange={(e) => setName(e.currentTarget.value)} size="md" />
             <Checkbox label={CONSENT_WORDING.makeModelLabel} checked={makeModel} onChange={(e) => setMakeModel(e.currentTarget.checked)} size="md" />
             <Group>
-              <Button mih={44} onClick={() => save(true)} loading={record.isPending}>Record consent</Button>
-              <Button mih={44} variant="light" color="gray" onClick={() => save(false)} loading={record.isPending}>Record refusal</Button>
+              <Button mih={44} onClick={() => save(true)} loading={record.isPending}>
+                Record consent
+              </Button>
+              <Button mih={44} variant="light" color="gray" onClick={() => save(false)} loading={record.isPending}>
+                Record refusal
+              </Button>
             </Group>
             {record.error && <Alert color="red">{(record.error as ApiError).message}</Alert>}
           </Stack>

@@ -21,8 +21,8 @@ export function LinkProblem({ code, message }: { code: ErrorCode | 'NETWORK'; me
       </Title>
       <Text size="lg">{message}</Text>
       <Alert color="gray" variant="light" title="How to get a new link">
-        Call or e-mail the workshop that has your bike and ask them to send you a new link to your bike’s page. For your privacy, each link works
-        for a limited time and only the newest one is active.
+        Call or e-mail the workshop that has your bike and ask them to send you a new link to your bike’s page. For your privacy, each link works for a limited
+        time and only the newest one is active.
       </Alert>
     </Stack>
   );

@@ -19,10 +19,17 @@ export function OwnerActivity({ jobId }: { jobId: number }) {
     <Card withBorder padding="md">
       <Stack gap={6}>
         <Title order={3}>Owner activity</Title>
-        {activity.data?.length === 0 && <Text c="dimmed" size="sm">Nothing yet.</Text>}
+        {activity.data?.length === 0 && (
+          <Text c="dimmed" size="sm">
+            Nothing yet.
+          </Text>
+        )}
         {activity.data?.map((e) => (
           <Text key={e.id} size="sm" data-testid="owner-activity-item">
-            <Text span c="dimmed">{new Date(e.at).toLocaleString()}</Text> · {(LABELS[e.action] ?? (() => e.action))(e.details ?? {})}
+            <Text span c="dimmed">
+              {new Date(e.at).toLocaleString()}
+            </Text>{' '}
+            · {(LABELS[e.action] ?? (() => e.action))(e.details ?? {})}
           </Text>
         ))}
       </Stack>

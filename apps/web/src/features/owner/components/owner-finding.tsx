@@ -62,10 +62,26 @@ export function OwnerFindingCard({ finding: f, choice, onChoose }: Props) {
 function Choice({ rec, choice, onChoose }: { rec: NonNullable<Props['finding']['recommendation']>; choice: Props['choice']; onChoose: Props['onChoose'] }) {
   return rec.decisionStatus === 'pending' ? (
     <Group grow gap="sm">
-      <Button size="lg" mih={52} color="teal" variant={choice === 'approved' ? 'filled' : 'outline'} leftSection={<IconCheck />} onClick={() => onChoose('approved')} aria-pressed={choice === 'approved'}>
+      <Button
+        size="lg"
+        mih={52}
+        color="teal"
+        variant={choice === 'approved' ? 'filled' : 'outline'}
+        leftSection={<IconCheck />}
+        onClick={() => onChoose('approved')}
+        aria-pressed={choice === 'approved'}
+      >
         Approve
       </Button>
-      <Button size="lg" mih={52} color="gray" variant={choice === 'declined' ? 'filled' : 'outline'} leftSection={<IconX />} onClick={() => onChoose('declined')} aria-pressed={choice === 'declined'}>
+      <Button
+        size="lg"
+        mih={52}
+        color="gray"
+        variant={choice === 'declined' ? 'filled' : 'outline'}
+        leftSection={<IconX />}
+        onClick={() => onChoose('declined')}
+        aria-pressed={choice === 'declined'}
+      >
         Decline
       </Button>
     </Group>

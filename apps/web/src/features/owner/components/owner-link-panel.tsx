@@ -22,11 +22,20 @@ export function OwnerLinkPanel({ jobId, canManage, ownerName }: { jobId: number;
       <Card withBorder padding="md">
         <Stack gap="sm">
           <Title order={3}>Owner link</Title>
-          <Text size="sm" c="dimmed">A private page where {ownerName} sees the findings with photos, approves or declines the work and answers the marketing question. A new link replaces the earlier ones.</Text>
+          <Text size="sm" c="dimmed">
+            A private page where {ownerName} sees the findings with photos, approves or declines the work and answers the marketing question. A new link
+            replaces the earlier ones.
+          </Text>
           {canManage && (
             <Group align="flex-end">
               <NumberInput label="Works for (days)" value={days} onChange={(v) => setDays(Number(v) || 14)} min={1} max={60} w={140} size="md" />
-              <Button size="md" mih={44} leftSection={<IconLink />} loading={create.isPending} onClick={() => create.mutate({ expiresInDays: days, send: true }, { onSuccess: setCreated })}>
+              <Button
+                size="md"
+                mih={44}
+                leftSection={<IconLink />}
+                loading={create.isPending}
+                onClick={() => create.mutate({ expiresInDays: days, send: true }, { onSuccess: setCreated })}
+              >
                 Create and send link
               </Button>
             </Group>
@@ -37,11 +46,18 @@ export function OwnerLinkPanel({ jobId, canManage, ownerName }: { jobId: number;
             <Group key={l.id} justify="space-between" data-testid={`owner-link-${l.id}`}>
               <div>
                 <Badge color={STATE_COLOUR[l.state]}>{l.state}</Badge>
-                <Text size="sm">Created {when(l.createdAt)} · {l.state === 'active' ? 'expires' : 'expiry'} {when(l.expiresAt)}</Text>
-                <Text size="xs" c="dimmed">{l.lastViewedAt ? `Last opened ${when(l.lastViewedAt)}` : 'Not opened yet'}{l.sentTo ? ` · sent to ${l.sentTo}` : ''}</Text>
+                <Text size="sm">
+                  Created {when(l.createdAt)} · {l.state === 'active' ? 'expires' : 'expiry'} {when(l.expiresAt)}
+                </Text>
+                <Text size="xs" c="dimmed">
+                  {l.lastViewedAt ? `Last opened ${when(l.lastViewedAt)}` : 'Not opened yet'}
+                  {l.sentTo ? ` · sent to ${l.sentTo}` : ''}
+                </Text>
               </div>
               {canManage && l.state === 'active' && (
-                <Button color="red" variant="light" mih={44} onClick={() => revoke.mutate(l.id)} loading={revoke.isPending}>Revoke</Button>
+                <Button color="red" variant="light" mih={44} onClick={() => revoke.mutate(l.id)} loading={revoke.isPending}>
+                  Revoke
+                </Button>
               )}
             </Group>
           ))}
@@ -61,7 +77,9 @@ function CreatedLink({ created }: { created: CreatedOwnerLinkDto }) {
         <TextInput value={created.url} readOnly aria-label="Owner link" onFocus={(e) => e.currentTarget.select()} />
         <CopyButton value={created.url}>
           {({ copied, copy }) => (
-            <Button size="md" mih={44} variant="light" leftSection={<IconCopy />} onClick={copy}>{copied ? 'Copied' : 'Copy for a text message'}</Button>
+            <Button size="md" mih={44} variant="light" leftSection={<IconCopy />} onClick={copy}>
+              {copied ? 'Copied' : 'Copy for a text message'}
+            </Button>
           )}
         </CopyButton>
         <Text size="sm">{created.mail.status === 'queued' ? 'E-mail queued to the owner.' : `Not e-mailed: ${created.mail.reason ?? ''}`}</Text>

@@ -18,7 +18,12 @@ export function OwnerPage({ token }: { token: string }) {
     const e = page.error instanceof ApiError ? page.error : new ApiError(0, 'NETWORK', 'No connection.');
     return <LinkProblem code={e.code} message={e.message} />;
   }
-  if (!page.data) return <Center h="60vh"><Loader aria-label="Loading your bike’s page" /></Center>;
+  if (!page.data)
+    return (
+      <Center h="60vh">
+        <Loader aria-label="Loading your bike’s page" />
+      </Center>
+    );
   return <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} />;
 }
 
@@ -34,12 +39,23 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: NonNulla
       <BrandBar page={page} />
       <Stack gap="lg">
         <BikeAndJob page={page} />
-        {sent && <Text fw={600} c="teal" role="status">Thank you — the shop has your answers.</Text>}
+        {sent && (
+          <Text fw={600} c="teal" role="status">
+            Thank you — the shop has your answers.
+          </Text>
+        )}
         {page.findings.length > 0 && (
           <Stack gap="sm">
-            <Title order={2} size="h3">What we found</Title>
+            <Title order={2} size="h3">
+              What we found
+            </Title>
             {findings.map((f) => (
-              <OwnerFindingCard key={f.id} finding={f} choice={f.recommendation ? c.choices[f.recommendation.id] : undefined} onChoose={(ch) => f.recommendation && c.choose(f.recommendation.id, ch)} />
+              <OwnerFindingCard
+                key={f.id}
+                finding={f}
+                choice={f.recommendation ? c.choices[f.recommendation.id] : undefined}
+                onChoose={(ch) => f.recommendation && c.choose(f.recommendation.id, ch)}
+              />
             ))}
           </Stack>
         )}
@@ -52,10 +68,16 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: NonNulla
         <div className={classes.stickyBar}>
           <Group className={classes.stickyInner} justify="space-between" wrap="nowrap">
             <div>
-              <Text size="sm" c="dimmed">{c.chosen.length} of {c.pending.length} answered</Text>
-              <Text fw={700} size="lg" data-testid="running-total">Approved: {formatMoney(c.approvedMinor, currency)}</Text>
+              <Text size="sm" c="dimmed">
+                {c.chosen.length} of {c.pending.length} answered
+              </Text>
+              <Text fw={700} size="lg" data-testid="running-total">
+                Approved: {formatMoney(c.approvedMinor, currency)}
+              </Text>
             </div>
-            <Button size="lg" mih={52} disabled={c.chosen.length === 0} onClick={() => setConfirming(true)}>Confirm</Button>
+            <Button size="lg" mih={52} disabled={c.chosen.length === 0} onClick={() => setConfirming(true)}>
+              Confirm
+            </Button>
           </Group>
         </div>
       )}
@@ -63,8 +85,15 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: NonNulla
         token={token}
         opened={confirming}
         onClose={() => setConfirming(false)}
-        onDone={() => { setConfirming(false); setSent(true); c.reset(); }}
-        onPriceChanged={() => { c.reset(); refetch(); }}
+        onDone={() => {
+          setConfirming(false);
+          setSent(true);
+          c.reset();
+        }}
+        onPriceChanged={() => {
+          c.reset();
+          refetch();
+        }}
         chosen={c.chosen}
         choices={c.choices}
         approvedMinor={c.approvedMinor}

@@ -12,9 +12,19 @@ export function BrandBar({ page }: { page: OwnerPageDto }) {
   return (
     <div className={classes.brandBar} style={{ background: shop.brandPrimary, borderBottom: `6px solid ${shop.brandAccent}` }}>
       <Group justify="space-between" wrap="nowrap">
-        <Text fw={800} size="xl" c="#fff">{shop.name}</Text>
+        <Text fw={800} size="xl" c="#fff">
+          {shop.name}
+        </Text>
         {shop.phone && (
-          <Button component="a" href={`tel:${shop.phone.replace(/[^+\d]/g, '')}`} size="md" mih={44} color={shop.brandAccent} c="#1a1a1a" leftSection={<IconPhone size={20} />}>
+          <Button
+            component="a"
+            href={`tel:${shop.phone.replace(/[^+\d]/g, '')}`}
+            size="md"
+            mih={44}
+            color={shop.brandAccent}
+            c="#1a1a1a"
+            leftSection={<IconPhone size={20} />}
+          >
             Call
           </Button>
         )}
@@ -27,11 +37,18 @@ export function BikeAndJob({ page }: { page: OwnerPageDto }) {
   const { bike, job } = page;
   return (
     <Stack gap={4}>
-      <Text c="dimmed">Hello {page.ownerName.split(' ')[0]}, this is your bike’s page for job {job.number}.</Text>
-      <Title order={1} size="h2">{[bike.maker, bike.model].join(' ')}{bike.year ? ` (${bike.year})` : ''}</Title>
+      <Text c="dimmed">
+        Hello {page.ownerName.split(' ')[0]}, this is your bike’s page for job {job.number}.
+      </Text>
+      <Title order={1} size="h2">
+        {[bike.maker, bike.model].join(' ')}
+        {bike.year ? ` (${bike.year})` : ''}
+      </Title>
       {job.reportedSymptoms && (
         <Card withBorder radius="md" padding="sm" mt="xs">
-          <Text size="sm" c="dimmed">What you told us</Text>
+          <Text size="sm" c="dimmed">
+            What you told us
+          </Text>
           <Text>{job.reportedSymptoms}</Text>
         </Card>
       )}
@@ -43,13 +60,17 @@ export function Measurements({ page }: { page: OwnerPageDto }) {
   if (!page.measurements.length) return null;
   return (
     <Stack gap="sm">
-      <Title order={2} size="h3">What we measured</Title>
+      <Title order={2} size="h3">
+        What we measured
+      </Title>
       {page.measurements.map((m) => (
         <Card key={m.id} withBorder radius="md" padding="sm">
           <Stack gap={4}>
             <ConditionBadge condition={m.condition} />
             <Text fw={600}>{m.verdict}</Text>
-            <Text size="sm" c="dimmed">{m.explanation}</Text>
+            <Text size="sm" c="dimmed">
+              {m.explanation}
+            </Text>
           </Stack>
         </Card>
       ))}
@@ -61,7 +82,9 @@ export function Pairs({ page }: { page: OwnerPageDto }) {
   if (!page.pairs.length) return null;
   return (
     <Stack gap="sm">
-      <Title order={2} size="h3">Before and after</Title>
+      <Title order={2} size="h3">
+        Before and after
+      </Title>
       {page.pairs.map((p) => (
         <PairSlider key={p.id} pair={p} />
       ))}
@@ -77,12 +100,21 @@ export function ReportAndContact({ page }: { page: OwnerPageDto }) {
           Download the bench report (PDF)
         </Button>
       )}
-      <Text size="sm" c="dimmed">{GENERAL_SAFETY}</Text>
+      <Text size="sm" c="dimmed">
+        {GENERAL_SAFETY}
+      </Text>
       <Text size="sm">
         Questions? {page.shop.phone && <Anchor href={`tel:${page.shop.phone.replace(/[^+\d]/g, '')}`}>{page.shop.phone}</Anchor>}
-        {page.shop.email && <> · <Anchor href={`mailto:${page.shop.email}`}>{page.shop.email}</Anchor></>}
+        {page.shop.email && (
+          <>
+            {' '}
+            · <Anchor href={`mailto:${page.shop.email}`}>{page.shop.email}</Anchor>
+          </>
+        )}
       </Text>
-      <Text size="xs" c="dimmed">This private link works until {new Date(page.expiresAt).toLocaleDateString()}.</Text>
+      <Text size="xs" c="dimmed">
+        This private link works until {new Date(page.expiresAt).toLocaleDateString()}.
+      </Text>
     </Stack>
   );
 }

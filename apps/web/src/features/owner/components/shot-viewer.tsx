@@ -20,7 +20,14 @@ export function Shots({ shots, label }: { shots: OwnerShot[]; label: string }) {
           </UnstyledButton>
         ))}
       </div>
-      <Modal opened={open !== null} onClose={() => setOpen(null)} fullScreen withCloseButton={false} padding={0} styles={{ body: { height: '100%', background: '#000' } }}>
+      <Modal
+        opened={open !== null}
+        onClose={() => setOpen(null)}
+        fullScreen
+        withCloseButton={false}
+        padding={0}
+        styles={{ body: { height: '100%', background: '#000' } }}
+      >
         {open && (
           <div className={classes.viewer}>
             <CloseButton size="xl" aria-label="Close photo" onClick={() => setOpen(null)} className={classes.viewerClose} variant="filled" />

@@ -7,7 +7,10 @@ export type Choice = 'approved' | 'declined';
 export function useChoices(findings: OwnerFinding[]) {
   const [choices, setChoices] = useState<Record<number, Choice>>({});
   const pending = useMemo(() => findings.filter((f) => f.recommendation?.decisionStatus === 'pending'), [findings]);
-  const approvedMinor = pending.reduce((sum, f) => (f.recommendation && choices[f.recommendation.id] === 'approved' ? sum + f.recommendation.totals.grossMinor : sum), 0);
+  const approvedMinor = pending.reduce(
+    (sum, f) => (f.recommendation && choices[f.recommendation.id] === 'approved' ? sum + f.recommendation.totals.grossMinor : sum),
+    0,
+  );
   const pendingMinor = pending.reduce((sum, f) => sum + (f.recommendation?.totals.grossMinor ?? 0), 0);
   const chosen = pending.filter((f) => f.recommendation && choices[f.recommendation.id]);
   return {

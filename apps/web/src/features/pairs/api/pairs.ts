@@ -31,14 +31,16 @@ function usePairMutation<B, R>(jobId: number, call: (body: B) => Promise<R>) {
   });
 }
 
-export const useCreatePair = (jobId: number) => usePairMutation(jobId, (body: CreatePairRequest) => api<ShotPairDto>(`/jobs/${jobId}/pairs`, { method: 'POST', body }));
+export const useCreatePair = (jobId: number) =>
+  usePairMutation(jobId, (body: CreatePairRequest) => api<ShotPairDto>(`/jobs/${jobId}/pairs`, { method: 'POST', body }));
 
 export const useUpdatePair = (jobId: number, pairId: number) =>
   usePairMutation(jobId, (body: UpdatePairRequest) => api<ShotPairDto>(`/jobs/${jobId}/pairs/${pairId}`, { method: 'PATCH', body }));
 
 export const useDeletePair = (jobId: number, pairId: number) => usePairMutation(jobId, () => api<void>(`/jobs/${jobId}/pairs/${pairId}`, { method: 'DELETE' }));
 
-export const useReorderPairs = (jobId: number) => usePairMutation(jobId, (body: ReorderPairsRequest) => api<ShotPairDto[]>(`/jobs/${jobId}/pairs/order`, { method: 'PUT', body }));
+export const useReorderPairs = (jobId: number) =>
+  usePairMutation(jobId, (body: ReorderPairsRequest) => api<ShotPairDto[]>(`/jobs/${jobId}/pairs/order`, { method: 'PUT', body }));
 
 /** The job's stills that can stand in a pair (under the media key, so uploads refresh it). */
 export const usePairableShots = (jobId: number) =>

@@ -29,8 +29,12 @@ export function CompareSlider({ before, after, crop }: { before: MediaAssetDto; 
       <div className={classes.before} style={{ clipPath: `inset(0 ${100 - pos}% 0 0)` }}>
         <PairImage asset={before} alt="Before" style={cropStyle(crop)} />
       </div>
-      <span className={classes.label} data-side="before">Before</span>
-      <span className={classes.label} data-side="after">After</span>
+      <span className={classes.label} data-side="before">
+        Before
+      </span>
+      <span className={classes.label} data-side="after">
+        After
+      </span>
       <div className={classes.divider} style={{ left: `${pos}%` }}>
         <div
           className={classes.knob}

@@ -11,28 +11,34 @@ export function CompareView({ before, after, crop, caption }: { before: MediaAss
   const [mode, setMode] = useState<Mode>('slider');
   return (
     <Stack gap="xs">
-      <Text fw={600} lineClamp={2}>{caption || 'Before and after'}</Text>
+      <Text fw={600} lineClamp={2}>
+        {caption || 'Before and after'}
+      </Text>
       <SegmentedControl
-          fullWidth
-          size="md"
-          value={mode}
-          onChange={(v) => setMode(v)}
-          data={[
-            { value: 'slider', label: 'Slider' },
-            { value: 'side', label: 'Side by side' },
-          ]}
-          aria-label="How to compare"
-        />
+        fullWidth
+        size="md"
+        value={mode}
+        onChange={(v) => setMode(v)}
+        data={[
+          { value: 'slider', label: 'Slider' },
+          { value: 'side', label: 'Side by side' },
+        ]}
+        aria-label="How to compare"
+      />
       {mode === 'slider' ? (
         <CompareSlider before={before} after={after} crop={crop} />
       ) : (
         <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="xs" data-testid="side-by-side">
           <Stack gap={4}>
-            <Text size="sm" fw={700}>Before</Text>
+            <Text size="sm" fw={700}>
+              Before
+            </Text>
             <CroppedShot asset={before} crop={crop} alt="Before" />
           </Stack>
           <Stack gap={4}>
-            <Text size="sm" fw={700}>After</Text>
+            <Text size="sm" fw={700}>
+              After
+            </Text>
             <CroppedShot asset={after} crop={crop} alt="After" />
           </Stack>
         </SimpleGrid>

@@ -20,7 +20,17 @@ const round = (v: number) => Math.round(v * 1e4) / 1e4;
  * Choose how close to zoom, then tap the spot to centre on: both shots of the pair get
  * the same window. Coarse on purpose: a gloved finger at the workstand.
  */
-export function CropEditor({ before, value, onSave, saving }: { before: MediaAssetDto; value: PairCrop | null; onSave: (crop: PairCrop | null) => void; saving: boolean }) {
+export function CropEditor({
+  before,
+  value,
+  onSave,
+  saving,
+}: {
+  before: MediaAssetDto;
+  value: PairCrop | null;
+  onSave: (crop: PairCrop | null) => void;
+  saving: boolean;
+}) {
   const [zoom, setZoom] = useState(value ? String(Math.round((1 / value.w) * 2) / 2) : '1');
   const [centre, setCentre] = useState(value ? { x: value.x + value.w / 2, y: value.y + value.h / 2 } : { x: 0.5, y: 0.5 });
   const crop = cropAround(centre.x, centre.y, Number(zoom));
@@ -30,13 +40,30 @@ export function CropEditor({ before, value, onSave, saving }: { before: MediaAss
   };
   return (
     <Stack gap="xs">
-      <SegmentedControl size="md" value={zoom} onChange={setZoom} data={ZOOMS.map((z) => ({ value: z, label: z === '1' ? 'Whole' : `${z}×` }))} aria-label="Zoom" />
-      <Text size="sm" c="dimmed">Tap the part to centre on. The after shot gets the same window.</Text>
+      <SegmentedControl
+        size="md"
+        value={zoom}
+        onChange={setZoom}
+        data={ZOOMS.map((z) => ({ value: z, label: z === '1' ? 'Whole' : `${z}×` }))}
+        aria-label="Zoom"
+      />
+      <Text size="sm" c="dimmed">
+        Tap the part to centre on. The after shot gets the same window.
+      </Text>
       <div onClick={tap} style={{ position: 'relative', cursor: 'crosshair', borderRadius: 8, overflow: 'hidden' }} data-testid="crop-area">
         <PairImage asset={before} alt="Before, whole picture" style={{ display: 'block', width: '100%' }} />
         {crop && (
           <div
-            style={{ position: 'absolute', left: `${crop.x * 100}%`, top: `${crop.y * 100}%`, width: `${crop.w * 100}%`, height: `${crop.h * 100}%`, border: '3px solid #fff', boxShadow: '0 0 0 9999px rgba(0,0,0,0.5)', pointerEvents: 'none' }}
+            style={{
+              position: 'absolute',
+              left: `${crop.x * 100}%`,
+              top: `${crop.y * 100}%`,
+              width: `${crop.w * 100}%`,
+              height: `${crop.h * 100}%`,
+              border: '3px solid #fff',
+              boxShadow: '0 0 0 9999px rgba(0,0,0,0.5)',
+              pointerEvents: 'none',
+            }}
           />
         )}
       </div>

@@ -30,7 +30,10 @@ export function useCropAspect(crop: PairCrop | null): [number, (img: HTMLImageEl
 export function CroppedShot({ asset, crop, alt }: { asset: MediaAssetDto; crop: PairCrop | null; alt: string }) {
   const [aspect, measure] = useCropAspect(crop);
   return (
-    <div style={{ position: 'relative', overflow: 'hidden', aspectRatio: String(aspect), borderRadius: 8, background: '#111' }} onLoadCapture={(e) => measure(e.target as HTMLImageElement)}>
+    <div
+      style={{ position: 'relative', overflow: 'hidden', aspectRatio: String(aspect), borderRadius: 8, background: '#111' }}
+      onLoadCapture={(e) => measure(e.target as HTMLImageElement)}
+    >
       <PairImage asset={asset} alt={alt} style={cropStyle(crop)} />
     </div>
   );

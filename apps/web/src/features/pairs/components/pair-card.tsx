@@ -30,7 +30,15 @@ export function PairCard({ pair, jobId, canEdit, onMove, isFirst, isLast }: Prop
       {canEdit && (
         <Stack gap="xs" mt="sm">
           <Group align="flex-end" wrap="nowrap" gap="xs">
-            <TextInput size="md" style={{ flex: 1 }} label="Caption" value={caption} onChange={(e) => setCaption(e.currentTarget.value)} error={captionError} maxLength={300} />
+            <TextInput
+              size="md"
+              style={{ flex: 1 }}
+              label="Caption"
+              value={caption}
+              onChange={(e) => setCaption(e.currentTarget.value)}
+              error={captionError}
+              maxLength={300}
+            />
             <Button size="md" variant="light" disabled={caption === pair.caption} loading={update.isPending} onClick={() => update.mutate({ caption })}>
               Save
             </Button>
@@ -47,7 +55,14 @@ export function PairCard({ pair, jobId, canEdit, onMove, isFirst, isLast }: Prop
                 {pair.crop ? 'Change crop' : 'Crop both'}
               </Button>
             </Group>
-            <ActionIcon size={48} variant="subtle" color="red" aria-label="Unpair these shots" loading={remove.isPending} onClick={() => remove.mutate(undefined)}>
+            <ActionIcon
+              size={48}
+              variant="subtle"
+              color="red"
+              aria-label="Unpair these shots"
+              loading={remove.isPending}
+              onClick={() => remove.mutate(undefined)}
+            >
               <IconTrash />
             </ActionIcon>
           </Group>

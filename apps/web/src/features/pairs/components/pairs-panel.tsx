@@ -29,7 +29,14 @@ export function PairsPanel({ jobId, canEdit }: { jobId: number; canEdit: boolean
     setBusyKey(`${s.before.id}-${s.after.id}`);
     create.mutate({ beforeAssetId: s.before.id, afterAssetId: s.after.id, caption: s.after.caption }, { onSettled: () => setBusyKey(null) });
   };
-  const move = (list: ShotPairDto[], i: number, dir: -1 | 1) => reorder.mutate({ ids: swap(list.map((p) => p.id), i, i + dir) });
+  const move = (list: ShotPairDto[], i: number, dir: -1 | 1) =>
+    reorder.mutate({
+      ids: swap(
+        list.map((p) => p.id),
+        i,
+        i + dir,
+      ),
+    });
 
   if (pairs.isPending) return <Loader />;
   if (pairs.isError) return <Alert color="red">{pairs.error.message}</Alert>;
@@ -47,7 +54,8 @@ export function PairsPanel({ jobId, canEdit }: { jobId: number; canEdit: boolean
         <Stack gap="sm">
           <Title order={3}>Suggested pairs</Title>
           <Text size="sm" c="dimmed">
-            From the area tags, Before/After phases, when each shot was taken, and how alike the framing is. Check each before you pair it: a hint, not a verdict.
+            From the area tags, Before/After phases, when each shot was taken, and how alike the framing is. Check each before you pair it: a hint, not a
+            verdict.
           </Text>
           {create.error && <Alert color="red">{formFailure(create.error)}</Alert>}
           {(suggestions.data?.pendingHashes ?? 0) > 0 && <Text size="sm">Comparing framing of {suggestions.data?.pendingHashes} new shot(s)…</Text>}

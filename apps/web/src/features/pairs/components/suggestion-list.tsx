@@ -20,13 +20,19 @@ function SuggestionCard({ s, onPick, busy }: { s: PairSuggestionDto; onPick: () 
         {[s.before, s.after].map((a, i) => (
           <Stack key={a.id} gap={2}>
             <Image src={a.urls.thumb ?? undefined} alt={`${i === 0 ? 'Before' : 'After'}: ${a.caption}`} radius="sm" fallbackSrc="" h={110} fit="cover" />
-            <Text size="xs" c="dimmed" lineClamp={1}>{i === 0 ? 'Before' : 'After'} · {a.caption || 'No caption'}</Text>
+            <Text size="xs" c="dimmed" lineClamp={1}>
+              {i === 0 ? 'Before' : 'After'} · {a.caption || 'No caption'}
+            </Text>
           </Stack>
         ))}
       </SimpleGrid>
       <Group gap={6} mt="xs">
-        <Badge variant="light" color={s.sameArea ? 'blue' : 'gray'}>{MEDIA_AREA_LABELS[s.before.area]}</Badge>
-        <Badge variant="light" color={framing.color}>{framing.label}</Badge>
+        <Badge variant="light" color={s.sameArea ? 'blue' : 'gray'}>
+          {MEDIA_AREA_LABELS[s.before.area]}
+        </Badge>
+        <Badge variant="light" color={framing.color}>
+          {framing.label}
+        </Badge>
       </Group>
       <Button size="md" mt="xs" fullWidth leftSection={<IconLink size={20} />} onClick={onPick} loading={busy}>
         Pair these
@@ -36,7 +42,15 @@ function SuggestionCard({ s, onPick, busy }: { s: PairSuggestionDto; onPick: () 
 }
 
 /** The one-tap picks: each shot in at most one, likeliest first. */
-export function SuggestionList({ suggestions, onPick, busyKey }: { suggestions: PairSuggestionDto[]; onPick: (s: PairSuggestionDto) => void; busyKey: string | null }) {
+export function SuggestionList({
+  suggestions,
+  onPick,
+  busyKey,
+}: {
+  suggestions: PairSuggestionDto[];
+  onPick: (s: PairSuggestionDto) => void;
+  busyKey: string | null;
+}) {
   const picks = suggestions.filter((s) => s.best);
   if (!picks.length) return <Text c="dimmed">No suggestions: every before shot with an after shot is already paired, or there are none yet.</Text>;
   return (

@@ -31,12 +31,24 @@ export function ReportPreview({ report }: { report: ReportDto }) {
         </Button>
       </Group>
       {mode === 'pdf' ? (
-        <object data={report.urls.pdf} type="application/pdf" aria-label="Report preview" style={{ width: '100%', height: '75vh', border: '1px solid var(--mantine-color-gray-4)' }}>
+        <object
+          data={report.urls.pdf}
+          type="application/pdf"
+          aria-label="Report preview"
+          style={{ width: '100%', height: '75vh', border: '1px solid var(--mantine-color-gray-4)' }}
+        >
           <Text>This browser shows no PDF here. Choose “Page images”.</Text>
         </object>
       ) : (
         <Stack gap="xs" align="center">
-          <Image src={report.urls.pagePng.replace('{page}', String(page))} alt={`Page ${page} of ${pages}`} maw={720} w="100%" fit="contain" style={{ border: '1px solid var(--mantine-color-gray-4)' }} />
+          <Image
+            src={report.urls.pagePng.replace('{page}', String(page))}
+            alt={`Page ${page} of ${pages}`}
+            maw={720}
+            w="100%"
+            fit="contain"
+            style={{ border: '1px solid var(--mantine-color-gray-4)' }}
+          />
           <Pagination total={pages} value={page} onChange={setPage} size="lg" />
         </Stack>
       )}

@@ -48,7 +48,9 @@ export function ReportSection({ jobId, canIssue, extra }: { jobId: number; canIs
           <Stack gap="sm">
             <Group justify="space-between" wrap="wrap">
               <Text fw={600}>Draft of {dateTime(draft.createdAt)}</Text>
-              <Badge color={draft.state === 'failed' ? 'red' : 'gray'} size="lg">{draft.state === 'ready' ? `${draft.pageCount} pages · ${kb(draft.byteSize)}` : draft.state}</Badge>
+              <Badge color={draft.state === 'failed' ? 'red' : 'gray'} size="lg">
+                {draft.state === 'ready' ? `${draft.pageCount} pages · ${kb(draft.byteSize)}` : draft.state}
+              </Badge>
             </Group>
             {draft.state === 'rendering' && <Rendering report={draft} />}
             {draft.state === 'failed' && <Alert color="red">The draft could not be rendered: {draft.error}</Alert>}
@@ -79,14 +81,25 @@ function IssuedCard({ report: r, onPreview, extra }: { report: ReportDto; onPrev
       <Group justify="space-between" wrap="wrap">
         <Stack gap={0}>
           <Text fw={700}>Version {r.version}</Text>
-          <Text size="sm" c="dimmed">Issued {r.issuedAt && dateTime(r.issuedAt)}{r.createdBy ? ` by ${r.createdBy.name}` : ''} · {kb(r.byteSize)}</Text>
-          {r.fingerprint && <Text size="xs" c="dimmed" ff="monospace" style={{ wordBreak: 'break-all' }}>Fingerprint {r.fingerprint}</Text>}
+          <Text size="sm" c="dimmed">
+            Issued {r.issuedAt && dateTime(r.issuedAt)}
+            {r.createdBy ? ` by ${r.createdBy.name}` : ''} · {kb(r.byteSize)}
+          </Text>
+          {r.fingerprint && (
+            <Text size="xs" c="dimmed" ff="monospace" style={{ wordBreak: 'break-all' }}>
+              Fingerprint {r.fingerprint}
+            </Text>
+          )}
         </Stack>
         {r.state === 'rendering' && <Rendering report={r} />}
         {r.state === 'ready' && r.urls.download && (
           <Group gap="xs">
-            <Button variant="light" size="md" onClick={onPreview}>Preview</Button>
-            <Button component="a" href={r.urls.download} size="md" leftSection={<IconDownload />}>Download</Button>
+            <Button variant="light" size="md" onClick={onPreview}>
+              Preview
+            </Button>
+            <Button component="a" href={r.urls.download} size="md" leftSection={<IconDownload />}>
+              Download
+            </Button>
           </Group>
         )}
       </Group>

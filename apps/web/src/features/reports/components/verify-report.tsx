@@ -14,8 +14,12 @@ function Answer({ result }: { result: VerifyResult }) {
   }
   return (
     <Alert color="teal" icon={<IconCircleCheck />} title="Genuine report">
-      <Text>Issued by <b>{result.shopName}</b></Text>
-      <Text>Job {result.jobNumber} · version {result.version}</Text>
+      <Text>
+        Issued by <b>{result.shopName}</b>
+      </Text>
+      <Text>
+        Job {result.jobNumber} · version {result.version}
+      </Text>
       <Text>Issued on {new Date(result.issuedAt).toLocaleDateString(undefined, { dateStyle: 'long' })}</Text>
     </Alert>
   );

@@ -33,16 +33,28 @@ export function CoverPreview({ name, primary, accent, logoUrl, pageSize }: Props
             <Image src={logoUrl} h={22} w="auto" fit="contain" alt="Shop logo" />
           </Box>
         )}
-        <Text fz={9} fw={600}>{name || 'Your shop'}</Text>
-        <Text fz={18} fw={700} lh={1.1}>Bench report</Text>
+        <Text fz={9} fw={600}>
+          {name || 'Your shop'}
+        </Text>
+        <Text fz={18} fw={700} lh={1.1}>
+          Bench report
+        </Text>
         <Text fz={10}>Job J-2026-0042</Text>
       </Box>
       <Box bg={p.accent.background} h={5} />
       <Box px={14} pt={10}>
-        <Text fz={7} fw={600} c={p.primaryInk.used} style={{ letterSpacing: 0.6 }}>BIKE</Text>
-        <Text fz={10} fw={600}>Quillon Works Stratus 11</Text>
-        <Text fz={7} fw={600} c={p.primaryInk.used} mt={6} style={{ letterSpacing: 0.6 }}>OWNER</Text>
-        <Text fz={10} fw={600}>Zsófia Kőrösi-Łęcka</Text>
+        <Text fz={7} fw={600} c={p.primaryInk.used} style={{ letterSpacing: 0.6 }}>
+          BIKE
+        </Text>
+        <Text fz={10} fw={600}>
+          Quillon Works Stratus 11
+        </Text>
+        <Text fz={7} fw={600} c={p.primaryInk.used} mt={6} style={{ letterSpacing: 0.6 }}>
+          OWNER
+        </Text>
+        <Text fz={10} fw={600}>
+          Zsófia Kőrösi-Łęcka
+        </Text>
       </Box>
     </Paper>
   );

@@ -10,9 +10,17 @@ export function LogoUpload({ settings }: { settings: ShopSettingsDto }) {
   const error = upload.error ?? remove.error;
   return (
     <Stack gap="xs">
-      <Text fw={600} size="sm">Logo</Text>
+      <Text fw={600} size="sm">
+        Logo
+      </Text>
       <Group gap="sm" wrap="wrap">
-        {settings.logo ? <Image src={settings.logo.url} h={48} w="auto" fit="contain" alt="Current logo" /> : <Text size="sm" c="dimmed">No logo yet.</Text>}
+        {settings.logo ? (
+          <Image src={settings.logo.url} h={48} w="auto" fit="contain" alt="Current logo" />
+        ) : (
+          <Text size="sm" c="dimmed">
+            No logo yet.
+          </Text>
+        )}
         <FileButton accept="image/jpeg,image/png,image/webp" onChange={(f) => f && upload.mutate(f)}>
           {(props) => (
             <Button {...props} size="md" variant="light" leftSection={<IconPhotoUp />} loading={upload.isPending}>
@@ -26,7 +34,9 @@ export function LogoUpload({ settings }: { settings: ShopSettingsDto }) {
           </Button>
         )}
       </Group>
-      <Text size="xs" c="dimmed">JPEG, PNG or WebP. Printed on a white panel on the report cover.</Text>
+      <Text size="xs" c="dimmed">
+        JPEG, PNG or WebP. Printed on a white panel on the report cover.
+      </Text>
       {error && <Alert color="red">{error.message}</Alert>}
     </Stack>
   );

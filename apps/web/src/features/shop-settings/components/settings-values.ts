@@ -22,10 +22,19 @@ export interface SettingsValues {
 
 export function fromDto(s: ShopSettingsDto, toMajor: (minor: number, currency: string) => string): SettingsValues {
   return {
-    name: s.name, address: s.address, email: s.email, phone: s.phone, brandPrimary: s.brandPrimary, brandAccent: s.brandAccent, reportFooter: s.reportFooter,
+    name: s.name,
+    address: s.address,
+    email: s.email,
+    phone: s.phone,
+    brandPrimary: s.brandPrimary,
+    brandAccent: s.brandAccent,
+    reportFooter: s.reportFooter,
     labourRate: toMajor(s.labourRateMinor, s.currency),
     taxRatePct: s.taxRateBp / 100,
-    currency: s.currency, units: s.units, pageSize: s.pageSize, finalCheckSecondPerson: s.finalCheckSecondPerson,
+    currency: s.currency,
+    units: s.units,
+    pageSize: s.pageSize,
+    finalCheckSecondPerson: s.finalCheckSecondPerson,
     ownChainLimits: s.chainLimits !== null,
     chain: s.chainLimits ?? { ...DEFAULT_CHAIN_LIMIT_POLICY },
   };
@@ -48,7 +57,9 @@ export function toRequest(v: SettingsValues, toMinor: (text: string, currency: s
     ...rest,
     labourRateMinor: labourRateMinor ?? Number.NaN,
     taxRateBp: taxRatePct === '' ? Number.NaN : Math.round(Number(taxRatePct) * 100),
-    chainLimits: ownChainLimits ? { replaceAt11Pct: Number(chain.replaceAt11Pct), replaceAt10Pct: Number(chain.replaceAt10Pct), cassettePct: Number(chain.cassettePct) } : null,
+    chainLimits: ownChainLimits
+      ? { replaceAt11Pct: Number(chain.replaceAt11Pct), replaceAt10Pct: Number(chain.replaceAt10Pct), cassettePct: Number(chain.cassettePct) }
+      : null,
   };
 }
 

@@ -1,6 +1,21 @@
 import { UpdateShopSettingsRequestSchema, type ShopSettingsDto } from '@benchproof/contracts';
 import { DEFAULT_CHAIN_LIMIT_POLICY, majorTextToMinor, minorToMajorText } from '@benchproof/domain';
-import { Alert, Button, ColorInput, Group, NumberInput, Paper, SegmentedControl, SimpleGrid, Stack, Switch, Text, Textarea, TextInput, Title } from '@mantine/core';
+import {
+  Alert,
+  Button,
+  ColorInput,
+  Group,
+  NumberInput,
+  Paper,
+  SegmentedControl,
+  SimpleGrid,
+  Stack,
+  Switch,
+  Text,
+  Textarea,
+  TextInput,
+  Title,
+} from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
 import type { ReactNode } from 'react';
@@ -16,7 +31,12 @@ type Form = UseFormReturnType<SettingsValues>;
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
     <Paper withBorder p="md">
-      <Stack gap="sm"><Title order={3} size="h4">{title}</Title>{children}</Stack>
+      <Stack gap="sm">
+        <Title order={3} size="h4">
+          {title}
+        </Title>
+        {children}
+      </Stack>
     </Paper>
   );
 }
@@ -27,7 +47,13 @@ function MoneySection({ form }: { form: Form }) {
       <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
         <TextInput label={`Labour rate per hour (${form.getValues().currency})`} inputMode="decimal" {...form.getInputProps('labourRate')} />
         <NumberInput label="Tax rate" suffix=" %" inputMode="decimal" min={0} max={100} step={0.5} decimalScale={2} {...form.getInputProps('taxRatePct')} />
-        <TextInput label="Currency" description="ISO code, e.g. GBP, EUR" maxLength={3} {...form.getInputProps('currency')} onChange={(e) => form.setFieldValue('currency', e.currentTarget.value.toUpperCase())} />
+        <TextInput
+          label="Currency"
+          description="ISO code, e.g. GBP, EUR"
+          maxLength={3}
+          {...form.getInputProps('currency')}
+          onChange={(e) => form.setFieldValue('currency', e.currentTarget.value.toUpperCase())}
+        />
       </SimpleGrid>
     </Section>
   );
@@ -37,21 +63,61 @@ function WorkshopSection({ form }: { form: Form }) {
   const v = form.getValues();
   return (
     <Section title="Workshop rules">
-      <Text size="sm" fw={500}>Units</Text>
-      <SegmentedControl size="md" data={[{ value: 'metric', label: 'Metric (mm)' }, { value: 'imperial', label: 'Imperial (in)' }]} {...form.getInputProps('units')} />
-      <Text size="sm" fw={500}>Report page size</Text>
+      <Text size="sm" fw={500}>
+        Units
+      </Text>
+      <SegmentedControl
+        size="md"
+        data={[
+          { value: 'metric', label: 'Metric (mm)' },
+          { value: 'imperial', label: 'Imperial (in)' },
+        ]}
+        {...form.getInputProps('units')}
+      />
+      <Text size="sm" fw={500}>
+        Report page size
+      </Text>
       <SegmentedControl size="md" data={['A4', 'Letter']} {...form.getInputProps('pageSize')} />
-      <Switch size="lg" label="Final check needs a second person (not the job's mechanic)" {...form.getInputProps('finalCheckSecondPerson', { type: 'checkbox' })} />
+      <Switch
+        size="lg"
+        label="Final check needs a second person (not the job's mechanic)"
+        {...form.getInputProps('finalCheckSecondPerson', { type: 'checkbox' })}
+      />
       <Switch size="lg" label="Use our own chain limits" {...form.getInputProps('ownChainLimits', { type: 'checkbox' })} />
       {v.ownChainLimits && (
         <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
-          <NumberInput label="Replace at, 11-speed and up" suffix=" %" inputMode="decimal" step={0.05} decimalScale={2} min={0} {...form.getInputProps('chain.replaceAt11Pct')} />
-          <NumberInput label="Replace at, 10-speed and below" suffix=" %" inputMode="decimal" step={0.05} decimalScale={2} min={0} {...form.getInputProps('chain.replaceAt10Pct')} />
-          <NumberInput label="Cassette likely worn at" suffix=" %" inputMode="decimal" step={0.05} decimalScale={2} min={0} {...form.getInputProps('chain.cassettePct')} />
+          <NumberInput
+            label="Replace at, 11-speed and up"
+            suffix=" %"
+            inputMode="decimal"
+            step={0.05}
+            decimalScale={2}
+            min={0}
+            {...form.getInputProps('chain.replaceAt11Pct')}
+          />
+          <NumberInput
+            label="Replace at, 10-speed and below"
+            suffix=" %"
+            inputMode="decimal"
+            step={0.05}
+            decimalScale={2}
+            min={0}
+            {...form.getInputProps('chain.replaceAt10Pct')}
+          />
+          <NumberInput
+            label="Cassette likely worn at"
+            suffix=" %"
+            inputMode="decimal"
+            step={0.05}
+            decimalScale={2}
+            min={0}
+            {...form.getInputProps('chain.cassettePct')}
+          />
         </SimpleGrid>
       )}
       <Text size="sm" c="dimmed">
-        Defaults: {DEFAULT_CHAIN_LIMIT_POLICY.replaceAt11Pct} % for 11/12-speed, {DEFAULT_CHAIN_LIMIT_POLICY.replaceAt10Pct} % for 10-speed and below, cassette at {DEFAULT_CHAIN_LIMIT_POLICY.cassettePct} %. These are common workshop practice; the chain maker's instructions govern.
+        Defaults: {DEFAULT_CHAIN_LIMIT_POLICY.replaceAt11Pct} % for 11/12-speed, {DEFAULT_CHAIN_LIMIT_POLICY.replaceAt10Pct} % for 10-speed and below, cassette
+        at {DEFAULT_CHAIN_LIMIT_POLICY.cassettePct} %. These are common workshop practice; the chain maker's instructions govern.
       </Text>
     </Section>
   );
@@ -68,14 +134,22 @@ function BrandSection({ form, settings }: { form: Form; settings: ShopSettingsDt
         <Textarea label="Address" autosize minRows={2} {...form.getInputProps('address')} />
       </SimpleGrid>
       <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="md">
-        <Stack gap="xs"><ColorInput label="Primary colour" format="hex" {...form.getInputProps('brandPrimary')} /><ContrastCheck colour={v.brandPrimary} /></Stack>
-        <Stack gap="xs"><ColorInput label="Accent colour" format="hex" {...form.getInputProps('brandAccent')} /><ContrastCheck colour={v.brandAccent} /></Stack>
+        <Stack gap="xs">
+          <ColorInput label="Primary colour" format="hex" {...form.getInputProps('brandPrimary')} />
+          <ContrastCheck colour={v.brandPrimary} />
+        </Stack>
+        <Stack gap="xs">
+          <ColorInput label="Accent colour" format="hex" {...form.getInputProps('brandAccent')} />
+          <ContrastCheck colour={v.brandAccent} />
+        </Stack>
       </SimpleGrid>
       <Textarea label="Report footer" autosize minRows={2} {...form.getInputProps('reportFooter')} />
       <Group align="flex-start" gap="xl" wrap="wrap">
         <LogoUpload settings={settings} />
         <Stack gap={4}>
-          <Text fw={600} size="sm">Cover preview</Text>
+          <Text fw={600} size="sm">
+            Cover preview
+          </Text>
           <CoverPreview name={v.name} primary={v.brandPrimary} accent={v.brandAccent} logoUrl={settings.logo?.url ?? null} pageSize={v.pageSize} />
         </Stack>
       </Group>
@@ -86,7 +160,11 @@ function BrandSection({ form, settings }: { form: Form; settings: ShopSettingsDt
 /** The manager's settings: rates, units, the final-check rule, chain limits and branding. */
 export function ShopSettingsForm({ settings }: { settings: ShopSettingsDto }) {
   const update = useUpdateShopSettings();
-  const form = useForm<SettingsValues>({ mode: 'controlled', initialValues: fromDto(settings, minorToMajorText), validate: validateSettings(majorTextToMinor) });
+  const form = useForm<SettingsValues>({
+    mode: 'controlled',
+    initialValues: fromDto(settings, minorToMajorText),
+    validate: validateSettings(majorTextToMinor),
+  });
   const submit = form.onSubmit((v) =>
     update.mutate(UpdateShopSettingsRequestSchema.parse(toRequest(v, majorTextToMinor)), {
       onSuccess: () => notifications.show({ color: 'teal', message: 'Settings saved.' }),
@@ -101,8 +179,14 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettingsDto }) {
         <WorkshopSection form={form} />
         <BrandSection form={form} settings={settings} />
         {failure && <Alert color="red">{failure}</Alert>}
-        {Object.keys(form.errors).length > 0 && <Alert color="red" variant="light">Some fields need attention; nothing you typed is lost.</Alert>}
-        <Button type="submit" size="lg" loading={update.isPending}>Save settings</Button>
+        {Object.keys(form.errors).length > 0 && (
+          <Alert color="red" variant="light">
+            Some fields need attention; nothing you typed is lost.
+          </Alert>
+        )}
+        <Button type="submit" size="lg" loading={update.isPending}>
+          Save settings
+        </Button>
       </Stack>
     </form>
   );

@@ -1,4 +1,12 @@
-import type { CaptionDraftDto, ShowcaseExportQuery, ShowcaseItemDto, ShowcaseQuery, ShowcaseZipRequest, UpdateShowcaseItemRequest, ErrorBody } from '@benchproof/contracts';
+import type {
+  CaptionDraftDto,
+  ShowcaseExportQuery,
+  ShowcaseItemDto,
+  ShowcaseQuery,
+  ShowcaseZipRequest,
+  UpdateShowcaseItemRequest,
+  ErrorBody,
+} from '@benchproof/contracts';
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, ApiError, csrfHeader, withQuery } from '../../../lib/api-client';
 
@@ -6,7 +14,12 @@ export const showcaseKeys = { all: ['showcase'] as const, items: (q: ShowcaseQue
 
 /** Consent can be withdrawn at any moment on the owner page: look again often. */
 export const useShowcaseItems = (q: ShowcaseQuery) =>
-  useQuery({ queryKey: showcaseKeys.items(q), queryFn: () => api<ShowcaseItemDto[]>('/showcase/items', { query: q }), placeholderData: keepPreviousData, refetchInterval: 15_000 });
+  useQuery({
+    queryKey: showcaseKeys.items(q),
+    queryFn: () => api<ShowcaseItemDto[]>('/showcase/items', { query: q }),
+    placeholderData: keepPreviousData,
+    refetchInterval: 15_000,
+  });
 
 export function useUpdateShowcaseItem(pairId: number) {
   const qc = useQueryClient();
@@ -43,4 +56,8 @@ export const downloadExport = (pairId: number, q: ShowcaseExportQuery) =>
   download(withQuery(`/api/showcase/items/${pairId}/export`, { variant: q.variant, size: q.size, layout: q.layout }), {}, `pair-${pairId}.jpg`);
 
 export const downloadZip = (req: ShowcaseZipRequest) =>
-  download('/api/showcase/zip', { method: 'POST', headers: { 'content-type': 'application/json', ...csrfHeader() }, body: JSON.stringify(req) }, 'showcase.zip');
+  download(
+    '/api/showcase/zip',
+    { method: 'POST', headers: { 'content-type': 'application/json', ...csrfHeader() }, body: JSON.stringify(req) },
+    'showcase.zip',
+  );

@@ -25,9 +25,18 @@ export function CaptionEditor({ item, opened, onClose }: { item: ShowcaseItemDto
   return (
     <Modal opened={opened} onClose={onClose} title="Caption" size="lg">
       <Stack>
-        <Textarea label="Caption for this pair" autosize minRows={3} maxLength={300} value={text} onChange={(e) => setText(e.currentTarget.value)} error={error} />
+        <Textarea
+          label="Caption for this pair"
+          autosize
+          minRows={3}
+          maxLength={300}
+          value={text}
+          onChange={(e) => setText(e.currentTarget.value)}
+          error={error}
+        />
         <Text size="sm" c="dimmed">
-          {item.consent.nameMakeModel ? 'The owner allowed naming the bike’s make and model.' : 'The owner did not allow naming the bike’s make or model.'} Never name the owner.
+          {item.consent.nameMakeModel ? 'The owner allowed naming the bike’s make and model.' : 'The owner did not allow naming the bike’s make or model.'}{' '}
+          Never name the owner.
         </Text>
         <Group justify="space-between">
           <Button size="md" variant="light" loading={drafting} onClick={() => void draft()}>

@@ -19,7 +19,14 @@ const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 
 /** The annotated render (blur boxes applied) when there is one, else the plain upright copy. */
 function Shot({ id, alt }: { id: number; alt: string }) {
   const [src, setSrc] = useState(`/api/media/${id}/annotated/screen`);
-  return <img src={src} alt={alt} onError={() => setSrc(`/api/media/${id}/screen`)} style={{ width: '100%', aspectRatio: '4 / 3', objectFit: 'cover', borderRadius: 6, display: 'block' }} />;
+  return (
+    <img
+      src={src}
+      alt={alt}
+      onError={() => setSrc(`/api/media/${id}/screen`)}
+      style={{ width: '100%', aspectRatio: '4 / 3', objectFit: 'cover', borderRadius: 6, display: 'block' }}
+    />
+  );
 }
 
 interface Props {
@@ -42,12 +49,22 @@ export function ShowcaseCard({ item, selected, onSelect }: Props) {
       <Stack gap={8} mt="sm">
         <Group justify="space-between" wrap="nowrap" align="flex-start">
           <Text size="md">{item.caption}</Text>
-          <ActionIcon size={48} variant={item.favourite ? 'filled' : 'light'} color="yellow" aria-label={item.favourite ? 'Remove favourite' : 'Mark favourite'} aria-pressed={item.favourite} loading={mark.isPending} onClick={() => mark.mutate({ favourite: !item.favourite })}>
+          <ActionIcon
+            size={48}
+            variant={item.favourite ? 'filled' : 'light'}
+            color="yellow"
+            aria-label={item.favourite ? 'Remove favourite' : 'Mark favourite'}
+            aria-pressed={item.favourite}
+            loading={mark.isPending}
+            onClick={() => mark.mutate({ favourite: !item.favourite })}
+          >
             {item.favourite ? <IconStarFilled /> : <IconStar />}
           </ActionIcon>
         </Group>
         <Group gap={6}>
-          <Badge variant="light" size="lg">{area}</Badge>
+          <Badge variant="light" size="lg">
+            {area}
+          </Badge>
           <Text size="sm" c="teal.8" fw={600} title={`Consent wording ${item.consent.wordingVersion}`}>
             Consent {day(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
           </Text>
@@ -60,7 +77,17 @@ export function ShowcaseCard({ item, selected, onSelect }: Props) {
 }
 
 /** Format and size, one-tap export, caption and zip selection. */
-function ExportControls({ pairId, selected, onSelect, onCaption }: { pairId: number; selected: boolean; onSelect: (on: boolean) => void; onCaption: () => void }) {
+function ExportControls({
+  pairId,
+  selected,
+  onSelect,
+  onCaption,
+}: {
+  pairId: number;
+  selected: boolean;
+  onSelect: (on: boolean) => void;
+  onCaption: () => void;
+}) {
   const [variant, setVariant] = useState<ShowcaseVariant>('pair');
   const [size, setSize] = useState<ShowcaseSize>('square');
   const [busy, setBusy] = useState(false);
@@ -82,7 +109,11 @@ function ExportControls({ pairId, selected, onSelect, onCaption }: { pairId: num
         <Select size="md" label="What" data={VARIANT_OPTIONS} value={variant} onChange={(v) => v && setVariant(v)} allowDeselect={false} />
         <Select size="md" label="Size" data={SIZE_OPTIONS} value={size} onChange={(v) => v && setSize(v)} allowDeselect={false} />
       </Stack>
-      {error && <Text c="red" size="sm" role="alert">{error}</Text>}
+      {error && (
+        <Text c="red" size="sm" role="alert">
+          {error}
+        </Text>
+      )}
       <Group justify="space-between">
         <Checkbox size="md" label="Select for zip" checked={selected} onChange={(e) => onSelect(e.currentTarget.checked)} />
         <Group gap="xs">

@@ -34,29 +34,70 @@ export function ShowcaseLibrary() {
   return (
     <Stack>
       <SimpleGrid cols={{ base: 1, sm: 3 }}>
-        <Select size="md" label="Area" placeholder="All areas" clearable data={AREA_OPTIONS} value={query.area ?? null} onChange={(v) => set({ area: (v ?? undefined) })} />
+        <Select
+          size="md"
+          label="Area"
+          placeholder="All areas"
+          clearable
+          data={AREA_OPTIONS}
+          value={query.area ?? null}
+          onChange={(v) => set({ area: v ?? undefined })}
+        />
         <TextInput size="md" type="date" label="From" value={query.from ?? ''} onChange={(e) => set({ from: e.currentTarget.value || undefined })} />
         <TextInput size="md" type="date" label="To" value={query.to ?? ''} onChange={(e) => set({ to: e.currentTarget.value || undefined })} />
       </SimpleGrid>
-      <Switch size="lg" label="Favourites only" checked={query.favourites === 'true'} onChange={(e) => set({ favourites: e.currentTarget.checked ? 'true' : undefined })} />
+      <Switch
+        size="lg"
+        label="Favourites only"
+        checked={query.favourites === 'true'}
+        onChange={(e) => set({ favourites: e.currentTarget.checked ? 'true' : undefined })}
+      />
       {items.isError && <Alert color="red">{items.error.message}</Alert>}
       {items.isSuccess && list.length === 0 && (
         <Text c="dimmed">No consented pairs match. A pair appears here once the owner has agreed to marketing use on their page or at the counter.</Text>
       )}
       <SimpleGrid cols={{ base: 1, sm: 2, lg: 3 }}>
         {list.map((item) => (
-          <ShowcaseCard key={item.pairId} item={item} selected={selected.has(item.pairId)} onSelect={(on) => setSelected((s) => { const n = new Set(s); if (on) n.add(item.pairId); else n.delete(item.pairId); return n; })} />
+          <ShowcaseCard
+            key={item.pairId}
+            item={item}
+            selected={selected.has(item.pairId)}
+            onSelect={(on) =>
+              setSelected((s) => {
+                const n = new Set(s);
+                if (on) n.add(item.pairId);
+                else n.delete(item.pairId);
+                return n;
+              })
+            }
+          />
         ))}
       </SimpleGrid>
       {chosen.length > 0 && (
         <Group justify="flex-end" align="flex-end" style={{ position: 'sticky', bottom: 0, background: 'var(--mantine-color-body)', padding: 8 }}>
-          <Select size="md" label="Zip size" w={240} data={[{ value: 'square', label: 'Square 1080×1080' }, { value: 'portrait', label: 'Portrait 1080×1350' }, { value: 'banner', label: 'Banner 1600×600' }]} value={zipSize} onChange={(v) => v && setZipSize(v)} allowDeselect={false} />
+          <Select
+            size="md"
+            label="Zip size"
+            w={240}
+            data={[
+              { value: 'square', label: 'Square 1080×1080' },
+              { value: 'portrait', label: 'Portrait 1080×1350' },
+              { value: 'banner', label: 'Banner 1600×600' },
+            ]}
+            value={zipSize}
+            onChange={(v) => v && setZipSize(v)}
+            allowDeselect={false}
+          />
           <Button size="md" leftSection={<IconFileZip size={20} />} loading={zipping} onClick={() => void zip()}>
             Zip {chosen.length} selected
           </Button>
         </Group>
       )}
-      {zipError && <Text c="red" role="alert">{zipError}</Text>}
+      {zipError && (
+        <Text c="red" role="alert">
+          {zipError}
+        </Text>
+      )}
     </Stack>
   );
 }

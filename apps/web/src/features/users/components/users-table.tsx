@@ -22,15 +22,29 @@ function UserRow({ user, me }: { user: UserDto; me: number }) {
     <Table.Tr opacity={user.active ? 1 : 0.55}>
       <Table.Td>
         <Text fw={600}>{user.name}</Text>
-        <Text size="sm" c="dimmed">{user.email}</Text>
+        <Text size="sm" c="dimmed">
+          {user.email}
+        </Text>
       </Table.Td>
       <Table.Td miw={150}>
-        <Select aria-label={`Role of ${user.name}`} data={roleOptions} value={user.role} allowDeselect={false} disabled={!user.active || pending} onChange={(v) => v && run(user.id, { role: v })} />
+        <Select
+          aria-label={`Role of ${user.name}`}
+          data={roleOptions}
+          value={user.role}
+          allowDeselect={false}
+          disabled={!user.active || pending}
+          onChange={(v) => v && run(user.id, { role: v })}
+        />
       </Table.Td>
       <Table.Td>{user.active ? <Badge color="bench">Active</Badge> : <Badge color="gray">Deactivated</Badge>}</Table.Td>
       <Table.Td>
         <Group justify="flex-end">
-          <Button variant="light" color={user.active ? 'red' : 'bench'} disabled={pending || user.id === me} onClick={() => run(user.id, { active: !user.active })}>
+          <Button
+            variant="light"
+            color={user.active ? 'red' : 'bench'}
+            disabled={pending || user.id === me}
+            onClick={() => run(user.id, { active: !user.active })}
+          >
             {user.active ? 'Deactivate' : 'Reactivate'}
           </Button>
         </Group>
@@ -53,7 +67,11 @@ export function UsersTable({ me }: { me: number }) {
             <Table.Th />
           </Table.Tr>
         </Table.Thead>
-        <Table.Tbody>{users.data?.map((u) => <UserRow key={u.id} user={u} me={me} />)}</Table.Tbody>
+        <Table.Tbody>
+          {users.data?.map((u) => (
+            <UserRow key={u.id} user={u} me={me} />
+          ))}
+        </Table.Tbody>
       </Table>
     </Table.ScrollContainer>
   );

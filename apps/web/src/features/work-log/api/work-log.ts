@@ -7,8 +7,10 @@ export const workLogKeys = {
   torque: (jobId: number) => ['jobs', 'detail', jobId, 'torque-entries'] as const,
 };
 
-export const workEntriesQuery = (jobId: number) => queryOptions({ queryKey: workLogKeys.work(jobId), queryFn: () => api<WorkEntryDto[]>(`/jobs/${jobId}/work-entries`) });
-export const torqueEntriesQuery = (jobId: number) => queryOptions({ queryKey: workLogKeys.torque(jobId), queryFn: () => api<TorqueEntryDto[]>(`/jobs/${jobId}/torque-entries`) });
+export const workEntriesQuery = (jobId: number) =>
+  queryOptions({ queryKey: workLogKeys.work(jobId), queryFn: () => api<WorkEntryDto[]>(`/jobs/${jobId}/work-entries`) });
+export const torqueEntriesQuery = (jobId: number) =>
+  queryOptions({ queryKey: workLogKeys.torque(jobId), queryFn: () => api<TorqueEntryDto[]>(`/jobs/${jobId}/torque-entries`) });
 
 export const useWorkEntries = (jobId: number) => useQuery(workEntriesQuery(jobId));
 export const useTorqueEntries = (jobId: number) => useQuery(torqueEntriesQuery(jobId));

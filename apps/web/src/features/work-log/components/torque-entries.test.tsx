@@ -9,10 +9,29 @@ import { TorqueEntries } from './torque-entries';
 
 function entry(id: number, patch: Partial<TorqueEntryDto>): TorqueEntryDto {
   return {
-    id, fastener: `Bolt ${id}`, specified: { min: 5, max: null, unit: 'nm' }, applied: { value: 5, unit: 'nm' }, tolerancePct: 6, specSource: 'Printed on the stem',
-    tool: 'TW-02', toolCalibratedOn: null, calibrationOverdue: false, threadlocker: null, carbonPart: false,
-    verdict: 'within', withinTolerance: true, deviationPct: 0, appliedNm: 5, lowNm: 4.7, highNm: 5.3, message: 'Within', cautions: [TORQUE_CAUTION],
-    userId: 1, userName: 'Ines', at: '2025-06-01T10:00:00.000Z', ...patch,
+    id,
+    fastener: `Bolt ${id}`,
+    specified: { min: 5, max: null, unit: 'nm' },
+    applied: { value: 5, unit: 'nm' },
+    tolerancePct: 6,
+    specSource: 'Printed on the stem',
+    tool: 'TW-02',
+    toolCalibratedOn: null,
+    calibrationOverdue: false,
+    threadlocker: null,
+    carbonPart: false,
+    verdict: 'within',
+    withinTolerance: true,
+    deviationPct: 0,
+    appliedNm: 5,
+    lowNm: 4.7,
+    highNm: 5.3,
+    message: 'Within',
+    cautions: [TORQUE_CAUTION],
+    userId: 1,
+    userName: 'Ines',
+    at: '2025-06-01T10:00:00.000Z',
+    ...patch,
   };
 }
 
@@ -21,7 +40,9 @@ function renderLog(entries: TorqueEntryDto[]) {
   qc.setQueryData(workLogKeys.torque(1), entries);
   return render(
     <QueryClientProvider client={qc}>
-      <MantineProvider theme={theme}><TorqueEntries jobId={1} /></MantineProvider>
+      <MantineProvider theme={theme}>
+        <TorqueEntries jobId={1} />
+      </MantineProvider>
     </QueryClientProvider>,
   );
 }

@@ -8,7 +8,11 @@ import { useTorqueEntries } from '../api/work-log';
 import { CalibrationNotice } from './calibration-notice';
 import { TorqueForm } from './torque-form';
 
-const VERDICT = { within: { label: 'Within spec', colour: 'teal' }, under: { label: 'Under', colour: 'orange' }, over: { label: 'Over', colour: 'red' } } as const;
+const VERDICT = {
+  within: { label: 'Within spec', colour: 'teal' },
+  under: { label: 'Under', colour: 'orange' },
+  over: { label: 'Over', colour: 'red' },
+} as const;
 
 /** The wrench and its calibration, the threadlocker, as the log shows them. */
 function ToolLine({ e }: { e: TorqueEntryDto }) {
@@ -25,15 +29,20 @@ function TorqueEntryCard({ entry: e }: { entry: TorqueEntryDto }) {
     <Card withBorder padding="sm">
       <Group justify="space-between" wrap="nowrap">
         <Text fw={700}>{e.fastener}</Text>
-        <Badge color={VERDICT[e.verdict].colour} variant="filled" radius="sm">{VERDICT[e.verdict].label}</Badge>
+        <Badge color={VERDICT[e.verdict].colour} variant="filled" radius="sm">
+          {VERDICT[e.verdict].label}
+        </Badge>
       </Group>
       <Text size="sm">
-        Maker {e.specified.max ? `${e.specified.min}–${formatTorque(e.specified.max, e.specified.unit)}` : formatTorque(e.specified.min, e.specified.unit)} · applied {formatTorque(e.applied.value, e.applied.unit)}
+        Maker {e.specified.max ? `${e.specified.min}–${formatTorque(e.specified.max, e.specified.unit)}` : formatTorque(e.specified.min, e.specified.unit)} ·
+        applied {formatTorque(e.applied.value, e.applied.unit)}
         {e.carbonPart && ' · carbon part'}
       </Text>
       <ToolLine e={e} />
       <CalibrationNotice overdue={e.calibrationOverdue} />
-      <Text size="xs" c="dimmed">Source: {e.specSource} · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}</Text>
+      <Text size="xs" c="dimmed">
+        Source: {e.specSource} · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}
+      </Text>
     </Card>
   );
 }
@@ -43,12 +52,20 @@ export function TorqueEntries({ jobId, canRecord = true }: { jobId: number; canR
   const entries = useTorqueEntries(jobId);
   return (
     <Stack>
-      <Title order={3} size="h4">Torque</Title>
+      <Title order={3} size="h4">
+        Torque
+      </Title>
       <SafetyNote title="Torque" text={TORQUE_CAUTION} />
       <SafetyNote title="Carbon parts" text={CARBON_CAUTION} />
       <QueryState isLoading={entries.isLoading} error={entries.error} />
-      {entries.data?.map((e) => <TorqueEntryCard key={e.id} entry={e} />)}
-      {canRecord && <Card withBorder padding="md" bg="gray.0"><TorqueForm jobId={jobId} /></Card>}
+      {entries.data?.map((e) => (
+        <TorqueEntryCard key={e.id} entry={e} />
+      ))}
+      {canRecord && (
+        <Card withBorder padding="md" bg="gray.0">
+          <TorqueForm jobId={jobId} />
+        </Card>
+      )}
     </Stack>
   );
 }

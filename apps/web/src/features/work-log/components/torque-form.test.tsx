@@ -10,7 +10,11 @@ function renderForm() {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
   return render(
     <QueryClientProvider client={qc}>
-      <MantineProvider theme={theme}><DatesProvider settings={{}}><TorqueForm jobId={7} /></DatesProvider></MantineProvider>
+      <MantineProvider theme={theme}>
+        <DatesProvider settings={{}}>
+          <TorqueForm jobId={7} />
+        </DatesProvider>
+      </MantineProvider>
     </QueryClientProvider>,
   );
 }

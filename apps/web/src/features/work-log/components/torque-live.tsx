@@ -5,13 +5,31 @@ import { IconAlertTriangle, IconCircleCheck } from '@tabler/icons-react';
 const VERDICT_TEXT = { within: 'Within specification', under: 'Under the maker’s value', over: 'Over the maker’s value' } as const;
 
 /** The verdict as the mechanic types (libs/domain torqueVerdict), plus the reading in every unit for reference. */
-export function TorqueLive({ spec, applied, carbonPart }: { spec: TorqueSpec | null; applied: { value: number; unit: TorqueUnit } | null; carbonPart: boolean }) {
-  if (!spec || !applied) return <Text size="sm" c="dimmed">Enter the maker’s value and the applied torque to see the verdict.</Text>;
+export function TorqueLive({
+  spec,
+  applied,
+  carbonPart,
+}: {
+  spec: TorqueSpec | null;
+  applied: { value: number; unit: TorqueUnit } | null;
+  carbonPart: boolean;
+}) {
+  if (!spec || !applied)
+    return (
+      <Text size="sm" c="dimmed">
+        Enter the maker’s value and the applied torque to see the verdict.
+      </Text>
+    );
   let v;
   try {
     v = torqueVerdict({ specified: spec, applied, carbonPart });
   } catch (e) {
-    if (isDomainInputError(e)) return <Alert color="red" variant="light">{e.message}</Alert>;
+    if (isDomainInputError(e))
+      return (
+        <Alert color="red" variant="light">
+          {e.message}
+        </Alert>
+      );
     throw e;
   }
   const ok = v.verdict === 'within';
@@ -20,13 +38,19 @@ export function TorqueLive({ spec, applied, carbonPart }: { spec: TorqueSpec | n
       <Stack gap={6}>
         <Group gap="xs">
           {ok ? <IconCircleCheck color="var(--mantine-color-teal-8)" /> : <IconAlertTriangle color="var(--mantine-color-red-8)" />}
-          <Text fw={800} c={ok ? 'teal.9' : 'red.8'}>{VERDICT_TEXT[v.verdict]}</Text>
+          <Text fw={800} c={ok ? 'teal.9' : 'red.8'}>
+            {VERDICT_TEXT[v.verdict]}
+          </Text>
         </Group>
         <Text size="sm">{v.message}</Text>
         <Group gap={6}>
-          <Text size="xs" c="dimmed">For reference only:</Text>
+          <Text size="xs" c="dimmed">
+            For reference only:
+          </Text>
           {TORQUE_UNITS.filter((u) => u !== applied.unit).map((u) => (
-            <Badge key={u} variant="outline" color="gray" radius="sm" tt="none">{formatTorque(convertTorque(applied.value, applied.unit, u), u)}</Badge>
+            <Badge key={u} variant="outline" color="gray" radius="sm" tt="none">
+              {formatTorque(convertTorque(applied.value, applied.unit, u), u)}
+            </Badge>
           ))}
         </Group>
       </Stack>

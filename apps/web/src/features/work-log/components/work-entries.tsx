@@ -8,7 +8,10 @@ import { useAddWorkEntry, useWorkEntries } from '../api/work-log';
 
 function WorkEntryForm({ jobId }: { jobId: number }) {
   const add = useAddWorkEntry(jobId);
-  const form = useForm<WorkEntryRequest>({ initialValues: { description: '', partsUsed: '', minutes: 15 }, validate: contractResolver(WorkEntryRequestSchema, (v: WorkEntryRequest) => v) });
+  const form = useForm<WorkEntryRequest>({
+    initialValues: { description: '', partsUsed: '', minutes: 15 },
+    validate: contractResolver(WorkEntryRequestSchema, (v: WorkEntryRequest) => v),
+  });
   const submit = form.onSubmit((v) => add.mutate(v, { onSuccess: () => form.reset(), onError: (e) => showServerFieldErrors(form, e) }));
   const failure = formFailure(add.error);
   return (
@@ -18,7 +21,9 @@ function WorkEntryForm({ jobId }: { jobId: number }) {
         <Textarea label="Parts used" autosize minRows={1} {...form.getInputProps('partsUsed')} />
         <NumberInput label="Minutes" inputMode="numeric" min={0} max={1440} step={5} allowDecimal={false} size="lg" {...form.getInputProps('minutes')} />
         {failure && <Alert color="red">{failure}</Alert>}
-        <Button type="submit" size="lg" loading={add.isPending}>Log work</Button>
+        <Button type="submit" size="lg" loading={add.isPending}>
+          Log work
+        </Button>
       </Stack>
     </form>
   );
@@ -30,16 +35,27 @@ export function WorkEntries({ jobId, canRecord = true }: { jobId: number; canRec
   const total = entries.data?.reduce((s, e) => s + e.minutes, 0) ?? 0;
   return (
     <Stack>
-      <Group justify="space-between"><Title order={3} size="h4">Work done</Title><Text c="dimmed">{total} min logged</Text></Group>
+      <Group justify="space-between">
+        <Title order={3} size="h4">
+          Work done
+        </Title>
+        <Text c="dimmed">{total} min logged</Text>
+      </Group>
       <QueryState isLoading={entries.isLoading} error={entries.error} />
       {entries.data?.map((e) => (
         <Card key={e.id} withBorder padding="sm">
           <Text style={{ whiteSpace: 'pre-wrap' }}>{e.description}</Text>
           {e.partsUsed && <Text size="sm">Parts: {e.partsUsed}</Text>}
-          <Text size="xs" c="dimmed">{e.minutes} min · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}</Text>
+          <Text size="xs" c="dimmed">
+            {e.minutes} min · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}
+          </Text>
         </Card>
       ))}
-      {canRecord && <Card withBorder padding="md" bg="gray.0"><WorkEntryForm jobId={jobId} /></Card>}
+      {canRecord && (
+        <Card withBorder padding="md" bg="gray.0">
+          <WorkEntryForm jobId={jobId} />
+        </Card>
+      )}
     </Stack>
   );
 }
