@@ -1,11 +1,18 @@
-// `npm run bench`: every benchmark (needs `npm run build` first), then one table of
+// `npm run bench`: every benchmark (building the app first when a fresh clone has no build), then one table of
 // benchmark, baseline (measured in the same run), product, ratio, target and whether it is met.
-import { spawn } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { printTable } from './table.mjs';
 
 const here = dirname(fileURLToPath(import.meta.url));
+const root = join(here, '../../..');
+if (!existsSync(join(root, 'dist/apps/api')) || !existsSync(join(root, 'dist/apps/web/index.html'))) {
+  console.log('No build found: running `npm run build` first.');
+  const built = spawnSync('npm', ['run', 'build'], { cwd: root, stdio: 'inherit' });
+  if (built.status !== 0) process.exit(built.status ?? 1);
+}
 const BENCHES = [
   'jobs-list.bench.mjs',
   'photo.bench.mjs',
