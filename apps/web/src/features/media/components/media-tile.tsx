@@ -27,6 +27,29 @@ function TileBody({ asset }: { asset: MediaAssetDto }) {
   return <Image src={src} h="100%" w="100%" fit="cover" alt={asset.caption || `${MEDIA_KIND_LABELS[asset.kind]} ${asset.id}`} loading="lazy" />;
 }
 
+/** Corner marks over the thumbnail: a video, a scope still, a deleted shot. */
+function TileMarks({ asset }: { asset: MediaAssetDto }) {
+  return (
+    <>
+      {isVideoKind(asset.kind) && (
+        <Box pos="absolute" bottom={6} right={6} c="white" style={{ filter: 'drop-shadow(0 0 2px black)', pointerEvents: 'none' }}>
+          <IconPlayerPlayFilled size={22} />
+        </Box>
+      )}
+      {asset.source === 'scope' && (
+        <Badge pos="absolute" top={6} right={6} size="sm" color="brass" variant="filled">
+          Scope
+        </Badge>
+      )}
+      {asset.deletedAt && (
+        <Badge pos="absolute" bottom={6} left={6} size="sm" color="red">
+          Deleted
+        </Badge>
+      )}
+    </>
+  );
+}
+
 /** A square thumbnail that opens the viewer; the corner box selects it for bulk actions. */
 export function MediaTile({
   asset,
@@ -62,21 +85,7 @@ export function MediaTile({
         onChange={(e) => onSelect(e.currentTarget.checked)}
         styles={{ input: { boxShadow: '0 0 0 2px white' } }}
       />
-      {isVideoKind(asset.kind) && (
-        <Box pos="absolute" bottom={6} right={6} c="white" style={{ filter: 'drop-shadow(0 0 2px black)', pointerEvents: 'none' }}>
-          <IconPlayerPlayFilled size={22} />
-        </Box>
-      )}
-      {asset.source === 'scope' && (
-        <Badge pos="absolute" top={6} right={6} size="sm" color="brass" variant="filled">
-          Scope
-        </Badge>
-      )}
-      {asset.deletedAt && (
-        <Badge pos="absolute" bottom={6} left={6} size="sm" color="red">
-          Deleted
-        </Badge>
-      )}
+      <TileMarks asset={asset} />
     </Box>
   );
 }

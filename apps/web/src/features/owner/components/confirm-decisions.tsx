@@ -1,10 +1,9 @@
 import type { OwnerFinding } from '@benchproof/contracts';
 import { DECLINED_SAFETY_NOTICE, formatMoney, INSPECTION_AREA_LABELS } from '@benchproof/domain';
 import { Alert, Button, Checkbox, Group, List, Modal, Stack, Text } from '@mantine/core';
-import { useState } from 'react';
 import type { ApiError } from '../../../lib/api-client';
-import { useOwnerDecisions } from '../api/owner-page';
 import type { Choice } from './use-choices';
+import { useSendDecisions } from './use-send-decisions';
 
 interface Props {
   token: string;
@@ -18,65 +17,41 @@ interface Props {
   currency: string;
 }
 
+/** Each answer in one line, as the owner chose it. */
+function AnswerList({ chosen, choices }: { chosen: OwnerFinding[]; choices: Record<number, Choice> }) {
+  return (
+    <List spacing="xs">
+      {chosen.map((f) => (
+        <List.Item key={f.id}>
+          <Text span fw={600}>
+            {choices[f.recommendation?.id ?? 0] === 'approved' ? 'Approve' : 'Decline'}:
+          </Text>{' '}
+          {f.recommendation?.summary} ({INSPECTION_AREA_LABELS[f.area]})
+        </List.Item>
+      ))}
+    </List>
+  );
+}
+
 /** Last look before the answers go to the shop; a declined safety item needs its own tick. */
 export function ConfirmDecisions({ token, opened, onClose, onDone, onPriceChanged, chosen, choices, approvedMinor, currency }: Props) {
-  const send = useOwnerDecisions(token);
-  const [safetyOk, setSafetyOk] = useState<Record<number, boolean>>({});
-  const declinedSafety = chosen.filter((f) => f.recommendation?.urgency === 'safety' && choices[f.recommendation.id] === 'declined');
-  const ready = declinedSafety.every((f) => safetyOk[f.id]);
-  const err = send.error as ApiError | null;
-
-  const submit = () => {
-    const items = chosen.flatMap((f) => {
-      const rec = f.recommendation;
-      if (!rec) return [];
-      const status = choices[rec.id];
-      return [
-        {
-          recommendationId: rec.id,
-          status,
-          seenUpdatedAt: rec.updatedAt,
-          seenGrossMinor: rec.totals.grossMinor,
-          safetyConfirmed: status === 'declined' && Boolean(safetyOk[f.id]),
-        },
-      ];
-    });
-    send.mutate(
-      { items },
-      {
-        onSuccess: onDone,
-        onError: (e) => {
-          if ((e as ApiError).code === 'PRICE_CHANGED') onPriceChanged();
-        },
-      },
-    );
-  };
-
+  const send = useSendDecisions({ token, chosen, choices, onDone, onPriceChanged });
   return (
     <Modal opened={opened} onClose={onClose} title="Send your answers to the shop?" fullScreen radius={0}>
       <Stack gap="md">
-        <List spacing="xs">
-          {chosen.map((f) => (
-            <List.Item key={f.id}>
-              <Text span fw={600}>
-                {choices[f.recommendation?.id ?? 0] === 'approved' ? 'Approve' : 'Decline'}:
-              </Text>{' '}
-              {f.recommendation?.summary} ({INSPECTION_AREA_LABELS[f.area]})
-            </List.Item>
-          ))}
-        </List>
+        <AnswerList chosen={chosen} choices={choices} />
         <Text size="lg">
           Approved work: <b>{formatMoney(approvedMinor, currency)}</b> including tax
         </Text>
-        {declinedSafety.map((f) => (
-          <SafetyDecline key={f.id} finding={f} confirmed={Boolean(safetyOk[f.id])} onConfirm={(ok) => setSafetyOk((p) => ({ ...p, [f.id]: ok }))} />
+        {send.declinedSafety.map((f) => (
+          <SafetyDecline key={f.id} finding={f} confirmed={Boolean(send.safetyOk[f.id])} onConfirm={(ok) => send.confirmSafety(f.id, ok)} />
         ))}
-        {err && <SendError err={err} />}
+        {send.error && <SendError err={send.error} />}
         <Group grow>
           <Button size="lg" mih={52} variant="default" onClick={onClose}>
             Back
           </Button>
-          <Button size="lg" mih={52} onClick={submit} loading={send.isPending} disabled={!ready || chosen.length === 0}>
+          <Button size="lg" mih={52} onClick={send.submit} loading={send.sending} disabled={!send.ready || chosen.length === 0}>
             Send answers
           </Button>
         </Group>
@@ -86,7 +61,7 @@ export function ConfirmDecisions({ token, opened, onClose, onDone, onPriceChange
 }
 
 /** A declined safety item: the caution in full and a second confirmation. */
-function SafetyDecline({ finding: f, confirmed, onConfirm }: { finding: Props['chosen'][number]; confirmed: boolean; onConfirm: (ok: boolean) => void }) {
+function SafetyDecline({ finding: f, confirmed, onConfirm }: { finding: OwnerFinding; confirmed: boolean; onConfirm: (ok: boolean) => void }) {
   return (
     <Alert color="red" variant="light" title={`You are declining a safety item: ${f.recommendation?.summary ?? ''}`}>
       <Stack gap="xs">

@@ -1,3 +1,4 @@
+import type { OwnerFinding } from '@benchproof/contracts';
 import { formatMoney } from '@benchproof/domain';
 import { Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
 import { useState } from 'react';
@@ -9,7 +10,7 @@ import { LinkProblem } from './link-problem';
 import classes from './owner.module.css';
 import { OwnerFindingCard } from './owner-finding';
 import { BikeAndJob, BrandBar, Measurements, Pairs, ReportAndContact } from './owner-sections';
-import { useChoices } from './use-choices';
+import { useChoices, type Choice } from './use-choices';
 
 /** The owner's private page for one job, phone-first: evidence, decisions, consent. */
 export function OwnerPage({ token }: { token: string }) {
@@ -27,12 +28,61 @@ export function OwnerPage({ token }: { token: string }) {
   return <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} />;
 }
 
-function OwnerPageBody({ token, page, refetch }: { token: string; page: NonNullable<ReturnType<typeof useOwnerPage>['data']>; refetch: () => void }) {
+type OwnerPageData = NonNullable<ReturnType<typeof useOwnerPage>['data']>;
+
+/** The findings with the owner's choice on each; unsafe items first, since "do not ride" must be the first thing read. */
+function FindingsToDecide({
+  findings,
+  choices,
+  onChoose,
+}: {
+  findings: OwnerFinding[];
+  choices: Record<number, Choice>;
+  onChoose: (recId: number, c: Choice) => void;
+}) {
+  const sorted = [...findings].sort((a, b) => Number(b.doNotRide) - Number(a.doNotRide));
+  return (
+    <Stack gap="sm">
+      <Title order={2} size="h3">
+        What we found
+      </Title>
+      {sorted.map((f) => (
+        <OwnerFindingCard
+          key={f.id}
+          finding={f}
+          choice={f.recommendation ? choices[f.recommendation.id] : undefined}
+          onChoose={(ch) => f.recommendation && onChoose(f.recommendation.id, ch)}
+        />
+      ))}
+    </Stack>
+  );
+}
+
+/** Stays at the bottom of the screen: how many answered, the running total, and the way to confirm. */
+function AnswerBar({ answered, pending, approved, onConfirm }: { answered: number; pending: number; approved: string; onConfirm: () => void }) {
+  return (
+    <div className={classes.stickyBar}>
+      <Group className={classes.stickyInner} justify="space-between" wrap="nowrap">
+        <div>
+          <Text size="sm" c="dimmed">
+            {answered} of {pending} answered
+          </Text>
+          <Text fw={700} size="lg" data-testid="running-total">
+            Approved: {approved}
+          </Text>
+        </div>
+        <Button size="lg" mih={52} disabled={answered === 0} onClick={onConfirm}>
+          Confirm
+        </Button>
+      </Group>
+    </div>
+  );
+}
+
+function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPageData; refetch: () => void }) {
   const c = useChoices(page.findings);
   const [confirming, setConfirming] = useState(false);
   const [sent, setSent] = useState(false);
-  // Unsafe items first: "do not ride" must be the first thing the owner reads.
-  const findings = [...page.findings].sort((a, b) => Number(b.doNotRide) - Number(a.doNotRide));
   const currency = page.findings.find((f) => f.recommendation)?.recommendation?.currency ?? 'EUR';
   return (
     <div className={classes.page}>
@@ -44,42 +94,19 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: NonNulla
             Thank you — the shop has your answers.
           </Text>
         )}
-        {page.findings.length > 0 && (
-          <Stack gap="sm">
-            <Title order={2} size="h3">
-              What we found
-            </Title>
-            {findings.map((f) => (
-              <OwnerFindingCard
-                key={f.id}
-                finding={f}
-                choice={f.recommendation ? c.choices[f.recommendation.id] : undefined}
-                onChoose={(ch) => f.recommendation && c.choose(f.recommendation.id, ch)}
-              />
-            ))}
-          </Stack>
-        )}
+        {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={c.choose} />}
         <Measurements page={page} />
         <Pairs page={page} />
         <ConsentCard token={token} consent={page.consent} />
         <ReportAndContact page={page} />
       </Stack>
       {c.pending.length > 0 && (
-        <div className={classes.stickyBar}>
-          <Group className={classes.stickyInner} justify="space-between" wrap="nowrap">
-            <div>
-              <Text size="sm" c="dimmed">
-                {c.chosen.length} of {c.pending.length} answered
-              </Text>
-              <Text fw={700} size="lg" data-testid="running-total">
-                Approved: {formatMoney(c.approvedMinor, currency)}
-              </Text>
-            </div>
-            <Button size="lg" mih={52} disabled={c.chosen.length === 0} onClick={() => setConfirming(true)}>
-              Confirm
-            </Button>
-          </Group>
-        </div>
+        <AnswerBar
+          answered={c.chosen.length}
+          pending={c.pending.length}
+          approved={formatMoney(c.approvedMinor, currency)}
+          onConfirm={() => setConfirming(true)}
+        />
       )}
       <ConfirmDecisions
         token={token}

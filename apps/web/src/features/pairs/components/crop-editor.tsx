@@ -16,6 +16,24 @@ export function cropAround(cx: number, cy: number, zoom: number): PairCrop | nul
 }
 const round = (v: number) => Math.round(v * 1e4) / 1e4;
 
+/** The chosen window drawn over the whole picture, everything outside it dimmed. */
+function CropWindow({ crop }: { crop: PairCrop }) {
+  return (
+    <div
+      style={{
+        position: 'absolute',
+        left: `${crop.x * 100}%`,
+        top: `${crop.y * 100}%`,
+        width: `${crop.w * 100}%`,
+        height: `${crop.h * 100}%`,
+        border: '3px solid #fff',
+        boxShadow: '0 0 0 9999px rgba(0,0,0,0.5)',
+        pointerEvents: 'none',
+      }}
+    />
+  );
+}
+
 /**
  * Choose how close to zoom, then tap the spot to centre on: both shots of the pair get
  * the same window. Coarse on purpose: a gloved finger at the workstand.
@@ -52,20 +70,7 @@ export function CropEditor({
       </Text>
       <div onClick={tap} style={{ position: 'relative', cursor: 'crosshair', borderRadius: 8, overflow: 'hidden' }} data-testid="crop-area">
         <PairImage asset={before} alt="Before, whole picture" style={{ display: 'block', width: '100%' }} />
-        {crop && (
-          <div
-            style={{
-              position: 'absolute',
-              left: `${crop.x * 100}%`,
-              top: `${crop.y * 100}%`,
-              width: `${crop.w * 100}%`,
-              height: `${crop.h * 100}%`,
-              border: '3px solid #fff',
-              boxShadow: '0 0 0 9999px rgba(0,0,0,0.5)',
-              pointerEvents: 'none',
-            }}
-          />
-        )}
+        {crop && <CropWindow crop={crop} />}
       </div>
       <Group justify="flex-end">
         <Button size="md" onClick={() => onSave(crop)} loading={saving}>

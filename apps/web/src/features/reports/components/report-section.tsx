@@ -18,6 +18,29 @@ function Rendering({ report }: { report: ReportDto }) {
   );
 }
 
+/** The current draft: its render state, and the way to issue it unless that has been done. */
+function DraftCard({ draft, nextVersion, onIssue, issuing }: { draft: ReportDto; nextVersion: number; onIssue?: () => void; issuing: boolean }) {
+  return (
+    <Card withBorder>
+      <Stack gap="sm">
+        <Group justify="space-between" wrap="wrap">
+          <Text fw={600}>Draft of {dateTime(draft.createdAt)}</Text>
+          <Badge color={draft.state === 'failed' ? 'red' : 'gray'} size="lg">
+            {draft.state === 'ready' ? `${draft.pageCount} pages · ${kb(draft.byteSize)}` : draft.state}
+          </Badge>
+        </Group>
+        {draft.state === 'rendering' && <Rendering report={draft} />}
+        {draft.state === 'failed' && <Alert color="red">The draft could not be rendered: {draft.error}</Alert>}
+        {draft.state === 'ready' && onIssue && (
+          <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={onIssue} loading={issuing}>
+            Issue this draft as version {nextVersion}
+          </Button>
+        )}
+      </Stack>
+    </Card>
+  );
+}
+
 /**
  * The job's bench report: make a draft (rendered in the background), preview it,
  * issue it as the next version; every issued version stays downloadable.
@@ -44,23 +67,12 @@ export function ReportSection({ jobId, canIssue, extra }: { jobId: number; canIs
       </Group>
       {error && <Alert color="red">{error.message}</Alert>}
       {draft && (
-        <Card withBorder>
-          <Stack gap="sm">
-            <Group justify="space-between" wrap="wrap">
-              <Text fw={600}>Draft of {dateTime(draft.createdAt)}</Text>
-              <Badge color={draft.state === 'failed' ? 'red' : 'gray'} size="lg">
-                {draft.state === 'ready' ? `${draft.pageCount} pages · ${kb(draft.byteSize)}` : draft.state}
-              </Badge>
-            </Group>
-            {draft.state === 'rendering' && <Rendering report={draft} />}
-            {draft.state === 'failed' && <Alert color="red">The draft could not be rendered: {draft.error}</Alert>}
-            {draft.state === 'ready' && canIssue && !issued.some((r) => r.fromDraftId === draft.id) && (
-              <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={() => issue.mutate(draft.id)} loading={issue.isPending}>
-                Issue this draft as version {(issued[0]?.version ?? 0) + 1}
-              </Button>
-            )}
-          </Stack>
-        </Card>
+        <DraftCard
+          draft={draft}
+          nextVersion={(issued[0]?.version ?? 0) + 1}
+          onIssue={canIssue && !issued.some((r) => r.fromDraftId === draft.id) ? () => issue.mutate(draft.id) : undefined}
+          issuing={issue.isPending}
+        />
       )}
       {preview && <ReportPreview key={preview.id} report={preview} />}
       <Stack gap="xs">

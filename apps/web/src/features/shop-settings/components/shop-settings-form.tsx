@@ -21,6 +21,7 @@ import { notifications } from '@mantine/notifications';
 import type { ReactNode } from 'react';
 import { formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useUpdateShopSettings } from '../api/shop-settings';
+import { ChainLimitFields } from './chain-limit-fields';
 import { ContrastCheck } from './contrast-check';
 import { CoverPreview } from './cover-preview';
 import { LogoUpload } from './logo-upload';
@@ -84,37 +85,7 @@ function WorkshopSection({ form }: { form: Form }) {
         {...form.getInputProps('finalCheckSecondPerson', { type: 'checkbox' })}
       />
       <Switch size="lg" label="Use our own chain limits" {...form.getInputProps('ownChainLimits', { type: 'checkbox' })} />
-      {v.ownChainLimits && (
-        <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
-          <NumberInput
-            label="Replace at, 11-speed and up"
-            suffix=" %"
-            inputMode="decimal"
-            step={0.05}
-            decimalScale={2}
-            min={0}
-            {...form.getInputProps('chain.replaceAt11Pct')}
-          />
-          <NumberInput
-            label="Replace at, 10-speed and below"
-            suffix=" %"
-            inputMode="decimal"
-            step={0.05}
-            decimalScale={2}
-            min={0}
-            {...form.getInputProps('chain.replaceAt10Pct')}
-          />
-          <NumberInput
-            label="Cassette likely worn at"
-            suffix=" %"
-            inputMode="decimal"
-            step={0.05}
-            decimalScale={2}
-            min={0}
-            {...form.getInputProps('chain.cassettePct')}
-          />
-        </SimpleGrid>
-      )}
+      {v.ownChainLimits && <ChainLimitFields form={form} />}
       <Text size="sm" c="dimmed">
         Defaults: {DEFAULT_CHAIN_LIMIT_POLICY.replaceAt11Pct} % for 11/12-speed, {DEFAULT_CHAIN_LIMIT_POLICY.replaceAt10Pct} % for 10-speed and below, cassette
         at {DEFAULT_CHAIN_LIMIT_POLICY.cassettePct} %. These are common workshop practice; the chain maker's instructions govern.
