@@ -22,6 +22,33 @@ interface Props {
   stageRef: RefObject<Konva.Stage | null>;
 }
 
+interface HandlesProps {
+  shape: Shape;
+  size: AnnotationDocument['image'];
+  /** The stage scale: handles keep the same size on screen at any zoom. */
+  scale: number;
+  onHandleDown: ReturnType<typeof useCanvasGestures>['handleDown'];
+}
+
+/** Grab handles of the selected shape, each a finger-sized target. */
+function SelectionHandles({ shape, size, scale, onHandleDown }: HandlesProps) {
+  return handlesOf(shape).map((h, i) => {
+    const p = toPixel(h, size);
+    return (
+      <Circle
+        key={i}
+        x={p.x}
+        y={p.y}
+        radius={TARGET_PX / scale}
+        fill="rgba(255,255,255,0.35)"
+        stroke="#141414"
+        strokeWidth={2 / scale}
+        onPointerDown={onHandleDown(i)}
+      />
+    );
+  });
+}
+
 /** The drawing surface: the photo, the shapes, a live draft and the selected shape's handles. */
 export function AnnotateCanvas({ doc, image, box, view, tool, style, selectedId, onSelect, onCommit, stageRef }: Props) {
   const size = doc.image;
@@ -54,23 +81,7 @@ export function AnnotateCanvas({ doc, image, box, view, tool, style, selectedId,
         ))}
       </Layer>
       <Layer name="handles">
-        {tool === 'select' &&
-          selected &&
-          handlesOf(selected).map((h, i) => {
-            const p = toPixel(h, size);
-            return (
-              <Circle
-                key={i}
-                x={p.x}
-                y={p.y}
-                radius={TARGET_PX / view.scale}
-                fill="rgba(255,255,255,0.35)"
-                stroke="#141414"
-                strokeWidth={2 / view.scale}
-                onPointerDown={handleDown(i)}
-              />
-            );
-          })}
+        {tool === 'select' && selected && <SelectionHandles shape={selected} size={size} scale={view.scale} onHandleDown={handleDown} />}
       </Layer>
     </Stage>
   );

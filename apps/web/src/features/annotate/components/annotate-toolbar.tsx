@@ -44,33 +44,30 @@ interface Props {
   onZoomOut: () => void;
 }
 
-/** Big targets (48 px) for a finger or a stylus at the workstand; shortcuts in the tooltips. */
-export function AnnotateToolbar(p: Props) {
-  const icon = (label: string, onClick: () => void, node: ReactNode, opts: { active?: boolean; disabled?: boolean; color?: string } = {}) => (
-    <Tooltip label={label} key={label}>
-      <ActionIcon
-        size={48}
-        variant={opts.active ? 'filled' : 'light'}
-        color={opts.color}
-        disabled={opts.disabled}
-        aria-label={label}
-        aria-pressed={opts.active}
-        onClick={onClick}
-      >
-        {node}
+interface ToolButtonProps {
+  label: string;
+  onClick: () => void;
+  children: ReactNode;
+  active?: boolean;
+  disabled?: boolean;
+  color?: string;
+}
+
+/** One 48 px icon button, named by its tooltip text (which carries the shortcut). */
+function ToolButton({ label, onClick, children, active, disabled, color }: ToolButtonProps) {
+  return (
+    <Tooltip label={label}>
+      <ActionIcon size={48} variant={active ? 'filled' : 'light'} color={color} disabled={disabled} aria-label={label} aria-pressed={active} onClick={onClick}>
+        {children}
       </ActionIcon>
     </Tooltip>
   );
+}
+
+/** Ink colour swatches and the stroke width for new shapes (and the selected one). */
+function StylePicker({ style, onStyle }: Pick<Props, 'style' | 'onStyle'>) {
   return (
-    <Group gap={6} p={6} wrap="wrap" bg="dark.7" data-testid="annotate-toolbar">
-      {(Object.keys(TOOL_ICONS) as Tool[]).map((t) =>
-        icon(`${TOOL_ICONS[t][1]} (${TOOL_ICONS[t][2]})`, () => p.onTool(t), TOOL_ICONS[t][0], { active: p.tool === t }),
-      )}
-      {icon('Undo (Ctrl+Z)', p.onUndo, <IconArrowBackUp />, { disabled: !p.canUndo })}
-      {icon('Redo (Ctrl+Shift+Z)', p.onRedo, <IconArrowForwardUp />, { disabled: !p.canRedo })}
-      {icon('Delete (Del)', () => p.onDelete?.(), <IconTrash />, { disabled: !p.onDelete, color: 'red' })}
-      {icon('Zoom in (+)', p.onZoomIn, <IconZoomIn />)}
-      {icon('Zoom out (−)', p.onZoomOut, <IconZoomOut />)}
+    <>
       <Group gap={4}>
         {PALETTE_COLOURS.map((c) => (
           <ActionIcon
@@ -78,23 +75,56 @@ export function AnnotateToolbar(p: Props) {
             size={44}
             radius="xl"
             aria-label={`Colour ${c}`}
-            aria-pressed={p.style.colour === c}
-            onClick={() => p.onStyle({ ...p.style, colour: c })}
+            aria-pressed={style.colour === c}
+            onClick={() => onStyle({ ...style, colour: c })}
             style={{
               background: PALETTE[c].ink,
-              border: `${p.style.colour === c ? 5 : 3}px solid ${PALETTE[c].outline}`,
-              outline: p.style.colour === c ? '3px solid #fff' : undefined,
+              border: `${style.colour === c ? 5 : 3}px solid ${PALETTE[c].outline}`,
+              outline: style.colour === c ? '3px solid #fff' : undefined,
             }}
           />
         ))}
       </Group>
       <SegmentedControl
         size="md"
-        value={p.style.width}
-        onChange={(w) => p.onStyle({ ...p.style, width: w })}
+        value={style.width}
+        onChange={(w) => onStyle({ ...style, width: w })}
         data={STROKE_WIDTH_NAMES.map((w) => ({ value: w, label: w }))}
         aria-label="Stroke width"
       />
+    </>
+  );
+}
+
+/** Big targets (48 px) for a finger or a stylus at the workstand; shortcuts in the tooltips. */
+export function AnnotateToolbar(p: Props) {
+  return (
+    <Group gap={6} p={6} wrap="wrap" bg="dark.7" data-testid="annotate-toolbar">
+      {(Object.keys(TOOL_ICONS) as Tool[]).map((t) => {
+        const [node, name, key] = TOOL_ICONS[t];
+        const label = `${name} (${key})`;
+        return (
+          <ToolButton key={label} label={label} onClick={() => p.onTool(t)} active={p.tool === t}>
+            {node}
+          </ToolButton>
+        );
+      })}
+      <ToolButton label="Undo (Ctrl+Z)" onClick={p.onUndo} disabled={!p.canUndo}>
+        <IconArrowBackUp />
+      </ToolButton>
+      <ToolButton label="Redo (Ctrl+Shift+Z)" onClick={p.onRedo} disabled={!p.canRedo}>
+        <IconArrowForwardUp />
+      </ToolButton>
+      <ToolButton label="Delete (Del)" onClick={() => p.onDelete?.()} disabled={!p.onDelete} color="red">
+        <IconTrash />
+      </ToolButton>
+      <ToolButton label="Zoom in (+)" onClick={p.onZoomIn}>
+        <IconZoomIn />
+      </ToolButton>
+      <ToolButton label="Zoom out (−)" onClick={p.onZoomOut}>
+        <IconZoomOut />
+      </ToolButton>
+      <StylePicker style={p.style} onStyle={p.onStyle} />
     </Group>
   );
 }

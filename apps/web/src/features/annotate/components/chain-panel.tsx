@@ -23,6 +23,22 @@ function preview(doc: AnnotationDocument, ruler: RulerShape, pitches: number): {
   }
 }
 
+function rulerLabel(doc: AnnotationDocument, ruler: RulerShape): string {
+  const mm = rulerLengthMm(doc, ruler.id);
+  return mm === null ? 'No scale yet' : `Ruler: ${formatMm(mm)}`;
+}
+
+/** Why a photo reading is evidence for the owner and not a replacement for the chain checker. */
+function PhotoReadingCaution() {
+  return (
+    <Alert color="yellow" variant="light" title="How far to trust a photo reading">
+      Common practice, no source: the camera must face the chain square-on and the rule must lie in the chain&apos;s plane; lens distortion and a tilted camera
+      each add error near the frame edges. A chain checker or a steel rule over 24 pitches at the bench remains the reference; use the photo to show the owner,
+      and confirm a borderline reading with the tool.
+    </Alert>
+  );
+}
+
 /** Chain wear from the photo: a ruler over N pitches, recorded on the chain checkpoint with this photo as evidence. */
 export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Props) {
   const [pitches, setPitches] = useState<number>(ruler.pitches ?? 24);
@@ -56,10 +72,7 @@ export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Pro
         </Button>
       </Group>
       <Text fw={700} data-testid="ruler-length">
-        {(() => {
-          const mm = rulerLengthMm(doc, ruler.id);
-          return mm === null ? 'No scale yet' : `Ruler: ${formatMm(mm)}`;
-        })()}
+        {rulerLabel(doc, ruler)}
       </Text>
       <Text fw={600} data-testid="chain-preview">
         {p.text}
@@ -70,11 +83,7 @@ export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Pro
         </Text>
       )}
       {error && <Text c="red.8">{error}</Text>}
-      <Alert color="yellow" variant="light" title="How far to trust a photo reading">
-        Common practice, no source: the camera must face the chain square-on and the rule must lie in the chain&apos;s plane; lens distortion and a tilted
-        camera each add error near the frame edges. A chain checker or a steel rule over 24 pitches at the bench remains the reference; use the photo to show
-        the owner, and confirm a borderline reading with the tool.
-      </Alert>
+      <PhotoReadingCaution />
     </Stack>
   );
 }

@@ -18,20 +18,24 @@ interface Props {
   onExport: () => void;
 }
 
-/** The editor's top bar: back, title, save state, save now and download. */
+/**
+ * The editor's top bar: back, title, save state, save now and download. The title keeps at least
+ * 14rem, so on a phone the actions wrap onto a second row instead of being pushed off screen, and
+ * the title wraps to two lines before it is cut.
+ */
 export function EditorHeader({ backTo, title, save, onExport }: Props) {
   const [label, colour] = SAVE_LABEL[save.state];
   return (
-    <Group justify="space-between" p={6} c="white" wrap="nowrap">
-      <Group gap="xs" wrap="nowrap" style={{ minWidth: 0 }}>
+    <Group justify="space-between" gap="xs" p={6} c="white" wrap="wrap">
+      <Group gap="xs" wrap="nowrap" style={{ minWidth: 0, flex: '1 1 14rem' }}>
         <ActionIcon component={Link} to={backTo} size={48} variant="subtle" color="gray.0" aria-label="Back">
           <IconArrowLeft />
         </ActionIcon>
-        <Text fw={600} truncate>
+        <Text fw={600} lineClamp={2}>
           {title}
         </Text>
       </Group>
-      <Group gap="xs" wrap="nowrap">
+      <Group gap="xs" wrap="wrap" justify="flex-end" ml="auto">
         <Badge color={colour} size="lg" data-testid="save-state">
           {label}
         </Badge>

@@ -1,10 +1,9 @@
-import { JOB_STATUS_LABELS } from '@benchproof/domain';
-import { Alert, Anchor, Badge, Group, Paper, SimpleGrid, Stack, Table, Text, Title } from '@mantine/core';
+import { Alert, SimpleGrid, Stack, Text, Title } from '@mantine/core';
 import { IconCalendarDue } from '@tabler/icons-react';
 import dayjs from 'dayjs';
-import { Link } from 'react-router';
 import { QueryState } from '../../../components/query-state';
 import { useBikeHistory } from '../api/bikes';
+import { BikeVisitsTable } from './bike-visits';
 import { WearChart } from './wear-chart';
 
 function NextChainDue({ due }: { due: NonNullable<ReturnType<typeof useBikeHistory>['data']>['nextChainDue'] }) {
@@ -48,45 +47,7 @@ export function BikeHistoryPanel({ bikeId }: { bikeId: number }) {
         </SimpleGrid>
       )}
       <Title order={3}>Visits</Title>
-      <Paper withBorder>
-        <Table.ScrollContainer minWidth={480}>
-          <Table verticalSpacing="sm">
-            <Table.Thead>
-              <Table.Tr>
-                <Table.Th>Job</Table.Th>
-                <Table.Th>Booked in</Table.Th>
-                <Table.Th>Status</Table.Th>
-                <Table.Th>Mechanic</Table.Th>
-              </Table.Tr>
-            </Table.Thead>
-            <Table.Tbody>
-              {data.jobs.map((j) => (
-                <Table.Tr key={j.id}>
-                  <Table.Td>
-                    <Anchor component={Link} to={`/jobs/${j.id}`} fw={700}>
-                      {j.number}
-                    </Anchor>
-                  </Table.Td>
-                  <Table.Td>{dayjs(j.createdAt).format('D MMM YYYY')}</Table.Td>
-                  <Table.Td>
-                    <Group gap={4}>
-                      <Badge variant="light" radius="sm">
-                        {JOB_STATUS_LABELS[j.status]}
-                      </Badge>
-                      {j.overdue && (
-                        <Text size="sm" fw={700} c="red.8">
-                          Overdue
-                        </Text>
-                      )}
-                    </Group>
-                  </Table.Td>
-                  <Table.Td>{j.mechanic?.name ?? '—'}</Table.Td>
-                </Table.Tr>
-              ))}
-            </Table.Tbody>
-          </Table>
-        </Table.ScrollContainer>
-      </Paper>
+      <BikeVisitsTable jobs={data.jobs} />
     </Stack>
   );
 }

@@ -16,20 +16,27 @@ interface Values {
 
 const toRequest = (v: Values) => ({ ...v, decidedAt: v.decidedAt ? dayjs(v.decidedAt).toISOString() : undefined });
 
-/** Desk records the owner's answer taken by phone, in person or by e-mail; the signed-in user is the recorder. */
-export function DecisionForm({
-  jobId,
-  recommendationId,
-  ownerName,
-  recorderName,
-  onDone,
-}: {
+const STATUS_OPTIONS = [
+  { value: 'approved', label: 'Approved' },
+  { value: 'declined', label: 'Declined' },
+  { value: 'pending', label: 'Undecided' },
+];
+const CHANNEL_OPTIONS = [
+  { value: 'phone', label: 'Phone' },
+  { value: 'in_person', label: 'In person' },
+  { value: 'email', label: 'E-mail' },
+];
+
+interface Props {
   jobId: number;
   recommendationId: number;
   ownerName: string;
   recorderName: string;
   onDone: () => void;
-}) {
+}
+
+/** The decision form's values and its submit: validated with the request's contract, server field errors under the fields. */
+function useDecisionForm({ jobId, recommendationId, ownerName, onDone }: Omit<Props, 'recorderName'>) {
   const record = useRecordDecision(jobId, recommendationId);
   const form = useForm<Values>({
     initialValues: { status: 'approved', channel: 'phone', decidedByName: ownerName, decidedAt: dayjs().format('YYYY-MM-DD HH:mm:ss'), note: '' },
@@ -38,38 +45,25 @@ export function DecisionForm({
   const submit = form.onSubmit((v) =>
     record.mutate(RecordDecisionRequestSchema.parse(toRequest(v)), { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e) }),
   );
-  const failure = formFailure(record.error);
+  return { form, submit, pending: record.isPending, failure: formFailure(record.error) };
+}
+
+/** Desk records the owner's answer taken by phone, in person or by e-mail; the signed-in user is the recorder. */
+export function DecisionForm({ recorderName, ...props }: Props) {
+  const { form, submit, pending, failure } = useDecisionForm(props);
   return (
     <form onSubmit={submit} noValidate>
       <Stack>
         {failure && <Alert color="red">{failure}</Alert>}
-        <SegmentedControl
-          fullWidth
-          size="lg"
-          data={[
-            { value: 'approved', label: 'Approved' },
-            { value: 'declined', label: 'Declined' },
-            { value: 'pending', label: 'Undecided' },
-          ]}
-          {...form.getInputProps('status')}
-        />
-        <SegmentedControl
-          fullWidth
-          size="md"
-          data={[
-            { value: 'phone', label: 'Phone' },
-            { value: 'in_person', label: 'In person' },
-            { value: 'email', label: 'E-mail' },
-          ]}
-          {...form.getInputProps('channel')}
-        />
+        <SegmentedControl fullWidth size="lg" data={STATUS_OPTIONS} {...form.getInputProps('status')} />
+        <SegmentedControl fullWidth size="md" data={CHANNEL_OPTIONS} {...form.getInputProps('channel')} />
         <TextInput label="Who decided" description="The owner, or the person they named" {...form.getInputProps('decidedByName')} />
         <DateTimePicker label="When" valueFormat="D MMM YYYY HH:mm" maxDate={new Date()} size="md" {...form.getInputProps('decidedAt')} />
         <Textarea label="Note" autosize minRows={2} {...form.getInputProps('note')} />
         <Text size="sm" c="dimmed">
           Recorded by {recorderName}.
         </Text>
-        <Button type="submit" size="lg" loading={record.isPending}>
+        <Button type="submit" size="lg" loading={pending}>
           Record decision
         </Button>
       </Stack>

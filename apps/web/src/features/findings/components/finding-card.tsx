@@ -1,17 +1,13 @@
 import type { FindingDto } from '@benchproof/contracts';
 import { DECLINED_SAFETY_NOTICE, defaultUrgency, INSPECTION_AREA_LABELS, formatMoney } from '@benchproof/domain';
-import { Alert, Badge, Button, Card, Group, Modal, Stack, Text } from '@mantine/core';
-import { useDisclosure } from '@mantine/hooks';
-import { IconEdit, IconMessageCircle, IconReceipt } from '@tabler/icons-react';
+import { Alert, Badge, Card, Group, Stack, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
 import { ConditionBadge } from '../../../components/condition-badge';
 import { SafetyNote } from '../../../components/safety-note';
-import { DecisionForm } from './decision-form';
 import { DECISION_COLOURS, DECISION_LABELS, DecisionHistory } from './decision-history';
 import { isDeclinedSafety } from './estimate-items';
 import type { ShopRates } from './estimate-preview';
-import { FindingForm } from './finding-form';
-import { RecommendationEditor } from './recommendation-editor';
+import { FindingActions } from './finding-actions';
 import { UrgencyBadge } from './urgency-badge';
 
 export interface FindingCardProps {
@@ -64,9 +60,6 @@ function Recommendation({ finding }: { finding: FindingDto }) {
 
 /** One finding with its priced recommendation, the owner's decision and its history. */
 export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerName, me, staffName, evidence }: FindingCardProps) {
-  const [edit, editModal] = useDisclosure();
-  const [price, priceModal] = useDisclosure();
-  const [decide, decideModal] = useDisclosure();
   // Before it is priced, the finding shows the urgency its recommendation would start with.
   const urgency = finding.recommendation?.urgency ?? defaultUrgency(finding.condition);
   const declinedUnsafe = isDeclinedSafety(urgency, finding.recommendation?.decisionStatus ?? 'pending', finding.condition);
@@ -94,40 +87,8 @@ export function FindingCard({ jobId, finding, rates, canDecide, canEdit, ownerNa
         )}
         <Recommendation finding={finding} />
         {finding.recommendation && <DecisionHistory decisions={finding.recommendation.decisions} staffName={staffName} />}
-        <Group gap="xs">
-          {canEdit && (
-            <Button variant="default" leftSection={<IconEdit size={18} />} onClick={editModal.open}>
-              Edit
-            </Button>
-          )}
-          <Button variant="light" leftSection={<IconReceipt size={18} />} onClick={priceModal.open}>
-            {finding.recommendation ? 'Change price' : 'Price it'}
-          </Button>
-          {canDecide && finding.recommendation && (
-            <Button leftSection={<IconMessageCircle size={18} />} onClick={decideModal.open}>
-              Record owner’s answer
-            </Button>
-          )}
-        </Group>
+        <FindingActions jobId={jobId} finding={finding} rates={rates} canDecide={canDecide} canEdit={canEdit} ownerName={ownerName} me={me} />
       </Stack>
-      <Modal opened={edit} onClose={editModal.close} title="Edit finding" size="lg">
-        <FindingForm jobId={jobId} finding={finding} onDone={editModal.close} />
-      </Modal>
-      <Modal opened={price} onClose={priceModal.close} title="Recommendation and price" size="lg" fullScreen={false}>
-        <RecommendationEditor
-          jobId={jobId}
-          findingId={finding.id}
-          condition={finding.condition}
-          current={finding.recommendation}
-          rates={rates}
-          onDone={priceModal.close}
-        />
-      </Modal>
-      <Modal opened={decide} onClose={decideModal.close} title="Owner’s decision" size="lg">
-        {finding.recommendation && (
-          <DecisionForm jobId={jobId} recommendationId={finding.recommendation.id} ownerName={ownerName} recorderName={me.name} onDone={decideModal.close} />
-        )}
-      </Modal>
     </Card>
   );
 }

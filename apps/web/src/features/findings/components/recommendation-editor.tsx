@@ -1,57 +1,12 @@
-import { RecommendationRequestSchema, type RecommendationDto } from '@benchproof/contracts';
-import {
-  defaultUrgency,
-  URGENCIES,
-  URGENCY_LABELS,
-  type Condition,
-  type EstimateLine,
-  type Urgency,
-  majorTextToMinor,
-  minorToMajorText,
-} from '@benchproof/domain';
+import { URGENCIES, URGENCY_LABELS } from '@benchproof/domain';
 import { ActionIcon, Alert, Button, Group, NumberInput, Paper, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
-import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconPlus, IconTrash } from '@tabler/icons-react';
-import { contractResolver, formFailure, pathTable, showServerFieldErrors } from '../../../lib/form';
-import { useSaveRecommendation } from '../api/findings';
-import { EstimatePreview, type ShopRates } from './estimate-preview';
-
-interface PartRow {
-  description: string;
-  qty: number | string;
-  price: string;
-}
-interface Values {
-  summary: string;
-  urgency: Urgency;
-  parts: PartRow[];
-  hours: number | string;
-}
+import { EstimatePreview } from './estimate-preview';
+import { emptyPart, linesOf, useRecommendationForm, type RecommendationForm, type RecommendationFormInput } from './use-recommendation-form';
 
 const URGENCY_OPTIONS = URGENCIES.map((u) => ({ value: u, label: URGENCY_LABELS[u] }));
-const emptyPart = (): PartRow => ({ description: '', qty: 1, price: '' });
-/** Request paths → the boxes that hold them (minor units and hundredths are typed as major units and hours). */
-const toField = (p: string) => pathTable({ labourHundredths: 'hours' })(p).replace(/^parts\.(\d+)\.unitPriceMinor$/, 'parts.$1.price');
 
-function toRequest(v: Values, currency: string) {
-  return {
-    summary: v.summary,
-    urgency: v.urgency,
-    parts: v.parts.map((p) => ({ description: p.description, qty: Number(p.qty), unitPriceMinor: majorTextToMinor(p.price, currency) ?? Number.NaN })),
-    labourHundredths: Math.round(Number(v.hours || 0) * 100),
-  };
-}
-
-function linesOf(v: Values, rates: ShopRates): EstimateLine[] {
-  const parts: EstimateLine[] = v.parts.flatMap((p) => {
-    const price = majorTextToMinor(p.price, rates.currency);
-    const qty = Number(p.qty);
-    return price === null || !(qty > 0) ? [] : [{ kind: 'part' as const, qty, unitPriceMinor: price }];
-  });
-  return [...parts, { kind: 'labour', hours: Number(v.hours || 0), rateMinorPerHour: rates.labourRateMinor }];
-}
-
-function PartLine({ form, i, currency }: { form: UseFormReturnType<Values>; i: number; currency: string }) {
+function PartLine({ form, i, currency }: { form: RecommendationForm; i: number; currency: string }) {
   return (
     <Paper withBorder p="xs">
       <Stack gap="xs">
@@ -70,62 +25,46 @@ function PartLine({ form, i, currency }: { form: UseFormReturnType<Values>; i: n
   );
 }
 
-/** Parts and labour for one finding, priced live at the shop's rates. */
-export function RecommendationEditor({
-  jobId,
-  findingId,
-  condition,
-  current,
-  rates,
-  onDone,
-}: {
-  jobId: number;
-  findingId: number;
-  condition: Condition;
-  current: RecommendationDto | null;
-  rates: ShopRates;
-  onDone: () => void;
-}) {
-  const save = useSaveRecommendation(jobId, findingId);
-  const form = useForm<Values>({
-    mode: 'controlled',
-    initialValues: {
-      summary: current?.summary ?? '',
-      urgency: current?.urgency ?? defaultUrgency(condition),
-      parts: current?.parts.map((p) => ({ description: p.description, qty: p.qty, price: minorToMajorText(p.unitPriceMinor, rates.currency) })) ?? [],
-      hours: current ? current.labourHundredths / 100 : 0.5,
-    },
-    validate: contractResolver(RecommendationRequestSchema, (v: Values) => toRequest(v, rates.currency), toField),
-  });
-  const submit = form.onSubmit((v) =>
-    save.mutate(RecommendationRequestSchema.parse(toRequest(v, rates.currency)), {
-      onSuccess: onDone,
-      onError: (e) => showServerFieldErrors(form, e, toField),
-    }),
+/** The parts list: one line per part, and a button to add another. */
+function PartsFields({ form, currency }: { form: RecommendationForm; currency: string }) {
+  return (
+    <>
+      <Text fw={600}>Parts</Text>
+      {form.getValues().parts.map((_, i) => (
+        <PartLine key={i} form={form} i={i} currency={currency} />
+      ))}
+      <Button variant="light" leftSection={<IconPlus />} onClick={() => form.insertListItem('parts', emptyPart())}>
+        Add a part
+      </Button>
+    </>
   );
-  const failure = formFailure(save.error);
-  const values = form.getValues();
+}
+
+function UrgencyField({ form, findingId }: { form: RecommendationForm; findingId: number }) {
+  return (
+    <Stack gap={4}>
+      <Text size="sm" fw={500} id={`urgency-${findingId}`}>
+        Urgency
+      </Text>
+      <SegmentedControl fullWidth size="md" data={URGENCY_OPTIONS} aria-labelledby={`urgency-${findingId}`} {...form.getInputProps('urgency')} />
+      <Text size="xs" c="dimmed">
+        Starts from the finding’s condition; change it if the work is more or less pressing.
+      </Text>
+    </Stack>
+  );
+}
+
+/** Parts and labour for one finding, priced live at the shop's rates. */
+export function RecommendationEditor(props: RecommendationFormInput) {
+  const { rates } = props;
+  const { form, submit, pending, failure } = useRecommendationForm(props);
   return (
     <form onSubmit={submit} noValidate>
       <Stack>
         {failure && <Alert color="red">{failure}</Alert>}
         <TextInput label="What we recommend" withAsterisk {...form.getInputProps('summary')} />
-        <Stack gap={4}>
-          <Text size="sm" fw={500} id={`urgency-${findingId}`}>
-            Urgency
-          </Text>
-          <SegmentedControl fullWidth size="md" data={URGENCY_OPTIONS} aria-labelledby={`urgency-${findingId}`} {...form.getInputProps('urgency')} />
-          <Text size="xs" c="dimmed">
-            Starts from the finding’s condition; change it if the work is more or less pressing.
-          </Text>
-        </Stack>
-        <Text fw={600}>Parts</Text>
-        {values.parts.map((_, i) => (
-          <PartLine key={i} form={form as unknown as UseFormReturnType<Values>} i={i} currency={rates.currency} />
-        ))}
-        <Button variant="light" leftSection={<IconPlus />} onClick={() => form.insertListItem('parts', emptyPart())}>
-          Add a part
-        </Button>
+        <UrgencyField form={form} findingId={props.findingId} />
+        <PartsFields form={form} currency={rates.currency} />
         <NumberInput
           label="Labour hours"
           description="In quarter hours"
@@ -137,12 +76,12 @@ export function RecommendationEditor({
           {...form.getInputProps('hours')}
         />
         <Paper withBorder p="sm" bg="gray.0">
-          <EstimatePreview lines={linesOf(values, rates)} rates={rates} />
+          <EstimatePreview lines={linesOf(form.getValues(), rates)} rates={rates} />
         </Paper>
         <Text size="xs" c="dimmed">
           Prices are net; tax is added once on the total. The server stores the figures with the rates of today.
         </Text>
-        <Button type="submit" size="lg" loading={save.isPending}>
+        <Button type="submit" size="lg" loading={pending}>
           Save recommendation
         </Button>
       </Stack>

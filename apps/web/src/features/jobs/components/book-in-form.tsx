@@ -93,6 +93,36 @@ function BikeSection({ form, slots }: { form: UseFormReturnType<BookInValues>; s
   );
 }
 
+/** What the owner reports, the day the bike is promised for and who works on it. */
+function SymptomsSection({ form, mechanics }: { form: UseFormReturnType<BookInValues>; mechanics: Option[] }) {
+  return (
+    <Section title="3 · What the owner tells us">
+      <Textarea
+        label="Reported symptoms, in the owner's words"
+        withAsterisk
+        description="Noises, poor shifting, anything that feels wrong — write it as they say it."
+        autosize
+        minRows={5}
+        maxRows={14}
+        {...form.getInputProps('reportedSymptoms')}
+      />
+      <SimpleGrid cols={{ base: 1, sm: 2 }}>
+        <DatePickerInput
+          label="Promised for"
+          withAsterisk
+          placeholder="Pick a day"
+          clearable
+          size="md"
+          minDate={new Date()}
+          valueFormat="ddd D MMM YYYY"
+          {...form.getInputProps('promisedOn')}
+        />
+        <Select label="Mechanic" placeholder="Assign later" data={mechanics} clearable {...form.getInputProps('mechanicId')} />
+      </SimpleGrid>
+    </Section>
+  );
+}
+
 /** Booking-in: owner, bike, symptoms, promised day and mechanic in one submit. */
 export function BookInForm({ slots, mechanics, onBooked }: { slots: BookInSlots; mechanics: Option[]; onBooked: (job: JobDetail) => void }) {
   const bookIn = useBookIn();
@@ -106,30 +136,7 @@ export function BookInForm({ slots, mechanics, onBooked }: { slots: BookInSlots;
       <Stack maw={860}>
         <CustomerSection form={form} slots={slots} />
         <BikeSection form={form} slots={slots} />
-        <Section title="3 · What the owner tells us">
-          <Textarea
-            label="Reported symptoms, in the owner's words"
-            withAsterisk
-            description="Noises, poor shifting, anything that feels wrong — write it as they say it."
-            autosize
-            minRows={5}
-            maxRows={14}
-            {...form.getInputProps('reportedSymptoms')}
-          />
-          <SimpleGrid cols={{ base: 1, sm: 2 }}>
-            <DatePickerInput
-              label="Promised for"
-              withAsterisk
-              placeholder="Pick a day"
-              clearable
-              size="md"
-              minDate={new Date()}
-              valueFormat="ddd D MMM YYYY"
-              {...form.getInputProps('promisedOn')}
-            />
-            <Select label="Mechanic" placeholder="Assign later" data={mechanics} clearable {...form.getInputProps('mechanicId')} />
-          </SimpleGrid>
-        </Section>
+        <SymptomsSection form={form} mechanics={mechanics} />
         {hasErrors && (
           <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert">
             Some fields need attention — they are marked below their boxes. Nothing you typed is lost.

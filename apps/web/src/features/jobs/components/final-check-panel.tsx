@@ -39,12 +39,12 @@ function LastCheck({ job }: { job: JobDetail }) {
 
 const noneTicked = () => Object.fromEntries(FINAL_CHECK_ITEMS.map((i) => [i, false])) as Record<FinalCheckItem, boolean>;
 
-function CheckForm({ job, blocked }: { job: JobDetail; blocked: boolean }) {
-  const check = useFinalCheck(job.id);
+/** The checklist's ticks and notes, and sending them; a recorded check clears the form for the next one. */
+function useFinalCheckForm(jobId: number) {
+  const check = useFinalCheck(jobId);
   const [items, setItems] = useState(noneTicked);
   const [testRideNotes, setTestRideNotes] = useState('');
   const [note, setNote] = useState('');
-  const allPassed = FINAL_CHECK_ITEMS.every((i) => items[i]);
   const send = (passed: boolean) => {
     const body: FinalCheckRequest = { items, passed, testRideNotes: testRideNotes || null, note: note || null };
     check.mutate(body, {
@@ -56,6 +56,26 @@ function CheckForm({ job, blocked }: { job: JobDetail; blocked: boolean }) {
     });
   };
   const error = check.error instanceof ApiError ? check.error : null;
+  return { items, setItems, testRideNotes, setTestRideNotes, note, setNote, send, pending: check.isPending, error };
+}
+
+function CheckRefused({ error }: { error: ApiError }) {
+  return (
+    <Alert
+      color="red"
+      variant="filled"
+      icon={<IconAlertTriangle />}
+      role="alert"
+      title={error.code === 'FINAL_CHECK_SAME_PERSON' ? 'Needs a second person' : 'Not recorded'}
+    >
+      {error.message}
+    </Alert>
+  );
+}
+
+function CheckForm({ job, blocked }: { job: JobDetail; blocked: boolean }) {
+  const { items, setItems, testRideNotes, setTestRideNotes, note, setNote, send, pending, error } = useFinalCheckForm(job.id);
+  const allPassed = FINAL_CHECK_ITEMS.every((i) => items[i]);
   return (
     <Stack gap="sm">
       {FINAL_CHECK_ITEMS.map((i) => (
@@ -80,7 +100,7 @@ function CheckForm({ job, blocked }: { job: JobDetail; blocked: boolean }) {
         error={error?.fieldErrors().note}
       />
       <Group grow>
-        <Button size="lg" color="teal" leftSection={<IconCircleCheck />} onClick={() => send(true)} loading={check.isPending} disabled={blocked || !allPassed}>
+        <Button size="lg" color="teal" leftSection={<IconCircleCheck />} onClick={() => send(true)} loading={pending} disabled={blocked || !allPassed}>
           Passed
         </Button>
         <Button
@@ -89,23 +109,13 @@ function CheckForm({ job, blocked }: { job: JobDetail; blocked: boolean }) {
           variant="light"
           leftSection={<IconCircleX />}
           onClick={() => send(false)}
-          loading={check.isPending}
+          loading={pending}
           disabled={blocked || !note.trim()}
         >
           Failed
         </Button>
       </Group>
-      {error && (
-        <Alert
-          color="red"
-          variant="filled"
-          icon={<IconAlertTriangle />}
-          role="alert"
-          title={error.code === 'FINAL_CHECK_SAME_PERSON' ? 'Needs a second person' : 'Not recorded'}
-        >
-          {error.message}
-        </Alert>
-      )}
+      {error && <CheckRefused error={error} />}
     </Stack>
   );
 }

@@ -1,15 +1,9 @@
 import type { JobDetail } from '@benchproof/contracts';
-import { allowedTransitions, JOB_STATUS_LABELS, nextAction, type JobStatus } from '@benchproof/domain';
+import { allowedTransitions, JOB_STATUS_LABELS, nextAction } from '@benchproof/domain';
 import { Alert, Button, Group, Menu, Modal, Stack, Text, Textarea } from '@mantine/core';
 import { IconAlertTriangle, IconArrowRight, IconDots } from '@tabler/icons-react';
 import { useState } from 'react';
-import { ApiError } from '../../../lib/api-client';
-import { useTransitionJob } from '../api/jobs';
-
-interface Move {
-  to: JobStatus;
-  label: string;
-}
+import { useJobMoves, type Move } from './use-job-moves';
 
 function ConfirmMove({ move, onClose, onConfirm, pending }: { move: Move | null; onClose: () => void; onConfirm: (note: string) => void; pending: boolean }) {
   const [note, setNote] = useState('');
@@ -52,73 +46,53 @@ function ConfirmNoReport({ opened, onClose, onConfirm, pending }: { opened: bool
   );
 }
 
+/** The allowed moves other than the next one, each asking for confirmation first. */
+function OtherMovesMenu({ moves, onPick }: { moves: Move[]; onPick: (move: Move) => void }) {
+  return (
+    <Menu position="bottom-end" withinPortal>
+      <Menu.Target>
+        <Button size="lg" variant="default" aria-label="Other moves" leftSection={<IconDots />} style={{ flex: '1 0 auto' }}>
+          More moves
+        </Button>
+      </Menu.Target>
+      <Menu.Dropdown>
+        {moves.map((t) => (
+          <Menu.Item key={t.to} color={t.to === 'cancelled' ? 'red' : undefined} onClick={() => onPick(t)} style={{ minHeight: 44 }}>
+            {t.label}
+          </Menu.Item>
+        ))}
+      </Menu.Dropdown>
+    </Menu>
+  );
+}
+
 /** The next sensible move as one big button, the other allowed moves in a menu. */
 export function JobActions({ job }: { job: JobDetail }) {
-  const transition = useTransitionJob(job.id);
-  const [confirm, setConfirm] = useState<Move | null>(null);
+  const { confirm, setConfirm, move, handOverWithoutReport, pending, noReport, error, dismissError } = useJobMoves(job.id);
   const primary = job.nextAction ?? nextAction(job.status);
   const others: Move[] = (job.allowedTransitions.length ? job.allowedTransitions : allowedTransitions(job.status)).filter((t) => t.to !== primary?.to);
-  const [pendingNote, setPendingNote] = useState('');
-  const move = (to: JobStatus, note = '', confirmNoReport = false) => {
-    setPendingNote(note);
-    transition.mutate({ to, note, confirmNoReport }, { onSuccess: () => setConfirm(null) });
-  };
-  const noReport = transition.error instanceof ApiError && transition.error.code === 'REPORT_NOT_SENT';
-  const error = noReport
-    ? null
-    : transition.error instanceof ApiError
-      ? transition.error.message
-      : transition.error
-        ? 'The move did not go through. Try again.'
-        : null;
   return (
     <Stack gap="xs">
       <Group gap="xs" wrap="wrap">
         {primary && (
-          <Button
-            size="lg"
-            rightSection={<IconArrowRight />}
-            loading={transition.isPending && !confirm}
-            onClick={() => move(primary.to)}
-            style={{ flex: '1 1 240px' }}
-          >
+          <Button size="lg" rightSection={<IconArrowRight />} loading={pending && !confirm} onClick={() => move(primary.to)} style={{ flex: '1 1 240px' }}>
             {primary.label}
           </Button>
         )}
-        {others.length > 0 && (
-          <Menu position="bottom-end" withinPortal>
-            <Menu.Target>
-              <Button size="lg" variant="default" aria-label="Other moves" leftSection={<IconDots />} style={{ flex: '1 0 auto' }}>
-                More moves
-              </Button>
-            </Menu.Target>
-            <Menu.Dropdown>
-              {others.map((t) => (
-                <Menu.Item key={t.to} color={t.to === 'cancelled' ? 'red' : undefined} onClick={() => setConfirm(t)} style={{ minHeight: 44 }}>
-                  {t.label}
-                </Menu.Item>
-              ))}
-            </Menu.Dropdown>
-          </Menu>
-        )}
+        {others.length > 0 && <OtherMovesMenu moves={others} onPick={setConfirm} />}
       </Group>
       {error && (
-        <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert" withCloseButton onClose={() => transition.reset()}>
+        <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert" withCloseButton onClose={dismissError}>
           {error}
         </Alert>
       )}
-      <ConfirmNoReport
-        opened={noReport}
-        onClose={() => transition.reset()}
-        onConfirm={() => move('collected', pendingNote, true)}
-        pending={transition.isPending}
-      />
+      <ConfirmNoReport opened={noReport} onClose={dismissError} onConfirm={handOverWithoutReport} pending={pending} />
       <ConfirmMove
         key={confirm?.to ?? 'none'}
         move={confirm}
         onClose={() => setConfirm(null)}
         onConfirm={(note) => confirm && move(confirm.to, note)}
-        pending={transition.isPending}
+        pending={pending}
       />
     </Stack>
   );

@@ -4,16 +4,34 @@ import { IconAlertTriangle, IconCircleCheck } from '@tabler/icons-react';
 
 const VERDICT_TEXT = { within: 'Within specification', under: 'Under the maker’s value', over: 'Over the maker’s value' } as const;
 
-/** The verdict as the mechanic types (libs/domain torqueVerdict), plus the reading in every unit for reference. */
-export function TorqueLive({
-  spec,
-  applied,
-  carbonPart,
-}: {
+interface Applied {
+  value: number;
+  unit: TorqueUnit;
+}
+interface Props {
   spec: TorqueSpec | null;
-  applied: { value: number; unit: TorqueUnit } | null;
+  applied: Applied | null;
   carbonPart: boolean;
-}) {
+}
+
+/** The applied torque in every other unit, for reference only. */
+function OtherUnits({ applied }: { applied: Applied }) {
+  return (
+    <Group gap={6}>
+      <Text size="xs" c="dimmed">
+        For reference only:
+      </Text>
+      {TORQUE_UNITS.filter((u) => u !== applied.unit).map((u) => (
+        <Badge key={u} variant="outline" color="gray" radius="sm" tt="none">
+          {formatTorque(convertTorque(applied.value, applied.unit, u), u)}
+        </Badge>
+      ))}
+    </Group>
+  );
+}
+
+/** The verdict as the mechanic types (libs/domain torqueVerdict), plus the reading in every unit for reference. */
+export function TorqueLive({ spec, applied, carbonPart }: Props) {
   if (!spec || !applied)
     return (
       <Text size="sm" c="dimmed">
@@ -43,16 +61,7 @@ export function TorqueLive({
           </Text>
         </Group>
         <Text size="sm">{v.message}</Text>
-        <Group gap={6}>
-          <Text size="xs" c="dimmed">
-            For reference only:
-          </Text>
-          {TORQUE_UNITS.filter((u) => u !== applied.unit).map((u) => (
-            <Badge key={u} variant="outline" color="gray" radius="sm" tt="none">
-              {formatTorque(convertTorque(applied.value, applied.unit, u), u)}
-            </Badge>
-          ))}
-        </Group>
+        <OtherUnits applied={applied} />
       </Stack>
     </Paper>
   );

@@ -1,0 +1,24 @@
+import type { Shape } from '@benchproof/annotation';
+import { useState } from 'react';
+import { commit, redo, startHistory, undo, upsert } from '../model/history';
+
+/** The document's shapes with undo and redo: every put or remove is one step back. */
+export function useShapeHistory(initial: Shape[]) {
+  const [history, setHistory] = useState(() => startHistory(initial));
+  return {
+    shapes: history.present,
+    canUndo: history.past.length > 0,
+    canRedo: history.future.length > 0,
+    undo: () => setHistory(undo),
+    redo: () => setHistory(redo),
+    /** Adds a new shape, or replaces the one with the same id. */
+    put: (shape: Shape) => setHistory((h) => commit(h, upsert(h.present, shape))),
+    remove: (id: string) =>
+      setHistory((h) =>
+        commit(
+          h,
+          h.present.filter((s) => s.id !== id),
+        ),
+      ),
+  };
+}
