@@ -11,20 +11,18 @@ const dirs = (root, parent) =>
 /** Api folders that are not features: shared plumbing every feature may use. */
 const API_SHARED = ['core', 'infra', 'config', 'db'];
 
-/** The zones for a repository checked out at `root`. */
-export function boundaryZones(root) {
-  const apiFeatures = dirs(root, 'apps/api/src').filter((d) => !API_SHARED.includes(d));
-  const webFeatures = dirs(root, 'apps/web/src/features');
+/** Package-level rules 1–4 as a table: [target, from, message]. */
+const PACKAGE_RULES = [
+  ['libs/domain', ['libs/contracts', 'libs/annotation', 'apps', 'seeds'], 'libs/domain is pure: it imports nothing of the repo (rule 1).'],
+  ['libs/annotation', ['libs/contracts', 'apps', 'seeds'], 'libs/annotation may use only libs/domain (rule 2).'],
+  ['libs/contracts', ['libs/annotation', 'apps', 'seeds'], 'libs/contracts depends only on zod and libs/domain (rule 3).'],
+  ['apps/api', 'apps/web', 'The apps never import each other (rule 4).'],
+  ['apps/web', 'apps/api', 'The apps never import each other (rule 4).'],
+];
+
+/** Rule 5: features meet only through index.ts; core/ and infra/ know no features. */
+function apiZones(apiFeatures) {
   return [
-    {
-      target: 'libs/domain',
-      from: ['libs/contracts', 'libs/annotation', 'apps', 'seeds'],
-      message: 'libs/domain is pure: it imports nothing of the repo (rule 1).',
-    },
-    { target: 'libs/annotation', from: ['libs/contracts', 'apps', 'seeds'], message: 'libs/annotation may use only libs/domain (rule 2).' },
-    { target: 'libs/contracts', from: ['libs/annotation', 'apps', 'seeds'], message: 'libs/contracts depends only on zod and libs/domain (rule 3).' },
-    { target: 'apps/api', from: 'apps/web', message: 'The apps never import each other (rule 4).' },
-    { target: 'apps/web', from: 'apps/api', message: 'The apps never import each other (rule 4).' },
     ...apiFeatures.flatMap((f) =>
       apiFeatures
         .filter((g) => g !== f)
@@ -40,6 +38,12 @@ export function boundaryZones(root) {
       from: apiFeatures.map((f) => `apps/api/src/${f}`),
       message: 'core/ and infra/ never import features (rule 5).',
     },
+  ];
+}
+
+/** Rule 6: no cross-feature imports, app/ on top, shared UI and lib at the bottom. */
+function webZones(webFeatures) {
+  return [
     ...webFeatures.map((f) => ({
       target: `apps/web/src/features/${f}`,
       from: webFeatures.filter((g) => g !== f).map((g) => `apps/web/src/features/${g}`),
@@ -54,17 +58,33 @@ export function boundaryZones(root) {
       except: ['./theme.ts'],
       message: 'Shared UI and lib know no features or app/ (rule 6).',
     },
-    {
-      // Everything in the web app except features/annotate: its other folders, its root files and the other features.
-      target: [
-        ...dirs(root, 'apps/web/src')
-          .filter((d) => d !== 'features')
-          .map((d) => `apps/web/src/${d}`),
-        'apps/web/src/*.{ts,tsx}',
-        ...webFeatures.filter((f) => f !== 'annotate').map((f) => `apps/web/src/features/${f}`),
-      ],
-      from: ['node_modules/react-konva', 'node_modules/konva', 'apps/web/node_modules/react-konva', 'apps/web/node_modules/konva'],
-      message: 'Only features/annotate draws with Konva (STYLE.md layout).',
-    },
+  ];
+}
+
+/** Konva stays inside features/annotate. */
+function konvaZone(root, webFeatures) {
+  return {
+    // Everything in the web app except features/annotate: its other folders, its root files and the other features.
+    target: [
+      ...dirs(root, 'apps/web/src')
+        .filter((d) => d !== 'features')
+        .map((d) => `apps/web/src/${d}`),
+      'apps/web/src/*.{ts,tsx}',
+      ...webFeatures.filter((f) => f !== 'annotate').map((f) => `apps/web/src/features/${f}`),
+    ],
+    from: ['node_modules/react-konva', 'node_modules/konva', 'apps/web/node_modules/react-konva', 'apps/web/node_modules/konva'],
+    message: 'Only features/annotate draws with Konva (STYLE.md layout).',
+  };
+}
+
+/** The zones for a repository checked out at `root`. */
+export function boundaryZones(root) {
+  const apiFeatures = dirs(root, 'apps/api/src').filter((d) => !API_SHARED.includes(d));
+  const webFeatures = dirs(root, 'apps/web/src/features');
+  return [
+    ...PACKAGE_RULES.map(([target, from, message]) => ({ target, from, message })),
+    ...apiZones(apiFeatures),
+    ...webZones(webFeatures),
+    konvaZone(root, webFeatures),
   ];
 }

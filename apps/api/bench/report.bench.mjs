@@ -137,11 +137,8 @@ async function bareRun(images) {
   return { secs: (performance.now() - t0) / 1000, bytes: pdf.length };
 }
 
-async function main() {
-  const dir = mkdtempSync(join(tmpdir(), 'benchproof-report-bench-'));
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
-  // The API's own log goes to a file in the temp folder (printed if the run fails).
+/** Starts the built API on its own temp database; its log goes to a file in the temp folder (printed if the run fails). */
+function startApi(dir, port) {
   const log = join(dir, 'api.log');
   const out = openSync(log, 'w');
   const child = spawn(process.execPath, [ENTRY], {
@@ -155,42 +152,57 @@ async function main() {
       MAIL_CATCHER: 'false',
     },
   });
+  return { child, log };
+}
+
+async function measure(call) {
+  const { jobId, ids } = await buildJob(call);
+  const prints = await Promise.all(ids.map((id) => call(`/media/${id}/print`, { raw: true })));
+  const imageBytes = prints.reduce((s, b) => s + b.length, 0);
+  await reportRun(call, jobId); // warm-up: fonts load and code paths compile once
+  const report = await reportRun(call, jobId);
+  const bare = await bareRun(prints);
+  const mb = (b) => `${(b / 1024 / 1024).toFixed(2)} MB`;
+  console.log(`${PHOTOS}-photo report: ${report.secs.toFixed(2)} s (request to ready, background render), ${mb(report.bytes)}, ${report.pages} pages`);
+  console.log(`bare react-pdf, same ${PHOTOS} JPEGs: ${bare.secs.toFixed(2)} s, ${mb(bare.bytes)}`);
+  console.log(`embedded images (print derivatives): ${mb(imageBytes)}`);
+  emitRow(
+    atMost(
+      `${PHOTOS}-photo report: request to ready vs bare react-pdf with the same JPEGs`,
+      bare.secs,
+      report.secs,
+      's',
+      3,
+      `, ${mb(report.bytes)}, ${report.pages} pages`,
+    ),
+  );
+  emitRow(atMost(`${PHOTOS}-photo report: PDF bytes vs the sum of its embedded JPEGs`, imageBytes / 2 ** 20, report.bytes / 2 ** 20, 'MB', 1.1));
+  console.log(
+    `ratios — time report/bare: ${(report.secs / bare.secs).toFixed(2)} · PDF bytes / image bytes: report ${(report.bytes / imageBytes).toFixed(3)}, bare ${(bare.bytes / imageBytes).toFixed(3)}`,
+  );
+}
+
+function printFailure(child, log) {
+  console.error('API alive after failure:', child.exitCode === null, 'exit', child.exitCode, child.signalCode);
+  console.error(
+    readFileSync(log, 'utf8')
+      .split('\n')
+      .filter((l) => !l.includes('LOG'))
+      .slice(-30)
+      .join('\n'),
+  );
+}
+
+async function main() {
+  const dir = mkdtempSync(join(tmpdir(), 'benchproof-report-bench-'));
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const { child, log } = startApi(dir, port);
   try {
     await waitForHealth(base, child);
-    const call = await session(base);
-    const { jobId, ids } = await buildJob(call);
-    const prints = await Promise.all(ids.map((id) => call(`/media/${id}/print`, { raw: true })));
-    const imageBytes = prints.reduce((s, b) => s + b.length, 0);
-    await reportRun(call, jobId); // warm-up: fonts load and code paths compile once
-    const report = await reportRun(call, jobId);
-    const bare = await bareRun(prints);
-    const mb = (b) => `${(b / 1024 / 1024).toFixed(2)} MB`;
-    console.log(`${PHOTOS}-photo report: ${report.secs.toFixed(2)} s (request to ready, background render), ${mb(report.bytes)}, ${report.pages} pages`);
-    console.log(`bare react-pdf, same ${PHOTOS} JPEGs: ${bare.secs.toFixed(2)} s, ${mb(bare.bytes)}`);
-    console.log(`embedded images (print derivatives): ${mb(imageBytes)}`);
-    emitRow(
-      atMost(
-        `${PHOTOS}-photo report: request to ready vs bare react-pdf with the same JPEGs`,
-        bare.secs,
-        report.secs,
-        's',
-        3,
-        `, ${mb(report.bytes)}, ${report.pages} pages`,
-      ),
-    );
-    emitRow(atMost(`${PHOTOS}-photo report: PDF bytes vs the sum of its embedded JPEGs`, imageBytes / 2 ** 20, report.bytes / 2 ** 20, 'MB', 1.1));
-    console.log(
-      `ratios — time report/bare: ${(report.secs / bare.secs).toFixed(2)} · PDF bytes / image bytes: report ${(report.bytes / imageBytes).toFixed(3)}, bare ${(bare.bytes / imageBytes).toFixed(3)}`,
-    );
+    await measure(await session(base));
   } catch (err) {
-    console.error('API alive after failure:', child.exitCode === null, 'exit', child.exitCode, child.signalCode);
-    console.error(
-      readFileSync(log, 'utf8')
-        .split('\n')
-        .filter((l) => !l.includes('LOG'))
-        .slice(-30)
-        .join('\n'),
-    );
+    printFailure(child, log);
     throw err;
   } finally {
     child.kill('SIGTERM');

@@ -4,6 +4,7 @@ import { BikesModule } from '../bikes';
 import { CustomersModule } from '../customers';
 import { ShopsModule } from '../shops';
 import { UsersModule } from '../users';
+import { BookInService } from './book-in.service';
 import { JobAccess } from './job-access.service';
 import { JobsController } from './jobs.controller';
 import { JobsRepository } from './jobs.repository';
@@ -12,7 +13,7 @@ import { JobsService } from './jobs.service';
 @Module({
   imports: [AuditModule, BikesModule, CustomersModule, ShopsModule, UsersModule],
   controllers: [JobsController],
-  providers: [JobsRepository, JobsService, JobAccess],
+  providers: [JobsRepository, JobsService, JobAccess, BookInService],
   exports: [JobsService, JobAccess],
 })
 export class JobsModule {}

@@ -1,8 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type {
-  BikeListItem,
   BookInRequest,
-  CustomerDto,
   FinalCheckDto,
   FinalCheckRequest,
   JobDetail,
@@ -13,17 +11,18 @@ import type {
   TransitionRequest,
   UpdateJobRequest,
 } from '@benchproof/contracts';
-import { canTransition, finalCheckAllowed, formatJobNumber, allowedNextStatuses } from '@benchproof/domain';
+import { canTransition, finalCheckAllowed, allowedNextStatuses } from '@benchproof/domain';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
-import { JobBookedInEvent, JobMovedEvent, publish } from '../core/events';
+import { JobMovedEvent, publish } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CustomersService } from '../customers';
 import { CLOCK, type Clock } from '../infra/clock';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
+import { BookInService } from './book-in.service';
 import { JobAccess, type JobRef, toJobRef } from './job-access.service';
 import { type JobRow, JobsRepository } from './jobs.repository';
 import { ReportSentChecks } from './report-sent';
@@ -44,6 +43,7 @@ export class JobsService {
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
     private readonly access: JobAccess,
+    private readonly booking: BookInService,
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly emitter: EventEmitter2,
   ) {}
@@ -103,47 +103,7 @@ export class JobsService {
   /** Desk books a bike in: customer and bike found or created, number issued, checklist laid out — all or nothing. */
   bookIn(actor: AuthUser, input: BookInRequest): JobDetail {
     this.checkStaff(actor, input.mechanicId);
-    const job = this.repo.transaction((tx) => {
-      const customer = this.resolveCustomer(actor, input);
-      const bike = this.resolveBike(actor, customer, input);
-      const now = this.clock.now();
-      const number = formatJobNumber(now.getUTCFullYear(), this.shops.takeJobSeq(actor.shopId));
-      const row = this.repo.insert({
-        shopId: actor.shopId,
-        number,
-        bikeId: bike.id,
-        customerId: customer.id,
-        status: 'booked_in',
-        reportedSymptoms: input.reportedSymptoms,
-        promisedOn: input.promisedOn,
-        mechanicId: input.mechanicId ?? null,
-        createdBy: actor.id,
-        bookedInAt: now,
-        createdAt: now,
-        updatedAt: now,
-      });
-      this.repo.insertEvent({ shopId: actor.shopId, jobId: row.id, fromStatus: null, toStatus: 'booked_in', userId: actor.id, note: '', at: now });
-      publish(this.emitter, new JobBookedInEvent(tx, actor.shopId, row.id, actor.id));
-      this.audit.record(actor, { action: 'job.booked_in', entityType: 'job', entityId: row.id, details: { number } });
-      return row;
-    });
-    return this.get(actor, job.id);
-  }
-
-  private resolveCustomer(actor: AuthUser, input: BookInRequest): CustomerDto {
-    if (input.newCustomer) return this.customers.create(actor, input.newCustomer);
-    return this.customers.get(actor, input.customerId ?? 0);
-  }
-
-  private resolveBike(actor: AuthUser, owner: CustomerDto, input: BookInRequest): BikeListItem {
-    if (input.newBike) return this.bikes.insert(actor, owner.id, input.newBike);
-    const bike = this.bikes.get(actor, input.bikeId ?? 0);
-    if (bike.customerId !== owner.id) {
-      throw new DomainError('VALIDATION_FAILED', 'bikeId: that bike belongs to another customer.', {
-        issues: [{ path: 'bikeId', message: 'Belongs to another customer' }],
-      });
-    }
-    return bike;
+    return this.get(actor, this.booking.bookIn(actor, input));
   }
 
   update(actor: AuthUser, id: number, patch: UpdateJobRequest): JobDetail {

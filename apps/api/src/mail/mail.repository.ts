@@ -69,10 +69,26 @@ export class MailRepository {
       .get();
   }
 
+  /**
+   * Records the send and, in the same UPDATE, swaps in the bodies without secrets (SET reads the
+   * row as it was). A crash before this write leaves the full message for the retry; a second
+   * call changes nothing more.
+   */
   markSent(shopId: number, id: number, at: Date, response: string): void {
+    const m = outboxMessages;
     this.db
-      .update(outboxMessages)
-      .set({ status: 'sent', sentAt: at, smtpResponse: response, lastError: null, sendingSince: null })
+      .update(m)
+      .set({
+        status: 'sent',
+        sentAt: at,
+        smtpResponse: response,
+        lastError: null,
+        sendingSince: null,
+        textBody: sql`coalesce(${m.textAfterSend}, ${m.textBody})`,
+        htmlBody: sql`coalesce(${m.htmlAfterSend}, ${m.htmlBody})`,
+        textAfterSend: null,
+        htmlAfterSend: null,
+      })
       .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id)))
       .run();
   }

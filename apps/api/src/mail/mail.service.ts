@@ -17,7 +17,7 @@ import { MAIL_SEND, mailTaskKey } from './mail-relay';
 import { type OutboxRow, MailRepository } from './mail.repository';
 import type { ReportFiles } from './report-files';
 import { estimateDecisionMail } from './templates/estimate-decision';
-import type { RenderedMail, ShopBrand } from './templates/layout';
+import { type RenderedMail, type ShopBrand, withoutSecrets } from './templates/layout';
 import { reportReadyMail } from './templates/report-ready';
 
 /** A message to queue. Attachments are references, opened at send time. */
@@ -33,6 +33,8 @@ export interface QueuedMail {
   html: string;
   attachments: OutboxAttachmentRef[];
   createdBy?: number | null;
+  /** Strings in the body (an owner link) that the row must not keep once the message is sent. */
+  secrets?: string[];
 }
 
 type Actor = Pick<AuthUser, 'id' | 'shopId'>;
@@ -76,6 +78,7 @@ export class MailService implements OnModuleInit {
           subject: mail.subject,
           textBody: mail.text,
           htmlBody: mail.html,
+          ...this.afterSend(mail),
           attachments: mail.attachments,
           status: 'queued',
           messageId: this.newMessageId(mail.shopId),
@@ -88,6 +91,13 @@ export class MailService implements OnModuleInit {
       return row;
     };
     return this.toDto(tx ? write(tx) : this.repo.transaction(write));
+  }
+
+  /** The bodies that replace the sent ones (MailRepository.markSent), when the message carries secrets. */
+  private afterSend(mail: QueuedMail): { textAfterSend: string | null; htmlAfterSend: string | null } {
+    const secrets = mail.secrets ?? [];
+    if (!secrets.length) return { textAfterSend: null, htmlAfterSend: null };
+    return { textAfterSend: withoutSecrets(mail.text, secrets), htmlAfterSend: withoutSecrets(mail.html, secrets) };
   }
 
   /** Every message of a job, newest first, with where it is on its way. */
@@ -141,7 +151,10 @@ export class MailService implements OnModuleInit {
     const job = this.access.read(actor, jobId);
     const to = this.recipient(actor, job.customerId, undefined);
     const rendered: RenderedMail = estimateDecisionMail({ ...this.context(actor, job), link: ownerLink });
-    return this.queue({ shopId: actor.shopId, jobId, kind: 'estimate_decision', to, ...rendered, attachments: [], createdBy: actor.id }, tx);
+    return this.queue(
+      { shopId: actor.shopId, jobId, kind: 'estimate_decision', to, ...rendered, attachments: [], createdBy: actor.id, secrets: [ownerLink] },
+      tx,
+    );
   }
 
   private recipient(actor: Actor, customerId: number, override: string | undefined): string {

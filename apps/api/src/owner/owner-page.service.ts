@@ -50,11 +50,6 @@ export class OwnerPageService {
     const job = this.jobs.ownerFacing(owner, owner.jobId);
     const shop = this.shops.settings(owner.shopId);
     const bike = this.bikes.get(owner, job.bikeId);
-    const findings = this.findings.list(owner, owner.jobId);
-    const shots = this.media.shotsOfFindings(
-      scope,
-      findings.map((f) => f.id),
-    );
     const shot = (s: OwnerShotSource): OwnerShot => ({
       ...s,
       thumbUrl: `/api/owner/${token}/media/${s.id}/thumb`,
@@ -67,35 +62,49 @@ export class OwnerPageService {
       bike: { maker: bike.maker, model: bike.model, year: bike.year, colour: bike.colour },
       ownerName: this.customers.get(owner, job.customerId).name,
       expiresAt: owner.expiresAt.toISOString(),
-      findings: findings.map((f) => ({
-        id: f.id,
-        area: f.area,
-        condition: f.condition,
-        description: f.description,
-        doNotRide: f.doNotRide,
-        cautions: f.cautions,
-        shots: (shots.get(f.id) ?? []).map(shot),
-        recommendation: f.recommendation && {
-          id: f.recommendation.id,
-          summary: f.recommendation.summary,
-          urgency: f.recommendation.urgency,
-          currency: f.recommendation.currency,
-          totals: f.recommendation.totals,
-          decisionStatus: f.recommendation.decisionStatus,
-          updatedAt: f.recommendation.updatedAt,
-        },
-      })),
-      measurements: this.inspection.measurementsOfJobs(owner, [owner.jobId]).map((m) => ({
-        id: m.id,
-        kind: m.kind,
-        condition: m.result.condition,
-        verdict: typeof m.result.message === 'string' ? m.result.message : '',
-        explanation: MEASUREMENT_PLAIN_WORDS[m.kind],
-      })),
+      findings: this.ownerFindings(owner, shot),
+      measurements: this.ownerMeasurements(owner),
       pairs: this.pairs.pairsOf(scope).map((p) => ({ id: p.id, caption: p.caption, before: shot(p.before), after: shot(p.after) })),
       report: report && { issuedAt: report.issuedAt.toISOString(), pdfUrl: `/api/owner/${token}/report.pdf` },
       consent: this.consent.currentConsent(owner.shopId, owner.jobId),
     };
+  }
+
+  /** Findings with only their owner-facing fields; shots as owner media URLs. */
+  private ownerFindings(owner: OwnerActor, shot: (s: OwnerShotSource) => OwnerShot): OwnerPageDto['findings'] {
+    const findings = this.findings.list(owner, owner.jobId);
+    const shots = this.media.shotsOfFindings(
+      { shopId: owner.shopId, jobId: owner.jobId },
+      findings.map((f) => f.id),
+    );
+    return findings.map((f) => ({
+      id: f.id,
+      area: f.area,
+      condition: f.condition,
+      description: f.description,
+      doNotRide: f.doNotRide,
+      cautions: f.cautions,
+      shots: (shots.get(f.id) ?? []).map(shot),
+      recommendation: f.recommendation && {
+        id: f.recommendation.id,
+        summary: f.recommendation.summary,
+        urgency: f.recommendation.urgency,
+        currency: f.recommendation.currency,
+        totals: f.recommendation.totals,
+        decisionStatus: f.recommendation.decisionStatus,
+        updatedAt: f.recommendation.updatedAt,
+      },
+    }));
+  }
+
+  private ownerMeasurements(owner: OwnerActor): OwnerPageDto['measurements'] {
+    return this.inspection.measurementsOfJobs(owner, [owner.jobId]).map((m) => ({
+      id: m.id,
+      kind: m.kind,
+      condition: m.result.condition,
+      verdict: typeof m.result.message === 'string' ? m.result.message : '',
+      explanation: MEASUREMENT_PLAIN_WORDS[m.kind],
+    }));
   }
 
   /**

@@ -38,7 +38,6 @@ export class ReportSnapshotService {
 
   async build(actor: AuthUser, jobId: number): Promise<ReportSnapshot> {
     const job = this.jobs.get(actor, jobId);
-    const shop = this.shops.settings(actor.shopId);
     const inspection = this.inspection.get(actor, jobId);
     const findings = this.findings.list(actor, jobId);
     const estimate = this.findings.estimate(actor, jobId);
@@ -48,34 +47,12 @@ export class ReportSnapshotService {
     const title = (f: FindingDto) => (f.checkpointId !== null ? checkpointLabels.get(f.checkpointId) : undefined) ?? INSPECTION_AREA_LABELS[f.area];
     return {
       schemaVersion: 1,
-      shop: {
-        name: shop.name,
-        contact: [shop.address, shop.phone, shop.email].filter(Boolean).join(' · '),
-        footer: shop.reportFooter,
-        palette: reportPalette(shop.brandPrimary, shop.brandAccent),
-        logoKey: this.shops.logo(actor.shopId)?.key ?? null,
-        units: shop.units,
-        currency: shop.currency,
-      },
+      shop: this.shopPart(actor.shopId),
       job: this.jobPart(job),
       owner: { name: job.customer.name },
       bike: this.bikePart(job),
       overall: worstCondition(findings.map((f) => f.condition)),
-      findings: findings
-        .slice()
-        .sort((a, b) => CONDITIONS.indexOf(b.condition) - CONDITIONS.indexOf(a.condition))
-        .map((f) => ({
-          id: f.id,
-          title: title(f),
-          condition: f.condition,
-          description: f.description,
-          doNotRide: f.doNotRide,
-          cautions: f.cautions,
-          shots: this.media
-            .findingMedia(actor, jobId, f.id)
-            .assets.filter((a) => a.kind !== 'video' && a.kind !== 'scope_video')
-            .map((a) => ({ assetId: a.id, caption: a.caption })),
-        })),
+      findings: this.findingsPart(actor, jobId, findings, title),
       measurements: this.measurementsPart(inspection),
       torque: torque.map((t) => this.torqueRow(t)),
       work: this.workLog.listWork(actor, jobId).map((w) => ({ description: w.description, parts: w.partsUsed, minutes: w.minutes, by: w.userName })),
@@ -88,6 +65,38 @@ export class ReportSnapshotService {
       cautions: this.cautions(findings, torque.length > 0, scope.length > 0),
       madeAt: this.clock.now().toISOString(),
     };
+  }
+
+  private shopPart(shopId: number): ReportSnapshot['shop'] {
+    const shop = this.shops.settings(shopId);
+    return {
+      name: shop.name,
+      contact: [shop.address, shop.phone, shop.email].filter(Boolean).join(' · '),
+      footer: shop.reportFooter,
+      palette: reportPalette(shop.brandPrimary, shop.brandAccent),
+      logoKey: this.shops.logo(shopId)?.key ?? null,
+      units: shop.units,
+      currency: shop.currency,
+    };
+  }
+
+  /** Worst condition first; still shots only (a video cannot go on paper). */
+  private findingsPart(actor: AuthUser, jobId: number, findings: FindingDto[], title: (f: FindingDto) => string): ReportSnapshot['findings'] {
+    return findings
+      .slice()
+      .sort((a, b) => CONDITIONS.indexOf(b.condition) - CONDITIONS.indexOf(a.condition))
+      .map((f) => ({
+        id: f.id,
+        title: title(f),
+        condition: f.condition,
+        description: f.description,
+        doNotRide: f.doNotRide,
+        cautions: f.cautions,
+        shots: this.media
+          .findingMedia(actor, jobId, f.id)
+          .assets.filter((a) => a.kind !== 'video' && a.kind !== 'scope_video')
+          .map((a) => ({ assetId: a.id, caption: a.caption })),
+      }));
   }
 
   private jobPart(job: JobDetail): ReportSnapshot['job'] {

@@ -1,3 +1,4 @@
+import { formatTorque } from '@benchproof/domain';
 import { writeFileSync } from 'node:fs';
 import { binary } from '../media/media-fixtures';
 import { FINDINGS, OWNER, jobWithRecords, photo, settled } from '../reports/report-fixtures';
@@ -187,5 +188,42 @@ describe('bench report: draft, issue, read back', () => {
       .join(' ')
       .replace(/\s+/g, ' ');
     for (const caption of ['Front brake: glazed pads, then new pads bedded in', 'Pads after fitting', 'Shot 1']) expect(text).toContain(caption);
+  });
+
+  // The shop's units setting picks the unit a length is typed in; the web then shows every reading and torque
+  // in the unit it was recorded in, and the report must show the very same text (no second conversion on paper).
+  it('in an imperial shop, prints each measurement and torque exactly as the web shows it', async () => {
+    await ctx.m.agent.patch('/api/shop/settings').send({ units: 'imperial' }).expect(200);
+    try {
+      const insp = (await ctx.m.agent.get(`${ctx.base}/inspection`).expect(200)).body as { areas: { checkpoints: { key: string; id: number }[] }[] };
+      const cp = insp.areas.flatMap((a) => a.checkpoints).find((c) => c.key === 'chain_wear')!.id;
+      const measured = (
+        await ctx.m.agent
+          .post(`${ctx.base}/checkpoints/${cp}/measurements`)
+          .send({ kind: 'chain_elongation', method: 'ruler', pitches: 24, lengthValue: 12.1, lengthUnit: 'in' })
+          .expect(201)
+      ).body as { result: { message: string } };
+      await ctx.m.agent
+        .post(`${ctx.base}/torque-entries`)
+        .send({
+          fastener: 'Seat clamp bolt',
+          specified: { min: 44, max: null, unit: 'lbf_in' },
+          applied: { value: 44, unit: 'lbf_in' },
+          specSource: "Component maker's printed value",
+          tool: 'Click wrench 20–100 lbf·in',
+          toolCalibratedOn: '2025-06-01',
+        })
+        .expect(201);
+      const draft = (await ctx.m.agent.post(`${ctx.base}/reports/drafts`).expect(202)).body as ReportBody;
+      await settled(t);
+      const ready = (await ctx.m.agent.get(`${ctx.base}/reports/${draft.id}`).expect(200)).body as ReportBody;
+      const text = (await pdfPages(await getPdf(ready.urls.pdf))).map((p) => p.text.replace(/\s+/g, ' ')).join(' ');
+      // The web's checkpoint card prints result.message (the ruler's inches become a %); its torque list prints formatTorque(value, unit).
+      expect(text).toContain(measured.result.message);
+      expect(text).toContain(formatTorque(44, 'lbf_in'));
+      expect(text).toContain(formatTorque(5, 'nm'));
+    } finally {
+      await ctx.m.agent.patch('/api/shop/settings').send({ units: 'metric' }).expect(200);
+    }
   });
 });

@@ -32,6 +32,13 @@ export const outboxMessages = sqliteTable(
     subject: text('subject').notNull(),
     textBody: text('text_body').notNull(),
     htmlBody: text('html_body').notNull(),
+    /**
+     * The bodies with their secrets (an owner link) replaced, or null when they carry none. They take
+     * the bodies' place in the same write that records the send, so a sent row keeps no secret while
+     * a row not yet sent (a retry after a crash, a resend) still holds the message it must deliver.
+     */
+    textAfterSend: text('text_after_send'),
+    htmlAfterSend: text('html_after_send'),
     attachments: text('attachments', { mode: 'json' }).$type<OutboxAttachmentRef[]>().notNull(),
     status: text('status').$type<OutboxStatus>().notNull(),
     /** Attempts in the current round; desk's resend starts a new round. */

@@ -21,6 +21,13 @@ const ENTITIES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;
 /** Everything from the records (names, bike, shop) passes through here before it meets HTML. */
 export const esc = (value: string | number): string => String(value).replace(/[&<>"']/g, (c) => ENTITIES[c] ?? c);
 
+/** What a sent message shows where a secret stood. */
+export const SECRET_REMOVED = '[link removed after sending]';
+
+/** The body with every secret replaced, as written in plain text and as escaped into HTML. */
+export const withoutSecrets = (body: string, secrets: readonly string[]): string =>
+  secrets.filter(Boolean).reduce((b, s) => b.split(s).join(SECRET_REMOVED).split(esc(s)).join(esc(SECRET_REMOVED)), body);
+
 /** Only http(s) links become buttons; anything else would be an injection path. */
 export const safeLink = (url: string | null | undefined): string | null => (url && /^https?:\/\//i.test(url) ? url : null);
 

@@ -1,5 +1,5 @@
 import { estimateDecisionMail } from './estimate-decision';
-import type { ShopBrand } from './layout';
+import { SECRET_REMOVED, type ShopBrand, withoutSecrets } from './layout';
 import { reportReadyMail } from './report-ready';
 
 const shop = (brandPrimary: string): ShopBrand => ({
@@ -60,5 +60,18 @@ describe('mail templates', () => {
     expect(() =>
       estimateDecisionMail({ shop: shop('#1F5F5B'), ownerName: 'Ada', jobNumber: 'J-1', bikeLabel: 'Stratus', link: 'javascript:alert(1)' }),
     ).toThrow(/http/);
+  });
+
+  it('takes a secret out of both bodies, also where HTML escaping changed its spelling, and leaves the rest of the wording', () => {
+    const link = 'https://bench.example.test/o/k3y?a=1&b=2';
+    const mail = estimateDecisionMail({ shop: shop('#1F5F5B'), ownerName: 'Ada', jobNumber: 'J-1', bikeLabel: 'Stratus', link });
+    expect(mail.html).toContain('k3y?a=1&amp;b=2');
+    const text = withoutSecrets(mail.text, [link]);
+    const html = withoutSecrets(mail.html, [link]);
+    expect(text).toContain(`Your estimate: ${SECRET_REMOVED}`);
+    expect(html).toContain(`href="${SECRET_REMOVED}"`);
+    expect(`${text}${html}`).not.toContain('k3y');
+    expect(html).toContain('See the estimate and decide');
+    expect(withoutSecrets(mail.text, [])).toBe(mail.text);
   });
 });
