@@ -78,14 +78,12 @@ export async function jobWithRecords(t: TestApp, photos = 3) {
     id: number;
   };
   const brakeRec = ok(
-    await m.agent
-      .post(`${base}/findings/${brake.id}/recommendation`)
-      .send({
-        summary: 'Bleed front brake and fit new pads',
-        urgency: 'safety',
-        parts: [{ description: 'Disc pads', qty: 1, unitPriceMinor: 1899 }],
-        labourHundredths: 50,
-      }),
+    await m.agent.post(`${base}/findings/${brake.id}/recommendation`).send({
+      summary: 'Bleed front brake and fit new pads',
+      urgency: 'safety',
+      parts: [{ description: 'Disc pads', qty: 1, unitPriceMinor: 1899 }],
+      labourHundredths: 50,
+    }),
     'rec',
   ) as { id: number };
   const chainRec = ok(
@@ -105,16 +103,14 @@ export async function jobWithRecords(t: TestApp, photos = 3) {
   ok(await m.agent.put(`${base}/findings/${chain.id}/media`).send({ assetIds: shots.slice(half) }), 'link');
   ok(await m.agent.post(`${base}/work-entries`).send({ description: 'Fitted new 11-speed chain', partsUsed: 'Chain, 11-speed', minutes: 20 }), 'work');
   ok(
-    await m.agent
-      .post(`${base}/torque-entries`)
-      .send({
-        fastener: 'Stem steerer clamp bolts',
-        specified: { min: 5, max: null, unit: 'nm' },
-        applied: { value: 5, unit: 'nm' },
-        specSource: "Component maker's printed value",
-        tool: 'Click wrench 2–24 N·m',
-        toolCalibratedOn: '2025-06-01',
-      }),
+    await m.agent.post(`${base}/torque-entries`).send({
+      fastener: 'Stem steerer clamp bolts',
+      specified: { min: 5, max: null, unit: 'nm' },
+      applied: { value: 5, unit: 'nm' },
+      specSource: "Component maker's printed value",
+      tool: 'Click wrench 2–24 N·m',
+      toolCalibratedOn: '2025-06-01',
+    }),
     'torque',
   );
   await settled(t);
