@@ -17,7 +17,8 @@ export function ShowcaseAccessSection({ form }: { form: UseFormReturnType<Settin
           {...form.getInputProps('showcaseDeskAccess', { type: 'checkbox' })}
         />
         <Text size="sm" c="dimmed">
-          Only pairs whose owner agreed to marketing use are ever shown, and every export is recorded.
+          Only pairs whose owner agreed to marketing use are ever shown, and every export is recorded. Exports carry the shop logo (Branding) as a watermark, or
+          the shop name when there is no logo.
         </Text>
       </Stack>
     </Paper>

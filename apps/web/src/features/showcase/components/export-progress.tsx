@@ -69,7 +69,7 @@ export function ExportProgress({ start, files, onDismiss }: Props) {
           <Text fw={600}>{task.state === 'queued' ? 'Waiting to start the zip…' : `Making the zip: ${made} of ${files} files`}</Text>
           <Progress size="xl" radius="md" value={Math.max(2, task.progress * 100)} striped animated aria-label="Zip progress" />
           <Text size="sm" c="dimmed">
-            The zip is made on the server; keep this page open to download it.
+            Made on the server; keep this page open to download it.
           </Text>
         </Stack>
       )}

@@ -32,10 +32,24 @@ export function ZipBar({ pairIds }: { pairIds: number[] }) {
         </Alert>
       )}
       {pairIds.length > 0 && (
-        <Group justify="flex-end" align="flex-end">
-          <Select size="md" label="Zip size" w={240} data={ZIP_SIZE_OPTIONS} value={size} onChange={(v) => v && setSize(v)} allowDeselect={false} />
-          <Button size="md" leftSection={<IconFileZip size={20} />} loading={zip.busy} onClick={() => void zip.run(zipRequest(pairIds, size))}>
-            Zip {pairIds.length} selected{files > pairIds.length ? ` (${files} files)` : ''}
+        <Group justify="flex-end" align="flex-end" wrap="nowrap" gap="sm">
+          <Select
+            size="md"
+            label="Zip size"
+            style={{ flex: '0 1 240px', minWidth: 0 }}
+            data={ZIP_SIZE_OPTIONS}
+            value={size}
+            onChange={(v) => v && setSize(v)}
+            allowDeselect={false}
+          />
+          <Button
+            size="md"
+            style={{ flexShrink: 0 }}
+            leftSection={<IconFileZip size={20} />}
+            loading={zip.busy}
+            onClick={() => void zip.run(zipRequest(pairIds, size))}
+          >
+            Zip {files} file{files === 1 ? '' : 's'}
           </Button>
         </Group>
       )}
