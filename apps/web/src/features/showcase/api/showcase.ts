@@ -72,14 +72,15 @@ export const startExport = (req: ShowcaseZipRequest) => api<ShowcaseExportTaskDt
 
 const finished = (t: ShowcaseExportTaskDto | undefined) => t?.state === 'done' || t?.state === 'failed';
 
-/** A background export's state and progress, asked for every second until it is done or failed. */
+/** A background export's state and progress, asked for every second until it is done, failed or refused. */
 export const useExportTask = (start: ShowcaseExportTaskDto) =>
   useQuery({
     queryKey: showcaseKeys.export(start.key),
     queryFn: () => api<ShowcaseExportTaskDto>(`/showcase/exports/${encodeURIComponent(start.key)}`),
     initialData: start,
     initialDataUpdatedAt: 0,
-    refetchInterval: (q) => (finished(q.state.data) ? false : 1000),
+    // A refusal (e.g. SHOWCASE_DESK_OFF) ends the polling; a dropped connection does not.
+    refetchInterval: (q) => (finished(q.state.data) || (q.state.error instanceof ApiError && q.state.error.code !== 'NETWORK') ? false : 1000),
   });
 
 /** The finished zip; the server checks every item's consent again before sending it. */
