@@ -46,7 +46,10 @@ export const ACCESS_POLICY = {
   'shop.view': staff(...ALL_STAFF),
   'shop.edit': staff('manager'),
   'audit.view': staff('manager'),
+  /** Favourites, captions and the take-down list. */
   'showcase.manage': staff('manager'),
+  /** Open the library and export from it; desk only where the shop allows it (canOpenShowcase). */
+  'showcase.view': staff('manager', 'desk'),
   'customers.view': staff(...ALL_STAFF),
   'customers.edit': staff('manager', 'desk'),
   'bikes.view': staff(...ALL_STAFF),
@@ -105,4 +108,13 @@ export function actorCan(actor: Actor, action: Action): boolean {
 /** The staff roles allowed to do an action, in ROLES order. */
 export function rolesFor(action: Action): Role[] {
   return ROLES.filter((r) => roleCan(r, action));
+}
+
+/**
+ * Whether a role may open the showcase library in a shop: whoever manages it always; the
+ * others the policy lets view only while the shop's manager has allowed desk access. The
+ * api checks this after the policy guard; the web uses it for the navigation and the route.
+ */
+export function canOpenShowcase(role: Role, shop: { showcaseDeskAccess: boolean }): boolean {
+  return roleCan(role, 'showcase.manage') || (roleCan(role, 'showcase.view') && shop.showcaseDeskAccess);
 }

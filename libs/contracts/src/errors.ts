@@ -45,6 +45,7 @@ export const ERROR_CODES = {
   SAFETY_CONFIRMATION_REQUIRED: { status: 422, message: 'Declining a safety item needs a second confirmation.' },
   NO_CONSENT: { status: 409, message: 'The owner has not consented to showing this job’s photos, or the consent does not cover this.' },
   CONSENT_REVOKED: { status: 409, message: 'The owner withdrew consent for this job. Its photos can no longer be exported; take down any you published.' },
+  SHOWCASE_DESK_OFF: { status: 403, message: 'This shop has not opened the showcase to the front desk. A manager can allow it in Shop settings.' },
   CONSENT_WORDING_CHANGED: { status: 409, message: 'The consent wording has changed. Read it again before deciding.' },
   REPORT_NOT_READY: { status: 409, message: 'The report is still rendering or failed to render.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },

@@ -51,6 +51,8 @@ const settingsFields = {
   finalCheckSecondPerson: z.boolean(),
   /** Null: the BenchProof defaults (0.5 / 0.75 / 1.0 %). */
   chainLimits: ChainLimitsSchema.nullable(),
+  /** The front desk may open the showcase library and export from it (managers always may). */
+  showcaseDeskAccess: z.boolean(),
 };
 
 export const ShopSettingsDtoSchema = z.object({

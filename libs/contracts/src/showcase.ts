@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ErrorCodeSchema } from './errors';
 import { MediaAreaSchema, MediaAssetDtoSchema } from './media';
 import { PairCropSchema } from './pairs';
 
@@ -64,6 +65,13 @@ export const ShowcaseExportQuerySchema = z.object({
 });
 export type ShowcaseExportQuery = z.infer<typeof ShowcaseExportQuerySchema>;
 
+/**
+ * A selection of this many files or more is made as a background task with progress on
+ * screen rather than streamed: at roughly half a second per composed print-size file,
+ * that is where a silent download would start to look stuck.
+ */
+export const SHOWCASE_BACKGROUND_FROM = 8;
+
 export const ShowcaseZipRequestSchema = z.object({
   items: z
     .array(ShowcaseExportQuerySchema.extend({ pairId: z.number().int() }))
@@ -76,6 +84,8 @@ export const ShowcaseExportTaskDtoSchema = z.object({
   key: z.string(),
   state: z.enum(['queued', 'running', 'done', 'failed']),
   progress: z.number(),
+  /** Why a failed export stopped (e.g. CONSENT_REVOKED); the screen switches on it. */
+  code: ErrorCodeSchema.nullable(),
   error: z.string().nullable(),
 });
 export type ShowcaseExportTaskDto = z.infer<typeof ShowcaseExportTaskDtoSchema>;

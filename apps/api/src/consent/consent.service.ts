@@ -1,7 +1,9 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { CONSENT_WORDING, type ConsentDto, type ConsentStatusDto, type OwnerConsentRequest, type RecordConsentRequest } from '@benchproof/contracts';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
+import { ConsentChangedEvent, publish } from '../core/events';
 import { DomainError } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { JobAccess, type JobCaller } from '../jobs';
@@ -34,6 +36,7 @@ export class ConsentService {
     private readonly access: JobAccess,
     private readonly audit: AuditService,
     @Inject(CLOCK) private readonly clock: Clock,
+    private readonly emitter: EventEmitter2,
   ) {}
 
   /** The consent in force for this job, or null when the owner was never asked or never answered. */
@@ -60,15 +63,34 @@ export class ConsentService {
     return this.record(actor, jobId, input, { method: 'in_person', recordedBy: actor });
   }
 
-  /** The one way a consent change is stored (owner page and staff alike). */
+  /**
+   * The one way a consent change is stored (owner page and staff alike). ConsentChangedEvent
+   * goes out inside the same transaction, so what listeners write (the showcase drops a
+   * withdrawn job's marks) commits or rolls back with the consent row.
+   */
   record(scope: JobCaller, jobId: number, input: OwnerConsentRequest, source: ConsentSource): ConsentDto {
-    this.access.read(scope, jobId);
+    const job = this.access.read(scope, jobId);
     if (input.wordingVersion !== CONSENT_WORDING.version) {
       throw new DomainError('CONSENT_WORDING_CHANGED', undefined, { current: CONSENT_WORDING.version });
     }
+    return this.repo.transaction((tx) => {
+      const row = this.insert(scope.shopId, jobId, input, source);
+      const who = source.method === 'in_person' ? source.recordedBy : { shopId: scope.shopId, id: null };
+      this.audit.record(who, {
+        action: input.granted ? 'consent.granted' : 'consent.revoked',
+        entityType: 'job',
+        entityId: jobId,
+        details: { method: source.method, nameMakeModel: row.nameMakeModel, wordingVersion: row.wordingVersion, givenByName: row.givenByName },
+      });
+      publish(this.emitter, new ConsentChangedEvent(tx, scope.shopId, job.customerId, jobId, row.granted));
+      return toDto(row);
+    });
+  }
+
+  private insert(shopId: number, jobId: number, input: OwnerConsentRequest, source: ConsentSource): ConsentRow {
     const fromStaff = source.method === 'in_person';
-    const row = this.repo.insert({
-      shopId: scope.shopId,
+    return this.repo.insert({
+      shopId,
       jobId,
       granted: input.granted,
       nameMakeModel: input.granted && input.nameMakeModel,
@@ -79,13 +101,5 @@ export class ConsentService {
       ownerLinkId: fromStaff ? null : source.ownerLinkId,
       at: this.clock.now(),
     });
-    const who = fromStaff ? source.recordedBy : { shopId: scope.shopId, id: null };
-    this.audit.record(who, {
-      action: input.granted ? 'consent.granted' : 'consent.revoked',
-      entityType: 'job',
-      entityId: jobId,
-      details: { method: source.method, nameMakeModel: row.nameMakeModel, wordingVersion: row.wordingVersion, givenByName: row.givenByName },
-    });
-    return toDto(row);
   }
 }

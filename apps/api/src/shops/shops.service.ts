@@ -21,6 +21,7 @@ const toDto = (s: ShopRow): ShopSettingsDto => ({
   brandPrimary: s.brandPrimary,
   brandAccent: s.brandAccent,
   reportFooter: s.reportFooter,
+  showcaseDeskAccess: s.showcaseDeskAccess,
   logo: s.logoKey && s.logoWidth && s.logoHeight ? { url: `/api/shop/logo?v=${s.logoSha256?.slice(0, 12)}`, width: s.logoWidth, height: s.logoHeight } : null,
 });
 

@@ -1,24 +1,25 @@
-import { PassThrough, Readable, type Writable } from 'node:stream';
-import { Inject, Injectable, type OnModuleInit } from '@nestjs/common';
-import { SHOWCASE_SIZES, type ShowcaseExportQuery, type ShowcaseExportTaskDto, type ShowcaseZipRequest } from '@benchproof/contracts';
+import { PassThrough, type Writable } from 'node:stream';
+import { buffer } from 'node:stream/consumers';
+import { Inject, Injectable } from '@nestjs/common';
+import { SHOWCASE_SIZES, type ShowcaseExportQuery, type ShowcaseZipRequest } from '@benchproof/contracts';
 import { ZipFile } from 'yazl';
 import { AnnotationRenderService } from '../annotations';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
-import { DomainError } from '../core/http';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { STORAGE, type Storage } from '../infra/storage';
-import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
 import { ShopsService } from '../shops';
 import { ShowcaseService } from './showcase.service';
-
-export const EXPORT_TASK = 'showcase.export';
-/** Selections above this many files run as a background task with progress. */
-export const LARGE_EXPORT = 10;
 
 export interface ExportFile {
   name: string;
   data: Buffer;
+}
+
+/** The shop's mark on every file: its report logo when one is set, else its name. */
+export interface Watermark {
+  text: string;
+  logo: Buffer | null;
 }
 
 /**
@@ -27,7 +28,7 @@ export interface ExportFile {
  * with no metadata. Consent is checked again right before each file is handed out.
  */
 @Injectable()
-export class ShowcaseExportService implements OnModuleInit {
+export class ShowcaseExportService {
   constructor(
     private readonly showcase: ShowcaseService,
     private readonly render: AnnotationRenderService,
@@ -35,18 +36,18 @@ export class ShowcaseExportService implements OnModuleInit {
     private readonly audit: AuditService,
     @Inject(IMAGE) private readonly image: ImageAdapter,
     @Inject(STORAGE) private readonly storage: Storage,
-    @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
   ) {}
 
-  onModuleInit(): void {
-    this.tasks.register(EXPORT_TASK, async (t) => this.runTask(t.payload as unknown as TaskPayload, t.key, (f) => t.progress(f)), {
-      concurrency: 1,
-      maxAttempts: 1,
-    });
+  /** The logo is read once per request or zip, not per file. A logo file that cannot be read falls back to the name. */
+  async watermark(shopId: number): Promise<Watermark> {
+    const text = this.shops.settings(shopId).name;
+    const logo = this.shops.logo(shopId);
+    if (!logo) return { text, logo: null };
+    return { text, logo: await buffer(this.storage.createReadStream(logo.key)).catch(() => null) };
   }
 
   /** One file, consent checked before rendering and again before it is returned. */
-  async file(actor: AuthUser, pairId: number, q: ShowcaseExportQuery): Promise<ExportFile> {
+  async file(actor: AuthUser, pairId: number, q: ShowcaseExportQuery, mark?: Watermark): Promise<ExportFile> {
     const { pair } = this.showcase.clear(actor, pairId);
     const size = SHOWCASE_SIZES[q.size];
     const ids = q.variant === 'pair' ? [pair.before.id, pair.after.id] : [q.variant === 'before' ? pair.before.id : pair.after.id];
@@ -59,7 +60,7 @@ export class ShowcaseExportService implements OnModuleInit {
       height: size.height,
       layout,
       labels: q.variant === 'pair' ? ['before', 'after'] : [],
-      watermark: this.shops.settings(actor.shopId).name,
+      watermark: mark ?? (await this.watermark(actor.shopId)),
     });
     this.showcase.clear(actor, pairId);
     this.audit.record(actor, {
@@ -82,7 +83,8 @@ export class ShowcaseExportService implements OnModuleInit {
     await this.writeZip(actor, req, out, () => undefined);
   }
 
-  async writeZip(actor: AuthUser, req: ShowcaseZipRequest, out: Writable, progress: (f: number) => void): Promise<void> {
+  /** `signal` stops the zip between files and while it waits on the reader (a revocation, see ShowcaseExportTasks). */
+  async writeZip(actor: AuthUser, req: ShowcaseZipRequest, out: Writable, progress: (f: number) => void, signal?: AbortSignal): Promise<void> {
     const zip = new ZipFile();
     let sent = 0;
     let added = 0;
@@ -94,14 +96,20 @@ export class ShowcaseExportService implements OnModuleInit {
     });
     done.catch(() => undefined); // a failure is reported by the throw below, not twice
     try {
+      const mark = await this.watermark(actor.shopId);
       for (const [i, item] of req.items.entries()) {
-        const f = await this.file(actor, item.pairId, item);
+        signal?.throwIfAborted();
+        const f = await abortable(this.file(actor, item.pairId, item, mark), signal);
         zip.addBuffer(f.data, `${String(i + 1).padStart(3, '0')}-${f.name}`, { compress: false });
         added += f.data.length;
         // Back-pressure: the next file is made only once this one has gone out.
-        while (sent < added && !out.destroyed) await new Promise((r) => setTimeout(r, 5));
+        while (sent < added && !out.destroyed) {
+          signal?.throwIfAborted();
+          await new Promise((r) => setTimeout(r, 5));
+        }
         progress((i + 1) / req.items.length);
       }
+      signal?.throwIfAborted();
       zip.end();
       await done;
     } catch (err) {
@@ -110,50 +118,15 @@ export class ShowcaseExportService implements OnModuleInit {
       throw err;
     }
   }
-
-  /** A large selection: queued as a task; the zip lands in storage, made with progress. */
-  start(actor: AuthUser, req: ShowcaseZipRequest): ShowcaseExportTaskDto {
-    for (const item of req.items) this.showcase.clear(actor, item.pairId);
-    const key = `${actor.id}-${Date.now().toString(36)}`;
-    this.tasks.enqueue({
-      kind: EXPORT_TASK,
-      key,
-      shopId: actor.shopId,
-      payload: { actor: { id: actor.id, shopId: actor.shopId, role: actor.role, email: actor.email, name: actor.name }, req },
-    });
-    return this.status(actor, key);
-  }
-
-  status(actor: AuthUser, key: string): ShowcaseExportTaskDto {
-    const s = key.startsWith(`${actor.id}-`) ? this.tasks.status(EXPORT_TASK, key) : null;
-    if (!s) throw new DomainError('NOT_FOUND', 'No such export.');
-    return { key, state: s.state, progress: s.progress, error: s.lastError };
-  }
-
-  /** The finished zip; every item's consent is checked again before a byte is sent. */
-  async download(actor: AuthUser, key: string): Promise<Readable> {
-    const s = this.status(actor, key);
-    if (s.state !== 'done') throw new DomainError('NOT_FOUND', 'This export is not ready.');
-    const chunks: Buffer[] = [];
-    for await (const c of this.storage.createReadStream(listKey(key))) chunks.push(c as Buffer);
-    const pairIds = JSON.parse(Buffer.concat(chunks).toString('utf8')) as number[];
-    for (const id of pairIds) this.showcase.clear(actor, id);
-    return this.storage.createReadStream(zipKey(key));
-  }
-
-  private async runTask(p: TaskPayload, key: string, progress: (f: number) => void): Promise<void> {
-    const sink = new PassThrough();
-    const stored = this.storage.put(zipKey(key), sink);
-    await Promise.all([this.writeZip(p.actor, p.req, sink, progress), stored]);
-    await this.storage.put(listKey(key), Readable.from(Buffer.from(JSON.stringify(p.req.items.map((i) => i.pairId)))));
-  }
 }
 
-interface TaskPayload {
-  actor: AuthUser;
-  req: ShowcaseZipRequest;
+/** The work's result, or the signal's reason as soon as it aborts (a file still rendering is then dropped, unaudited). */
+function abortable<T>(work: Promise<T>, signal?: AbortSignal): Promise<T> {
+  if (!signal) return work;
+  signal.throwIfAborted();
+  return new Promise<T>((resolve, reject) => {
+    const stop = () => reject(signal.reason as Error);
+    signal.addEventListener('abort', stop, { once: true });
+    work.then(resolve, reject).finally(() => signal.removeEventListener('abort', stop));
+  });
 }
-
-const safe = (key: string) => key.toLowerCase().replace(/[^a-z0-9_-]/g, '-');
-const zipKey = (key: string) => `showcase/export-${safe(key)}.zip`;
-const listKey = (key: string) => `showcase/export-${safe(key)}.json`;

@@ -13,6 +13,7 @@ import {
 } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ShowcaseExportTasks } from './showcase-export-tasks.service';
 import { ShowcaseExportService } from './showcase-export.service';
 import { ShowcaseService } from './showcase.service';
 
@@ -22,10 +23,11 @@ export class ShowcaseController {
   constructor(
     private readonly showcase: ShowcaseService,
     private readonly exports: ShowcaseExportService,
+    private readonly tasks: ShowcaseExportTasks,
   ) {}
 
   @Get('items')
-  @Can('showcase.manage')
+  @Can('showcase.view')
   @ApiZodQuery(ShowcaseQuerySchema)
   list(@CurrentUser() user: AuthUser, @Query(zod(ShowcaseQuerySchema)) q: ShowcaseQuery) {
     return this.showcase.list(user, q);
@@ -50,7 +52,7 @@ export class ShowcaseController {
 
   /** One image made on request (small): a composed pair or one shot, at a named size. */
   @Get('items/:pairId/export')
-  @Can('showcase.manage')
+  @Can('showcase.view')
   @ApiZodQuery(ShowcaseExportQuerySchema)
   async file(
     @CurrentUser() user: AuthUser,
@@ -65,7 +67,7 @@ export class ShowcaseController {
   /** A zip of a selection, streamed as it is made. */
   @Post('zip')
   @HttpCode(200)
-  @Can('showcase.manage')
+  @Can('showcase.view')
   @ApiZodBody(ShowcaseZipRequestSchema)
   async zip(@CurrentUser() user: AuthUser, @Body(zod(ShowcaseZipRequestSchema)) body: ShowcaseZipRequest, @Res() res: Response) {
     for (const item of body.items) this.showcase.clear(user, item.pairId);
@@ -75,22 +77,22 @@ export class ShowcaseController {
 
   /** A large selection as a background task with progress. */
   @Post('exports')
-  @Can('showcase.manage')
+  @Can('showcase.view')
   @ApiZodBody(ShowcaseZipRequestSchema)
   start(@CurrentUser() user: AuthUser, @Body(zod(ShowcaseZipRequestSchema)) body: ShowcaseZipRequest) {
-    return this.exports.start(user, body);
+    return this.tasks.start(user, body);
   }
 
   @Get('exports/:key')
-  @Can('showcase.manage')
+  @Can('showcase.view')
   status(@CurrentUser() user: AuthUser, @Param('key') key: string) {
-    return this.exports.status(user, key);
+    return this.tasks.status(user, key);
   }
 
   @Get('exports/:key/download')
-  @Can('showcase.manage')
+  @Can('showcase.view')
   async download(@CurrentUser() user: AuthUser, @Param('key') key: string, @Res() res: Response) {
-    const stream = await this.exports.download(user, key);
+    const stream = await this.tasks.download(user, key);
     res.set({ 'Content-Type': 'application/zip', 'Content-Disposition': 'attachment; filename="showcase.zip"' });
     stream.pipe(res);
   }

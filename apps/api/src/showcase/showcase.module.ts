@@ -7,6 +7,8 @@ import { JobsModule } from '../jobs';
 import { PairsModule } from '../pairs';
 import { ShopsModule } from '../shops';
 import { WorkLogModule } from '../work-log';
+import { ShowcaseConsentListener } from './showcase-consent.listener';
+import { ShowcaseExportTasks } from './showcase-export-tasks.service';
 import { ShowcaseExportService } from './showcase-export.service';
 import { ShowcaseController } from './showcase.controller';
 import { ShowcaseRepository } from './showcase.repository';
@@ -15,7 +17,7 @@ import { ShowcaseService } from './showcase.service';
 @Module({
   imports: [AnnotationsModule, AuditModule, ConsentModule, FindingsModule, JobsModule, PairsModule, ShopsModule, WorkLogModule],
   controllers: [ShowcaseController],
-  providers: [ShowcaseRepository, ShowcaseService, ShowcaseExportService],
+  providers: [ShowcaseRepository, ShowcaseService, ShowcaseExportService, ShowcaseExportTasks, ShowcaseConsentListener],
   exports: [ShowcaseService],
 })
 export class ShowcaseModule {}

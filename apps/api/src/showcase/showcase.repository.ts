@@ -1,7 +1,8 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, eq } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { showcaseItems } from '../db/schema';
+import type { DbTx } from '../infra/tasks';
 
 export type ShowcaseMarkRow = typeof showcaseItems.$inferSelect;
 
@@ -28,6 +29,15 @@ export class ShowcaseRepository {
       .insert(showcaseItems)
       .values({ shopId, pairId, favourite: patch.favourite ?? false, caption: patch.caption ?? null, updatedAt: at })
       .onConflictDoUpdate({ target: [showcaseItems.shopId, showcaseItems.pairId], set: { ...patch, updatedAt: at } })
+      .run();
+  }
+
+  /** Forgets favourites and edited captions of these pairs, inside the caller's transaction when given. */
+  drop(shopId: number, pairIds: number[], tx?: DbTx): void {
+    if (!pairIds.length) return;
+    (tx ?? this.db)
+      .delete(showcaseItems)
+      .where(and(eq(showcaseItems.shopId, shopId), inArray(showcaseItems.pairId, pairIds)))
       .run();
   }
 }

@@ -1,16 +1,26 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { ConsentDto, ShotPairDto, ShowcaseDownloadDto, ShowcaseItemDto, ShowcaseQuery, UpdateShowcaseItemRequest } from '@benchproof/contracts';
+import {
+  canOpenShowcase,
+  type ConsentDto,
+  type ShotPairDto,
+  type ShowcaseDownloadDto,
+  type ShowcaseItemDto,
+  type ShowcaseQuery,
+  type UpdateShowcaseItemRequest,
+} from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import { ConsentService } from '../consent';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { FindingsService } from '../findings';
 import { CLOCK, type Clock } from '../infra/clock';
+import type { DbTx } from '../infra/tasks';
 import { JobAccess, JobsService } from '../jobs';
 import { PairsService } from '../pairs';
+import { ShopsService } from '../shops';
 import { WorkLogService } from '../work-log';
 import { draftCaption } from './showcase-caption';
-import { consentProblem, namesBike, pairInScope } from './showcase-scope';
+import { consentProblem, namesBike, pairInScope, type ScopeProblem } from './showcase-scope';
 import { ShowcaseRepository, type ShowcaseMarkRow } from './showcase.repository';
 
 /** One item cleared for use right now: the pair, the consent that covers it, the caption to print. */
@@ -36,10 +46,17 @@ export class ShowcaseService {
     private readonly work: WorkLogService,
     private readonly repo: ShowcaseRepository,
     private readonly audit: AuditService,
+    private readonly shops: ShopsService,
     @Inject(CLOCK) private readonly clock: Clock,
   ) {}
 
+  /** The policy lets desk staff view; the shop decides whether they do (SHOWCASE_DESK_OFF). */
+  assertOpen(actor: AuthUser): void {
+    if (!canOpenShowcase(actor.role, this.shops.settings(actor.shopId))) throw new DomainError('SHOWCASE_DESK_OFF');
+  }
+
   list(actor: AuthUser, q: ShowcaseQuery): ShowcaseItemDto[] {
+    this.assertOpen(actor);
     const marks = this.repo.marks(actor.shopId);
     const items = this.consent.currentGrants(actor.shopId).flatMap((c) => {
       if (consentProblem(c)) return [];
@@ -56,6 +73,7 @@ export class ShowcaseService {
 
   /** The pair if its job's current consent covers it, else NO_CONSENT / CONSENT_REVOKED. */
   clear(actor: AuthUser, pairId: number): ClearedItem {
+    this.assertOpen(actor);
     const jobId = this.pairs.jobOf(actor.shopId, pairId);
     if (jobId === null) throw notFound('Pair');
     const consent = this.consent.currentConsent(actor.shopId, jobId);
@@ -80,6 +98,26 @@ export class ShowcaseService {
   draft(actor: AuthUser, pairId: number): string {
     const { pair, consent } = this.clear(actor, pairId);
     return this.draftFor(actor, pair, consent);
+  }
+
+  /** The jobs a selection of pairs belongs to (a pair of another shop belongs to none). */
+  jobsOf(shopId: number, pairIds: number[]): Set<number> {
+    return new Set(pairIds.map((id) => this.pairs.jobOf(shopId, id)).filter((j): j is number => j !== null));
+  }
+
+  /** Why a job's items may not be used right now (NO_CONSENT, CONSENT_REVOKED), or null. */
+  problemOf(shopId: number, jobId: number): ScopeProblem {
+    return consentProblem(this.consent.currentConsent(shopId, jobId));
+  }
+
+  /**
+   * After a revocation the job's items leave the library for good: its favourite marks and
+   * edited captions are dropped in the revocation's transaction. A later consent may have a
+   * narrower scope (e.g. not naming the bike), so it starts from fresh drafts.
+   */
+  forgetJob(tx: DbTx, shopId: number, jobId: number): void {
+    const pairIds = [...this.repo.marks(shopId).keys()].filter((pairId) => this.pairs.jobOf(shopId, pairId) === jobId);
+    this.repo.drop(shopId, pairIds, tx);
   }
 
   /** Everything exported from a job's items (audit), e.g. to take down after a revocation. */

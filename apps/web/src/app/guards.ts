@@ -1,7 +1,9 @@
 import { roleCan, type Action } from '@benchproof/contracts';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import { sessionHasExpired, sessionQuery } from '../features/auth';
+import { shopSettingsQuery } from '../features/shop-settings';
 import { queryClient } from '../lib/query-client';
+import { shopCan } from './shop-access';
 
 /** Loader for the signed-in area: no session → sign-in, remembering where the user was going. */
 export async function requireSession({ request }: LoaderFunctionArgs) {
@@ -22,3 +24,12 @@ export const requireAction = (action: Action) => async (args: LoaderFunctionArgs
   if (!user || !roleCan(user.role, action)) throw redirect('/jobs');
   return null;
 };
+
+/** Loader for the showcase: the policy's `showcase.view`, and for the desk only where the shop allows it. */
+export async function requireShowcase(args: LoaderFunctionArgs) {
+  await requireSession(args);
+  const user = await queryClient.ensureQueryData(sessionQuery);
+  const shop = user ? await queryClient.ensureQueryData(shopSettingsQuery).catch(() => undefined) : undefined;
+  if (!user || !shopCan(user.role, shop)('showcase.view')) throw redirect('/jobs');
+  return null;
+}

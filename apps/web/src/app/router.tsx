@@ -1,6 +1,6 @@
 import type { ComponentType } from 'react';
 import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
-import { requireAction, requireSession } from './guards';
+import { requireAction, requireSession, requireShowcase } from './guards';
 import { SignInRoute } from './routes/auth/sign-in.route';
 import { NotFoundRoute } from './routes/errors/not-found.route';
 import { RouteError } from './routes/errors/route-error';
@@ -80,7 +80,7 @@ const signedIn: RouteObject[] = [
   },
   {
     path: 'showcase',
-    loader: requireAction('showcase.manage'),
+    loader: requireShowcase,
     lazy: page(
       () => import('./routes/showcase/showcase.route'),
       (m) => m.ShowcaseRoute,

@@ -25,6 +25,8 @@ export const shops = sqliteTable('shops', {
   logoSha256: text('logo_sha256'),
   logoWidth: integer('logo_width'),
   logoHeight: integer('logo_height'),
+  /** Desk staff may open the showcase library (managers always may); off until a manager allows it. */
+  showcaseDeskAccess: integer('showcase_desk_access', { mode: 'boolean' }).notNull().default(false),
   nextJobSeq: integer('next_job_seq').notNull().default(1),
   createdAt: timestamp('created_at').notNull(),
 });

@@ -18,8 +18,8 @@ export interface ComposeRequest {
   layout: 'side' | 'stacked';
   /** A label per shot ("before", "after") or none. */
   labels: string[];
-  /** Shop name shown small in a corner (the shop has no stored logo yet). */
-  watermark: string;
+  /** The shop's mark, bottom-right: its logo (JPEG bytes) when it has one, else its name in our type. */
+  watermark: { text: string; logo: Buffer | null };
 }
 
 const GUTTER = 8;
@@ -63,8 +63,27 @@ function overlay(req: ComposeRequest, cells: { left: number; top: number }[]): s
     })
     .join('');
   const wfs = Math.round(24 * scale);
-  const mark = `<text x="${req.width - pad}" y="${req.height - pad}" text-anchor="end" font-family="DejaVu Sans, sans-serif" font-size="${wfs}" fill="#ffffff" fill-opacity="0.85" stroke="#14181c" stroke-opacity="0.5" stroke-width="${Math.max(1, wfs / 12)}" paint-order="stroke">${escapeXml(req.watermark)}</text>`;
+  const mark = req.watermark.logo
+    ? ''
+    : `<text x="${req.width - pad}" y="${req.height - pad}" text-anchor="end" font-family="DejaVu Sans, sans-serif" font-size="${wfs}" fill="#ffffff" fill-opacity="0.85" stroke="#14181c" stroke-opacity="0.5" stroke-width="${Math.max(1, wfs / 12)}" paint-order="stroke">${escapeXml(req.watermark.text)}</text>`;
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${req.width}" height="${req.height}">${labels}${mark}</svg>`;
+}
+
+/** Logo box: at most a quarter of the width and a tenth of the short side; the logo keeps its proportions. */
+const LOGO_MAX_W = 0.25;
+const LOGO_MAX_H = 0.1;
+/** Slightly see-through so the photo still reads under a large logo. */
+const LOGO_OPACITY = 0.9;
+
+/** The logo, fitted into its box and placed bottom-right on the same padding as the text mark. */
+async function logoLayer(logo: Buffer, width: number, height: number): Promise<{ input: Buffer; left: number; top: number }> {
+  const scale = Math.max(0.6, Math.min(width, height) / 1080);
+  const pad = Math.round(20 * scale);
+  const fitted = sharp(logo, { failOn: 'truncated' }).resize(Math.round(width * LOGO_MAX_W), Math.round(Math.min(width, height) * LOGO_MAX_H), {
+    fit: 'inside',
+  });
+  const { data, info } = await fitted.toColourspace('srgb').ensureAlpha(LOGO_OPACITY).png().toBuffer({ resolveWithObject: true });
+  return { input: data, left: width - pad - info.width, top: height - pad - info.height };
 }
 
 /**
@@ -79,8 +98,9 @@ export async function composeShowcase(req: ComposeRequest): Promise<Buffer> {
   const ch = side ? req.height : Math.floor((req.height - GUTTER * (n - 1)) / n);
   const positions = req.shots.map((_, i) => (side ? { left: i * (cw + GUTTER), top: 0 } : { left: 0, top: i * (ch + GUTTER) }));
   const cells = await Promise.all(req.shots.map((s) => cell(s, req.crop, cw, ch)));
+  const logo = req.watermark.logo ? [await logoLayer(req.watermark.logo, req.width, req.height)] : [];
   return sharp({ create: { width: req.width, height: req.height, channels: 3, background: BACKGROUND } })
-    .composite([...cells.map((input, i) => ({ input, ...positions[i] })), { input: Buffer.from(overlay(req, positions)), left: 0, top: 0 }])
+    .composite([...cells.map((input, i) => ({ input, ...positions[i] })), { input: Buffer.from(overlay(req, positions)), left: 0, top: 0 }, ...logo])
     .toColourspace('srgb')
     .jpeg({ quality: 86, optimiseCoding: true })
     .toBuffer();

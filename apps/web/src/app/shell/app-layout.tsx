@@ -4,17 +4,20 @@ import { useDisclosure } from '@mantine/hooks';
 import { IconKey, IconLogout } from '@tabler/icons-react';
 import { Link, Outlet, useNavigate } from 'react-router';
 import { Logo } from '../../components/logo';
-import { useCan, useLogout, useSession } from '../../features/auth';
+import { useLogout, useSession } from '../../features/auth';
+import { useShopSettings } from '../../features/shop-settings';
+import { shopCan } from '../shop-access';
 import { Navigation } from './navigation';
 
 /** The signed-in frame: header with the mark, a navigation drawer on phones, a sidebar on desktops. */
 export function AppLayout() {
   const [opened, { toggle, close }] = useDisclosure();
   const { data: user } = useSession();
-  const can = useCan();
+  const { data: shop } = useShopSettings();
   const logout = useLogout();
   const navigate = useNavigate();
   if (!user) return null;
+  const can = shopCan(user.role, shop);
 
   const signOut = () => logout.mutate(undefined, { onSettled: () => void navigate('/sign-in', { replace: true }) });
 

@@ -13,7 +13,7 @@ export interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { to: '/jobs', label: 'Jobs', icon: IconClipboardList },
   { to: '/customers', label: 'Customers & bikes', icon: IconBike },
-  { to: '/showcase', label: 'Showcase', icon: IconPhotoStar, action: 'showcase.manage' },
+  { to: '/showcase', label: 'Showcase', icon: IconPhotoStar, action: 'showcase.view' },
   { to: '/settings/users', label: 'Users & roles', icon: IconUsers, action: 'users.manage' },
   { to: '/settings/shop', label: 'Shop settings', icon: IconSettings, action: 'shop.edit' },
 ];

@@ -16,6 +16,7 @@ export interface SettingsValues {
   units: ShopSettingsDto['units'];
   pageSize: ShopSettingsDto['pageSize'];
   finalCheckSecondPerson: boolean;
+  showcaseDeskAccess: boolean;
   ownChainLimits: boolean;
   chain: { replaceAt11Pct: number | string; replaceAt10Pct: number | string; cassettePct: number | string };
 }
@@ -35,6 +36,7 @@ export function fromDto(s: ShopSettingsDto, toMajor: (minor: number, currency: s
     units: s.units,
     pageSize: s.pageSize,
     finalCheckSecondPerson: s.finalCheckSecondPerson,
+    showcaseDeskAccess: s.showcaseDeskAccess,
     ownChainLimits: s.chainLimits !== null,
     chain: s.chainLimits ?? { ...DEFAULT_CHAIN_LIMIT_POLICY },
   };

@@ -26,6 +26,7 @@ import { ContrastCheck } from './contrast-check';
 import { CoverPreview } from './cover-preview';
 import { LogoUpload } from './logo-upload';
 import { fromDto, toFormPath, toRequest, validateSettings, type SettingsValues } from './settings-values';
+import { ShowcaseAccessSection } from './showcase-access-section';
 
 type Form = UseFormReturnType<SettingsValues>;
 
@@ -149,6 +150,7 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettingsDto }) {
         <MoneySection form={form} />
         <WorkshopSection form={form} />
         <BrandSection form={form} settings={settings} />
+        <ShowcaseAccessSection form={form} />
         {failure && <Alert color="red">{failure}</Alert>}
         {Object.keys(form.errors).length > 0 && (
           <Alert color="red" variant="light">

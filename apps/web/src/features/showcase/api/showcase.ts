@@ -1,6 +1,7 @@
 import type {
   CaptionDraftDto,
   ShowcaseExportQuery,
+  ShowcaseExportTaskDto,
   ShowcaseItemDto,
   ShowcaseQuery,
   ShowcaseZipRequest,
@@ -10,7 +11,11 @@ import type {
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, ApiError, csrfHeader, withQuery } from '../../../lib/api-client';
 
-export const showcaseKeys = { all: ['showcase'] as const, items: (q: ShowcaseQuery) => ['showcase', 'items', q] as const };
+export const showcaseKeys = {
+  all: ['showcase'] as const,
+  items: (q: ShowcaseQuery) => ['showcase', 'items', q] as const,
+  export: (key: string) => ['showcase', 'export', key] as const,
+};
 
 /** Consent can be withdrawn at any moment on the owner page: look again often. */
 export const useShowcaseItems = (q: ShowcaseQuery) =>
@@ -61,3 +66,22 @@ export const downloadZip = (req: ShowcaseZipRequest) =>
     { method: 'POST', headers: { 'content-type': 'application/json', ...csrfHeader() }, body: JSON.stringify(req) },
     'showcase.zip',
   );
+
+/** A large selection: queued on the server as a background export (consent is checked before it is accepted). */
+export const startExport = (req: ShowcaseZipRequest) => api<ShowcaseExportTaskDto>('/showcase/exports', { method: 'POST', body: req });
+
+const finished = (t: ShowcaseExportTaskDto | undefined) => t?.state === 'done' || t?.state === 'failed';
+
+/** A background export's state and progress, asked for every second until it is done, failed or refused. */
+export const useExportTask = (start: ShowcaseExportTaskDto) =>
+  useQuery({
+    queryKey: showcaseKeys.export(start.key),
+    queryFn: () => api<ShowcaseExportTaskDto>(`/showcase/exports/${encodeURIComponent(start.key)}`),
+    initialData: start,
+    initialDataUpdatedAt: 0,
+    // A refusal (e.g. SHOWCASE_DESK_OFF) ends the polling; a dropped connection does not.
+    refetchInterval: (q) => (finished(q.state.data) || (q.state.error instanceof ApiError && q.state.error.code !== 'NETWORK') ? false : 1000),
+  });
+
+/** The finished zip; the server checks every item's consent again before sending it. */
+export const downloadFinishedExport = (key: string) => download(`/api/showcase/exports/${encodeURIComponent(key)}/download`, {}, 'showcase.zip');

@@ -1,19 +1,13 @@
-import { SHOWCASE_SIZES, SHOWCASE_SIZE_KEYS, type ShowcaseItemDto, type ShowcaseSize, type ShowcaseVariant } from '@benchproof/contracts';
+import type { ShowcaseItemDto } from '@benchproof/contracts';
 import { MEDIA_AREA_LABELS } from '@benchproof/domain';
-import { ActionIcon, Badge, Button, Checkbox, Group, Paper, Select, SimpleGrid, Stack, Text } from '@mantine/core';
+import { ActionIcon, Badge, Group, Paper, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconDownload, IconEdit, IconStar, IconStarFilled } from '@tabler/icons-react';
+import { IconStar, IconStarFilled } from '@tabler/icons-react';
 import { useState } from 'react';
-import { ApiError } from '../../../lib/api-client';
-import { downloadExport, useUpdateShowcaseItem } from '../api/showcase';
+import { useUpdateShowcaseItem } from '../api/showcase';
 import { CaptionEditor } from './caption-editor';
+import { ExportControls } from './export-controls';
 
-const VARIANT_OPTIONS: { value: ShowcaseVariant; label: string }[] = [
-  { value: 'pair', label: 'Before and after together' },
-  { value: 'before', label: 'Before shot alone' },
-  { value: 'after', label: 'After shot alone' },
-];
-const SIZE_OPTIONS = SHOWCASE_SIZE_KEYS.map((k) => ({ value: k, label: SHOWCASE_SIZES[k].label }));
 const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** The annotated render (blur boxes applied) when there is one, else the plain upright copy. */
@@ -29,16 +23,36 @@ function Shot({ id, alt }: { id: number; alt: string }) {
   );
 }
 
+/** The favourite mark: a 48 px toggle for those who curate the library, a plain star for the others. */
+function Favourite({ item, canManage }: { item: ShowcaseItemDto; canManage: boolean }) {
+  const mark = useUpdateShowcaseItem(item.pairId);
+  if (!canManage) return item.favourite ? <IconStarFilled size={28} color="var(--mantine-color-yellow-6)" aria-label="Favourite" /> : null;
+  return (
+    <ActionIcon
+      size={48}
+      variant={item.favourite ? 'filled' : 'light'}
+      color="yellow"
+      aria-label={item.favourite ? 'Remove favourite' : 'Mark favourite'}
+      aria-pressed={item.favourite}
+      loading={mark.isPending}
+      onClick={() => mark.mutate({ favourite: !item.favourite })}
+    >
+      {item.favourite ? <IconStarFilled /> : <IconStar />}
+    </ActionIcon>
+  );
+}
+
 interface Props {
   item: ShowcaseItemDto;
   selected: boolean;
   onSelect: (on: boolean) => void;
+  /** Favourites and captions (showcase.manage); everyone who opens the library may export. */
+  canManage: boolean;
 }
 
 /** One consented pair: both shots, caption, consent scope and date, favourite, export. */
-export function ShowcaseCard({ item, selected, onSelect }: Props) {
+export function ShowcaseCard({ item, selected, onSelect, canManage }: Props) {
   const [editing, { open, close }] = useDisclosure(false);
-  const mark = useUpdateShowcaseItem(item.pairId);
   const area = MEDIA_AREA_LABELS[item.area];
   return (
     <Paper withBorder radius="md" p="sm" data-testid="showcase-item" aria-label={`${area} pair ${item.pairId}`}>
@@ -49,17 +63,7 @@ export function ShowcaseCard({ item, selected, onSelect }: Props) {
       <Stack gap={8} mt="sm">
         <Group justify="space-between" wrap="nowrap" align="flex-start">
           <Text size="md">{item.caption}</Text>
-          <ActionIcon
-            size={48}
-            variant={item.favourite ? 'filled' : 'light'}
-            color="yellow"
-            aria-label={item.favourite ? 'Remove favourite' : 'Mark favourite'}
-            aria-pressed={item.favourite}
-            loading={mark.isPending}
-            onClick={() => mark.mutate({ favourite: !item.favourite })}
-          >
-            {item.favourite ? <IconStarFilled /> : <IconStar />}
-          </ActionIcon>
+          <Favourite item={item} canManage={canManage} />
         </Group>
         <Group gap={6}>
           <Badge variant="light" size="lg">
@@ -69,62 +73,9 @@ export function ShowcaseCard({ item, selected, onSelect }: Props) {
             Consent {day(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
           </Text>
         </Group>
-        <ExportControls pairId={item.pairId} selected={selected} onSelect={onSelect} onCaption={open} />
+        <ExportControls pairId={item.pairId} selected={selected} onSelect={onSelect} onCaption={canManage ? open : null} />
       </Stack>
       {editing && <CaptionEditor item={item} opened={editing} onClose={close} />}
     </Paper>
-  );
-}
-
-/** Format and size, one-tap export, caption and zip selection. */
-function ExportControls({
-  pairId,
-  selected,
-  onSelect,
-  onCaption,
-}: {
-  pairId: number;
-  selected: boolean;
-  onSelect: (on: boolean) => void;
-  onCaption: () => void;
-}) {
-  const [variant, setVariant] = useState<ShowcaseVariant>('pair');
-  const [size, setSize] = useState<ShowcaseSize>('square');
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const exportNow = async () => {
-    setBusy(true);
-    setError(null);
-    try {
-      await downloadExport(pairId, { variant, size });
-    } catch (e) {
-      setError(e instanceof ApiError ? e.message : 'The export failed.');
-    } finally {
-      setBusy(false);
-    }
-  };
-  return (
-    <>
-      <Stack gap={6}>
-        <Select size="md" label="What" data={VARIANT_OPTIONS} value={variant} onChange={(v) => v && setVariant(v)} allowDeselect={false} />
-        <Select size="md" label="Size" data={SIZE_OPTIONS} value={size} onChange={(v) => v && setSize(v)} allowDeselect={false} />
-      </Stack>
-      {error && (
-        <Text c="red" size="sm" role="alert">
-          {error}
-        </Text>
-      )}
-      <Group justify="space-between">
-        <Checkbox size="md" label="Select for zip" checked={selected} onChange={(e) => onSelect(e.currentTarget.checked)} />
-        <Group gap="xs">
-          <Button size="md" variant="light" leftSection={<IconEdit size={20} />} onClick={onCaption}>
-            Caption
-          </Button>
-          <Button size="md" leftSection={<IconDownload size={20} />} loading={busy} onClick={() => void exportNow()}>
-            Export
-          </Button>
-        </Group>
-      </Group>
-    </>
   );
 }

@@ -1,0 +1,1 @@
+ALTER TABLE `shops` ADD `showcase_desk_access` integer DEFAULT false NOT NULL;
