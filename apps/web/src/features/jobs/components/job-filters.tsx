@@ -1,6 +1,5 @@
 import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from '@benchproof/domain';
-import { Button, Chip, Group, Select, SimpleGrid, Stack, Switch, TextInput, useMatches } from '@mantine/core';
-import { DatePickerInput } from '@mantine/dates';
+import { Button, Chip, Group, NativeSelect, SimpleGrid, Stack, Switch, TextInput, useMatches } from '@mantine/core';
 import { useDebouncedCallback } from '@mantine/hooks';
 import { IconSearch, IconX } from '@tabler/icons-react';
 import { useEffect, useState } from 'react';
@@ -56,9 +55,33 @@ function StatusChips({ value, onChange }: { value: JobStatus[]; onChange: (v: Jo
   );
 }
 
+/**
+ * The promised-date range as two native date boxes: the phone's own date picker (big targets, no typing),
+ * and no calendar library on the jobs list's first screen.
+ */
+function PromisedRange({ from, to, update }: { from: string; to: string; update: Props['update'] }) {
+  const box = (label: string, value: string, key: 'promisedAfter' | 'promisedBefore', bounds: { min?: string; max?: string }) => (
+    <TextInput
+      type="date"
+      aria-label={`Promised ${label.toLowerCase()}`}
+      leftSection={label}
+      leftSectionWidth={56}
+      value={value}
+      {...bounds}
+      onChange={(e) => update({ [key]: e.currentTarget.value || null })}
+      size="md"
+    />
+  );
+  return (
+    <Group gap="xs" grow wrap="nowrap">
+      {box('From', from, 'promisedAfter', { max: to || undefined })}
+      {box('To', to, 'promisedBefore', { min: from || undefined })}
+    </Group>
+  );
+}
+
 /** Status chips, mechanic, promised range and free text for the jobs table. */
 export function JobFilters({ params, includeClosed, update, mechanics }: Props) {
-  const range: [string | null, string | null] = [params.promisedAfter ?? null, params.promisedBefore ?? null];
   const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed);
   const byStatus = Boolean(params.status?.length);
   return (
@@ -74,23 +97,14 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
       />
       <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="sm">
         <SearchBox initial={params.q ?? ''} onSearch={(q) => update({ q })} />
-        <Select
+        <NativeSelect
           aria-label="Mechanic"
-          placeholder="Any mechanic"
-          data={mechanics}
-          value={params.mechanicId ? String(params.mechanicId) : null}
-          onChange={(v) => update({ mechanicId: v })}
-          clearable
-        />
-        <DatePickerInput
-          type="range"
-          aria-label="Promised between"
-          placeholder="Promised between…"
-          value={range}
-          onChange={([from, to]) => update({ promisedAfter: from, promisedBefore: to })}
-          clearable
+          data={[{ value: '', label: 'Any mechanic' }, ...mechanics]}
+          value={params.mechanicId ? String(params.mechanicId) : ''}
+          onChange={(e) => update({ mechanicId: e.currentTarget.value || null })}
           size="md"
         />
+        <PromisedRange from={params.promisedAfter ?? ''} to={params.promisedBefore ?? ''} update={update} />
       </SimpleGrid>
       {active && (
         <Group>
