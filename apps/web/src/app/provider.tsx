@@ -1,7 +1,5 @@
+// Core styles for every screen; the dates, charts, dropzone and notifications styles load with the code that uses them.
 import '@mantine/core/styles.css';
-import '@mantine/dropzone/styles.css';
-import '@mantine/charts/styles.css';
-import '@mantine/dates/styles.css';
 import './fonts.css';
 import { MantineProvider } from '@mantine/core';
 import { QueryClientProvider } from '@tanstack/react-query';

@@ -1,3 +1,4 @@
+import '@mantine/dates/styles.css';
 import { TorqueEntryRequestSchema } from '@benchproof/contracts';
 import {
   CARBON_CAUTION,
