@@ -1,6 +1,7 @@
 import type { ComponentType } from 'react';
 import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
 import { requireAction, requireSession } from './guards';
+import { warmJobsList } from './routes/jobs/jobs.loader';
 import { NotFoundRoute } from './routes/errors/not-found.route';
 import { RouteError } from './routes/errors/route-error';
 
@@ -21,6 +22,7 @@ const signedIn: RouteObject[] = [
   { index: true, element: <Navigate to="/jobs" replace /> },
   {
     path: 'jobs',
+    loader: warmJobsList,
     lazy: page(
       () => import('./shell/signed-in-area'),
       (m) => m.JobsRoute,

@@ -6,7 +6,7 @@ import { Link, useNavigate } from 'react-router';
 import { Pager } from '../../../components/pager';
 import { QueryState } from '../../../components/query-state';
 import { useJobs } from '../api/jobs';
-import { useJobListParams } from '../hooks/use-job-list-params';
+import { JOBS_PAGE_SIZE, useJobListParams } from '../hooks/use-job-list-params';
 import { JobCards } from './job-cards';
 import { jobBikeLabel } from './job-label';
 import { JobFilters, type Option } from './job-filters';
@@ -104,7 +104,7 @@ function DesktopTable({ jobs, sort, onSort }: { jobs: JobDto[]; sort: Sort; onSo
 }
 
 /** The jobs table: filters in the address bar, paging and sort on the server, cards on phones. */
-export function JobsTable({ mechanics, pageSize = 20 }: { mechanics: Option[]; pageSize?: number }) {
+export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE }: { mechanics: Option[]; pageSize?: number }) {
   const { params, includeClosed, update } = useJobListParams(pageSize);
   const jobs = useJobs(params);
   const data = jobs.data;
