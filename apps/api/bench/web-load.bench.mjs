@@ -1,15 +1,23 @@
-// The web app as a phone on a slow 4G link sees it: a cold jobs page in Chromium with CDP
-// throttling (1.6 Mbps down, 150 ms RTT), and the JavaScript bytes sent for a first visit.
-import { mkdtempSync, rmSync } from 'node:fs';
+// The web app as a phone on a slow 4G link sees it: a cold jobs page in Chromium with CDP throttling
+// (1.6 Mbps down, 150 ms RTT), and the JavaScript a first visit needs before its first screen can be used.
+//
+// First-load JS = every script the page requested before its first screen showed (the sign-in form's
+// password box; the jobs table's first row), whatever the loader: entry, modulepreload, route chunks.
+// Its size is counted as gzip, the way the server's precompressed .gz copies send it; that is
+// deterministic, unlike the seconds, which depend on how busy the machine is.
+import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
 import { signIn, startDemoApi } from './bench-lib.mjs';
 import { emitRow, median } from './table.mjs';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '../../..');
+const WEB_DIST = join(root, 'dist/apps/web');
 const SLOW_4G = { offline: false, latency: 150, downloadThroughput: (1.6 * 1e6) / 8, uploadThroughput: (0.75 * 1e6) / 8 };
+const FIRST_LOAD_TARGET_KB = 150;
 const FLAGS = [
   '--no-sandbox',
   '--disable-gpu',
@@ -20,7 +28,17 @@ const FLAGS = [
   '--disable-sync',
 ];
 
-/** Loads `path` in a fresh browser profile; returns ms until `selector` shows and the JS bytes on the wire. */
+/** Bytes a gzip-only client receives for a built asset: its precompressed .gz copy, or zlib level 9 for files too small to have one. */
+function gzipBytes(urlPath) {
+  const file = join(WEB_DIST, decodeURIComponent(urlPath));
+  if (existsSync(`${file}.gz`)) return statSync(`${file}.gz`).size;
+  return gzipSync(readFileSync(file), { level: 9 }).length;
+}
+
+/**
+ * Loads `path` in a fresh browser profile. Returns ms until `selector` shows, the scripts requested
+ * before that moment, and the JS bytes on the wire (Chromium asks for brotli) until the network is idle.
+ */
 async function coldLoad(base, path, selector, cookie) {
   const profile = mkdtempSync(join(tmpdir(), 'benchproof-chrome-'));
   const ctx = await chromium.launchPersistentContext(profile, {
@@ -35,31 +53,58 @@ async function coldLoad(base, path, selector, cookie) {
     const cdp = await ctx.newCDPSession(page);
     await cdp.send('Network.enable');
     await cdp.send('Network.emulateNetworkConditions', SLOW_4G);
-    const js = new Map();
-    cdp.on('Network.responseReceived', (e) => e.type === 'Script' && js.set(e.requestId, 0));
-    cdp.on('Network.loadingFinished', (e) => js.has(e.requestId) && js.set(e.requestId, e.encodedDataLength));
+    const requested = [];
+    const wire = new Map();
+    // By file name, not resource type: Chromium may type a <link rel=modulepreload> fetch as Other.
+    const isJs = (url) => new URL(url).pathname.endsWith('.js');
+    cdp.on('Network.requestWillBeSent', (e) => isJs(e.request.url) && requested.push(new URL(e.request.url).pathname));
+    cdp.on('Network.responseReceived', (e) => isJs(e.response.url) && wire.set(e.requestId, 0));
+    cdp.on('Network.loadingFinished', (e) => wire.has(e.requestId) && wire.set(e.requestId, e.encodedDataLength));
     const t0 = performance.now();
     await page.goto(`${base}${path}`);
     await page.locator(selector).first().waitFor({ state: 'visible', timeout: 60_000 });
     const ms = performance.now() - t0;
+    const firstScreen = [...new Set(requested)];
     await page.waitForLoadState('networkidle');
-    return { ms, jsBytes: [...js.values()].reduce((a, b) => a + b, 0) };
+    return { ms, firstScreen, wireBytes: [...wire.values()].reduce((a, b) => a + b, 0) };
   } finally {
     await ctx.close();
     rmSync(profile, { recursive: true, force: true });
   }
 }
 
+const kb = (b) => b / 1024;
+
+/** Prints the first screen's scripts, largest first, and returns the gzip total in KB. */
+function firstLoadKb(label, scripts) {
+  const files = scripts.map((p) => ({ p, gz: gzipBytes(p) })).sort((a, b) => b.gz - a.gz);
+  const total = kb(files.reduce((a, f) => a + f.gz, 0));
+  console.log(`first-load JS, ${label}: ${files.length} files, ${total.toFixed(1)} KB gzip`);
+  for (const f of files) console.log(`  ${kb(f.gz).toFixed(1).padStart(6)} KB  ${f.p}`);
+  return { total, count: files.length };
+}
+
+function firstLoadRow(label, { total, count }, wireBytes) {
+  return {
+    benchmark: `first-load JS (gzip), ${label}`,
+    baseline: '—',
+    product: `${total.toFixed(1)} KB in ${count} files (${kb(wireBytes).toFixed(0)} KB brotli on the wire by network idle)`,
+    ratio: '—',
+    target: `≤ ${FIRST_LOAD_TARGET_KB} KB`,
+    met: total <= FIRST_LOAD_TARGET_KB,
+  };
+}
+
 async function main() {
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-web-'));
-  const api = await startDemoApi(root, dir, { WEB_DIST: join(root, 'dist/apps/web') });
+  const api = await startDemoApi(root, dir, { WEB_DIST });
   try {
     const signInPage = await coldLoad(api.base, '/sign-in', 'input[type=password]');
     const { cookie } = await signIn(api.base);
     const runs = [];
     for (let i = 0; i < 3; i++) runs.push(await coldLoad(api.base, '/jobs', 'table tbody tr', cookie));
     const ms = median(runs.map((r) => r.ms));
-    const kb = (b) => b / 1024;
+    const jobsRun = runs.find((r) => r.ms === ms);
     emitRow({
       benchmark: 'cold jobs page, slow 4G (1.6 Mbps, 150 ms RTT): table visible',
       baseline: '—',
@@ -68,22 +113,8 @@ async function main() {
       target: '≤ 2500 ms',
       met: ms <= 2500,
     });
-    emitRow({
-      benchmark: 'first-load JS on the wire, sign-in page',
-      baseline: '—',
-      product: `${kb(signInPage.jsBytes).toFixed(0)} KB`,
-      ratio: '—',
-      target: '≤ 150 KB',
-      met: kb(signInPage.jsBytes) <= 150,
-    });
-    emitRow({
-      benchmark: 'first-load JS on the wire, cold jobs page',
-      baseline: '—',
-      product: `${kb(runs[0].jsBytes).toFixed(0)} KB`,
-      ratio: '—',
-      target: '≤ 150 KB',
-      met: kb(runs[0].jsBytes) <= 150,
-    });
+    emitRow(firstLoadRow('sign-in page', firstLoadKb('sign-in page', signInPage.firstScreen), signInPage.wireBytes));
+    emitRow(firstLoadRow('cold jobs page', firstLoadKb('cold jobs page', jobsRun.firstScreen), jobsRun.wireBytes));
   } finally {
     await api.stop();
     rmSync(dir, { recursive: true, force: true });

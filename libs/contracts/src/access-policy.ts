@@ -1,4 +1,4 @@
-import { ROLES, type Role } from './auth';
+import { ROLES, type Role } from './roles';
 
 /**
  * The one access policy: what each staff role may do, and what an owner-link

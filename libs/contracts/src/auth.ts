@@ -1,16 +1,8 @@
 import { z } from 'zod';
 import { EmailSchema, IdSchema, requiredText } from './common';
+import { ROLES } from './roles';
 
-/** Staff roles (DESIGN.md). The bike owner is not a user. */
-export const ROLES = ['manager', 'desk', 'mechanic'] as const;
 export const RoleSchema = z.enum(ROLES);
-export type Role = z.infer<typeof RoleSchema>;
-
-export const ROLE_LABELS: Readonly<Record<Role, string>> = {
-  manager: 'Manager',
-  desk: 'Front desk',
-  mechanic: 'Mechanic',
-};
 
 export const LoginRequestSchema = z.object({
   email: EmailSchema,

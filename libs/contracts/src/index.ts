@@ -1,6 +1,7 @@
 export * from './errors';
 export * from './audit';
 export * from './auth';
+export * from './roles';
 export * from './access-policy';
 export * from './users';
 export * from './shops';
@@ -11,6 +12,7 @@ export * from './customers-api';
 export * from './bikes';
 export * from './bikes-api';
 export * from './jobs';
+export * from './jobs-sort';
 export * from './jobs-api';
 export * from './bike-history';
 export * from './inspection';

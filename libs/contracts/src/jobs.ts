@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { NewBikeInputSchema } from './bikes';
 import { IdParamSchema, IdSchema, IsoDateSchema, IsoDateTimeSchema, optionalText, pagingQuerySchema, queryList, requiredText } from './common';
 import { CustomerInputSchema } from './customers';
+import { JOB_SORT_FIELDS } from './jobs-sort';
 
 export const JobStatusSchema = z.enum(JOB_STATUSES);
 
@@ -58,7 +59,6 @@ export const JobDtoSchema = z.object({
 });
 export type JobDto = z.infer<typeof JobDtoSchema>;
 
-export const JOB_SORT_FIELDS = ['promisedOn', 'createdAt', 'number', 'status'] as const;
 export const JobListQuerySchema = pagingQuerySchema(JOB_SORT_FIELDS).extend({
   status: queryList(JobStatusSchema).optional(),
   mechanicId: IdParamSchema.optional(),

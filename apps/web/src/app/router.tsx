@@ -1,23 +1,30 @@
 import type { ComponentType } from 'react';
 import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
 import { requireAction, requireSession, requireShowcase } from './guards';
-import { SignInRoute } from './routes/auth/sign-in.route';
+import { warmJobsList } from './routes/jobs/jobs.loader';
 import { NotFoundRoute } from './routes/errors/not-found.route';
 import { RouteError } from './routes/errors/route-error';
-import { AppLayout } from './shell/app-layout';
 
 /** Loads a page's code when it is first visited, so a phone downloads only what it opens. */
 const page =
   <M,>(load: () => Promise<M>, pick: (m: M) => ComponentType) =>
   async () => ({ Component: pick(await load()) });
 
-/** Pages inside the signed-in frame. Features meet here; add new pages to this list. */
+type Pages = (typeof import('./shell/signed-in-area'))['pages'];
+/** A signed-in page, loaded through the signed-in area's chunk (see shell/signed-in-area.ts for why). */
+const inFrame =
+  <M,>(choose: (pages: Pages) => () => Promise<M>) =>
+  async () =>
+    choose((await import('./shell/signed-in-area')).pages)();
+
+/** Pages inside the signed-in frame. Features meet here; add new pages to this list (their import goes in shell/signed-in-area.ts). */
 const signedIn: RouteObject[] = [
   { index: true, element: <Navigate to="/jobs" replace /> },
   {
     path: 'jobs',
+    loader: warmJobsList,
     lazy: page(
-      () => import('./routes/jobs/jobs.route'),
+      () => import('./shell/signed-in-area'),
       (m) => m.JobsRoute,
     ),
   },
@@ -25,56 +32,56 @@ const signedIn: RouteObject[] = [
     path: 'jobs/new',
     loader: requireAction('jobs.book_in'),
     lazy: page(
-      () => import('./routes/jobs/book-in.route'),
+      inFrame((p) => p.bookIn),
       (m) => m.BookInRoute,
     ),
   },
   {
     path: 'jobs/:jobId',
     lazy: page(
-      () => import('./routes/jobs/job.route'),
+      inFrame((p) => p.job),
       (m) => m.JobRoute,
     ),
   },
   {
     path: 'jobs/:jobId/capture',
     lazy: page(
-      () => import('./routes/jobs/capture.route'),
+      inFrame((p) => p.capture),
       (m) => m.CaptureRoute,
     ),
   },
   {
     path: 'jobs/:jobId/media/:mediaId/annotate',
     lazy: page(
-      () => import('./routes/jobs/annotate.route'),
+      inFrame((p) => p.annotate),
       (m) => m.AnnotateRoute,
     ),
   },
   {
     path: 'jobs/:jobId/scope',
     lazy: page(
-      () => import('./routes/jobs/scope.route'),
+      inFrame((p) => p.scope),
       (m) => m.ScopeRoute,
     ),
   },
   {
     path: 'customers',
     lazy: page(
-      () => import('./routes/customers/customers.route'),
+      inFrame((p) => p.customers),
       (m) => m.CustomersRoute,
     ),
   },
   {
     path: 'customers/:customerId',
     lazy: page(
-      () => import('./routes/customers/customer.route'),
+      inFrame((p) => p.customer),
       (m) => m.CustomerRoute,
     ),
   },
   {
     path: 'bikes/:bikeId',
     lazy: page(
-      () => import('./routes/bikes/bike.route'),
+      inFrame((p) => p.bike),
       (m) => m.BikeRoute,
     ),
   },
@@ -82,7 +89,7 @@ const signedIn: RouteObject[] = [
     path: 'showcase',
     loader: requireShowcase,
     lazy: page(
-      () => import('./routes/showcase/showcase.route'),
+      inFrame((p) => p.showcase),
       (m) => m.ShowcaseRoute,
     ),
   },
@@ -90,7 +97,7 @@ const signedIn: RouteObject[] = [
     path: 'settings/users',
     loader: requireAction('users.manage'),
     lazy: page(
-      () => import('./routes/settings/users.route'),
+      inFrame((p) => p.users),
       (m) => m.UsersRoute,
     ),
   },
@@ -98,14 +105,14 @@ const signedIn: RouteObject[] = [
     path: 'settings/shop',
     loader: requireAction('shop.edit'),
     lazy: page(
-      () => import('./routes/settings/shop.route'),
+      inFrame((p) => p.shopSettings),
       (m) => m.ShopSettingsRoute,
     ),
   },
   {
     path: 'account/password',
     lazy: page(
-      () => import('./routes/account/password.route'),
+      inFrame((p) => p.password),
       (m) => m.PasswordRoute,
     ),
   },
@@ -113,7 +120,14 @@ const signedIn: RouteObject[] = [
 ];
 
 export const routes: RouteObject[] = [
-  { path: '/sign-in', element: <SignInRoute />, errorElement: <RouteError /> },
+  {
+    path: '/sign-in',
+    lazy: page(
+      () => import('./routes/auth/sign-in.route'),
+      (m) => m.SignInRoute,
+    ),
+    errorElement: <RouteError />,
+  },
   {
     path: '/o/:token',
     lazy: page(
@@ -134,7 +148,11 @@ export const routes: RouteObject[] = [
   {
     path: '/',
     loader: requireSession,
-    element: <AppLayout />,
+    // The frame loads with the first signed-in page, never on the sign-in page.
+    lazy: page(
+      () => import('./shell/signed-in-area'),
+      (m) => m.AppLayout,
+    ),
     errorElement: <RouteError />,
     children: signedIn.map((r) => ({ ...r, errorElement: <RouteError /> })),
   },

@@ -1,6 +1,7 @@
 import type { Action } from '@benchproof/contracts';
-import { NavLink, Stack } from '@mantine/core';
-import { NavLink as RouterNavLink } from 'react-router';
+import { Stack } from '@mantine/core';
+import { NavLink } from 'react-router';
+import classes from './navigation.module.css';
 import { NAV_ITEMS } from './nav-items';
 
 /** The section links the caller's role may open (ACCESS_POLICY through `can`). */
@@ -8,15 +9,10 @@ export function Navigation({ can, onNavigate }: { can: (action: Action) => boole
   return (
     <Stack gap={4}>
       {NAV_ITEMS.filter((i) => !i.action || can(i.action)).map((item) => (
-        <NavLink
-          key={item.to}
-          component={RouterNavLink}
-          to={item.to}
-          label={item.label}
-          leftSection={<item.icon size={22} stroke={1.7} />}
-          onClick={onNavigate}
-          styles={{ root: { minHeight: 48, borderRadius: 8 }, label: { fontSize: 16 } }}
-        />
+        <NavLink key={item.to} to={item.to} className={classes.link} onClick={onNavigate}>
+          <item.icon size={22} stroke={1.7} aria-hidden />
+          {item.label}
+        </NavLink>
       ))}
     </Stack>
   );

@@ -8,3 +8,4 @@ export type { Option } from './components/job-filters';
 export { JobStatusBadge } from './components/job-status-badge';
 export { JobsTable } from './components/jobs-table';
 export { PromisedDate } from './components/promised-date';
+export { JOBS_PAGE_SIZE, jobListParams } from './hooks/use-job-list-params';

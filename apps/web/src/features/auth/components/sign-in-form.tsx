@@ -1,17 +1,33 @@
-import { LoginRequestSchema } from '@benchproof/contracts';
+import type { LoginRequest } from '@benchproof/contracts';
 import { Alert, Button, PasswordInput, Stack, TextInput } from '@mantine/core';
-import { schemaResolver, useForm } from '@mantine/form';
+import { useForm } from '@mantine/form';
 import { IconAlertTriangle, IconLogin } from '@tabler/icons-react';
+import type { FormEvent } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useLogin } from '../api/session';
 
+let check: Promise<((values: LoginRequest) => Record<string, string>) | null> | null = null;
+/** Starts fetching the contract check once; resolves to null offline (the api validates with the same schema). */
+const loadCheck = () =>
+  (check ??= import('../api/login-check').then(
+    (m) => m.checkLogin,
+    () => ((check = null), null),
+  ));
+
 export function SignInForm({ onSignedIn, notice }: { onSignedIn: () => void; notice?: string | null }) {
   const login = useLogin();
-  const form = useForm({ initialValues: { email: '', password: '' }, validate: schemaResolver(LoginRequestSchema, { sync: true }) });
+  const form = useForm<LoginRequest>({ initialValues: { email: '', password: '' } });
   const error = login.error instanceof ApiError ? login.error.message : login.error ? 'Sign-in failed.' : null;
+  const submit = async (e: FormEvent) => {
+    e.preventDefault();
+    const values = form.getValues();
+    const errors = (await loadCheck())?.(values) ?? {};
+    form.setErrors(errors);
+    if (Object.keys(errors).length === 0) login.mutate(values, { onSuccess: onSignedIn });
+  };
 
   return (
-    <form onSubmit={form.onSubmit((values) => login.mutate(values, { onSuccess: onSignedIn }))} noValidate>
+    <form onSubmit={(e) => void submit(e)} onFocus={() => void loadCheck()} noValidate>
       <Stack>
         {notice && !error && (
           <Alert color="brass" variant="light" icon={<IconAlertTriangle />}>

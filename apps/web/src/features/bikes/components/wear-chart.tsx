@@ -1,3 +1,4 @@
+import '@mantine/charts/styles.css';
 import type { WearSeries } from '@benchproof/contracts';
 import { LineChart } from '@mantine/charts';
 import { Paper, Stack, Text, Title } from '@mantine/core';

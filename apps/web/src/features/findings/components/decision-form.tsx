@@ -1,3 +1,4 @@
+import '@mantine/dates/styles.css';
 import { RecordDecisionRequestSchema, type RecordDecisionRequest } from '@benchproof/contracts';
 import { Alert, Button, SegmentedControl, Stack, Text, Textarea, TextInput } from '@mantine/core';
 import { DateTimePicker } from '@mantine/dates';

@@ -21,10 +21,11 @@ export const jobKeys = {
   events: (id: number) => ['jobs', 'detail', id, 'events'] as const,
 };
 
-export const jobsQuery = (params: JobListParams) =>
+/** `quietAuth` for a warm-up before the session is known: a 401 then must not count as a lost session. */
+export const jobsQuery = (params: JobListParams, { quietAuth = false } = {}) =>
   queryOptions({
     queryKey: jobKeys.list(params),
-    queryFn: () => api<JobPage>('/jobs', { query: { ...params, status: params.status?.join(',') } }),
+    queryFn: () => api<JobPage>('/jobs', { query: { ...params, status: params.status?.join(',') }, quietAuth }),
     placeholderData: keepPreviousData,
   });
 

@@ -1,3 +1,4 @@
+import '@mantine/dates/styles.css';
 import type { JobDetail } from '@benchproof/contracts';
 import { Alert, Button, Paper, SegmentedControl, Select, SimpleGrid, Stack, Text, Textarea, Title } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';

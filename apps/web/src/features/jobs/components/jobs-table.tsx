@@ -1,11 +1,12 @@
 import type { JobDto, JobListQuery } from '@benchproof/contracts';
-import { Box, Group, Pagination, Select, Table, Text, UnstyledButton } from '@mantine/core';
+import { Box, Group, NativeSelect, Text, UnstyledButton } from '@mantine/core';
 import { IconArrowDown, IconArrowUp, IconSelector } from '@tabler/icons-react';
 import type { ReactNode } from 'react';
 import { Link, useNavigate } from 'react-router';
+import { Pager } from '../../../components/pager';
 import { QueryState } from '../../../components/query-state';
 import { useJobs } from '../api/jobs';
-import { useJobListParams } from '../hooks/use-job-list-params';
+import { JOBS_PAGE_SIZE, useJobListParams } from '../hooks/use-job-list-params';
 import { JobCards } from './job-cards';
 import { jobBikeLabel } from './job-label';
 import { JobFilters, type Option } from './job-filters';
@@ -33,76 +34,77 @@ function SortHeader({ field, sort, onSort, children }: { field: SortField; sort:
   const dir = sort.field === field ? sort.order : null;
   const Icon = dir === 'asc' ? IconArrowUp : dir === 'desc' ? IconArrowDown : IconSelector;
   return (
-    <Table.Th aria-sort={dir === 'asc' ? 'ascending' : dir === 'desc' ? 'descending' : 'none'}>
+    <th aria-sort={dir === 'asc' ? 'ascending' : dir === 'desc' ? 'descending' : 'none'}>
       <UnstyledButton className={classes.sortButton} onClick={() => onSort({ field, order: dir === 'asc' ? 'desc' : 'asc' })}>
         {children}
         <Icon size={16} aria-hidden />
       </UnstyledButton>
-    </Table.Th>
+    </th>
   );
 }
 
 function JobRow({ job }: { job: JobDto }) {
   const navigate = useNavigate();
   return (
-    <Table.Tr className={job.overdue ? classes.overdueRow : undefined} onClick={() => void navigate(`/jobs/${job.id}`)} style={{ cursor: 'pointer' }}>
-      <Table.Td>
+    <tr className={job.overdue ? classes.overdueRow : undefined} onClick={() => void navigate(`/jobs/${job.id}`)} style={{ cursor: 'pointer' }}>
+      <td>
         <Link className={classes.rowLink} to={`/jobs/${job.id}`} onClick={(e) => e.stopPropagation()}>
           {job.number}
         </Link>
-      </Table.Td>
-      <Table.Td>
+      </td>
+      <td>
         <JobStatusBadge status={job.status} />
-      </Table.Td>
-      <Table.Td>
+      </td>
+      <td>
         <Text fw={600} size="sm">
           {jobBikeLabel(job)}
         </Text>
         <Text size="sm" c="dimmed">
           {job.customer.name}
         </Text>
-      </Table.Td>
-      <Table.Td>
+      </td>
+      <td>
         <Text size="sm">{job.mechanic?.name ?? '—'}</Text>
-      </Table.Td>
-      <Table.Td>
+      </td>
+      <td>
         <PromisedDate promisedOn={job.promisedOn} overdue={job.overdue} />
-      </Table.Td>
-    </Table.Tr>
+      </td>
+    </tr>
   );
 }
 
 function DesktopTable({ jobs, sort, onSort }: { jobs: JobDto[]; sort: Sort; onSort: (s: Sort) => void }) {
   return (
-    <Table.ScrollContainer minWidth={720}>
-      <Table verticalSpacing="sm" highlightOnHover>
-        <Table.Thead>
-          <Table.Tr>
+    // Plain table markup styled like Mantine's Table (jobs.module.css): Mantine's Table always brings its ScrollArea.
+    <div className={classes.tableScroll}>
+      <table className={classes.table}>
+        <thead>
+          <tr>
             <SortHeader field="number" sort={sort} onSort={onSort}>
               Job
             </SortHeader>
             <SortHeader field="status" sort={sort} onSort={onSort}>
               Status
             </SortHeader>
-            <Table.Th>Bike and owner</Table.Th>
-            <Table.Th>Mechanic</Table.Th>
+            <th>Bike and owner</th>
+            <th>Mechanic</th>
             <SortHeader field="promisedOn" sort={sort} onSort={onSort}>
               Promised
             </SortHeader>
-          </Table.Tr>
-        </Table.Thead>
-        <Table.Tbody>
+          </tr>
+        </thead>
+        <tbody>
           {jobs.map((j) => (
             <JobRow key={j.id} job={j} />
           ))}
-        </Table.Tbody>
-      </Table>
-    </Table.ScrollContainer>
+        </tbody>
+      </table>
+    </div>
   );
 }
 
 /** The jobs table: filters in the address bar, paging and sort on the server, cards on phones. */
-export function JobsTable({ mechanics, pageSize = 20 }: { mechanics: Option[]; pageSize?: number }) {
+export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE }: { mechanics: Option[]; pageSize?: number }) {
   const { params, includeClosed, update } = useJobListParams(pageSize);
   const jobs = useJobs(params);
   const data = jobs.data;
@@ -124,13 +126,15 @@ export function JobsTable({ mechanics, pageSize = 20 }: { mechanics: Option[]; p
             <Text size="sm" c="dimmed">
               {data.total} job{data.total === 1 ? '' : 's'}
             </Text>
-            <Select
+            <NativeSelect
               hiddenFrom="sm"
               aria-label="Sort"
               data={SORT_OPTIONS}
               value={`${sort.field}:${sort.order}`}
-              onChange={(v) => v && onSort({ field: v.split(':')[0] as SortField, order: v.split(':')[1] as Order })}
-              allowDeselect={false}
+              onChange={(e) => {
+                const [field, order] = e.currentTarget.value.split(':');
+                onSort({ field: field as SortField, order: order as Order });
+              }}
               w={210}
             />
           </Group>
@@ -141,9 +145,9 @@ export function JobsTable({ mechanics, pageSize = 20 }: { mechanics: Option[]; p
             <JobCards jobs={data.items} />
           </Box>
           {pages > 1 && (
-            <Group justify="center" mt="md">
-              <Pagination total={pages} value={params.page ?? 1} onChange={(p) => update({ page: String(p) })} size="lg" />
-            </Group>
+            <Box mt="md">
+              <Pager total={pages} value={params.page ?? 1} onChange={(p) => update({ page: String(p) })} />
+            </Box>
           )}
         </>
       )}

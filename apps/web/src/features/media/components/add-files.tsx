@@ -1,3 +1,4 @@
+import '@mantine/dropzone/styles.css';
 import { Box, Button, Group, Stack, Text } from '@mantine/core';
 import { Dropzone } from '@mantine/dropzone';
 import { IconCamera, IconUpload } from '@tabler/icons-react';

@@ -1,3 +1,4 @@
+import '@mantine/dates/styles.css';
 import { CARBON_CAUTION, isWrenchCalibrationOverdue, THREADLOCKERS, THREADLOCKER_LABELS, TORQUE_UNITS, TORQUE_UNIT_LABELS } from '@benchproof/domain';
 import { Alert, Button, Checkbox, NumberInput, SegmentedControl, Select, SimpleGrid, Stack, Switch, Text, TextInput } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
