@@ -52,7 +52,7 @@ async function login(base) {
     .map((c) => c.split(';')[0])
     .join('; ');
   const { csrfToken } = await res.json();
-  const jobs = await (await fetch(`${base}/api/jobs?pageSize=1`, { headers: { cookie } })).json();
+  const jobs = await (await fetch(`${base}/api/jobs?open=true&pageSize=1`, { headers: { cookie } })).json();
   return { cookie, csrf: csrfToken, jobId: (jobs.items ?? jobs)[0].id };
 }
 
@@ -130,7 +130,8 @@ async function main() {
   }
 }
 
+// exit at once: a failed run can leave a server or stream open that would hold the table forever
 main().catch((err) => {
   console.error(err);
-  process.exitCode = 1;
+  process.exit(1);
 });

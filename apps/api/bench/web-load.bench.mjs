@@ -121,7 +121,8 @@ async function main() {
   }
 }
 
+// exit at once: a failed run can leave a server or stream open that would hold the table forever
 main().catch((err) => {
   console.error(err);
-  process.exitCode = 1;
+  process.exit(1);
 });
