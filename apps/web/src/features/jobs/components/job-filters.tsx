@@ -88,13 +88,8 @@ function PromisedRange({ from, to, update }: { from: string; to: string; update:
   const box = (label: string, value: string, key: 'promisedAfter' | 'promisedBefore', bounds: { min?: string; max?: string }) => (
     <TextInput
       type="date"
-      aria-label={`Promised ${label.toLowerCase()}`}
-      leftSection={
-        <Text size="xs" c="dimmed">
-          {label}
-        </Text>
-      }
-      leftSectionWidth={44}
+      // A label above rather than inside the box: at 390 px an inner label leaves too little room for the date.
+      label={`Promised ${label.toLowerCase()}`}
       value={value}
       {...bounds}
       onChange={(e) => update({ [key]: e.currentTarget.value || null })}
@@ -102,7 +97,7 @@ function PromisedRange({ from, to, update }: { from: string; to: string; update:
     />
   );
   return (
-    <Group gap="xs" grow wrap="nowrap">
+    <Group gap="xs" grow wrap="nowrap" align="flex-end">
       {box('From', from, 'promisedAfter', { max: to || undefined })}
       {box('To', to, 'promisedBefore', { min: from || undefined })}
     </Group>
