@@ -2,6 +2,7 @@ import { Inject, Injectable, type OnApplicationBootstrap, type OnModuleInit } fr
 import type { MediaVariant } from '@benchproof/contracts';
 import { Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
+import { APP_CONFIG, type AppConfig } from '../config';
 import { DERIVATIVE_SIZES, IMAGE, type ImageAdapter, type Rendition, type SizedVariant } from '../infra/image';
 import { STORAGE, type Storage } from '../infra/storage';
 import { type DbTx, TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
@@ -11,8 +12,6 @@ import { MediaRepository, type MediaAssetRow } from './media.repository';
 const IMAGE_VARIANTS: SizedVariant[] = ['thumb', 'screen', 'print'];
 
 export const DERIVATIVES_TASK = 'media.derivatives';
-/** One image at a time: sharp/libvips already uses both cores of the target machine for one job. */
-const DERIVATIVES_CONCURRENCY = 1;
 const DERIVATIVES_MAX_ATTEMPTS = 3;
 
 /** One file per (asset, variant): a re-run after a crash overwrites instead of adding a file. */
@@ -30,10 +29,11 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(IMAGE) private readonly image: ImageAdapter,
     private readonly phash: MediaPhashService,
+    @Inject(APP_CONFIG) private readonly cfg: AppConfig,
   ) {}
 
   onModuleInit(): void {
-    this.tasks.register(DERIVATIVES_TASK, (t) => this.make(t), { concurrency: DERIVATIVES_CONCURRENCY, maxAttempts: DERIVATIVES_MAX_ATTEMPTS });
+    this.tasks.register(DERIVATIVES_TASK, (t) => this.make(t), { concurrency: this.cfg.DERIVATIVES_CONCURRENCY, maxAttempts: DERIVATIVES_MAX_ATTEMPTS });
   }
 
   /** Assets stored before the durable runner existed have no task row; give them one. */
