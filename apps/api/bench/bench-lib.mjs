@@ -102,6 +102,23 @@ export async function startDemoApi(root, dir, env = {}) {
   return { base, child, stop: () => new Promise((ok) => (child.exitCode !== null ? ok() : (child.once('exit', ok), child.kill()))) };
 }
 
+/**
+ * Waits until the API's background tasks (the demo seed's photo derivatives) have finished:
+ * nothing running and the done count unchanged for a second, so a load test measures its
+ * route rather than the route plus image work sharing the two cores.
+ */
+export async function waitForIdleTasks(base) {
+  let last = -1;
+  for (let i = 0; i < 240; i++) {
+    const { checks } = await (await fetch(`${base}/api/health/ready`)).json();
+    const { running, done } = checks.tasks.counts;
+    if (running === 0 && done === last) return;
+    last = done;
+    await new Promise((r) => setTimeout(r, 1000));
+  }
+  throw new Error('background tasks did not settle');
+}
+
 /** Signs in a demo user; returns the session cookie header and the CSRF token. */
 export async function signIn(base, email = 'desk@lantern-spoke.test') {
   const res = await fetch(`${base}/api/auth/login`, {

@@ -76,8 +76,7 @@ export class JobsService {
   list(actor: AuthUser, query: JobListQuery): JobPage {
     const today = this.today();
     const { rows, total } = this.repo.page(actor.shopId, { query, today });
-    const staff = new Map(this.users.list(actor).map((u) => [u.id, u.name]));
-    return { items: rows.map((r) => toJobListDto(r, staff, today)), total, page: query.page, pageSize: query.pageSize };
+    return { items: rows.map((r) => toJobListDto(r, today)), total, page: query.page, pageSize: query.pageSize };
   }
 
   /** Every visit of one bike, oldest first. */

@@ -26,23 +26,26 @@ export const STATUS_TIME_FIELD: Record<JobStatus, keyof JobRow> = {
 export const isOverdue = (job: Pick<JobRow, 'promisedOn' | 'status'>, today: string): boolean =>
   !!job.promisedOn && job.promisedOn < today && !DONE_STATUSES.includes(job.status);
 
-const person = (id: number | null, staff: Map<number, string>) => (id ? { id, name: staff.get(id) ?? '' } : null);
+const person = (id: number | null, name: string | null | undefined) => (id ? { id, name: name ?? '' } : null);
+const staffMember = (id: number | null, staff: Map<number, string>) => person(id, id ? staff.get(id) : undefined);
 
-/** A list row from the joined read model (owner and bike names come with the row). */
-export function toJobListDto(row: JobListRow, staff: Map<number, string>, today: string): JobDto {
+/** A list row from the joined read model (owner, bike and mechanic names come with the row). */
+export function toJobListDto(row: JobListRow, today: string): JobDto {
   return {
-    ...baseDto(row, staff, today),
+    ...baseDto(row, row.mechanicName, today),
     customer: { id: row.customerId, name: row.ownerName },
     bike: { id: row.bikeId, maker: row.bikeMaker, model: row.bikeModel, colour: row.bikeColour || null, serialNumber: row.bikeSerial || null },
   };
 }
 
-function baseDto(job: JobRow, staff: Map<number, string>, today: string): Omit<JobDto, 'customer' | 'bike'> {
+type ListedJob = Pick<JobRow, 'id' | 'number' | 'status' | 'mechanicId' | 'promisedOn' | 'reportedSymptoms' | 'createdAt'>;
+
+function baseDto(job: ListedJob, mechanicName: string | null | undefined, today: string): Omit<JobDto, 'customer' | 'bike'> {
   return {
     id: job.id,
     number: job.number,
     status: job.status,
-    mechanic: person(job.mechanicId, staff),
+    mechanic: person(job.mechanicId, mechanicName),
     promisedOn: job.promisedOn ?? '',
     reportedSymptoms: job.reportedSymptoms,
     createdAt: job.createdAt.toISOString(),
@@ -53,7 +56,7 @@ function baseDto(job: JobRow, staff: Map<number, string>, today: string): Omit<J
 export function toJobDto(job: JobRow, ctx: SummaryContext): JobDto {
   const bike = ctx.bikes.get(job.bikeId);
   return {
-    ...baseDto(job, ctx.staff, ctx.today),
+    ...baseDto(job, job.mechanicId ? ctx.staff.get(job.mechanicId) : null, ctx.today),
     customer: { id: job.customerId, name: ctx.owners.get(job.customerId)?.name ?? '' },
     bike: { id: job.bikeId, maker: bike?.maker ?? '', model: bike?.model ?? '', colour: bike?.colour ?? null, serialNumber: bike?.serialNumber ?? null },
   };
@@ -81,7 +84,7 @@ export function toDetail(job: JobRow, ctx: SummaryContext, extra: { finalCheck: 
     statusLabel: JOB_STATUS_LABELS[job.status],
     bikeDetail: bike,
     customerDetail: customer,
-    finalChecker: person(job.finalCheckerId, ctx.staff),
+    finalChecker: staffMember(job.finalCheckerId, ctx.staff),
     nextAction: nextAction(job.status),
     allowedTransitions: allowedTransitions(job.status).map((t) => ({ to: t.to, label: t.label, primary: t.primary })),
     statusTimes: times,

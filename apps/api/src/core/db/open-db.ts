@@ -16,6 +16,9 @@ export function openDb(path: string): { db: Db; sqlite: Database.Database } {
   sqlite.pragma('journal_mode = WAL');
   sqlite.pragma('foreign_keys = ON');
   sqlite.pragma('busy_timeout = 5000');
+  // Sorts and temporary b-trees in memory: the default temp file made every sorted list page
+  // open and write a file (about 150 µs of a 200 µs page at 10,000 jobs).
+  sqlite.pragma('temp_store = MEMORY');
   const db = drizzle(sqlite, { schema });
   migrate(db, { migrationsFolder: MIGRATIONS_DIR });
   // Gives the planner statistics (never gathered before), so lookups by id use the primary

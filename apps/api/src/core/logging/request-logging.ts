@@ -10,6 +10,12 @@ const SECRET_QUERY = /^(token|access_token|secret|password|code|sig|signature)$/
 const OPAQUE_SEGMENT = /^[A-Za-z0-9_-]{24,}$/;
 const REQUEST_ID = /^[A-Za-z0-9._-]{1,64}$/;
 
+/** The user, shop and route pattern of a finished request. */
+function whoAndWhere(req: IncomingMessage) {
+  const r = req as Req;
+  return { userId: r.user?.id ?? null, shopId: r.user?.shopId ?? null, route: r.route?.path ?? null };
+}
+
 /** The URL with secrets taken out: token-like query values and long opaque path segments. */
 export function redactUrl(url: string): string {
   const [path, query] = url.split('?', 2);
@@ -38,12 +44,10 @@ export function requestLogging(cfg: AppConfig): Params {
         res.setHeader('x-request-id', id);
         return id;
       },
-      // pino-http asks at the start too, before the session guard and the router have run: only the end counts.
-      customProps: (req: IncomingMessage, res: ServerResponse) => {
-        if (!res.headersSent) return {};
-        const r = req as Req;
-        return { userId: r.user?.id ?? null, shopId: r.user?.shopId ?? null, route: r.route?.path ?? null };
-      },
+      // Added to the finished line only: a customProps function would make pino-http build two
+      // more child loggers on every request, logged or not (a fifth of a jobs-list request's CPU).
+      customSuccessObject: (req: IncomingMessage, _res: ServerResponse, val: object) => ({ ...whoAndWhere(req), ...val }),
+      customErrorObject: (req: IncomingMessage, _res: ServerResponse, _err: Error, val: object) => ({ ...whoAndWhere(req), ...val }),
       customLogLevel: (_req: IncomingMessage, res: ServerResponse, err?: Error) =>
         err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       autoLogging: { ignore: (req: IncomingMessage) => req.url === '/api/health' || req.url === '/api/health/ready' },
