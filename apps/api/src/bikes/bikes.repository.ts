@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { BikeListQuery } from '@benchproof/contracts';
 import { and, asc, count, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
-import { DB, ftsPrefixQuery, type Db } from '../core/db';
+import { DB, ftsPrefixQuery, PreparedShapes, type Db } from '../core/db';
 import { bikes } from '../db/schema';
 
 export type BikeRow = typeof bikes.$inferSelect;
@@ -12,30 +12,52 @@ function order(query: BikeListQuery): SQL[] {
   return query.sort === 'maker' ? [dir(bikes.maker), dir(bikes.model)] : [dir(bikes.createdAt)];
 }
 
+function where(query: BikeListQuery, text: boolean): SQL | undefined {
+  return and(
+    eq(bikes.shopId, sql.placeholder('shopId')),
+    query.customerId ? eq(bikes.customerId, sql.placeholder('customerId')) : undefined,
+    text ? sql`${bikes.id} IN (SELECT rowid FROM bike_search WHERE bike_search MATCH ${sql.placeholder('text')})` : undefined,
+  );
+}
+
 /** Every query is scoped by shop: an id from another shop reads as missing. */
 @Injectable()
 export class BikesRepository {
+  /** Prepared once per shape (search, owner filter, sort, direction); a request only binds values. */
+  private readonly pages = new PreparedShapes<{ all(values: Record<string, unknown>): BikeRow[] }>();
+  private readonly totals = new PreparedShapes<{ get(values: Record<string, unknown>): { n: number } | undefined }>();
+
   constructor(@Inject(DB) private readonly db: Db) {}
 
   /** Maker, model, serial or the owner's name start with what was typed (bike_search FTS5 index). */
   page(shopId: number, query: BikeListQuery): { rows: BikeRow[]; total: number } {
     const text = query.q ? ftsPrefixQuery(query.q) : null;
     if (query.q && text === null) return { rows: [], total: 0 };
-    const where = and(
-      eq(bikes.shopId, shopId),
-      query.customerId ? eq(bikes.customerId, query.customerId) : undefined,
-      text === null ? undefined : sql`${bikes.id} IN (SELECT rowid FROM bike_search WHERE bike_search MATCH ${text})`,
-    );
-    const total = this.db.select({ n: count() }).from(bikes).where(where).get()?.n ?? 0;
-    const rows = this.db
+    const shape = [text !== null, !!query.customerId, query.sort, query.order].join('|');
+    const values = { shopId, text, customerId: query.customerId, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
+    const total =
+      this.totals
+        .get(shape, () =>
+          this.db
+            .select({ n: count() })
+            .from(bikes)
+            .where(where(query, text !== null))
+            .prepare(),
+        )
+        .get(values)?.n ?? 0;
+    if (total === 0) return { rows: [], total };
+    return { rows: this.pages.get(shape, () => this.buildPage(query, text !== null)).all(values), total };
+  }
+
+  private buildPage(query: BikeListQuery, text: boolean) {
+    return this.db
       .select()
       .from(bikes)
-      .where(where)
+      .where(where(query, text))
       .orderBy(...order(query), asc(bikes.id))
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize)
-      .all();
-    return { rows, total };
+      .limit(sql.placeholder('limit'))
+      .offset(sql.placeholder('offset'))
+      .prepare();
   }
 
   listByCustomer(shopId: number, customerId: number): BikeRow[] {

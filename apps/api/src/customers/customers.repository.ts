@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { CustomerListQuery } from '@benchproof/contracts';
 import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
-import { DB, ftsPrefixQuery, type Db } from '../core/db';
+import { DB, ftsPrefixQuery, PreparedShapes, type Db } from '../core/db';
 import { customers } from '../db/schema';
 
 export type CustomerRow = typeof customers.$inferSelect;
@@ -12,26 +12,48 @@ const SORT_COLUMN = { name: customers.name, createdAt: customers.createdAt } as 
 /** Every query is scoped by shop: an id from another shop reads as missing. */
 @Injectable()
 export class CustomersRepository {
+  /** Prepared once per shape (search or not, sort, direction); a request only binds values. */
+  private readonly pages = new PreparedShapes<{ all(values: Record<string, unknown>): CustomerRow[] }>();
+  private readonly totals = new PreparedShapes<{ get(values: Record<string, unknown>): { n: number } | undefined }>();
+
   constructor(@Inject(DB) private readonly db: Db) {}
 
   /** Name, e-mail or phone words start with what was typed (customer_search FTS5 index). */
   page(shopId: number, query: CustomerListQuery): { rows: CustomerRow[]; total: number } {
     const text = query.q ? ftsPrefixQuery(query.q) : null;
     if (query.q && text === null) return { rows: [], total: 0 };
-    const where = and(
-      eq(customers.shopId, shopId),
-      text === null ? undefined : sql`${customers.id} IN (SELECT rowid FROM customer_search WHERE customer_search MATCH ${text})`,
+    const shape = [text !== null, query.sort, query.order].join('|');
+    const values = { shopId, text, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
+    const total =
+      this.totals
+        .get(shape, () =>
+          this.db
+            .select({ n: count() })
+            .from(customers)
+            .where(this.where(text !== null))
+            .prepare(),
+        )
+        .get(values)?.n ?? 0;
+    if (total === 0) return { rows: [], total };
+    return { rows: this.pages.get(shape, () => this.buildPage(query, text !== null)).all(values), total };
+  }
+
+  private where(text: boolean) {
+    return and(
+      eq(customers.shopId, sql.placeholder('shopId')),
+      text ? sql`${customers.id} IN (SELECT rowid FROM customer_search WHERE customer_search MATCH ${sql.placeholder('text')})` : undefined,
     );
-    const total = this.db.select({ n: count() }).from(customers).where(where).get()?.n ?? 0;
-    const rows = this.db
+  }
+
+  private buildPage(query: CustomerListQuery, text: boolean) {
+    return this.db
       .select()
       .from(customers)
-      .where(where)
+      .where(this.where(text))
       .orderBy((query.order === 'desc' ? desc : asc)(SORT_COLUMN[query.sort]), asc(customers.id))
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize)
-      .all();
-    return { rows, total };
+      .limit(sql.placeholder('limit'))
+      .offset(sql.placeholder('offset'))
+      .prepare();
   }
 
   find(shopId: number, id: number): CustomerRow | undefined {

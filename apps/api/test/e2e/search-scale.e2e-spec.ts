@@ -80,4 +80,17 @@ describe('search at scale: 50,000 customers and bikes, 50,000 jobs in one shop',
     const byOwner = await desk.agent.get('/api/bikes?q=ada%20eastry%2049984').expect(200);
     expect(byOwner.body.items.map((b: { serialNumber: string }) => b.serialNumber)).toEqual(['BLK-49984']);
   });
+
+  it('customer pages answer like a sorted reference, whichever sort came before (statements reused per shape)', async () => {
+    const db = new Database(t.cfg.DATABASE_PATH, { readonly: true });
+    const byName = db.prepare('SELECT id FROM customers WHERE shop_id = ? ORDER BY name DESC, id ASC LIMIT 20 OFFSET 40').pluck().all(desk.user.shopId);
+    const byAge = db.prepare('SELECT id FROM customers WHERE shop_id = ? ORDER BY created_at ASC, id ASC LIMIT 20 OFFSET 20').pluck().all(desk.user.shopId);
+    db.close();
+    for (let round = 0; round < 2; round++) {
+      const names = await desk.agent.get('/api/customers?sort=name&order=desc&page=3&pageSize=20').expect(200);
+      expect(names.body.items.map((c: { id: number }) => c.id)).toEqual(byName);
+      const ages = await desk.agent.get('/api/customers?sort=createdAt&order=asc&page=2&pageSize=20').expect(200);
+      expect(ages.body.items.map((c: { id: number }) => c.id)).toEqual(byAge);
+    }
+  });
 });
