@@ -1,4 +1,4 @@
-import { Injectable } from '@nestjs/common';
+import { Injectable, Logger } from '@nestjs/common';
 import { EventEmitter2 } from '@nestjs/event-emitter';
 import { DOMAIN_EVENTS, type ConsentChangedEvent } from '../core/events';
 import { ShowcaseExportTasks } from './showcase-export-tasks.service';
@@ -11,6 +11,8 @@ import { ShowcaseService } from './showcase.service';
  */
 @Injectable()
 export class ShowcaseConsentListener {
+  private readonly logger = new Logger('ShowcaseConsent');
+
   constructor(
     events: EventEmitter2,
     private readonly showcase: ShowcaseService,
@@ -24,8 +26,8 @@ export class ShowcaseConsentListener {
     const { shopId, jobId } = e;
     if (e.granted || jobId === null) return;
     this.showcase.forgetJob(e.tx, shopId, jobId);
-    // Stopping exports is not transactional: do it once the change has committed. cancelFor
-    // reads the consent again, so a rolled-back revocation stops nothing.
-    setImmediate(() => this.exports.cancelFor(shopId, jobId));
+    // Stopping exports and deleting zips is not transactional: done once the change has
+    // committed. cancelFor reads the consent again, so a rolled-back revocation stops nothing.
+    setImmediate(() => void this.exports.cancelFor(shopId, jobId).catch((err: unknown) => this.logger.error(err)));
   }
 }

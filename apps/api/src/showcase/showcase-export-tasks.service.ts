@@ -66,17 +66,28 @@ export class ShowcaseExportTasks implements OnModuleInit {
   async download(actor: AuthUser, key: string): Promise<Readable> {
     const s = this.status(actor, key);
     if (s.state !== 'done') throw new DomainError('NOT_FOUND', 'This export is not ready.');
+    if (!(await this.storage.stat(listKey(key)))) throw new DomainError('CONSENT_REVOKED', PURGED);
     const pairIds = JSON.parse((await buffer(this.storage.createReadStream(listKey(key)))).toString('utf8')) as number[];
     for (const id of pairIds) this.showcase.clear(actor, id);
     return this.storage.createReadStream(zipKey(key));
   }
 
-  /** Stops every running export that draws on this job, if its consent no longer covers the showcase (read after commit). */
-  cancelFor(shopId: number, jobId: number): void {
+  /**
+   * Once consent no longer covers the showcase (read after commit): stops every running export
+   * that draws on this job, and deletes finished zips that hold its photos, rather than leaving
+   * them in storage until the weekly sweep.
+   */
+  async cancelFor(shopId: number, jobId: number): Promise<void> {
     const problem = this.showcase.problemOf(shopId, jobId);
     if (!problem) return;
     for (const run of this.inFlight.values()) {
       if (run.shopId === shopId && run.jobIds.has(jobId)) run.abort.abort(new DomainError(problem, undefined, { jobId }));
+    }
+    for (const done of this.tasks.finished(EXPORT_TASK, shopId)) {
+      const pairIds = (done.payload as unknown as TaskPayload).req.items.map((i) => i.pairId);
+      if (!this.showcase.jobsOf(shopId, pairIds).has(jobId)) continue;
+      await this.storage.delete(listKey(done.key));
+      await this.storage.delete(zipKey(done.key));
     }
   }
 
@@ -112,6 +123,7 @@ function readFailure(lastError: string | null): { code: ErrorCode; message: stri
   return { code: 'INTERNAL', message: ERROR_CODES.INTERNAL.message };
 }
 
+const PURGED = 'A job in this export withdrew consent, so its zip was deleted. Make a new export without it.';
 const safe = (key: string) => key.toLowerCase().replace(/[^a-z0-9_-]/g, '-');
 const zipKey = (key: string) => `showcase/export-${safe(key)}.zip`;
 const listKey = (key: string) => `showcase/export-${safe(key)}.json`;

@@ -1,5 +1,5 @@
 import { once } from 'node:events';
-import { createWriteStream, mkdtempSync, statSync } from 'node:fs';
+import { createWriteStream, existsSync, mkdtempSync, statSync } from 'node:fs';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -81,6 +81,23 @@ describe('showcase exports: revocation mid-way, background tasks, streamed zips'
     expect((zip.body as Buffer).subarray(0, 2).toString()).toBe('PK');
     // Only the user who started it sees it: another shop's manager learns nothing.
     await (await t.signIn(DEMO.otherShopManager)).agent.get(`/api/showcase/exports/${task.key}`).expect(404);
+  });
+
+  it('a withdrawal deletes finished zips that hold the job, and keeps the others', async () => {
+    const { jobId, pairId } = await blurredPair(t, mech, null);
+    await setConsent(mgr, jobId, true);
+    const other = seeded.find((i) => i.jobId !== jobId) as ShowcaseItemDto;
+    const withJob = await startExport([{ pairId }, { pairId: other.pairId }]);
+    const without = await startExport([{ pairId: other.pairId, size: 'banner' }]);
+    await t.app.get<TaskRunner>(TASK_RUNNER).settled();
+    const zipOf = (key: string) => join(t.cfg.UPLOADS_DIR, 'showcase', `export-${key.toLowerCase()}.zip`);
+    expect(existsSync(zipOf(withJob.key))).toBe(true);
+    await setConsent(mgr, jobId, false);
+    await vi.waitFor(() => expect(existsSync(zipOf(withJob.key))).toBe(false), { timeout: 5_000 });
+    const refused = await mgr.agent.get(`/api/showcase/exports/${withJob.key}/download`).expect(409);
+    expect(refused.body).toMatchObject({ code: 'CONSENT_REVOKED', message: expect.stringContaining('zip was deleted') });
+    expect(existsSync(zipOf(without.key))).toBe(true);
+    await mgr.agent.get(`/api/showcase/exports/${without.key}/download`).buffer(true).parse(binary).expect(200);
   });
 
   it('consent.changed: a withdrawal stops a running export mid-file, empties the job and forgets its marks', async () => {

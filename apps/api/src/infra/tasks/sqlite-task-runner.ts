@@ -62,6 +62,10 @@ export class SqliteTaskRunner implements TaskRunner {
     return row ? toStatus(row) : null;
   }
 
+  finished(kind: string, shopId: number): { key: string; payload: Record<string, unknown> }[] {
+    return this.store.finished(kind, shopId);
+  }
+
   settled(): Promise<void> {
     if (!this.busy()) return Promise.resolve();
     return new Promise((resolve) => this.waiters.push(resolve));

@@ -51,6 +51,8 @@ export interface TaskRunner {
   register(kind: string, handler: TaskHandler, options: TaskKindOptions): void;
   enqueue(spec: TaskSpec, tx?: DbTx): void;
   status(kind: string, key: string): TaskStatus | null;
+  /** Done tasks of one kind for one shop, with their payloads (e.g. to find finished exports that hold a job's photos). */
+  finished(kind: string, shopId: number): { key: string; payload: Record<string, unknown> }[];
   /** Resolves when nothing is queued or running (tests and shutdown); tasks scheduled for later are not waited for. */
   settled(): Promise<void>;
   /** For the readiness check: is the runner polling, and how much work waits. */
