@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { BikeListQuery } from '@benchproof/contracts';
 import { and, asc, count, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
-import { DB, ftsPrefixQuery, PreparedShapes, type Db } from '../core/db';
+import { DB, ftsPrefixQuery, PreparedPages, type Db } from '../core/db';
 import { bikes } from '../db/schema';
 
 export type BikeRow = typeof bikes.$inferSelect;
@@ -24,8 +24,7 @@ function where(query: BikeListQuery, text: boolean): SQL | undefined {
 @Injectable()
 export class BikesRepository {
   /** Prepared once per shape (search, owner filter, sort, direction); a request only binds values. */
-  private readonly pages = new PreparedShapes<{ all(values: Record<string, unknown>): BikeRow[] }>();
-  private readonly totals = new PreparedShapes<{ get(values: Record<string, unknown>): { n: number } | undefined }>();
+  private readonly prepared = new PreparedPages<BikeRow>();
 
   constructor(@Inject(DB) private readonly db: Db) {}
 
@@ -35,18 +34,15 @@ export class BikesRepository {
     if (query.q && text === null) return { rows: [], total: 0 };
     const shape = [text !== null, !!query.customerId, query.sort, query.order].join('|');
     const values = { shopId, text, customerId: query.customerId, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
-    const total =
-      this.totals
-        .get(shape, () =>
-          this.db
-            .select({ n: count() })
-            .from(bikes)
-            .where(where(query, text !== null))
-            .prepare(),
-        )
-        .get(values)?.n ?? 0;
-    if (total === 0) return { rows: [], total };
-    return { rows: this.pages.get(shape, () => this.buildPage(query, text !== null)).all(values), total };
+    return this.prepared.run(shape, values, {
+      total: () =>
+        this.db
+          .select({ n: count() })
+          .from(bikes)
+          .where(where(query, text !== null))
+          .prepare(),
+      page: () => this.buildPage(query, text !== null),
+    });
   }
 
   private buildPage(query: BikeListQuery, text: boolean) {

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { CustomerListQuery } from '@benchproof/contracts';
 import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
-import { DB, ftsPrefixQuery, PreparedShapes, type Db } from '../core/db';
+import { DB, ftsPrefixQuery, PreparedPages, type Db } from '../core/db';
 import { customers } from '../db/schema';
 
 export type CustomerRow = typeof customers.$inferSelect;
@@ -13,8 +13,7 @@ const SORT_COLUMN = { name: customers.name, createdAt: customers.createdAt } as 
 @Injectable()
 export class CustomersRepository {
   /** Prepared once per shape (search or not, sort, direction); a request only binds values. */
-  private readonly pages = new PreparedShapes<{ all(values: Record<string, unknown>): CustomerRow[] }>();
-  private readonly totals = new PreparedShapes<{ get(values: Record<string, unknown>): { n: number } | undefined }>();
+  private readonly prepared = new PreparedPages<CustomerRow>();
 
   constructor(@Inject(DB) private readonly db: Db) {}
 
@@ -24,18 +23,15 @@ export class CustomersRepository {
     if (query.q && text === null) return { rows: [], total: 0 };
     const shape = [text !== null, query.sort, query.order].join('|');
     const values = { shopId, text, limit: query.pageSize, offset: (query.page - 1) * query.pageSize };
-    const total =
-      this.totals
-        .get(shape, () =>
-          this.db
-            .select({ n: count() })
-            .from(customers)
-            .where(this.where(text !== null))
-            .prepare(),
-        )
-        .get(values)?.n ?? 0;
-    if (total === 0) return { rows: [], total };
-    return { rows: this.pages.get(shape, () => this.buildPage(query, text !== null)).all(values), total };
+    return this.prepared.run(shape, values, {
+      total: () =>
+        this.db
+          .select({ n: count() })
+          .from(customers)
+          .where(this.where(text !== null))
+          .prepare(),
+      page: () => this.buildPage(query, text !== null),
+    });
   }
 
   private where(text: boolean) {

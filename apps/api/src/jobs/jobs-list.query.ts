@@ -1,7 +1,7 @@
 import type { JobListQuery } from '@benchproof/contracts';
 import { JOB_STATUSES, TERMINAL_STATUSES, type JobStatus } from '@benchproof/domain';
 import { and, asc, count, desc, eq, gte, inArray, isNull, lt, lte, or, sql, type SQL } from 'drizzle-orm';
-import { ftsPrefixQuery, PreparedShapes, type Db } from '../core/db';
+import { ftsPrefixQuery, PreparedPages, type Db } from '../core/db';
 import { bikes, customers, jobs, users } from '../db/schema';
 
 /** Statuses in which a passed promised day no longer counts as overdue. */
@@ -98,19 +98,17 @@ function valuesOf(shopId: number, { query: f, today }: JobSearch, text: string |
  * bike and mechanic for those rows only, so a deep page does not join every row it skips.
  */
 export class JobsListQuery {
-  private readonly pages = new PreparedShapes<{ all(values: Record<string, unknown>): JobListRow[] }>();
-  private readonly totals = new PreparedShapes<{ get(values: Record<string, unknown>): { n: number } | undefined }>();
+  private readonly prepared = new PreparedPages<JobListRow>();
 
   constructor(private readonly db: Db) {}
 
   page(shopId: number, s: JobSearch): { rows: JobListRow[]; total: number } {
     const text = s.query.q ? ftsPrefixQuery(s.query.q) : null;
     if (s.query.q && text === null) return { rows: [], total: 0 };
-    const shape = shapeOf(s.query, text !== null);
-    const values = valuesOf(shopId, s, text);
-    const total = this.totals.get(shape, () => this.buildTotal(s.query, text !== null)).get(values)?.n ?? 0;
-    if (total === 0) return { rows: [], total };
-    return { rows: this.pages.get(shape, () => this.buildPage(s.query, text !== null)).all(values), total };
+    return this.prepared.run(shapeOf(s.query, text !== null), valuesOf(shopId, s, text), {
+      total: () => this.buildTotal(s.query, text !== null),
+      page: () => this.buildPage(s.query, text !== null),
+    });
   }
 
   private buildTotal(f: JobListQuery, text: boolean) {

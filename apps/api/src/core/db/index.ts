@@ -2,4 +2,4 @@ export { DB, type Db } from './db.types';
 export { DbModule } from './db.module';
 export { openDb, MIGRATIONS_DIR } from './open-db';
 export { ftsPrefixQuery } from './fts';
-export { PreparedShapes } from './prepared-shapes';
+export { PreparedPages } from './prepared-shapes';

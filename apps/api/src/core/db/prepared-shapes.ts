@@ -19,3 +19,22 @@ export class PreparedShapes<Q> {
     return made;
   }
 }
+
+type Values = Record<string, unknown>;
+
+/** The two statements of a paged list: the matching total, and one page of rows. */
+export interface PagedStatements<Row> {
+  total: () => { get(values: Values): { n: number } | undefined };
+  page: () => { all(values: Values): Row[] };
+}
+
+/** A paged list prepared per shape: the total first, and the page only when something matches. */
+export class PreparedPages<Row> {
+  private readonly totals = new PreparedShapes<ReturnType<PagedStatements<Row>['total']>>();
+  private readonly pages = new PreparedShapes<ReturnType<PagedStatements<Row>['page']>>();
+
+  run(shape: string, values: Values, build: PagedStatements<Row>): { rows: Row[]; total: number } {
+    const total = this.totals.get(shape, build.total).get(values)?.n ?? 0;
+    return { rows: total === 0 ? [] : this.pages.get(shape, build.page).all(values), total };
+  }
+}
