@@ -15,6 +15,9 @@ import type { AppConfig } from './config';
 import { ErrorFilter } from './core/http';
 import { SeedService } from './seed';
 
+/** The routes that send stored media files (staff and owner-page), e.g. /api/media/12/screen. */
+const MEDIA_BYTES = /^\/api\/(?:media|owner\/[^/]+\/media)\/\d+\/(?:original|thumb|screen|print|poster)$/;
+
 /** Builds the whole server (API, OpenAPI document, built web app) for main.ts and the e2e tests. */
 export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {}): Promise<NestExpressApplication> {
   const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
@@ -26,8 +29,9 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   // Behind a proxy, TRUST_PROXY says which hops may set X-Forwarded-For; without it req.ip is the socket's address.
   app.set('trust proxy', trustProxy(cfg.TRUST_PROXY));
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
-  // JSON lists and the OpenAPI document; images and video are already compressed and are skipped.
-  app.use(compression({ threshold: 1024 }));
+  // JSON lists and the OpenAPI document. Media bytes (JPEG, MP4…) are already compressed: their routes skip the middleware.
+  const compress = compression({ threshold: 1024 });
+  app.use((req: Request, res: Response, next: NextFunction) => (MEDIA_BYTES.test(req.path) ? next() : compress(req, res, next)));
   app.use(cookieParser());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());

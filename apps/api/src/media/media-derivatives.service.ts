@@ -6,6 +6,7 @@ import { APP_CONFIG, type AppConfig } from '../config';
 import { DERIVATIVE_SIZES, IMAGE, type ImageAdapter, type Rendition, type SizedVariant } from '../infra/image';
 import { STORAGE, type Storage } from '../infra/storage';
 import { type DbTx, TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
+import { MediaFileCache } from './media-file-cache';
 import { MediaPhashService } from './media-phash.service';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 
@@ -30,6 +31,7 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
     @Inject(IMAGE) private readonly image: ImageAdapter,
     private readonly phash: MediaPhashService,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
+    private readonly fileCache: MediaFileCache,
   ) {}
 
   onModuleInit(): void {
@@ -89,11 +91,16 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
     const stored = await this.storage.put(key, Readable.from([out.data]));
     this.repo.upsertDerivative({ assetId: row.id, variant, key, width: out.width, height: out.height, bytes: stored.bytes, sha256: stored.sha256 });
     // Rows written before keys were deterministic point at a random name.
-    if (previous && previous.key !== key) await this.storage.delete(previous.key);
+    if (previous && previous.key !== key) await this.deleteFile(previous.key);
   }
 
   async removeFiles(row: MediaAssetRow): Promise<void> {
-    for (const d of this.repo.derivativesOf([row.id])) await this.storage.delete(d.key);
+    for (const d of this.repo.derivativesOf([row.id])) await this.deleteFile(d.key);
     if (row.originalKey) await this.storage.delete(row.originalKey);
+  }
+
+  private async deleteFile(key: string): Promise<void> {
+    this.fileCache.forget(key);
+    await this.storage.delete(key);
   }
 }

@@ -45,9 +45,10 @@ export class MediaFilesController {
 
   private async send(user: AuthUser, id: number, variant: MediaVariant | 'original', h: Record<string, string | undefined>, res: Response): Promise<void> {
     const reply = await this.files.open(user, id, variant, { range: h.range, ifNoneMatch: h['if-none-match'] });
-    res.status(reply.status).set(reply.headers);
-    if (!reply.body) {
-      res.end();
+    // writeHead adds these to what the middleware already set, without Express's per-header work.
+    res.writeHead(reply.status, reply.headers);
+    if (!reply.body || Buffer.isBuffer(reply.body)) {
+      res.end(reply.body ?? undefined);
       return;
     }
     reply.body.on('error', () => res.destroy());

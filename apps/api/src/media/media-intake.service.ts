@@ -21,6 +21,8 @@ export interface IncomingFile {
   path: string;
   originalName: string;
   size: number;
+  /** SHA-256 (hex) computed while the bytes arrived, when the channel did that (tus). */
+  sha256?: string;
 }
 
 interface Dims {
@@ -135,7 +137,7 @@ export class MediaIntakeService {
     meta: UploadMeta,
     found: { type: AcceptedType; kind: MediaKind; probed: Probed },
   ): Promise<MediaAssetRow> {
-    const stored = await this.storage.adoptLocalFile(`originals/${actor.shopId}/${randomUUID()}`, file.path, { immutable: true });
+    const stored = await this.storage.adoptLocalFile(`originals/${actor.shopId}/${randomUUID()}`, file.path, { immutable: true, sha256: file.sha256 });
     try {
       return this.repo.insert({
         shopId: actor.shopId,

@@ -1,6 +1,5 @@
 import { Inject, Injectable, Logger, type OnModuleInit } from '@nestjs/common';
 import { ERROR_CODES, type ErrorCode, type TusUploadStatus, TusUploadMetaSchema } from '@benchproof/contracts';
-import { FileStore } from '@tus/file-store';
 import { Server } from '@tus/server';
 import type { Upload } from '@tus/utils';
 import { randomUUID } from 'node:crypto';
@@ -14,6 +13,7 @@ import { UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { MediaIntakeService } from './media-intake.service';
 import { withJsonError } from './media-tus.errors';
 import { MediaService } from './media.service';
+import { HashingFileStore } from './tus-hashing-store';
 
 export const TUS_PATH = '/api/media/tus';
 const UPLOAD_ID = /^[a-f0-9]{32}$/;
@@ -59,7 +59,7 @@ const tusError = (err: DomainError) => new TusHookError(err.status, JSON.stringi
 export class MediaTusService implements OnModuleInit {
   private readonly logger = new Logger('MediaTus');
   private server!: Server;
-  private store!: FileStore;
+  private store!: HashingFileStore;
   /** Outcome of recently finished uploads, so a client that lost the final response can ask. */
   private readonly finished = new Map<string, Finished>();
 
@@ -72,7 +72,7 @@ export class MediaTusService implements OnModuleInit {
 
   onModuleInit(): void {
     // The tus expiration extension: unfinished uploads answer Upload-Expires and are removed after it.
-    this.store = new FileStore({ directory: this.temp.resumableDir, expirationPeriodInMilliseconds: this.cfg.TUS_EXPIRE_HOURS * 3600_000 });
+    this.store = new HashingFileStore({ directory: this.temp.resumableDir, expirationPeriodInMilliseconds: this.cfg.TUS_EXPIRE_HOURS * 3600_000 });
     this.server = new Server({
       path: TUS_PATH,
       datastore: this.store,
@@ -132,7 +132,8 @@ export class MediaTusService implements OnModuleInit {
   private async onFinish(req: unknown, upload: Upload): Promise<{ status_code: number; headers: Record<string, string>; body: string }> {
     const actor = actorOf(req);
     const meta = TusUploadMetaSchema.parse(presentValues(upload.metadata));
-    const file = { path: join(this.temp.resumableDir, upload.id), originalName: meta.filename ?? '', size: upload.offset };
+    const path = join(this.temp.resumableDir, upload.id);
+    const file = { path, originalName: meta.filename ?? '', size: upload.offset, sha256: this.store.digestOf(upload.id, upload.offset) ?? undefined };
     try {
       const asset = await this.intake.intake(actor, meta.jobId, file, meta, 'resumable');
       this.remember(upload.id, { shopId: actor.shopId, assetId: asset.id, error: null, size: upload.offset });

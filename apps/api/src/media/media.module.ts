@@ -10,6 +10,7 @@ import { VIDEO_PROBE, VideoProbe } from '../infra/video';
 import { JobsModule } from '../jobs';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { MediaFilesController } from './media-files.controller';
+import { MediaFileCache } from './media-file-cache';
 import { MediaFilesService } from './media-files.service';
 import { MediaIntakeService } from './media-intake.service';
 import { MediaPhashService } from './media-phash.service';
@@ -44,6 +45,7 @@ import { MAX_FILES_PER_BATCH } from './upload-form';
     MediaDerivativesService,
     MediaPhashService,
     MediaFilesService,
+    { provide: MediaFileCache, inject: [APP_CONFIG], useFactory: (cfg: AppConfig) => new MediaFileCache(cfg.MEDIA_CACHE_MB * 1024 * 1024, 1024 * 1024) },
     MediaTusService,
     MediaSweepService,
     { provide: SNIFFER, useClass: FileSniffer },

@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { MediaListQuery, MediaVariant } from '@benchproof/contracts';
-import { and, asc, eq, inArray, isNull } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { findingMedia, mediaAssets, mediaDerivatives } from '../db/schema';
 
@@ -8,13 +8,52 @@ export type MediaAssetRow = typeof mediaAssets.$inferSelect;
 export type NewMediaAssetRow = typeof mediaAssets.$inferInsert;
 export type MediaDerivativeRow = typeof mediaDerivatives.$inferSelect;
 export type NewMediaDerivativeRow = typeof mediaDerivatives.$inferInsert;
+/** What serving one file needs: the asset's scope and state, and the named derivative when there is one. */
+export interface MediaFileRow {
+  id: number;
+  jobId: number;
+  originalKey: string | null;
+  sha256: string;
+  mime: string;
+  deletedAt: Date | null;
+  purgedAt: Date | null;
+  derivativeKey: string | null;
+  derivativeSha256: string | null;
+  derivativeBytes: number | null;
+}
 export type AssetPatch = Partial<
   Pick<MediaAssetRow, 'phase' | 'area' | 'caption' | 'derivativeStatus' | 'derivativeError' | 'deletedAt' | 'deletedBy' | 'purgedAt' | 'originalKey' | 'phash'>
 >;
 
 @Injectable()
 export class MediaRepository {
-  constructor(@Inject(DB) private readonly db: Db) {}
+  private readonly fileLookup;
+
+  constructor(@Inject(DB) private readonly db: Db) {
+    // Serving media runs this on every <img> request: one prepared statement, asset and derivative together.
+    this.fileLookup = db
+      .select({
+        id: mediaAssets.id,
+        jobId: mediaAssets.jobId,
+        originalKey: mediaAssets.originalKey,
+        sha256: mediaAssets.sha256,
+        mime: mediaAssets.mime,
+        deletedAt: mediaAssets.deletedAt,
+        purgedAt: mediaAssets.purgedAt,
+        derivativeKey: mediaDerivatives.key,
+        derivativeSha256: mediaDerivatives.sha256,
+        derivativeBytes: mediaDerivatives.bytes,
+      })
+      .from(mediaAssets)
+      .leftJoin(mediaDerivatives, and(eq(mediaDerivatives.assetId, mediaAssets.id), eq(mediaDerivatives.variant, sql.placeholder('variant'))))
+      .where(and(eq(mediaAssets.shopId, sql.placeholder('shopId')), eq(mediaAssets.id, sql.placeholder('id'))))
+      .prepare();
+  }
+
+  /** An asset of this shop with its `variant` derivative (null fields when there is none, e.g. for 'original'). */
+  findFile(shopId: number, id: number, variant: MediaVariant | 'original'): MediaFileRow | undefined {
+    return this.fileLookup.get({ shopId, id, variant });
+  }
 
   insert(row: NewMediaAssetRow): MediaAssetRow {
     return this.db.insert(mediaAssets).values(row).returning().get();

@@ -77,6 +77,23 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
     expect(res.headers['content-range']).toBe(`bytes */${video.length}`);
   });
 
+  it('serves a screen derivative again and again with the same bytes, its SHA-256 as ETag, ranges and 304', async () => {
+    const listed = await mech.agent.get(`/api/jobs/${jobId}/media`).expect(200);
+    const items = (listed.body.items ?? listed.body) as { id: number; urls: Record<string, string | null> }[];
+    const screen = items.find((m) => m.id === photo.id)!.urls.screen!;
+    const first = await get(screen).expect(200);
+    const bytes = first.body as Buffer;
+    expect(first.headers['content-type']).toBe('image/jpeg');
+    expect(first.headers.etag).toBe(`"${createHash('sha256').update(bytes).digest('hex')}"`);
+    const again = await get(screen).expect(200);
+    expect((again.body as Buffer).equals(bytes)).toBe(true);
+    const part = await get(screen, 'bytes=2-9').expect(206);
+    expect(part.headers['content-range']).toBe(`bytes 2-9/${bytes.length}`);
+    expect((part.body as Buffer).equals(bytes.subarray(2, 10))).toBe(true);
+    await get(screen, `bytes=${bytes.length}-`).expect(416);
+    await mech.agent.get(screen).set('If-None-Match', first.headers.etag).expect(304);
+  });
+
   it('takes a poster frame from the browser for a video and makes its thumb', async () => {
     expect(videoAsset.urls.poster).toBeNull();
     const res = await mech.agent

@@ -1,4 +1,4 @@
-export { STORAGE, assertSafeKey, type Storage, type StoredObject, type ByteRange, type PutOptions } from './storage';
+export { STORAGE, assertSafeKey, type Storage, type StoredObject, type ByteRange, type PutOptions, type AdoptOptions } from './storage';
 export { LocalDiskStorage } from './local-disk.storage';
 export { UPLOAD_TEMP, UploadTemp } from './upload-temp';
 export { StorageModule } from './storage.module';

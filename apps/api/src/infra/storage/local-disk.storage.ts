@@ -4,7 +4,7 @@ import { chmod, mkdir, rename, rm, stat, unlink } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import { type Readable, Transform } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { assertSafeKey, type ByteRange, type PutOptions, type Storage, type StoredObject } from './storage';
+import { assertSafeKey, type AdoptOptions, type ByteRange, type PutOptions, type Storage, type StoredObject } from './storage';
 
 /** Streams the bytes through a SHA-256 and a counter on their way to `sink`. */
 function hashing(): { tap: Transform; result: () => { bytes: number; sha256: string } } {
@@ -18,6 +18,16 @@ function hashing(): { tap: Transform; result: () => { bytes: number; sha256: str
     },
   });
   return { tap, result: () => ({ bytes, sha256: hash.digest('hex') }) };
+}
+
+async function hashFile(path: string): Promise<{ bytes: number; sha256: string }> {
+  const hash = createHash('sha256');
+  let bytes = 0;
+  for await (const chunk of createReadStream(path) as AsyncIterable<Buffer>) {
+    hash.update(chunk);
+    bytes += chunk.length;
+  }
+  return { bytes, sha256: hash.digest('hex') };
 }
 
 /** Media files under one root folder (cfg.UPLOADS_DIR); nothing here is served statically. */
@@ -46,18 +56,13 @@ export class LocalDiskStorage implements Storage {
     return { key, ...result() };
   }
 
-  async adoptLocalFile(key: string, path: string, opts: PutOptions = {}): Promise<StoredObject> {
+  async adoptLocalFile(key: string, path: string, opts: AdoptOptions = {}): Promise<StoredObject> {
     const target = this.path(key);
     await mkdir(dirname(target), { recursive: true });
-    const hash = createHash('sha256');
-    let bytes = 0;
-    for await (const chunk of createReadStream(path) as AsyncIterable<Buffer>) {
-      hash.update(chunk);
-      bytes += chunk.length;
-    }
+    const { bytes, sha256 } = opts.sha256 ? { bytes: (await stat(path)).size, sha256: opts.sha256 } : await hashFile(path);
     await rename(path, target);
     if (opts.immutable) await chmod(target, 0o444);
-    return { key, bytes, sha256: hash.digest('hex') };
+    return { key, bytes, sha256 };
   }
 
   createReadStream(key: string, range?: ByteRange): Readable {

@@ -18,6 +18,11 @@ export interface PutOptions {
   immutable?: boolean;
 }
 
+export interface AdoptOptions extends PutOptions {
+  /** The SHA-256 (hex) already computed while the file was written (a tus upload); the file is then not read again. */
+  sha256?: string;
+}
+
 /**
  * Where media files live. Keys are opaque, built by the caller from ids only (never
  * from an uploaded file name). The local-disk implementation is the default; an
@@ -29,7 +34,7 @@ export interface Storage {
    * Takes over a finished local temp file (multer or tus wrote it). Disk storage
    * moves it into place and hashes it; a remote store would upload it.
    */
-  adoptLocalFile(key: string, path: string, opts?: PutOptions): Promise<StoredObject>;
+  adoptLocalFile(key: string, path: string, opts?: AdoptOptions): Promise<StoredObject>;
   createReadStream(key: string, range?: ByteRange): Readable;
   stat(key: string): Promise<{ bytes: number } | null>;
   delete(key: string): Promise<void>;
