@@ -34,6 +34,13 @@ if (process.env.MAIL_CATCHER !== 'false' && local && existsSync(catcher)) {
 // Fewer glibc malloc arenas so memory freed after a burst of photo work goes back to the
 // system (sharp's docs on glibc fragmentation); the bench measures idle RSS before and after.
 const env = { MALLOC_ARENA_MAX: '2', ...process.env };
+// Opt-in jemalloc (Debian libjemalloc2) for hosts short of memory rather than CPU: idle RSS
+// after photo bursts stays flat, but each photo costs more CPU (DEVELOPERS.md, Benchmarks).
+const JEMALLOC = '/usr/lib/x86_64-linux-gnu/libjemalloc.so.2';
+if (process.env.USE_JEMALLOC === '1') {
+  if (existsSync(JEMALLOC)) Object.assign(env, { LD_PRELOAD: JEMALLOC, MALLOC_CONF: env.MALLOC_CONF ?? 'background_thread:true' });
+  else console.log(`[start] USE_JEMALLOC=1 but ${JEMALLOC} is missing; using glibc malloc`);
+}
 const server = spawn(process.execPath, [resolve(root, 'dist/apps/api/apps/api/src/main.js')], { cwd: root, stdio: 'inherit', env });
 children.push(server);
 const stop = (signal) => children.forEach((c) => c.kill(signal));

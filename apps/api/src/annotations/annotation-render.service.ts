@@ -73,8 +73,13 @@ export class AnnotationRenderService implements OnModuleInit {
 
   /** The annotated JPEG bytes (for the report PDF, the owner page, the showcase). */
   async annotatedJpeg(shopId: number, assetId: number, size: AnnotatedSize): Promise<Buffer> {
+    return (await this.annotatedWithBytes(shopId, assetId, size)).data;
+  }
+
+  /** The annotated JPEG with its pixel size, from one lookup. */
+  async annotatedWithBytes(shopId: number, assetId: number, size: AnnotatedSize): Promise<AnnotatedImage & { data: Buffer }> {
     const img = await this.annotated(shopId, assetId, size);
-    return readAll(this.storage.createReadStream(img.key));
+    return { ...img, data: await readAll(this.storage.createReadStream(img.key)) };
   }
 
   private async render(baseKey: string, size: { width: number; height: number }, json: string, key: string): Promise<void> {

@@ -63,10 +63,14 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
         original,
         IMAGE_VARIANTS.map((v) => DERIVATIVE_SIZES[v]),
       );
-      for (const [i, variant] of IMAGE_VARIANTS.entries()) {
-        await this.save(row, variant, made[i]);
-        task.progress((i + 1) / IMAGE_VARIANTS.length);
-      }
+      // The three writes (each hashed on its way to disk) go out together; none depends on another.
+      let saved = 0;
+      await Promise.all(
+        IMAGE_VARIANTS.map(async (variant, i) => {
+          await this.save(row, variant, made[i]);
+          task.progress(++saved / IMAGE_VARIANTS.length);
+        }),
+      );
       this.repo.update(assetId, { derivativeStatus: 'ready', derivativeError: null });
       this.phash.enqueue(row);
     } catch (err) {

@@ -15,6 +15,7 @@ import { ANNOTATED_IMAGE_SOURCE, type AnnotatedImageSource } from './report-sour
 import { ReportsRepository, type ReportRow } from './reports.repository';
 
 export const RENDER_TASK = 'report.render';
+const SHOT_READS_AT_ONCE = 6;
 
 /** Who asked for the render: the shots are fetched with that person's access. */
 export type RenderActor = Pick<AuthUser, 'id' | 'shopId' | 'role' | 'email' | 'name'>;
@@ -77,18 +78,33 @@ export class ReportRenderService implements OnApplicationBootstrap {
     const ids = [
       ...new Set([...snap.findings.flatMap((f) => f.shots), ...snap.pairs.flatMap((p) => [p.before, p.after]), ...snap.scopeStills].map((s) => s.assetId)),
     ];
-    const images = new Map<number, ReportImage>();
-    for (const [i, id] of ids.entries()) {
-      const img = await this.shots.printJpeg(actor, id);
-      if (img) images.set(id, img);
-      progress(0.05 + (0.6 * (i + 1)) / ids.length);
-    }
+    const images = await this.loadShots(actor, ids, progress);
     const logo = await this.logo(snap.shop.logoKey);
     const doc = createElement(ReportDocument, { snap, pageSize: row.pageSize, images, logo, stamp: this.stamp(row) });
     progress(0.7);
     const pdf = await this.pdf.render(doc);
     progress(0.95);
     return pdf;
+  }
+
+  /**
+   * Reads the shots a few at a time: one after another, 40 small file reads and their
+   * lookups took about as long as a fifth of the layout, mostly waiting on the disk.
+   */
+  private async loadShots(actor: AuthUser, ids: number[], progress: (f: number) => void): Promise<Map<number, ReportImage>> {
+    const images = new Map<number, ReportImage>();
+    let next = 0;
+    let done = 0;
+    const worker = async () => {
+      while (next < ids.length) {
+        const id = ids[next++];
+        const img = await this.shots.printJpeg(actor, id);
+        if (img) images.set(id, img);
+        progress(0.05 + (0.6 * ++done) / ids.length);
+      }
+    };
+    await Promise.all(Array.from({ length: Math.min(SHOT_READS_AT_ONCE, ids.length) }, worker));
+    return images;
   }
 
   private stamp(row: ReportRow): IssueStamp | null {

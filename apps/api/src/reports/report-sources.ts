@@ -34,8 +34,8 @@ export class AnnotatedPrintSource implements AnnotatedImageSource {
 
   async printJpeg(actor: AuthUser, assetId: number): Promise<ReportImage | null> {
     try {
-      const { width, height } = await this.renders.annotated(actor.shopId, assetId, 'print');
-      return { data: await this.renders.annotatedJpeg(actor.shopId, assetId, 'print'), width, height };
+      const { data, width, height } = await this.renders.annotatedWithBytes(actor.shopId, assetId, 'print');
+      return { data, width, height };
     } catch {
       // A video, or a photo whose derivatives are not made yet: the report prints the caption without the picture.
       return null;
