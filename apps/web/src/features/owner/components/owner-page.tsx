@@ -4,6 +4,7 @@ import { Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core
 import { Suspense, useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useOwnerPage } from '../api/owner-page';
+import { Deferred } from './deferred';
 import { LinkProblem } from './link-problem';
 import classes from './owner.module.css';
 import { OwnerFindingCard } from './owner-finding';
@@ -132,10 +133,14 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
         )}
         {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} />}
         <Measurements page={page} />
-        <Pairs page={page} />
-        <Suspense fallback={null}>
+        {page.pairs.length > 0 && (
+          <Deferred>
+            <Pairs page={page} />
+          </Deferred>
+        )}
+        <Deferred>
           <ConsentCard token={token} consent={page.consent} />
-        </Suspense>
+        </Deferred>
         <ReportAndContact page={page} />
       </Stack>
       {c.pending.length > 0 && (
