@@ -3,7 +3,7 @@ import { AFTER_FIRST_SCREEN_MS } from '../../../lib/after-first-screen';
 
 /**
  * A section below the first screen whose code is fetched after that screen has shown: when the owner
- * scrolls near it, or a moment after the page appeared, whichever comes first. A phone on a slow link
+ * scrolls to it, or a moment after the page appeared, whichever comes first. A phone on a slow link
  * then spends its first seconds on the report view, not on the slider or the consent switch.
  */
 export function Deferred({ children }: { children: ReactNode }) {
@@ -12,7 +12,7 @@ export function Deferred({ children }: { children: ReactNode }) {
   useEffect(() => {
     if (show) return;
     const timer = window.setTimeout(() => setShow(true), AFTER_FIRST_SCREEN_MS);
-    const near = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setShow(true), { rootMargin: '600px 0px' });
+    const near = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setShow(true), { rootMargin: '0px' });
     if (spot.current) near.observe(spot.current);
     return () => (window.clearTimeout(timer), near.disconnect());
   }, [show]);
