@@ -2,7 +2,7 @@
 // (1.6 Mbps down, 150 ms RTT), and the JavaScript a first visit needs before its first screen can be used.
 //
 // First-load JS = every script the page requested before its first screen showed (the sign-in form's
-// password box; the jobs table's first row), whatever the loader: entry, modulepreload, route chunks.
+// password box; the jobs table's first row; a job's intake; the owner page's bike heading), whatever the loader: entry, modulepreload, route chunks.
 // Its size is counted as gzip, the way the server's precompressed .gz copies send it; that is
 // deterministic, unlike the seconds, which depend on how busy the machine is.
 import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
@@ -95,6 +95,22 @@ function firstLoadRow(label, { total, count }, wireBytes) {
   };
 }
 
+/**
+ * A live owner link for the demo shop's job waiting on its owner (photos and priced items to decide),
+ * created the way desk's "copy link" does: POST /api/jobs/:id/owner-links with send: false returns the URL.
+ * Returns the link's path and the job's id.
+ */
+async function ownerLink(base) {
+  const { cookie, csrf } = await signIn(base, 'mara@lantern-spoke.test');
+  const headers = { cookie, 'x-csrf-token': csrf, 'content-type': 'application/json' };
+  const list = await (await fetch(`${base}/api/jobs?status=waiting_owner`, { headers })).json();
+  const job = list.items[0];
+  if (!job) throw new Error('the demo seed has no job waiting on its owner');
+  const res = await fetch(`${base}/api/jobs/${job.id}/owner-links`, { method: 'POST', headers, body: JSON.stringify({ send: false }) });
+  if (!res.ok) throw new Error(`owner link ${res.status} ${await res.text()}`);
+  return { path: new URL((await res.json()).url).pathname, jobId: job.id };
+}
+
 async function main() {
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-web-'));
   const api = await startDemoApi(root, dir, { WEB_DIST });
@@ -115,6 +131,11 @@ async function main() {
     });
     emitRow(firstLoadRow('sign-in page', firstLoadKb('sign-in page', signInPage.firstScreen), signInPage.wireBytes));
     emitRow(firstLoadRow('cold jobs page', firstLoadKb('cold jobs page', jobsRun.firstScreen), jobsRun.wireBytes));
+    const link = await ownerLink(api.base);
+    const jobPage = await coldLoad(api.base, `/jobs/${link.jobId}`, 'h3:text-is("Reported symptoms")', cookie);
+    emitRow(firstLoadRow('cold job page', firstLoadKb('cold job page', jobPage.firstScreen), jobPage.wireBytes));
+    const ownerPage = await coldLoad(api.base, link.path, 'h1');
+    emitRow(firstLoadRow('owner page (link from the e-mail)', firstLoadKb('owner page', ownerPage.firstScreen), ownerPage.wireBytes));
   } finally {
     await api.stop();
     rmSync(dir, { recursive: true, force: true });

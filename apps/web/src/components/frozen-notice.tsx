@@ -1,6 +1,6 @@
 import { Alert } from '@mantine/core';
 import { IconLock } from '@tabler/icons-react';
-import { JOB_CLOSED_MESSAGE } from '../lib/form';
+import { JOB_CLOSED_MESSAGE } from '../lib/messages';
 
 /**
  * A handed-over job's records are frozen (the API answers JOB_CLOSED). Those who may

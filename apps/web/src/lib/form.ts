@@ -40,8 +40,9 @@ export function showServerFieldErrors<V>(form: UseFormReturnType<V>, error: unkn
   return true;
 }
 
-/** What the web says when evidence is frozen at hand-over (409 JOB_CLOSED). */
-export const JOB_CLOSED_MESSAGE = 'This job was handed over; its records are frozen. A manager can still correct them — every change is recorded.';
+import { JOB_CLOSED_MESSAGE } from './messages';
+
+export { JOB_CLOSED_MESSAGE };
 
 /** Codes whose wording on a form differs from the server's default message; null = shown under the boxes instead. */
 const FORM_MESSAGES: Partial<Record<ApiError['code'], string | null>> = {

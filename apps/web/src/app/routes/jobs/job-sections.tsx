@@ -1,16 +1,7 @@
-import { roleCan, type JobDetail, type SessionUser, type ShopSettingsDto } from '@benchproof/contracts';
-import { Stack } from '@mantine/core';
+import type { JobDetail, SessionUser, ShopSettingsDto } from '@benchproof/contracts';
+import { lazy, Suspense, type ComponentType } from 'react';
 import { BikeSpecs } from '../../../features/bikes';
-import { FindingsPanel } from '../../../features/findings';
-import { InspectionPanel } from '../../../features/inspection';
-import { FinalCheckPanel, IntakeSection } from '../../../features/jobs';
-import { FindingMediaPicker, JobMediaSection } from '../../../features/media';
-import { PairsPanel } from '../../../features/pairs';
-import { OwnerLinkPanel } from '../../../features/owner';
-import { ReportSection } from '../../../features/reports';
-import { MessagesPanel, SendReportButton } from '../../../features/mail';
-import { TorqueEntries, WorkEntries } from '../../../features/work-log';
-import { useStaff } from '../staff';
+import { IntakeSection } from '../../../features/jobs';
 
 export interface SectionProps {
   job: JobDetail;
@@ -33,71 +24,54 @@ export const JOB_SECTIONS = [
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
-function Findings({ job, me, settings, frozen }: SectionProps) {
-  const { staffName } = useStaff();
-  return (
-    <FindingsPanel
-      jobId={job.id}
-      rates={{ labourRateMinor: settings.labourRateMinor, taxRateBp: settings.taxRateBp, currency: settings.currency }}
-      canDecide={roleCan(me.role, 'recommendations.decide') && !frozen}
-      canEdit={roleCan(me.role, 'findings.edit') && !frozen}
-      ownerName={job.customer.name}
-      me={{ id: me.id, name: me.name }}
-      staffName={staffName}
-      evidence={(findingId) => <FindingMediaPicker jobId={job.id} findingId={findingId} canEdit={roleCan(me.role, 'findings.edit') && !frozen} />}
-    />
-  );
-}
+const section = <M,>(load: () => Promise<M>, pick: (m: M) => ComponentType<SectionProps>) => lazy(async () => ({ default: pick(await load()) }));
 
-function Work({ job, me, frozen }: SectionProps) {
-  const { checkers } = useStaff();
-  return (
-    <Stack gap="xl">
-      <WorkEntries jobId={job.id} canRecord={roleCan(me.role, 'work_log.record') && !frozen} />
-      <TorqueEntries jobId={job.id} canRecord={roleCan(me.role, 'work_log.record') && !frozen} />
-      <FinalCheckPanel job={job} me={me} checkers={checkers} />
-    </Stack>
-  );
-}
+/**
+ * Every section but the intake (the first screen) loads when its tab is first opened, so a cold job page
+ * does not fetch the charts, the photo tools, the pair builder or the report preview before it shows.
+ */
+const LAZY: Record<Exclude<JobSection, 'intake'>, ComponentType<SectionProps>> = {
+  inspection: section(
+    () => import('./sections/inspection-section'),
+    (m) => m.InspectionSection,
+  ),
+  findings: section(
+    () => import('./sections/findings-section'),
+    (m) => m.FindingsSection,
+  ),
+  work: section(
+    () => import('./sections/work-section'),
+    (m) => m.WorkSection,
+  ),
+  media: section(
+    () => import('./sections/media-section'),
+    (m) => m.MediaSection,
+  ),
+  pairs: section(
+    () => import('./sections/pairs-section'),
+    (m) => m.PairsSection,
+  ),
+  report: section(
+    () => import('./sections/report-section'),
+    (m) => m.ReportSection,
+  ),
+  owner: section(
+    () => import('./sections/owner-section'),
+    (m) => m.OwnerSection,
+  ),
+  messages: section(
+    () => import('./sections/messages-section'),
+    (m) => m.MessagesSection,
+  ),
+};
 
 /** One section of the job page; each comes from its own feature. */
-export function JobSectionBody({ section, ...props }: SectionProps & { section: JobSection }) {
-  const { job, me, settings, frozen } = props;
-  switch (section) {
-    case 'intake':
-      return <IntakeSection job={job} bikeSpecs={<BikeSpecs bike={job.bikeDetail} />} />;
-    case 'inspection':
-      return (
-        <InspectionPanel
-          jobId={job.id}
-          chainPolicy={settings.chainLimits ?? undefined}
-          lengthUnit={settings.units === 'imperial' ? 'in' : 'mm'}
-          carbonFrame={job.bikeDetail.frameMaterial === 'carbon'}
-          canRecord={roleCan(me.role, 'inspection.record') && !frozen}
-        />
-      );
-    case 'findings':
-      return <Findings {...props} />;
-    case 'work':
-      return <Work {...props} />;
-    case 'media':
-      // The media feature (features/media) owns this section.
-      return <JobMediaSection jobId={job.id} canSeeDeleted={roleCan(me.role, 'media.view_deleted')} />;
-    case 'pairs':
-      return <PairsPanel jobId={job.id} canEdit={roleCan(me.role, 'pairs.edit') && !frozen} />;
-    case 'report':
-      // Mail (features/mail) adds "Send to owner" under each issued version.
-      return (
-        <ReportSection
-          jobId={job.id}
-          canIssue={roleCan(me.role, 'reports.issue')}
-          extra={roleCan(me.role, 'reports.issue') ? (r) => <SendReportButton jobId={job.id} reportId={r.id} /> : undefined}
-        />
-      );
-    case 'owner':
-      return <OwnerLinkPanel jobId={job.id} canManage={roleCan(me.role, 'owner_links.manage')} ownerName={job.customer.name} />;
-    case 'messages':
-      // The mail feature (features/mail) owns this section: delivery status and resend.
-      return <MessagesPanel jobId={job.id} canResend={roleCan(me.role, 'reports.issue')} />;
-  }
+export function JobSectionBody({ section: s, ...props }: SectionProps & { section: JobSection }) {
+  if (s === 'intake') return <IntakeSection job={props.job} bikeSpecs={<BikeSpecs bike={props.job.bikeDetail} />} />;
+  const Body = LAZY[s];
+  return (
+    <Suspense fallback={null}>
+      <Body {...props} />
+    </Suspense>
+  );
 }

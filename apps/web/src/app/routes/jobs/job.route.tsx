@@ -1,5 +1,5 @@
 import { isTerminalStatus } from '@benchproof/domain';
-import { ScrollArea, Tabs } from '@mantine/core';
+import { Tabs } from '@mantine/core';
 import { useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { useParams, useSearchParams } from 'react-router';
@@ -11,6 +11,7 @@ import { useOwnerEvents } from '../../../features/owner';
 import { FailedMessagesNotice } from '../../../features/mail';
 import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';
+import classes from './job.module.css';
 import { JOB_SECTIONS, JobSectionBody, type JobSection } from './job-sections';
 
 const isSection = (v: string | null): v is JobSection => JOB_SECTIONS.some((s) => s.value === v);
@@ -42,7 +43,7 @@ export function JobRoute() {
       {closed && <FrozenNotice canCorrect={!frozen} />}
       {section !== 'messages' && <FailedMessagesNotice jobId={jobId} onOpen={() => setSearch({ section: 'messages' }, { replace: true })} />}
       <Tabs value={section} onChange={(v) => v && setSearch({ section: v }, { replace: true })} keepMounted={false}>
-        <ScrollArea type="never" mb="md">
+        <div className={classes.tabsScroll}>
           <Tabs.List style={{ flexWrap: 'nowrap' }}>
             {JOB_SECTIONS.map((s) => (
               <Tabs.Tab key={s.value} value={s.value} fz="md" mih={48} style={{ whiteSpace: 'nowrap' }}>
@@ -50,7 +51,7 @@ export function JobRoute() {
               </Tabs.Tab>
             ))}
           </Tabs.List>
-        </ScrollArea>
+        </div>
         <Tabs.Panel value={section}>
           <JobSectionBody section={section} job={job.data} me={me} settings={settings.data} frozen={frozen} />
         </Tabs.Panel>

@@ -1,74 +1,47 @@
 import type { JobDetail } from '@benchproof/contracts';
-import { allowedTransitions, JOB_STATUS_LABELS, nextAction } from '@benchproof/domain';
-import { Alert, Button, Group, Menu, Modal, Stack, Text, Textarea } from '@mantine/core';
+import { allowedTransitions, nextAction } from '@benchproof/domain';
+import { Alert, Button, Group, Stack } from '@mantine/core';
 import { IconAlertTriangle, IconArrowRight, IconDots } from '@tabler/icons-react';
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
+import { useAfterFirstScreen } from '../../../lib/after-first-screen';
 import { useJobMoves, type Move } from './use-job-moves';
 
-function ConfirmMove({ move, onClose, onConfirm, pending }: { move: Move | null; onClose: () => void; onConfirm: (note: string) => void; pending: boolean }) {
-  const [note, setNote] = useState('');
-  return (
-    <Modal opened={move !== null} onClose={onClose} title={move?.label ?? ''}>
-      <Stack>
-        <Text>
-          The job moves to <b>{move ? JOB_STATUS_LABELS[move.to] : ''}</b>.
-        </Text>
-        <Textarea
-          label="Note (optional)"
-          placeholder="Why — shown in the job's history"
-          value={note}
-          onChange={(e) => setNote(e.currentTarget.value)}
-          autosize
-          minRows={2}
-        />
-        <Button size="lg" color={move?.to === 'cancelled' ? 'red' : undefined} loading={pending} onClick={() => onConfirm(note)}>
-          {move?.label}
-        </Button>
-      </Stack>
-    </Modal>
-  );
-}
+const parts = () => import('./job-move-parts');
+const OtherMovesMenu = lazy(async () => ({ default: (await import('./job-menu')).OtherMovesMenu }));
+const ConfirmMove = lazy(async () => ({ default: (await parts()).ConfirmMove }));
+const ConfirmNoReport = lazy(async () => ({ default: (await parts()).ConfirmNoReport }));
 
-/** Handing over with no report sent: desk confirms, and the job records that the bike left without one. */
-function ConfirmNoReport({ opened, onClose, onConfirm, pending }: { opened: boolean; onClose: () => void; onConfirm: () => void; pending: boolean }) {
-  return (
-    <Modal opened={opened} onClose={onClose} title="No report sent yet">
-      <Stack>
-        <Text>No bench report has been e-mailed to the owner for this job. If the bike leaves now, the job records that it was handed over without one.</Text>
-        <Button size="lg" color="orange" loading={pending} onClick={onConfirm}>
-          Hand over without a report
-        </Button>
-        <Button size="lg" variant="default" onClick={onClose}>
-          Not yet — send the report first
-        </Button>
-      </Stack>
-    </Modal>
+/**
+ * "More moves": the same button on the first screen; its menu's code loads a moment later or on the first tap, which
+ * it then replays so the menu opens (not on hover or focus: swapping the button under a pressed pointer swallows the click).
+ */
+function MoreMoves({ moves, onPick }: { moves: Move[]; onPick: (move: Move) => void }) {
+  const [ready, wake] = useAfterFirstScreen();
+  const [tapped, setTapped] = useState(false);
+  const still = (
+    <Button
+      size="lg"
+      variant="default"
+      aria-label="Other moves"
+      leftSection={<IconDots />}
+      style={{ flex: '1 0 auto' }}
+      onClick={() => (setTapped(true), wake())}
+    >
+      More moves
+    </Button>
   );
-}
-
-/** The allowed moves other than the next one, each asking for confirmation first. */
-function OtherMovesMenu({ moves, onPick }: { moves: Move[]; onPick: (move: Move) => void }) {
+  if (!ready) return still;
   return (
-    <Menu position="bottom-end" withinPortal>
-      <Menu.Target>
-        <Button size="lg" variant="default" aria-label="Other moves" leftSection={<IconDots />} style={{ flex: '1 0 auto' }}>
-          More moves
-        </Button>
-      </Menu.Target>
-      <Menu.Dropdown>
-        {moves.map((t) => (
-          <Menu.Item key={t.to} color={t.to === 'cancelled' ? 'red' : undefined} onClick={() => onPick(t)} style={{ minHeight: 44 }}>
-            {t.label}
-          </Menu.Item>
-        ))}
-      </Menu.Dropdown>
-    </Menu>
+    <Suspense fallback={still}>
+      <OtherMovesMenu moves={moves} onPick={onPick} openAtOnce={tapped} />
+    </Suspense>
   );
 }
 
 /** The next sensible move as one big button, the other allowed moves in a menu. */
 export function JobActions({ job }: { job: JobDetail }) {
   const { confirm, setConfirm, move, handOverWithoutReport, pending, noReport, error, dismissError } = useJobMoves(job.id);
+  const [ready] = useAfterFirstScreen();
   const primary = job.nextAction ?? nextAction(job.status);
   const others: Move[] = (job.allowedTransitions.length ? job.allowedTransitions : allowedTransitions(job.status)).filter((t) => t.to !== primary?.to);
   return (
@@ -79,21 +52,25 @@ export function JobActions({ job }: { job: JobDetail }) {
             {primary.label}
           </Button>
         )}
-        {others.length > 0 && <OtherMovesMenu moves={others} onPick={setConfirm} />}
+        {others.length > 0 && <MoreMoves moves={others} onPick={setConfirm} />}
       </Group>
       {error && (
         <Alert color="red" variant="light" icon={<IconAlertTriangle />} role="alert" withCloseButton onClose={dismissError}>
           {error}
         </Alert>
       )}
-      <ConfirmNoReport opened={noReport} onClose={dismissError} onConfirm={handOverWithoutReport} pending={pending} />
-      <ConfirmMove
-        key={confirm?.to ?? 'none'}
-        move={confirm}
-        onClose={() => setConfirm(null)}
-        onConfirm={(note) => confirm && move(confirm.to, note)}
-        pending={pending}
-      />
+      {(ready || noReport || confirm) && (
+        <Suspense fallback={null}>
+          <ConfirmNoReport opened={noReport} onClose={dismissError} onConfirm={handOverWithoutReport} pending={pending} />
+          <ConfirmMove
+            key={confirm?.to ?? 'none'}
+            move={confirm}
+            onClose={() => setConfirm(null)}
+            onConfirm={(note) => confirm && move(confirm.to, note)}
+            pending={pending}
+          />
+        </Suspense>
+      )}
     </Stack>
   );
 }

@@ -1,9 +1,10 @@
 import type { JobDetail } from '@benchproof/contracts';
-import { Anchor, Badge, Group, Paper, Select, SimpleGrid, Stack, Text, Title } from '@mantine/core';
+import { Anchor, Badge, Group, Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
 import { IconMail, IconMessage, IconPhone } from '@tabler/icons-react';
 import { Link } from 'react-router';
 import { useUpdateJob } from '../api/jobs';
 import { JobActions } from './job-actions';
+import { MechanicBox } from './job-header-lazy';
 import type { Option } from './job-filters';
 import { jobBikeLabel } from './job-label';
 import { JobStatusBadge } from './job-status-badge';
@@ -62,15 +63,12 @@ function Mechanic({ job, mechanics, canAssign }: { job: JobDetail; mechanics: Op
     );
   }
   return (
-    <Select
-      label="Mechanic"
-      placeholder="Not assigned"
-      data={mechanics}
+    <MechanicBox
+      mechanics={mechanics}
       value={job.mechanic ? String(job.mechanic.id) : null}
       onChange={(v) => update.mutate({ mechanicId: v ? Number(v) : null })}
       disabled={update.isPending}
       error={update.error?.message}
-      clearable
     />
   );
 }

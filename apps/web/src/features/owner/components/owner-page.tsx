@@ -1,14 +1,14 @@
 import type { OwnerFinding } from '@benchproof/contracts';
 import { formatMoney } from '@benchproof/domain';
 import { Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useOwnerPage } from '../api/owner-page';
-import { ConfirmDecisions } from './confirm-decisions';
-import { ConsentCard } from './consent-card';
+import { Deferred } from './deferred';
 import { LinkProblem } from './link-problem';
 import classes from './owner.module.css';
 import { OwnerFindingCard } from './owner-finding';
+import { ConfirmDecisions, ConsentCard, loadConfirmDecisions } from './owner-lazy';
 import { BikeAndJob, BrandBar, Measurements, Pairs, ReportAndContact } from './owner-sections';
 import { useChoices, type Choice } from './use-choices';
 
@@ -79,11 +79,48 @@ function AnswerBar({ answered, pending, approved, onConfirm }: { answered: numbe
   );
 }
 
+type Choices = ReturnType<typeof useChoices>;
+
+/**
+ * The confirm dialog, whose code loads when the owner makes a first choice (so Confirm opens at once) and
+ * stays mounted after the first opening, as it always was, so it keeps its ticks and transitions.
+ */
+function Decisions(props: {
+  token: string;
+  c: Choices;
+  opened: boolean;
+  everOpened: boolean;
+  currency: string;
+  onClose: () => void;
+  onSent: () => void;
+  refetch: () => void;
+}) {
+  const { c, opened } = props;
+  if (!props.everOpened) return null;
+  return (
+    <Suspense fallback={null}>
+      <ConfirmDecisions
+        token={props.token}
+        opened={opened}
+        onClose={props.onClose}
+        onDone={() => (props.onSent(), c.reset())}
+        onPriceChanged={() => (c.reset(), props.refetch())}
+        chosen={c.chosen}
+        choices={c.choices}
+        approvedMinor={c.approvedMinor}
+        currency={props.currency}
+      />
+    </Suspense>
+  );
+}
+
 function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPageData; refetch: () => void }) {
   const c = useChoices(page.findings);
   const [confirming, setConfirming] = useState(false);
+  const [everConfirmed, setEverConfirmed] = useState(false);
   const [sent, setSent] = useState(false);
   const currency = page.findings.find((f) => f.recommendation)?.recommendation?.currency ?? 'EUR';
+  const choose = (recId: number, ch: Choice) => (void loadConfirmDecisions(), c.choose(recId, ch));
   return (
     <div className={classes.page}>
       <BrandBar page={page} />
@@ -94,10 +131,16 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
             Thank you — the shop has your answers.
           </Text>
         )}
-        {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={c.choose} />}
+        {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} />}
         <Measurements page={page} />
-        <Pairs page={page} />
-        <ConsentCard token={token} consent={page.consent} />
+        {page.pairs.length > 0 && (
+          <Deferred>
+            <Pairs page={page} />
+          </Deferred>
+        )}
+        <Deferred>
+          <ConsentCard token={token} consent={page.consent} />
+        </Deferred>
         <ReportAndContact page={page} />
       </Stack>
       {c.pending.length > 0 && (
@@ -105,26 +148,18 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
           answered={c.chosen.length}
           pending={c.pending.length}
           approved={formatMoney(c.approvedMinor, currency)}
-          onConfirm={() => setConfirming(true)}
+          onConfirm={() => (setConfirming(true), setEverConfirmed(true))}
         />
       )}
-      <ConfirmDecisions
+      <Decisions
         token={token}
+        c={c}
         opened={confirming}
-        onClose={() => setConfirming(false)}
-        onDone={() => {
-          setConfirming(false);
-          setSent(true);
-          c.reset();
-        }}
-        onPriceChanged={() => {
-          c.reset();
-          refetch();
-        }}
-        chosen={c.chosen}
-        choices={c.choices}
-        approvedMinor={c.approvedMinor}
+        everOpened={everConfirmed}
         currency={currency}
+        onClose={() => setConfirming(false)}
+        onSent={() => (setConfirming(false), setSent(true))}
+        refetch={refetch}
       />
     </div>
   );

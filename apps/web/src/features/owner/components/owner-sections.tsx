@@ -1,10 +1,11 @@
 import type { OwnerPageDto } from '@benchproof/contracts';
 import { GENERAL_SAFETY } from '@benchproof/domain';
 import { Anchor, Button, Card, Group, Stack, Text, Title } from '@mantine/core';
+import { Suspense } from 'react';
 import { IconDownload, IconPhone } from '@tabler/icons-react';
 import { ConditionBadge } from '../../../components/condition-badge';
 import classes from './owner.module.css';
-import { PairSlider } from './pair-slider';
+import { PairSlider } from './owner-lazy';
 
 /** Shop name in its own colours, and a big tap-to-call button. */
 export function BrandBar({ page }: { page: OwnerPageDto }) {
@@ -85,9 +86,11 @@ export function Pairs({ page }: { page: OwnerPageDto }) {
       <Title order={2} size="h3">
         Before and after
       </Title>
-      {page.pairs.map((p) => (
-        <PairSlider key={p.id} pair={p} />
-      ))}
+      <Suspense fallback={null}>
+        {page.pairs.map((p) => (
+          <PairSlider key={p.id} pair={p} />
+        ))}
+      </Suspense>
     </Stack>
   );
 }

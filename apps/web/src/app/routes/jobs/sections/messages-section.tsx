@@ -1,0 +1,8 @@
+import { roleCan } from '@benchproof/contracts';
+import { MessagesPanel } from '../../../../features/mail';
+import type { SectionProps } from '../job-sections';
+
+// The mail feature (features/mail) owns this section: delivery status and resend.
+export function MessagesSection({ job, me }: SectionProps) {
+  return <MessagesPanel jobId={job.id} canResend={roleCan(me.role, 'reports.issue')} />;
+}
