@@ -24,45 +24,19 @@ export const JOB_SECTIONS = [
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
-const section = <M,>(load: () => Promise<M>, pick: (m: M) => ComponentType<SectionProps>) => lazy(async () => ({ default: pick(await load()) }));
-
 /**
  * Every section but the intake (the first screen) loads when its tab is first opened, so a cold job page
  * does not fetch the charts, the photo tools, the pair builder or the report preview before it shows.
  */
 const LAZY: Record<Exclude<JobSection, 'intake'>, ComponentType<SectionProps>> = {
-  inspection: section(
-    () => import('./sections/inspection-section'),
-    (m) => m.InspectionSection,
-  ),
-  findings: section(
-    () => import('./sections/findings-section'),
-    (m) => m.FindingsSection,
-  ),
-  work: section(
-    () => import('./sections/work-section'),
-    (m) => m.WorkSection,
-  ),
-  media: section(
-    () => import('./sections/media-section'),
-    (m) => m.MediaSection,
-  ),
-  pairs: section(
-    () => import('./sections/pairs-section'),
-    (m) => m.PairsSection,
-  ),
-  report: section(
-    () => import('./sections/report-section'),
-    (m) => m.ReportSection,
-  ),
-  owner: section(
-    () => import('./sections/owner-section'),
-    (m) => m.OwnerSection,
-  ),
-  messages: section(
-    () => import('./sections/messages-section'),
-    (m) => m.MessagesSection,
-  ),
+  inspection: lazy(() => import('./sections/inspection-section')),
+  findings: lazy(() => import('./sections/findings-section')),
+  work: lazy(() => import('./sections/work-section')),
+  media: lazy(() => import('./sections/media-section')),
+  pairs: lazy(() => import('./sections/pairs-section')),
+  report: lazy(() => import('./sections/report-section')),
+  owner: lazy(() => import('./sections/owner-section')),
+  messages: lazy(() => import('./sections/messages-section')),
 };
 
 /** One section of the job page; each comes from its own feature. */

@@ -4,7 +4,7 @@ import { FindingMediaPicker } from '../../../../features/media';
 import { useStaff } from '../../staff';
 import type { SectionProps } from '../job-sections';
 
-export function FindingsSection({ job, me, settings, frozen }: SectionProps) {
+export default function FindingsSection({ job, me, settings, frozen }: SectionProps) {
   const { staffName } = useStaff();
   return (
     <FindingsPanel

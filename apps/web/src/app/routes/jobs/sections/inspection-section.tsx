@@ -2,7 +2,7 @@ import { roleCan } from '@benchproof/contracts';
 import { InspectionPanel } from '../../../../features/inspection';
 import type { SectionProps } from '../job-sections';
 
-export function InspectionSection({ job, me, settings, frozen }: SectionProps) {
+export default function InspectionSection({ job, me, settings, frozen }: SectionProps) {
   return (
     <InspectionPanel
       jobId={job.id}

@@ -3,6 +3,6 @@ import { JobMediaSection } from '../../../../features/media';
 import type { SectionProps } from '../job-sections';
 
 // The media feature (features/media) owns this section.
-export function MediaSection({ job, me }: SectionProps) {
+export default function MediaSection({ job, me }: SectionProps) {
   return <JobMediaSection jobId={job.id} canSeeDeleted={roleCan(me.role, 'media.view_deleted')} />;
 }

@@ -3,6 +3,6 @@ import { MessagesPanel } from '../../../../features/mail';
 import type { SectionProps } from '../job-sections';
 
 // The mail feature (features/mail) owns this section: delivery status and resend.
-export function MessagesSection({ job, me }: SectionProps) {
+export default function MessagesSection({ job, me }: SectionProps) {
   return <MessagesPanel jobId={job.id} canResend={roleCan(me.role, 'reports.issue')} />;
 }

@@ -2,6 +2,6 @@ import { roleCan } from '@benchproof/contracts';
 import { OwnerLinkPanel } from '../../../../features/owner';
 import type { SectionProps } from '../job-sections';
 
-export function OwnerSection({ job, me }: SectionProps) {
+export default function OwnerSection({ job, me }: SectionProps) {
   return <OwnerLinkPanel jobId={job.id} canManage={roleCan(me.role, 'owner_links.manage')} ownerName={job.customer.name} />;
 }

@@ -4,7 +4,7 @@ import { ReportSection as Reports } from '../../../../features/reports';
 import type { SectionProps } from '../job-sections';
 
 // Mail (features/mail) adds "Send to owner" under each issued version.
-export function ReportSection({ job, me }: SectionProps) {
+export default function ReportSection({ job, me }: SectionProps) {
   return (
     <Reports
       jobId={job.id}

@@ -5,7 +5,7 @@ import { TorqueEntries, WorkEntries } from '../../../../features/work-log';
 import { useStaff } from '../../staff';
 import type { SectionProps } from '../job-sections';
 
-export function WorkSection({ job, me, frozen }: SectionProps) {
+export default function WorkSection({ job, me, frozen }: SectionProps) {
   const { checkers } = useStaff();
   return (
     <Stack gap="xl">
