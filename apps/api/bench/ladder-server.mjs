@@ -45,7 +45,7 @@ async function nestApp() {
   const { JwtStrategy } = src('core/auth/jwt.strategy.js');
   const { DbModule } = src('core/db');
   const { ClockModule } = src('infra/clock');
-  const { requestLogging } = src('core/logging');
+  const { createLogger, requestLog } = src('core/logging');
   const cfg = loadConfig();
 
   class Probe {
@@ -76,13 +76,10 @@ async function nestApp() {
     }
     providers.push({ provide: APP_GUARD, useClass: auth.PolicyGuard }, { provide: APP_GUARD, useClass: CsrfGuard });
   }
-  if (has('logging')) {
-    const { LoggerModule } = req('nestjs-pino');
-    imports.push(LoggerModule.forRoot(requestLogging(cfg)));
-  }
   class LadderModule {}
   Module({ imports, providers, controllers: [Probe] })(LadderModule);
   const app = await NestFactory.create(LadderModule, { logger: ['warn', 'error'] });
+  if (has('logging')) app.use(requestLog(createLogger(cfg)));
   app.setGlobalPrefix('api');
   await app.listen(0, '127.0.0.1');
   return app.getHttpServer().address().port;

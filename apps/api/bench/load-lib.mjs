@@ -6,7 +6,7 @@ import { fork } from 'node:child_process';
 import { createRequire } from 'node:module';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { ENTRY_REL, freePort, signIn, startDemoApi, waitForHealth, waitForIdleTasks } from './bench-lib.mjs';
+import { ENTRY_REL, START_ENV, freePort, signIn, startDemoApi, waitForHealth, waitForIdleTasks } from './bench-lib.mjs';
 
 export const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '../../..');
 export const JOBS = Number(process.env.BENCH_JOBS ?? 10_000);
@@ -56,7 +56,7 @@ export async function startProbed(dir, env, extra = {}) {
   const base = `http://127.0.0.1:${port}`;
   const child = fork(join(ROOT, ENTRY_REL), {
     execArgv: ['-r', PROBE, ...(extra.execArgv ?? [])],
-    env: { MALLOC_ARENA_MAX: '2', ...process.env, LOG_LEVEL: 'info', ...env, PORT: String(port), ...(extra.env ?? {}) },
+    env: { ...START_ENV, ...process.env, LOG_LEVEL: 'info', ...env, PORT: String(port), ...(extra.env ?? {}) },
     stdio: ['ignore', 'ignore', 'inherit', 'ipc'],
   });
   await waitForHealth(base, child);

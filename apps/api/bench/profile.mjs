@@ -33,7 +33,9 @@ const byFn = new Map();
 const byPkg = new Map();
 for (const n of nodes) {
   const { functionName, url, lineNumber } = n.callFrame;
-  const pkg = /node_modules\/((?:@[^/]+\/)?[^/]+)/.exec(url)?.[1] ?? (url.includes('/dist/') ? 'app' : url ? url.replace(/^.*\//, '') : n.callFrame.functionName || '(native)');
+  const pkg =
+    /node_modules\/((?:@[^/]+\/)?[^/]+)/.exec(url)?.[1] ??
+    (url.includes('/dist/') ? 'app' : url ? url.replace(/^.*\//, '') : n.callFrame.functionName || '(native)');
   const key = `${functionName || '(anonymous)'} ${url.replace(/^.*node_modules\//, '').replace(/^.*\/dist\//, 'dist/')}:${lineNumber + 1}`;
   byFn.set(key, (byFn.get(key) ?? 0) + self.get(n.id));
   byPkg.set(pkg, (byPkg.get(pkg) ?? 0) + self.get(n.id));
