@@ -18,7 +18,7 @@ const has = (rung) => RUNGS.indexOf(step) >= RUNGS.indexOf(rung);
 
 function bareExpress() {
   const app = express();
-  app.get('/api/auth/session', (_req, res) => res.json(payload));
+  app.get(process.env.LADDER_PATH?.split('?')[0] ?? '/api/auth/session', (_req, res) => res.json(payload));
   return new Promise((ok) => {
     const s = app.listen(0, '127.0.0.1', () => ok(s.address().port));
   });

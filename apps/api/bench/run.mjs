@@ -16,6 +16,7 @@ if (!existsSync(join(root, 'dist/apps/api')) || !existsSync(join(root, 'dist/app
 const BENCHES = [
   'ladder.bench.mjs',
   'jobs-list.bench.mjs',
+  'memory.bench.mjs',
   'photo.bench.mjs',
   'media-serve.bench.mjs',
   'web-load.bench.mjs',
