@@ -56,7 +56,10 @@ const levelOf = (status: number, aborted: boolean): Level => (status >= 500 ? 'e
  * method, redacted URL, status, duration in ms, user, shop and route pattern. Built when the response
  * closes and only when its level is on; no child logger and no async context per request.
  */
-export function requestLog(logger: Logger): RequestHandler {
+export function requestLog(root: Logger): RequestHandler {
+  // Request lines are built from known fields only (no headers, no bodies, URL redacted above), so they skip
+  // the redact pass, which cost more than the rest of writing a line (pino 10, ~9 µs of ~15). Made once.
+  const logger = root.child({}, { redact: [] });
   return (req: Request, res: Response, next: NextFunction) => {
     const given = req.headers['x-request-id'];
     const id = typeof given === 'string' && REQUEST_ID.test(given) ? given : randomUUID();
