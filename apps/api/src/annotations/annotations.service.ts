@@ -5,7 +5,7 @@ import { DomainInputError } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { MediaService } from '../media';
 import { AnnotationRenderService } from './annotation-render.service';

@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { consents } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 
 export type ConsentRow = typeof consents.$inferSelect;
 export type NewConsentRow = typeof consents.$inferInsert;

@@ -5,7 +5,7 @@ import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { ConsentChangedEvent, publish } from '../core/events';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess, type JobCaller } from '../jobs';
 import { type ConsentRow, ConsentRepository } from './consent.repository';
 

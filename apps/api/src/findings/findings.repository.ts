@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { decisions, findings, recommendations } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 
 export type FindingRow = typeof findings.$inferSelect;
 export type NewFindingRow = typeof findings.$inferInsert;

@@ -16,7 +16,7 @@ import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
 import { publish, RecommendationDecidedEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { JobAccess, type EvidenceKind, type JobCaller, type JobRef } from '../jobs';
 import { ShopsService } from '../shops';

@@ -8,7 +8,7 @@ import type { AuthUser } from '../core/auth';
 import { JobBookedInEvent, publish } from '../core/events';
 import { DomainError } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { ShopsService } from '../shops';
 import { JobsRepository } from './jobs.repository';
 

@@ -3,7 +3,7 @@ import { and, asc, desc, eq } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { finalChecks, jobStatusEvents, jobs } from '../db/schema';
 import { JobsListQuery, type JobListRow, type JobSearch } from './jobs-list.query';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 
 export type JobRow = typeof jobs.$inferSelect;
 export type NewJobRow = typeof jobs.$inferInsert;

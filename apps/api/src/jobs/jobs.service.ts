@@ -19,7 +19,7 @@ import type { AuthUser } from '../core/auth';
 import { JobMovedEvent, publish } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import { BookInService } from './book-in.service';

@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq, inArray, isNull, lte, ne, or, sql } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { outboxMessages } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 
 export type OutboxRow = typeof outboxMessages.$inferSelect;
 export type NewOutboxRow = typeof outboxMessages.$inferInsert;

@@ -6,7 +6,7 @@ import { AuditService } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { SNIFFER, type FileSniffer } from '../infra/sniff';
 import { STORAGE, UPLOAD_TEMP, type Storage, type UploadTemp } from '../infra/storage';

@@ -6,7 +6,7 @@ import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { FindingsService } from '../findings';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess, type JobCaller } from '../jobs';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';

@@ -5,7 +5,7 @@ import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess } from '../jobs';
 import { OwnerEventsBus } from './owner-events';
 import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';

@@ -5,7 +5,7 @@ import { pairProblem, PAIRABLE_KINDS, suggestPairs, type PairProblem } from '@be
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess, type JobCaller } from '../jobs';
 import { MediaService, type ShotForPairing } from '../media';
 import { PairsRepository, type ShotPairRow } from './pairs.repository';

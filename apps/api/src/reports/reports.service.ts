@@ -6,13 +6,13 @@ import { buffer } from 'node:stream/consumers';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { PDF_PAGES, type PdfPageImages } from '../infra/pdf';
 import { STORAGE, type Storage } from '../infra/storage';
 import { JobAccess } from '../jobs';
 import { ShopsService } from '../shops';
 import type { ReportSnapshot } from './report-data';
-import { ReportRenderService, type RenderActor } from './report-render.service';
+import { ReportRenderService } from './report-render.service';
 import { ReportSnapshotService } from './report-snapshot.service';
 import { toReportDto } from './reports.mapper';
 import { ReportsRepository, type ReportRow } from './reports.repository';
@@ -29,8 +29,6 @@ export interface IssuedReportFile {
   stream(): Readable;
   bytes(): Promise<Buffer>;
 }
-
-const actorOf = (u: AuthUser): RenderActor => ({ id: u.id, shopId: u.shopId, role: u.role, email: u.email, name: u.name });
 
 /** Drafts, issued versions and the public check of a job's bench report. */
 @Injectable()
@@ -49,10 +47,7 @@ export class ReportsService implements OnApplicationBootstrap {
 
   /** Renders left unfinished by a restart are queued again (the render is idempotent). */
   onApplicationBootstrap(): void {
-    for (const row of this.repo.listRendering()) {
-      const actor = (row.snapshot as { renderedFor?: RenderActor }).renderedFor;
-      if (actor) this.renderer.enqueue(row, actor);
-    }
+    for (const row of this.repo.listRendering()) this.renderer.enqueue(row);
   }
 
   list(actor: AuthUser, jobId: number): ReportDto[] {
@@ -69,7 +64,7 @@ export class ReportsService implements OnApplicationBootstrap {
   /** Freezes the job's records now and renders a draft in the background; answers at once. */
   async createDraft(actor: AuthUser, jobId: number): Promise<ReportDto> {
     this.jobs.read(actor, jobId);
-    const snapshot = { ...(await this.snapshots.build(actor, jobId)), renderedFor: actorOf(actor) };
+    const snapshot = await this.snapshots.build(actor, jobId);
     const row = this.repo.insert({
       shopId: actor.shopId,
       jobId,
@@ -80,7 +75,7 @@ export class ReportsService implements OnApplicationBootstrap {
       createdBy: actor.id,
       createdAt: this.clock.now(),
     });
-    this.renderer.enqueue(row, actorOf(actor));
+    this.renderer.enqueue(row);
     return this.get(actor, jobId, row.id);
   }
 
@@ -113,7 +108,7 @@ export class ReportsService implements OnApplicationBootstrap {
         issuedAt,
       });
     });
-    this.renderer.enqueue(row, actorOf(actor));
+    this.renderer.enqueue(row);
     this.audit.record(actor, {
       action: 'report.issued',
       entityType: 'report',

@@ -3,7 +3,7 @@ import type { CreateUserRequest, UpdateUserRequest, UserDto } from '@benchproof/
 import { AuditService } from '../audit';
 import { SessionStore, type AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { hashPassword, verifyPassword } from './password';
 import { type UserRow, UsersRepository } from './users.repository';
 
@@ -20,6 +20,12 @@ export class UsersService {
 
   list(actor: AuthUser): UserDto[] {
     return this.repo.listByShop(actor.shopId).map(toDto);
+  }
+
+  /** An active staff member as a caller, for work done later on their behalf (background tasks carry only the id). */
+  identity(shopId: number, id: number): AuthUser | null {
+    const u = this.repo.findInShop(shopId, id);
+    return u?.active ? { id: u.id, shopId: u.shopId, role: u.role, email: u.email, name: u.name } : null;
   }
 
   /** Staff of the caller's shop, for pickers such as the assigned mechanic. */

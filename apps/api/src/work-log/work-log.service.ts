@@ -4,7 +4,7 @@ import { isDomainInputError, isWrenchCalibrationOverdue, latestCalendarDate, tor
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess } from '../jobs';
 import { UsersService } from '../users';
 import type { StoredTorqueInput } from '../db/schema';
