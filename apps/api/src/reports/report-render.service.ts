@@ -4,6 +4,7 @@ import { Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
+import type { DbTx } from '../core/db';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { PDF, type PdfAdapter } from '../infra/pdf';
 import { STORAGE, type Storage } from '../infra/storage';
@@ -35,8 +36,8 @@ export class ReportRenderService {
   ) {}
 
   /** The shots are read in the report's own shop; the snapshot already says what to print. */
-  enqueue(row: Pick<ReportRow, 'id' | 'shopId'>): void {
-    this.tasks.enqueue({ kind: RENDER_TASK, key: String(row.id), shopId: row.shopId, payload: { reportId: row.id } });
+  enqueue(row: Pick<ReportRow, 'id' | 'shopId'>, tx?: DbTx): void {
+    this.tasks.enqueue({ kind: RENDER_TASK, key: String(row.id), shopId: row.shopId, payload: { reportId: row.id } }, tx);
   }
 
   progress(reportId: number): number {

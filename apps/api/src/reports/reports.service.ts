@@ -16,6 +16,7 @@ import { ReportRenderService } from './report-render.service';
 import { ReportSnapshotService } from './report-snapshot.service';
 import { toReportDto } from './reports.mapper';
 import { ReportsRepository, type ReportRow } from './reports.repository';
+import { UnitOfWork } from '../core/db';
 
 /** An issued report's PDF, for the mail feature (attachment) and downloads. */
 export interface IssuedReportFile {
@@ -35,6 +36,7 @@ export interface IssuedReportFile {
 export class ReportsService implements OnApplicationBootstrap {
   constructor(
     private readonly repo: ReportsRepository,
+    private readonly uow: UnitOfWork,
     private readonly snapshots: ReportSnapshotService,
     private readonly renderer: ReportRenderService,
     private readonly jobs: JobAccess,
@@ -65,17 +67,20 @@ export class ReportsService implements OnApplicationBootstrap {
   async createDraft(actor: AuthUser, jobId: number): Promise<ReportDto> {
     this.jobs.read(actor, jobId);
     const snapshot = await this.snapshots.build(actor, jobId);
-    const row = this.repo.insert({
-      shopId: actor.shopId,
-      jobId,
-      kind: 'draft',
-      state: 'rendering',
-      pageSize: this.shops.settings(actor.shopId).pageSize,
-      snapshot,
-      createdBy: actor.id,
-      createdAt: this.clock.now(),
+    const row = this.uow.run((tx) => {
+      const draft = this.repo.insert({
+        shopId: actor.shopId,
+        jobId,
+        kind: 'draft',
+        state: 'rendering',
+        pageSize: this.shops.settings(actor.shopId).pageSize,
+        snapshot,
+        createdBy: actor.id,
+        createdAt: this.clock.now(),
+      });
+      this.renderer.enqueue(draft, tx);
+      return draft;
     });
-    this.renderer.enqueue(row);
     return this.get(actor, jobId, row.id);
   }
 
@@ -88,12 +93,12 @@ export class ReportsService implements OnApplicationBootstrap {
     if (draft.kind !== 'draft') throw new DomainError('CONFLICT', 'Only a draft can be issued.');
     if (draft.state !== 'ready') throw new DomainError('REPORT_NOT_READY');
     const issuedAt = this.clock.now();
-    const row = this.repo.transaction(() => {
+    const row = this.uow.run((tx) => {
       const version = this.repo.nextVersion(actor.shopId, jobId);
       const fingerprint = createHash('sha256')
         .update(JSON.stringify({ shopId: actor.shopId, jobId, version, issuedAt: issuedAt.toISOString(), snapshot: draft.snapshot }))
         .digest('hex');
-      return this.repo.insert({
+      const issued = this.repo.insert({
         shopId: actor.shopId,
         jobId,
         kind: 'issued',
@@ -107,13 +112,14 @@ export class ReportsService implements OnApplicationBootstrap {
         createdAt: issuedAt,
         issuedAt,
       });
-    });
-    this.renderer.enqueue(row);
-    this.audit.record(actor, {
-      action: 'report.issued',
-      entityType: 'report',
-      entityId: row.id,
-      details: { jobId, version: row.version, fingerprint: row.fingerprint },
+      this.renderer.enqueue(issued, tx);
+      this.audit.record(actor, {
+        action: 'report.issued',
+        entityType: 'report',
+        entityId: issued.id,
+        details: { jobId, version: issued.version, fingerprint: issued.fingerprint },
+      });
+      return issued;
     });
     return this.get(actor, jobId, row.id);
   }

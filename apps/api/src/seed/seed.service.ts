@@ -67,7 +67,7 @@ export class SeedService {
       .insert(shops)
       .values({ ...settings, createdAt: now })
       .returning()
-      .get();
+      .all()[0];
     for (const s of staff) {
       this.db
         .insert(users)
