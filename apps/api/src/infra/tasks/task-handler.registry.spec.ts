@@ -54,7 +54,12 @@ async function boot(handlers: (new (...args: never[]) => object)[]) {
   const runner = { register: (kind: string, handler: (t: never) => Promise<void>, options: unknown) => registered.set(kind, { handler, options }) };
   const mod = await Test.createTestingModule({
     imports: [DiscoveryModule],
-    providers: [TaskHandlerRegistry, ...handlers, { provide: TASK_RUNNER, useValue: runner }, { provide: APP_CONFIG, useValue: { DERIVATIVES_CONCURRENCY: 4 } }],
+    providers: [
+      TaskHandlerRegistry,
+      ...handlers,
+      { provide: TASK_RUNNER, useValue: runner },
+      { provide: APP_CONFIG, useValue: { DERIVATIVES_CONCURRENCY: 4 } },
+    ],
   }).compile();
   return { init: () => mod.init(), mod, registered };
 }
@@ -62,7 +67,9 @@ async function boot(handlers: (new (...args: never[]) => object)[]) {
 describe('TaskHandlerRegistry (@TaskHandler discovered at start-up)', () => {
   it('stops start-up when a declared task kind has no handler, naming the kind', async () => {
     const { init, registered } = await boot([MostKinds]);
-    await expect(init()).rejects.toThrow("Background tasks are not wired: task kind 'report.render' is declared in task-kinds.ts but no @TaskHandler handles it.");
+    await expect(init()).rejects.toThrow(
+      "Background tasks are not wired: task kind 'report.render' is declared in task-kinds.ts but no @TaskHandler handles it.",
+    );
     expect(registered.size).toBe(0);
   });
 
