@@ -44,7 +44,7 @@ async function nestApp() {
   const { JwtAuthGuard } = src('core/auth/jwt-auth.guard.js');
   const { JwtStrategy } = src('core/auth/jwt.strategy.js');
   const { DbModule } = src('core/db');
-  const { ClockModule } = src('infra/clock');
+  const { ClockModule } = src('core/clock');
   const { createLogger, requestLog } = src('core/logging');
   const cfg = loadConfig();
 
