@@ -14,7 +14,7 @@ interface ReportBody {
  * load on first use, not at boot (DEVELOPERS.md, memory). Here a freshly started app meets both for the
  * first time — two reports asked for at once, so two renders race to load the renderer, and a video.
  */
-describe('parts loaded on first use work in a freshly started app', () => {
+describe('parts loaded on first use work in a freshly started app', { timeout: 120_000 }, () => {
   let t: TestApp;
   beforeAll(async () => {
     t = await startTestApp();
