@@ -28,6 +28,13 @@ describe('coordinate precision', () => {
     expect(COORD_STEP * image.width).toBeCloseTo(0.4, 12);
   });
 
+  it('leaves measuring lines exact, so a reading does not move when the photo is saved', () => {
+    const ruler = { ...base, id: 'm', kind: 'ruler', from: { x: 0.1, y: 0.5 }, to: { x: 0.60375, y: 0.5 }, pitches: 4 } as const;
+    expect(compactShape(ruler, image)).toEqual(ruler);
+    const arrow = compactShape({ ...base, id: 'a', kind: 'arrow', from: { x: 0.1, y: 0.5 }, to: { x: 0.60375, y: 0.123456 } }, image);
+    expect(arrow).toMatchObject({ to: { x: 0.6038, y: 0.1235 } });
+  });
+
   it('keeps a tiny ring a ring: radii never round to zero', () => {
     const ring = compactShape({ ...base, id: 'r', kind: 'ring', centre: { x: 0.123456, y: 0.654321 }, rx: 0.00001, ry: 0.2000001 }, image);
     expect(ring).toEqual({ ...base, id: 'r', kind: 'ring', centre: { x: 0.1235, y: 0.6543 }, rx: COORD_STEP, ry: 0.2 });

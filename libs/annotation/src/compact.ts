@@ -43,16 +43,19 @@ export function simplifyStroke(points: Point[], image: { width: number; height: 
   return out;
 }
 
-/** One shape on the coordinate grid, pen strokes simplified. */
+/** One shape on the coordinate grid (measuring lines excepted), pen strokes simplified. */
 export function compactShape<S extends Shape>(shape: S, image: { width: number; height: number }): S {
   const s: Shape = shape;
   switch (s.kind) {
     case 'ring':
       return { ...s, centre: roundPoint(s.centre), rx: roundRadius(s.rx), ry: roundRadius(s.ry) } as S;
     case 'arrow':
+      return { ...s, from: roundPoint(s.from), to: roundPoint(s.to) } as S;
     case 'ruler':
     case 'scale':
-      return { ...s, from: roundPoint(s.from), to: roundPoint(s.to) } as S;
+      // Measuring lines keep full precision: two points cost nothing, and a chain reading
+      // recorded from the saved photo must equal the one the mechanic saw before saving.
+      return s as S;
     case 'pen':
       return { ...s, points: simplifyStroke(s.points, image) } as S;
     case 'label':
