@@ -1,5 +1,5 @@
-import { chainReadingFromRuler, formatMm, rulerLengthMm, type AnnotationDocument, type RulerShape } from '@benchproof/annotation';
-import { Alert, Button, Group, NumberInput, Stack, Text } from '@mantine/core';
+import { chainReadingFromRuler, formatMm, type AnnotationDocument, type RulerShape } from '@benchproof/annotation';
+import { Button, Group, NumberInput, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useChainReading } from '../api/annotation';
@@ -8,7 +8,6 @@ interface Props {
   mediaId: number;
   doc: AnnotationDocument;
   ruler: RulerShape;
-  /** The saved version the reading is taken from, or null while changes are unsaved. */
   savedVersion: number | null;
   onPitches: (pitches: number) => void;
 }
@@ -23,35 +22,33 @@ function preview(doc: AnnotationDocument, ruler: RulerShape, pitches: number): {
   }
 }
 
-function rulerLabel(doc: AnnotationDocument, ruler: RulerShape): string {
-  const mm = rulerLengthMm(doc, ruler.id);
-  return mm === null ? 'No scale yet' : `Ruler: ${formatMm(mm)}`;
-}
-
-/** Why a photo reading is evidence for the owner and not a replacement for the chain checker. */
-function PhotoReadingCaution() {
+/** How far to trust a photo reading (common workshop practice, no published source). */
+function PhotoCaution() {
   return (
-    <Alert color="yellow" variant="light" title="How far to trust a photo reading">
-      Common practice, no source: the camera must face the chain square-on and the rule must lie in the chain&apos;s plane; lens distortion and a tilted camera
-      each add error near the frame edges. A chain checker or a steel rule over 24 pitches at the bench remains the reference; use the photo to show the owner,
-      and confirm a borderline reading with the tool.
-    </Alert>
+    <Text size="xs" c="dimmed">
+      Hold the camera square to the chain with the rule in the chain&apos;s plane; tilt and lens distortion add error near the edges. Confirm a borderline
+      reading with a chain checker or a steel rule at the bench.
+    </Text>
   );
 }
 
-/** Chain wear from the photo: a ruler over N pitches, recorded on the chain checkpoint with this photo as evidence. */
-export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Props) {
+/**
+ * Chain wear from the photo: a ruler over N pitches, recorded on the chain checkpoint with this
+ * photo as evidence. The caution is common workshop practice (no published source): a photo
+ * shows the owner; the chain checker or a steel rule at the bench stays the reference.
+ */
+export function ChainWear({ mediaId, doc, ruler, savedVersion, onPitches }: Props) {
   const [pitches, setPitches] = useState<number>(ruler.pitches ?? 24);
   const record = useChainReading(mediaId);
   const p = preview(doc, ruler, pitches);
   const error = record.error instanceof ApiError ? (record.error.fieldErrors().rulerId ?? record.error.message) : null;
   return (
-    <Stack gap="xs" p="sm" bg="white" data-testid="chain-panel">
-      <Group align="flex-end" wrap="wrap">
+    <Stack gap={6} mt="xs" data-testid="chain-panel">
+      <Group align="flex-end" wrap="nowrap" gap="xs">
         <NumberInput
-          label="Pitches under the ruler (pin to pin; a full link is 2)"
+          label="Pitches under the ruler (a full link is 2)"
           size="md"
-          w={220}
+          style={{ flex: 1 }}
           min={2}
           max={240}
           value={pitches}
@@ -63,27 +60,28 @@ export function ChainPanel({ mediaId, doc, ruler, savedVersion, onPitches }: Pro
         />
         <Button
           size="md"
-          h={48}
+          h={44}
           disabled={!p.ok || savedVersion === null}
           loading={record.isPending}
           onClick={() => savedVersion !== null && record.mutate({ rulerId: ruler.id, pitches, version: savedVersion })}
         >
-          Record chain wear
+          Record
         </Button>
       </Group>
-      <Text fw={700} data-testid="ruler-length">
-        {rulerLabel(doc, ruler)}
-      </Text>
-      <Text fw={600} data-testid="chain-preview">
+      <Text fw={600} size="sm" data-testid="chain-preview">
         {p.text}
       </Text>
       {record.data && (
-        <Text c="green.8" data-testid="chain-recorded">
+        <Text c="green.8" size="sm" data-testid="chain-recorded">
           Recorded: {record.data.result.message}
         </Text>
       )}
-      {error && <Text c="red.8">{error}</Text>}
-      <PhotoReadingCaution />
+      {error && (
+        <Text c="red.8" size="sm">
+          {error}
+        </Text>
+      )}
+      <PhotoCaution />
     </Stack>
   );
 }
