@@ -58,7 +58,7 @@ interface ToolButtonProps {
 /** One 44 px icon button, named by its tooltip text (which carries the shortcut). */
 function ToolButton({ label, onClick, children, active, disabled, color, className }: ToolButtonProps) {
   return (
-    <Tooltip label={label} events={{ hover: true, focus: true, touch: false }}>
+    <Tooltip label={label} events={{ hover: true, focus: false, touch: false }}>
       <ActionIcon
         size={44}
         variant={active ? 'filled' : 'subtle'}

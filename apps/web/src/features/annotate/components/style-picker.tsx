@@ -1,21 +1,18 @@
-import { PALETTE, PALETTE_COLOURS, strokePx, STROKE_WIDTH_NAMES, type StrokeWidth } from '@benchproof/annotation';
+import { PALETTE, PALETTE_COLOURS, STROKE_WIDTH_NAMES, type StrokeWidth } from '@benchproof/annotation';
 import { ActionIcon, Popover, SegmentedControl, SimpleGrid, Stack, Text } from '@mantine/core';
 import type { Style } from '../model/edit';
 import classes from './annotate-editor.module.css';
 
 const WIDTH_LABEL: Record<StrokeWidth, string> = { thin: 'Thin', medium: 'Medium', bold: 'Bold' };
 
-/** The current colour as a swatch with a bar as thick as the current width. */
+/** Dot size per width: the button shows both choices at a glance. */
+const DOT: Record<StrokeWidth, number> = { thin: 16, medium: 22, bold: 28 };
+
+/** The current colour as a dot as big as the current width. */
 function Swatch({ style }: { style: Style }) {
   const ink = PALETTE[style.colour];
-  return (
-    <span className={classes.swatch} style={{ background: ink.ink, borderColor: ink.outline }}>
-      <span
-        className={classes.swatchBar}
-        style={{ background: ink.outline, height: Math.max(2, strokePx(style.width, { width: 1000, height: 1000 }) / 1.5) }}
-      />
-    </span>
-  );
+  const d = DOT[style.width];
+  return <span className={classes.swatch} style={{ background: ink.ink, borderColor: ink.outline, width: d, height: d }} />;
 }
 
 /** Colour and stroke width behind one 44 px button, for new marks and the selected one. */

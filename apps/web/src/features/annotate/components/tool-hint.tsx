@@ -7,7 +7,7 @@ const HINTS: Record<Tool, string> = {
   arrow: 'Arrow: drag from the tail to where it points.',
   pen: 'Pen: draw freehand.',
   label: 'Label: tap where the note goes, then type it.',
-  ruler: 'Measure: drag along what you measure. Set a scale first.',
+  ruler: 'Measure: drag along what you measure; the length needs a scale on the photo.',
   scale: 'Set scale: drag along something of known length, e.g. a steel rule.',
   blur: 'Blur box: drag over a serial number or a face to hide it.',
 };
