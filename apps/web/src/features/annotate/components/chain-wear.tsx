@@ -3,6 +3,7 @@ import { Button, Group, NumberInput, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useChainReading } from '../api/annotation';
+import classes from './annotate-editor.module.css';
 
 interface Props {
   mediaId: number;
@@ -20,6 +21,24 @@ function preview(doc: AnnotationDocument, ruler: RulerShape, pitches: number): {
   } catch (err) {
     return { text: (err as Error).message, ok: false };
   }
+}
+
+/** How many pitches the ruler spans: typed on the numeric keyboard, 44 px tall. */
+function PitchesInput({ value, onChange }: { value: number; onChange: (n: number) => void }) {
+  return (
+    <NumberInput
+      label="Pitches under the ruler (a full link is 2)"
+      size="md"
+      style={{ flex: 1 }}
+      min={2}
+      max={240}
+      hideControls
+      inputMode="numeric"
+      classNames={{ input: classes.tallInput }}
+      value={value}
+      onChange={(v) => onChange(Number(v))}
+    />
+  );
 }
 
 /** How far to trust a photo reading (common workshop practice, no published source). */
@@ -45,15 +64,9 @@ export function ChainWear({ mediaId, doc, ruler, savedVersion, onPitches }: Prop
   return (
     <Stack gap={6} mt="xs" data-testid="chain-panel">
       <Group align="flex-end" wrap="nowrap" gap="xs">
-        <NumberInput
-          label="Pitches under the ruler (a full link is 2)"
-          size="md"
-          style={{ flex: 1 }}
-          min={2}
-          max={240}
+        <PitchesInput
           value={pitches}
-          onChange={(v) => {
-            const n = Number(v);
+          onChange={(n) => {
             setPitches(n);
             if (Number.isInteger(n) && n >= 2) onPitches(n);
           }}
