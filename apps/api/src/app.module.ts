@@ -17,6 +17,7 @@ import { PairsModule } from './pairs';
 import { ConsentModule } from './consent';
 import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
+import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './infra/clock';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
@@ -43,6 +44,7 @@ const FEATURES = [
   WorkLogModule,
   PairsModule,
   ConsentModule,
+  OwnerLinksModule,
   OwnerModule,
   AnnotationsModule,
   ReportsModule,
