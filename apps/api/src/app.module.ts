@@ -19,6 +19,7 @@ import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
 import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './infra/clock';
+import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
@@ -69,6 +70,7 @@ export class AppModule {
         SeedModule,
       ],
       controllers: [HealthController],
+      providers: [DiskSpace],
     };
   }
 }

@@ -9,7 +9,7 @@ import { DomainError } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { SNIFFER, type FileSniffer } from '../infra/sniff';
-import { STORAGE, UPLOAD_TEMP, type Storage, type UploadTemp } from '../infra/storage';
+import { STORAGE, UPLOAD_TEMP, type Storage, type StoredObject, type UploadTemp } from '../infra/storage';
 import { VIDEO_PROBE, type VideoProbe } from '../infra/video';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
@@ -63,14 +63,7 @@ export class MediaIntakeService {
       const { type, dims } = await this.validate(file);
       const kind = this.kindFor(actor, jobId, meta, type);
       const probed = await this.probe(file.path, type, dims);
-      const row = await this.store(actor, jobId, file, meta, { type, kind, probed });
-      this.audit.record(actor, {
-        action: 'media.uploaded',
-        entityType: 'media_asset',
-        entityId: row.id,
-        details: { jobId, kind, mime: row.mime, sha256: row.sha256, bytes: row.byteSize, channel },
-      });
-      if (type.family === 'image') this.derivatives.enqueue(row);
+      const row = await this.store(actor, jobId, file, meta, { type, kind, probed }, channel);
       return toMediaDto(row, []);
     } finally {
       await this.temp.remove(file.path);
@@ -136,32 +129,56 @@ export class MediaIntakeService {
     file: IncomingFile,
     meta: UploadMeta,
     found: { type: AcceptedType; kind: MediaKind; probed: Probed },
+    channel: 'multipart' | 'resumable',
   ): Promise<MediaAssetRow> {
     const stored = await this.storage.adoptLocalFile(`originals/${actor.shopId}/${randomUUID()}`, file.path, { immutable: true, sha256: file.sha256 });
     try {
-      return this.repo.insert({
-        shopId: actor.shopId,
-        jobId,
-        kind: found.kind,
-        phase: meta.phase,
-        area: meta.area,
-        source: meta.source,
-        caption: meta.caption,
-        originalKey: stored.key,
-        originalName: file.originalName.slice(0, 255),
-        mime: found.type.mime,
-        sha256: stored.sha256,
-        byteSize: stored.bytes,
-        ...found.probed,
-        uploadedAt: this.clock.now(),
-        uploadedBy: actor.id,
-        sourceAssetId: meta.sourceAssetId ?? null,
-        timecodeMs: meta.timecodeMs ?? null,
-        derivativeStatus: found.type.family === 'image' ? 'pending' : 'ready',
-      });
+      // Row, audit entry and derivative task commit together; an explicit transaction makes a failed
+      // commit (a full database disk) throw here instead of handing back a row that was never stored.
+      return this.repo.transaction(() => this.insertRow(actor, jobId, file, meta, found, stored, channel));
     } catch (err) {
-      await this.storage.delete(stored.key);
+      // No row, no file: the original must not outlive a failed commit (the sweep catches a crash in between).
+      await this.storage.delete(stored.key).catch(() => undefined);
       throw err;
     }
+  }
+
+  private insertRow(
+    actor: AuthUser,
+    jobId: number,
+    file: IncomingFile,
+    meta: UploadMeta,
+    found: { type: AcceptedType; kind: MediaKind; probed: Probed },
+    stored: StoredObject,
+    channel: 'multipart' | 'resumable',
+  ): MediaAssetRow {
+    const row = this.repo.insert({
+      shopId: actor.shopId,
+      jobId,
+      kind: found.kind,
+      phase: meta.phase,
+      area: meta.area,
+      source: meta.source,
+      caption: meta.caption,
+      originalKey: stored.key,
+      originalName: file.originalName.slice(0, 255),
+      mime: found.type.mime,
+      sha256: stored.sha256,
+      byteSize: stored.bytes,
+      ...found.probed,
+      uploadedAt: this.clock.now(),
+      uploadedBy: actor.id,
+      sourceAssetId: meta.sourceAssetId ?? null,
+      timecodeMs: meta.timecodeMs ?? null,
+      derivativeStatus: found.type.family === 'image' ? 'pending' : 'ready',
+    });
+    this.audit.record(actor, {
+      action: 'media.uploaded',
+      entityType: 'media_asset',
+      entityId: row.id,
+      details: { jobId, kind: row.kind, mime: row.mime, sha256: row.sha256, bytes: row.byteSize, channel },
+    });
+    if (found.type.family === 'image') this.derivatives.enqueue(row);
+    return row;
   }
 }

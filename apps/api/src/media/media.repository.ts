@@ -168,6 +168,12 @@ export class MediaRepository {
     });
   }
 
+  /** Every original key a row still names (purged rows have none). */
+  originalKeys(): Set<string> {
+    const rows = this.db.select({ key: mediaAssets.originalKey }).from(mediaAssets).all();
+    return new Set(rows.flatMap((r) => (r.key ? [r.key] : [])));
+  }
+
   transaction<T>(fn: () => T): T {
     return this.db.transaction(() => fn());
   }
