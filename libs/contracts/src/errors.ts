@@ -52,7 +52,8 @@ export const ERROR_CODES = {
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
   STORAGE_FULL: {
     status: 507,
-    message: 'The server’s disk is full, so this was not saved. Keep the photo on this device and tell the shop manager: space must be freed before anything more can be saved.',
+    message:
+      'The server’s disk is full, so this was not saved. Keep the photo on this device and tell the shop manager: space must be freed before anything more can be saved.',
   },
   NOT_READY: { status: 503, message: 'The server is starting or cannot reach its database or task runner.' },
 } as const satisfies Record<string, { status: number; message: string }>;

@@ -15,7 +15,6 @@ interface FileRef {
   bytes: number | null;
 }
 
-
 const EXT: Record<string, string> = {
   'image/jpeg': 'jpg',
   'image/png': 'png',

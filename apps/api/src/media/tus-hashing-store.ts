@@ -68,7 +68,6 @@ export class HashingFileStore extends FileStore {
       return await super.create(upload);
     } catch (err) {
       await Promise.all([rm(join(this.directory, upload.id), { force: true }), rm(join(this.directory, `${upload.id}.json`), { force: true })]);
-      // eslint-disable-next-line @typescript-eslint/only-throw-error -- see write()
       throw isStorageFull(err) ? STORAGE_FULL : err;
     }
   }
@@ -92,7 +91,14 @@ export class HashingFileStore extends FileStore {
       const data = join(this.directory, id);
       const meta = `${data}.json`;
       if (await readableMeta(meta)) continue;
-      const times = await Promise.all([data, meta].map((p) => stat(p).then((s) => s.mtime.getTime(), () => 0)));
+      const times = await Promise.all(
+        [data, meta].map((p) =>
+          stat(p).then(
+            (s) => s.mtime.getTime(),
+            () => 0,
+          ),
+        ),
+      );
       if (Math.max(...times) >= olderThan.getTime()) continue;
       await Promise.all([rm(data, { force: true }), rm(meta, { force: true })]);
       this.running.delete(id);

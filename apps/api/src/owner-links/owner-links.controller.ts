@@ -32,11 +32,7 @@ export class OwnerLinksController {
   @Post('owner-links')
   @Can('owner_links.manage')
   @ApiZodBody(CreateOwnerLinkRequestSchema)
-  create(
-    @CurrentUser() user: AuthUser,
-    @Param('jobId', ParseIntPipe) jobId: number,
-    @Body(zod(CreateOwnerLinkRequestSchema)) body: CreateOwnerLinkRequest,
-  ) {
+  create(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(CreateOwnerLinkRequestSchema)) body: CreateOwnerLinkRequest) {
     return this.links.create(user, jobId, body);
   }
 

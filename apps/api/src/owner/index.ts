@@ -1,10 +1,2 @@
 export { OwnerModule } from './owner.module';
-export {
-  OWNER_MEDIA,
-  OWNER_PAIRS,
-  OWNER_REPORT,
-  type OwnerMediaPort,
-  type OwnerPairsPort,
-  type OwnerReportPort,
-  type OwnerShotSource,
-} from './owner.ports';
+export { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';

@@ -2,14 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { type FileToSend, notFound } from '../core/http';
 import { FindingsService } from '../findings';
 import type { OwnerActor } from '../owner-links';
-import {
-  OWNER_MEDIA,
-  OWNER_PAIRS,
-  OWNER_REPORT,
-  type OwnerMediaPort,
-  type OwnerPairsPort,
-  type OwnerReportPort,
-} from './owner.ports';
+import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort } from './owner.ports';
 
 /**
  * Bytes for the owner page. Only shots the page itself shows (linked to a

@@ -12,15 +12,7 @@ import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import { DB, type Db } from '../core/db';
 import { OwnerEventsBus, type OwnerActor } from '../owner-links';
-import {
-  OWNER_MEDIA,
-  OWNER_PAIRS,
-  OWNER_REPORT,
-  type OwnerMediaPort,
-  type OwnerPairsPort,
-  type OwnerReportPort,
-  type OwnerShotSource,
-} from './owner.ports';
+import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
 
 /**
  * Everything the owner page shows and does, for one owner actor (one job).

@@ -17,11 +17,7 @@ export interface OwnerShotSource {
 export const OWNER_MEDIA = Symbol('OWNER_MEDIA');
 export interface OwnerMediaPort {
   shotsOfFindings(scope: { shopId: number; jobId: number }, findingIds: number[]): Map<number, OwnerShotSource[]>;
-  open(
-    scope: { shopId: number; jobId: number },
-    assetId: number,
-    variant: 'thumb' | 'screen',
-  ): Promise<FileToSend>;
+  open(scope: { shopId: number; jobId: number }, assetId: number, variant: 'thumb' | 'screen'): Promise<FileToSend>;
 }
 
 /** Before/after pairs of the job, in the shop's order. */

@@ -46,7 +46,12 @@ describe.skipIf(process.platform !== 'linux')('file descriptors after file answe
     t = await startTestApp({ MEDIA_CACHE_MB: '0', TRUST_PROXY: 'loopback' });
     s = await ownerScenario(t);
     const video = paddedMp4(patternBytes(8 * 1024 * 1024));
-    const up = await s.mech.agent.post(`/api/jobs/${s.jobId}/media`).field('phase', 'before').field('area', 'drivetrain').attach('files', video, 'long.mp4').expect(201);
+    const up = await s.mech.agent
+      .post(`/api/jobs/${s.jobId}/media`)
+      .field('phase', 'before')
+      .field('area', 'drivetrain')
+      .attach('files', video, 'long.mp4')
+      .expect(201);
     videoId = (up.body as { assets: { id: number }[] }).assets[0].id;
     const draft = (await s.desk.agent.post(`/api/jobs/${s.jobId}/reports/drafts`).expect(202)).body as { id: number };
     await derivativesSettled(t);
@@ -55,12 +60,15 @@ describe.skipIf(process.platform !== 'linux')('file descriptors after file answe
     await t.app.get<TaskRunner>(TASK_RUNNER).settled();
     reportPdf = `/api/jobs/${s.jobId}/reports/${draft.id}/pdf`;
     token = (await createLink(s.desk, s.jobId)).token;
-    const login = await t.http().post('/api/auth/login').send({ email: 'desk@lantern-spoke.test', password: (await import('@benchproof/seeds')).DEMO_PASSWORD });
+    const login = await t
+      .http()
+      .post('/api/auth/login')
+      .send({ email: 'desk@lantern-spoke.test', password: (await import('@benchproof/seeds')).DEMO_PASSWORD });
     cookie = ([] as string[])
       .concat(login.headers['set-cookie'] ?? [])
       .map((c) => c.split(';')[0])
       .join('; ');
-    const server = t.app.getHttpServer() as Server;
+    const server: Server = t.app.getHttpServer();
     await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
     port = (server.address() as AddressInfo).port;
   }, 120_000);

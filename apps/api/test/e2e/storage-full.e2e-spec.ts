@@ -48,7 +48,11 @@ for (const [name, d] of skipped) console.warn(`storage-full e2e: skipping the fu
 
 const upload = async (t: TestApp, jobId: number, colour: string) => {
   const { agent } = await t.signIn(DEMO.mechanic);
-  return agent.post(`/api/jobs/${jobId}/media`).field('phase', 'before').field('area', 'drivetrain').attach('files', await solidJpeg(640, 480, colour), 'shot.jpg');
+  return agent
+    .post(`/api/jobs/${jobId}/media`)
+    .field('phase', 'before')
+    .field('area', 'drivetrain')
+    .attach('files', await solidJpeg(640, 480, colour), 'shot.jpg');
 };
 const originals = (uploads: string) => filesUnder(uploads).filter((f) => f.startsWith('/originals/'));
 
@@ -112,13 +116,21 @@ describe.skipIf(disks.uploads.dir === null)('a full uploads disk', () => {
     expect(res.status).toBe(507);
     expect(res.body.code).toBe('STORAGE_FULL');
     const { agent } = await t.signIn(DEMO.mechanic);
-    const meta = [`jobId ${Buffer.from(String(jobId)).toString('base64')}`, `phase ${Buffer.from('before').toString('base64')}`, `area ${Buffer.from('drivetrain').toString('base64')}`];
+    const meta = [
+      `jobId ${Buffer.from(String(jobId)).toString('base64')}`,
+      `phase ${Buffer.from('before').toString('base64')}`,
+      `area ${Buffer.from('drivetrain').toString('base64')}`,
+    ];
     // A metadata value large enough that its .json cannot fit in what is left.
     meta.push(`caption ${Buffer.from('x'.repeat(500)).toString('base64')}`);
     const tus = await agent.post('/api/media/tus').set('Tus-Resumable', '1.0.0').set('Upload-Length', '100000').set('Upload-Metadata', meta.join(','));
     expect(tus.status).toBe(507);
     expect(JSON.parse(tus.text)).toMatchObject({ code: 'STORAGE_FULL' });
-    expect(filesUnder(uploads).filter((f) => f !== '/filler').sort()).toEqual(before);
+    expect(
+      filesUnder(uploads)
+        .filter((f) => f !== '/filler')
+        .sort(),
+    ).toEqual(before);
     rmSync(filler);
     expect((await upload(t, jobId, '#228844')).status).toBe(201);
   });
@@ -156,7 +168,11 @@ describe('the storage sweep', () => {
     expect(existsSync(orphan)).toBe(false);
     // Too young to judge: its row may still be committing.
     expect(existsSync(fresh)).toBe(true);
-    expect(originals(uploads).filter((f) => !f.endsWith('000000000002')).sort()).toEqual([...named].sort());
+    expect(
+      originals(uploads)
+        .filter((f) => !f.endsWith('000000000002'))
+        .sort(),
+    ).toEqual([...named].sort());
     expect(readdirSync(tusDir).filter((f) => f.startsWith(broken))).toEqual([]);
   });
 });

@@ -90,7 +90,10 @@ export class LocalDiskStorage implements Storage {
     for (const e of entries) {
       if (!e.isFile() || e.name.endsWith('.partial')) continue;
       const path = join(e.parentPath, e.name);
-      const modifiedAt = await stat(path).then((st) => st.mtime, () => null);
+      const modifiedAt = await stat(path).then(
+        (st) => st.mtime,
+        () => null,
+      );
       if (modifiedAt) yield { key: relative(this.root, path).split(sep).join('/'), modifiedAt };
     }
   }

@@ -127,6 +127,12 @@ function ClosedNotice({ status }: { status: string }) {
   );
 }
 
+const ThanksNote = () => (
+  <Text fw={600} c="teal" role="status">
+    Thank you — the shop has your answers.
+  </Text>
+);
+
 function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPageData; refetch: () => void }) {
   const closed = (TERMINAL_STATUSES as readonly string[]).includes(page.job.status);
   const c = useChoices(page.findings);
@@ -141,11 +147,7 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
       <Stack gap="lg">
         <BikeAndJob page={page} />
         {closed && <ClosedNotice status={page.job.status} />}
-        {sent && (
-          <Text fw={600} c="teal" role="status">
-            Thank you — the shop has your answers.
-          </Text>
-        )}
+        {sent && <ThanksNote />}
         {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} closed={closed} />}
         <Measurements page={page} />
         {page.pairs.length > 0 && (
