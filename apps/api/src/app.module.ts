@@ -18,7 +18,7 @@ import { ConsentModule } from './consent';
 import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
 import { OwnerLinksModule } from './owner-links';
-import { ClockModule } from './infra/clock';
+import { ClockModule } from './core/clock';
 import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';

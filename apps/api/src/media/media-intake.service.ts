@@ -6,15 +6,16 @@ import { AuditService } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { SNIFFER, type FileSniffer } from '../infra/sniff';
-import { STORAGE, UPLOAD_TEMP, type Storage, type StoredObject, type UploadTemp } from '../infra/storage';
+import { STORAGE, UPLOAD_TEMP, type Storage, type UploadTemp } from '../infra/storage';
 import { VIDEO_PROBE, type VideoProbe } from '../infra/video';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 import { acceptedType, type AcceptedType } from './media-types';
+import { UnitOfWork, type DbTx } from '../core/db';
 
 /** A file already on local disk (multer temp file or finished resumable upload). */
 export interface IncomingFile {
@@ -46,6 +47,7 @@ interface Probed {
 @Injectable()
 export class MediaIntakeService {
   constructor(
+    private readonly uow: UnitOfWork,
     private readonly repo: MediaRepository,
     private readonly derivatives: MediaDerivativesService,
     private readonly audit: AuditService,
@@ -63,7 +65,7 @@ export class MediaIntakeService {
       const { type, dims } = await this.validate(file);
       const kind = this.kindFor(actor, jobId, meta, type);
       const probed = await this.probe(file.path, type, dims);
-      const row = await this.store(actor, jobId, file, meta, { type, kind, probed }, channel);
+      const row = await this.store(actor, jobId, file, meta, { type, kind, probed, channel });
       return toMediaDto(row, []);
     } finally {
       await this.temp.remove(file.path);
@@ -128,14 +130,11 @@ export class MediaIntakeService {
     jobId: number,
     file: IncomingFile,
     meta: UploadMeta,
-    found: { type: AcceptedType; kind: MediaKind; probed: Probed },
-    channel: 'multipart' | 'resumable',
+    found: { type: AcceptedType; kind: MediaKind; probed: Probed; channel: 'multipart' | 'resumable' },
   ): Promise<MediaAssetRow> {
     const stored = await this.storage.adoptLocalFile(`originals/${actor.shopId}/${randomUUID()}`, file.path, { immutable: true, sha256: file.sha256 });
     try {
-      // Row, audit entry and derivative task commit together; an explicit transaction makes a failed
-      // commit (a full database disk) throw here instead of handing back a row that was never stored.
-      return this.repo.transaction(() => this.insertRow(actor, jobId, file, meta, found, stored, channel));
+      return this.uow.run((tx) => this.remember(actor, jobId, file, meta, found, stored, tx));
     } catch (err) {
       // No row, no file: the original must not outlive a failed commit (the sweep catches a crash in between).
       await this.storage.delete(stored.key).catch(() => undefined);
@@ -143,14 +142,15 @@ export class MediaIntakeService {
     }
   }
 
-  private insertRow(
+  /** The row, its audit record and its derivative task commit together (or the caller removes the file). */
+  private remember(
     actor: AuthUser,
     jobId: number,
     file: IncomingFile,
     meta: UploadMeta,
-    found: { type: AcceptedType; kind: MediaKind; probed: Probed },
-    stored: StoredObject,
-    channel: 'multipart' | 'resumable',
+    found: { type: AcceptedType; kind: MediaKind; probed: Probed; channel: 'multipart' | 'resumable' },
+    stored: { key: string; sha256: string; bytes: number },
+    tx: DbTx,
   ): MediaAssetRow {
     const row = this.repo.insert({
       shopId: actor.shopId,
@@ -176,9 +176,9 @@ export class MediaIntakeService {
       action: 'media.uploaded',
       entityType: 'media_asset',
       entityId: row.id,
-      details: { jobId, kind: row.kind, mime: row.mime, sha256: row.sha256, bytes: row.byteSize, channel },
+      details: { jobId, kind: found.kind, mime: row.mime, sha256: row.sha256, bytes: row.byteSize, channel: found.channel },
     });
-    if (found.type.family === 'image') this.derivatives.enqueue(row);
+    if (found.type.family === 'image') this.derivatives.enqueue(row, tx);
     return row;
   }
 }

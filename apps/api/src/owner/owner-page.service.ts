@@ -6,11 +6,11 @@ import { ConsentService } from '../consent';
 import { DomainError } from '../core/http';
 import { CustomersService } from '../customers';
 import { FindingsService } from '../findings';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
-import { DB, type Db } from '../core/db';
+import { UnitOfWork } from '../core/db';
 import { OwnerEventsBus, type OwnerActor } from '../owner-links';
 import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
 
@@ -35,7 +35,7 @@ export class OwnerPageService {
     @Inject(OWNER_PAIRS) private readonly pairs: OwnerPairsPort,
     @Inject(OWNER_REPORT) private readonly report: OwnerReportPort,
     @Inject(CLOCK) private readonly clock: Clock,
-    @Inject(DB) private readonly db: Db,
+    private readonly uow: UnitOfWork,
   ) {}
 
   page(owner: OwnerActor & { expiresAt: Date }, token: string): OwnerPageDto {
@@ -109,8 +109,7 @@ export class OwnerPageService {
    */
   decide(owner: OwnerActor, input: OwnerDecisionsRequest): void {
     const decidedAt = this.clock.now();
-    // One unit of work until core/db's uow lands: the features' writes share this connection.
-    this.db.transaction(() => {
+    this.uow.run(() => {
       const job = this.access.change(owner, owner.jobId, 'decision');
       const byRec = new Map(this.findings.list(owner, owner.jobId).flatMap((f) => (f.recommendation ? [[f.recommendation.id, f] as const] : [])));
       const ownerName = this.customers.get(owner, job.customerId).name;
