@@ -15,7 +15,9 @@ import { PairsModule } from './pairs';
 import { ConsentModule } from './consent';
 import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
+import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './core/clock';
+import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
@@ -41,6 +43,7 @@ const FEATURES = [
   WorkLogModule,
   PairsModule,
   ConsentModule,
+  OwnerLinksModule,
   OwnerModule,
   AnnotationsModule,
   ReportsModule,
@@ -55,6 +58,7 @@ export class AppModule {
       module: AppModule,
       imports: [ConfigModule.forRoot(cfg), ClockModule, TasksModule, EventEmitterModule.forRoot(), DbModule, AuthCoreModule, ...FEATURES, SeedModule],
       controllers: [HealthController],
+      providers: [DiskSpace],
     };
   }
 }
