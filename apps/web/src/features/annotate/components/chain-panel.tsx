@@ -28,13 +28,13 @@ function rulerLabel(doc: AnnotationDocument, ruler: RulerShape): string {
   return mm === null ? 'No scale yet' : `Ruler: ${formatMm(mm)}`;
 }
 
-/** Why a photo reading is evidence for the owner and not a replacement for the chain checker. */
+/** Why a photo reading is evidence for the owner and not a replacement for the chain checker (common practice, no source). */
 function PhotoReadingCaution() {
   return (
     <Alert color="yellow" variant="light" title="How far to trust a photo reading">
-      Common practice, no source: the camera must face the chain square-on and the rule must lie in the chain&apos;s plane; lens distortion and a tilted camera
-      each add error near the frame edges. A chain checker or a steel rule over 24 pitches at the bench remains the reference; use the photo to show the owner,
-      and confirm a borderline reading with the tool.
+      The camera must face the chain square-on and the rule must lie in the chain&apos;s plane; lens distortion and a tilted camera each add error near the
+      frame edges. A chain checker or a steel rule over 24 pitches at the bench remains the reference; use the photo to show the owner, and confirm a borderline
+      reading with the tool.
     </Alert>
   );
 }
