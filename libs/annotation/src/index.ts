@@ -4,3 +4,4 @@ export * from './geometry';
 export * from './calibration';
 export * from './marks';
 export * from './svg';
+export * from './subject';
