@@ -82,8 +82,8 @@ describe('showcase: desk access by shop setting; background zip with progress', 
     await cards.first().waitFor();
     const n = await cards.count();
     for (let i = 0; i < n; i++) await cards.nth(i).getByLabel('Select for zip').check();
-    await mgr.page.getByRole('combobox', { name: 'Zip size' }).click();
-    await mgr.page.getByRole('option', { name: 'All three sizes' }).click();
+    await mgr.page.getByRole('combobox', { name: 'Files in the zip' }).click();
+    await mgr.page.getByRole('option', { name: 'Each card’s choice, all three sizes' }).click();
     await mgr.page.getByRole('button', { name: `Zip ${3 * n} files` }).click();
     await mgr.page.getByRole('progressbar', { name: 'Zip progress' }).waitFor();
     await mgr.page.getByText(/^(Waiting to start the zip…|Making the zip: \d+ of \d+ files)$/).waitFor();

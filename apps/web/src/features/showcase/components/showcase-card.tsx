@@ -1,4 +1,4 @@
-import type { ShowcaseItemDto } from '@benchproof/contracts';
+import type { ShowcaseItemDto, ShowcaseSize, ShowcaseVariant } from '@benchproof/contracts';
 import { MEDIA_AREA_LABELS } from '@benchproof/domain';
 import { ActionIcon, Badge, Group, Paper, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
@@ -44,6 +44,8 @@ function Favourite({ item, canManage }: { item: ShowcaseItemDto; canManage: bool
 
 interface Props {
   item: ShowcaseItemDto;
+  choice: { variant: ShowcaseVariant; size: ShowcaseSize };
+  onChoice: (choice: { variant: ShowcaseVariant; size: ShowcaseSize }) => void;
   selected: boolean;
   onSelect: (on: boolean) => void;
   /** Favourites and captions (showcase.manage); everyone who opens the library may export. */
@@ -51,7 +53,7 @@ interface Props {
 }
 
 /** One consented pair: both shots, caption, consent scope and date, favourite, export. */
-export function ShowcaseCard({ item, selected, onSelect, canManage }: Props) {
+export function ShowcaseCard({ item, choice, onChoice, selected, onSelect, canManage }: Props) {
   const [editing, { open, close }] = useDisclosure(false);
   const area = MEDIA_AREA_LABELS[item.area];
   return (
@@ -73,7 +75,7 @@ export function ShowcaseCard({ item, selected, onSelect, canManage }: Props) {
             Consent {day(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
           </Text>
         </Group>
-        <ExportControls pairId={item.pairId} selected={selected} onSelect={onSelect} onCaption={canManage ? open : null} />
+        <ExportControls pairId={item.pairId} choice={choice} onChoice={onChoice} selected={selected} onSelect={onSelect} onCaption={canManage ? open : null} />
       </Stack>
       {editing && <CaptionEditor item={item} opened={editing} onClose={close} />}
     </Paper>
