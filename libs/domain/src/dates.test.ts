@@ -1,4 +1,4 @@
-import { dateInputPattern, formatDate, formatDateTime, formatTime, shopLocale } from './dates';
+import { dateInputPattern, datePickerPattern, formatDate, formatWeekday, formatDateTime, formatTime, shopLocale } from './dates';
 
 /*
  * Expected strings: Unicode CLDR 48 as shipped in Node 20's ICU 78.2 (process.versions.cldr / .icu),
@@ -34,6 +34,15 @@ describe('dates in the shop’s locale (CLDR 48 via Node Intl)', () => {
   it('a calendar day ("2026-12-19", a promised date) is the same day in every zone', () => {
     for (const timeZone of ['Pacific/Auckland', 'America/Los_Angeles', 'UTC']) expect(formatDate('2026-12-19', 'en-GB', { timeZone })).toBe('19 Dec 2026');
     expect(formatDate('2026-12-19', 'en-US')).toBe('Dec 19, 2026');
+  });
+
+  it.each([
+    ['en-GB', 'Sat, 5 Dec 2026', 'ddd, D MMM YYYY'],
+    ['en-US', 'Sat, Dec 5, 2026', 'ddd, MMM D, YYYY'],
+    ['de-DE', 'Sa., 5. Dez. 2026', 'ddd, D. MMM YYYY'],
+  ])('a promised day with its weekday in %s: %s; date pickers show %s', (locale, day, pattern) => {
+    expect(formatWeekday('2026-12-05', locale)).toBe(day);
+    expect(datePickerPattern(locale)).toBe(pattern);
   });
 
   it('no date is a dash', () => {

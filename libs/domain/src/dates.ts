@@ -63,6 +63,20 @@ export function formatDate(value: string | Date | null | undefined, locale: stri
   return format(locale, { ...DAY, timeZone }).format(instant(value));
 }
 
+/** A calendar day with its weekday: "Sat 5 Dec 2026" (en-GB), "Sat, Dec 5, 2026" (en-US). */
+export function formatWeekday(value: string | Date | null | undefined, locale: string, opts: DateOptions = {}): string {
+  if (!value) return '—';
+  const timeZone = typeof value === 'string' && isDay(value) ? 'UTC' : opts.timeZone;
+  return format(locale, { weekday: 'short', ...DAY, timeZone }).format(instant(value));
+}
+
+/** The dayjs display pattern of a date picker for the locale: the locale's order, month as a word. */
+export function datePickerPattern(locale: string): string {
+  const parts = format(locale, { weekday: 'short', ...DAY, timeZone: 'UTC' }).formatToParts(new Date(Date.UTC(2026, 11, 5)));
+  const token: Partial<Record<Intl.DateTimeFormatPartTypes, string>> = { weekday: 'ddd', day: 'D', month: 'MMM', year: 'YYYY' };
+  return parts.map((p) => (p.type === 'literal' ? p.value.replace(/[[\]]/g, '') : (token[p.type] ?? ''))).join('');
+}
+
 /** "5 Dec 2026, 14:05" (en-GB), "Dec 5, 2026, 2:05 PM" (en-US). */
 export function formatDateTime(value: string | Date | null | undefined, locale: string, opts: DateOptions = {}): string {
   if (!value) return '—';

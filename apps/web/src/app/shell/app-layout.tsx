@@ -4,6 +4,7 @@ import { useDisclosure } from '@mantine/hooks';
 import { IconKey, IconLogout } from '@tabler/icons-react';
 import { Link, Outlet, useNavigate } from 'react-router';
 import { Logo } from '../../components/logo';
+import { DatesLocale } from '../../lib/dates';
 import { useLogout, useSession } from '../../features/auth';
 import { useShopSettings } from '../../features/shop-settings';
 import { shopCan } from '../shop-access';
@@ -66,7 +67,9 @@ export function AppLayout() {
         <Navigation can={can} onNavigate={close} />
       </nav>
       <main className={classes.main}>
-        <Outlet />
+        <DatesLocale locale={shop?.dateLocale}>
+          <Outlet />
+        </DatesLocale>
       </main>
     </>
   );

@@ -3,9 +3,11 @@ import { Alert, Badge, Button, Card, Checkbox, Group, Spoiler, Stack, Text, Text
 import { useState } from 'react';
 import type { ApiError } from '../../../lib/api-client';
 import { useConsentStatus, useRecordConsent } from '../api/owner-links';
+import { useDates } from '../../../lib/dates';
 
 /** What the consent in force allows, how and when it was given, and under which wording. */
 function ConsentInForce({ current }: { current: ConsentDto }) {
+  const dates = useDates();
   return (
     <Text size="sm">
       {current.granted
@@ -13,7 +15,7 @@ function ConsentInForce({ current }: { current: ConsentDto }) {
           ? 'Bike photos; make and model may be named.'
           : 'Bike photos; make and model not named.'
         : 'Photos may not be used.'}{' '}
-      {current.method === 'owner_link' ? 'On the owner page' : 'In person'}, {new Date(current.at).toLocaleString()} ({current.wordingVersion}).
+      {current.method === 'owner_link' ? 'On the owner page' : 'In person'}, {dates.dateTime(current.at)} ({current.wordingVersion}).
     </Text>
   );
 }

@@ -5,8 +5,8 @@ import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useCreateDraft, useIssueReport, useReports } from '../api/reports';
 import { ReportPreview } from './report-preview';
+import { useDates } from '../../../lib/dates';
 
-const dateTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const kb = (bytes: number | null) => (bytes === null ? '' : `${Math.round(bytes / 1024)} kB`);
 
 function Rendering({ report }: { report: ReportDto }) {
@@ -20,11 +20,12 @@ function Rendering({ report }: { report: ReportDto }) {
 
 /** The current draft: its render state, and the way to issue it unless that has been done. */
 function DraftCard({ draft, nextVersion, onIssue, issuing }: { draft: ReportDto; nextVersion: number; onIssue?: () => void; issuing: boolean }) {
+  const dates = useDates();
   return (
     <Card withBorder>
       <Stack gap="sm">
         <Group justify="space-between" wrap="wrap">
-          <Text fw={600}>Draft of {dateTime(draft.createdAt)}</Text>
+          <Text fw={600}>Draft of {dates.dateTime(draft.createdAt)}</Text>
           <Badge color={draft.state === 'failed' ? 'red' : 'gray'} size="lg">
             {draft.state === 'ready' ? `${draft.pageCount} pages · ${kb(draft.byteSize)}` : draft.state}
           </Badge>
@@ -88,13 +89,14 @@ export function ReportSection({ jobId, canIssue, extra }: { jobId: number; canIs
 
 /** One issued version: who issued it when, its fingerprint, preview and download, and the slot (e.g. send to owner). */
 function IssuedCard({ report: r, onPreview, extra }: { report: ReportDto; onPreview: () => void; extra?: (issued: ReportDto) => React.ReactNode }) {
+  const dates = useDates();
   return (
     <Card withBorder padding="sm">
       <Group justify="space-between" wrap="wrap">
         <Stack gap={0}>
           <Text fw={700}>Version {r.version}</Text>
           <Text size="sm" c="dimmed">
-            Issued {r.issuedAt && dateTime(r.issuedAt)}
+            Issued {r.issuedAt && dates.dateTime(r.issuedAt)}
             {r.createdBy ? ` by ${r.createdBy.name}` : ''} · {kb(r.byteSize)}
           </Text>
           {r.fingerprint && (

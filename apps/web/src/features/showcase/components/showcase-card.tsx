@@ -7,8 +7,7 @@ import { useState } from 'react';
 import { useUpdateShowcaseItem } from '../api/showcase';
 import { CaptionEditor } from './caption-editor';
 import { ExportControls } from './export-controls';
-
-const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+import { useDates } from '../../../lib/dates';
 
 /** The annotated render (blur boxes applied) when there is one, else the plain upright copy. */
 function Shot({ id, alt }: { id: number; alt: string }) {
@@ -54,6 +53,7 @@ interface Props {
 
 /** One consented pair: both shots, caption, consent scope and date, favourite, export. */
 export function ShowcaseCard({ item, choice, onChoice, selected, onSelect, canManage }: Props) {
+  const dates = useDates();
   const [editing, { open, close }] = useDisclosure(false);
   const area = MEDIA_AREA_LABELS[item.area];
   return (
@@ -72,7 +72,7 @@ export function ShowcaseCard({ item, choice, onChoice, selected, onSelect, canMa
             {area}
           </Badge>
           <Text size="sm" c="teal.8" fw={600} title={`Consent wording ${item.consent.wordingVersion}`}>
-            Consent {day(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
+            Consent {dates.date(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
           </Text>
         </Group>
         <ExportControls pairId={item.pairId} choice={choice} onChoice={onChoice} selected={selected} onSelect={onSelect} onCaption={canManage ? open : null} />
