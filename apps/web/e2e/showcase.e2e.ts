@@ -156,5 +156,15 @@ describe('showcase: only consented pairs; export; the owner revokes and the pair
     const after = (await (await mgr.page.request.get('/api/showcase/items')).json()) as ShowcaseItemDto[];
     expect(after.filter((i) => i.jobId === jobId)).toEqual([]);
     await snap(mgr.page, 'showcase-library-after-revoke-desktop');
+
+    // Where the withdrawal shows on the job, the manager sees what to take down: the square exported above.
+    await mgr.page.goto(`/jobs/${jobId}?section=owner`);
+    const takeDown = mgr.page.getByTestId('take-down-list');
+    await takeDown.getByText('Take these down').waitFor();
+    await takeDown
+      .getByText(/· Before and after together · Square post 1080×1080 · \d+ KB$/)
+      .first()
+      .waitFor();
+    await snap(mgr.page, 'showcase-take-down-desktop');
   });
 });

@@ -2,6 +2,7 @@ import { SHOWCASE_SIZES, type ShowcaseDownloadDto, type ShowcaseSize } from '@be
 import { Alert, List, Stack, Text, Title } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { useDates } from '../../../lib/dates';
 
 const WHAT: Record<string, string> = { pair: 'Before and after together', before: 'Before shot alone', after: 'After shot alone' };
 const sizeLabel = (s: string) => (s in SHOWCASE_SIZES ? SHOWCASE_SIZES[s as ShowcaseSize].label : s);
@@ -14,7 +15,8 @@ export const useJobDownloads = (jobId: number) =>
  * The take-down list: every showcase file made from this job, newest first, with when and in what form.
  * `withdrawn` turns the heading into the instruction the withdrawal gives.
  */
-export function TakeDownList({ jobId, withdrawn, formatDateTime }: { jobId: number; withdrawn: boolean; formatDateTime: (iso: string) => string }) {
+export function TakeDownList({ jobId, withdrawn }: { jobId: number; withdrawn: boolean }) {
+  const dates = useDates();
   const downloads = useJobDownloads(jobId);
   const rows = [...(downloads.data ?? [])].reverse();
   return (
@@ -35,7 +37,7 @@ export function TakeDownList({ jobId, withdrawn, formatDateTime }: { jobId: numb
         <List size="sm" spacing={4}>
           {rows.map((d, i) => (
             <List.Item key={`${d.at}-${i}`}>
-              {formatDateTime(d.at)} · pair {d.pairId} · {WHAT[d.variant] ?? d.variant} · {sizeLabel(d.size)} · {Math.max(1, Math.round(d.bytes / 1024))} KB
+              {dates.dateTime(d.at)} · pair {d.pairId} · {WHAT[d.variant] ?? d.variant} · {sizeLabel(d.size)} · {Math.max(1, Math.round(d.bytes / 1024))} KB
             </List.Item>
           ))}
         </List>
