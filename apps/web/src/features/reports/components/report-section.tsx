@@ -6,6 +6,7 @@ import { ApiError } from '../../../lib/api-client';
 import { useCreateDraft, useIssueReport, useReports } from '../api/reports';
 import { ReportPreview } from './report-preview';
 import { useDates } from '../../../lib/dates';
+import { ConfirmStep } from '../../../components/confirm-step';
 
 const kb = (bytes: number | null) => (bytes === null ? '' : `${Math.round(bytes / 1024)} kB`);
 
@@ -33,9 +34,16 @@ function DraftCard({ draft, nextVersion, onIssue, issuing }: { draft: ReportDto;
         {draft.state === 'rendering' && <Rendering report={draft} />}
         {draft.state === 'failed' && <Alert color="red">The draft could not be rendered: {draft.error}</Alert>}
         {draft.state === 'ready' && onIssue && (
-          <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={onIssue} loading={issuing}>
-            Issue this draft as version {nextVersion}
-          </Button>
+          <ConfirmStep
+            question={`Issue version ${nextVersion}? An issued report never changes; a correction becomes a new version.`}
+            confirmLabel={`Issue version ${nextVersion}`}
+            onConfirm={onIssue}
+            trigger={(ask) => (
+              <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={ask} loading={issuing}>
+                Issue this draft as version {nextVersion}
+              </Button>
+            )}
+          />
         )}
       </Stack>
     </Card>
