@@ -27,7 +27,7 @@ const BYPASSES = [
   /dayjs\([^)]*\)\.format\('(?!YYYY-MM-DD(?: HH:mm:ss)?')/,
 ];
 
-describe('every date a person reads goes through the one locale-driven helper', () => {
+describe('every date a person reads goes through the one locale-driven helper', { timeout: 60_000 }, () => {
   it('no web, API (PDF, e-mail) or contract source writes a date any other way', () => {
     const hits = SOURCES.flatMap((d) => files(resolve(ROOT, d)))
       .filter((f) => relative(ROOT, f) !== HELPER)

@@ -34,7 +34,7 @@ function userText(path: string): string[] {
  */
 const MARKERS = [/no source/i, /CHECKS\.md/, /\bfrom memory\b/i];
 
-describe('trade-source markers stay out of user-facing text', () => {
+describe('trade-source markers stay out of user-facing text', { timeout: 60_000 }, () => {
   it('no string, template or JSX text in the product carries a source marker', () => {
     const hits = SOURCES.flatMap((d) => files(resolve(ROOT, d))).flatMap((f) =>
       userText(f)
