@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { blurRegions, marksBox, migrateDocument, renderSvg } from '@benchproof/annotation';
+import { blurRegions, marksBox, renderSvg, type AnnotationDocument } from '@benchproof/annotation';
 import type { AnnotatedSize } from '@benchproof/contracts';
 import { Readable } from 'node:stream';
 import { IMAGE, type ImageAdapter } from '../infra/image';
@@ -68,7 +68,7 @@ export class AnnotationRenderService {
   /** The box around the marks of the photo's newest annotation (normalised; blur boxes left out), or null: where the subject is. */
   marksBox(shopId: number, assetId: number): { x: number; y: number; w: number; h: number } | null {
     const latest = this.repo.latest(shopId, assetId);
-    const box = latest ? marksBox(migrateDocument(JSON.parse(latest.document))) : null;
+    const box = latest ? marksBox(latest.document) : null;
     return box && { x: box.x, y: box.y, w: box.width, h: box.height };
   }
 
@@ -83,8 +83,7 @@ export class AnnotationRenderService {
     return { ...img, data: await readAll(this.storage.createReadStream(img.key)) };
   }
 
-  private async render(baseKey: string, size: { width: number; height: number }, json: string, key: string): Promise<void> {
-    const doc = migrateDocument(JSON.parse(json));
+  private async render(baseKey: string, size: { width: number; height: number }, doc: AnnotationDocument, key: string): Promise<void> {
     const pixels = await readAll(this.storage.createReadStream(baseKey));
     const out = await this.image.annotate(pixels, renderSvg(doc, size), blurRegions(doc, size));
     if (await this.storage.stat(key)) return;

@@ -1,5 +1,5 @@
 import { roleCan } from '@benchproof/contracts';
-import { OwnerLinkPanel } from '../../../../features/owner';
+import { OwnerLinkPanel } from '../../../../features/owner-links';
 import { TakeDownList } from '../../../../features/showcase';
 import type { SectionProps } from '../job-sections';
 
