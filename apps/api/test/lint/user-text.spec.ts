@@ -45,7 +45,7 @@ describe('trade-source markers stay out of user-facing text', { timeout: 60_000 
   });
 
   it('the scan sees JSX text (a probe with a marker is found)', () => {
-    const probe = join(ROOT, 'apps/web/src/features/annotate/components/chain-panel.tsx');
+    const probe = join(ROOT, 'apps/web/src/app/routes/jobs/jobs.route.tsx');
     expect(userText(probe).length).toBeGreaterThan(5);
     const src = ts.createSourceFile('p.tsx', '<p>Common practice, no source: x</p>', ts.ScriptTarget.Latest, true, ts.ScriptKind.TSX);
     const texts: string[] = [];
