@@ -27,3 +27,4 @@ export * from './pair-suggestion';
 export * from './owner-explanations';
 export * from './report-palette';
 export * from './retry';
+export * from './dates';

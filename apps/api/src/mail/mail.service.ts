@@ -1,5 +1,6 @@
 import { Inject, Injectable, type OnModuleInit } from '@nestjs/common';
 import type { OutboxMessageDto, SendReportRequest } from '@benchproof/contracts';
+import { formatDate } from '@benchproof/domain';
 import { randomBytes } from 'node:crypto';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
@@ -168,11 +169,13 @@ export class MailService implements OnModuleInit {
   private context(
     actor: Actor,
     job: { number: string; customerId: number; bikeId: number },
-  ): { shop: ShopBrand; ownerName: string; jobNumber: string; bikeLabel: string } {
+  ): { shop: ShopBrand; ownerName: string; jobNumber: string; dated: string; bikeLabel: string } {
     const shop = this.shops.settings(actor.shopId);
     const bike = this.bikes.get(actor, job.bikeId);
     const ownerName = this.customers.get(actor, job.customerId).name;
-    return { shop, ownerName, jobNumber: job.number, bikeLabel: [bike.maker, bike.model].filter(Boolean).join(' ') || 'bike' };
+    // Days in UTC, as the report prints them; the shop's locale decides how the day is written.
+    const dated = formatDate(this.clock.now(), shop.dateLocale, { timeZone: 'UTC' });
+    return { shop, ownerName, jobNumber: job.number, dated, bikeLabel: [bike.maker, bike.model].filter(Boolean).join(' ') || 'bike' };
   }
 
   /** Fixed when queued: a retry after a crash mid-send carries the same id, so receivers can drop the copy. */
