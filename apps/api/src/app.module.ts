@@ -1,5 +1,6 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { EventEmitterModule } from '@nestjs/event-emitter';
+import { ScheduleModule } from '@nestjs/schedule';
 import { LoggerModule } from 'nestjs-pino';
 import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
@@ -60,6 +61,7 @@ export class AppModule {
         LoggerModule.forRoot(requestLogging(cfg)),
         ClockModule,
         TasksModule,
+        ScheduleModule.forRoot(),
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,
