@@ -4,6 +4,7 @@ import { ScheduleModule } from '@nestjs/schedule';
 import { LoggerModule } from 'nestjs-pino';
 import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
+import { BackgroundWorkModule } from './background-work';
 import { AuthModule } from './auth';
 import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
@@ -32,6 +33,7 @@ import { WorkLogModule } from './work-log';
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
   AuditModule,
+  BackgroundWorkModule,
   AuthModule,
   UsersModule,
   ShopsModule,

@@ -36,7 +36,7 @@ export class MailDelivery {
   @TaskHandler(MAIL_SEND, { concurrency: 2, maxAttempts: (cfg) => cfg.MAIL_MAX_ATTEMPTS, backoffBaseMs: (cfg) => cfg.MAIL_RETRY_BASE_MS })
   async deliver(task: TaskContext<typeof MAIL_SEND>): Promise<void> {
     const shopId = task.shopId ?? 0;
-    const row = this.repo.claim(shopId, task.payload.messageId, task.key, task.attempt);
+    const row = this.repo.claim(shopId, task.payload.messageId, task.key);
     if (!row) return; // sent already, or desk resent it under a newer task
     try {
       const receipt = await this.transport.send({
@@ -48,21 +48,21 @@ export class MailDelivery {
         messageId: row.messageId,
         attachments: await this.attachments(row),
       });
-      this.repo.markSent(shopId, row.id, this.clock.now(), receipt.response);
+      this.repo.markSent(shopId, row.id, task.attempt, this.clock.now(), receipt.response);
     } catch (err) {
-      throw this.recordFailure(row, err, task.final);
+      throw this.recordFailure(row, err, task);
     }
   }
 
   /** Records the attempt on the row; returns what the runner should see (permanent: no more tries). */
-  private recordFailure(row: OutboxRow, err: unknown, lastQuickTry: boolean): unknown {
+  private recordFailure(row: OutboxRow, err: unknown, task: Pick<TaskContext, 'attempt' | 'final'>): unknown {
     const message = err instanceof Error ? err.message : String(err);
     const permanent = err instanceof PermanentTaskError || isPermanentSmtpError(err);
-    const final = permanent || lastQuickTry;
-    this.repo.markAttemptFailed(row.shopId, row.id, message, final);
+    const final = permanent || task.final;
+    this.repo.markAttemptFailed(row.shopId, row.id, task.attempt, message, final);
     if (final && row.kind === 'report_ready' && row.jobId !== null)
       this.jobs.recordReportSent({ shopId: row.shopId }, row.jobId, this.repo.hasReportMessage(row.shopId, row.jobId));
-    this.logger.warn(`Message ${row.id} attempt ${row.attempts} failed${final ? ' (desk may resend it)' : ''}: ${message}`);
+    this.logger.warn(`Message ${row.id} attempt ${task.attempt} failed${final ? ' (desk may resend it)' : ''}: ${message}`);
     return permanent && !(err instanceof PermanentTaskError) ? new PermanentTaskError(message) : err;
   }
 

@@ -50,10 +50,10 @@ export class MailRepository {
    * lease makes the task run in one process at a time, so a 'sending' row is one whose process
    * died mid-send; a row whose task key changed (desk resent it) belongs to the newer task.
    */
-  claim(shopId: number, id: number, taskKey: string, attempt: number): OutboxRow | undefined {
+  claim(shopId: number, id: number, taskKey: string): OutboxRow | undefined {
     return this.db
       .update(outboxMessages)
-      .set({ status: 'sending', attempts: attempt })
+      .set({ status: 'sending' })
       .where(
         and(
           eq(outboxMessages.shopId, shopId),
@@ -71,12 +71,13 @@ export class MailRepository {
    * row as it was). A crash before this write leaves the full message for the retry; a second
    * call changes nothing more.
    */
-  markSent(shopId: number, id: number, at: Date, response: string): void {
+  markSent(shopId: number, id: number, attempts: number, at: Date, response: string): void {
     const m = outboxMessages;
     this.db
       .update(m)
       .set({
         status: 'sent',
+        attempts,
         sentAt: at,
         smtpResponse: response,
         lastError: null,
@@ -90,10 +91,10 @@ export class MailRepository {
   }
 
   /** After a failed attempt: queued again (the runner retries the task), or failed when it was the last. */
-  markAttemptFailed(shopId: number, id: number, error: string, final: boolean): void {
+  markAttemptFailed(shopId: number, id: number, attempts: number, error: string, final: boolean): void {
     this.db
       .update(outboxMessages)
-      .set({ status: final ? 'failed' : 'queued', lastError: error.slice(0, 1000) })
+      .set({ status: final ? 'failed' : 'queued', attempts, lastError: error.slice(0, 1000) })
       .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id)))
       .run();
   }
