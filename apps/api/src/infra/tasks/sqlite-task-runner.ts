@@ -6,7 +6,6 @@ import { type BackoffOptions, retryDelay } from './backoff';
 import { isTransientError, PermanentTaskError } from './task-errors';
 import { type TaskRow, type TaskStore, toStatus } from './task-store';
 import type { DbTx } from '../../core/db';
-import type { TaskKind, TaskPayloads } from './task-kinds';
 import type { FailedTask, RawTaskContext, RawTaskSpec, TaskHandlerFn, TaskKindOptions, TaskRunner, TaskRunnerHealth, TaskStatus } from './tasks.port';
 
 export interface SqliteRunnerOptions {
@@ -67,10 +66,6 @@ export class SqliteTaskRunner implements TaskRunner {
   status(kind: string, key: string): TaskStatus | null {
     const row = this.store.find(kind, key);
     return row ? toStatus(row) : null;
-  }
-
-  finished<K extends TaskKind>(kind: K, shopId: number): { key: string; payload: TaskPayloads[K] }[] {
-    return this.store.finished(kind, shopId) as { key: string; payload: TaskPayloads[K] }[];
   }
 
   settled(): Promise<void> {

@@ -53,14 +53,6 @@ export class TaskStore {
       .get();
   }
 
-  finished(kind: string, shopId: number): Pick<TaskRow, 'key' | 'payload'>[] {
-    return this.db
-      .select({ key: tasks.key, payload: tasks.payload })
-      .from(tasks)
-      .where(and(eq(tasks.kind, kind), eq(tasks.shopId, shopId), eq(tasks.status, 'done')))
-      .all();
-  }
-
   /** Takes up to `limit` due tasks of one kind under a lease, atomically (one SQLite write transaction). */
   claim(kind: string, limit: number, owner: string, now: Date, leaseMs: number): TaskRow[] {
     if (limit <= 0) return [];

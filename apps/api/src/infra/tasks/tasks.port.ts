@@ -88,8 +88,6 @@ export interface TaskRunner {
   /** Pass the unit of work's `tx` so the task commits (or vanishes) with the change. */
   enqueue<K extends TaskKind>(spec: TaskSpec<K>, tx?: DbTx): void;
   status(kind: TaskKind, key: string): TaskStatus | null;
-  /** Done tasks of one kind for one shop, with their payloads (e.g. to find finished exports that hold a job's photos). */
-  finished<K extends TaskKind>(kind: K, shopId: number): { key: string; payload: TaskPayloads[K] }[];
   /** Failed tasks of one shop, newest first (the manager's retry screen). */
   failed?(shopId: number): FailedTask[];
   /** Queues a failed task of that shop again at once with fresh attempts; false when there is no such failed task. */
