@@ -48,6 +48,8 @@ export const ACCESS_POLICY = {
   'audit.view': staff('manager'),
   /** See background work that failed (thumbnails, renders, e-mails) and run it again. */
   'work.retry': staff('manager'),
+  /** Free space on the server's disks (the low-space warning). */
+  'storage.view': staff('manager'),
   /** Favourites, captions and the take-down list. */
   'showcase.manage': staff('manager'),
   /** Open the library and export from it; desk only where the shop allows it (canOpenShowcase). */

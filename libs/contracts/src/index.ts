@@ -26,3 +26,4 @@ export * from './annotations';
 export * from './reports';
 export * from './mail';
 export * from './showcase';
+export * from './disk-space';

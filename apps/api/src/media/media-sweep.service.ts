@@ -2,9 +2,10 @@ import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnModuleI
 import { SchedulerRegistry } from '@nestjs/schedule';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
-import { removeLeftovers, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
+import { removeLeftovers, STORAGE, type Storage, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
 import { MediaTusService } from './media-tus.service';
+import { MediaRepository } from './media.repository';
 
 /** A live upload or storage write touches its file every few seconds; half an hour idle means it is dead. */
 const LIVE_WRITE_GRACE_MS = 30 * 60_000;
@@ -30,6 +31,8 @@ export class MediaSweepService implements OnModuleInit, OnApplicationBootstrap {
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly tus: MediaTusService,
     private readonly schedule: SchedulerRegistry,
+    private readonly repo: MediaRepository,
+    @Inject(STORAGE) private readonly storage: Storage,
   ) {}
 
   /** Runs before the server listens and before the task runner starts, so nothing of ours is live. */
@@ -40,26 +43,43 @@ export class MediaSweepService implements OnModuleInit, OnApplicationBootstrap {
 
   /** Expires old tus uploads once the tus server is up (before the app answers), then every STORAGE_SWEEP_MINUTES. */
   async onApplicationBootstrap(): Promise<void> {
-    await this.sweepOnce();
-    const timer = setInterval(() => void this.sweepOnce(), this.cfg.STORAGE_SWEEP_MINUTES * 60_000);
+    await this.sweep();
+    const timer = setInterval(() => void this.sweep(), this.cfg.STORAGE_SWEEP_MINUTES * 60_000);
     this.schedule.addInterval('storage-sweep', timer);
   }
 
-  /** One sweep at a time; a tick that finds one running skips. */
-  sweepOnce(): Promise<void> {
-    this.running ??= this.sweep()
+  /** One sweep now, or the one already running (the interval's tick; tests call it too). */
+  sweep(): Promise<void> {
+    this.running ??= this.sweepNow()
       .catch((err: unknown) => this.logger.error(`Sweep failed: ${(err as Error).message}`))
       .finally(() => (this.running = null));
     return this.running;
   }
 
-  private async sweep(): Promise<void> {
+  private async sweepNow(): Promise<void> {
     const now = this.clock.now();
     const removed = await this.removeLeftovers(new Date(now.getTime() - LIVE_WRITE_GRACE_MS));
-    const expired = await this.tus.expireAbandoned();
+    const expired = (await this.tus.expireAbandoned()) + (await this.tus.removeUnreadable(new Date(now.getTime() - LIVE_WRITE_GRACE_MS)));
+    const orphans = await this.removeOrphanOriginals(new Date(now.getTime() - this.cfg.ORPHAN_GRACE_MINUTES * 60_000));
     const pruned = this.tasks.prune?.(new Date(now.getTime() - DONE_TASK_RETENTION_MS)) ?? 0;
-    if (removed.length + expired + pruned > 0)
-      this.logger.log(`Sweep: ${removed.length} leftover file(s), ${expired} expired upload(s), ${pruned} old task row(s)`);
+    if (removed.length + expired + orphans + pruned > 0)
+      this.logger.log(`Sweep: ${removed.length} leftover file(s), ${expired} dead upload(s), ${orphans} original(s) with no row, ${pruned} old task row(s)`);
+  }
+
+  /**
+   * Originals that no media row names (the row's commit failed after the file was stored, and the
+   * process died before removing it). Only files older than the grace period are candidates, and
+   * the keys rows name are read after listing them, so a file whose row is committing is never taken.
+   */
+  private async removeOrphanOriginals(olderThan: Date): Promise<number> {
+    if (!this.storage.listKeys) return 0;
+    const candidates: string[] = [];
+    for await (const f of this.storage.listKeys('originals/')) if (f.modifiedAt < olderThan) candidates.push(f.key);
+    if (candidates.length === 0) return 0;
+    const named = this.repo.originalKeys();
+    const orphans = candidates.filter((k) => !named.has(k));
+    for (const key of orphans) await this.storage.delete(key);
+    return orphans.length;
   }
 
   private removeLeftovers(olderThan: Date | null): Promise<string[]> {
