@@ -1,34 +1,10 @@
-import { createHash } from 'node:crypto';
 import { createReadStream, createWriteStream } from 'node:fs';
-import { chmod, mkdir, rename, rm, stat, unlink } from 'node:fs/promises';
+import { chmod, mkdir, readdir, rename, rm, stat, unlink } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
-import { type Readable, Transform } from 'node:stream';
+import type { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { assertSafeKey, type AdoptOptions, type ByteRange, type PutOptions, type Storage, type StoredObject } from './storage';
-
-/** Streams the bytes through a SHA-256 and a counter on their way to `sink`. */
-function hashing(): { tap: Transform; result: () => { bytes: number; sha256: string } } {
-  const hash = createHash('sha256');
-  let bytes = 0;
-  const tap = new Transform({
-    transform(chunk: Buffer, _enc, done) {
-      hash.update(chunk);
-      bytes += chunk.length;
-      done(null, chunk);
-    },
-  });
-  return { tap, result: () => ({ bytes, sha256: hash.digest('hex') }) };
-}
-
-async function hashFile(path: string): Promise<{ bytes: number; sha256: string }> {
-  const hash = createHash('sha256');
-  let bytes = 0;
-  for await (const chunk of createReadStream(path) as AsyncIterable<Buffer>) {
-    hash.update(chunk);
-    bytes += chunk.length;
-  }
-  return { bytes, sha256: hash.digest('hex') };
-}
+import { hashFile, hashing } from './hashing';
+import { assertSafeKey, type AdoptOptions, type ByteRange, type ListedObject, type PutOptions, type Storage, type StoredObject } from './storage';
 
 /** Media files under one root folder (cfg.UPLOADS_DIR); nothing here is served statically. */
 export class LocalDiskStorage implements Storage {
@@ -83,5 +59,20 @@ export class LocalDiskStorage implements Storage {
     await unlink(target).catch((err: NodeJS.ErrnoException) => {
       if (err.code !== 'ENOENT') throw err;
     });
+  }
+
+  async list(prefix: string): Promise<ListedObject[]> {
+    const out: ListedObject[] = [];
+    const walk = async (dir: string, rel: string): Promise<void> => {
+      for (const e of await readdir(dir, { withFileTypes: true }).catch(() => [])) {
+        const key = rel ? `${rel}/${e.name}` : e.name;
+        if (e.isDirectory()) await walk(join(dir, e.name), key);
+        else if (key.startsWith(prefix) && !e.name.endsWith('.partial')) out.push({ key, bytes: (await stat(join(dir, e.name))).size });
+      }
+    };
+    // Only the folder the prefix names is walked (tmp/ and tus/ hold no stored objects).
+    const folder = prefix.includes('/') ? prefix.slice(0, prefix.lastIndexOf('/')) : '';
+    await walk(join(this.root, ...folder.split('/').filter(Boolean)), folder);
+    return out.sort((a, b) => a.key.localeCompare(b.key));
   }
 }
