@@ -48,6 +48,7 @@ export default defineConfig({
             'test/e2e/media-images.e2e-spec.ts',
             'test/e2e/media-tus.e2e-spec.ts',
             'test/e2e/media-access.e2e-spec.ts',
+            'test/e2e/backup-restore.e2e-spec.ts',
             'test/s3/**/*.e2e-spec.ts',
           ],
           env: { TEST_STORAGE: 's3' },

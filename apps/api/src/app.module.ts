@@ -4,6 +4,7 @@ import { LoggerModule } from 'nestjs-pino';
 import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
+import { BackupsModule } from './backups';
 import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
 import { AuthCoreModule } from './core/auth';
@@ -48,6 +49,7 @@ const FEATURES = [
   ReportsModule,
   MailModule,
   ShowcaseModule,
+  BackupsModule,
 ];
 
 @Module({})

@@ -35,9 +35,11 @@ export const ON_S3 = process.env.TEST_STORAGE === 's3';
  * A fresh server on a fresh temporary SQLite file with the real migrations and the demo seed;
  * with TEST_STORAGE=s3, its storage is a bucket on an s3rver of its own.
  */
-export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+export async function startTestApp(env: Record<string, string> = {}, opts: { s3?: S3Fake } = {}): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-e2e-'));
-  const s3 = ON_S3 ? await startS3Fake(join(dir, 's3')) : null;
+  // A fake handed in (to outlive this app, e.g. for a restore) is the caller's to close.
+  const ownS3 = ON_S3 && !opts.s3 ? await startS3Fake(join(dir, 's3')) : null;
+  const s3 = opts.s3 ?? ownS3;
   const cfg = loadConfig({
     ...s3?.env,
     DATABASE_PATH: join(dir, 'test.sqlite'),
@@ -67,7 +69,7 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
     s3,
     close: async () => {
       await app.close();
-      await s3?.close();
+      await ownS3?.close();
       rmSync(dir, { recursive: true, force: true });
     },
   };

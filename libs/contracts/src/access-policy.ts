@@ -46,12 +46,20 @@ export const ACCESS_POLICY = {
   'shop.view': staff(...ALL_STAFF),
   'shop.edit': staff('manager'),
   'audit.view': staff('manager'),
+  /** List backups and make one now (the whole database: restore is a server command). */
+  'backups.manage': staff('manager'),
+  /** Download everything of the shop as one zip. */
+  'shop.export': staff('manager'),
   /** Favourites, captions and the take-down list. */
   'showcase.manage': staff('manager'),
   /** Open the library and export from it; desk only where the shop allows it (canOpenShowcase). */
   'showcase.view': staff('manager', 'desk'),
   'customers.view': staff(...ALL_STAFF),
   'customers.edit': staff('manager', 'desk'),
+  /** Download one customer's own data when they ask for it. */
+  'customers.export': staff('manager', 'desk'),
+  /** Erase a customer's personal data on request (audited, cannot be undone). */
+  'customers.erase': staff('manager'),
   'bikes.view': staff(...ALL_STAFF),
   'bikes.edit': staff('manager', 'desk'),
   'jobs.view': staff(...ALL_STAFF),

@@ -103,6 +103,9 @@ const EnvSchema = z.object({
   /** Both or neither; neither = the AWS SDK's default credential chain (environment, shared files, instance role). */
   S3_ACCESS_KEY_ID: z.string().min(1).optional(),
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  /** A database backup every this many hours (0 = only on demand); the newest BACKUP_KEEP are kept. */
+  BACKUP_EVERY_HOURS: z.coerce.number().min(0).default(24),
+  BACKUP_KEEP: z.coerce.number().int().min(1).default(14),
   STORAGE_SWEEP_MINUTES: z.coerce.number().positive().default(60),
   /** pino level; 'silent' turns request logs off (tests). */
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),

@@ -1,10 +1,8 @@
 import { Global, Inject, Module, type OnApplicationShutdown } from '@nestjs/common';
 import type Database from 'better-sqlite3';
 import { APP_CONFIG, type AppConfig } from '../../config';
-import { DB } from './db.types';
+import { DB, SQLITE } from './db.types';
 import { openDb } from './open-db';
-
-const SQLITE = Symbol('SQLITE');
 
 @Global()
 @Module({
@@ -12,7 +10,7 @@ const SQLITE = Symbol('SQLITE');
     { provide: SQLITE, inject: [APP_CONFIG], useFactory: (cfg: AppConfig) => openDb(cfg.DATABASE_PATH) },
     { provide: DB, inject: [SQLITE], useFactory: (opened: ReturnType<typeof openDb>) => opened.db },
   ],
-  exports: [DB],
+  exports: [DB, SQLITE],
 })
 export class DbModule implements OnApplicationShutdown {
   /** Re-gathers planner statistics as tables grow (SQLite: run PRAGMA optimize every few hours). */

@@ -4,3 +4,6 @@ import type * as schema from '../../db/schema';
 export type Db = BetterSQLite3Database<typeof schema>;
 
 export const DB = Symbol('DB');
+
+/** The better-sqlite3 connection itself, for what Drizzle does not wrap (the online backup API). */
+export const SQLITE = Symbol('SQLITE');

@@ -1,4 +1,4 @@
-export { DB, type Db } from './db.types';
+export { DB, SQLITE, type Db } from './db.types';
 export { DbModule } from './db.module';
 export { openDb, MIGRATIONS_DIR } from './open-db';
 export { ftsPrefixQuery } from './fts';
