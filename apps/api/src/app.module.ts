@@ -5,6 +5,7 @@ import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
 import { BackupsModule } from './backups';
+import { DataExportModule } from './data-export';
 import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
 import { AuthCoreModule } from './core/auth';
@@ -50,6 +51,7 @@ const FEATURES = [
   MailModule,
   ShowcaseModule,
   BackupsModule,
+  DataExportModule,
 ];
 
 @Module({})

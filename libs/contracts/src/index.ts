@@ -26,3 +26,4 @@ export * from './reports';
 export * from './mail';
 export * from './showcase';
 export * from './backups';
+export * from './data-export';
