@@ -7,11 +7,11 @@ import type { AuthUser } from '../core/auth';
 import type Database from 'better-sqlite3';
 import { SQLITE } from '../core/db';
 import { listBackups, pruneBackups, writeBackup, type BackupManifest } from '../infra/backup';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { STORAGE, type Storage } from '../infra/storage';
-import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
+import { TASK_RUNNER, TaskHandler, type TaskRunner } from '../infra/tasks';
 
-export const BACKUP_TASK = 'backup.run';
+export const BACKUP_TASK = 'backup.run' as const;
 
 /**
  * Database backups into the configured storage: every BACKUP_EVERY_HOURS as the task 'backup.run'
@@ -33,7 +33,6 @@ export class BackupsService implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
-    this.tasks.register(BACKUP_TASK, () => this.scheduled(), { concurrency: 1, maxAttempts: 3 });
     this.scheduleNext(this.clock.now());
   }
 
@@ -66,7 +65,8 @@ export class BackupsService implements OnModuleInit {
     return manifest;
   }
 
-  private async scheduled(): Promise<void> {
+  @TaskHandler(BACKUP_TASK, { concurrency: 1, maxAttempts: 3 })
+  async scheduled(): Promise<void> {
     await this.run();
     this.scheduleNext(this.clock.now());
   }

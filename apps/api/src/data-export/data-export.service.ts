@@ -5,7 +5,7 @@ import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { openReadSnapshot } from '../core/db';
 import { notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { STORAGE, type Storage } from '../infra/storage';
 import type { ExportScope } from './export-scope';
 import { exportZip } from './export-zip';
