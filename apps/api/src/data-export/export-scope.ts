@@ -5,6 +5,8 @@ export interface TableQuery {
   table: string;
   columns: string[];
   sql: string;
+  /** The WHERE condition alone (for an UPDATE over the same rows) and the ids it binds. */
+  where: string;
   params: number[];
 }
 
@@ -17,7 +19,7 @@ const SKIP_COLUMNS = new Set(['password_hash', 'token_hash', 'text_body', 'html_
 const SHOP_ONLY = new Set(['users', 'shops', 'showcase_items']);
 
 /** Record tables of the schema (with their columns), read from sqlite_master and PRAGMA table_info, so a new table is exported without a change here. */
-export function recordTables(db: Database.Database): Map<string, string[]> {
+export function recordTables(db: Database.Database, opts: { allColumns?: boolean } = {}): Map<string, string[]> {
   const names = db
     .prepare(
       `SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' AND name NOT LIKE '\\_\\_%' ESCAPE '\\' AND sql NOT LIKE 'CREATE VIRTUAL%' ORDER BY name`,
@@ -26,7 +28,7 @@ export function recordTables(db: Database.Database): Map<string, string[]> {
     .all() as string[];
   const out = new Map<string, string[]>();
   for (const name of names) {
-    const cols = (db.prepare(`SELECT name FROM pragma_table_info(?)`).pluck().all(name) as string[]).filter((c) => !SKIP_COLUMNS.has(c));
+    const cols = (db.prepare(`SELECT name FROM pragma_table_info(?)`).pluck().all(name) as string[]).filter((c) => opts.allColumns || !SKIP_COLUMNS.has(c));
     // FTS shadow tables and other helpers carry no shop: only tables that name a shop, or hang off one that does.
     const linked = cols.includes('shop_id') || name === 'shops' || cols.includes('finding_id') || (cols.includes('asset_id') && name !== 'shot_pairs');
     if (!SKIP_TABLES.has(name) && linked) out.set(name, cols);
@@ -35,10 +37,10 @@ export function recordTables(db: Database.Database): Map<string, string[]> {
 }
 
 /** The SELECT for each table in scope; every one is bound to the shop, a customer's also to that customer's bikes and jobs. */
-export function exportQueries(db: Database.Database, scope: ExportScope): TableQuery[] {
+export function exportQueries(db: Database.Database, scope: ExportScope, opts: { allColumns?: boolean } = {}): TableQuery[] {
   const out: TableQuery[] = [];
   const jobsOf = `SELECT id FROM jobs WHERE shop_id = ? AND customer_id = ?`;
-  for (const [table, columns] of recordTables(db)) {
+  for (const [table, columns] of recordTables(db, opts)) {
     const select = `SELECT ${columns.map((c) => `"${c}"`).join(', ')} FROM "${table}"`;
     const where = scope.kind === 'shop' ? shopWhere(table, columns) : customerWhere(table, columns, jobsOf);
     if (!where) continue;
@@ -46,7 +48,7 @@ export function exportQueries(db: Database.Database, scope: ExportScope): TableQ
       scope.kind === 'shop'
         ? where.binds.map(() => scope.shopId)
         : where.binds.flatMap((b) => (b === 'shop' ? [scope.shopId] : [scope.shopId, scope.customerId]));
-    out.push({ table, columns, sql: `${select} WHERE ${where.sql} ORDER BY rowid`, params });
+    out.push({ table, columns, sql: `${select} WHERE ${where.sql} ORDER BY rowid`, where: where.sql, params });
   }
   return out;
 }
