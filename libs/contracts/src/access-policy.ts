@@ -50,6 +50,8 @@ export const ACCESS_POLICY = {
   'backups.manage': staff('manager'),
   /** Download everything of the shop as one zip. */
   'shop.export': staff('manager'),
+  /** Free space on the server's disks (the low-space warning). */
+  'storage.view': staff('manager'),
   /** Favourites, captions and the take-down list. */
   'showcase.manage': staff('manager'),
   /** Open the library and export from it; desk only where the shop allows it (canOpenShowcase). */

@@ -27,3 +27,4 @@ export * from './mail';
 export * from './showcase';
 export * from './backups';
 export * from './data-export';
+export * from './disk-space';

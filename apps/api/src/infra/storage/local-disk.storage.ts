@@ -1,6 +1,6 @@
 import { createReadStream, createWriteStream } from 'node:fs';
 import { chmod, mkdir, readdir, rename, rm, stat, unlink } from 'node:fs/promises';
-import { dirname, join } from 'node:path';
+import { dirname, join, relative, sep } from 'node:path';
 import type { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { hashFile, hashing } from './hashing';
@@ -74,5 +74,18 @@ export class LocalDiskStorage implements Storage {
     const folder = prefix.includes('/') ? prefix.slice(0, prefix.lastIndexOf('/')) : '';
     await walk(join(this.root, ...folder.split('/').filter(Boolean)), folder);
     return out.sort((a, b) => a.key.localeCompare(b.key));
+  }
+
+  async *listKeys(prefix: string): AsyncIterable<{ key: string; modifiedAt: Date }> {
+    const entries = await readdir(join(this.root, ...prefix.split('/').filter(Boolean)), { recursive: true, withFileTypes: true }).catch(() => []);
+    for (const e of entries) {
+      if (!e.isFile() || e.name.endsWith('.partial')) continue;
+      const path = join(e.parentPath, e.name);
+      const modifiedAt = await stat(path).then(
+        (st) => st.mtime,
+        () => null,
+      );
+      if (modifiedAt) yield { key: relative(this.root, path).split(sep).join('/'), modifiedAt };
+    }
   }
 }

@@ -46,6 +46,8 @@ export interface Storage {
   delete(key: string): Promise<void>;
   /** Stored objects whose key starts with `prefix`, by key (backups and their retention use it). */
   list(prefix: string): Promise<ListedObject[]>;
+  /** Stored keys under a prefix with their last change, for the sweep of originals no row names (optional for a remote store). */
+  listKeys?(prefix: string): AsyncIterable<{ key: string; modifiedAt: Date }>;
 }
 
 export const STORAGE = Symbol('STORAGE');
