@@ -5,6 +5,8 @@ import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { BackgroundWorkModule } from './background-work';
 import { AuthModule } from './auth';
+import { BackupsModule } from './backups';
+import { DataExportModule } from './data-export';
 import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
 import { AuthCoreModule } from './core/auth';
@@ -52,6 +54,8 @@ const FEATURES = [
   ReportsModule,
   MailModule,
   ShowcaseModule,
+  BackupsModule,
+  DataExportModule,
 ];
 
 @Module({})

@@ -48,6 +48,10 @@ export const ACCESS_POLICY = {
   'audit.view': staff('manager'),
   /** See background work that failed (thumbnails, renders, e-mails) and run it again. */
   'work.retry': staff('manager'),
+  /** List backups and make one now (the whole database: restore is a server command). */
+  'backups.manage': staff('manager'),
+  /** Download everything of the shop as one zip. */
+  'shop.export': staff('manager'),
   /** Free space on the server's disks (the low-space warning). */
   'storage.view': staff('manager'),
   /** Favourites, captions and the take-down list. */
@@ -56,6 +60,10 @@ export const ACCESS_POLICY = {
   'showcase.view': staff('manager', 'desk'),
   'customers.view': staff(...ALL_STAFF),
   'customers.edit': staff('manager', 'desk'),
+  /** Download one customer's own data when they ask for it. */
+  'customers.export': staff('manager', 'desk'),
+  /** Erase a customer's personal data on request (audited, cannot be undone). */
+  'customers.erase': staff('manager'),
   'bikes.view': staff(...ALL_STAFF),
   'bikes.edit': staff('manager', 'desk'),
   'jobs.view': staff(...ALL_STAFF),

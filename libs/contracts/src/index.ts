@@ -26,4 +26,6 @@ export * from './annotations';
 export * from './reports';
 export * from './mail';
 export * from './showcase';
+export * from './backups';
+export * from './data-export';
 export * from './disk-space';

@@ -93,6 +93,19 @@ const EnvSchema = z.object({
   MEDIA_CACHE_MB: z.coerce.number().min(0).default(32),
   /** Unfinished resumable uploads expire after this many hours (tus expiration extension). */
   TUS_EXPIRE_HOURS: z.coerce.number().positive().default(24),
+  /** Where media, reports and backups live: 'local' (UPLOADS_DIR) or 's3' (an S3-compatible bucket, S3_* below). */
+  STORAGE: z.enum(['local', 's3']).default('local'),
+  S3_BUCKET: z.string().min(3).optional(),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  /** For an S3-compatible store (MinIO, Ceph, a local fake); unset = AWS. */
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_FORCE_PATH_STYLE: bool.default(false),
+  /** Both or neither; neither = the AWS SDK's default credential chain (environment, shared files, instance role). */
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  /** A database backup every this many hours (0 = only on demand); the newest BACKUP_KEEP are kept. */
+  BACKUP_EVERY_HOURS: z.coerce.number().min(0).default(24),
+  BACKUP_KEEP: z.coerce.number().int().min(1).default(14),
   STORAGE_SWEEP_MINUTES: z.coerce.number().positive().default(60),
   /** A stored original that no media row names is removed by the sweep once it is this old (an upload in flight has no row yet). */
   ORPHAN_GRACE_MINUTES: z.coerce.number().positive().default(60),
@@ -124,6 +137,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     throw new ConfigError(`Invalid environment: ${z.prettifyError(parsed.error)}`);
   }
   const cfg = parsed.data;
+  if (cfg.STORAGE === 's3' && !cfg.S3_BUCKET) throw new Error('Invalid environment: STORAGE=s3 needs S3_BUCKET');
+  if (!cfg.S3_ACCESS_KEY_ID !== !cfg.S3_SECRET_ACCESS_KEY)
+    throw new Error('Invalid environment: set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither');
   if (cfg.NODE_ENV === 'production' && !cfg.PUBLIC_URL) {
     throw new ConfigError(
       'PUBLIC_URL is required when NODE_ENV=production: owner links and report links are built from it. ' +

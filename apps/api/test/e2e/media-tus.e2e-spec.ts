@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import { request as httpRequest } from 'node:http';
 import { Upload } from 'tus-js-client';
-import { bookJob, CLIP_MP4, filesUnder, paddedMp4, patternBytes } from '../media/media-fixtures';
+import { bookJob, CLIP_MP4, paddedMp4, patternBytes } from '../media/media-fixtures';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
 
 interface Session {
@@ -100,7 +100,7 @@ describe('resumable uploads (tus 1.0) for large videos', () => {
     expect(asset.sha256).toBe(createHash('sha256').update(file).digest('hex'));
     const status = (await agent.get(location.pathname).expect(200)).body;
     expect(status).toMatchObject({ assetId, offset: file.length, error: null });
-    expect(filesUnder(t.cfg.UPLOADS_DIR).filter((f) => f.startsWith('/tus/'))).toEqual([]);
+    expect(t.storedFiles().filter((f) => f.startsWith('/tus/'))).toEqual([]);
   });
 
   it('refuses a finished upload that is not media, with the error code, leaving nothing behind', async () => {
@@ -122,7 +122,7 @@ describe('resumable uploads (tus 1.0) for large videos', () => {
       .send(bytes)
       .expect(415);
     expect(JSON.parse(res.text).code).toBe('UNSUPPORTED_MEDIA_TYPE');
-    expect(filesUnder(t.cfg.UPLOADS_DIR).filter((f) => f.startsWith('/tus/'))).toEqual([]);
+    expect(t.storedFiles().filter((f) => f.startsWith('/tus/'))).toEqual([]);
   });
 
   it('checks the session, the CSRF header, the job and the shop', async () => {

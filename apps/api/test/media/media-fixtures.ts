@@ -1,5 +1,5 @@
 import { BRAKE_TYPES, CABLE_ROUTINGS, DROPOUT_TYPES, FRAME_MATERIALS } from '@benchproof/domain';
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { MediaDerivativesService } from '../../src/media';
@@ -34,19 +34,7 @@ export async function bookJob(t: TestApp): Promise<number> {
 /** Waits for the derivative queue to go idle (no timing involved). */
 export const derivativesSettled = (t: TestApp): Promise<void> => t.app.get(MediaDerivativesService).settled();
 
-/** Every regular file under a folder, recursively, as paths relative to it (folders are fine to leave). */
-export function filesUnder(dir: string): string[] {
-  const out: string[] = [];
-  const walk = (d: string) => {
-    for (const name of readdirSync(d)) {
-      const p = join(d, name);
-      if (statSync(p).isDirectory()) walk(p);
-      else out.push(p.slice(dir.length));
-    }
-  };
-  walk(dir);
-  return out;
-}
+export { filesUnder } from '../test-app';
 
 /** A plain JPEG of one colour. */
 export const solidJpeg = (w: number, h: number, colour = '#3a6ea5'): Promise<Buffer> =>
