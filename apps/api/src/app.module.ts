@@ -1,6 +1,5 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { EventEmitterModule } from '@nestjs/event-emitter';
-import { LoggerModule } from 'nestjs-pino';
 import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
@@ -8,7 +7,6 @@ import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
 import { AuthCoreModule } from './core/auth';
 import { DbModule } from './core/db';
-import { requestLogging } from './core/logging';
 import { CustomersModule } from './customers';
 import { FindingsModule } from './findings';
 import { HealthController } from './health/health.controller';
@@ -17,7 +15,9 @@ import { PairsModule } from './pairs';
 import { ConsentModule } from './consent';
 import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
+import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './core/clock';
+import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
@@ -43,6 +43,7 @@ const FEATURES = [
   WorkLogModule,
   PairsModule,
   ConsentModule,
+  OwnerLinksModule,
   OwnerModule,
   AnnotationsModule,
   ReportsModule,
@@ -55,18 +56,9 @@ export class AppModule {
   static register(cfg: AppConfig): DynamicModule {
     return {
       module: AppModule,
-      imports: [
-        ConfigModule.forRoot(cfg),
-        LoggerModule.forRoot(requestLogging(cfg)),
-        ClockModule,
-        TasksModule,
-        EventEmitterModule.forRoot(),
-        DbModule,
-        AuthCoreModule,
-        ...FEATURES,
-        SeedModule,
-      ],
+      imports: [ConfigModule.forRoot(cfg), ClockModule, TasksModule, EventEmitterModule.forRoot(), DbModule, AuthCoreModule, ...FEATURES, SeedModule],
       controllers: [HealthController],
+      providers: [DiskSpace],
     };
   }
 }
