@@ -80,6 +80,19 @@ export function newClientId(): string {
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
 }
 
+/** The state of a shot nothing has been sent of yet, as far as this page knows. */
+export const NOT_SENT = {
+  savedTags: null,
+  status: 'queued',
+  progress: 0,
+  attempts: 0,
+  retryAt: null,
+  error: null,
+  errorCode: null,
+  assetId: null,
+  selected: false,
+} as const satisfies Partial<QueueItem>;
+
 let seq = 0;
 export function newItem(jobId: number, file: File, tags: ShotTags, extra: Partial<Pick<QueueItem, 'source' | 'sourceAssetId' | 'timecodeMs'>> = {}): QueueItem {
   seq += 1;
@@ -93,15 +106,7 @@ export function newItem(jobId: number, file: File, tags: ShotTags, extra: Partia
     sourceAssetId: extra.sourceAssetId,
     timecodeMs: extra.timecodeMs,
     tags,
-    savedTags: null,
-    status: 'queued',
-    progress: 0,
-    attempts: 0,
-    retryAt: null,
-    error: null,
-    errorCode: null,
-    assetId: null,
-    selected: false,
+    ...NOT_SENT,
   };
 }
 
