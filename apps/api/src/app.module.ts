@@ -1,7 +1,9 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { EventEmitterModule } from '@nestjs/event-emitter';
+import { ScheduleModule } from '@nestjs/schedule';
 import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
+import { BackgroundWorkModule } from './background-work';
 import { AuthModule } from './auth';
 import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
@@ -31,6 +33,7 @@ import { WorkLogModule } from './work-log';
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
   AuditModule,
+  BackgroundWorkModule,
   AuthModule,
   UsersModule,
   ShopsModule,
@@ -56,7 +59,17 @@ export class AppModule {
   static register(cfg: AppConfig): DynamicModule {
     return {
       module: AppModule,
-      imports: [ConfigModule.forRoot(cfg), ClockModule, TasksModule, EventEmitterModule.forRoot(), DbModule, AuthCoreModule, ...FEATURES, SeedModule],
+      imports: [
+        ConfigModule.forRoot(cfg),
+        ClockModule,
+        TasksModule,
+        ScheduleModule.forRoot(),
+        EventEmitterModule.forRoot(),
+        DbModule,
+        AuthCoreModule,
+        ...FEATURES,
+        SeedModule,
+      ],
       controllers: [HealthController],
       providers: [DiskSpace],
     };

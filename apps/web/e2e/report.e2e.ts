@@ -43,7 +43,13 @@ describe('bench report: branding, draft, issue, public verify', () => {
       await pageImage.waitFor();
       await expect.poll(() => pageImage.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 30_000 }).toBeGreaterThan(500);
       await shot(page, 'report-draft-phone');
+      // Issuing cannot be undone: the first tap asks, nothing is issued until the second.
       await issue.click();
+      const ask = page.getByRole('group', { name: /^Issue version 1\? An issued report never changes/ });
+      await ask.waitFor();
+      expect(await page.getByRole('link', { name: 'Download' }).count()).toBe(0);
+      await shot(page, 'report-issue-confirm-phone');
+      await ask.getByRole('button', { name: 'Issue version 1' }).click();
       const download = page.getByRole('link', { name: 'Download' }).first();
       await download.waitFor({ timeout: 60_000 });
       await shot(page, 'report-issued-phone');

@@ -52,11 +52,17 @@ describe('signing in and out', () => {
     await shot(b.page, 'session-expired-desktop');
   });
 
-  it('hides manager pages from a mechanic', async () => {
+  it('hides manager pages from a mechanic, and says why when one is opened by its address', async () => {
     b = await openBrowser(DESKTOP);
     await signIn(b.page, 'tobin@lantern-spoke.test');
     expect(await b.page.getByRole('link', { name: 'Users & roles' }).count()).toBe(0);
     await b.page.goto('/settings/users');
+    await b.page.waitForURL(/\/jobs\?denied=users\.manage$/);
+    const notice = b.page.getByRole('alert').filter({ hasText: 'That page is not open to your role' });
+    await notice.getByText(/Only manager accounts can open it, so you are on the jobs list instead\./).waitFor();
+    await shot(b.page, 'denied-notice-desktop');
+    await notice.getByRole('button', { name: 'Dismiss' }).click();
     await b.page.waitForURL(/\/jobs$/);
+    expect(await notice.count()).toBe(0);
   });
 });

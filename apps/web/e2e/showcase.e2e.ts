@@ -82,8 +82,8 @@ describe('showcase: desk access by shop setting; background zip with progress', 
     await cards.first().waitFor();
     const n = await cards.count();
     for (let i = 0; i < n; i++) await cards.nth(i).getByLabel('Select for zip').check();
-    await mgr.page.getByRole('combobox', { name: 'Zip size' }).click();
-    await mgr.page.getByRole('option', { name: 'All three sizes' }).click();
+    await mgr.page.getByRole('combobox', { name: 'Files in the zip' }).click();
+    await mgr.page.getByRole('option', { name: 'Each card’s choice, all three sizes' }).click();
     await mgr.page.getByRole('button', { name: `Zip ${3 * n} files` }).click();
     await mgr.page.getByRole('progressbar', { name: 'Zip progress' }).waitFor();
     await mgr.page.getByText(/^(Waiting to start the zip…|Making the zip: \d+ of \d+ files)$/).waitFor();
@@ -156,5 +156,15 @@ describe('showcase: only consented pairs; export; the owner revokes and the pair
     const after = (await (await mgr.page.request.get('/api/showcase/items')).json()) as ShowcaseItemDto[];
     expect(after.filter((i) => i.jobId === jobId)).toEqual([]);
     await snap(mgr.page, 'showcase-library-after-revoke-desktop');
+
+    // Where the withdrawal shows on the job, the manager sees what to take down: the square exported above.
+    await mgr.page.goto(`/jobs/${jobId}?section=owner`);
+    const takeDown = mgr.page.getByTestId('take-down-list');
+    await takeDown.getByText('Take these down').waitFor();
+    await takeDown
+      .getByText(/· Before and after together · Square post 1080×1080 · \d+ KB$/)
+      .first()
+      .waitFor();
+    await snap(mgr.page, 'showcase-take-down-desktop');
   });
 });

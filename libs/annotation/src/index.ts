@@ -8,3 +8,4 @@ export * from './svg';
 export * from './compact';
 export * from './size';
 export * from './history';
+export * from './subject';

@@ -46,6 +46,8 @@ export const ACCESS_POLICY = {
   'shop.view': staff(...ALL_STAFF),
   'shop.edit': staff('manager'),
   'audit.view': staff('manager'),
+  /** See background work that failed (thumbnails, renders, e-mails) and run it again. */
+  'work.retry': staff('manager'),
   /** Free space on the server's disks (the low-space warning). */
   'storage.view': staff('manager'),
   /** Favourites, captions and the take-down list. */

@@ -1,5 +1,6 @@
 export * from './errors';
 export * from './audit';
+export * from './failed-work';
 export * from './auth';
 export * from './roles';
 export * from './access-policy';

@@ -91,7 +91,7 @@ export const OwnerPairSchema = z.object({ id: z.number().int(), caption: z.strin
 export type OwnerPair = z.infer<typeof OwnerPairSchema>;
 
 export const OwnerPageDtoSchema = z.object({
-  shop: z.object({ name: z.string(), phone: z.string(), email: z.string(), brandPrimary: z.string(), brandAccent: z.string() }),
+  shop: z.object({ name: z.string(), phone: z.string(), email: z.string(), brandPrimary: z.string(), brandAccent: z.string(), dateLocale: z.string() }),
   job: z.object({ number: z.string(), status: z.string(), reportedSymptoms: z.string(), promisedOn: z.string().nullable() }),
   bike: z.object({ maker: z.string(), model: z.string(), year: z.number().int().nullable(), colour: z.string().nullable() }),
   ownerName: z.string(),

@@ -1,4 +1,4 @@
-import { chainWearLimits, MAX_BICYCLE_CHAIN_LIMIT_PCT } from '@benchproof/domain';
+import { chainWearLimits, MAX_BICYCLE_CHAIN_LIMIT_PCT, SHOP_LOCALES } from '@benchproof/domain';
 import { z } from 'zod';
 import { IdSchema, requiredText } from './common';
 
@@ -45,6 +45,8 @@ const settingsFields = {
   /** Tax rate in basis points: 2000 = 20 %. */
   taxRateBp: z.int().min(0).max(10_000),
   currency: CurrencySchema,
+  /** How dates and times are written (web, e-mail, PDF); null: the one that fits the currency (domain shopLocale). */
+  locale: z.enum(SHOP_LOCALES).nullable(),
   units: UnitSystemSchema,
   pageSize: PageSizeSchema,
   /** Final check must be signed off by someone other than the mechanic. */
@@ -60,6 +62,8 @@ export const ShopSettingsDtoSchema = z.object({
   ...settingsFields,
   /** The report logo (a shop-level image made by the media pipeline), or null. */
   logo: z.object({ url: z.string(), width: z.number().int(), height: z.number().int() }).nullable(),
+  /** The locale in force: `locale`, else the one from the currency. Every date is written with it. */
+  dateLocale: z.enum(SHOP_LOCALES),
 });
 export type ShopSettingsDto = z.infer<typeof ShopSettingsDtoSchema>;
 

@@ -26,4 +26,4 @@ export * from './perceptual-hash';
 export * from './pair-suggestion';
 export * from './owner-explanations';
 export * from './report-palette';
-export * from './retry';
+export * from './dates';

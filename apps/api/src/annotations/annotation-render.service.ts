@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { blurRegions, renderSvg, type AnnotationDocument } from '@benchproof/annotation';
+import { blurRegions, marksBox, renderSvg, type AnnotationDocument } from '@benchproof/annotation';
 import type { AnnotatedSize } from '@benchproof/contracts';
 import { Readable } from 'node:stream';
 import { IMAGE, type ImageAdapter } from '../infra/image';
@@ -63,6 +63,13 @@ export class AnnotationRenderService {
       await job;
     }
     return { key, version: latest.version, width: base.width, height: base.height };
+  }
+
+  /** The box around the marks of the photo's newest annotation (normalised; blur boxes left out), or null: where the subject is. */
+  marksBox(shopId: number, assetId: number): { x: number; y: number; w: number; h: number } | null {
+    const latest = this.repo.latest(shopId, assetId);
+    const box = latest ? marksBox(latest.document) : null;
+    return box && { x: box.x, y: box.y, w: box.width, h: box.height };
   }
 
   /** The annotated JPEG bytes (for the report PDF, the owner page, the showcase). */

@@ -59,17 +59,9 @@ const EnvSchema = z.object({
     .int()
     .positive()
     .default(8 * 1024 * 1024),
-  /** First retry after this many ms; each later one waits twice as long (capped at an hour). */
+  /** First retry of a 'mail.send' task after this many ms; the task runner's backoff doubles it (capped at 10 min). */
   MAIL_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
   MAIL_MAX_ATTEMPTS: z.coerce.number().int().positive().default(8),
-  /** A message 'sending' for longer than this is taken as lost with its process and tried again. */
-  MAIL_SEND_LEASE_MS: z.coerce
-    .number()
-    .int()
-    .positive()
-    .default(10 * 60_000),
-  /** How often the outbox looks for messages whose next try has come. */
-  MAIL_SWEEP_MS: z.coerce.number().int().positive().default(5_000),
   MAX_PHOTO_BYTES: z.coerce
     .number()
     .int()
@@ -86,6 +78,12 @@ const EnvSchema = z.object({
   TASK_POLL_MS: z.coerce.number().int().positive().default(1000),
   TASK_LEASE_MS: z.coerce.number().int().min(300).default(60_000),
   TASK_BACKOFF_MS: z.coerce.number().int().positive().default(2000),
+  /** After the last quick attempt, a task failed on a transient error (full disk, lost connection, timeout) runs again after this, doubling up to a day. */
+  TASK_RETRY_LATER_MS: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(15 * 60_000),
   /**
    * Photos made into derivatives at once. Two on the 2-core target: 20 photos 4 at a time went from 2.78 to
    * 3.82 photos/s against one (npm run bench), at the cost of ~40 MB more idle RSS after the burst.

@@ -1,4 +1,3 @@
 export { JobsModule } from './jobs.module';
 export { JobsService } from './jobs.service';
 export { JobAccess, type JobRef, type JobCaller, type ShopScope, type EvidenceKind } from './job-access.service';
-export type { ReportSentCheck } from './report-sent';

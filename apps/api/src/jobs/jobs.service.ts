@@ -25,7 +25,6 @@ import { UsersService } from '../users';
 import { BookInService } from './book-in.service';
 import { JobAccess, type JobRef, toJobRef } from './job-access.service';
 import { type JobRow, JobsRepository } from './jobs.repository';
-import { ReportSentChecks } from './report-sent';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
 import { UnitOfWork } from '../core/db';
 
@@ -33,9 +32,6 @@ type Actor = Pick<AuthUser, 'shopId'>;
 
 @Injectable()
 export class JobsService {
-  /** The hand-over rule; the feature that sends reports adds its check here. */
-  readonly reportSent = new ReportSentChecks();
-
   constructor(
     private readonly repo: JobsRepository,
     private readonly uow: UnitOfWork,
@@ -129,6 +125,11 @@ export class JobsService {
     return { ...toJobRef(job), reportedSymptoms: job.reportedSymptoms, promisedOn: job.promisedOn };
   }
 
+  /** The mail feature records whether a report e-mail is sent or on its way (the hand-over rule reads it). */
+  recordReportSent(scope: Actor, id: number, sent: boolean): void {
+    this.repo.update(scope.shopId, id, { reportSent: sent });
+  }
+
   /** A status change caused by the owner on their own page: same table, no staff user, audited as the owner link. */
   transitionByOwner(scope: Pick<AuthUser, 'shopId'>, id: number, to: JobRow['status'], note: string): void {
     this.move({ shopId: scope.shopId, id: null }, id, to, note);
@@ -141,7 +142,8 @@ export class JobsService {
         throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to, allowed: allowedNextStatuses(job.status) });
       if (to === 'ready') this.requirePassedCheck(actor, job);
       // Collected is terminal, so only the hand-over ever sets collectedWithoutReport.
-      const withoutReport = to === 'collected' && !this.reportSent.require(actor.shopId, id, confirmNoReport);
+      const withoutReport = to === 'collected' && !job.reportSent;
+      if (withoutReport && !confirmNoReport) throw new DomainError('REPORT_NOT_SENT');
       const now = this.clock.now();
       this.repo.update(actor.shopId, id, { status: to, [STATUS_TIME_FIELD[to]]: now, updatedAt: now, collectedWithoutReport: withoutReport });
       this.repo.insertEvent({

@@ -1,3 +1,2 @@
 export { MailModule } from './mail.module';
-export { MailService, type QueuedMail } from './mail.service';
-export type { IssuedPdf, ReportFiles } from './report-files';
+export { MailService, type QueuedMail, type ReportPdf } from './mail.service';

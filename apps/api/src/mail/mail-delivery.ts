@@ -1,63 +1,44 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
-import { retryDelayMs } from '@benchproof/domain';
+import { createHash } from 'node:crypto';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
 import { isPermanentSmtpError, MAIL_TRANSPORT, type MailTransport, type OutgoingAttachment } from '../infra/mail';
 import { STORAGE, type Storage } from '../infra/storage';
-import type { TaskContext } from '../infra/tasks';
+import { PermanentTaskError, type TaskContext, TaskHandler } from '../infra/tasks';
+import { JobsService } from '../jobs';
+import type { OutboxAttachmentRef } from '../db/schema';
 import { type OutboxRow, MailRepository } from './mail.repository';
-import type { IssuedPdf, ReportFiles } from './report-files';
 
-/** Thrown when retrying cannot help (relay refused for good, report changed): the message fails at once. */
-class PermanentFailure extends Error {}
+export const MAIL_SEND = 'mail.send' as const;
 
 /**
- * One delivery attempt of one outbox row (the 'mail.send' task). Exactly-once as far as SMTP
- * allows: the row is claimed by one conditional UPDATE before any byte goes out, marked sent
- * right after the relay's 250, and a re-run finds it sent and does nothing. The only gap is a
- * crash between the 250 and that one synchronous write; the row then stays 'sending', is taken
- * again after the lease and goes out with the same Message-ID, which receivers use to collapse
- * the duplicate.
+ * Delivers one outbox row: the 'mail.send' task. The task runner is its only scheduler (retries
+ * on its backoff with MAIL_RETRY_BASE_MS, MAIL_MAX_ATTEMPTS, its lease after a crash, a long
+ * retry for a relay that stays away); the row is the record desk sees. Exactly-once as far as
+ * SMTP allows: the row is claimed before any byte goes out, marked sent right after the relay's
+ * 250, and a re-run finds it sent and does nothing. The only gap is a crash between the 250 and
+ * that one write; the task then runs again after its lease with the same Message-ID, which
+ * receivers use to collapse the duplicate.
  */
 @Injectable()
 export class MailDelivery {
   private readonly logger = new Logger('Mail');
-  private reportFiles: ReportFiles | null = null;
 
   constructor(
     private readonly repo: MailRepository,
+    private readonly jobs: JobsService,
     @Inject(MAIL_TRANSPORT) private readonly transport: MailTransport,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(CLOCK) private readonly clock: Clock,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
   ) {}
 
-  useReportFiles(files: ReportFiles): void {
-    this.reportFiles = files;
-  }
-
-  /** The issued report, or null when there is none (or no reports feature is bound yet). */
-  issuedPdf(shopId: number, reportId: number): Promise<IssuedPdf | null> {
-    return this.reportFiles ? this.reportFiles.getIssuedPdf(shopId, reportId) : Promise.resolve(null);
-  }
-
-  /**
-   * Returns normally only when this round is settled (sent, failed for good, or gone); throws
-   * otherwise, so the runner records the task as failed and the relay's next enqueue is taken.
-   */
-  async deliver(task: Pick<TaskContext, 'key' | 'shopId'>): Promise<void> {
-    const id = Number(task.key.split('.')[0]);
+  @TaskHandler(MAIL_SEND, { concurrency: 2, maxAttempts: (cfg) => cfg.MAIL_MAX_ATTEMPTS, backoffBaseMs: (cfg) => cfg.MAIL_RETRY_BASE_MS })
+  async deliver(task: TaskContext<typeof MAIL_SEND>): Promise<void> {
     const shopId = task.shopId ?? 0;
-    const now = this.clock.now();
-    // The lease (MAIL_SEND_LEASE_MS) is far longer than the transport's timeouts, so a live attempt is never taken over.
-    const row = this.repo.claim(shopId, id, now, new Date(now.getTime() - this.cfg.MAIL_SEND_LEASE_MS));
-    if (!row) {
-      const current = this.repo.find(shopId, id);
-      if (!current || current.status === 'sent' || current.status === 'failed') return;
-      throw new Error(`Message ${id} is ${current.status} elsewhere; trying later`);
-    }
+    const row = this.repo.claim(shopId, task.payload.messageId, task.key);
+    if (!row) return; // sent already, or desk resent it under a newer task
     try {
-      const attachments = await this.attachments(row);
       const receipt = await this.transport.send({
         from: this.cfg.MAIL_FROM,
         to: row.toAddress,
@@ -65,38 +46,44 @@ export class MailDelivery {
         text: row.textBody,
         html: row.htmlBody,
         messageId: row.messageId,
-        attachments,
+        attachments: await this.attachments(row),
       });
-      this.repo.markSent(shopId, id, this.clock.now(), receipt.response);
+      this.repo.markSent(shopId, row.id, task.attempt, this.clock.now(), receipt.response);
     } catch (err) {
-      this.recordFailure(row, err);
-      throw err;
+      throw this.recordFailure(row, err, task);
     }
   }
 
-  private recordFailure(row: OutboxRow, err: unknown): void {
+  /** Records the attempt on the row; returns what the runner should see (permanent: no more tries). */
+  private recordFailure(row: OutboxRow, err: unknown, task: Pick<TaskContext, 'attempt' | 'final'>): unknown {
     const message = err instanceof Error ? err.message : String(err);
-    const final = err instanceof PermanentFailure || isPermanentSmtpError(err) || row.attempts >= this.cfg.MAIL_MAX_ATTEMPTS;
-    const next = final ? null : new Date(this.clock.now().getTime() + retryDelayMs(row.attempts, this.cfg.MAIL_RETRY_BASE_MS));
-    this.repo.markAttemptFailed(row.shopId, row.id, message, next);
-    this.logger.warn(`Message ${row.id} attempt ${row.attempts} failed${final ? ' for good' : ''}: ${message}`);
+    const permanent = err instanceof PermanentTaskError || isPermanentSmtpError(err);
+    const final = permanent || task.final;
+    this.repo.markAttemptFailed(row.shopId, row.id, task.attempt, message, final);
+    if (final && row.kind === 'report_ready' && row.jobId !== null)
+      this.jobs.recordReportSent({ shopId: row.shopId }, row.jobId, this.repo.hasReportMessage(row.shopId, row.jobId));
+    this.logger.warn(`Message ${row.id} attempt ${task.attempt} failed${final ? ' (desk may resend it)' : ''}: ${message}`);
+    return permanent && !(err instanceof PermanentTaskError) ? new PermanentTaskError(message) : err;
   }
 
-  /** Opens each attachment at send time, from storage or the issued report; nothing is copied into the outbox. */
+  /** Opens each attachment from storage at send time; bytes other than those queued fail the message rather than mail the wrong file. */
   private async attachments(row: OutboxRow): Promise<OutgoingAttachment[]> {
     const out: OutgoingAttachment[] = [];
     for (const ref of row.attachments) {
-      if (ref.source.kind === 'storage') {
-        if (!(await this.storage.stat(ref.source.key))) throw new PermanentFailure(`Attachment ${ref.filename} is no longer stored`);
-        out.push({ filename: ref.filename, contentType: ref.contentType, content: this.storage.createReadStream(ref.source.key) });
-        continue;
-      }
-      if (!this.reportFiles) throw new Error('Reports are not available to mail yet');
-      const pdf = await this.reportFiles.getIssuedPdf(row.shopId, ref.source.reportId);
-      if (!pdf) throw new PermanentFailure(`Report ${ref.source.reportId} no longer exists`);
-      if (ref.sha256 && pdf.sha256 !== ref.sha256) throw new PermanentFailure(`Report ${ref.source.reportId} is not the version that was queued`);
-      out.push({ filename: ref.filename, contentType: ref.contentType, content: pdf.open() });
+      if (ref.source.kind !== 'storage') throw new PermanentTaskError(`Attachment ${ref.filename} has no storage key`);
+      await this.check(ref, ref.source.key);
+      out.push({ filename: ref.filename, contentType: ref.contentType, content: this.storage.createReadStream(ref.source.key) });
     }
     return out;
+  }
+
+  private async check(ref: OutboxAttachmentRef, key: string): Promise<void> {
+    const stat = await this.storage.stat(key);
+    if (!stat) throw new PermanentTaskError(`Attachment ${ref.filename} is no longer stored`);
+    if (ref.size !== null && stat.bytes !== ref.size) throw new PermanentTaskError(`Attachment ${ref.filename} is not the file that was queued`);
+    if (ref.sha256 === null) return;
+    const hash = createHash('sha256');
+    for await (const chunk of this.storage.createReadStream(key)) hash.update(chunk as Buffer);
+    if (hash.digest('hex') !== ref.sha256) throw new PermanentTaskError(`Attachment ${ref.filename} is not the file that was queued`);
   }
 }

@@ -1,8 +1,6 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { SendReportRequestSchema, type SendReportRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
 import { MailService } from './mail.service';
 
 @ApiTags('mail')
@@ -22,19 +20,5 @@ export class MailController {
   @Can('reports.issue')
   resend(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Param('messageId', ParseIntPipe) messageId: number) {
     return this.mail.resend(user, jobId, messageId);
-  }
-
-  /** Queues the issued report to the owner; 202: it goes out through the outbox. */
-  @Post('reports/:reportId/send')
-  @HttpCode(202)
-  @Can('reports.issue')
-  @ApiZodBody(SendReportRequestSchema)
-  sendReport(
-    @CurrentUser() user: AuthUser,
-    @Param('jobId', ParseIntPipe) jobId: number,
-    @Param('reportId', ParseIntPipe) reportId: number,
-    @Body(zod(SendReportRequestSchema)) body: SendReportRequest,
-  ) {
-    return this.mail.sendReport(user, jobId, reportId, body);
   }
 }

@@ -7,7 +7,6 @@ import { StorageModule } from '../infra/storage';
 import { JobsModule } from '../jobs';
 import { ShopsModule } from '../shops';
 import { MailDelivery } from './mail-delivery';
-import { MailRelay } from './mail-relay';
 import { MailController } from './mail.controller';
 import { MailRepository } from './mail.repository';
 import { MailService } from './mail.service';
@@ -15,7 +14,7 @@ import { MailService } from './mail.service';
 @Module({
   imports: [MailTransportModule, StorageModule, AuditModule, BikesModule, CustomersModule, JobsModule, ShopsModule],
   controllers: [MailController],
-  providers: [MailRepository, MailDelivery, MailRelay, MailService],
+  providers: [MailRepository, MailDelivery, MailService],
   exports: [MailService],
 })
 export class MailModule {}

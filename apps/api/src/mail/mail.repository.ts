@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, desc, eq, inArray, isNull, lte, ne, or, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, ne, sql } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { outboxMessages } from '../db/schema';
 import type { DbTx } from '../core/db';
@@ -46,19 +46,20 @@ export class MailRepository {
   }
 
   /**
-   * Takes the row for one attempt: a single conditional UPDATE, so of two workers only one
-   * wins (SQLite runs writers one at a time). A 'sending' row whose lease ran out belonged to
-   * a process that died mid-send and may be taken again.
+   * Takes the row for one attempt of task `taskKey`: a single conditional UPDATE. The runner's
+   * lease makes the task run in one process at a time, so a 'sending' row is one whose process
+   * died mid-send; a row whose task key changed (desk resent it) belongs to the newer task.
    */
-  claim(shopId: number, id: number, now: Date, staleBefore: Date): OutboxRow | undefined {
+  claim(shopId: number, id: number, taskKey: string): OutboxRow | undefined {
     return this.db
       .update(outboxMessages)
-      .set({ status: 'sending', attempts: sql`${outboxMessages.attempts} + 1`, sendingSince: now, nextTryAt: null })
+      .set({ status: 'sending' })
       .where(
         and(
           eq(outboxMessages.shopId, shopId),
           eq(outboxMessages.id, id),
-          or(eq(outboxMessages.status, 'queued'), and(eq(outboxMessages.status, 'sending'), lte(outboxMessages.sendingSince, staleBefore))),
+          eq(outboxMessages.taskKey, taskKey),
+          inArray(outboxMessages.status, ['queued', 'sending', 'failed']),
         ),
       )
       .returning()
@@ -70,16 +71,16 @@ export class MailRepository {
    * row as it was). A crash before this write leaves the full message for the retry; a second
    * call changes nothing more.
    */
-  markSent(shopId: number, id: number, at: Date, response: string): void {
+  markSent(shopId: number, id: number, attempts: number, at: Date, response: string): void {
     const m = outboxMessages;
     this.db
       .update(m)
       .set({
         status: 'sent',
+        attempts,
         sentAt: at,
         smtpResponse: response,
         lastError: null,
-        sendingSince: null,
         textBody: sql`coalesce(${m.textAfterSend}, ${m.textBody})`,
         htmlBody: sql`coalesce(${m.htmlAfterSend}, ${m.htmlBody})`,
         textAfterSend: null,
@@ -89,40 +90,22 @@ export class MailRepository {
       .run();
   }
 
-  /** After a failed attempt: back to the queue with its next try, or failed for good. */
-  markAttemptFailed(shopId: number, id: number, error: string, nextTryAt: Date | null): void {
+  /** After a failed attempt: queued again (the runner retries the task), or failed when it was the last. */
+  markAttemptFailed(shopId: number, id: number, attempts: number, error: string, final: boolean): void {
     this.db
       .update(outboxMessages)
-      .set({ status: nextTryAt ? 'queued' : 'failed', lastError: error.slice(0, 1000), nextTryAt, sendingSince: null })
+      .set({ status: final ? 'failed' : 'queued', attempts, lastError: error.slice(0, 1000) })
       .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id)))
       .run();
   }
 
-  /** Desk's resend of a finally failed message: a new round of attempts. */
-  requeue(shopId: number, id: number, tx: DbTx): OutboxRow | undefined {
+  /** Desk's resend of a finally failed message: queued under a new task key. */
+  requeue(shopId: number, id: number, taskKey: string, tx: DbTx): OutboxRow | undefined {
     return tx
       .update(outboxMessages)
-      .set({ status: 'queued', attempts: 0, round: sql`${outboxMessages.round} + 1`, nextTryAt: null })
+      .set({ status: 'queued', attempts: 0, taskKey })
       .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id), eq(outboxMessages.status, 'failed')))
       .returning()
       .all()[0];
-  }
-
-  /**
-   * Every shop's messages that are due: queued with their next try come, or stuck in 'sending'
-   * past the lease. The one cross-shop query: the outbox relay works for all shops at once.
-   */
-  due(now: Date, staleBefore: Date): Pick<OutboxRow, 'id' | 'shopId' | 'round'>[] {
-    return this.db
-      .select({ id: outboxMessages.id, shopId: outboxMessages.shopId, round: outboxMessages.round })
-      .from(outboxMessages)
-      .where(
-        or(
-          and(eq(outboxMessages.status, 'queued'), or(isNull(outboxMessages.nextTryAt), lte(outboxMessages.nextTryAt, now))),
-          and(inArray(outboxMessages.status, ['sending']), lte(outboxMessages.sendingSince, staleBefore)),
-        ),
-      )
-      .limit(200)
-      .all();
   }
 }

@@ -1,5 +1,6 @@
-import { Inject, Injectable, type OnModuleInit } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import type { OutboxMessageDto, SendReportRequest } from '@benchproof/contracts';
+import { formatDate } from '@benchproof/domain';
 import { randomBytes } from 'node:crypto';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
@@ -13,10 +14,8 @@ import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import type { OutboxAttachmentRef } from '../db/schema';
-import { MailDelivery } from './mail-delivery';
-import { MAIL_SEND, mailTaskKey } from './mail-relay';
+import { MAIL_SEND } from './mail-delivery';
 import { type OutboxRow, MailRepository } from './mail.repository';
-import type { ReportFiles } from './report-files';
 import { estimateDecisionMail } from './templates/estimate-decision';
 import { type RenderedMail, type ShopBrand, withoutSecrets } from './templates/layout';
 import { reportReadyMail } from './templates/report-ready';
@@ -40,13 +39,29 @@ export interface QueuedMail {
 
 type Actor = Pick<AuthUser, 'id' | 'shopId'>;
 
+/** An issued report PDF as the reports feature hands it to mail: attached by storage key and SHA-256. */
+export interface ReportPdf {
+  reportId: number;
+  jobId: number;
+  version: number;
+  filename: string;
+  storageKey: string;
+  /** Hex SHA-256 of the PDF bytes, as issued. */
+  sha256: string;
+  size: number;
+  /** Where the owner can open the report without an attachment, or null. */
+  link: string | null;
+}
+
+/** A fresh key for a message's delivery task: a resend is a new task. */
+const newTaskKey = (): string => randomBytes(8).toString('hex');
+
 /** The outbox: every e-mail is a row written with its cause, delivered by the 'mail.send' task. */
 @Injectable()
-export class MailService implements OnModuleInit {
+export class MailService {
   constructor(
     private readonly repo: MailRepository,
     private readonly uow: UnitOfWork,
-    private readonly delivery: MailDelivery,
     private readonly jobs: JobsService,
     private readonly access: JobAccess,
     private readonly customers: CustomersService,
@@ -57,15 +72,6 @@ export class MailService implements OnModuleInit {
     @Inject(CLOCK) private readonly clock: Clock,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
   ) {}
-
-  onModuleInit(): void {
-    this.jobs.reportSent.add((shopId, jobId) => this.repo.hasReportMessage(shopId, jobId));
-  }
-
-  /** The reports feature binds its issued PDFs here at start-up (see report-files.ts). */
-  useReportFiles(files: ReportFiles): void {
-    this.delivery.useReportFiles(files);
-  }
 
   /** Writes the outbox row and its task; pass the cause's transaction so both commit or neither. */
   queue(mail: QueuedMail, tx?: DbTx): OutboxMessageDto {
@@ -83,16 +89,22 @@ export class MailService implements OnModuleInit {
           ...this.afterSend(mail),
           attachments: mail.attachments,
           status: 'queued',
+          taskKey: newTaskKey(),
           messageId: this.newMessageId(mail.shopId),
           createdBy: mail.createdBy ?? null,
           createdAt: this.clock.now(),
         },
         t,
       );
-      this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(row), shopId: row.shopId }, t);
+      this.enqueue(row, t);
+      if (row.kind === 'report_ready' && row.jobId !== null) this.jobs.recordReportSent({ shopId: row.shopId }, row.jobId, true);
       return row;
     };
     return this.toDto(tx ? write(tx) : this.uow.run(write));
+  }
+
+  private enqueue(row: OutboxRow, tx: DbTx): void {
+    this.tasks.enqueue({ kind: MAIL_SEND, key: row.taskKey, shopId: row.shopId, payload: { messageId: row.id } }, tx);
   }
 
   /** The bodies that replace the sent ones (MailRepository.markSent), when the message carries secrets. */
@@ -108,26 +120,30 @@ export class MailService implements OnModuleInit {
     return this.repo.listByJob(actor.shopId, jobId).map((r) => this.toDto(r));
   }
 
-  /** Desk sends a finally failed message again: a new round of attempts, same Message-ID. */
+  /** Desk sends a finally failed message again: a new task with fresh attempts, same Message-ID. */
   resend(actor: Actor, jobId: number, id: number): OutboxMessageDto {
     this.access.read(actor, jobId);
     const row = this.repo.find(actor.shopId, id);
     if (!row || row.jobId !== jobId) throw notFound('Message');
     const again = this.uow.run((tx) => {
-      const updated = this.repo.requeue(actor.shopId, id, tx);
+      const updated = this.repo.requeue(actor.shopId, id, newTaskKey(), tx);
       if (!updated) throw new DomainError('MESSAGE_NOT_RESENDABLE', undefined, { status: row.status });
-      this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(updated), shopId: updated.shopId }, tx);
+      this.enqueue(updated, tx);
+      if (updated.kind === 'report_ready') this.jobs.recordReportSent(actor, jobId, true);
       this.audit.record(actor, { action: 'mail.resent', entityType: 'outbox_message', entityId: id, details: { jobId } });
       return updated;
     });
     return this.toDto(again);
   }
 
-  /** Queues "your bench report is ready" to the owner: the PDF attached within the budget, else a link. */
-  async sendReport(actor: Actor, jobId: number, reportId: number, input: SendReportRequest): Promise<OutboxMessageDto> {
+  /**
+   * Queues "your bench report is ready" to the owner: the PDF attached within the budget (by its
+   * storage key and SHA-256), else a link. The reports feature calls this with its issued PDF.
+   */
+  sendReport(actor: Actor, jobId: number, pdf: ReportPdf, input: SendReportRequest): OutboxMessageDto {
     const job = this.access.read(actor, jobId);
-    const pdf = await this.delivery.issuedPdf(actor.shopId, reportId);
-    if (!pdf || pdf.jobId !== jobId) throw notFound('Report');
+    if (pdf.jobId !== jobId) throw notFound('Report');
+    const { reportId } = pdf;
     const to = this.recipient(actor, job.customerId, input.to);
     const attached = pdf.size <= this.cfg.MAIL_ATTACHMENT_BUDGET;
     const rendered = reportReadyMail({
@@ -139,7 +155,7 @@ export class MailService implements OnModuleInit {
       link: pdf.link,
     });
     const attachments: OutboxAttachmentRef[] = attached
-      ? [{ filename: pdf.filename, contentType: 'application/pdf', size: pdf.size, sha256: pdf.sha256, source: { kind: 'report', reportId } }]
+      ? [{ filename: pdf.filename, contentType: 'application/pdf', size: pdf.size, sha256: pdf.sha256, source: { kind: 'storage', key: pdf.storageKey } }]
       : [];
     return this.uow.run((tx) => {
       const dto = this.queue({ shopId: actor.shopId, jobId, kind: 'report_ready', reportId, to, ...rendered, attachments, createdBy: actor.id }, tx);
@@ -168,11 +184,13 @@ export class MailService implements OnModuleInit {
   private context(
     actor: Actor,
     job: { number: string; customerId: number; bikeId: number },
-  ): { shop: ShopBrand; ownerName: string; jobNumber: string; bikeLabel: string } {
+  ): { shop: ShopBrand; ownerName: string; jobNumber: string; dated: string; bikeLabel: string } {
     const shop = this.shops.settings(actor.shopId);
     const bike = this.bikes.get(actor, job.bikeId);
     const ownerName = this.customers.get(actor, job.customerId).name;
-    return { shop, ownerName, jobNumber: job.number, bikeLabel: [bike.maker, bike.model].filter(Boolean).join(' ') || 'bike' };
+    // Days in UTC, as the report prints them; the shop's locale decides how the day is written.
+    const dated = formatDate(this.clock.now(), shop.dateLocale, { timeZone: 'UTC' });
+    return { shop, ownerName, jobNumber: job.number, dated, bikeLabel: [bike.maker, bike.model].filter(Boolean).join(' ') || 'bike' };
   }
 
   /** Fixed when queued: a retry after a crash mid-send carries the same id, so receivers can drop the copy. */
@@ -193,7 +211,7 @@ export class MailService implements OnModuleInit {
       attempts: r.attempts,
       maxAttempts: this.cfg.MAIL_MAX_ATTEMPTS,
       lastError: r.lastError,
-      nextTryAt: r.nextTryAt?.toISOString() ?? null,
+      nextTryAt: r.status === 'queued' ? (this.tasks.status(MAIL_SEND, r.taskKey)?.nextRunAt ?? null) : null,
       sentAt: r.sentAt?.toISOString() ?? null,
       createdAt: r.createdAt.toISOString(),
       messageId: r.messageId,

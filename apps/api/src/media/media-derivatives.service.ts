@@ -54,7 +54,8 @@ export class MediaDerivativesService implements OnApplicationBootstrap {
   async make(task: TaskContext<typeof DERIVATIVES_TASK>): Promise<void> {
     const assetId = Number(task.key);
     const row = this.repo.findById(assetId);
-    if (!row || row.derivativeStatus !== 'pending' || !row.originalKey) return;
+    // A failed asset is taken too: the runner retries transient failures later, and a manager may retry.
+    if (!row || (row.derivativeStatus !== 'pending' && row.derivativeStatus !== 'failed') || !row.originalKey) return;
     try {
       const original = await buffer(this.storage.createReadStream(row.originalKey));
       const made = await this.image.renditions(
@@ -72,8 +73,7 @@ export class MediaDerivativesService implements OnApplicationBootstrap {
       this.repo.update(assetId, { derivativeStatus: 'ready', derivativeError: null });
       this.phash.enqueue(row);
     } catch (err) {
-      if (task.attempt >= DERIVATIVES_MAX_ATTEMPTS)
-        this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
+      if (task.final) this.repo.update(assetId, { derivativeStatus: 'failed', derivativeError: (err as Error).message.slice(0, 500) });
       throw err;
     }
   }

@@ -1,12 +1,12 @@
-import { Inject, Injectable, Logger, type OnModuleInit } from '@nestjs/common';
+import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnModuleInit } from '@nestjs/common';
+import { SchedulerRegistry } from '@nestjs/schedule';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
 import { removeLeftovers, STORAGE, type Storage, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
-import { TASK_RUNNER, TaskHandler, type TaskRunner } from '../infra/tasks';
+import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
 import { MediaTusService } from './media-tus.service';
 import { MediaRepository } from './media.repository';
 
-export const SWEEP_TASK = 'storage.sweep' as const;
 /** A live upload or storage write touches its file every few seconds; half an hour idle means it is dead. */
 const LIVE_WRITE_GRACE_MS = 30 * 60_000;
 /** Finished task rows are kept a week for the screens and for debugging. */
@@ -14,13 +14,15 @@ const DONE_TASK_RETENTION_MS = 7 * 24 * 3600_000;
 
 /**
  * Removes what crashes leave behind (issue: no leftovers after SIGKILL): at boot everything in
- * the multipart temp folder and every `*.partial`; then, as the periodic task 'storage.sweep',
- * the same when idle for half an hour, plus tus uploads unfinished after TUS_EXPIRE_HOURS.
+ * the multipart temp folder and every `*.partial`; then every STORAGE_SWEEP_MINUTES (an interval
+ * of @nestjs/schedule, this process's own files) the same when idle for half an hour, plus tus
+ * uploads unfinished after TUS_EXPIRE_HOURS and old finished task rows.
  * It never touches a stored original or derivative (see removeLeftovers).
  */
 @Injectable()
-export class MediaSweepService implements OnModuleInit {
+export class MediaSweepService implements OnModuleInit, OnApplicationBootstrap {
   private readonly logger = new Logger('StorageSweep');
+  private running: Promise<void> | null = null;
 
   constructor(
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
@@ -28,6 +30,7 @@ export class MediaSweepService implements OnModuleInit {
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly tus: MediaTusService,
+    private readonly schedule: SchedulerRegistry,
     private readonly repo: MediaRepository,
     @Inject(STORAGE) private readonly storage: Storage,
   ) {}
@@ -36,13 +39,24 @@ export class MediaSweepService implements OnModuleInit {
   async onModuleInit(): Promise<void> {
     const removed = await this.removeLeftovers(null);
     if (removed.length > 0) this.logger.log(`Removed ${removed.length} leftover file(s) at boot`);
-    // Expires old tus uploads once the tus server is up, then keeps the periodic chain going.
-    this.tasks.enqueue({ kind: SWEEP_TASK, key: `boot-${this.clock.now().toISOString()}`, shopId: null });
   }
 
-  /** One sweep now (the storage.sweep task's handler; tests call it too). */
-  @TaskHandler(SWEEP_TASK, { concurrency: 1, maxAttempts: 3 })
-  async sweep(): Promise<void> {
+  /** Expires old tus uploads once the tus server is up (before the app answers), then every STORAGE_SWEEP_MINUTES. */
+  async onApplicationBootstrap(): Promise<void> {
+    await this.sweep();
+    const timer = setInterval(() => void this.sweep(), this.cfg.STORAGE_SWEEP_MINUTES * 60_000);
+    this.schedule.addInterval('storage-sweep', timer);
+  }
+
+  /** One sweep now, or the one already running (the interval's tick; tests call it too). */
+  sweep(): Promise<void> {
+    this.running ??= this.sweepNow()
+      .catch((err: unknown) => this.logger.error(`Sweep failed: ${(err as Error).message}`))
+      .finally(() => (this.running = null));
+    return this.running;
+  }
+
+  private async sweepNow(): Promise<void> {
     const now = this.clock.now();
     const removed = await this.removeLeftovers(new Date(now.getTime() - LIVE_WRITE_GRACE_MS));
     const expired = (await this.tus.expireAbandoned()) + (await this.tus.removeUnreadable(new Date(now.getTime() - LIVE_WRITE_GRACE_MS)));
@@ -50,7 +64,6 @@ export class MediaSweepService implements OnModuleInit {
     const pruned = this.tasks.prune?.(new Date(now.getTime() - DONE_TASK_RETENTION_MS)) ?? 0;
     if (removed.length + expired + orphans + pruned > 0)
       this.logger.log(`Sweep: ${removed.length} leftover file(s), ${expired} dead upload(s), ${orphans} original(s) with no row, ${pruned} old task row(s)`);
-    this.scheduleNext(now);
   }
 
   /**
@@ -67,13 +80,6 @@ export class MediaSweepService implements OnModuleInit {
     const orphans = candidates.filter((k) => !named.has(k));
     for (const key of orphans) await this.storage.delete(key);
     return orphans.length;
-  }
-
-  /** One task per time slot: every chain (one per boot) converges on the same key, so they never pile up. */
-  private scheduleNext(now: Date): void {
-    const every = this.cfg.STORAGE_SWEEP_MINUTES * 60_000;
-    const slot = Math.floor(now.getTime() / every) + 1;
-    this.tasks.enqueue({ kind: SWEEP_TASK, key: `slot-${slot}`, shopId: null, runAt: new Date(slot * every) });
   }
 
   private removeLeftovers(olderThan: Date | null): Promise<string[]> {

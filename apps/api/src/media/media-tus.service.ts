@@ -103,7 +103,7 @@ export class MediaTusService implements OnModuleInit {
     return { uploadId, offset: upload.offset, length: upload.size ?? null, assetId: null, error: null };
   }
 
-  /** Deletes unfinished uploads past their Upload-Expires (run by the storage.sweep task). */
+  /** Deletes unfinished uploads past their Upload-Expires (run by the periodic storage sweep). */
   expireAbandoned(): Promise<number> {
     return this.server.cleanUpExpiredUploads();
   }

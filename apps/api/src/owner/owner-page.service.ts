@@ -50,7 +50,14 @@ export class OwnerPageService {
     });
     const report = this.report.latest(scope);
     return {
-      shop: { name: shop.name, phone: shop.phone, email: shop.email, brandPrimary: shop.brandPrimary, brandAccent: shop.brandAccent },
+      shop: {
+        name: shop.name,
+        phone: shop.phone,
+        email: shop.email,
+        brandPrimary: shop.brandPrimary,
+        brandAccent: shop.brandAccent,
+        dateLocale: shop.dateLocale,
+      },
       job: { number: job.number, status: job.status, reportedSymptoms: job.reportedSymptoms, promisedOn: job.promisedOn },
       bike: { maker: bike.maker, model: bike.model, year: bike.year, colour: bike.colour },
       ownerName: this.customers.get(owner, job.customerId).name,

@@ -46,6 +46,8 @@ export interface ReportSnapshot {
     logoKey: string | null;
     units: 'metric' | 'imperial';
     currency: string;
+    /** How dates are written (ShopLocale); absent in snapshots frozen before it existed: from the currency. */
+    locale?: string;
   };
   job: { id: number; number: string; bookedAt: string; readyAt: string | null; promisedOn: string; symptoms: string; mechanic: string | null };
   owner: { name: string };

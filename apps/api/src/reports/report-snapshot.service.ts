@@ -77,6 +77,7 @@ export class ReportSnapshotService {
       logoKey: this.shops.logo(shopId)?.key ?? null,
       units: shop.units,
       currency: shop.currency,
+      locale: shop.dateLocale,
     };
   }
 

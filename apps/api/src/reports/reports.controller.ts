@@ -1,6 +1,6 @@
 import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { IssueReportRequestSchema, type IssueReportRequest } from '@benchproof/contracts';
+import { IssueReportRequestSchema, SendReportRequestSchema, type IssueReportRequest, type SendReportRequest } from '@benchproof/contracts';
 import type { Request, Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, notFound, sendFile, zod } from '../core/http';
@@ -32,6 +32,20 @@ export class ReportsController {
   @ApiZodBody(IssueReportRequestSchema)
   issue(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(IssueReportRequestSchema)) body: IssueReportRequest) {
     return this.reports.issue(user, jobId, body.draftId);
+  }
+
+  /** Queues the issued report to the owner's e-mail; 202: it goes out through the outbox. */
+  @Post(':reportId/send')
+  @HttpCode(202)
+  @Can('reports.issue')
+  @ApiZodBody(SendReportRequestSchema)
+  send(
+    @CurrentUser() user: AuthUser,
+    @Param('jobId', ParseIntPipe) jobId: number,
+    @Param('reportId', ParseIntPipe) reportId: number,
+    @Body(zod(SendReportRequestSchema)) body: SendReportRequest,
+  ) {
+    return this.reports.sendToOwner(user, jobId, reportId, body);
   }
 
   @Get(':id')

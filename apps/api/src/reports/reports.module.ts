@@ -18,7 +18,6 @@ import { BrandingController } from './branding.controller';
 import { BrandingService } from './branding.service';
 import { ReportRenderService } from './report-render.service';
 import { ReportSnapshotService } from './report-snapshot.service';
-import { ReportMailBinding } from './report-mail.binding';
 import { ANNOTATED_IMAGE_SOURCE, AnnotatedPrintSource, PAIRS_SOURCE, PairsFromPairsService } from './report-sources';
 import { ReportsController } from './reports.controller';
 import { ReportsRepository } from './reports.repository';
@@ -27,8 +26,8 @@ import { VerifyController } from './verify.controller';
 
 /**
  * The bench report. Shots come from the annotated print renders and pairs from the
- * pairs feature, each through a small port (report-sources.ts); issued PDFs are
- * handed to the mail outbox at start-up (report-mail.binding.ts).
+ * pairs feature, each through a small port (report-sources.ts); an issued PDF goes to
+ * the owner through MailService.sendReport, attached by storage key and SHA-256.
  */
 @Module({
   imports: [
@@ -57,7 +56,6 @@ import { VerifyController } from './verify.controller';
     ReportSnapshotService,
     ReportRenderService,
     BrandingService,
-    ReportMailBinding,
     { provide: ANNOTATED_IMAGE_SOURCE, useClass: AnnotatedPrintSource },
     { provide: PAIRS_SOURCE, useClass: PairsFromPairsService },
   ],

@@ -1,5 +1,5 @@
 import { Inject, Injectable, type OnApplicationBootstrap } from '@nestjs/common';
-import type { ReportDto, VerifyResult } from '@benchproof/contracts';
+import type { OutboxMessageDto, ReportDto, SendReportRequest, VerifyResult } from '@benchproof/contracts';
 import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
@@ -10,6 +10,7 @@ import { CLOCK, type Clock } from '../core/clock';
 import { PDF_PAGES, type PdfPageImages } from '../infra/pdf';
 import { type ByteRange, STORAGE, type Storage } from '../infra/storage';
 import { JobAccess } from '../jobs';
+import { MailService } from '../mail';
 import { ShopsService } from '../shops';
 import type { ReportSnapshot } from './report-data';
 import { ReportRenderService } from './report-render.service';
@@ -27,6 +28,9 @@ export interface IssuedReportFile {
   contentType: 'application/pdf';
   sha256: string;
   byteSize: number;
+  storageKey: string;
+  /** Where the owner can open it without an attachment; null today (the owner page's token is stored only hashed). */
+  link: string | null;
   stream(): Readable;
   bytes(): Promise<Buffer>;
 }
@@ -42,6 +46,7 @@ export class ReportsService implements OnApplicationBootstrap {
     private readonly jobs: JobAccess,
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
+    private readonly mail: MailService,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(PDF_PAGES) private readonly pages: PdfPageImages,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -151,9 +156,18 @@ export class ReportsService implements OnApplicationBootstrap {
       contentType: 'application/pdf',
       sha256: row.sha256,
       byteSize: row.byteSize,
+      storageKey: key,
+      link: null,
       stream: () => this.storage.createReadStream(key),
       bytes: () => buffer(this.storage.createReadStream(key)),
     };
+  }
+
+  /** Queues the issued PDF to the owner through the mail outbox, attached by storage key and SHA-256. */
+  sendToOwner(actor: AuthUser, jobId: number, reportId: number, input: SendReportRequest): OutboxMessageDto {
+    const f = this.issuedPdf(actor.shopId, reportId);
+    const pdf = { reportId, jobId: f.jobId, version: f.version, filename: f.filename, storageKey: f.storageKey, sha256: f.sha256, size: f.byteSize };
+    return this.mail.sendReport(actor, jobId, { ...pdf, link: f.link }, input);
   }
 
   /** The newest issued version of a job (rendered or not), or null. */

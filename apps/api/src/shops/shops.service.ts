@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { ShopSettingsDto, UpdateShopSettingsRequest } from '@benchproof/contracts';
+import { shopLocale } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
@@ -15,6 +16,8 @@ const toDto = (s: ShopRow): ShopSettingsDto => ({
   labourRateMinor: s.labourRateMinor,
   taxRateBp: s.taxRateBp,
   currency: s.currency,
+  locale: s.locale ?? null,
+  dateLocale: shopLocale(s),
   units: s.units,
   pageSize: s.pageSize,
   finalCheckSecondPerson: s.finalCheckSecondPerson,

@@ -23,7 +23,8 @@ export interface Watermark {
 
 /**
  * Showcase files. Every shot comes from the annotated render (blur boxes pixelated
- * into the pixels), gets the pair's crop, and is re-encoded by ImageAdapter.compose
+ * into the pixels), is framed around the pair's subject (its crop, else the marks, else
+ * the centre), and is re-encoded by ImageAdapter.compose
  * with no metadata. Consent is checked again right before each file is handed out.
  */
 @Injectable()
@@ -52,9 +53,13 @@ export class ShowcaseExportService {
     const ids = q.variant === 'pair' ? [pair.before.id, pair.after.id] : [q.variant === 'before' ? pair.before.id : pair.after.id];
     const shots = await Promise.all(ids.map((id) => this.render.annotatedJpeg(actor.shopId, id, 'print')));
     const layout = q.layout ?? (q.size === 'portrait' ? 'stacked' : 'side');
+    // The subject: the pair's crop, else each shot's marks (or, unmarked, its partner's: the same part), else the centre.
+    const marks = ids.map((id) => this.render.marksBox(actor.shopId, id));
+    const partner = q.variant === 'pair' ? null : this.render.marksBox(actor.shopId, q.variant === 'before' ? pair.after.id : pair.before.id);
     const data = await this.image.compose({
       shots,
       crop: pair.crop,
+      focus: marks.map((m, i) => m ?? marks[1 - i] ?? partner),
       width: size.width,
       height: size.height,
       layout,

@@ -13,12 +13,13 @@ import { ShowcaseExportTasks } from './showcase-export-tasks.service';
 import { ShowcaseExportService } from './showcase-export.service';
 import { ShowcaseController } from './showcase.controller';
 import { ShowcaseRepository } from './showcase.repository';
+import { ShowcaseExportsRepository } from './showcase-exports.repository';
 import { ShowcaseService } from './showcase.service';
 
 @Module({
   imports: [AnnotationsModule, AuditModule, ConsentModule, FindingsModule, JobsModule, PairsModule, ShopsModule, UsersModule, WorkLogModule],
   controllers: [ShowcaseController],
-  providers: [ShowcaseRepository, ShowcaseService, ShowcaseExportService, ShowcaseExportTasks, ShowcaseConsentListener],
+  providers: [ShowcaseRepository, ShowcaseExportsRepository, ShowcaseService, ShowcaseExportService, ShowcaseExportTasks, ShowcaseConsentListener],
   exports: [ShowcaseService],
 })
 export class ShowcaseModule {}

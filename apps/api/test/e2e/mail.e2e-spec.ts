@@ -1,6 +1,5 @@
 import type { OutboxMessageDto } from '@benchproof/contracts';
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
-import { MailService } from '../../src/mail';
 import { eventually, FakeReportFiles, freePort, makePdf, sha256 } from '../mail/mail-fixtures';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 import { bookIn } from './records-helpers';
@@ -10,8 +9,7 @@ const FAST = { MAIL_RETRY_BASE_MS: '200', MAIL_SWEEP_MS: '100' };
 
 async function appWithReports(env: Record<string, string>) {
   const t = await startTestApp({ ...FAST, ...env });
-  const reports = new FakeReportFiles();
-  t.app.get(MailService).useReportFiles(reports);
+  const reports = new FakeReportFiles(t.app);
   return { t, reports, desk: await t.signIn(DEMO.desk) };
 }
 
@@ -35,7 +33,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
     const owner = { name: 'Zoë <b>Kowalczyk</b> & Søn', email: 'zoe.k@example.test', phone: null, preferredChannel: 'email', notes: null };
     const job = await bookIn(desk, { newCustomer: owner });
     const pdf = await makePdf(`Bench report ${job.number}`);
-    reports.issue(501, desk.user.shopId, job.id, pdf);
+    await reports.issue(501, desk.user.shopId, job.id, pdf);
     const before = catcher.messages().length;
     const queued = (await desk.agent.post(`/api/jobs/${job.id}/reports/501/send`).send({}).expect(202)).body as OutboxMessageDto;
     expect(queued.status).toBe('queued');
@@ -60,12 +58,12 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
   it('refuses a report of another job, a mechanic, and an owner with no e-mail', async () => {
     const job = await bookIn(desk);
     const other = await bookIn(desk);
-    reports.issue(502, desk.user.shopId, other.id, await makePdf('other'));
+    await reports.issue(502, desk.user.shopId, other.id, await makePdf('other'));
     expect((await desk.agent.post(`/api/jobs/${job.id}/reports/502/send`).send({}).expect(404)).body.code).toBe('NOT_FOUND');
     const mech = await t.signIn(DEMO.mechanic);
     await mech.agent.post(`/api/jobs/${other.id}/reports/502/send`).send({}).expect(403);
     const quiet = await bookIn(desk, { newCustomer: { name: 'Ansel Brook', email: null, phone: '+44 1632 960123', preferredChannel: 'phone', notes: null } });
-    reports.issue(503, desk.user.shopId, quiet.id, await makePdf('quiet'));
+    await reports.issue(503, desk.user.shopId, quiet.id, await makePdf('quiet'));
     const res = await desk.agent.post(`/api/jobs/${quiet.id}/reports/503/send`).send({}).expect(422);
     expect(res.body.code).toBe('NO_OWNER_EMAIL');
     const other2 = await t.signIn(DEMO.otherShopManager);
@@ -107,7 +105,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
 
     const reported = await bookIn(desk);
     await drive(reported.id);
-    reports.issue(504, desk.user.shopId, reported.id, await makePdf('reported'));
+    await reports.issue(504, desk.user.shopId, reported.id, await makePdf('reported'));
     await desk.agent.post(`/api/jobs/${reported.id}/reports/504/send`).send({}).expect(202);
     const handed = (await desk.agent.post(`/api/jobs/${reported.id}/transitions`).send({ to: 'collected' }).expect(200)).body;
     expect(handed).toMatchObject({ status: 'collected', collectedWithoutReport: false });
@@ -121,7 +119,7 @@ describe('mail: a report over the attachment budget goes as a link', () => {
     const { t, reports, desk } = await appWithReports({ SMTP_URL: catcher.smtpUrl, MAIL_ATTACHMENT_BUDGET: String(pdf.length - 1) });
     try {
       const job = await bookIn(desk);
-      reports.issue(601, desk.user.shopId, job.id, pdf, 'https://bench.example.test/o/abc123');
+      await reports.issue(601, desk.user.shopId, job.id, pdf, 'https://bench.example.test/o/abc123');
       await desk.agent.post(`/api/jobs/${job.id}/reports/601/send`).send({}).expect(202);
       const [mail] = await catcher.waitFor(1);
       expect(mail.attachments).toEqual([]);
@@ -142,7 +140,7 @@ describe('mail: the outbox through a relay outage', () => {
     let catcher: MailCatcher | null = null;
     try {
       const job = await bookIn(desk);
-      reports.issue(701, desk.user.shopId, job.id, await makePdf('outage'));
+      await reports.issue(701, desk.user.shopId, job.id, await makePdf('outage'));
       await desk.agent.post(`/api/jobs/${job.id}/reports/701/send`).send({}).expect(202);
       const failing = await eventually(async () => (await messages(desk, job.id)).find((m) => m.attempts >= 2 && m.lastError), 'two failed attempts');
       expect(failing.status).not.toBe('sent');
@@ -153,7 +151,7 @@ describe('mail: the outbox through a relay outage', () => {
       expect(sent.attempts).toBeGreaterThanOrEqual(3);
       await new Promise((r) => setTimeout(r, 800));
       expect(catcher.messages()).toHaveLength(1);
-      expect(catcher.messages()[0].attachments[0].sha256).toBe((await reports.getIssuedPdf(desk.user.shopId, 701))?.sha256);
+      expect(catcher.messages()[0].attachments[0].sha256).toBe(reports.sha256(701));
     } finally {
       await t.close();
       await catcher?.close();
@@ -166,7 +164,7 @@ describe('mail: the outbox through a relay outage', () => {
     let catcher: MailCatcher | null = null;
     try {
       const job = await bookIn(desk);
-      reports.issue(801, desk.user.shopId, job.id, await makePdf('resend'));
+      await reports.issue(801, desk.user.shopId, job.id, await makePdf('resend'));
       await desk.agent.post(`/api/jobs/${job.id}/reports/801/send`).send({}).expect(202);
       const failed = await eventually(async () => (await messages(desk, job.id)).find((m) => m.status === 'failed'), 'final failure');
       expect(failed).toMatchObject({ attempts: 2, maxAttempts: 2, canResend: true });

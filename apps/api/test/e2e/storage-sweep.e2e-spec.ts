@@ -13,7 +13,7 @@ function tusUpload(dir: string, id: string, created: Date, size: number, offset:
   writeFileSync(join(dir, `${id}.json`), JSON.stringify({ id, size, offset, metadata: { shopId: '1' }, creation_date: created.toISOString() }));
 }
 
-describe('no leftovers after a crash (storage sweep at boot and as a task)', () => {
+describe('no leftovers after a crash (storage sweep at boot and on its interval)', () => {
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-sweep-'));
   const env = { DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads') };
   afterAll(() => rmSync(dir, { recursive: true, force: true }));

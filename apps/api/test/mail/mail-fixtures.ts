@@ -3,7 +3,9 @@ import { createHash } from 'node:crypto';
 import { createServer, type Server, type Socket } from 'node:net';
 import { Readable } from 'node:stream';
 import { createElement } from 'react';
-import type { IssuedPdf, ReportFiles } from '../../src/mail';
+import type { INestApplicationContext } from '@nestjs/common';
+import { STORAGE, type Storage } from '../../src/infra/storage';
+import { type IssuedReportFile, ReportsService } from '../../src/reports';
 
 export const sha256 = (b: Buffer): string => createHash('sha256').update(b).digest('hex');
 
@@ -13,27 +15,48 @@ export async function makePdf(title: string, pages = 1): Promise<Buffer> {
   return renderToBuffer(createElement(Document, null, ...body));
 }
 
-/** Stands in for the reports feature (another branch): issued PDFs by report id. */
-export class FakeReportFiles implements ReportFiles {
-  private readonly reports = new Map<number, { jobId: number; bytes: Buffer; link: string | null; shopId: number }>();
+/**
+ * Issued report PDFs without drafting a whole report: the bytes go into the app's storage and the
+ * reports feature's issuedPdf answers for these ids (the report e-mail then attaches them by key).
+ */
+export class FakeReportFiles {
+  private readonly reports = new Map<number, { jobId: number; bytes: Buffer; link: string | null; shopId: number; key: string }>();
+  private readonly storage: Storage;
 
-  issue(reportId: number, shopId: number, jobId: number, bytes: Buffer, link: string | null = null): void {
-    this.reports.set(reportId, { jobId, bytes, link, shopId });
+  constructor(app: INestApplicationContext) {
+    this.storage = app.get<Storage>(STORAGE);
+    const svc = app.get(ReportsService);
+    const real = svc.issuedPdf.bind(svc);
+    svc.issuedPdf = (shopId: number, reportId: number) => this.find(shopId, reportId) ?? real(shopId, reportId);
   }
 
-  getIssuedPdf(shopId: number, reportId: number): Promise<IssuedPdf | null> {
+  async issue(reportId: number, shopId: number, jobId: number, bytes: Buffer, link: string | null = null): Promise<void> {
+    const key = `reports/${shopId}/fake-${reportId}.pdf`;
+    await this.storage.put(key, Readable.from([bytes]));
+    this.reports.set(reportId, { jobId, bytes, link, shopId, key });
+  }
+
+  private find(shopId: number, reportId: number): IssuedReportFile | null {
     const r = this.reports.get(reportId);
-    if (!r || r.shopId !== shopId) return Promise.resolve(null);
-    return Promise.resolve({
+    if (!r || r.shopId !== shopId) return null;
+    return {
       reportId,
       jobId: r.jobId,
       version: 1,
       filename: `bench-report-${reportId}.pdf`,
+      contentType: 'application/pdf',
       sha256: sha256(r.bytes),
-      size: r.bytes.length,
+      byteSize: r.bytes.length,
+      storageKey: r.key,
       link: r.link,
-      open: () => Readable.from([r.bytes]),
-    });
+      stream: () => Readable.from([r.bytes]),
+      bytes: () => Promise.resolve(r.bytes),
+    };
+  }
+
+  sha256(reportId: number): string | undefined {
+    const r = this.reports.get(reportId);
+    return r && sha256(r.bytes);
   }
 }
 

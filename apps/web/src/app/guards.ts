@@ -16,12 +16,15 @@ export async function requireSession({ request }: LoaderFunctionArgs) {
   return null;
 }
 
+/** The jobs list, told which action the page needed, so it can say why the user landed there. */
+const deniedUrl = (action: Action) => `/jobs?denied=${encodeURIComponent(action)}`;
+
 /** Loader for pages limited by ACCESS_POLICY; roles that may not do `action` are sent to the jobs page. */
 export const requireAction = (action: Action) => async (args: LoaderFunctionArgs) => {
   // Child loaders run alongside the parent's, so this one must send a visitor to sign-in too.
   await requireSession(args);
   const user = await queryClient.ensureQueryData(sessionQuery);
-  if (!user || !roleCan(user.role, action)) throw redirect('/jobs');
+  if (!user || !roleCan(user.role, action)) throw redirect(deniedUrl(action));
   return null;
 };
 
@@ -30,6 +33,6 @@ export async function requireShowcase(args: LoaderFunctionArgs) {
   await requireSession(args);
   const user = await queryClient.ensureQueryData(sessionQuery);
   const shop = user ? await queryClient.ensureQueryData(shopSettingsQuery).catch(() => undefined) : undefined;
-  if (!user || !shopCan(user.role, shop)('showcase.view')) throw redirect('/jobs');
+  if (!user || !shopCan(user.role, shop)('showcase.view')) throw redirect(deniedUrl('showcase.view'));
   return null;
 }

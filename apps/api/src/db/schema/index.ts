@@ -26,3 +26,4 @@ export * from './measurement-evidence.table';
 export * from './reports.table';
 export * from './outbox-messages.table';
 export * from './showcase-items.table';
+export * from './showcase-exports.table';

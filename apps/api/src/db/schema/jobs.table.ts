@@ -37,6 +37,8 @@ export const jobs = sqliteTable(
     readyAt: timestamp('ready_at'),
     collectedAt: timestamp('collected_at'),
     cancelledAt: timestamp('cancelled_at'),
+    /** A report e-mail to the owner is sent or on its way (kept by the mail feature; a finally failed one does not count). */
+    reportSent: integer('report_sent', { mode: 'boolean' }).notNull().default(false),
     /** Desk confirmed handing the bike over with no report sent. */
     collectedWithoutReport: integer('collected_without_report', { mode: 'boolean' }).notNull().default(false),
     createdAt: timestamp('created_at').notNull(),

@@ -10,12 +10,13 @@ export type OutboxAttachmentRef = {
   /** Size and SHA-256 when queued; a send that finds other bytes fails rather than mail the wrong file. */
   size: number | null;
   sha256: string | null;
-  source: { kind: 'storage'; key: string } | { kind: 'report'; reportId: number };
+  /** A stored file by its key (an issued report PDF is one: the reports feature names its key and SHA-256). */
+  source: { kind: 'storage'; key: string };
 };
 
 export type OutboxStatus = 'queued' | 'sending' | 'sent' | 'failed';
 
-/** One e-mail on its way: written in the same transaction as its cause, sent by the 'mail.send' task. */
+/** One e-mail on its way: written in the same transaction as its cause with its 'mail.send' task. */
 export const outboxMessages = sqliteTable(
   'outbox_messages',
   {
@@ -41,13 +42,15 @@ export const outboxMessages = sqliteTable(
     htmlAfterSend: text('html_after_send'),
     attachments: text('attachments', { mode: 'json' }).$type<OutboxAttachmentRef[]>().notNull(),
     status: text('status').$type<OutboxStatus>().notNull(),
-    /** Attempts in the current round; desk's resend starts a new round. */
+    /**
+     * The 'mail.send' task that delivers it (the task runner schedules, retries and leases it; the row
+     * is the record). Desk's resend starts a new task under a new key; a task whose key is no longer
+     * this one does nothing.
+     */
+    taskKey: text('task_key').notNull().default(''),
+    /** Attempts of the current task and the last failure, as recorded by the delivery (shown to desk). */
     attempts: integer('attempts').notNull().default(0),
-    round: integer('round').notNull().default(0),
     lastError: text('last_error'),
-    nextTryAt: timestamp('next_try_at'),
-    /** Set when an attempt starts; a 'sending' row older than the lease belongs to a process that died. */
-    sendingSince: timestamp('sending_since'),
     sentAt: timestamp('sent_at'),
     /** Fixed when queued and reused on every attempt. */
     messageId: text('message_id').notNull(),
@@ -55,5 +58,5 @@ export const outboxMessages = sqliteTable(
     createdBy: integer('created_by'),
     createdAt: timestamp('created_at').notNull(),
   },
-  (t) => [index('outbox_shop_job_idx').on(t.shopId, t.jobId), index('outbox_status_next_idx').on(t.status, t.nextTryAt)],
+  (t) => [index('outbox_shop_job_idx').on(t.shopId, t.jobId)],
 );

@@ -1,5 +1,6 @@
 // Type-only: drizzle-kit loads this file without the workspace libs; value lists live in libs/domain and libs/contracts.
 import type { PageSize, UnitSystem } from '@benchproof/contracts';
+import type { ShopLocale } from '@benchproof/domain';
 import { integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 
@@ -12,6 +13,8 @@ export const shops = sqliteTable('shops', {
   labourRateMinor: integer('labour_rate_minor').notNull().default(0),
   taxRateBp: integer('tax_rate_bp').notNull().default(0),
   currency: text('currency').notNull().default('EUR'),
+  /** How dates are written (a ShopLocale); null: the one that fits the currency. */
+  locale: text('locale').$type<ShopLocale>(),
   units: text('units').$type<UnitSystem>().notNull().default('metric'),
   pageSize: text('page_size').$type<PageSize>().notNull().default('A4'),
   finalCheckSecondPerson: integer('final_check_second_person', { mode: 'boolean' }).notNull().default(true),

@@ -12,7 +12,7 @@ export const tasks = sqliteTable(
   'tasks',
   {
     id: id(),
-    /** Null for shop-less housekeeping (e.g. storage.sweep). */
+    /** Null for shop-less housekeeping (none today; the column stays for server-wide work). */
     shopId: integer('shop_id').references(() => shops.id),
     kind: text('kind').notNull(),
     key: text('key').notNull(),
@@ -23,7 +23,10 @@ export const tasks = sqliteTable(
     attempts: integer('attempts').notNull().default(0),
     lastError: text('last_error'),
     progress: real('progress').notNull().default(0),
+    /** A queued task's next try; for a failed task whose error was transient, its long retry (see retryLater). */
     nextRunAt: timestamp('next_run_at').notNull(),
+    /** Failed on a transient error (full disk, lost connection, timeout): taken again at nextRunAt, on a long backoff. */
+    retryLater: integer('retry_later', { mode: 'boolean' }).notNull().default(false),
     leasedUntil: timestamp('leased_until'),
     leaseOwner: text('lease_owner'),
     createdAt: timestamp('created_at').notNull(),

@@ -12,6 +12,8 @@ export interface ComposeRequest {
   /** One shot (alone) or two (before, after): upright JPEG bytes with redactions already burnt in. */
   shots: Buffer[];
   crop: NormalisedCrop | null;
+  /** Per shot, the subject's box (the annotated marks), normalised; used only when there is no crop. Null: the centre. */
+  focus: (NormalisedCrop | null)[];
   width: number;
   height: number;
   /** 'side' puts the shots left and right, 'stacked' top and bottom. */
@@ -27,23 +29,51 @@ const BACKGROUND = '#14181c';
 
 const escapeXml = (s: string) => s.replace(/[<>&"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
-/** Crops (normalised → pixels of this image) and fills one cell of the layout. */
-async function cell(shot: Buffer, crop: NormalisedCrop | null, width: number, height: number): Promise<Buffer> {
-  let img = sharp(shot, { failOn: 'truncated' });
-  if (crop) {
-    const meta = await sharp(shot).metadata();
-    const W = meta.width ?? 1;
-    const H = meta.height ?? 1;
-    const left = Math.min(W - 1, Math.round(crop.x * W));
-    const top = Math.min(H - 1, Math.round(crop.y * H));
-    img = img.extract({
-      left,
-      top,
-      width: Math.max(1, Math.min(W - left, Math.round(crop.w * W))),
-      height: Math.max(1, Math.min(H - top, Math.round(crop.h * H))),
-    });
-  }
-  return img.resize(width, height, { fit: 'cover', position: 'attention' }).toColourspace('srgb').png().toBuffer();
+export interface PixelWindow {
+  left: number;
+  top: number;
+  width: number;
+  height: number;
+}
+
+/**
+ * The largest window of the cell's aspect inside a W×H image, centred on the subject
+ * (a normalised box) or on the image's centre, and moved back inside the image at its edges.
+ * Never "the most eye-catching part": a bright stripe at the edge must not win over the part.
+ */
+export function coverWindow(W: number, H: number, aspect: number, focus: NormalisedCrop | null): PixelWindow {
+  const width = W / H > aspect ? Math.max(1, Math.round(H * aspect)) : W;
+  const height = W / H > aspect ? H : Math.max(1, Math.round(W / aspect));
+  const cx = focus ? (focus.x + focus.w / 2) * W : W / 2;
+  const cy = focus ? (focus.y + focus.h / 2) * H : H / 2;
+  const left = Math.round(Math.min(W - width, Math.max(0, cx - width / 2)));
+  const top = Math.round(Math.min(H - height, Math.max(0, cy - height / 2)));
+  return { left, top, width, height };
+}
+
+/** The pair's crop window in pixels of this image (at least 1 px, inside the image). */
+function cropPixels(crop: NormalisedCrop, W: number, H: number): PixelWindow {
+  const left = Math.min(W - 1, Math.round(crop.x * W));
+  const top = Math.min(H - 1, Math.round(crop.y * H));
+  return { left, top, width: Math.max(1, Math.min(W - left, Math.round(crop.w * W))), height: Math.max(1, Math.min(H - top, Math.round(crop.h * H))) };
+}
+
+/**
+ * Fills one cell of the layout around the pair's subject: the pair's crop window when it has one
+ * (centred in the cell), else the shot's marks, else the centre.
+ */
+async function cell(shot: Buffer, crop: NormalisedCrop | null, focus: NormalisedCrop | null, width: number, height: number): Promise<Buffer> {
+  const meta = await sharp(shot).metadata();
+  const W = meta.width ?? 1;
+  const H = meta.height ?? 1;
+  const area = crop ? cropPixels(crop, W, H) : { left: 0, top: 0, width: W, height: H };
+  const win = coverWindow(area.width, area.height, width / height, crop ? null : focus);
+  return sharp(shot, { failOn: 'truncated' })
+    .extract({ left: area.left + win.left, top: area.top + win.top, width: win.width, height: win.height })
+    .resize(width, height, { fit: 'fill' })
+    .toColourspace('srgb')
+    .png()
+    .toBuffer();
 }
 
 /**
@@ -97,7 +127,7 @@ export async function composeShowcase(req: ComposeRequest): Promise<Buffer> {
   const cw = side ? Math.floor((req.width - GUTTER * (n - 1)) / n) : req.width;
   const ch = side ? req.height : Math.floor((req.height - GUTTER * (n - 1)) / n);
   const positions = req.shots.map((_, i) => (side ? { left: i * (cw + GUTTER), top: 0 } : { left: 0, top: i * (ch + GUTTER) }));
-  const cells = await Promise.all(req.shots.map((s) => cell(s, req.crop, cw, ch)));
+  const cells = await Promise.all(req.shots.map((s, i) => cell(s, req.crop, req.focus[i] ?? null, cw, ch)));
   const logo = req.watermark.logo ? [await logoLayer(req.watermark.logo, req.width, req.height)] : [];
   return sharp({ create: { width: req.width, height: req.height, channels: 3, background: BACKGROUND } })
     .composite([...cells.map((input, i) => ({ input, ...positions[i] })), { input: Buffer.from(overlay(req, positions)), left: 0, top: 0 }, ...logo])

@@ -1,5 +1,6 @@
 export {
   TASK_RUNNER,
+  type FailedTask,
   type RawTaskContext,
   type RawTaskSpec,
   type TaskContext,
@@ -18,3 +19,4 @@ export { TasksModule } from './tasks.module';
 export { SqliteTaskRunner, type SqliteRunnerOptions } from './sqlite-task-runner';
 export { TaskStore } from './task-store';
 export { retryDelay, type BackoffOptions } from './backoff';
+export { isTransientError, PermanentTaskError } from './task-errors';

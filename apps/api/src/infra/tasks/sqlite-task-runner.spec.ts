@@ -5,7 +5,13 @@ import { SqliteTaskRunner, type SqliteRunnerOptions } from './sqlite-task-runner
 import { TaskStore } from './task-store';
 import type { RawTaskContext } from './tasks.port';
 
-const OPTIONS: SqliteRunnerOptions = { pollMs: 1000, leaseMs: 30_000, backoff: { baseMs: 1000, maxMs: 60_000 }, maxAttempts: 5 };
+const OPTIONS: SqliteRunnerOptions = {
+  pollMs: 1000,
+  leaseMs: 30_000,
+  backoff: { baseMs: 1000, maxMs: 60_000 },
+  longBackoff: { baseMs: 3_600_000, maxMs: 86_400_000 },
+  maxAttempts: 5,
+};
 
 const record = <T>(into: T[], item: T): Promise<void> => {
   into.push(item);

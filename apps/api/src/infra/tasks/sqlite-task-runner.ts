@@ -3,10 +3,10 @@ import { randomUUID } from 'node:crypto';
 import { hostname } from 'node:os';
 import type { Clock } from '../../core/clock';
 import { type BackoffOptions, retryDelay } from './backoff';
+import { isTransientError, PermanentTaskError } from './task-errors';
 import { type TaskRow, type TaskStore, toStatus } from './task-store';
 import type { DbTx } from '../../core/db';
-import type { TaskKind, TaskPayloads } from './task-kinds';
-import type { RawTaskContext, RawTaskSpec, TaskHandlerFn, TaskKindOptions, TaskRunner, TaskRunnerHealth, TaskStatus } from './tasks.port';
+import type { FailedTask, RawTaskContext, RawTaskSpec, TaskHandlerFn, TaskKindOptions, TaskRunner, TaskRunnerHealth, TaskStatus } from './tasks.port';
 
 export interface SqliteRunnerOptions {
   /** How often to look for work enqueued by another process or freed by an expired lease (ms). */
@@ -14,6 +14,8 @@ export interface SqliteRunnerOptions {
   /** How long a claim holds without renewal; a killed process's tasks run again after this (ms). */
   leaseMs: number;
   backoff: BackoffOptions;
+  /** After the last quick attempt, a transient failure (see isTransientError) is tried again on this backoff (capped at a day). */
+  longBackoff: BackoffOptions;
   /** Attempts before a task ends failed, unless its kind says otherwise. */
   maxAttempts: number;
   random?: () => number;
@@ -66,10 +68,6 @@ export class SqliteTaskRunner implements TaskRunner {
     return row ? toStatus(row) : null;
   }
 
-  finished<K extends TaskKind>(kind: K, shopId: number): { key: string; payload: TaskPayloads[K] }[] {
-    return this.store.finished(kind, shopId) as { key: string; payload: TaskPayloads[K] }[];
-  }
-
   settled(): Promise<void> {
     if (!this.busy()) return Promise.resolve();
     return new Promise((resolve) => this.waiters.push(resolve));
@@ -82,6 +80,16 @@ export class SqliteTaskRunner implements TaskRunner {
 
   prune(before: Date): number {
     return this.store.prune(before);
+  }
+
+  failed(shopId: number): FailedTask[] {
+    return this.store.failedFor(shopId).map((r) => ({ ...toStatus(r), id: r.id, shopId: r.shopId, updatedAt: r.updatedAt.toISOString() }));
+  }
+
+  retry(shopId: number, id: number): boolean {
+    const queued = this.store.requeue(shopId, id, this.clock.now());
+    if (queued) this.wake();
+    return queued;
   }
 
   /** Begins taking work (after every handler has registered). */
@@ -151,13 +159,14 @@ export class SqliteTaskRunner implements TaskRunner {
       shopId: row.shopId,
       payload: row.payload,
       attempt: row.attempts,
+      final: row.attempts >= this.maxAttempts(kind),
       progress: (f: number) => this.safely(() => this.store.progress(row.id, this.owner, f)),
     };
     const done: Promise<void> = Promise.resolve()
       .then(() => kind.handler(ctx))
       .then(
         () => this.safely(() => this.store.finish(row.id, this.owner, this.clock.now())),
-        (err: unknown) => this.safely(() => this.failed(kind, row, err)),
+        (err: unknown) => this.safely(() => this.recordFailure(kind, row, err)),
       )
       .finally(() => {
         clearInterval(heartbeat);
@@ -169,13 +178,26 @@ export class SqliteTaskRunner implements TaskRunner {
     this.inflight.add(done);
   }
 
-  private failed(kind: Kind, row: TaskRow, err: unknown): void {
+  private maxAttempts(kind: Kind): number {
+    return kind.options.maxAttempts ?? this.opts.maxAttempts;
+  }
+
+  /**
+   * Quick retries (the kind's backoff) up to maxAttempts; then failed, and a transient error
+   * (full disk, lost connection, timeout) is taken again on the long backoff, so work stopped by a
+   * full disk comes back by itself. A PermanentTaskError fails at once.
+   */
+  private recordFailure(kind: Kind, row: TaskRow, err: unknown): void {
     const message = err instanceof Error ? err.message : String(err);
-    const max = kind.options.maxAttempts ?? this.opts.maxAttempts;
-    const now = this.clock.now();
-    const retryAt = row.attempts < max ? new Date(now.getTime() + retryDelay(row.attempts, this.opts.backoff, this.opts.random)) : null;
-    this.store.fail(row.id, this.owner, now, message, retryAt);
-    this.logger.warn(`${row.kind}:${row.key} attempt ${row.attempts} failed (${message})${retryAt ? `; retry at ${retryAt.toISOString()}` : '; giving up'}`);
+    const max = this.maxAttempts(kind);
+    const now = this.clock.now().getTime();
+    const permanent = err instanceof PermanentTaskError;
+    const backoff = { ...this.opts.backoff, baseMs: kind.options.backoffBaseMs ?? this.opts.backoff.baseMs };
+    const retryAt = !permanent && row.attempts < max ? new Date(now + retryDelay(row.attempts, backoff, this.opts.random)) : null;
+    const later = !retryAt && isTransientError(err) ? new Date(now + retryDelay(row.attempts - max + 1, this.opts.longBackoff, this.opts.random)) : null;
+    this.store.fail(row.id, this.owner, new Date(now), message, retryAt, later);
+    const next = retryAt ? `; retry at ${retryAt.toISOString()}` : later ? `; transient, again at ${later.toISOString()}` : '; giving up';
+    this.logger.warn(`${row.kind}:${row.key} attempt ${row.attempts} failed (${message})${next}`);
   }
 
   /** Store writes after a handler must not crash the process (e.g. the database closing in a test). */

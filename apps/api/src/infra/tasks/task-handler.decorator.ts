@@ -9,7 +9,9 @@ export interface TaskHandlerOptions {
   /** How many tasks of this kind may run at once (image work must not starve the API); may come from the config. */
   concurrency: number | ((cfg: AppConfig) => number);
   /** Attempts before the task ends failed; the runner's default (5) when left out. */
-  maxAttempts?: number;
+  maxAttempts?: number | ((cfg: AppConfig) => number);
+  /** First retry delay of this kind (ms), may come from the config; the runner's TASK_BACKOFF_MS when left out. */
+  backoffBaseMs?: number | ((cfg: AppConfig) => number);
 }
 
 export interface TaskHandlerMeta extends TaskHandlerOptions {

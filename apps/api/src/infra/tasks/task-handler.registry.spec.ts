@@ -24,9 +24,6 @@ class MostKinds {
   @TaskHandler('media.phash', { concurrency: 1 }) phash(): Promise<void> {
     return noop();
   }
-  @TaskHandler('storage.sweep', { concurrency: 1 }) sweep(): Promise<void> {
-    return noop();
-  }
   @TaskHandler('annotation.render', { concurrency: 1 }) annotation(): Promise<void> {
     return noop();
   }

@@ -30,8 +30,12 @@ export class TaskHandlerRegistry implements OnModuleInit {
     const found = this.discover();
     checkHandlers(found, TASK_KINDS);
     for (const { meta, handler } of found) {
-      const concurrency = typeof meta.concurrency === 'function' ? meta.concurrency(this.cfg) : meta.concurrency;
-      this.runner.register(meta.kind, handler, { concurrency, maxAttempts: meta.maxAttempts });
+      const read = <T>(v: T | ((cfg: AppConfig) => T)): T => (typeof v === 'function' ? (v as (cfg: AppConfig) => T)(this.cfg) : v);
+      this.runner.register(meta.kind, handler, {
+        concurrency: read(meta.concurrency),
+        maxAttempts: read(meta.maxAttempts),
+        backoffBaseMs: read(meta.backoffBaseMs),
+      });
     }
   }
 

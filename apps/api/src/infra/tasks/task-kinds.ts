@@ -7,14 +7,12 @@ import type { ShowcaseZipRequest } from '@benchproof/contracts';
  * Add a kind here, then one `@TaskHandler(kind, …)` method somewhere; start-up fails otherwise.
  */
 export type TaskPayloads = {
-  /** key `<outbox id>.<round>`: one delivery attempt of an outbox message (mail feature). */
-  'mail.send': NoPayload;
+  /** key = the outbox row's task_key (new for each resend): deliver one outbox message (mail). */
+  'mail.send': { messageId: number };
   /** key = asset id: thumb/screen/print JPEGs of a stored photo (media). */
   'media.derivatives': NoPayload;
   /** key = asset id: perceptual hash of a still for pair suggestions (media). */
   'media.phash': NoPayload;
-  /** key `boot-<iso>` or `slot-<n>`: leftover uploads, expired tus uploads, old task rows (media). */
-  'storage.sweep': NoPayload;
   /** key `<assetId>:v<version>`: burn an annotation version into its screen and print JPEGs (annotations). */
   'annotation.render': { assetId: number; version: number };
   /** key = report id: lay out the frozen snapshot as a PDF (reports). */
@@ -31,7 +29,6 @@ export const TASK_KINDS = Object.keys({
   'mail.send': 1,
   'media.derivatives': 1,
   'media.phash': 1,
-  'storage.sweep': 1,
   'annotation.render': 1,
   'report.render': 1,
   'showcase.export': 1,

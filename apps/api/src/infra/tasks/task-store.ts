@@ -1,13 +1,16 @@
-import { and, asc, eq, gt, inArray, lt, lte, or, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, gt, inArray, lt, lte, or, sql } from 'drizzle-orm';
 import { tasks } from '../../db/schema';
 import type { Db, DbTx } from '../../core/db';
 import type { RawTaskSpec, TaskStatus } from './tasks.port';
 
 export type TaskRow = typeof tasks.$inferSelect;
 
-/** A task this process may take: queued and due, or running under a lease that has run out. */
+/** A task waiting for its next run: queued, or failed on a transient error with a long retry. */
+const waiting = or(eq(tasks.status, 'queued'), and(eq(tasks.status, 'failed'), eq(tasks.retryLater, true)));
+
+/** A task this process may take: waiting and due, or running under a lease that has run out. */
 const claimable = (kind: string, now: Date) =>
-  and(eq(tasks.kind, kind), or(and(eq(tasks.status, 'queued'), lte(tasks.nextRunAt, now)), and(eq(tasks.status, 'running'), lt(tasks.leasedUntil, now))));
+  and(eq(tasks.kind, kind), or(and(waiting, lte(tasks.nextRunAt, now)), and(eq(tasks.status, 'running'), lt(tasks.leasedUntil, now))));
 
 export const toStatus = (r: TaskRow): TaskStatus => ({
   kind: r.kind,
@@ -16,7 +19,7 @@ export const toStatus = (r: TaskRow): TaskStatus => ({
   attempts: r.attempts,
   lastError: r.lastError,
   progress: r.progress,
-  nextRunAt: r.status === 'queued' ? r.nextRunAt.toISOString() : null,
+  nextRunAt: r.status === 'queued' || (r.status === 'failed' && r.retryLater) ? r.nextRunAt.toISOString() : null,
 });
 
 /** SQL of the durable runner; shop-less on purpose (tasks are global housekeeping of the server). */
@@ -31,6 +34,7 @@ export class TaskStore {
       lastError: null,
       progress: 0,
       nextRunAt: spec.runAt ?? now,
+      retryLater: false,
       payload: (spec.payload ?? {}) as Record<string, unknown>,
       updatedAt: now,
     };
@@ -47,14 +51,6 @@ export class TaskStore {
       .from(tasks)
       .where(and(eq(tasks.kind, kind), eq(tasks.key, key)))
       .get();
-  }
-
-  finished(kind: string, shopId: number): Pick<TaskRow, 'key' | 'payload'>[] {
-    return this.db
-      .select({ key: tasks.key, payload: tasks.payload })
-      .from(tasks)
-      .where(and(eq(tasks.kind, kind), eq(tasks.shopId, shopId), eq(tasks.status, 'done')))
-      .all();
   }
 
   /** Takes up to `limit` due tasks of one kind under a lease, atomically (one SQLite write transaction). */
@@ -104,8 +100,11 @@ export class TaskStore {
       .run();
   }
 
-  fail(id: number, owner: string, now: Date, error: string, retryAt: Date | null): void {
-    const next = retryAt ? { status: 'queued' as const, nextRunAt: retryAt } : { status: 'failed' as const };
+  /** Back to the queue at `retryAt`; or failed, taken again at `later` when the error was transient, else for good. */
+  fail(id: number, owner: string, now: Date, error: string, retryAt: Date | null, later: Date | null = null): void {
+    const next = retryAt
+      ? { status: 'queued' as const, nextRunAt: retryAt, retryLater: false }
+      : { status: 'failed' as const, retryLater: later !== null, ...(later ? { nextRunAt: later } : {}) };
     this.db
       .update(tasks)
       .set({ ...next, lastError: error.slice(0, 1000), leaseOwner: null, leasedUntil: null, updatedAt: now })
@@ -119,13 +118,35 @@ export class TaskStore {
    */
   pendingCount(kinds: string[], now: Date): number {
     if (kinds.length === 0) return 0;
-    const waiting = and(eq(tasks.status, 'queued'), or(lte(tasks.nextRunAt, now), gt(tasks.attempts, 0)));
+    const pending = and(eq(tasks.status, 'queued'), or(lte(tasks.nextRunAt, now), gt(tasks.attempts, 0)));
     const row = this.db
       .select({ n: sql<number>`count(*)` })
       .from(tasks)
-      .where(and(inArray(tasks.kind, kinds), or(waiting, and(eq(tasks.status, 'running'), lt(tasks.leasedUntil, now)))))
+      .where(and(inArray(tasks.kind, kinds), or(pending, and(eq(tasks.status, 'running'), lt(tasks.leasedUntil, now)))))
       .get();
     return row?.n ?? 0;
+  }
+
+  /** Failed tasks of one shop, newest first. */
+  failedFor(shopId: number, limit = 200): TaskRow[] {
+    return this.db
+      .select()
+      .from(tasks)
+      .where(and(eq(tasks.shopId, shopId), eq(tasks.status, 'failed')))
+      .orderBy(desc(tasks.updatedAt))
+      .limit(limit)
+      .all();
+  }
+
+  /** A manager's retry: the failed task of that shop is queued now with fresh attempts. */
+  requeue(shopId: number, id: number, now: Date): boolean {
+    return (
+      this.db
+        .update(tasks)
+        .set({ status: 'queued', attempts: 0, retryLater: false, nextRunAt: now, progress: 0, updatedAt: now })
+        .where(and(eq(tasks.id, id), eq(tasks.shopId, shopId), eq(tasks.status, 'failed')))
+        .run().changes > 0
+    );
   }
 
   /** When the next queued task of these kinds falls due (for the wake-up timer). */
@@ -134,7 +155,7 @@ export class TaskStore {
     const row = this.db
       .select({ at: sql<number | null>`min(${tasks.nextRunAt})` })
       .from(tasks)
-      .where(and(inArray(tasks.kind, kinds), eq(tasks.status, 'queued')))
+      .where(and(inArray(tasks.kind, kinds), waiting))
       .get();
     const at = row?.at;
     return at === null || at === undefined ? null : new Date(at);

@@ -26,6 +26,7 @@ import { TASK_RUNNER } from './tasks.port';
           pollMs: cfg.TASK_POLL_MS,
           leaseMs: cfg.TASK_LEASE_MS,
           backoff: { baseMs: cfg.TASK_BACKOFF_MS, maxMs: 10 * 60_000 },
+          longBackoff: { baseMs: cfg.TASK_RETRY_LATER_MS, maxMs: 24 * 3600_000 },
           maxAttempts: 5,
         }),
     },

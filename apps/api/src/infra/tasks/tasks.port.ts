@@ -27,6 +27,8 @@ export interface RawTaskContext {
   shopId: number | null;
   payload: object;
   attempt: number;
+  /** True when a failure of this attempt ends the quick retries (the task then fails, or waits long if the error is transient). */
+  final: boolean;
   progress(fraction: number): void;
 }
 
@@ -37,6 +39,8 @@ export interface TaskContext<K extends TaskKind = TaskKind> {
   shopId: number | null;
   payload: TaskPayloads[K];
   attempt: number;
+  /** True when a failure of this attempt ends the quick retries (see RawTaskContext). */
+  final: boolean;
   /** Reports progress 0..1 for screens that show it. */
   progress(fraction: number): void;
 }
@@ -48,6 +52,8 @@ export interface TaskKindOptions {
   /** How many tasks of this kind may run at once (image work must not starve the API). */
   concurrency: number;
   maxAttempts?: number;
+  /** First retry delay of this kind (the one backoff function, retryDelay); the runner's default when left out. */
+  backoffBaseMs?: number;
 }
 
 export type TaskState = 'queued' | 'running' | 'done' | 'failed';
@@ -59,7 +65,15 @@ export interface TaskStatus {
   attempts: number;
   lastError: string | null;
   progress: number;
+  /** When it runs next: a queued task's next try, or a failed task's long retry (transient errors). */
   nextRunAt: string | null;
+}
+
+/** A failed task as the manager's screen lists it. */
+export interface FailedTask extends TaskStatus {
+  id: number;
+  shopId: number | null;
+  updatedAt: string;
 }
 
 /**
@@ -74,8 +88,10 @@ export interface TaskRunner {
   /** Pass the unit of work's `tx` so the task commits (or vanishes) with the change. */
   enqueue<K extends TaskKind>(spec: TaskSpec<K>, tx?: DbTx): void;
   status(kind: TaskKind, key: string): TaskStatus | null;
-  /** Done tasks of one kind for one shop, with their payloads (e.g. to find finished exports that hold a job's photos). */
-  finished<K extends TaskKind>(kind: K, shopId: number): { key: string; payload: TaskPayloads[K] }[];
+  /** Failed tasks of one shop, newest first (the manager's retry screen). */
+  failed?(shopId: number): FailedTask[];
+  /** Queues a failed task of that shop again at once with fresh attempts; false when there is no such failed task. */
+  retry?(shopId: number, id: number): boolean;
   /** Resolves when nothing is queued or running (tests and shutdown); tasks scheduled for later are not waited for. */
   settled(): Promise<void>;
   /** For the readiness check: is the runner polling, and how much work waits. */

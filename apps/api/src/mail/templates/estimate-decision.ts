@@ -4,6 +4,8 @@ export interface EstimateDecisionInput {
   shop: ShopBrand;
   ownerName: string;
   jobNumber: string;
+  /** Unused here; part of the context every job e-mail gets. */
+  dated?: string;
   bikeLabel: string;
   /** The owner's private page where they approve or decline each item. */
   link: string;

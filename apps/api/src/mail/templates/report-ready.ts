@@ -4,6 +4,8 @@ export interface ReportReadyInput {
   shop: ShopBrand;
   ownerName: string;
   jobNumber: string;
+  /** The day of the message, as a letter is dated, already written in the shop's locale (domain formatDate). */
+  dated: string;
   bikeLabel: string;
   version: number;
   /** true: the PDF goes with the message; false: it was over the size budget. */
@@ -28,15 +30,16 @@ export function reportReadyMail(input: ReportReadyInput): RenderedMail {
     ? 'The report is attached to this e-mail as a PDF.'
     : `The report is ${mb(input.sizeBytes)}, larger than the ${mb(input.budgetBytes)} we attach to e-mails (many mail services refuse bigger files), so it is not attached. ${link ? 'Open it with the link below.' : 'Ask us and we will hand you a copy.'}`;
   const close = 'If anything in it is unclear, reply to this e-mail or call us.';
+  const jobLine = `Job ${input.jobNumber} · ${input.dated}`;
   const lines = [greeting, intro, ...(revised ? [revised] : []), where];
-  const text = textFrame(shop, [...lines, ...(link && !input.attached ? [`Your report: ${link}`] : []), close]);
+  const text = textFrame(shop, [...lines, ...(link && !input.attached ? [`Your report: ${link}`] : []), close, jobLine]);
   const html = htmlFrame(
     shop,
     subject,
     paragraphs(lines) +
       (link && !input.attached ? htmlButton(shop, link, 'Open your bench report') : '') +
       paragraphs([close]) +
-      `<p style="font-size:13px;color:#4a4f55">Job ${esc(input.jobNumber)}</p>`,
+      `<p style="font-size:13px;color:#4a4f55">${esc(jobLine)}</p>`,
   );
   return { subject, text, html };
 }

@@ -12,6 +12,7 @@ const shop = (brandPrimary: string): ShopBrand => ({
 const base = {
   ownerName: 'Ada',
   jobNumber: 'J-2026-0042',
+  dated: '5 Dec 2026',
   bikeLabel: 'Quillon Stratus',
   version: 1,
   attached: true,
@@ -32,6 +33,13 @@ describe('mail templates', () => {
   it('ends the plain text with the usual "-- " signature line and the shop contact, one per line', () => {
     const mail = reportReadyMail({ ...base, shop: shop('#1F5F5B') });
     expect(mail.text.endsWith('\n\n-- \nSpoke & "Sons"\n1 Canal Row\n+44 1632 960000\ndesk@shop.example.test\n')).toBe(true);
+  });
+
+  it('is dated as the shop writes dates, beside the job number, in both bodies', () => {
+    // The day comes in written by domain formatDate (tested against CLDR there); here: it is shown as given.
+    const mail = reportReadyMail({ ...base, shop: shop('#1F5F5B'), dated: 'Dec 5, 2026' });
+    expect(mail.text).toContain('Job J-2026-0042 · Dec 5, 2026');
+    expect(mail.html).toContain('Job J-2026-0042 · Dec 5, 2026');
   });
 
   it('says a re-issued report replaces the earlier one, in both bodies', () => {

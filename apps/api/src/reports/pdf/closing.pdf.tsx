@@ -29,19 +29,19 @@ export function Closing({ snap, stamp }: { snap: ReportSnapshot; stamp: IssueSta
           <Text style={{ fontWeight: 600 }}>{fc ? `${fc.passed ? 'Passed' : 'Not passed'} · ${fc.checker}` : 'Not recorded'}</Text>
           {fc && (
             <Text style={styles.muted}>
-              {fmtDate(fc.at)}
+              {fmtDate(fc.at, snap)}
               {fc.notes ? ` · Test ride: ${fc.notes}` : ''}
             </Text>
           )}
         </View>
       </View>
       {snap.shop.footer ? <Text style={[styles.small, { marginTop: 14 }]}>{snap.shop.footer}</Text> : null}
-      {stamp ? <Verification stamp={stamp} /> : <DraftNote />}
+      {stamp ? <Verification stamp={stamp} snap={snap} /> : <DraftNote />}
     </View>
   );
 }
 
-function Verification({ stamp }: { stamp: IssueStamp }) {
+function Verification({ stamp, snap }: { stamp: IssueStamp; snap: ReportSnapshot }) {
   const qr = qrPath(stamp.verifyUrl);
   return (
     <View style={[styles.box, styles.row, { marginTop: 18, gap: 12, alignItems: 'center' }]} wrap={false}>
@@ -51,7 +51,7 @@ function Verification({ stamp }: { stamp: IssueStamp }) {
       <View style={{ flex: 1 }}>
         <Text style={styles.h3}>Check this report</Text>
         <Text>
-          Version {stamp.version}, issued {fmtDate(stamp.issuedAt)}. To check that it is a report we issued, open
+          Version {stamp.version}, issued {fmtDate(stamp.issuedAt, snap)}. To check that it is a report we issued, open
         </Text>
         <Text style={{ fontWeight: 600 }}>{stamp.verifyUrl}</Text>
         <Text style={[styles.small, { marginTop: 4 }]}>Fingerprint (SHA-256 of the report's contents):</Text>

@@ -48,7 +48,7 @@ function BrandBand({ snap, pageSize, logo, stamp }: Props) {
       <Text style={{ fontSize: 16, marginTop: 6 }}>Job {snap.job.number}</Text>
       {stamp ? (
         <Text style={{ fontSize: 11, marginTop: 4 }}>
-          Version {stamp.version} · issued {fmtDate(stamp.issuedAt)}
+          Version {stamp.version} · issued {fmtDate(stamp.issuedAt, snap)}
         </Text>
       ) : (
         <Text style={{ fontSize: 11, marginTop: 4 }}>Draft — not issued</Text>
@@ -69,8 +69,8 @@ function JobDetails({ snap }: { snap: ReportSnapshot }) {
       />
       <Field label="Owner" value={snap.owner.name} ink={ink} />
       <View style={[styles.row, { gap: 28 }]}>
-        <Field label="Booked in" value={fmtDate(snap.job.bookedAt)} ink={ink} />
-        <Field label="Ready" value={fmtDate(snap.job.readyAt)} ink={ink} />
+        <Field label="Booked in" value={fmtDate(snap.job.bookedAt, snap)} ink={ink} />
+        <Field label="Ready" value={fmtDate(snap.job.readyAt, snap)} ink={ink} />
         <Field label="Mechanic" value={snap.job.mechanic ?? '—'} ink={ink} />
       </View>
       <Field label="What you told us" value="" sub={snap.job.symptoms} ink={ink} />

@@ -1,9 +1,11 @@
-import { formatMoney } from '@benchproof/domain';
+import { formatDate, formatMoney, shopLocale } from '@benchproof/domain';
+import type { ReportSnapshot } from '../report-data';
 
-const DATE = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
-
-/** "2 Dec 2026" from an ISO date or date-time. */
-export const fmtDate = (iso: string | null): string => (iso ? DATE.format(new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso)) : '—');
+/**
+ * "2 Dec 2026" (or "Dec 2, 2026") from an ISO date or date-time, in the locale frozen with the
+ * snapshot (an older snapshot without one: the locale of its currency). Days are read in UTC, as before.
+ */
+export const fmtDate = (iso: string | null, snap: Pick<ReportSnapshot, 'shop'>): string => formatDate(iso, shopLocale(snap.shop), { timeZone: 'UTC' });
 
 /** "01:07.4" from milliseconds into a video. */
 export function fmtTimecode(ms: number | null): string {

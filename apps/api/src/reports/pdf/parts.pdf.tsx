@@ -3,17 +3,28 @@ import { CONDITION_LABELS, type Condition } from '@benchproof/domain';
 import type { ReportImage } from '../report-data';
 import { CONDITION_MARK, MUTED, styles } from './theme';
 
+/**
+ * Where the ink of a 10 pt Inter line (the body's 1.35 line height) is centred, below the top of its
+ * text box: 5.75 pt, measured on pdftoppm renders (report-marks.spec.ts). react-pdf draws the glyphs
+ * high in a taller box, so centring the icon on the box put it half a line below its words.
+ */
+const INK_CENTRE_PT = 5.75;
+
 /** The condition's shape in its colour, then its label: readable in colour and in greyscale. */
 export function ConditionMark({ condition, size = 10, label = true }: { condition: Condition; size?: number; label?: boolean }) {
   const { colour, shape } = CONDITION_MARK[condition];
   return (
-    <View style={[styles.row, { alignItems: 'center' }]}>
-      <Svg width={size} height={size} viewBox="0 0 10 10">
+    <View style={[styles.row, { alignItems: 'flex-start' }]}>
+      <Svg width={size} height={size} viewBox="0 0 10 10" style={{ marginTop: INK_CENTRE_PT - size / 2 }}>
         {shape === 'circle' && <Circle cx={5} cy={5} r={4.5} fill={colour} />}
         {shape === 'diamond' && <Polygon points="5,0 10,5 5,10 0,5" fill={colour} />}
         {shape === 'triangle' && <Polygon points="5,0.5 10,9.5 0,9.5" fill={colour} />}
         {shape === 'cross' && (
-          <Path d="M0 0h10v10h-10z M2 3.2l1.2-1.2 1.8 1.8 1.8-1.8 1.2 1.2-1.8 1.8 1.8 1.8-1.2 1.2-1.8-1.8-1.8 1.8-1.2-1.2 1.8-1.8z" fill={colour} />
+          <Path
+            d="M0 0h10v10h-10z M2 3.2l1.2-1.2 1.8 1.8 1.8-1.8 1.2 1.2-1.8 1.8 1.8 1.8-1.2 1.2-1.8-1.8-1.8 1.8-1.2-1.2 1.8-1.8z"
+            fill={colour}
+            fillRule="evenodd"
+          />
         )}
       </Svg>
       {label && <Text style={{ marginLeft: 4, fontWeight: 600, color: colour }}>{CONDITION_LABELS[condition]}</Text>}

@@ -53,7 +53,7 @@ export function Measurements({ snap }: { snap: ReportSnapshot }) {
                   {TORQUE_VERDICT[t.verdict]}
                 </Text>
               </View>
-              <Cell w="28%">{[t.source, t.tool && `${t.tool}${t.calibratedOn ? ` (${fmtDate(t.calibratedOn)})` : ''}`].filter(Boolean).join(' · ')}</Cell>
+              <Cell w="28%">{[t.source, t.tool && `${t.tool}${t.calibratedOn ? ` (${fmtDate(t.calibratedOn, snap)})` : ''}`].filter(Boolean).join(' · ')}</Cell>
             </View>
           ))}
         </View>

@@ -36,6 +36,24 @@ export function DoNotRide({ snap }: { snap: ReportSnapshot }) {
   );
 }
 
+/**
+ * The work log's first lines. Without a work log the section says what the after photos show
+ * when there are pairs, and is left out when there are none: an empty log is not an error to print.
+ */
+function WhatWeDid({ snap, ink }: { snap: ReportSnapshot; ink: string }) {
+  if (snap.work.length === 0 && snap.pairs.length === 0) return null;
+  return (
+    <>
+      <Text style={[styles.h2, { color: ink }]}>What we did</Text>
+      {snap.work.length === 0 && <Text>The after photos under “Before and after” show the parts as we left them.</Text>}
+      {snap.work.slice(0, 8).map((w, i) => (
+        <Text key={i}>• {w.description}</Text>
+      ))}
+      {snap.work.length > 8 && <Text style={styles.muted}>…and {snap.work.length - 8} more (see Work done).</Text>}
+    </>
+  );
+}
+
 /** One page: what we found, what we did, what we recommend next, with the condition scale. */
 export function Summary({ snap }: { snap: ReportSnapshot }) {
   const next = snap.recommendations.filter((r) => r.status !== 'approved');
@@ -54,12 +72,7 @@ export function Summary({ snap }: { snap: ReportSnapshot }) {
           <Text style={{ flex: 1 }}>{f.title}</Text>
         </View>
       ))}
-      <Text style={[styles.h2, { color: ink }]}>What we did</Text>
-      {snap.work.length === 0 && <Text style={styles.muted}>No work recorded yet.</Text>}
-      {snap.work.slice(0, 8).map((w, i) => (
-        <Text key={i}>• {w.description}</Text>
-      ))}
-      {snap.work.length > 8 && <Text style={styles.muted}>…and {snap.work.length - 8} more (see Work done).</Text>}
+      <WhatWeDid snap={snap} ink={ink} />
       <Text style={[styles.h2, { color: ink }]}>What we recommend next</Text>
       {next.length === 0 && <Text style={styles.muted}>Nothing further at this visit.</Text>}
       {next.map((r, i) => (

@@ -5,6 +5,7 @@ import { IconKey, IconLogout } from '@tabler/icons-react';
 import { Suspense } from 'react';
 import { Link, Outlet, useNavigate } from 'react-router';
 import { Logo } from '../../components/logo';
+import { DatesLocale } from '../../lib/dates';
 import { useLogout, useSession } from '../../features/auth';
 import { DiskSpaceWarning } from '../../features/disk-space';
 import { useShopSettings } from '../../features/shop-settings';
@@ -73,7 +74,9 @@ export function AppLayout() {
             <DiskSpaceWarning />
           </Suspense>
         )}
-        <Outlet />
+        <DatesLocale locale={shop?.dateLocale}>
+          <Outlet />
+        </DatesLocale>
       </main>
     </>
   );

@@ -1,1 +1,2 @@
 export { ShowcaseLibrary } from './components/showcase-library';
+export { TakeDownList } from './components/take-down-list';

@@ -5,8 +5,10 @@ import { QueryState } from '../../../components/query-state';
 import { useBikeHistory } from '../api/bikes';
 import { BikeVisitsTable } from './bike-visits';
 import { WearChart } from './wear-chart';
+import { useDates } from '../../../lib/dates';
 
 function NextChainDue({ due }: { due: NonNullable<ReturnType<typeof useBikeHistory>['data']>['nextChainDue'] }) {
+  const dates = useDates();
   if (!due)
     return (
       <Text size="sm" c="dimmed">
@@ -15,12 +17,7 @@ function NextChainDue({ due }: { due: NonNullable<ReturnType<typeof useBikeHisto
     );
   const dueNow = !dayjs(due.dueOn).isAfter(dayjs(), 'day');
   return (
-    <Alert
-      icon={<IconCalendarDue />}
-      color="bench"
-      variant="light"
-      title={dueNow ? 'Chain due now' : `Next chain likely due around ${dayjs(due.dueOn).format('D MMM YYYY')}`}
-    >
+    <Alert icon={<IconCalendarDue />} color="bench" variant="light" title={dueNow ? 'Chain due now' : `Next chain likely due around ${dates.date(due.dueOn)}`}>
       {due.basis}
       {due.ratePctPer30Days > 0 && ` Wear rising about ${due.ratePctPer30Days.toFixed(2)} % a month towards the ${due.limitPct} % replace-at limit.`} An
       estimate from past visits, not a promise; the chain maker's instructions govern.

@@ -1,10 +1,11 @@
 import type { JobDto } from '@benchproof/contracts';
 import { JOB_STATUS_LABELS } from '@benchproof/domain';
 import { Anchor, Badge, Group, Paper, Table, Text } from '@mantine/core';
-import dayjs from 'dayjs';
 import { Link } from 'react-router';
+import { useDates } from '../../../lib/dates';
 
 function VisitRow({ job }: { job: JobDto }) {
+  const dates = useDates();
   return (
     <Table.Tr>
       <Table.Td>
@@ -12,7 +13,7 @@ function VisitRow({ job }: { job: JobDto }) {
           {job.number}
         </Anchor>
       </Table.Td>
-      <Table.Td>{dayjs(job.createdAt).format('D MMM YYYY')}</Table.Td>
+      <Table.Td>{dates.date(job.createdAt)}</Table.Td>
       <Table.Td>
         <Group gap={4}>
           <Badge variant="light" radius="sm">

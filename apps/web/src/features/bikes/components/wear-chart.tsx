@@ -2,13 +2,14 @@ import '@mantine/charts/styles.css';
 import type { WearSeries } from '@benchproof/contracts';
 import { LineChart } from '@mantine/charts';
 import { Paper, Stack, Text, Title } from '@mantine/core';
-import dayjs from 'dayjs';
 import { CONDITION_LABELS } from '@benchproof/domain';
+import { useDates } from '../../../lib/dates';
 
 /** One repeated measurement across visits, with the limit the verdicts used drawn as a line. */
 export function WearChart({ series }: { series: WearSeries }) {
+  const dates = useDates();
   const data = series.points.map((p) => ({
-    visit: `${dayjs(p.at).format('D MMM YY')} · ${p.jobNumber}`,
+    visit: `${dates.date(p.at)} · ${p.jobNumber}`,
     value: Math.round(p.value * 1000) / 1000,
     condition: CONDITION_LABELS[p.condition],
   }));

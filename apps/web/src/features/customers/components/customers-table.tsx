@@ -2,11 +2,11 @@ import type { CustomerDto, CustomerListQuery } from '@benchproof/contracts';
 import { Anchor, Box, Card, Group, Pagination, Select, Stack, Table, Text, TextInput, UnstyledButton } from '@mantine/core';
 import { useDebouncedValue } from '@mantine/hooks';
 import { IconSearch } from '@tabler/icons-react';
-import dayjs from 'dayjs';
 import { useState } from 'react';
 import { Link } from 'react-router';
 import { QueryState } from '../../../components/query-state';
 import { useCustomers } from '../api/customers';
+import { useDates } from '../../../lib/dates';
 
 type Sort = `${CustomerListQuery['sort']}:${CustomerListQuery['order']}`;
 const SORTS: { value: Sort; label: string }[] = [
@@ -17,6 +17,7 @@ const SORTS: { value: Sort; label: string }[] = [
 ];
 
 function Rows({ items }: { items: CustomerDto[] }) {
+  const dates = useDates();
   return (
     <Table.ScrollContainer minWidth={640}>
       <Table verticalSpacing="sm" highlightOnHover>
@@ -40,7 +41,7 @@ function Rows({ items }: { items: CustomerDto[] }) {
               <Table.Td>{c.phone || '—'}</Table.Td>
               <Table.Td>{c.email || '—'}</Table.Td>
               <Table.Td>{c.preferredChannel === 'sms' ? 'Text' : c.preferredChannel === 'email' ? 'E-mail' : 'Phone'}</Table.Td>
-              <Table.Td>{dayjs(c.createdAt).format('MMM YYYY')}</Table.Td>
+              <Table.Td>{dates.month(c.createdAt)}</Table.Td>
             </Table.Tr>
           ))}
         </Table.Tbody>

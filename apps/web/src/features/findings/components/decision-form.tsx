@@ -6,6 +6,7 @@ import { useForm } from '@mantine/form';
 import dayjs from 'dayjs';
 import { contractResolver, formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useRecordDecision } from '../api/findings';
+import { useDates } from '../../../lib/dates';
 
 interface Values {
   status: RecordDecisionRequest['status'];
@@ -51,6 +52,7 @@ function useDecisionForm({ jobId, recommendationId, ownerName, onDone }: Omit<Pr
 
 /** Desk records the owner's answer taken by phone, in person or by e-mail; the signed-in user is the recorder. */
 export function DecisionForm({ recorderName, ...props }: Props) {
+  const dates = useDates();
   const { form, submit, pending, failure } = useDecisionForm(props);
   return (
     <form onSubmit={submit} noValidate>
@@ -59,7 +61,14 @@ export function DecisionForm({ recorderName, ...props }: Props) {
         <SegmentedControl fullWidth size="lg" data={STATUS_OPTIONS} {...form.getInputProps('status')} />
         <SegmentedControl fullWidth size="md" data={CHANNEL_OPTIONS} {...form.getInputProps('channel')} />
         <TextInput label="Who decided" description="The owner, or the person they named" {...form.getInputProps('decidedByName')} />
-        <DateTimePicker label="When" valueFormat="D MMM YYYY HH:mm" maxDate={new Date()} size="md" {...form.getInputProps('decidedAt')} />
+        <DateTimePicker
+          label="When"
+          valueFormat={dates.pickerTimeFormat}
+          firstDayOfWeek={dates.firstDayOfWeek}
+          maxDate={new Date()}
+          size="md"
+          {...form.getInputProps('decidedAt')}
+        />
         <Textarea label="Note" autosize minRows={2} {...form.getInputProps('note')} />
         <Text size="sm" c="dimmed">
           Recorded by {recorderName}.

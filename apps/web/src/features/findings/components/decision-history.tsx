@@ -1,6 +1,6 @@
 import type { DecisionDto } from '@benchproof/contracts';
 import { Badge, Group, Stack, Text, Timeline } from '@mantine/core';
-import dayjs from 'dayjs';
+import { useDates } from '../../../lib/dates';
 
 export const DECISION_LABELS: Record<DecisionDto['status'], string> = { pending: 'Pending', approved: 'Approved', declined: 'Declined' };
 export const DECISION_COLOURS: Record<DecisionDto['status'], string> = { pending: 'gray', approved: 'teal', declined: 'red' };
@@ -13,6 +13,7 @@ const CHANNEL_LABELS: Record<DecisionDto['channel'], string> = {
 
 /** Every decision taken on a recommendation, newest first, with who decided and who recorded it. */
 export function DecisionHistory({ decisions, staffName }: { decisions: DecisionDto[]; staffName: (id: number | null) => string }) {
+  const dates = useDates();
   if (decisions.length === 0)
     return (
       <Text size="sm" c="dimmed">
@@ -34,8 +35,8 @@ export function DecisionHistory({ decisions, staffName }: { decisions: DecisionD
               </Text>
             </Group>
             <Text size="xs" c="dimmed">
-              {dayjs(d.decidedAt).format('D MMM YYYY HH:mm')}
-              {d.recordedById !== null && ` · recorded by ${staffName(d.recordedById)} at ${dayjs(d.recordedAt).format('D MMM HH:mm')}`}
+              {dates.dateTime(d.decidedAt)}
+              {d.recordedById !== null && ` · recorded by ${staffName(d.recordedById)} at ${dates.dateTime(d.recordedAt)}`}
             </Text>
             {d.note && <Text size="sm">{d.note}</Text>}
           </Stack>

@@ -3,13 +3,13 @@ import { type ChainLimitPolicy, type LengthUnit } from '@benchproof/domain';
 import { Alert, Badge, Card, Collapse, Group, Stack, Text, Textarea, UnstyledButton } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconChevronDown, IconRuler2 } from '@tabler/icons-react';
-import dayjs from 'dayjs';
 import { useState } from 'react';
 import { ConditionBadge } from '../../../components/condition-badge';
 import { ConditionPicker } from '../../../components/condition-picker';
 import { formFailure } from '../../../lib/form';
 import { useAddMeasurement, useUpdateCheckpoint } from '../api/inspection';
 import { MeasurementForm } from './measurement-form';
+import { useDates } from '../../../lib/dates';
 
 interface Props {
   jobId: number;
@@ -22,6 +22,7 @@ interface Props {
 }
 
 function SavedReadings({ checkpoint }: { checkpoint: CheckpointDto }) {
+  const dates = useDates();
   if (checkpoint.measurements.length === 0) return null;
   return (
     <Stack gap={4}>
@@ -31,7 +32,7 @@ function SavedReadings({ checkpoint }: { checkpoint: CheckpointDto }) {
           <Text size="sm">
             {m.result.message}{' '}
             <Text span c="dimmed" size="xs">
-              ({dayjs(m.at).format('D MMM HH:mm')})
+              ({dates.dateTime(m.at)})
             </Text>
           </Text>
         </Group>

@@ -9,6 +9,7 @@ import { formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useBookIn } from '../api/jobs';
 import { initialBookIn, parseBookIn, validateBookIn, type BikeFormModel, type BookInValues, type CustomerFormModel } from './book-in-values';
 import type { Option } from './job-filters';
+import { useDates } from '../../../lib/dates';
 
 type FieldProps = ReturnType<UseFormReturnType<BookInValues>['getInputProps']>;
 export type FieldGetter = (name: string) => FieldProps;
@@ -96,6 +97,7 @@ function BikeSection({ form, slots }: { form: UseFormReturnType<BookInValues>; s
 
 /** What the owner reports, the day the bike is promised for and who works on it. */
 function SymptomsSection({ form, mechanics }: { form: UseFormReturnType<BookInValues>; mechanics: Option[] }) {
+  const dates = useDates();
   return (
     <Section title="3 · What the owner tells us">
       <Textarea
@@ -115,7 +117,8 @@ function SymptomsSection({ form, mechanics }: { form: UseFormReturnType<BookInVa
           clearable
           size="md"
           minDate={new Date()}
-          valueFormat="ddd D MMM YYYY"
+          valueFormat={dates.pickerFormat}
+          firstDayOfWeek={dates.firstDayOfWeek}
           {...form.getInputProps('promisedOn')}
         />
         <Select label="Mechanic" placeholder="Assign later" data={mechanics} clearable {...form.getInputProps('mechanicId')} />

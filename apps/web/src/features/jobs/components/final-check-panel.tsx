@@ -2,10 +2,10 @@ import { roleCan, type FinalCheckRequest, type JobDetail, type Role } from '@ben
 import { failedFinalCheckItems, FINAL_CHECK_ITEMS, FINAL_CHECK_ITEM_LABELS, type FinalCheckItem } from '@benchproof/domain';
 import { Alert, Button, Checkbox, Group, Paper, Stack, Text, Textarea, Title } from '@mantine/core';
 import { IconAlertTriangle, IconCircleCheck, IconCircleX } from '@tabler/icons-react';
-import dayjs from 'dayjs';
 import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useFinalCheck } from '../api/jobs';
+import { useDates } from '../../../lib/dates';
 
 function Rule({ job, checkers }: { job: JobDetail; checkers: string[] }) {
   const mechanic = job.mechanic?.name;
@@ -20,6 +20,7 @@ function Rule({ job, checkers }: { job: JobDetail; checkers: string[] }) {
 }
 
 function LastCheck({ job }: { job: JobDetail }) {
+  const dates = useDates();
   const fc = job.finalCheck;
   if (!fc) return null;
   const failed = failedFinalCheckItems(fc.items);
@@ -28,7 +29,7 @@ function LastCheck({ job }: { job: JobDetail }) {
       color={fc.passed ? 'teal' : 'red'}
       variant="light"
       icon={fc.passed ? <IconCircleCheck /> : <IconCircleX />}
-      title={`${fc.passed ? 'Passed' : 'Failed'} — ${fc.checker.name}, ${dayjs(fc.at).format('D MMM YYYY HH:mm')}`}
+      title={`${fc.passed ? 'Passed' : 'Failed'} — ${fc.checker.name}, ${dates.dateTime(fc.at)}`}
     >
       {failed.length > 0 && <Text size="sm">Not passed: {failed.map((i) => FINAL_CHECK_ITEM_LABELS[i]).join('; ')}</Text>}
       {fc.testRideNotes && <Text size="sm">Test ride: {fc.testRideNotes}</Text>}

@@ -1,10 +1,11 @@
 import type { JobDetail } from '@benchproof/contracts';
 import { Paper, Stack, Text, Title } from '@mantine/core';
-import dayjs from 'dayjs';
 import type { ReactNode } from 'react';
+import { useDates } from '../../../lib/dates';
 
 /** What the owner told us at booking-in; the bike's specs are plugged in by the route. */
 export function IntakeSection({ job, bikeSpecs }: { job: JobDetail; bikeSpecs: ReactNode }) {
+  const dates = useDates();
   return (
     <Stack>
       <Paper withBorder p="md">
@@ -12,7 +13,7 @@ export function IntakeSection({ job, bikeSpecs }: { job: JobDetail; bikeSpecs: R
           Reported symptoms
         </Title>
         <Text size="xs" c="dimmed" mb="xs">
-          Booked in {dayjs(job.createdAt).format('D MMM YYYY, HH:mm')} — in the owner's words
+          Booked in {dates.dateTime(job.createdAt)} — in the owner's words
         </Text>
         <Text style={{ whiteSpace: 'pre-wrap' }}>{job.reportedSymptoms || 'Nothing recorded.'}</Text>
       </Paper>

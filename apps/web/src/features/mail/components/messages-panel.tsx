@@ -5,11 +5,12 @@ import { QueryState } from '../../../components/query-state';
 import { ApiError } from '../../../lib/api-client';
 import { useMessages, useResendMessage } from '../api/messages';
 import { MessageStatus } from './message-status';
+import { useDates } from '../../../lib/dates';
 
 const KIND_LABELS: Record<string, string> = { report_ready: 'Bench report', estimate_decision: 'Estimate for decision' };
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 function MessageCard({ m, canResend, jobId }: { m: OutboxMessageDto; canResend: boolean; jobId: number }) {
+  const dates = useDates();
   const resend = useResendMessage(jobId);
   const error = resend.error instanceof ApiError ? resend.error.message : resend.error ? 'The resend did not go through. Try again.' : null;
   return (
@@ -29,10 +30,10 @@ function MessageCard({ m, canResend, jobId }: { m: OutboxMessageDto; canResend: 
           </Group>
         ))}
         <Text size="sm" c="dimmed">
-          Queued {when(m.createdAt)}
-          {m.sentAt ? ` · handed to the mail server ${when(m.sentAt)}` : ''}
+          Queued {dates.dateTime(m.createdAt)}
+          {m.sentAt ? ` · handed to the mail server ${dates.dateTime(m.sentAt)}` : ''}
           {m.attempts > 0 ? ` · attempt ${m.attempts} of ${m.maxAttempts}` : ''}
-          {m.status === 'queued' && m.nextTryAt ? ` · next try ${when(m.nextTryAt)}` : ''}
+          {m.status === 'queued' && m.nextTryAt ? ` · next try ${dates.dateTime(m.nextTryAt)}` : ''}
         </Text>
         {m.lastError && m.status !== 'sent' && (
           <Alert color={m.status === 'failed' ? 'red' : 'yellow'} variant="light" icon={<IconAlertTriangle />} p="xs">

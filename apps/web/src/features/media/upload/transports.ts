@@ -86,11 +86,15 @@ async function assetIdFromStatus(uploadUrl: string | null): Promise<number | nul
   return ((await res.json()) as TusUploadStatus).assetId;
 }
 
-function tusFailure(err: Error): TransferOutcome {
+/**
+ * tus-js-client has already retried (retryDelays) when onError fires, so the upload queue must
+ * not retry it a second time: the shot waits for a person's retry, which resumes at the server's offset.
+ */
+export function tusFailure(err: Error): TransferOutcome {
   const res = (err as tus.DetailedError).originalResponse ?? null;
-  if (!res) return { ok: false, message: OFFLINE, retryable: true };
+  if (!res) return { ok: false, message: OFFLINE, retryable: false };
   const status = res.getStatus();
-  return { ok: false, message: messageFromBody(status, res.getBody()), retryable: isRetryableStatus(status), code: codeFromBody(res.getBody()) };
+  return { ok: false, message: messageFromBody(status, res.getBody()), retryable: false, code: codeFromBody(res.getBody()) };
 }
 
 /**

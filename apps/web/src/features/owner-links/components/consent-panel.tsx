@@ -1,11 +1,13 @@
 import { CONSENT_WORDING, type ConsentDto } from '@benchproof/contracts';
 import { Alert, Badge, Button, Card, Checkbox, Group, Spoiler, Stack, Text, TextInput, Title } from '@mantine/core';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import type { ApiError } from '../../../lib/api-client';
 import { useConsentStatus, useRecordConsent } from '../api/owner-links';
+import { useDates } from '../../../lib/dates';
 
 /** What the consent in force allows, how and when it was given, and under which wording. */
 function ConsentInForce({ current }: { current: ConsentDto }) {
+  const dates = useDates();
   return (
     <Text size="sm">
       {current.granted
@@ -13,7 +15,7 @@ function ConsentInForce({ current }: { current: ConsentDto }) {
           ? 'Bike photos; make and model may be named.'
           : 'Bike photos; make and model not named.'
         : 'Photos may not be used.'}{' '}
-      {current.method === 'owner_link' ? 'On the owner page' : 'In person'}, {new Date(current.at).toLocaleString()} ({current.wordingVersion}).
+      {current.method === 'owner_link' ? 'On the owner page' : 'In person'}, {dates.dateTime(current.at)} ({current.wordingVersion}).
     </Text>
   );
 }
@@ -45,7 +47,17 @@ function RecordInPerson({ jobId, ownerName }: { jobId: number; ownerName: string
 }
 
 /** Marketing consent of the job: in force, history, and a form for consent given in person. */
-export function ConsentPanel({ jobId, canRecord, ownerName }: { jobId: number; canRecord: boolean; ownerName: string }) {
+export function ConsentPanel({
+  jobId,
+  canRecord,
+  ownerName,
+  takeDown,
+}: {
+  jobId: number;
+  canRecord: boolean;
+  ownerName: string;
+  takeDown?: (withdrawn: boolean) => ReactNode;
+}) {
   const status = useConsentStatus(jobId);
   const current = status.data?.current ?? null;
   return (
@@ -65,6 +77,7 @@ export function ConsentPanel({ jobId, canRecord, ownerName }: { jobId: number; c
             </Text>
           ))}
         </Spoiler>
+        {takeDown?.(current !== null && !current.granted)}
         {canRecord && <RecordInPerson jobId={jobId} ownerName={ownerName} />}
       </Stack>
     </Card>

@@ -1,5 +1,6 @@
 import { Card, Stack, Text, Title } from '@mantine/core';
 import { useOwnerActivity } from '../api/owner-links';
+import { useDates } from '../../../lib/dates';
 
 const str = (v: unknown, fallback = ''): string => (typeof v === 'string' || typeof v === 'number' ? String(v).replace('_', ' ') : fallback);
 
@@ -14,6 +15,7 @@ const LABELS: Record<string, (d: Record<string, unknown>) => string> = {
 
 /** Audit events of the owner side of this job, newest first. */
 export function OwnerActivity({ jobId }: { jobId: number }) {
+  const dates = useDates();
   const activity = useOwnerActivity(jobId);
   return (
     <Card withBorder padding="md">
@@ -27,7 +29,7 @@ export function OwnerActivity({ jobId }: { jobId: number }) {
         {activity.data?.map((e) => (
           <Text key={e.id} size="sm" data-testid="owner-activity-item">
             <Text span c="dimmed">
-              {new Date(e.at).toLocaleString()}
+              {dates.dateTime(e.at)}
             </Text>{' '}
             · {(LABELS[e.action] ?? (() => e.action))(e.details ?? {})}
           </Text>

@@ -1,21 +1,22 @@
 import type { OwnerLinkDto } from '@benchproof/contracts';
 import { Badge, Button, Group, Text } from '@mantine/core';
 import { useOwnerLinks, useRevokeOwnerLink } from '../api/owner-links';
+import { useDates } from '../../../lib/dates';
 
 const STATE_COLOUR = { active: 'teal', expired: 'gray', revoked: 'red' } as const;
-const when = (iso: string) => new Date(iso).toLocaleString();
 
 /** One link: its state, when it runs out, whether the owner opened it; the active one can be revoked. */
 function OwnerLinkRow({ link: l, onRevoke, revoking }: { link: OwnerLinkDto; onRevoke?: () => void; revoking: boolean }) {
+  const dates = useDates();
   return (
     <Group justify="space-between" data-testid={`owner-link-${l.id}`}>
       <div>
         <Badge color={STATE_COLOUR[l.state]}>{l.state}</Badge>
         <Text size="sm">
-          Created {when(l.createdAt)} · {l.state === 'active' ? 'expires' : 'expiry'} {when(l.expiresAt)}
+          Created {dates.dateTime(l.createdAt)} · {l.state === 'active' ? 'expires' : 'expiry'} {dates.dateTime(l.expiresAt)}
         </Text>
         <Text size="xs" c="dimmed">
-          {l.lastViewedAt ? `Last opened ${when(l.lastViewedAt)}` : 'Not opened yet'}
+          {l.lastViewedAt ? `Last opened ${dates.dateTime(l.lastViewedAt)}` : 'Not opened yet'}
           {l.sentTo ? ` · sent to ${l.sentTo}` : ''}
         </Text>
       </div>

@@ -1,11 +1,23 @@
 import { Card, Stack, Text, Title } from '@mantine/core';
+import type { ReactNode } from 'react';
 import { ConsentPanel } from './consent-panel';
 import { CreateOwnerLink } from './create-owner-link';
 import { OwnerActivity } from './owner-activity';
 import { OwnerLinkList } from './owner-link-list';
 
 /** Job page section: send the owner link (copy or e-mail), see its expiry, revoke it; consent and owner activity below. */
-export function OwnerLinkPanel({ jobId, canManage, ownerName }: { jobId: number; canManage: boolean; ownerName: string }) {
+export function OwnerLinkPanel({
+  jobId,
+  canManage,
+  ownerName,
+  takeDown,
+}: {
+  jobId: number;
+  canManage: boolean;
+  ownerName: string;
+  /** What was exported from this job (a slot from the showcase feature), told whether consent is withdrawn. */
+  takeDown?: (withdrawn: boolean) => ReactNode;
+}) {
   return (
     <Stack gap="lg">
       <Card withBorder padding="md">
@@ -19,7 +31,7 @@ export function OwnerLinkPanel({ jobId, canManage, ownerName }: { jobId: number;
           <OwnerLinkList jobId={jobId} canManage={canManage} />
         </Stack>
       </Card>
-      <ConsentPanel jobId={jobId} canRecord={canManage} ownerName={ownerName} />
+      <ConsentPanel jobId={jobId} canRecord={canManage} ownerName={ownerName} takeDown={takeDown} />
       <OwnerActivity jobId={jobId} />
     </Stack>
   );

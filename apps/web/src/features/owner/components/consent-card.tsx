@@ -3,9 +3,11 @@ import { Alert, Card, Checkbox, Stack, Switch, Text, Title } from '@mantine/core
 import { useState } from 'react';
 import type { ApiError } from '../../../lib/api-client';
 import { useOwnerConsent } from '../api/owner-page';
+import { useDates } from '../../../lib/dates';
 
 /** The marketing consent switch with the full wording; the owner can turn it off again at any time. */
 export function ConsentCard({ token, consent }: { token: string; consent: ConsentDto | null }) {
+  const dates = useDates();
   const save = useOwnerConsent(token);
   const granted = consent?.granted ?? false;
   const [makeModel, setMakeModel] = useState(consent?.nameMakeModel ?? false);
@@ -38,7 +40,7 @@ export function ConsentCard({ token, consent }: { token: string; consent: Consen
         />
         {consent && (
           <Text size="sm" c="dimmed">
-            {consent.granted ? 'Given' : 'Withdrawn'} on {new Date(consent.at).toLocaleString()} (wording {consent.wordingVersion})
+            {consent.granted ? 'Given' : 'Withdrawn'} on {dates.dateTime(consent.at)} (wording {consent.wordingVersion})
           </Text>
         )}
         {save.error && <Alert color="red">{(save.error as ApiError).message}</Alert>}

@@ -9,7 +9,7 @@ const totals = { partsMinor: 3500, labourMinor: 1500, netMinor: 5000, taxMinor: 
 
 function page(status: string): OwnerPageDto {
   return {
-    shop: { name: 'Test Cycles', phone: '0100 000000', email: 'shop@example.test', brandPrimary: '#224466', brandAccent: '#cc8833' },
+    shop: { name: 'Test Cycles', phone: '0100 000000', email: 'shop@example.test', brandPrimary: '#224466', brandAccent: '#cc8833', dateLocale: 'en-GB' },
     job: { number: 'J-0001', status, reportedSymptoms: 'Chain skips', promisedOn: null },
     bike: { maker: 'Testwerk', model: 'Bench One', year: 2020, colour: null },
     ownerName: 'Ada Owner',

@@ -11,6 +11,7 @@ import { OwnerFindingCard } from './owner-finding';
 import { ConfirmDecisions, ConsentCard, loadConfirmDecisions } from './owner-lazy';
 import { BikeAndJob, BrandBar, Measurements, Pairs, ReportAndContact } from './owner-sections';
 import { useChoices, type Choice } from './use-choices';
+import { DatesLocale } from '../../../lib/dates';
 
 /** The owner's private page for one job, phone-first: evidence, decisions, consent. */
 export function OwnerPage({ token }: { token: string }) {
@@ -25,7 +26,11 @@ export function OwnerPage({ token }: { token: string }) {
         <Loader aria-label="Loading your bike’s page" />
       </Center>
     );
-  return <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} />;
+  return (
+    <DatesLocale locale={page.data.shop.dateLocale}>
+      <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} />
+    </DatesLocale>
+  );
 }
 
 type OwnerPageData = NonNullable<ReturnType<typeof useOwnerPage>['data']>;

@@ -6,6 +6,7 @@ import { IconDownload, IconPhone } from '@tabler/icons-react';
 import { ConditionBadge } from '../../../components/condition-badge';
 import classes from './owner.module.css';
 import { PairSlider } from './owner-lazy';
+import { useDates } from '../../../lib/dates';
 
 /** Shop name in its own colours, and a big tap-to-call button. */
 export function BrandBar({ page }: { page: OwnerPageDto }) {
@@ -96,6 +97,7 @@ export function Pairs({ page }: { page: OwnerPageDto }) {
 }
 
 export function ReportAndContact({ page }: { page: OwnerPageDto }) {
+  const dates = useDates();
   return (
     <Stack gap="sm">
       {page.report && (
@@ -116,7 +118,7 @@ export function ReportAndContact({ page }: { page: OwnerPageDto }) {
         )}
       </Text>
       <Text size="xs" c="dimmed">
-        This private link works until {new Date(page.expiresAt).toLocaleDateString()}.
+        This private link works until {dates.date(page.expiresAt)}.
       </Text>
     </Stack>
   );

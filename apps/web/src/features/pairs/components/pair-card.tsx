@@ -1,4 +1,4 @@
-import type { ShotPairDto } from '@benchproof/contracts';
+import type { CreatePairRequest, ShotPairDto } from '@benchproof/contracts';
 import { ActionIcon, Button, Collapse, Group, Paper, Stack, TextInput } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconArrowDown, IconArrowUp, IconCrop, IconTrash } from '@tabler/icons-react';
@@ -13,6 +13,8 @@ interface Props {
   jobId: number;
   canEdit: boolean;
   onMove: (direction: -1 | 1) => void;
+  /** After an unpair: what it takes to make the same pair again (the undo). */
+  onUnpaired: (removed: CreatePairRequest) => void;
   isFirst: boolean;
   isLast: boolean;
 }
@@ -43,6 +45,7 @@ function PairControls({
   pair,
   jobId,
   onMove,
+  onUnpaired,
   isFirst,
   isLast,
   cropping,
@@ -62,7 +65,18 @@ function PairControls({
           {pair.crop ? 'Change crop' : 'Crop both'}
         </Button>
       </Group>
-      <ActionIcon size={48} variant="subtle" color="red" aria-label="Unpair these shots" loading={remove.isPending} onClick={() => remove.mutate(undefined)}>
+      <ActionIcon
+        size={48}
+        variant="subtle"
+        color="red"
+        aria-label="Unpair these shots"
+        loading={remove.isPending}
+        onClick={() =>
+          remove.mutate(undefined, {
+            onSuccess: () => onUnpaired({ beforeAssetId: pair.before.id, afterAssetId: pair.after.id, caption: pair.caption, crop: pair.crop }),
+          })
+        }
+      >
         <IconTrash />
       </ActionIcon>
     </Group>
@@ -70,7 +84,7 @@ function PairControls({
 }
 
 /** One pair: the comparison, its caption, its place in the order, its crop. */
-export function PairCard({ pair, jobId, canEdit, onMove, isFirst, isLast }: Props) {
+export function PairCard({ pair, jobId, canEdit, onMove, onUnpaired, isFirst, isLast }: Props) {
   const update = useUpdatePair(jobId, pair.id);
   const [cropping, { toggle: toggleCrop, close: closeCrop }] = useDisclosure(false);
   const captionError = update.error instanceof ApiError ? (update.error.fieldErrors().caption ?? update.error.message) : undefined;
@@ -80,7 +94,16 @@ export function PairCard({ pair, jobId, canEdit, onMove, isFirst, isLast }: Prop
       {canEdit && (
         <Stack gap="xs" mt="sm">
           <CaptionField saved={pair.caption} error={captionError} saving={update.isPending} onSave={(caption) => update.mutate({ caption })} />
-          <PairControls pair={pair} jobId={jobId} onMove={onMove} isFirst={isFirst} isLast={isLast} cropping={cropping} onToggleCrop={toggleCrop} />
+          <PairControls
+            pair={pair}
+            jobId={jobId}
+            onMove={onMove}
+            onUnpaired={onUnpaired}
+            isFirst={isFirst}
+            isLast={isLast}
+            cropping={cropping}
+            onToggleCrop={toggleCrop}
+          />
           <Collapse expanded={cropping}>
             <CropEditor before={pair.before} value={pair.crop} saving={update.isPending} onSave={(crop) => update.mutate({ crop }, { onSuccess: closeCrop })} />
           </Collapse>

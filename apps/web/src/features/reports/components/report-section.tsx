@@ -5,8 +5,9 @@ import { useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useCreateDraft, useIssueReport, useReports } from '../api/reports';
 import { ReportPreview } from './report-preview';
+import { useDates } from '../../../lib/dates';
+import { ConfirmStep } from '../../../components/confirm-step';
 
-const dateTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const kb = (bytes: number | null) => (bytes === null ? '' : `${Math.round(bytes / 1024)} kB`);
 
 function Rendering({ report }: { report: ReportDto }) {
@@ -20,11 +21,12 @@ function Rendering({ report }: { report: ReportDto }) {
 
 /** The current draft: its render state, and the way to issue it unless that has been done. */
 function DraftCard({ draft, nextVersion, onIssue, issuing }: { draft: ReportDto; nextVersion: number; onIssue?: () => void; issuing: boolean }) {
+  const dates = useDates();
   return (
     <Card withBorder>
       <Stack gap="sm">
         <Group justify="space-between" wrap="wrap">
-          <Text fw={600}>Draft of {dateTime(draft.createdAt)}</Text>
+          <Text fw={600}>Draft of {dates.dateTime(draft.createdAt)}</Text>
           <Badge color={draft.state === 'failed' ? 'red' : 'gray'} size="lg">
             {draft.state === 'ready' ? `${draft.pageCount} pages · ${kb(draft.byteSize)}` : draft.state}
           </Badge>
@@ -32,9 +34,16 @@ function DraftCard({ draft, nextVersion, onIssue, issuing }: { draft: ReportDto;
         {draft.state === 'rendering' && <Rendering report={draft} />}
         {draft.state === 'failed' && <Alert color="red">The draft could not be rendered: {draft.error}</Alert>}
         {draft.state === 'ready' && onIssue && (
-          <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={onIssue} loading={issuing}>
-            Issue this draft as version {nextVersion}
-          </Button>
+          <ConfirmStep
+            question={`Issue version ${nextVersion}? An issued report never changes; a correction becomes a new version.`}
+            confirmLabel={`Issue version ${nextVersion}`}
+            onConfirm={onIssue}
+            trigger={(ask) => (
+              <Button size="lg" color="teal" leftSection={<IconFileCheck />} onClick={ask} loading={issuing}>
+                Issue this draft as version {nextVersion}
+              </Button>
+            )}
+          />
         )}
       </Stack>
     </Card>
@@ -88,13 +97,14 @@ export function ReportSection({ jobId, canIssue, extra }: { jobId: number; canIs
 
 /** One issued version: who issued it when, its fingerprint, preview and download, and the slot (e.g. send to owner). */
 function IssuedCard({ report: r, onPreview, extra }: { report: ReportDto; onPreview: () => void; extra?: (issued: ReportDto) => React.ReactNode }) {
+  const dates = useDates();
   return (
     <Card withBorder padding="sm">
       <Group justify="space-between" wrap="wrap">
         <Stack gap={0}>
           <Text fw={700}>Version {r.version}</Text>
           <Text size="sm" c="dimmed">
-            Issued {r.issuedAt && dateTime(r.issuedAt)}
+            Issued {r.issuedAt && dates.dateTime(r.issuedAt)}
             {r.createdBy ? ` by ${r.createdBy.name}` : ''} · {kb(r.byteSize)}
           </Text>
           {r.fingerprint && (

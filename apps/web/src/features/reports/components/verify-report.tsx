@@ -3,8 +3,10 @@ import { Alert, Button, FileButton, Group, Stack, Text, TextInput, Title } from 
 import { IconCircleCheck, IconFileSearch, IconAlertTriangle } from '@tabler/icons-react';
 import { ApiError } from '../../../lib/api-client';
 import { useVerify } from './use-verify';
+import { useDates } from '../../../lib/dates';
 
 function Answer({ result }: { result: VerifyResult }) {
+  const dates = useDates();
   if (!result.issued) {
     return (
       <Alert color="red" icon={<IconAlertTriangle />} title="Not a report we issued">
@@ -20,7 +22,7 @@ function Answer({ result }: { result: VerifyResult }) {
       <Text>
         Job {result.jobNumber} · version {result.version}
       </Text>
-      <Text>Issued on {new Date(result.issuedAt).toLocaleDateString(undefined, { dateStyle: 'long' })}</Text>
+      <Text>Issued on {dates.date(result.issuedAt)}</Text>
     </Alert>
   );
 }

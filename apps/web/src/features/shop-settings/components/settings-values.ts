@@ -13,6 +13,8 @@ export interface SettingsValues {
   labourRate: string;
   taxRatePct: number | string;
   currency: string;
+  /** A ShopLocale, or 'auto': the one that fits the currency. */
+  locale: string;
   units: ShopSettingsDto['units'];
   pageSize: ShopSettingsDto['pageSize'];
   finalCheckSecondPerson: boolean;
@@ -33,6 +35,7 @@ export function fromDto(s: ShopSettingsDto, toMajor: (minor: number, currency: s
     labourRate: toMajor(s.labourRateMinor, s.currency),
     taxRatePct: s.taxRateBp / 100,
     currency: s.currency,
+    locale: s.locale ?? 'auto',
     units: s.units,
     pageSize: s.pageSize,
     finalCheckSecondPerson: s.finalCheckSecondPerson,
@@ -48,7 +51,7 @@ export const toFormPath = (p: string) => PATHS[p] ?? p.replace(/^chainLimits\./,
 
 /** Builds the PATCH body: major units → minor, % → basis points. A rate that does not read as money becomes NaN for the schema to refuse. */
 export function toRequest(v: SettingsValues, toMinor: (text: string, currency: string) => number | null) {
-  const { labourRate, taxRatePct, ownChainLimits, chain, ...rest } = v;
+  const { labourRate, taxRatePct, ownChainLimits, chain, locale, ...rest } = v;
   let labourRateMinor: number | null;
   try {
     labourRateMinor = toMinor(labourRate, v.currency);
@@ -57,6 +60,7 @@ export function toRequest(v: SettingsValues, toMinor: (text: string, currency: s
   }
   return {
     ...rest,
+    locale: locale === 'auto' ? null : locale,
     labourRateMinor: labourRateMinor ?? Number.NaN,
     taxRateBp: taxRatePct === '' ? Number.NaN : Math.round(Number(taxRatePct) * 100),
     chainLimits: ownChainLimits

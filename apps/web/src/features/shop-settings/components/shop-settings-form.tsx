@@ -1,5 +1,5 @@
 import { UpdateShopSettingsRequestSchema, type ShopSettingsDto } from '@benchproof/contracts';
-import { DEFAULT_CHAIN_LIMIT_POLICY, majorTextToMinor, minorToMajorText } from '@benchproof/domain';
+import { DEFAULT_CHAIN_LIMIT_POLICY, formatDate, majorTextToMinor, minorToMajorText, SHOP_LOCALE_LABELS, SHOP_LOCALES, shopLocale } from '@benchproof/domain';
 import {
   Alert,
   Button,
@@ -8,6 +8,7 @@ import {
   NumberInput,
   Paper,
   SegmentedControl,
+  Select,
   SimpleGrid,
   Stack,
   Switch,
@@ -57,6 +58,16 @@ function MoneySection({ form }: { form: Form }) {
           onChange={(e) => form.setFieldValue('currency', e.currentTarget.value.toUpperCase())}
         />
       </SimpleGrid>
+      <Select
+        label="Dates written as"
+        description="On every screen, e-mail and report, and in date pickers"
+        allowDeselect={false}
+        data={[
+          { value: 'auto', label: `From the currency: ${SHOP_LOCALE_LABELS[shopLocale({ currency: form.getValues().currency })]}` },
+          ...SHOP_LOCALES.map((l) => ({ value: l, label: `${SHOP_LOCALE_LABELS[l]} — ${formatDate('2026-12-05', l)}` })),
+        ]}
+        {...form.getInputProps('locale')}
+      />
     </Section>
   );
 }

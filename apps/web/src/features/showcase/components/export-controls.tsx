@@ -33,6 +33,9 @@ function useFileExport(pairId: number) {
 
 interface Props {
   pairId: number;
+  /** What and size: this card's Export button and the zip both use them. */
+  choice: { variant: ShowcaseVariant; size: ShowcaseSize };
+  onChoice: (choice: { variant: ShowcaseVariant; size: ShowcaseSize }) => void;
   selected: boolean;
   onSelect: (on: boolean) => void;
   /** Null hides the caption button (the caller may not edit captions). */
@@ -40,15 +43,14 @@ interface Props {
 }
 
 /** Format and size, one-tap export, caption and zip selection. */
-export function ExportControls({ pairId, selected, onSelect, onCaption }: Props) {
-  const [variant, setVariant] = useState<ShowcaseVariant>('pair');
-  const [size, setSize] = useState<ShowcaseSize>('square');
+export function ExportControls({ pairId, choice, onChoice, selected, onSelect, onCaption }: Props) {
+  const { variant, size } = choice;
   const file = useFileExport(pairId);
   return (
     <>
       <Stack gap={6}>
-        <Select size="md" label="What" data={VARIANT_OPTIONS} value={variant} onChange={(v) => v && setVariant(v)} allowDeselect={false} />
-        <Select size="md" label="Size" data={SIZE_OPTIONS} value={size} onChange={(v) => v && setSize(v)} allowDeselect={false} />
+        <Select size="md" label="What" data={VARIANT_OPTIONS} value={variant} onChange={(v) => v && onChoice({ variant: v, size })} allowDeselect={false} />
+        <Select size="md" label="Size" data={SIZE_OPTIONS} value={size} onChange={(v) => v && onChoice({ variant, size: v })} allowDeselect={false} />
       </Stack>
       {file.error && (
         <Text c="red" size="sm" role="alert">

@@ -1,4 +1,4 @@
-import type { ShowcaseItemDto } from '@benchproof/contracts';
+import type { ShowcaseItemDto, ShowcaseSize, ShowcaseVariant } from '@benchproof/contracts';
 import { MEDIA_AREA_LABELS } from '@benchproof/domain';
 import { ActionIcon, Badge, Group, Paper, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
@@ -7,8 +7,7 @@ import { useState } from 'react';
 import { useUpdateShowcaseItem } from '../api/showcase';
 import { CaptionEditor } from './caption-editor';
 import { ExportControls } from './export-controls';
-
-const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+import { useDates } from '../../../lib/dates';
 
 /** The annotated render (blur boxes applied) when there is one, else the plain upright copy. */
 function Shot({ id, alt }: { id: number; alt: string }) {
@@ -44,6 +43,8 @@ function Favourite({ item, canManage }: { item: ShowcaseItemDto; canManage: bool
 
 interface Props {
   item: ShowcaseItemDto;
+  choice: { variant: ShowcaseVariant; size: ShowcaseSize };
+  onChoice: (choice: { variant: ShowcaseVariant; size: ShowcaseSize }) => void;
   selected: boolean;
   onSelect: (on: boolean) => void;
   /** Favourites and captions (showcase.manage); everyone who opens the library may export. */
@@ -51,7 +52,8 @@ interface Props {
 }
 
 /** One consented pair: both shots, caption, consent scope and date, favourite, export. */
-export function ShowcaseCard({ item, selected, onSelect, canManage }: Props) {
+export function ShowcaseCard({ item, choice, onChoice, selected, onSelect, canManage }: Props) {
+  const dates = useDates();
   const [editing, { open, close }] = useDisclosure(false);
   const area = MEDIA_AREA_LABELS[item.area];
   return (
@@ -70,10 +72,10 @@ export function ShowcaseCard({ item, selected, onSelect, canManage }: Props) {
             {area}
           </Badge>
           <Text size="sm" c="teal.8" fw={600} title={`Consent wording ${item.consent.wordingVersion}`}>
-            Consent {day(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
+            Consent {dates.date(item.consent.grantedAt)} · {item.consent.nameMakeModel ? 'make & model may be named' : 'bike not named'}
           </Text>
         </Group>
-        <ExportControls pairId={item.pairId} selected={selected} onSelect={onSelect} onCaption={canManage ? open : null} />
+        <ExportControls pairId={item.pairId} choice={choice} onChoice={onChoice} selected={selected} onSelect={onSelect} onCaption={canManage ? open : null} />
       </Stack>
       {editing && <CaptionEditor item={item} opened={editing} onClose={close} />}
     </Paper>

@@ -4,11 +4,15 @@ import { useState } from 'react';
 import { useShowcaseItems } from '../api/showcase';
 import { ShowcaseCard } from './showcase-card';
 import { ShowcaseFilters } from './showcase-filters';
-import { ZipBar } from './zip-bar';
+import { ZipBar, type CardChoice } from './zip-bar';
 
-/** Which pairs are picked for a zip. */
+type Choice = Omit<CardChoice, 'pairId'>;
+const DEFAULT_CHOICE: Choice = { variant: 'pair', size: 'square' };
+
+/** Which pairs are picked for a zip, and each card's "What" and "Size" (its Export button and the zip use the same). */
 function useSelection() {
   const [selected, setSelected] = useState<Set<number>>(new Set());
+  const [choices, setChoices] = useState<Map<number, Choice>>(new Map());
   const toggle = (pairId: number, on: boolean) =>
     setSelected((s) => {
       const n = new Set(s);
@@ -16,7 +20,9 @@ function useSelection() {
       else n.delete(pairId);
       return n;
     });
-  return { has: (pairId: number) => selected.has(pairId), toggle };
+  const choiceOf = (pairId: number) => choices.get(pairId) ?? DEFAULT_CHOICE;
+  const choose = (pairId: number, c: Choice) => setChoices((m) => new Map(m).set(pairId, c));
+  return { has: (pairId: number) => selected.has(pairId), toggle, choiceOf, choose };
 }
 
 /**
@@ -42,12 +48,14 @@ export function ShowcaseLibrary({ canManage }: { canManage: boolean }) {
             key={item.pairId}
             item={item}
             canManage={canManage}
+            choice={selection.choiceOf(item.pairId)}
+            onChoice={(c) => selection.choose(item.pairId, c)}
             selected={selection.has(item.pairId)}
             onSelect={(on) => selection.toggle(item.pairId, on)}
           />
         ))}
       </SimpleGrid>
-      <ZipBar pairIds={list.filter((i) => selection.has(i.pairId)).map((i) => i.pairId)} />
+      <ZipBar choices={list.filter((i) => selection.has(i.pairId)).map((i) => ({ pairId: i.pairId, ...selection.choiceOf(i.pairId) }))} />
     </Stack>
   );
 }

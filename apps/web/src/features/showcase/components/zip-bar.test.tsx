@@ -3,7 +3,7 @@ import { MantineProvider } from '@mantine/core';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { theme } from '../../../app/theme';
-import { ZipBar, zipRequest } from './zip-bar';
+import { ZipBar, zipRequest, type CardChoice } from './zip-bar';
 
 const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
 const task = (patch: Partial<ShowcaseExportTaskDto>): ShowcaseExportTaskDto => ({
@@ -15,12 +15,14 @@ const task = (patch: Partial<ShowcaseExportTaskDto>): ShowcaseExportTaskDto => (
   ...patch,
 });
 
-function renderBar(pairIds: number[]) {
+const pairs = (ids: number[]): CardChoice[] => ids.map((pairId) => ({ pairId, variant: 'pair', size: 'square' }));
+
+function renderBar(choices: CardChoice[]) {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
   render(
     <QueryClientProvider client={qc}>
       <MantineProvider theme={theme}>
-        <ZipBar pairIds={pairIds} />
+        <ZipBar choices={choices} />
       </MantineProvider>
     </QueryClientProvider>,
   );
@@ -47,18 +49,38 @@ describe('showcase zip of a selection', () => {
     vi.unstubAllGlobals();
   });
 
-  it('asks for the composed pair of every selected item, in one size or all three', () => {
-    expect(zipRequest([4, 9], 'banner').items).toEqual([
-      { pairId: 4, variant: 'pair', size: 'banner' },
-      { pairId: 9, variant: 'pair', size: 'banner' },
+  it('honours each card’s "What" and "Size", or makes each card’s choice in all three sizes', () => {
+    const choices: CardChoice[] = [
+      { pairId: 4, variant: 'after', size: 'banner' },
+      { pairId: 9, variant: 'before', size: 'portrait' },
+    ];
+    expect(zipRequest(choices, 'card').items).toEqual([
+      { pairId: 4, variant: 'after', size: 'banner' },
+      { pairId: 9, variant: 'before', size: 'portrait' },
     ]);
-    expect(zipRequest([4, 9], 'all').items.map((i) => `${i.pairId}:${i.size}`)).toEqual([
-      '4:square',
-      '4:portrait',
-      '4:banner',
-      '9:square',
-      '9:portrait',
-      '9:banner',
+    expect(zipRequest(choices, 'all').items.map((i) => `${i.pairId}:${i.variant}:${i.size}`)).toEqual([
+      '4:after:square',
+      '4:after:portrait',
+      '4:after:banner',
+      '9:before:square',
+      '9:before:portrait',
+      '9:before:banner',
+    ]);
+  });
+
+  it('the zip sent carries each card’s choice, and the screen says so', async () => {
+    Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:zip'), revokeObjectURL: vi.fn() });
+    fetchSpy.mockResolvedValue(new Response('PK', { status: 200 }));
+    renderBar([
+      { pairId: 5, variant: 'before', size: 'portrait' },
+      { pairId: 6, variant: 'after', size: 'banner' },
+    ]);
+    expect(screen.getByLabelText<HTMLInputElement>('Files in the zip', { selector: 'input' }).value).toBe('As chosen on each card');
+    fireEvent.click(screen.getByRole('button', { name: 'Zip 2 files' }));
+    await waitFor(() => expect(fetchSpy).toHaveBeenCalled());
+    expect((JSON.parse(fetchSpy.mock.calls[0][1]?.body as string) as { items: unknown[] }).items).toEqual([
+      { pairId: 5, variant: 'before', size: 'portrait' },
+      { pairId: 6, variant: 'after', size: 'banner' },
     ]);
   });
 
@@ -67,8 +89,8 @@ describe('showcase zip of a selection', () => {
       .mockResolvedValueOnce(json(201, task({})))
       .mockResolvedValueOnce(json(200, task({ state: 'running', progress: 1 / 3 })))
       .mockResolvedValue(json(200, task({ state: 'done', progress: 1 })));
-    renderBar([1, 2, 3]);
-    choose('Zip size', 'All three sizes');
+    renderBar(pairs([1, 2, 3]));
+    choose('Files in the zip', 'Each card’s choice, all three sizes');
     fireEvent.click(screen.getByRole('button', { name: 'Zip 9 files' }));
     await screen.findByText('Making the zip: 3 of 9 files', undefined, { timeout: 4000 });
     expect(Number(screen.getByRole('progressbar', { name: 'Zip progress' }).getAttribute('aria-valuenow'))).toBeCloseTo(33.3, 1);
@@ -85,8 +107,8 @@ describe('showcase zip of a selection', () => {
     fetchSpy
       .mockResolvedValueOnce(json(201, task({ state: 'running', progress: 0.1 })))
       .mockResolvedValue(json(200, task({ state: 'failed', code: 'CONSENT_REVOKED', error: message })));
-    renderBar([1, 2, 3]);
-    choose('Zip size', 'All three sizes');
+    renderBar(pairs([1, 2, 3]));
+    choose('Files in the zip', 'Each card’s choice, all three sizes');
     fireEvent.click(screen.getByRole('button', { name: 'Zip 9 files' }));
     const alert = await screen.findByRole('alert', undefined, { timeout: 4000 });
     expect(within(alert).getByText('An owner withdrew consent')).toBeTruthy();
@@ -99,7 +121,7 @@ describe('showcase zip of a selection', () => {
     const createObjectURL = vi.fn(() => 'blob:zip');
     Object.assign(URL, { createObjectURL, revokeObjectURL: vi.fn() });
     fetchSpy.mockResolvedValue(new Response('PK', { status: 200, headers: { 'content-disposition': 'attachment; filename="showcase.zip"' } }));
-    renderBar([5, 6]);
+    renderBar(pairs([5, 6]));
     fireEvent.click(screen.getByRole('button', { name: 'Zip 2 files' }));
     await waitFor(() => expect(createObjectURL).toHaveBeenCalled());
     expect(fetchSpy.mock.calls.map(([u]) => u)).toEqual(['/api/showcase/zip']);
@@ -108,7 +130,7 @@ describe('showcase zip of a selection', () => {
 
   it('a refused zip shows the code’s heading and message', async () => {
     fetchSpy.mockResolvedValue(json(403, { code: 'SHOWCASE_DESK_OFF', message: 'This shop has not opened the showcase to the front desk.', details: null }));
-    renderBar([5]);
+    renderBar(pairs([5]));
     fireEvent.click(screen.getByRole('button', { name: 'Zip 1 file' }));
     const alert = await screen.findByRole('alert');
     expect(within(alert).getByText('The showcase is closed to the desk')).toBeTruthy();

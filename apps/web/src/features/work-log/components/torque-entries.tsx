@@ -1,12 +1,12 @@
 import type { TorqueEntryDto } from '@benchproof/contracts';
 import { CARBON_CAUTION, formatTorque, THREADLOCKER_LABELS, TORQUE_CAUTION } from '@benchproof/domain';
 import { Badge, Card, Group, Stack, Text, Title } from '@mantine/core';
-import dayjs from 'dayjs';
 import { QueryState } from '../../../components/query-state';
 import { SafetyNote } from '../../../components/safety-note';
 import { useTorqueEntries } from '../api/work-log';
 import { CalibrationNotice } from './calibration-notice';
 import { TorqueForm } from './torque-form';
+import { useDates } from '../../../lib/dates';
 
 const VERDICT = {
   within: { label: 'Within spec', colour: 'teal' },
@@ -16,15 +16,17 @@ const VERDICT = {
 
 /** The wrench and its calibration, the threadlocker, as the log shows them. */
 function ToolLine({ e }: { e: TorqueEntryDto }) {
+  const dates = useDates();
   const parts = [
     e.tool || 'Wrench not named',
-    e.toolCalibratedOn ? `calibrated ${dayjs(e.toolCalibratedOn).format('D MMM YYYY')}` : 'calibration date not recorded',
+    e.toolCalibratedOn ? `calibrated ${dates.date(e.toolCalibratedOn)}` : 'calibration date not recorded',
     e.threadlocker ? `threadlocker: ${THREADLOCKER_LABELS[e.threadlocker].toLowerCase()}` : 'threadlocker not recorded',
   ];
   return <Text size="sm">{parts.join(' · ')}</Text>;
 }
 
 function TorqueEntryCard({ entry: e }: { entry: TorqueEntryDto }) {
+  const dates = useDates();
   return (
     <Card withBorder padding="sm">
       <Group justify="space-between" wrap="nowrap">
@@ -41,7 +43,7 @@ function TorqueEntryCard({ entry: e }: { entry: TorqueEntryDto }) {
       <ToolLine e={e} />
       <CalibrationNotice overdue={e.calibrationOverdue} />
       <Text size="xs" c="dimmed">
-        Source: {e.specSource} · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}
+        Source: {e.specSource} · {e.userName ?? 'someone'} · {dates.dateTime(e.at)}
       </Text>
     </Card>
   );

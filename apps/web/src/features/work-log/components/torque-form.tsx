@@ -7,6 +7,7 @@ import { SafetyNote } from '../../../components/safety-note';
 import { CalibrationNotice } from './calibration-notice';
 import { TorqueLive } from './torque-live';
 import { num, useTorqueForm, type TorqueFormState } from './use-torque-form';
+import { useDates } from '../../../lib/dates';
 
 const UNIT_OPTIONS = TORQUE_UNITS.map((u) => ({ value: u, label: TORQUE_UNIT_LABELS[u] }));
 const THREADLOCKER_OPTIONS = THREADLOCKERS.map((t) => ({ value: t, label: THREADLOCKER_LABELS[t] }));
@@ -52,6 +53,7 @@ function TorqueValueFields({ form }: { form: TorqueFormState }) {
 
 /** Which wrench, when it was last calibrated, and a notice when that is too long ago. */
 function WrenchFields({ form }: { form: TorqueFormState }) {
+  const dates = useDates();
   return (
     <>
       <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="sm">
@@ -62,7 +64,8 @@ function WrenchFields({ form }: { form: TorqueFormState }) {
           clearable
           maxDate={new Date()}
           size="md"
-          valueFormat="D MMM YYYY"
+          valueFormat={dates.pickerFormat}
+          firstDayOfWeek={dates.firstDayOfWeek}
           {...form.getInputProps('toolCalibratedOn')}
         />
       </SimpleGrid>

@@ -1,10 +1,10 @@
 import { WorkEntryRequestSchema, type WorkEntryRequest } from '@benchproof/contracts';
 import { Alert, Button, Card, Group, NumberInput, Stack, Text, Textarea, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
-import dayjs from 'dayjs';
 import { QueryState } from '../../../components/query-state';
 import { contractResolver, formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useAddWorkEntry, useWorkEntries } from '../api/work-log';
+import { useDates } from '../../../lib/dates';
 
 function WorkEntryForm({ jobId }: { jobId: number }) {
   const add = useAddWorkEntry(jobId);
@@ -31,6 +31,7 @@ function WorkEntryForm({ jobId }: { jobId: number }) {
 
 /** What was done on the bench, with parts and time; the form only for those who may record now. */
 export function WorkEntries({ jobId, canRecord = true }: { jobId: number; canRecord?: boolean }) {
+  const dates = useDates();
   const entries = useWorkEntries(jobId);
   const total = entries.data?.reduce((s, e) => s + e.minutes, 0) ?? 0;
   return (
@@ -47,7 +48,7 @@ export function WorkEntries({ jobId, canRecord = true }: { jobId: number; canRec
           <Text style={{ whiteSpace: 'pre-wrap' }}>{e.description}</Text>
           {e.partsUsed && <Text size="sm">Parts: {e.partsUsed}</Text>}
           <Text size="xs" c="dimmed">
-            {e.minutes} min · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}
+            {e.minutes} min · {e.userName ?? 'someone'} · {dates.dateTime(e.at)}
           </Text>
         </Card>
       ))}

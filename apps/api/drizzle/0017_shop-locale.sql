@@ -1,0 +1,1 @@
+ALTER TABLE `shops` ADD `locale` text;

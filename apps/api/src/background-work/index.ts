@@ -1,0 +1,1 @@
+export { BackgroundWorkModule } from './background-work.module';
