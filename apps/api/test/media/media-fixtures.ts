@@ -5,9 +5,9 @@ import sharp from 'sharp';
 import { MediaDerivativesService } from '../../src/media';
 import { DEMO, type TestApp } from '../test-app';
 
-/** Books a fresh job in the first demo shop through the public API, as the desk would (new customer, new bike). */
-export async function bookJob(t: TestApp): Promise<number> {
-  const { agent } = await t.signIn(DEMO.desk);
+/** Books a fresh job through the public API (the first demo shop's desk unless `as` says otherwise; new customer, new bike). */
+export async function bookJob(t: TestApp, as: string = DEMO.desk): Promise<number> {
+  const { agent } = await t.signIn(as);
   const res = await agent.post('/api/jobs').send({
     newCustomer: { name: 'Media Test Owner', email: 'owner@media.test', phone: null, preferredChannel: 'email', notes: null },
     newBike: {
@@ -108,4 +108,16 @@ export function patternBytes(n: number, seed = 1): Buffer {
     out[i] = x >>> 24;
   }
   return out;
+}
+
+export interface RawSession {
+  cookie: string;
+  csrf: string;
+}
+
+/** Signs in over plain HTTP and keeps the raw cookies, as a tus client sends them. */
+export async function rawSession(t: TestApp, email: string): Promise<RawSession> {
+  const res = await t.http().post('/api/auth/login').send({ email, password: 'bench-demo-2026' }).expect(200);
+  const cookies = (res.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]);
+  return { cookie: cookies.join('; '), csrf: res.body.csrfToken as string };
 }
