@@ -27,6 +27,10 @@ import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
+import { InvitationsModule } from './invitations';
+import { PasswordResetsModule } from './password-resets';
+import { SetupModule } from './setup';
+import { TwoFactorModule } from './two-factor';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
@@ -48,6 +52,10 @@ const FEATURES = [
   ReportsModule,
   MailModule,
   ShowcaseModule,
+  TwoFactorModule,
+  InvitationsModule,
+  PasswordResetsModule,
+  SetupModule,
 ];
 
 @Module({})

@@ -41,6 +41,8 @@ export const ACCESS_POLICY = {
   'session.view': staff(...ALL_STAFF),
   /** Every signed-in staff member may change their own password. */
   'account.change_password': staff(...ALL_STAFF),
+  /** Every signed-in staff member may set up or turn off their own two-step sign-in. */
+  'account.two_factor': staff(...ALL_STAFF),
   'users.view': staff(...ALL_STAFF),
   'users.manage': staff('manager'),
   'shop.view': staff(...ALL_STAFF),
@@ -52,6 +54,8 @@ export const ACCESS_POLICY = {
   'showcase.view': staff('manager', 'desk'),
   'customers.view': staff(...ALL_STAFF),
   'customers.edit': staff('manager', 'desk'),
+  /** Bring customers and bikes in from a CSV file, many at once. */
+  'customers.import': staff('manager'),
   'bikes.view': staff(...ALL_STAFF),
   'bikes.edit': staff('manager', 'desk'),
   'jobs.view': staff(...ALL_STAFF),

@@ -25,3 +25,5 @@ export * from './annotations';
 export * from './reports';
 export * from './mail';
 export * from './showcase';
+export * from './accounts';
+export * from './shop-locale';

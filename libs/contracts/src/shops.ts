@@ -60,6 +60,8 @@ export const ShopSettingsDtoSchema = z.object({
   ...settingsFields,
   /** The report logo (a shop-level image made by the media pipeline), or null. */
   logo: z.object({ url: z.string(), width: z.number().int(), height: z.number().int() }).nullable(),
+  /** Every account must sign in with a second factor (changed through PUT /api/shop/two-factor). */
+  requireTwoFactor: z.boolean(),
 });
 export type ShopSettingsDto = z.infer<typeof ShopSettingsDtoSchema>;
 

@@ -26,3 +26,6 @@ export * from './measurement-evidence.table';
 export * from './reports.table';
 export * from './outbox-messages.table';
 export * from './showcase-items.table';
+export * from './account-tokens.table';
+export * from './invitations.table';
+export * from './recovery-codes.table';
