@@ -22,9 +22,16 @@ export interface PasswordContext {
 
 /** Words from the person and the shop that a password must not lean on. */
 export function personalWords(ctx: PasswordContext): string[] {
-  const names = [ctx.userName ?? '', ctx.shopName ?? ''];
-  const words = [...names, ...names.map((n) => n.replace(/[^\p{L}\p{N}]+/gu, '')), ...names.flatMap((n) => n.split(/[^\p{L}\p{N}]+/u)), ctx.email, ctx.email?.split('@')[0]];
-  return [...new Set(words.map((w) => (w ?? '').trim().toLowerCase()).filter((w) => w.length >= 3))];
+  const [local = '', domain = ''] = (ctx.email ?? '').split('@');
+  const phrases = [ctx.userName ?? '', ctx.shopName ?? '', local, domain.split('.')[0] ?? ''];
+  const words: string[] = [];
+  for (const phrase of phrases) {
+    const parts = phrase.split(/[^\p{L}\p{N}]+/u).filter(Boolean);
+    words.push(phrase, parts.join(''), ...parts);
+    // Adjacent pairs too ("Lantern & Spoke Workshop" gives "lanternspoke"): the matcher finds a whole word, not its halves.
+    for (let i = 0; i + 1 < parts.length; i++) words.push(parts[i] + parts[i + 1]);
+  }
+  return [...new Set(words.map((w) => w.trim().toLowerCase()).filter((w) => w.length >= 3))];
 }
 
 /** Throws WEAK_PASSWORD (details: field, score) when the password is too easy to guess. */
