@@ -8,13 +8,15 @@ import type { TestApp } from '../test-app';
 export const STRONG = 'quiet-gravel-otter-52';
 export const STRONG_2 = 'rosehip-spanner-87';
 
-/** The newest caught message to an address, after waiting for `count` messages in all. */
-export async function mailTo(catcher: MailCatcher, to: string, count: number) {
-  const all = await catcher.waitFor(count);
-  const mine = all.filter((m) => m.envelopeTo.includes(to));
-  const last = mine[mine.length - 1];
-  if (!last) throw new Error(`No mail to ${to}`);
-  return last;
+/** The `nth` caught message to an address (1-based), waiting up to 10 s for it to arrive. */
+export async function mailTo(catcher: MailCatcher, to: string, nth: number) {
+  const deadline = Date.now() + 10_000;
+  for (;;) {
+    const mine = catcher.messages().filter((m) => m.envelopeTo.includes(to));
+    if (mine.length >= nth) return mine[nth - 1];
+    if (Date.now() > deadline) throw new Error(`Expected ${nth} message(s) to ${to}, caught ${mine.length}`);
+    await new Promise((r) => setTimeout(r, 50));
+  }
 }
 
 /** The token after '#' in the first link to `path` in a message's text. */

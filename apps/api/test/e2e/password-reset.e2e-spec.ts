@@ -40,9 +40,9 @@ describe('forgotten passwords through the local mail catcher', () => {
 
   it('refuses a link after 30 minutes and a guessable new password; a newer link retires the older one', async () => {
     await t.http().post('/api/password-resets').send({ email: DEMO.desk }).expect(202);
-    const older = linkToken((await mailTo(catcher, DEMO.desk, 2)).text, '/reset-password');
+    const older = linkToken((await mailTo(catcher, DEMO.desk, 1)).text, '/reset-password');
     await t.http().post('/api/password-resets').send({ email: DEMO.desk }).expect(202);
-    const newer = linkToken((await mailTo(catcher, DEMO.desk, 3)).text, '/reset-password');
+    const newer = linkToken((await mailTo(catcher, DEMO.desk, 2)).text, '/reset-password');
     expect((await t.http().post('/api/password-resets/use').send({ token: older, password: STRONG }).expect(410)).body.code).toBe('LINK_INVALID');
     expect((await t.http().post('/api/password-resets/use').send({ token: newer, password: 'lanternspoke1' }).expect(422)).body.code).toBe('WEAK_PASSWORD');
     const clock = t.app.get<Clock>(CLOCK);
@@ -69,9 +69,8 @@ describe('forgotten passwords through the local mail catcher', () => {
     const manager = await t.signIn(DEMO.manager);
     const staff = (await manager.agent.get('/api/users').expect(200)).body as Array<{ id: number; email: string }>;
     const ines = staff.find((u) => u.email === DEMO.mechanic2)!;
-    const before = catcher.messages().length;
     await manager.agent.post(`/api/users/${ines.id}/password-link`).expect(202);
-    const mail = await mailTo(catcher, DEMO.mechanic2, before + 1);
+    const mail = await mailTo(catcher, DEMO.mechanic2, 1);
     expect(mail.text).toContain('asked for a password link');
     const mech = await t.signIn(DEMO.mechanic2);
     await mech.agent.post(`/api/users/${ines.id}/password-link`).expect(403);
