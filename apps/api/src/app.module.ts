@@ -30,6 +30,7 @@ import { WorkLogModule } from './work-log';
 import { InvitationsModule } from './invitations';
 import { PasswordResetsModule } from './password-resets';
 import { SetupModule } from './setup';
+import { ImportsModule } from './imports';
 import { TwoFactorModule } from './two-factor';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
@@ -56,6 +57,7 @@ const FEATURES = [
   InvitationsModule,
   PasswordResetsModule,
   SetupModule,
+  ImportsModule,
 ];
 
 @Module({})

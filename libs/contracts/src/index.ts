@@ -27,3 +27,4 @@ export * from './mail';
 export * from './showcase';
 export * from './accounts';
 export * from './shop-locale';
+export * from './imports';
