@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { RoleSchema } from './auth';
-import { EmailSchema, IdSchema, IsoDateTimeSchema, requiredText } from './common';
+import { IdSchema, IsoDateTimeSchema } from './common';
 
 /** Minimum password length for staff accounts. */
 export const MIN_PASSWORD_LENGTH = 10;

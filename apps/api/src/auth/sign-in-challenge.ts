@@ -40,7 +40,8 @@ export class SignInChallenge {
   /** The user behind a challenge for this step, or 401 (an old, altered or wrong-step challenge means: sign in again). */
   async read(token: string, step: ChallengeStep): Promise<{ userId: number; shopId: number }> {
     const claims = await this.jwt.verifyAsync<ChallengeClaims>(token, { secret: this.key, algorithms: ['HS256'] }).catch(() => null);
-    if (!claims || claims.step !== step || typeof claims.sub !== 'number') throw new DomainError('SESSION_EXPIRED', 'Sign in again: the sign-in took too long.');
+    if (!claims || claims.step !== step || typeof claims.sub !== 'number')
+      throw new DomainError('SESSION_EXPIRED', 'Sign in again: the sign-in took too long.');
     return { userId: claims.sub, shopId: claims.shop };
   }
 }

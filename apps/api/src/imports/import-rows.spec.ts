@@ -25,14 +25,22 @@ describe('reading import rows', () => {
     const cols = ['Name', 'Phone'];
     const row = readRow(cols, ['Bram Oduya', '07700 900222'], { Name: 'customer.name', Phone: '' });
     expect(row.problems.map((p) => p.field)).toEqual(['customer.phone']);
-    expect(readRow(cols, ['Bram Oduya', '07700 900222'], { Name: 'customer.name', Phone: 'customer.phone' }).customer).toMatchObject({ preferredChannel: 'phone' });
+    expect(readRow(cols, ['Bram Oduya', '07700 900222'], { Name: 'customer.name', Phone: 'customer.phone' }).customer).toMatchObject({
+      preferredChannel: 'phone',
+    });
   });
 
   it('knows the usual words for frame materials and brakes, and names what it does not know', () => {
     const cols = ['Name', 'Email', 'Make', 'Model', 'Frame', 'Speeds', 'Brakes'];
     const map = suggestMapping(cols);
     const ok = readRow(cols, ['A B', 'a@b.test', 'X', 'Y', 'Aluminum', '11', 'Hydraulic disc'], map);
-    expect(ok.bike).toMatchObject({ frameMaterial: 'aluminium', brakeType: 'hydraulic_disc', drivetrainSpeeds: 11, cableRouting: 'external', dropoutType: 'vertical' });
+    expect(ok.bike).toMatchObject({
+      frameMaterial: 'aluminium',
+      brakeType: 'hydraulic_disc',
+      drivetrainSpeeds: 11,
+      cableRouting: 'external',
+      dropoutType: 'vertical',
+    });
     const bad = readRow(cols, ['A B', 'a@b.test', 'X', 'Y', 'balsa', '11', 'coaster'], map);
     expect(bad.problems.map((p) => p.field)).toEqual(['bike.frameMaterial', 'bike.brakeType']);
   });

@@ -31,18 +31,47 @@ const HEADER_WORDS: Record<ImportField, string[]> = {
 
 /** Words people write for our value lists (common practice, no source). */
 const FRAME_WORDS: Record<string, NewBikeInput['frameMaterial']> = {
-  steel: 'steel', crmo: 'steel', cromo: 'steel', chromoly: 'steel', chromemoly: 'steel',
-  aluminium: 'aluminium', aluminum: 'aluminium', alu: 'aluminium', alloy: 'aluminium',
-  carbon: 'carbon', carbonfibre: 'carbon', carbonfiber: 'carbon', cf: 'carbon',
-  titanium: 'titanium', ti: 'titanium', other: 'other', bamboo: 'other', wood: 'other',
+  steel: 'steel',
+  crmo: 'steel',
+  cromo: 'steel',
+  chromoly: 'steel',
+  chromemoly: 'steel',
+  aluminium: 'aluminium',
+  aluminum: 'aluminium',
+  alu: 'aluminium',
+  alloy: 'aluminium',
+  carbon: 'carbon',
+  carbonfibre: 'carbon',
+  carbonfiber: 'carbon',
+  cf: 'carbon',
+  titanium: 'titanium',
+  ti: 'titanium',
+  other: 'other',
+  bamboo: 'other',
+  wood: 'other',
 };
 const BRAKE_WORDS: Record<string, NewBikeInput['brakeType']> = {
-  rim: 'rim', rimbrake: 'rim', rimbrakes: 'rim', vbrake: 'rim', caliper: 'rim', cantilever: 'rim',
-  disc: 'mechanical_disc', mechanical: 'mechanical_disc', mechanicaldisc: 'mechanical_disc', cabledisc: 'mechanical_disc',
-  hydraulic: 'hydraulic_disc', hydraulicdisc: 'hydraulic_disc', hydro: 'hydraulic_disc',
+  rim: 'rim',
+  rimbrake: 'rim',
+  rimbrakes: 'rim',
+  vbrake: 'rim',
+  caliper: 'rim',
+  cantilever: 'rim',
+  disc: 'mechanical_disc',
+  mechanical: 'mechanical_disc',
+  mechanicaldisc: 'mechanical_disc',
+  cabledisc: 'mechanical_disc',
+  hydraulic: 'hydraulic_disc',
+  hydraulicdisc: 'hydraulic_disc',
+  hydro: 'hydraulic_disc',
 };
 const ROUTING_WORDS: Record<string, NewBikeInput['cableRouting']> = { external: 'external', internal: 'internal', ext: 'external', int: 'internal' };
-const DROPOUT_WORDS: Record<string, NewBikeInput['dropoutType']> = { vertical: 'vertical', horizontal: 'horizontal', track: 'horizontal', sliding: 'horizontal' };
+const DROPOUT_WORDS: Record<string, NewBikeInput['dropoutType']> = {
+  vertical: 'vertical',
+  horizontal: 'horizontal',
+  track: 'horizontal',
+  sliding: 'horizontal',
+};
 
 const squash = (s: string): string => s.toLowerCase().replace(/[^\p{L}\p{N}]+/gu, '');
 
@@ -112,7 +141,8 @@ export function readRow(columns: string[], cells: string[], mapping: ImportMappi
     notes: v['customer.notes'] ?? null,
     preferredChannel: v['customer.email'] ? 'email' : 'phone',
   });
-  if (!customer.success) for (const i of customer.error.issues) problems.push({ field: `customer.${String(i.path[0] ?? '')}`, message: customerMessage(i.path[0], i.message) });
+  if (!customer.success)
+    for (const i of customer.error.issues) problems.push({ field: `customer.${String(i.path[0] ?? '')}`, message: customerMessage(i.path[0], i.message) });
   const bike = readBike(v, problems);
   return { name: v['customer.name'] ?? '', customer: customer.success ? customer.data : null, bike, problems };
 }
@@ -151,7 +181,11 @@ function readBike(v: Partial<Record<ImportField, string>>, problems: ReadRow['pr
   const known = new Set(problems.map((p) => p.field));
   for (const i of parsed.error.issues) {
     const field = `bike.${String(i.path[0] ?? '')}`;
-    if (!known.has(field)) problems.push({ field, message: spec[i.path[0] as keyof typeof spec] === undefined || spec[i.path[0] as keyof typeof spec] === '' ? 'Missing' : i.message });
+    if (!known.has(field))
+      problems.push({
+        field,
+        message: spec[i.path[0] as keyof typeof spec] === undefined || spec[i.path[0] as keyof typeof spec] === '' ? 'Missing' : i.message,
+      });
   }
   return null;
 }

@@ -102,7 +102,8 @@ export class ImportsService {
   private plan(actor: AuthUser, csv: string, mapping?: ImportMapping) {
     const { columns, rows } = parseCsv(csv);
     if (!columns.length) throw new DomainError('VALIDATION_FAILED', 'The file has no header row.', { issues: [{ path: 'csv', message: 'No header row' }] });
-    if (rows.length > IMPORT_MAX_ROWS) throw new DomainError('VALIDATION_FAILED', `At most ${IMPORT_MAX_ROWS} rows at a time.`, { issues: [{ path: 'csv', message: 'Too many rows' }] });
+    if (rows.length > IMPORT_MAX_ROWS)
+      throw new DomainError('VALIDATION_FAILED', `At most ${IMPORT_MAX_ROWS} rows at a time.`, { issues: [{ path: 'csv', message: 'Too many rows' }] });
     const map = mapping ?? suggestMapping(columns);
     const known = this.contactIndex(actor);
     const inFile = new Map<string, { line: number; name: string }>();
@@ -111,11 +112,7 @@ export class ImportsService {
       const keys = read.customer ? contactKeys(read.customer) : [];
       const existing = keys.map((k) => known.get(k)).find(Boolean);
       const earlier = keys.map((k) => inFile.get(k)).find(Boolean);
-      const match: PlannedRow['match'] = existing
-        ? { kind: 'existing', ...existing }
-        : earlier
-          ? { kind: 'earlier', ...earlier }
-          : { kind: 'new' };
+      const match: PlannedRow['match'] = existing ? { kind: 'existing', ...existing } : earlier ? { kind: 'earlier', ...earlier } : { kind: 'new' };
       if (match.kind === 'new' && read.customer && !read.problems.length) for (const k of keys) inFile.set(k, { line, name: read.customer.name });
       return { ...read, line, match };
     });

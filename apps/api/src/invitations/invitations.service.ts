@@ -41,7 +41,8 @@ export class InvitationsService {
   invite(actor: AuthUser, input: InviteRequest): InvitationDto {
     const email = input.email.trim().toLowerCase();
     if (this.users.emailTaken(email)) throw new DomainError('EMAIL_TAKEN', undefined, { field: 'email' });
-    if (this.repo.pendingFor(actor.shopId, email)) throw new DomainError('CONFLICT', 'This address already has an open invitation: resend it instead.', { field: 'email' });
+    if (this.repo.pendingFor(actor.shopId, email))
+      throw new DomainError('CONFLICT', 'This address already has an open invitation: resend it instead.', { field: 'email' });
     const token = newLinkToken();
     const now = this.clock.now();
     const row = this.repo.transaction((tx) => {
@@ -69,7 +70,11 @@ export class InvitationsService {
     const now = this.clock.now();
     const row = this.repo.transaction((tx) => {
       this.open(actor, id);
-      const inv = this.repo.update(actor.shopId, id, { tokenHash: hashLinkToken(token), sentAt: now, expiresAt: new Date(now.getTime() + INVITATION_DAYS * DAY_MS) });
+      const inv = this.repo.update(actor.shopId, id, {
+        tokenHash: hashLinkToken(token),
+        sentAt: now,
+        expiresAt: new Date(now.getTime() + INVITATION_DAYS * DAY_MS),
+      });
       this.send(actor, inv, token, tx);
       this.audit.record(actor, { action: 'invitation.resent', entityType: 'invitation', entityId: id, details: {} });
       return inv;
@@ -120,7 +125,10 @@ export class InvitationsService {
     const link = `${this.cfg.appOrigin}/join#${token}`;
     const expiresOn = formatShopDate(inv.expiresAt, defaultLocaleFor(shop.currency));
     const rendered = invitationMail({ shop, name: inv.name, roleLabel: ROLE_LABELS[inv.role], inviterName: actor.name, link, expiresOn });
-    this.mail.queue({ shopId: actor.shopId, jobId: null, kind: 'invitation', to: inv.email, ...rendered, attachments: [], createdBy: actor.id, secrets: [link] }, tx);
+    this.mail.queue(
+      { shopId: actor.shopId, jobId: null, kind: 'invitation', to: inv.email, ...rendered, attachments: [], createdBy: actor.id, secrets: [link] },
+      tx,
+    );
   }
 
   private toDto(r: InvitationRow): InvitationDto {

@@ -66,7 +66,19 @@ export class PasswordResetsService {
       const token = this.links.create({ shopId: user.shopId, userId: user.id }, 'password_reset', RESET_MINUTES * 60_000);
       const link = `${this.cfg.appOrigin}/reset-password#${token}`;
       const rendered = passwordResetMail({ shop, name: user.name, link, minutes: RESET_MINUTES, byManager: byManager?.name ?? null });
-      this.mail.queue({ shopId: user.shopId, jobId: null, kind: 'password_reset', to: user.email, ...rendered, attachments: [], createdBy: byManager?.id ?? null, secrets: [link] }, tx);
+      this.mail.queue(
+        {
+          shopId: user.shopId,
+          jobId: null,
+          kind: 'password_reset',
+          to: user.email,
+          ...rendered,
+          attachments: [],
+          createdBy: byManager?.id ?? null,
+          secrets: [link],
+        },
+        tx,
+      );
       if (byManager) this.audit.record(byManager, { action: 'user.reset_link_sent', entityType: 'user', entityId: user.id, details: {} });
     });
   }

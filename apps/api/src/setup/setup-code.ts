@@ -9,10 +9,7 @@ const ALPHABET = 'ABCDEFGHJKLMNPQRSTUVWXYZ23456789';
 export const newSetupCode = (): string =>
   Array.from({ length: 4 }, () => Array.from({ length: 4 }, () => ALPHABET[randomInt(ALPHABET.length)]).join('')).join('-');
 
-const digest = (code: string): Buffer =>
-  createHash('sha256')
-    .update(code.replace(/[\s-]/g, '').toUpperCase())
-    .digest();
+const digest = (code: string): Buffer => createHash('sha256').update(code.replace(/[\s-]/g, '').toUpperCase()).digest();
 
 /**
  * The one-time code that proves the person at the setup screen can read the server's output, so a

@@ -74,7 +74,11 @@ export class SetupService {
   }
 
   private passwordHash(input: SignupRequest): Promise<string> {
-    return this.users.hashNewPassword(input.manager.password, { userName: input.manager.name, email: input.manager.email, shopName: input.shop.name }, 'manager.password');
+    return this.users.hashNewPassword(
+      input.manager.password,
+      { userName: input.manager.name, email: input.manager.email, shopName: input.shop.name },
+      'manager.password',
+    );
   }
 
   private createShop(shop: NewShop, manager: SignupRequest['manager'], passwordHash: string, active: boolean): AuthUser {

@@ -10,7 +10,11 @@ export class RecoveryCodesRepository {
   /** Replaces a user's codes with a new set (a new enrolment makes the old codes worthless). */
   replace(shopId: number, userId: number, hashes: string[], now: Date): void {
     this.clear(shopId, userId);
-    if (hashes.length) this.db.insert(recoveryCodes).values(hashes.map((codeHash) => ({ shopId, userId, codeHash, createdAt: now }))).run();
+    if (hashes.length)
+      this.db
+        .insert(recoveryCodes)
+        .values(hashes.map((codeHash) => ({ shopId, userId, codeHash, createdAt: now })))
+        .run();
   }
 
   clear(shopId: number, userId: number): void {

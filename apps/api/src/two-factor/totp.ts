@@ -54,7 +54,4 @@ export function newRecoveryCodes(count = 10): string[] {
 }
 
 /** What the database keeps of a recovery code: the SHA-256 of its normalised form (no dash, lower case). */
-export const hashRecoveryCode = (code: string): string =>
-  createHash('sha256')
-    .update(code.replace(/[\s-]/g, '').toLowerCase())
-    .digest('hex');
+export const hashRecoveryCode = (code: string): string => createHash('sha256').update(code.replace(/[\s-]/g, '').toLowerCase()).digest('hex');

@@ -1,11 +1,6 @@
 import { Body, Controller, Get, HttpCode, Post, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import {
-  ConfirmTotpRequestSchema,
-  RequireTwoFactorRequestSchema,
-  type ConfirmTotpRequest,
-  type RequireTwoFactorRequest,
-} from '@benchproof/contracts';
+import { ConfirmTotpRequestSchema, RequireTwoFactorRequestSchema, type ConfirmTotpRequest, type RequireTwoFactorRequest } from '@benchproof/contracts';
 import { z } from 'zod';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';

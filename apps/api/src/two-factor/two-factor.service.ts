@@ -41,7 +41,8 @@ export class TwoFactorService {
 
   /** A new secret (not active until confirmed with a code); replaces an unfinished one. A confirmed one must be turned off first. */
   async start(user: AuthUser): Promise<TotpEnrolment> {
-    if (this.users.totpState(user.shopId, user.id).enabled) throw new DomainError('CONFLICT', 'Two-step sign-in is already on. Turn it off first to move it to another phone.');
+    if (this.users.totpState(user.shopId, user.id).enabled)
+      throw new DomainError('CONFLICT', 'Two-step sign-in is already on. Turn it off first to move it to another phone.');
     const secret = newTotpSecret();
     this.users.setTotp(user.shopId, user.id, sealSecret(this.cfg.jwtSecret, secret), false);
     const otpauthUrl = totpUri(secret, user.email, `BenchProof ${this.shops.settings(user.shopId).name}`);

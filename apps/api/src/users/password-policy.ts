@@ -38,6 +38,10 @@ export function personalWords(ctx: PasswordContext): string[] {
 export function assertStrongPassword(password: string, ctx: PasswordContext, field = 'password'): void {
   const result = checker.check(password, personalWords(ctx));
   if (result.score < MIN_PASSWORD_SCORE) {
-    throw new DomainError('WEAK_PASSWORD', undefined, { field, score: result.score, issues: [{ path: field, message: 'Too easy to guess: avoid common passwords and your own or the shop’s name.' }] });
+    throw new DomainError('WEAK_PASSWORD', undefined, {
+      field,
+      score: result.score,
+      issues: [{ path: field, message: 'Too easy to guess: avoid common passwords and your own or the shop’s name.' }],
+    });
   }
 }

@@ -51,7 +51,12 @@ describe('CSV import of customers and bikes', () => {
     // Same e-mail (other case) and same phone (other format) as line 2: matched, not a second customer.
     expect(byLine.get(6)).toMatchObject({ customer: { kind: 'existing', name: 'Della Marsh' }, problems: [] });
     expect(byLine.get(7)).toMatchObject({ customer: { kind: 'existing', name: 'Della Marsh' }, bikeLabel: null, problems: [] });
-    expect(byLine.get(8)?.problems.map((p) => p.field).sort()).toEqual(['bike.drivetrainSpeeds', 'bike.model']);
+    expect(
+      byLine
+        .get(8)
+        ?.problems.map((p) => p.field)
+        .sort(),
+    ).toEqual(['bike.drivetrainSpeeds', 'bike.model']);
     expect(preview.counts).toEqual({ rows: 7, valid: 3, withProblems: 4, newCustomers: 1, matchedCustomers: 2, bikes: 2 });
     expect(await customerCount(manager)).toBe(before);
   });
@@ -63,7 +68,11 @@ describe('CSV import of customers and bikes', () => {
     expect(await customerCount(manager)).toBe(before + 1);
     const found = (await manager.agent.get('/api/customers?q=Della').expect(200)).body as { items: Array<{ id: number; name: string }> };
     expect(found.items.map((c) => c.name)).toEqual(['Della Marsh']);
-    const bikes = (await manager.agent.get(`/api/customers/${found.items[0].id}/bikes`).expect(200)).body as Array<{ maker: string; frameMaterial: string; brakeType: string }>;
+    const bikes = (await manager.agent.get(`/api/customers/${found.items[0].id}/bikes`).expect(200)).body as Array<{
+      maker: string;
+      frameMaterial: string;
+      brakeType: string;
+    }>;
     expect(bikes.map((b) => [b.maker, b.frameMaterial, b.brakeType]).sort()).toEqual([
       ['Ridgeline', 'steel', 'rim'],
       ['Vantail', 'carbon', 'hydraulic_disc'],

@@ -3,7 +3,16 @@ import { SetupCode } from '../../src/setup';
 import { startTestApp, type TestApp } from '../test-app';
 import { linkToken, mailTo, newAgent, STRONG, withCsrf } from './accounts-helpers';
 
-const SHOP = { name: 'Northgate Cycle Works', address: '4 Mill Lane', phone: '+44 1632 960555', email: '', currency: 'GBP', units: 'metric', taxRateBp: 2000, labourRateMinor: 6000 };
+const SHOP = {
+  name: 'Northgate Cycle Works',
+  address: '4 Mill Lane',
+  phone: '+44 1632 960555',
+  email: '',
+  currency: 'GBP',
+  units: 'metric',
+  taxRateBp: 2000,
+  labourRateMinor: 6000,
+};
 const MANAGER = { name: 'Juno Abara', email: 'juno@northgate.test', password: STRONG };
 
 describe('first-run setup on an empty database (SEED_DEMO=false)', () => {
@@ -31,13 +40,20 @@ describe('first-run setup on an empty database (SEED_DEMO=false)', () => {
 
     const agent = newAgent(t);
     // The code is read with dashes and case ignored.
-    const made = await agent.post('/api/setup').send({ code: code!.toLowerCase().replace(/-/g, ' '), shop: SHOP, manager: MANAGER }).expect(201);
+    const made = await agent
+      .post('/api/setup')
+      .send({ code: code!.toLowerCase().replace(/-/g, ' '), shop: SHOP, manager: MANAGER })
+      .expect(201);
     expect(made.body).toMatchObject({ step: 'done', user: { email: MANAGER.email, role: 'manager', name: 'Juno Abara' } });
     withCsrf(agent, made.body);
     const settings = (await agent.get('/api/shop/settings').expect(200)).body;
     expect(settings).toMatchObject({ name: SHOP.name, currency: 'GBP', taxRateBp: 2000, labourRateMinor: 6000, requireTwoFactor: false });
 
-    await t.http().post('/api/setup').send({ code, shop: SHOP, manager: { ...MANAGER, email: 'other@northgate.test' } }).expect(404);
+    await t
+      .http()
+      .post('/api/setup')
+      .send({ code, shop: SHOP, manager: { ...MANAGER, email: 'other@northgate.test' } })
+      .expect(404);
     expect((await t.http().get('/api/setup').expect(200)).body.setupOpen).toBe(false);
     expect(t.app.get(SetupCode).current()).toBeNull();
     // The manager signs in again with the password they chose.

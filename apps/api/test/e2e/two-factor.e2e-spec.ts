@@ -33,7 +33,12 @@ describe('two-step sign-in (TOTP, RFC 6238)', () => {
     expect(started.qrSvg).toContain('<svg');
     secret = started.secret;
     expect((await manager.agent.post('/api/account/two-factor/confirm').send({ code: '000000' }).expect(401)).body.code).toBe('CODE_INVALID');
-    const confirmed = (await manager.agent.post('/api/account/two-factor/confirm').send({ code: codeNow(secret) }).expect(200)).body as RecoveryCodes;
+    const confirmed = (
+      await manager.agent
+        .post('/api/account/two-factor/confirm')
+        .send({ code: codeNow(secret) })
+        .expect(200)
+    ).body as RecoveryCodes;
     recovery = confirmed.recoveryCodes;
     expect(new Set(recovery).size).toBe(10);
     expect((await manager.agent.get('/api/account/two-factor').expect(200)).body).toEqual({ enabled: true, requiredByShop: false, recoveryCodesLeft: 10 });
@@ -72,7 +77,11 @@ describe('two-step sign-in (TOTP, RFC 6238)', () => {
   it('limits code attempts like passwords', async () => {
     const c = (await login(t, DEMO.manager).expect(200)).body.challenge as string;
     for (let i = 0; i < 5; i++) await t.http().post('/api/auth/login/code').send({ challenge: c, code: '999999' }).expect(401);
-    const limited = await t.http().post('/api/auth/login/code').send({ challenge: c, code: codeNow(secret, -30) }).expect(429);
+    const limited = await t
+      .http()
+      .post('/api/auth/login/code')
+      .send({ challenge: c, code: codeNow(secret, -30) })
+      .expect(429);
     expect(limited.body.code).toBe('RATE_LIMITED');
   });
 
@@ -93,14 +102,21 @@ describe('two-step sign-in (TOTP, RFC 6238)', () => {
     for (const r of routes) {
       const bearer = await t.http()[r.method](r.path).set('Authorization', `Bearer ${step.challenge}`).send({});
       const cookie = await t.http()[r.method](r.path).set('Cookie', `bp_session=${step.challenge}`).send({});
-      expect({ route: `${r.method} ${r.path}`, bearer: bearer.status, cookie: cookie.status }).toEqual({ route: `${r.method} ${r.path}`, bearer: 401, cookie: 401 });
+      expect({ route: `${r.method} ${r.path}`, bearer: bearer.status, cookie: cookie.status }).toEqual({
+        route: `${r.method} ${r.path}`,
+        bearer: 401,
+        cookie: 401,
+      });
     }
     // Nor does the code step accept an enrolment challenge.
     await t.http().post('/api/auth/login/code').send({ challenge: step.challenge, code: '123456' }).expect(401);
 
     const enrol = (await t.http().post('/api/auth/login/enrol').send({ challenge: step.challenge }).expect(200)).body as TotpEnrolment;
     const agent = newAgent(t);
-    const done = await agent.post('/api/auth/login/enrol/confirm').send({ challenge: step.challenge, code: codeNow(enrol.secret) }).expect(200);
+    const done = await agent
+      .post('/api/auth/login/enrol/confirm')
+      .send({ challenge: step.challenge, code: codeNow(enrol.secret) })
+      .expect(200);
     expect(done.body).toMatchObject({ step: 'done', user: { email: DEMO.desk }, recoveryCodes: expect.any(Array) });
     expect(done.body.recoveryCodes).toHaveLength(10);
     await agent.get('/api/jobs').expect(200);

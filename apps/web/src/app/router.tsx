@@ -72,6 +72,14 @@ const signedIn: RouteObject[] = [
     ),
   },
   {
+    path: 'customers/import',
+    loader: requireAction('customers.import'),
+    lazy: page(
+      inFrame((p) => p.customersImport),
+      (m) => m.ImportRoute,
+    ),
+  },
+  {
     path: 'customers/:customerId',
     lazy: page(
       inFrame((p) => p.customer),
@@ -121,12 +129,48 @@ const signedIn: RouteObject[] = [
 
 /** Pages reached from e-mailed links or before any account exists (features/auth). */
 const accountPages: RouteObject[] = [
-  { path: '/setup', lazy: page(() => import('./routes/accounts/setup.route'), (m) => m.SetupRoute) },
-  { path: '/signup', lazy: page(() => import('./routes/accounts/setup.route'), (m) => m.SignupRoute) },
-  { path: '/signup/confirm', lazy: page(() => import('./routes/accounts/links.route'), (m) => m.ConfirmSignupRoute) },
-  { path: '/join', lazy: page(() => import('./routes/accounts/links.route'), (m) => m.JoinRoute) },
-  { path: '/reset-password', lazy: page(() => import('./routes/accounts/links.route'), (m) => m.ResetPasswordRoute) },
-  { path: '/forgot-password', lazy: page(() => import('./routes/accounts/links.route'), (m) => m.ForgotPasswordRoute) },
+  {
+    path: '/setup',
+    lazy: page(
+      () => import('./routes/accounts/setup.route'),
+      (m) => m.SetupRoute,
+    ),
+  },
+  {
+    path: '/signup',
+    lazy: page(
+      () => import('./routes/accounts/setup.route'),
+      (m) => m.SignupRoute,
+    ),
+  },
+  {
+    path: '/signup/confirm',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.ConfirmSignupRoute,
+    ),
+  },
+  {
+    path: '/join',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.JoinRoute,
+    ),
+  },
+  {
+    path: '/reset-password',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.ResetPasswordRoute,
+    ),
+  },
+  {
+    path: '/forgot-password',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.ForgotPasswordRoute,
+    ),
+  },
 ];
 
 export const routes: RouteObject[] = [

@@ -21,3 +21,5 @@ export {
   useDisableTwoFactor,
   useRequireTwoFactor,
 } from './api/accounts';
+export { TwoFactorCard } from './components/two-factor-card';
+export { RequireTwoFactorCard } from './components/require-two-factor';

@@ -3,7 +3,15 @@ import { Alert, Anchor, Button, Loader, Text } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { Link, useNavigate } from 'react-router';
-import { ChoosePasswordForm, ForgotPasswordForm, invitationPreviewQuery, tokenFromHash, useAcceptInvitation, useConfirmSignup, useResetPassword } from '../../../features/auth';
+import {
+  ChoosePasswordForm,
+  ForgotPasswordForm,
+  invitationPreviewQuery,
+  tokenFromHash,
+  useAcceptInvitation,
+  useConfirmSignup,
+  useResetPassword,
+} from '../../../features/auth';
 import { PublicCard } from './public-card';
 
 const BackToSignIn = () => (

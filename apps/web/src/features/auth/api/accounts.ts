@@ -34,7 +34,8 @@ export const useAcceptInvitation = () => useSignedInStep<AcceptInvitationRequest
 export const useResetPassword = () => useSignedInStep<ResetPasswordRequest>('/password-resets/use');
 export const useConfirmSignup = () => useSignedInStep<{ token: string }>('/signup/confirm');
 
-export const useSignUp = () => useMutation({ mutationFn: (body: SignupRequest) => api<{ message: string }>('/signup', { method: 'POST', body, quietAuth: true }) });
+export const useSignUp = () =>
+  useMutation({ mutationFn: (body: SignupRequest) => api<{ message: string }>('/signup', { method: 'POST', body, quietAuth: true }) });
 
 export const useForgotPassword = () =>
   useMutation({ mutationFn: (email: string) => api<{ message: string }>('/password-resets', { method: 'POST', body: { email }, quietAuth: true }) });

@@ -1,7 +1,17 @@
 import { TextInput } from '@mantine/core';
 
 /** The six digits from the authenticator app (or a recovery code): big, numeric keyboard, filled by the phone's one-time-code autofill. */
-export function CodeInput({ value, onChange, error, label = 'Code from your authenticator app' }: { value: string; onChange: (v: string) => void; error?: string | null; label?: string }) {
+export function CodeInput({
+  value,
+  onChange,
+  error,
+  label = 'Code from your authenticator app',
+}: {
+  value: string;
+  onChange: (v: string) => void;
+  error?: string | null;
+  label?: string;
+}) {
   return (
     <TextInput
       label={label}

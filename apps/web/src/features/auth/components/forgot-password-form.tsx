@@ -25,7 +25,15 @@ export function ForgotPasswordForm() {
             {ask.error.message}
           </Alert>
         )}
-        <TextInput label="Your e-mail" type="email" inputMode="email" autoComplete="username" size="lg" value={email} onChange={(e) => setEmail(e.currentTarget.value)} />
+        <TextInput
+          label="Your e-mail"
+          type="email"
+          inputMode="email"
+          autoComplete="username"
+          size="lg"
+          value={email}
+          onChange={(e) => setEmail(e.currentTarget.value)}
+        />
         <Button type="submit" size="lg" leftSection={<IconMailForward />} loading={ask.isPending}>
           Send me a link
         </Button>

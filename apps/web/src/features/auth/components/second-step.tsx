@@ -14,23 +14,21 @@ type Challenge = Extract<SignInStep, { step: 'code' | 'enrol' }>;
  * After the password: the code from the app, or (the shop requires it, not set up yet) setting the app up
  * with its first code. No session exists until this step succeeds.
  */
-export function SecondStep({ challenge, onSignedIn }: { challenge: Challenge; onSignedIn: () => void }) {
+/** Sends the code for the challenge; a set-up answer also carries the recovery codes to show once. */
+function useSecondStep(challenge: Challenge, onSignedIn: () => void) {
   const qc = useQueryClient();
-  const [code, setCode] = useState('');
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
-  const [enrolment, setEnrolment] = useState<TotpEnrolment | null>(null);
   const [recovery, setRecovery] = useState<string[] | null>(null);
-  useEffect(() => {
-    if (challenge.step === 'enrol') void api<TotpEnrolment>('/auth/login/enrol', { method: 'POST', body: { challenge: challenge.challenge }, quietAuth: true }).then(setEnrolment, (e: unknown) => setError(messageOf(e)));
-  }, [challenge]);
-
-  const submit = async (e: FormEvent) => {
-    e.preventDefault();
+  const send = async (code: string) => {
     setBusy(true);
     try {
       const path = challenge.step === 'code' ? '/auth/login/code' : '/auth/login/enrol/confirm';
-      const res = await api<LoginResponse & { recoveryCodes?: string[] }>(path, { method: 'POST', body: { challenge: challenge.challenge, code }, quietAuth: true });
+      const res = await api<LoginResponse & { recoveryCodes?: string[] }>(path, {
+        method: 'POST',
+        body: { challenge: challenge.challenge, code },
+        quietAuth: true,
+      });
       setCsrfToken(res.csrfToken);
       qc.clear();
       qc.setQueryData(['session'], res.user);
@@ -42,10 +40,28 @@ export function SecondStep({ challenge, onSignedIn }: { challenge: Challenge; on
       setBusy(false);
     }
   };
+  return { send, error, setError, busy, recovery };
+}
+
+export function SecondStep({ challenge, onSignedIn }: { challenge: Challenge; onSignedIn: () => void }) {
+  const [code, setCode] = useState('');
+  const [enrolment, setEnrolment] = useState<TotpEnrolment | null>(null);
+  const { send, error, setError, busy, recovery } = useSecondStep(challenge, onSignedIn);
+  useEffect(() => {
+    if (challenge.step !== 'enrol') return;
+    void api<TotpEnrolment>('/auth/login/enrol', { method: 'POST', body: { challenge: challenge.challenge }, quietAuth: true }).then(
+      setEnrolment,
+      (e: unknown) => setError(messageOf(e)),
+    );
+  }, [challenge, setError]);
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    void send(code);
+  };
 
   if (recovery) return <RecoveryCodesCard codes={recovery} onDone={onSignedIn} />;
   return (
-    <form onSubmit={(e) => void submit(e)} noValidate>
+    <form onSubmit={submit} noValidate>
       <Stack>
         {challenge.step === 'enrol' && (
           <Alert color="brass" variant="light" icon={<IconShieldLock />}>

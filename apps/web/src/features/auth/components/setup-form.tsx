@@ -22,7 +22,20 @@ export interface SetupValues {
   password: string;
 }
 
-const EMPTY: SetupValues = { code: '', shopName: '', address: '', phone: '', shopEmail: '', currency: 'GBP', units: 'metric', taxRatePct: 20, labourRate: 60, managerName: '', managerEmail: '', password: '' };
+const EMPTY: SetupValues = {
+  code: '',
+  shopName: '',
+  address: '',
+  phone: '',
+  shopEmail: '',
+  currency: 'GBP',
+  units: 'metric',
+  taxRatePct: 20,
+  labourRate: 60,
+  managerName: '',
+  managerEmail: '',
+  password: '',
+};
 
 const CURRENCIES = ['GBP', 'EUR', 'USD', 'CAD', 'AUD', 'NZD', 'CHF', 'SEK', 'NOK', 'DKK', 'PLN', 'CZK', 'JPY'];
 
@@ -70,7 +83,14 @@ function WorkshopFields({ form }: { form: Form }) {
           <NumberInput label="Tax rate (%)" size="lg" min={0} max={100} decimalScale={2} {...form.getInputProps('taxRatePct')} />
           <NumberInput label="Labour rate per hour" size="lg" min={0} decimalScale={2} {...form.getInputProps('labourRate')} />
         </Group>
-        <SegmentedControl size="md" data={[{ value: 'metric', label: 'Metric (mm, N·m)' }, { value: 'imperial', label: 'Imperial (in, in·lbf)' }]} {...form.getInputProps('units')} />
+        <SegmentedControl
+          size="md"
+          data={[
+            { value: 'metric', label: 'Metric (mm, N·m)' },
+            { value: 'imperial', label: 'Imperial (in, in·lbf)' },
+          ]}
+          {...form.getInputProps('units')}
+        />
       </Stack>
     </Fieldset>
   );
@@ -106,7 +126,9 @@ export function SetupForm({ mode, onDone }: { mode: 'setup' | 'signup'; onDone: 
     else if (e instanceof ApiError && e.code === 'EMAIL_TAKEN') form.setFieldError('managerEmail', e.message);
     else showServerFieldErrors(form, e, FIELDS);
   };
-  const submit = form.onSubmit((v) => (mode === 'setup' ? setUp.mutate(toRequest(v), { onSuccess: onDone, onError }) : signUp.mutate(toRequest(v), { onSuccess: onDone, onError })));
+  const submit = form.onSubmit((v) =>
+    mode === 'setup' ? setUp.mutate(toRequest(v), { onSuccess: onDone, onError }) : signUp.mutate(toRequest(v), { onSuccess: onDone, onError }),
+  );
   const failure = error instanceof ApiError && ['WEAK_PASSWORD', 'SETUP_CODE_INVALID', 'EMAIL_TAKEN'].includes(error.code) ? null : formFailure(error);
   return (
     <form onSubmit={submit} noValidate>
@@ -117,7 +139,13 @@ export function SetupForm({ mode, onDone }: { mode: 'setup' | 'signup'; onDone: 
           </Alert>
         )}
         {mode === 'setup' && (
-          <TextInput label="Setup code" description="Printed in the server’s output when it started (e.g. ABCD-EFGH-JKLM-NPQR)." size="lg" autoComplete="off" {...form.getInputProps('code')} />
+          <TextInput
+            label="Setup code"
+            description="Printed in the server’s output when it started (e.g. ABCD-EFGH-JKLM-NPQR)."
+            size="lg"
+            autoComplete="off"
+            {...form.getInputProps('code')}
+          />
         )}
         <WorkshopFields form={form} />
         <ManagerFields form={form} />
