@@ -1,9 +1,9 @@
-import { Inject, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { IMPORT_MAX_ROWS, type ImportMapping, type ImportPreview, type ImportRow, type ImportSummary } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
-import { DB, type Db } from '../core/db';
+import { UnitOfWork } from '../core/db';
 import { DomainError } from '../core/http';
 import { CustomersService } from '../customers';
 import { csvCell, parseCsv, phoneKey, readRow, suggestMapping, type ReadRow } from './import-rows';
@@ -23,9 +23,9 @@ interface PlannedRow extends ReadRow {
 export class ImportsService {
   constructor(
     private readonly customers: CustomersService,
+    private readonly uow: UnitOfWork,
     private readonly bikes: BikesService,
     private readonly audit: AuditService,
-    @Inject(DB) private readonly db: Db,
   ) {}
 
   preview(actor: AuthUser, csv: string, mapping?: ImportMapping): ImportPreview {
@@ -57,7 +57,7 @@ export class ImportsService {
   commit(actor: AuthUser, csv: string, mapping?: ImportMapping): ImportSummary {
     const { planned } = this.plan(actor, csv, mapping);
     const summary: ImportSummary = { customersCreated: 0, customersMatched: 0, bikesCreated: 0, rowsSkipped: 0, skippedLines: [] };
-    this.db.transaction(() => {
+    this.uow.run(() => {
       const madeAt = new Map<number, number>(); // line → customer id made there
       for (const row of planned) {
         if (row.problems.length || !row.customer) {

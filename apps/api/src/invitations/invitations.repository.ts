@@ -1,7 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq, isNull } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
-import type { DbTx } from '../infra/tasks';
 import { invitations } from '../db/schema';
 
 export type InvitationRow = typeof invitations.$inferSelect;
@@ -39,7 +38,7 @@ export class InvitationsRepository {
   }
 
   insert(row: NewInvitationRow): InvitationRow {
-    return this.db.insert(invitations).values(row).returning().get();
+    return this.db.insert(invitations).values(row).returning().all()[0];
   }
 
   update(shopId: number, id: number, patch: Partial<InvitationRow>): InvitationRow {
@@ -48,7 +47,7 @@ export class InvitationsRepository {
       .set(patch)
       .where(and(eq(invitations.shopId, shopId), eq(invitations.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 
   /** Marks it accepted only if it is still open: of two uses of one link, one wins. */
@@ -59,9 +58,5 @@ export class InvitationsRepository {
       .where(and(eq(invitations.id, id), isNull(invitations.acceptedAt), isNull(invitations.withdrawnAt)))
       .run();
     return res.changes === 1;
-  }
-
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.db.transaction((tx) => fn(tx));
   }
 }

@@ -4,9 +4,10 @@ import { AuditService } from '../audit';
 import { AuthService, type SignInOutcome } from '../auth';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { hashLinkToken, newLinkToken, type AuthUser } from '../core/auth';
+import { UnitOfWork } from '../core/db';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
-import type { DbTx } from '../infra/tasks';
+import { CLOCK, type Clock } from '../core/clock';
+import type { DbTx } from '../core/db';
 import { invitationMail, MailService } from '../mail';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
@@ -25,6 +26,7 @@ const DAY_MS = 24 * 3600 * 1000;
 export class InvitationsService {
   constructor(
     private readonly repo: InvitationsRepository,
+    private readonly uow: UnitOfWork,
     private readonly users: UsersService,
     private readonly shops: ShopsService,
     private readonly mail: MailService,
@@ -45,7 +47,7 @@ export class InvitationsService {
       throw new DomainError('CONFLICT', 'This address already has an open invitation: resend it instead.', { field: 'email' });
     const token = newLinkToken();
     const now = this.clock.now();
-    const row = this.repo.transaction((tx) => {
+    const row = this.uow.run((tx) => {
       const inv = this.repo.insert({
         shopId: actor.shopId,
         email,
@@ -68,7 +70,7 @@ export class InvitationsService {
   resend(actor: AuthUser, id: number): InvitationDto {
     const token = newLinkToken();
     const now = this.clock.now();
-    const row = this.repo.transaction((tx) => {
+    const row = this.uow.run((tx) => {
       this.open(actor, id);
       const inv = this.repo.update(actor.shopId, id, {
         tokenHash: hashLinkToken(token),
@@ -98,7 +100,7 @@ export class InvitationsService {
   async accept(token: string, password: string): Promise<SignInOutcome> {
     const inv = this.usable(token);
     const passwordHash = await this.users.hashNewPassword(password, { userName: inv.name, email: inv.email, shopName: this.shops.settings(inv.shopId).name });
-    const user = this.repo.transaction(() => {
+    const user = this.uow.run(() => {
       const made = this.users.insertAccount({ shopId: inv.shopId, email: inv.email, name: inv.name, role: inv.role, passwordHash, active: true });
       if (!this.repo.accept(inv.id, made.id, this.clock.now())) throw new DomainError('LINK_INVALID');
       this.audit.record(made, { action: 'invitation.accepted', entityType: 'invitation', entityId: inv.id, details: { role: inv.role } });

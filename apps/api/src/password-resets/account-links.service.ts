@@ -1,8 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { hashLinkToken, newLinkToken } from '../core/auth';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
-import type { DbTx } from '../infra/tasks';
+import { CLOCK, type Clock } from '../core/clock';
 import type { AccountTokenPurpose } from '../db/schema';
 import { AccountTokensRepository } from './account-tokens.repository';
 
@@ -44,9 +43,5 @@ export class AccountLinks {
   /** Uses a checked link; throws LINK_INVALID when another request used it first. */
   use(id: number): void {
     if (!this.repo.use(id, this.clock.now())) throw new DomainError('LINK_INVALID');
-  }
-
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.repo.transaction(fn);
   }
 }

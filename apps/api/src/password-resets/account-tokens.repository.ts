@@ -1,7 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, eq, isNull } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
-import type { DbTx } from '../infra/tasks';
 import { accountTokens, type AccountTokenPurpose } from '../db/schema';
 
 export type AccountTokenRow = typeof accountTokens.$inferSelect;
@@ -12,7 +11,7 @@ export class AccountTokensRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
   insert(row: typeof accountTokens.$inferInsert): AccountTokenRow {
-    return this.db.insert(accountTokens).values(row).returning().get();
+    return this.db.insert(accountTokens).values(row).returning().all()[0];
   }
 
   /** Looked up by hash before the shop is known: the hash is the scope. */
@@ -42,9 +41,5 @@ export class AccountTokensRepository {
       .set({ usedAt: now })
       .where(and(eq(accountTokens.shopId, shopId), eq(accountTokens.userId, userId), eq(accountTokens.purpose, purpose), isNull(accountTokens.usedAt)))
       .run();
-  }
-
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.db.transaction((tx) => fn(tx));
   }
 }

@@ -3,6 +3,7 @@ import { AuditService } from '../audit';
 import { AuthService, type SignInOutcome } from '../auth';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
+import { UnitOfWork } from '../core/db';
 import { DomainError, notFound } from '../core/http';
 import { MailService, passwordResetMail } from '../mail';
 import { ShopsService } from '../shops';
@@ -22,6 +23,7 @@ export const RESET_MINUTES = 30;
 export class PasswordResetsService {
   constructor(
     private readonly links: AccountLinks,
+    private readonly uow: UnitOfWork,
     private readonly users: UsersService,
     private readonly shops: ShopsService,
     private readonly mail: MailService,
@@ -52,7 +54,7 @@ export class PasswordResetsService {
     const user = this.users.activeIdentity(row.shopId, row.userId);
     if (!user) throw new DomainError('LINK_INVALID');
     const hash = await this.users.hashNewPassword(password, { userName: user.name, email: user.email, shopName: this.shops.settings(user.shopId).name });
-    this.links.transaction(() => {
+    this.uow.run(() => {
       this.links.use(row.id);
       this.users.replacePassword(user.shopId, user.id, hash);
     });
@@ -62,7 +64,7 @@ export class PasswordResetsService {
 
   private issue(user: AuthUser, byManager: AuthUser | null): void {
     const shop = this.shops.settings(user.shopId);
-    this.links.transaction((tx) => {
+    this.uow.run((tx) => {
       const token = this.links.create({ shopId: user.shopId, userId: user.id }, 'password_reset', RESET_MINUTES * 60_000);
       const link = `${this.cfg.appOrigin}/reset-password#${token}`;
       const rendered = passwordResetMail({ shop, name: user.name, link, minutes: RESET_MINUTES, byManager: byManager?.name ?? null });

@@ -4,6 +4,7 @@ import { AuditService } from '../audit';
 import { AuthService, type SignInOutcome } from '../auth';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
+import { UnitOfWork } from '../core/db';
 import { DomainError } from '../core/http';
 import { MailService, signupConfirmMail } from '../mail';
 import { AccountLinks } from '../password-resets';
@@ -19,6 +20,7 @@ export const SIGNUP_LINK_HOURS = 48;
 export class SetupService {
   constructor(
     private readonly code: SetupCode,
+    private readonly uow: UnitOfWork,
     private readonly shops: ShopsService,
     private readonly users: UsersService,
     private readonly auth: AuthService,
@@ -37,7 +39,7 @@ export class SetupService {
     if (this.shops.anyShop()) throw new DomainError('NOT_FOUND');
     if (!this.code.matches(input.code)) throw new DomainError('SETUP_CODE_INVALID', undefined, { field: 'code' });
     const hash = await this.passwordHash(input);
-    const manager = this.links.transaction(() => {
+    const manager = this.uow.run(() => {
       // Checked again inside the write: two setups racing cannot both make a first shop.
       if (this.shops.anyShop()) throw new DomainError('NOT_FOUND');
       return this.createShop(input.shop, input.manager, hash, true);
@@ -51,7 +53,7 @@ export class SetupService {
     if (this.cfg.SIGNUP !== 'open') throw new DomainError('NOT_FOUND');
     if (this.users.emailTaken(input.manager.email)) return; // same answer as success: nothing reveals which addresses have accounts
     const hash = await this.passwordHash(input);
-    this.links.transaction((tx) => {
+    this.uow.run((tx) => {
       const manager = this.createShop(input.shop, input.manager, hash, false);
       const token = this.links.create({ shopId: manager.shopId, userId: manager.id }, 'signup_verify', SIGNUP_LINK_HOURS * 3600_000);
       const link = `${this.cfg.appOrigin}/signup/confirm#${token}`;
@@ -63,7 +65,7 @@ export class SetupService {
   /** The confirmation link: the manager's account goes live and signs in. */
   async confirm(token: string): Promise<SignInOutcome> {
     const link = this.links.check('signup_verify', token);
-    this.links.transaction(() => {
+    this.uow.run(() => {
       this.links.use(link.id);
       this.users.activate(link.shopId, link.userId);
     });

@@ -43,8 +43,4 @@ export class RecoveryCodesRepository {
         .get()?.n ?? 0
     );
   }
-
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
-  }
 }

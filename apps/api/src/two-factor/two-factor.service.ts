@@ -4,8 +4,9 @@ import QRCode from 'qrcode';
 import { AuditService } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { SessionStore, type AuthUser } from '../core/auth';
+import { UnitOfWork } from '../core/db';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import { RecoveryCodesRepository } from './recovery-codes.repository';
@@ -22,6 +23,7 @@ export interface SecondFactorNeed {
 export class TwoFactorService {
   constructor(
     private readonly users: UsersService,
+    private readonly uow: UnitOfWork,
     private readonly shops: ShopsService,
     private readonly codes: RecoveryCodesRepository,
     private readonly sessions: SessionStore,
@@ -57,7 +59,7 @@ export class TwoFactorService {
     const step = totpStep(openSecret(this.cfg.jwtSecret, state.sealedSecret), code, this.epochSeconds());
     if (step === null) throw new DomainError('CODE_INVALID', undefined, { field: 'code' });
     const recoveryCodes = newRecoveryCodes();
-    this.codes.transaction(() => {
+    this.uow.run(() => {
       this.users.setTotp(user.shopId, user.id, state.sealedSecret, true);
       this.users.takeTotpStep(user.shopId, user.id, step);
       this.codes.replace(user.shopId, user.id, recoveryCodes.map(hashRecoveryCode), this.clock.now());
@@ -83,7 +85,7 @@ export class TwoFactorService {
   async disable(user: AuthUser, password: string): Promise<void> {
     if (this.shops.requiresTwoFactor(user.shopId)) throw new DomainError('TWO_FACTOR_REQUIRED');
     if (!(await this.users.passwordMatches(user, password))) throw new DomainError('INVALID_CREDENTIALS', 'The password is not right.', { field: 'password' });
-    this.codes.transaction(() => {
+    this.uow.run(() => {
       this.users.setTotp(user.shopId, user.id, null, false);
       this.codes.clear(user.shopId, user.id);
     });
@@ -100,7 +102,7 @@ export class TwoFactorService {
       throw new DomainError('CONFLICT', 'Turn on two-step sign-in for your own account first.');
     }
     const without = required ? this.users.withoutTwoFactor(manager.shopId) : [];
-    this.codes.transaction(() => {
+    this.uow.run(() => {
       this.shops.setRequireTwoFactor(manager, required);
       for (const id of without) this.sessions.endAllOf(manager.shopId, id);
     });

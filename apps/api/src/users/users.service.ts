@@ -3,11 +3,12 @@ import type { UpdateUserRequest, UserDto } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import { SessionStore, type AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { hashPassword, verifyPassword } from './password';
 import { assertStrongPassword, type PasswordContext } from './password-policy';
 import { identityOf, type NewAccount, type TotpState, totpStateOf } from './users-accounts';
 import { type UserRow, UsersRepository } from './users.repository';
+import { UnitOfWork } from '../core/db';
 
 const toDto = (u: UserRow): UserDto => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, createdAt: u.createdAt.toISOString() });
 
@@ -15,6 +16,7 @@ const toDto = (u: UserRow): UserDto => ({ id: u.id, name: u.name, email: u.email
 export class UsersService {
   constructor(
     private readonly repo: UsersRepository,
+    private readonly uow: UnitOfWork,
     private readonly audit: AuditService,
     private readonly sessions: SessionStore,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -22,6 +24,12 @@ export class UsersService {
 
   list(actor: AuthUser): UserDto[] {
     return this.repo.listByShop(actor.shopId).map(toDto);
+  }
+
+  /** An active staff member as a caller, for work done later on their behalf (background tasks carry only the id). */
+  identity(shopId: number, id: number): AuthUser | null {
+    const u = this.repo.findInShop(shopId, id);
+    return u?.active ? { id: u.id, shopId: u.shopId, role: u.role, email: u.email, name: u.name } : null;
   }
 
   /** Staff of the caller's shop, for pickers such as the assigned mechanic. */
@@ -103,7 +111,7 @@ export class UsersService {
   }
 
   update(actor: AuthUser, id: number, patch: UpdateUserRequest): UserDto {
-    const updated = this.repo.transaction(() => {
+    const updated = this.uow.run(() => {
       const user = this.repo.findInShop(actor.shopId, id);
       if (!user) throw notFound('User');
       const losesManager = user.role === 'manager' && user.active && (patch.active === false || (patch.role && patch.role !== 'manager'));
@@ -111,9 +119,9 @@ export class UsersService {
       const row = this.repo.update(actor.shopId, id, patch);
       // A deactivated user's tokens must not come back to life when the account is re-activated.
       if (patch.active === false) this.sessions.endAllOf(actor.shopId, id);
+      this.audit.record(actor, { action: 'user.updated', entityType: 'user', entityId: id, details: { ...patch } });
       return row;
     });
-    this.audit.record(actor, { action: 'user.updated', entityType: 'user', entityId: id, details: { ...patch } });
     return toDto(updated);
   }
 
@@ -123,9 +131,15 @@ export class UsersService {
     if (!user || !(await verifyPassword(user.passwordHash, currentPassword))) {
       throw new DomainError('INVALID_CREDENTIALS', 'The current password is not right.', { field: 'currentPassword' });
     }
-    const hash = await this.hashNewPassword(newPassword, { userName: user.name, email: user.email, shopName: this.shopName(actor.shopId) }, 'newPassword');
-    this.replacePassword(actor.shopId, actor.id, hash);
-    this.audit.record(actor, { action: 'user.password_changed', entityType: 'user', entityId: actor.id, details: {} });
+    const passwordHash = await this.hashNewPassword(
+      newPassword,
+      { userName: user.name, email: user.email, shopName: this.shopName(actor.shopId) },
+      'newPassword',
+    );
+    this.uow.run(() => {
+      this.replacePassword(actor.shopId, actor.id, passwordHash);
+      this.audit.record(actor, { action: 'user.password_changed', entityType: 'user', entityId: actor.id, details: {} });
+    });
   }
 
   /**

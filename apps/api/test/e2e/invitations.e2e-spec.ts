@@ -1,6 +1,6 @@
 import type { InvitationDto } from '@benchproof/contracts';
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
-import { CLOCK, type Clock } from '../../src/infra/clock';
+import { CLOCK, type Clock } from '../../src/core/clock';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 import { linkToken, mailTo, newAgent, STRONG } from './accounts-helpers';
 

@@ -1,5 +1,5 @@
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
-import { CLOCK, type Clock } from '../../src/infra/clock';
+import { CLOCK, type Clock } from '../../src/core/clock';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
 import { linkToken, mailTo, newAgent, STRONG, STRONG_2 } from './accounts-helpers';
 
