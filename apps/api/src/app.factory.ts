@@ -10,6 +10,7 @@ import { resolve } from 'node:path';
 import helmet from 'helmet';
 import { Logger as PinoLogger } from 'nestjs-pino';
 import { json, type NextFunction, type Request, type Response } from 'express';
+import { annotationSaveBody } from './annotations';
 import { AppModule } from './app.module';
 import type { AppConfig } from './config';
 import { ErrorFilter } from './core/http';
@@ -37,6 +38,7 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   // Wrapped: Nest skips its own JSON parser when it finds a middleware named 'jsonParser' anywhere in the stack.
   const importJson = json({ limit: '6mb' });
   app.use('/api/imports', (req: Request, res: Response, next: NextFunction) => importJson(req, res, next));
+  app.use(annotationSaveBody());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());
   app.enableShutdownHooks();

@@ -56,6 +56,11 @@ export const ERROR_CODES = {
   TWO_FACTOR_REQUIRED: { status: 409, message: 'This shop requires two-step sign-in for every account, so it cannot be turned off.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
+  STORAGE_FULL: {
+    status: 507,
+    message:
+      'The server’s disk is full, so this was not saved. Keep the photo on this device and tell the shop manager: space must be freed before anything more can be saved.',
+  },
   NOT_READY: { status: 503, message: 'The server is starting or cannot reach its database or task runner.' },
 } as const satisfies Record<string, { status: number; message: string }>;
 

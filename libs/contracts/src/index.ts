@@ -28,3 +28,4 @@ export * from './showcase';
 export * from './accounts';
 export * from './shop-locale';
 export * from './imports';
+export * from './disk-space';

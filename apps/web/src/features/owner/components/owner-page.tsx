@@ -1,6 +1,6 @@
 import type { OwnerFinding } from '@benchproof/contracts';
-import { formatMoney } from '@benchproof/domain';
-import { Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
+import { formatMoney, TERMINAL_STATUSES } from '@benchproof/domain';
+import { Alert, Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
 import { Suspense, useState } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useOwnerPage } from '../api/owner-page';
@@ -35,10 +35,12 @@ function FindingsToDecide({
   findings,
   choices,
   onChoose,
+  closed,
 }: {
   findings: OwnerFinding[];
   choices: Record<number, Choice>;
   onChoose: (recId: number, c: Choice) => void;
+  closed: boolean;
 }) {
   const sorted = [...findings].sort((a, b) => Number(b.doNotRide) - Number(a.doNotRide));
   return (
@@ -52,6 +54,7 @@ function FindingsToDecide({
           finding={f}
           choice={f.recommendation ? choices[f.recommendation.id] : undefined}
           onChoose={(ch) => f.recommendation && onChoose(f.recommendation.id, ch)}
+          closed={closed}
         />
       ))}
     </Stack>
@@ -114,7 +117,24 @@ function Decisions(props: {
   );
 }
 
+/** Said at the top of a closed job's page: still readable, no more answers here. */
+function ClosedNotice({ status }: { status: string }) {
+  return (
+    <Alert color="gray" title="This job is closed" role="status" data-testid="job-closed">
+      {status === 'cancelled' ? 'The shop cancelled this job.' : 'Your bike has been handed back.'} You can still read the findings, see the photos and download
+      the report. Items can no longer be approved or declined here: call the shop if something still needs doing.
+    </Alert>
+  );
+}
+
+const ThanksNote = () => (
+  <Text fw={600} c="teal" role="status">
+    Thank you — the shop has your answers.
+  </Text>
+);
+
 function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPageData; refetch: () => void }) {
+  const closed = (TERMINAL_STATUSES as readonly string[]).includes(page.job.status);
   const c = useChoices(page.findings);
   const [confirming, setConfirming] = useState(false);
   const [everConfirmed, setEverConfirmed] = useState(false);
@@ -126,12 +146,9 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
       <BrandBar page={page} />
       <Stack gap="lg">
         <BikeAndJob page={page} />
-        {sent && (
-          <Text fw={600} c="teal" role="status">
-            Thank you — the shop has your answers.
-          </Text>
-        )}
-        {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} />}
+        {closed && <ClosedNotice status={page.job.status} />}
+        {sent && <ThanksNote />}
+        {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} closed={closed} />}
         <Measurements page={page} />
         {page.pairs.length > 0 && (
           <Deferred>
@@ -143,7 +160,7 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
         </Deferred>
         <ReportAndContact page={page} />
       </Stack>
-      {c.pending.length > 0 && (
+      {c.pending.length > 0 && !closed && (
         <AnswerBar
           answered={c.chosen.length}
           pending={c.pending.length}
