@@ -31,6 +31,11 @@ import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
+import { InvitationsModule } from './invitations';
+import { PasswordResetsModule } from './password-resets';
+import { SetupModule } from './setup';
+import { ImportsModule } from './imports';
+import { TwoFactorModule } from './two-factor';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
@@ -56,6 +61,11 @@ const FEATURES = [
   ShowcaseModule,
   BackupsModule,
   DataExportModule,
+  TwoFactorModule,
+  InvitationsModule,
+  PasswordResetsModule,
+  SetupModule,
+  ImportsModule,
 ];
 
 @Module({})

@@ -41,6 +41,8 @@ export const ACCESS_POLICY = {
   'session.view': staff(...ALL_STAFF),
   /** Every signed-in staff member may change their own password. */
   'account.change_password': staff(...ALL_STAFF),
+  /** Every signed-in staff member may set up or turn off their own two-step sign-in. */
+  'account.two_factor': staff(...ALL_STAFF),
   'users.view': staff(...ALL_STAFF),
   'users.manage': staff('manager'),
   'shop.view': staff(...ALL_STAFF),
@@ -64,6 +66,8 @@ export const ACCESS_POLICY = {
   'customers.export': staff('manager', 'desk'),
   /** Erase a customer's personal data on request (audited, cannot be undone). */
   'customers.erase': staff('manager'),
+  /** Bring customers and bikes in from a CSV file, many at once. */
+  'customers.import': staff('manager'),
   'bikes.view': staff(...ALL_STAFF),
   'bikes.edit': staff('manager', 'desk'),
   'jobs.view': staff(...ALL_STAFF),

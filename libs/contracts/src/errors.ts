@@ -48,6 +48,12 @@ export const ERROR_CODES = {
   SHOWCASE_DESK_OFF: { status: 403, message: 'This shop has not opened the showcase to the front desk. A manager can allow it in Shop settings.' },
   CONSENT_WORDING_CHANGED: { status: 409, message: 'The consent wording has changed. Read it again before deciding.' },
   REPORT_NOT_READY: { status: 409, message: 'The report is still rendering or failed to render.' },
+  WEAK_PASSWORD: { status: 422, message: 'Choose a password that is harder to guess: not a common one and not made from your name or the shop’s.' },
+  SETUP_CODE_INVALID: { status: 403, message: 'That setup code is not right. It is printed in the server’s log when it starts.' },
+  LINK_INVALID: { status: 410, message: 'This link is not valid any more: it was used, withdrawn or has expired. Ask for a new one.' },
+  LINK_EXPIRED: { status: 410, message: 'This link has expired. Ask for a new one.' },
+  CODE_INVALID: { status: 401, message: 'That code is not right. Check the time on your phone and try the newest code.' },
+  TWO_FACTOR_REQUIRED: { status: 409, message: 'This shop requires two-step sign-in for every account, so it cannot be turned off.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
   STORAGE_FULL: {

@@ -28,4 +28,7 @@ export * from './mail';
 export * from './showcase';
 export * from './backups';
 export * from './data-export';
+export * from './accounts';
+export * from './shop-locale';
+export * from './imports';
 export * from './disk-space';

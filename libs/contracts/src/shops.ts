@@ -64,6 +64,8 @@ export const ShopSettingsDtoSchema = z.object({
   logo: z.object({ url: z.string(), width: z.number().int(), height: z.number().int() }).nullable(),
   /** The locale in force: `locale`, else the one from the currency. Every date is written with it. */
   dateLocale: z.enum(SHOP_LOCALES),
+  /** Every account must sign in with a second factor (changed through PUT /api/shop/two-factor). */
+  requireTwoFactor: z.boolean(),
 });
 export type ShopSettingsDto = z.infer<typeof ShopSettingsDtoSchema>;
 

@@ -39,6 +39,16 @@ const EnvSchema = z.object({
     .int()
     .positive()
     .default(15 * 60),
+  /** Password-reset links one typed address, and one client address, may ask for within the window. */
+  RESET_THROTTLE_LIMIT: z.coerce.number().int().positive().default(5),
+  RESET_THROTTLE_ADDRESS_LIMIT: z.coerce.number().int().positive().default(20),
+  RESET_THROTTLE_WINDOW_SECONDS: z.coerce.number().int().positive().default(3600),
+  /** 'open' lets new workshops sign themselves up (hosted service); 'closed' (default) allows only first-run setup. */
+  SIGNUP: z.enum(['open', 'closed']).default('closed'),
+  /** Sign-ups one client address may start within an hour (SIGNUP=open). */
+  SIGNUP_LIMIT: z.coerce.number().int().positive().default(5),
+  /** The one-time first-run setup code; unset: a random one is printed at start while the database has no shop. */
+  SETUP_CODE: z.string().min(8).optional(),
   /** Express 'trust proxy' (e.g. `loopback`, `1`, `10.0.0.0/8`). Unset: X-Forwarded-For is ignored. */
   TRUST_PROXY: z.string().min(1).optional(),
   /** `production` refuses to start without PUBLIC_URL (owner links and report links are built from it, never from a request). */

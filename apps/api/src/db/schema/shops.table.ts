@@ -30,6 +30,8 @@ export const shops = sqliteTable('shops', {
   logoHeight: integer('logo_height'),
   /** Desk staff may open the showcase library (managers always may); off until a manager allows it. */
   showcaseDeskAccess: integer('showcase_desk_access', { mode: 'boolean' }).notNull().default(false),
+  /** Every account of the shop must sign in with a second factor (TOTP). */
+  requireTwoFactor: integer('require_two_factor', { mode: 'boolean' }).notNull().default(false),
   nextJobSeq: integer('next_job_seq').notNull().default(1),
   createdAt: timestamp('created_at').notNull(),
 });
