@@ -26,3 +26,5 @@ export * from './measurement-evidence.table';
 export * from './reports.table';
 export * from './outbox-messages.table';
 export * from './showcase-items.table';
+export * from './payments.table';
+export * from './text-messages.table';

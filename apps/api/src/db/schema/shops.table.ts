@@ -12,6 +12,10 @@ export const shops = sqliteTable('shops', {
   labourRateMinor: integer('labour_rate_minor').notNull().default(0),
   taxRateBp: integer('tax_rate_bp').notNull().default(0),
   currency: text('currency').notNull().default('EUR'),
+  /** ISO 3166-1 alpha-2; phone numbers typed without a country code are read as this country's. */
+  country: text('country').notNull().default('GB'),
+  /** Printed on receipts when set (VAT or sales-tax registration). */
+  taxNumber: text('tax_number').notNull().default(''),
   units: text('units').$type<UnitSystem>().notNull().default('metric'),
   pageSize: text('page_size').$type<PageSize>().notNull().default('A4'),
   finalCheckSecondPerson: integer('final_check_second_person', { mode: 'boolean' }).notNull().default(true),
