@@ -23,6 +23,8 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
     logger: opts.logger === false ? false : ['log', 'warn', 'error'],
     bufferLogs: opts.logger !== false,
+    // The payment provider signs the exact bytes it sent; its webhook needs them (req.rawBody).
+    rawBody: true,
   });
   // Nest's own log lines go through pino too, as JSON at LOG_LEVEL.
   if (opts.logger !== false) app.useLogger(app.get(PinoLogger));

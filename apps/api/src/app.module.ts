@@ -23,6 +23,8 @@ import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { ReportsModule } from './reports';
 import { MailModule } from './mail';
+import { PaymentsModule } from './payments';
+import { PaymentProviderModule } from './infra/payments';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
@@ -48,6 +50,7 @@ const FEATURES = [
   ReportsModule,
   MailModule,
   ShowcaseModule,
+  PaymentsModule,
 ];
 
 @Module({})
@@ -60,6 +63,7 @@ export class AppModule {
         LoggerModule.forRoot(requestLogging(cfg)),
         ClockModule,
         TasksModule,
+        PaymentProviderModule,
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,

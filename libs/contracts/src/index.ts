@@ -25,3 +25,4 @@ export * from './annotations';
 export * from './reports';
 export * from './mail';
 export * from './showcase';
+export * from './payments';

@@ -45,6 +45,10 @@ const settingsFields = {
   /** Tax rate in basis points: 2000 = 20 %. */
   taxRateBp: z.int().min(0).max(10_000),
   currency: CurrencySchema,
+  /** ISO 3166-1 alpha-2: phone numbers typed without a country code are read as this country's. */
+  country: z.string().regex(/^[A-Z]{2}$/, 'Two capital letters, e.g. GB'),
+  /** Printed on receipts when set. */
+  taxNumber: z.string().trim().max(40),
   units: UnitSystemSchema,
   pageSize: PageSizeSchema,
   /** Final check must be signed off by someone other than the mechanic. */

@@ -50,6 +50,7 @@ function baseDto(job: ListedJob, mechanicName: string | null | undefined, today:
     reportedSymptoms: job.reportedSymptoms,
     createdAt: job.createdAt.toISOString(),
     overdue: isOverdue(job, today),
+    dueMinor: null,
   };
 }
 

@@ -14,3 +14,4 @@ export {
   type OwnerShotSource,
   type StreamReply,
 } from './owner.ports';
+export { CurrentOwner, OwnerLinkGuard } from './owner-link.guard';

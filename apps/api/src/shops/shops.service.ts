@@ -14,6 +14,8 @@ const toDto = (s: ShopRow): ShopSettingsDto => ({
   labourRateMinor: s.labourRateMinor,
   taxRateBp: s.taxRateBp,
   currency: s.currency,
+  country: s.country,
+  taxNumber: s.taxNumber,
   units: s.units,
   pageSize: s.pageSize,
   finalCheckSecondPerson: s.finalCheckSecondPerson,

@@ -6,6 +6,7 @@ import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../infra/clock';
 import { JobAccess } from '../jobs';
+import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import type { StoredTorqueInput } from '../db/schema';
 import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
@@ -15,6 +16,7 @@ const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto =>
   description: w.description,
   partsUsed: w.partsUsed,
   minutes: w.minutes,
+  rateMinor: w.rateMinor ?? null,
   userId: w.userId,
   userName: w.userId ? (staff.get(w.userId) ?? null) : null,
   at: w.at.toISOString(),
@@ -57,6 +59,7 @@ export class WorkLogService {
     private readonly jobs: JobAccess,
     private readonly users: UsersService,
     private readonly audit: AuditService,
+    private readonly shops: ShopsService,
     @Inject(CLOCK) private readonly clock: Clock,
   ) {}
 
@@ -77,7 +80,10 @@ export class WorkLogService {
 
   addWork(actor: AuthUser, jobId: number, input: WorkEntryRequest): WorkEntryDto {
     this.openJob(actor, jobId);
-    const row = this.repo.insertWorkEntry({ ...input, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() });
+    const { chargeable, ...entry } = input;
+    // The rate is copied in, so a later change of the shop's rate does not re-price logged work.
+    const rateMinor = chargeable ? this.shops.settings(actor.shopId).labourRateMinor : null;
+    const row = this.repo.insertWorkEntry({ ...entry, rateMinor, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() });
     return toWorkDto(row, this.staff(actor));
   }
 

@@ -1,5 +1,5 @@
 import { WorkEntryRequestSchema, type WorkEntryRequest } from '@benchproof/contracts';
-import { Alert, Button, Card, Group, NumberInput, Stack, Text, Textarea, Title } from '@mantine/core';
+import { Alert, Button, Card, Checkbox, Group, NumberInput, Stack, Text, Textarea, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import dayjs from 'dayjs';
 import { QueryState } from '../../../components/query-state';
@@ -9,7 +9,7 @@ import { useAddWorkEntry, useWorkEntries } from '../api/work-log';
 function WorkEntryForm({ jobId }: { jobId: number }) {
   const add = useAddWorkEntry(jobId);
   const form = useForm<WorkEntryRequest>({
-    initialValues: { description: '', partsUsed: '', minutes: 15 },
+    initialValues: { description: '', partsUsed: '', minutes: 15, chargeable: false },
     validate: contractResolver(WorkEntryRequestSchema, (v: WorkEntryRequest) => v),
   });
   const submit = form.onSubmit((v) => add.mutate(v, { onSuccess: () => form.reset(), onError: (e) => showServerFieldErrors(form, e) }));
@@ -20,6 +20,7 @@ function WorkEntryForm({ jobId }: { jobId: number }) {
         <Textarea label="What was done" autosize minRows={2} withAsterisk {...form.getInputProps('description')} />
         <Textarea label="Parts used" autosize minRows={1} {...form.getInputProps('partsUsed')} />
         <NumberInput label="Minutes" inputMode="numeric" min={0} max={1440} step={5} allowDecimal={false} size="lg" {...form.getInputProps('minutes')} />
+        <Checkbox size="md" label="Charge this time to the owner (shop labour rate)" {...form.getInputProps('chargeable', { type: 'checkbox' })} />
         {failure && <Alert color="red">{failure}</Alert>}
         <Button type="submit" size="lg" loading={add.isPending}>
           Log work
@@ -47,7 +48,7 @@ export function WorkEntries({ jobId, canRecord = true }: { jobId: number; canRec
           <Text style={{ whiteSpace: 'pre-wrap' }}>{e.description}</Text>
           {e.partsUsed && <Text size="sm">Parts: {e.partsUsed}</Text>}
           <Text size="xs" c="dimmed">
-            {e.minutes} min · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}
+            {e.minutes} min{e.rateMinor !== null ? ' · charged' : ''} · {e.userName ?? 'someone'} · {dayjs(e.at).format('D MMM HH:mm')}
           </Text>
         </Card>
       ))}
