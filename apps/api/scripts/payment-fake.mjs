@@ -73,29 +73,43 @@ function hostedPage(s) {
   );
 }
 
-/**
- * Starts the fake. Port 0 picks a free port. `webhookUrl` is where signed events go (the API's
- * /api/payments/webhook); `webhookSecret` signs them (the API's STRIPE_WEBHOOK_SECRET).
- */
-export async function startPaymentFake(opts = {}) {
-  const host = opts.host ?? '127.0.0.1';
-  const signer = new Stripe('sk_test_fake_signer', { telemetry: false });
-  const state = { sessions: new Map(), idempotent: new Map(), requests: [], events: [], refunds: [], webhookUrl: opts.webhookUrl ?? null };
-  const secret = opts.webhookSecret ?? 'whsec_local_fake';
-  let base = '';
+const event = (type, object) => ({
+  id: newId('evt'),
+  object: 'event',
+  type,
+  created: Math.floor(Date.now() / 1000),
+  data: { object },
+  livemode: false,
+  api_version: null,
+});
 
-  async function deliver(event) {
-    const payload = JSON.stringify(event);
-    const header = signer.webhooks.generateTestHeaderString({ payload, secret });
-    const record = { id: event.id, type: event.type, status: null, error: null };
-    state.events.push({ event, deliveries: [record] });
-    if (!state.webhookUrl) return record;
-    return send(event, payload, header, record);
+/** The fake's state and behaviour; the HTTP routes below call into it. */
+class FakeProvider {
+  constructor(opts) {
+    this.opts = opts;
+    this.secret = opts.webhookSecret ?? 'whsec_local_fake';
+    this.signer = new Stripe('sk_test_fake_signer', { telemetry: false });
+    this.sessions = new Map();
+    this.idempotent = new Map();
+    this.requests = [];
+    this.events = [];
+    this.refunds = [];
+    this.webhookUrl = opts.webhookUrl ?? null;
+    this.base = '';
   }
 
-  async function send(event, payload, header, record) {
+  async deliver(ev) {
+    const record = { id: ev.id, type: ev.type, status: null, error: null };
+    this.events.push({ event: ev, deliveries: [record] });
+    return this.webhookUrl ? this.send(ev, record) : record;
+  }
+
+  /** Signs the payload afresh (the SDK's test header: t=<time>,v1=<HMAC-SHA256>) and posts it. */
+  async send(ev, record = { id: ev.id, status: null, error: null }) {
+    const payload = JSON.stringify(ev);
+    const header = this.signer.webhooks.generateTestHeaderString({ payload, secret: this.secret });
     try {
-      const r = await fetch(state.webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': header }, body: payload });
+      const r = await fetch(this.webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': header }, body: payload });
       record.status = r.status;
     } catch (e) {
       record.error = String(e);
@@ -103,140 +117,174 @@ export async function startPaymentFake(opts = {}) {
     return record;
   }
 
-  const event = (type, object) => ({ id: newId('evt'), object: 'event', type, created: Math.floor(Date.now() / 1000), data: { object }, livemode: false, api_version: null });
+  async resend(eventId) {
+    const found = this.events.find((e) => e.event.id === eventId);
+    if (!found) return null;
+    const rec = await this.send(found.event);
+    found.deliveries.push(rec);
+    return rec;
+  }
 
-  function createSession(req, params) {
-    const key = req.headers['idempotency-key'];
-    if (key && state.idempotent.has(key)) {
-      const prior = state.idempotent.get(key);
-      if (prior.body !== JSON.stringify(params)) return { status: 400, body: { error: { type: 'idempotency_error', message: 'Keys for idempotent requests can only be used with the same parameters they were first used with.' } } };
-      return { status: 200, body: state.sessions.get(prior.id) };
+  createSession(key, params) {
+    if (key && this.idempotent.has(key)) {
+      const prior = this.idempotent.get(key);
+      if (prior.body !== JSON.stringify(params))
+        return {
+          status: 400,
+          body: {
+            error: { type: 'idempotency_error', message: 'Keys for idempotent requests can only be used with the same parameters they were first used with.' },
+          },
+        };
+      return { status: 200, body: this.sessions.get(prior.id) };
     }
     const item = params.line_items?.[0] ?? {};
-    const quantity = Number(item.quantity ?? 1);
     const unit = Number(item.price_data?.unit_amount);
-    if (!Number.isInteger(unit) || unit <= 0) return { status: 400, body: { error: { type: 'invalid_request_error', message: 'unit_amount must be a positive integer' } } };
+    if (!Number.isInteger(unit) || unit <= 0)
+      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'unit_amount must be a positive integer' } } };
     const id = newId('cs');
     const session = {
       ...{ id, object: 'checkout.session', mode: params.mode ?? 'payment', status: 'open', payment_status: 'unpaid', payment_intent: null },
-      ...{ amount_total: unit * quantity, currency: (item.price_data?.currency ?? 'eur').toLowerCase(), client_reference_id: params.client_reference_id ?? null },
-      ...{ metadata: params.metadata ?? {}, success_url: params.success_url, cancel_url: params.cancel_url, url: `${base}/pay/${id}`, created: Math.floor(Date.now() / 1000) },
+      ...{
+        amount_total: unit * Number(item.quantity ?? 1),
+        currency: (item.price_data?.currency ?? 'eur').toLowerCase(),
+        client_reference_id: params.client_reference_id ?? null,
+      },
+      ...{
+        metadata: params.metadata ?? {},
+        success_url: params.success_url,
+        cancel_url: params.cancel_url,
+        url: `${this.base}/pay/${id}`,
+        created: Math.floor(Date.now() / 1000),
+      },
     };
-    state.sessions.set(id, session);
-    if (key) state.idempotent.set(key, { id, body: JSON.stringify(params) });
+    this.sessions.set(id, session);
+    if (key) this.idempotent.set(key, { id, body: JSON.stringify(params) });
     return { status: 200, body: session };
   }
 
-  async function pay(id) {
-    const s = state.sessions.get(id);
+  async pay(id) {
+    const s = this.sessions.get(id);
     if (!s || s.status !== 'open') return null;
     Object.assign(s, { status: 'complete', payment_status: 'paid', payment_intent: newId('pi') });
-    if (opts.deliverWebhooks !== false) await deliver(event('checkout.session.completed', { ...s }));
+    if (this.opts.deliverWebhooks !== false) await this.deliver(event('checkout.session.completed', { ...s }));
     return s;
   }
 
-  async function expire(id) {
-    const s = state.sessions.get(id);
+  async expire(id) {
+    const s = this.sessions.get(id);
     if (!s || s.status !== 'open') return null;
     s.status = 'expired';
-    await deliver(event('checkout.session.expired', { ...s }));
+    await this.deliver(event('checkout.session.expired', { ...s }));
     return s;
   }
 
-  function refund(params, res) {
-    const s = [...state.sessions.values()].find((x) => x.payment_intent === params.payment_intent);
-    if (!s) return providerError(res, 404, `No such payment_intent: '${params.payment_intent}'`);
-    const done = state.refunds.filter((r) => r.payment_intent === s.payment_intent).reduce((t, r) => t + r.amount, 0);
+  refund(params) {
+    const s = [...this.sessions.values()].find((x) => x.payment_intent === params.payment_intent);
+    if (!s) return { status: 404, body: { error: { type: 'invalid_request_error', message: `No such payment_intent: '${params.payment_intent}'` } } };
+    const done = this.refunds.filter((r) => r.payment_intent === s.payment_intent).reduce((t, r) => t + r.amount, 0);
     const amount = Number(params.amount ?? s.amount_total - done);
-    if (!Number.isInteger(amount) || amount <= 0 || done + amount > s.amount_total) return providerError(res, 400, 'Refund amount is greater than what is left of the charge.');
-    const r = { id: newId('re'), object: 'refund', amount, currency: s.currency, payment_intent: s.payment_intent, status: 'succeeded', metadata: params.metadata ?? {} };
-    state.refunds.push(r);
-    return json(res, 200, r);
+    if (!Number.isInteger(amount) || amount <= 0 || done + amount > s.amount_total)
+      return { status: 400, body: { error: { type: 'invalid_request_error', message: 'Refund amount is greater than what is left of the charge.' } } };
+    const r = {
+      id: newId('re'),
+      object: 'refund',
+      amount,
+      currency: s.currency,
+      payment_intent: s.payment_intent,
+      status: 'succeeded',
+      metadata: params.metadata ?? {},
+    };
+    this.refunds.push(r);
+    return { status: 200, body: r };
   }
+}
 
-  async function api(req, res, url, body) {
-    const params = req.method === 'POST' ? parseForm(body) : {};
-    state.requests.push({ method: req.method, path: url.pathname, idempotencyKey: req.headers['idempotency-key'] ?? null, params });
-    if (!/^Bearer sk_/.test(req.headers.authorization ?? '')) return providerError(res, 401, 'Invalid API key provided.', 'authentication_error');
-    let m;
-    if (req.method === 'POST' && url.pathname === '/v1/checkout/sessions') {
-      const r = createSession(req, params);
-      return json(res, r.status, r.body);
-    }
-    if ((m = /^\/v1\/checkout\/sessions\/([\w-]+)$/.exec(url.pathname)) && req.method === 'GET') {
-      const s = state.sessions.get(m[1]);
-      return s ? json(res, 200, s) : providerError(res, 404, `No such checkout.session: '${m[1]}'`);
-    }
-    if ((m = /^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/.exec(url.pathname)) && req.method === 'POST') {
-      const s = await expire(m[1]);
-      return s ? json(res, 200, s) : providerError(res, 400, 'Only an open session can be expired.');
-    }
-    if (req.method === 'POST' && url.pathname === '/v1/refunds') return refund(params, res);
-    return providerError(res, 404, `Unrecognized request URL (${req.method}: ${url.pathname}).`);
+/** The provider's API paths the SDK calls. */
+async function api(fake, req, res, url, body) {
+  const params = req.method === 'POST' ? parseForm(body) : {};
+  fake.requests.push({ method: req.method, path: url.pathname, idempotencyKey: req.headers['idempotency-key'] ?? null, params });
+  if (!/^Bearer sk_/.test(req.headers.authorization ?? '')) return providerError(res, 401, 'Invalid API key provided.', 'authentication_error');
+  let m;
+  let r;
+  if (req.method === 'POST' && url.pathname === '/v1/checkout/sessions') r = fake.createSession(req.headers['idempotency-key'], params);
+  else if ((m = /^\/v1\/checkout\/sessions\/([\w-]+)$/.exec(url.pathname)) && req.method === 'GET') {
+    const s = fake.sessions.get(m[1]);
+    r = s ? { status: 200, body: s } : { status: 404, body: { error: { type: 'invalid_request_error', message: `No such checkout.session: '${m[1]}'` } } };
+  } else if ((m = /^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/.exec(url.pathname)) && req.method === 'POST') {
+    const s = await fake.expire(m[1]);
+    r = s ? { status: 200, body: s } : { status: 400, body: { error: { type: 'invalid_request_error', message: 'Only an open session can be expired.' } } };
+  } else if (req.method === 'POST' && url.pathname === '/v1/refunds') r = fake.refund(params);
+  else return providerError(res, 404, `Unrecognized request URL (${req.method}: ${url.pathname}).`);
+  return json(res, r.status, r.body);
+}
+
+function listPage(fake) {
+  const rows = [...fake.sessions.values()]
+    .reverse()
+    .map((s) => `<tr><td><a href="/pay/${esc(s.id)}">${esc(s.id)}</a></td><td>${esc(money(s.amount_total, s.currency))}</td><td>${esc(s.status)}</td></tr>`);
+  return page('Checkouts', `<h1>Checkouts (${fake.sessions.size})</h1><table><tr><th>Session</th><th>Amount</th><th>Status</th></tr>${rows.join('')}</table>`);
+}
+
+/** The hosted page, and a small JSON API for tests and the developer. */
+async function site(fake, req, res, url) {
+  let m;
+  const html = (body) => {
+    res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' });
+    res.end(body);
+  };
+  if ((m = /^\/pay\/([\w-]+)$/.exec(url.pathname)) && req.method === 'GET') {
+    const s = fake.sessions.get(m[1]);
+    return s ? html(hostedPage(s)) : providerError(res, 404, 'No such checkout');
   }
-
-  /** The hosted page, and a small JSON API for tests and the developer. */
-  async function site(req, res, url) {
-    let m;
-    if ((m = /^\/pay\/([\w-]+)$/.exec(url.pathname)) && req.method === 'GET') {
-      const s = state.sessions.get(m[1]);
-      if (!s) return providerError(res, 404, 'No such checkout');
-      res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' });
-      return res.end(hostedPage(s));
-    }
-    if ((m = /^\/pay\/([\w-]+)\/(pay|cancel)$/.exec(url.pathname)) && req.method === 'POST') {
-      const s = state.sessions.get(m[1]);
-      if (!s) return providerError(res, 404, 'No such checkout');
-      if (m[2] === 'cancel') return redirect(res, s.cancel_url);
-      await pay(s.id);
-      return redirect(res, String(s.success_url).replace('{CHECKOUT_SESSION_ID}', s.id));
-    }
-    if (url.pathname === '/api/sessions') return json(res, 200, [...state.sessions.values()]);
-    if (url.pathname === '/api/requests') return json(res, 200, state.requests);
-    if (url.pathname === '/api/events') return json(res, 200, state.events);
-    if ((m = /^\/api\/events\/([\w-]+)\/resend$/.exec(url.pathname)) && req.method === 'POST') {
-      const found = state.events.find((e) => e.event.id === m[1]);
-      if (!found) return providerError(res, 404, 'No such event');
-      const payload = JSON.stringify(found.event);
-      const rec = await send(found.event, payload, signer.webhooks.generateTestHeaderString({ payload, secret }), { id: found.event.id, status: null, error: null });
-      found.deliveries.push(rec);
-      return json(res, 200, rec);
-    }
-    if (url.pathname === '/') {
-      const rows = [...state.sessions.values()].reverse().map((s) => `<tr><td><a href="/pay/${esc(s.id)}">${esc(s.id)}</a></td><td>${esc(money(s.amount_total, s.currency))}</td><td>${esc(s.status)}</td></tr>`);
-      res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' });
-      return res.end(page('Checkouts', `<h1>Checkouts (${state.sessions.size})</h1><table><tr><th>Session</th><th>Amount</th><th>Status</th></tr>${rows.join('')}</table>`));
-    }
-    return providerError(res, 404, 'Not found');
+  if ((m = /^\/pay\/([\w-]+)\/(pay|cancel)$/.exec(url.pathname)) && req.method === 'POST') {
+    const s = fake.sessions.get(m[1]);
+    if (!s) return providerError(res, 404, 'No such checkout');
+    if (m[2] === 'cancel') return redirect(res, s.cancel_url);
+    await fake.pay(s.id);
+    return redirect(res, String(s.success_url).replace('{CHECKOUT_SESSION_ID}', s.id));
   }
+  if ((m = /^\/api\/events\/([\w-]+)\/resend$/.exec(url.pathname)) && req.method === 'POST') {
+    const rec = await fake.resend(m[1]);
+    return rec ? json(res, 200, rec) : providerError(res, 404, 'No such event');
+  }
+  const lists = { '/api/sessions': () => [...fake.sessions.values()], '/api/requests': () => fake.requests, '/api/events': () => fake.events };
+  if (lists[url.pathname]) return json(res, 200, lists[url.pathname]());
+  if (url.pathname === '/') return html(listPage(fake));
+  return providerError(res, 404, 'Not found');
+}
 
+/**
+ * Starts the fake. Port 0 picks a free port. `webhookUrl` is where signed events go (the API's
+ * /api/payments/webhook); `webhookSecret` signs them (the API's STRIPE_WEBHOOK_SECRET).
+ */
+export async function startPaymentFake(opts = {}) {
+  const host = opts.host ?? '127.0.0.1';
+  const fake = new FakeProvider(opts);
   const server = createServer((req, res) => {
-    const url = new URL(req.url ?? '/', base);
+    const url = new URL(req.url ?? '/', fake.base || 'http://localhost');
     readBody(req)
-      .then((body) => (url.pathname.startsWith('/v1/') ? api(req, res, url, body) : site(req, res, url)))
+      .then((body) => (url.pathname.startsWith('/v1/') ? api(fake, req, res, url, body) : site(fake, req, res, url)))
       .catch((e) => providerError(res, 500, String(e), 'api_error'));
   });
   const port = await new Promise((ok, fail) => {
     server.once('error', fail);
     server.listen(opts.port ?? 12111, host, () => ok(server.address().port));
   });
-  base = `http://${host}:${port}`;
+  fake.base = `http://${host}:${port}`;
   return {
-    port,
-    url: base,
-    sessions: () => [...state.sessions.values()],
-    requests: () => state.requests,
-    events: () => state.events,
-    refunds: () => state.refunds,
-    setWebhookUrl: (u) => void (state.webhookUrl = u),
-    pay,
-    expire,
-    /** Sends an already delivered event again, signed afresh (a provider retry). */
-    resend: async (eventId) => {
-      const found = state.events.find((e) => e.event.id === eventId);
-      const payload = JSON.stringify(found.event);
-      return send(found.event, payload, signer.webhooks.generateTestHeaderString({ payload, secret }), { id: eventId, status: null, error: null });
+    ...{
+      port,
+      url: fake.base,
+      sessions: () => [...fake.sessions.values()],
+      requests: () => fake.requests,
+      events: () => fake.events,
+      refunds: () => fake.refunds,
     },
+    setWebhookUrl: (u) => void (fake.webhookUrl = u),
+    pay: (id) => fake.pay(id),
+    expire: (id) => fake.expire(id),
+    /** Sends an already delivered event again, signed afresh (a provider retry). */
+    resend: (eventId) => fake.resend(eventId),
     close: () => new Promise((ok) => server.close(() => ok())),
   };
 }

@@ -17,7 +17,7 @@ export class JobBalances {
   }
 
   dueByJob(shopId: number, jobIds: number[]): Map<number, number> {
-    return this.port && jobIds.length ? this.port.dueByJob(shopId, jobIds) : new Map();
+    return this.port && jobIds.length ? this.port.dueByJob(shopId, jobIds) : new Map<number, number>();
   }
 
   readyUnpaidIds(shopId: number): number[] {

@@ -41,7 +41,8 @@ export class BalanceService {
     const shop = this.shops.settings(shopId);
     const charges = new Map<number, Charge[]>(jobIds.map((id) => [id, []]));
     for (const r of this.repo.approvedRecommendations(shopId, jobIds)) charges.get(r.jobId)?.push({ netMinor: recommendationNet(r), taxRateBp: r.taxRateBp });
-    for (const w of this.repo.chargedWork(shopId, jobIds)) charges.get(w.jobId)?.push({ netMinor: workChargeMinor(w.minutes, w.rateMinor), taxRateBp: shop.taxRateBp });
+    for (const w of this.repo.chargedWork(shopId, jobIds))
+      charges.get(w.jobId)?.push({ netMinor: workChargeMinor(w.minutes, w.rateMinor), taxRateBp: shop.taxRateBp });
     const rows = this.repo.paymentsOf(shopId, jobIds, tx);
     for (const id of jobIds) {
       const mine = rows.filter((p) => p.jobId === id);

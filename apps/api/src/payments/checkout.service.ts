@@ -63,7 +63,10 @@ export class CheckoutService {
       ...{ shopId: owner.shopId, jobId: job.id, providerId: session.id, idempotencyKey, amountMinor: dueMinor, currency },
       ...{ url: session.url, status: 'open', createdAt: this.clock.now() },
     });
-    this.audit.record({ shopId: owner.shopId, id: null }, { action: 'payment.checkout_opened', entityType: 'job', entityId: job.id, details: { amountMinor: dueMinor, session: session.id } });
+    this.audit.record(
+      { shopId: owner.shopId, id: null },
+      { action: 'payment.checkout_opened', entityType: 'job', entityId: job.id, details: { amountMinor: dueMinor, session: session.id } },
+    );
     return { url: session.url };
   }
 

@@ -103,7 +103,10 @@ export class PaymentsRepository {
   }
 
   insertCheckout(row: typeof checkoutSessions.$inferInsert): CheckoutRow {
-    return this.db.insert(checkoutSessions).values(row).onConflictDoNothing({ target: checkoutSessions.providerId }).returning().get() ?? this.checkoutByProviderId(row.providerId)!;
+    return (
+      this.db.insert(checkoutSessions).values(row).onConflictDoNothing({ target: checkoutSessions.providerId }).returning().get() ??
+      this.checkoutByProviderId(row.providerId)!
+    );
   }
 
   /** Webhooks name the provider's session id only; the row tells shop and job. */

@@ -60,8 +60,23 @@ export class PaymentsService implements OnModuleInit {
       const before = this.balances.balance(actor.shopId, jobId, tx);
       if (before.dueMinor <= 0) throw new DomainError('NOTHING_DUE');
       if (input.amountMinor > before.dueMinor)
-        throw new DomainError('VALIDATION_FAILED', 'That is more than is due.', { issues: [{ path: ['amountMinor'], message: 'More than is due' }], dueMinor: before.dueMinor });
-      const row = this.insertRow({ shopId: actor.shopId, jobId, kind: 'payment', method: input.method, amountMinor: input.amountMinor, currency: before.currency, staffId: takenBy, note: input.note }, tx);
+        throw new DomainError('VALIDATION_FAILED', 'That is more than is due.', {
+          issues: [{ path: ['amountMinor'], message: 'More than is due' }],
+          dueMinor: before.dueMinor,
+        });
+      const row = this.insertRow(
+        {
+          shopId: actor.shopId,
+          jobId,
+          kind: 'payment',
+          method: input.method,
+          amountMinor: input.amountMinor,
+          currency: before.currency,
+          staffId: takenBy,
+          note: input.note,
+        },
+        tx,
+      );
       const details = { jobId, method: input.method, amountMinor: input.amountMinor, takenBy };
       this.audit.record(actor, { action: 'payment.recorded', entityType: 'payment', entityId: row.id, details });
     });
@@ -84,7 +99,18 @@ export class PaymentsService implements OnModuleInit {
     }
     this.repo.transaction((tx) => {
       const row = this.insertRow(
-        { shopId: actor.shopId, jobId, kind: 'refund', method: payment.method, amountMinor: input.amountMinor, currency: payment.currency, refundOf: payment.id, staffId: actor.id, note: input.reason, providerRef },
+        {
+          shopId: actor.shopId,
+          jobId,
+          kind: 'refund',
+          method: payment.method,
+          amountMinor: input.amountMinor,
+          currency: payment.currency,
+          refundOf: payment.id,
+          staffId: actor.id,
+          note: input.reason,
+          providerRef,
+        },
         tx,
       );
       const details = { jobId, paymentId, amountMinor: input.amountMinor, reason: input.reason, method: payment.method, providerRef };
@@ -97,7 +123,12 @@ export class PaymentsService implements OnModuleInit {
    * An online payment from a verified webhook. Returns null when this payment was recorded before
    * (a replay). An amount that differs from what was due is recorded AND flagged for desk.
    */
-  recordOnline(scope: { shopId: number }, jobId: number, p: { paymentRef: string; amountMinor: number; currency: string; expectedMinor: number }, tx: DbTx): PaymentRow | null {
+  recordOnline(
+    scope: { shopId: number },
+    jobId: number,
+    p: { paymentRef: string; amountMinor: number; currency: string; expectedMinor: number },
+    tx: DbTx,
+  ): PaymentRow | null {
     const before = this.balances.balance(scope.shopId, jobId, tx);
     const mismatch = p.amountMinor !== before.dueMinor;
     const row = this.repo.insert(
@@ -109,7 +140,13 @@ export class PaymentsService implements OnModuleInit {
       tx,
     );
     if (!row) return null;
-    const details = { jobId, amountMinor: p.amountMinor, dueMinor: before.dueMinor, providerRef: p.paymentRef, ...(mismatch ? { flag: 'amount_mismatch' } : {}) };
+    const details = {
+      jobId,
+      amountMinor: p.amountMinor,
+      dueMinor: before.dueMinor,
+      providerRef: p.paymentRef,
+      ...(mismatch ? { flag: 'amount_mismatch' } : {}),
+    };
     this.audit.record({ shopId: scope.shopId, id: null }, { action: 'payment.received_online', entityType: 'payment', entityId: row.id, details });
     this.afterPayment(scope.shopId, jobId, before, tx);
     return row;
@@ -127,7 +164,10 @@ export class PaymentsService implements OnModuleInit {
     const now = this.balances.balance(shopId, jobId, tx);
     if (now.state !== 'paid' || before?.state === 'paid') return;
     const rows = this.repo.paymentsOf(shopId, [jobId], tx);
-    const lines = rows.map((r) => ({ label: r.kind === 'refund' ? 'Refunded' : METHOD_LABEL[r.method], amountMinor: r.kind === 'refund' ? -r.amountMinor : r.amountMinor }));
+    const lines = rows.map((r) => ({
+      label: r.kind === 'refund' ? 'Refunded' : METHOD_LABEL[r.method],
+      amountMinor: r.kind === 'refund' ? -r.amountMinor : r.amountMinor,
+    }));
     this.mail.queueReceipt({ shopId }, jobId, { ...now, payments: lines, paidAt: this.clock.now() }, tx);
   }
 

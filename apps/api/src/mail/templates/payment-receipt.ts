@@ -34,7 +34,12 @@ export function paymentReceiptMail(input: PaymentReceiptInput): RenderedMail {
   const text = textFrame(input.shop, [...lines, rows.map(([k, v]) => `${k}: ${v}`).join('\n'), ...taxLine, 'Keep this e-mail as your receipt.']);
   const table =
     `<table role="presentation" cellpadding="6" style="border-collapse:collapse;width:100%">` +
-    rows.map(([k, v], i) => `<tr${i === 2 ? ' style="font-weight:bold;border-top:1px solid #ccc"' : ''}><td>${esc(k)}</td><td style="text-align:right">${esc(v)}</td></tr>`).join('') +
+    rows
+      .map(
+        ([k, v], i) =>
+          `<tr${i === 2 ? ' style="font-weight:bold;border-top:1px solid #ccc"' : ''}><td>${esc(k)}</td><td style="text-align:right">${esc(v)}</td></tr>`,
+      )
+      .join('') +
     `</table>`;
   const html = htmlFrame(input.shop, subject, paragraphs(lines) + table + paragraphs([...taxLine, 'Keep this e-mail as your receipt.']));
   return { subject, text, html };
