@@ -4,11 +4,13 @@ import { Link } from 'react-router';
 import { PageHeader } from '../../../components/page-header';
 import { useCan } from '../../../features/auth';
 import { JobsTable } from '../../../features/jobs';
+import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';
 
 export function JobsRoute() {
   const { mechanics } = useStaff();
   const canBook = useCan()('jobs.book_in');
+  const currency = useShopSettings().data?.currency;
   return (
     <>
       <PageHeader
@@ -22,7 +24,7 @@ export function JobsRoute() {
           )
         }
       />
-      <JobsTable mechanics={mechanics} />
+      <JobsTable mechanics={mechanics} currency={currency} />
     </>
   );
 }

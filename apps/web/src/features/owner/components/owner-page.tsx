@@ -1,7 +1,7 @@
 import type { OwnerFinding } from '@benchproof/contracts';
 import { formatMoney } from '@benchproof/domain';
 import { Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
-import { Suspense, useState } from 'react';
+import { Suspense, useState, type ReactNode } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useOwnerPage } from '../api/owner-page';
 import { Deferred } from './deferred';
@@ -13,7 +13,7 @@ import { BikeAndJob, BrandBar, Measurements, Pairs, ReportAndContact } from './o
 import { useChoices, type Choice } from './use-choices';
 
 /** The owner's private page for one job, phone-first: evidence, decisions, consent. */
-export function OwnerPage({ token }: { token: string }) {
+export function OwnerPage({ token, payment }: { token: string; payment?: ReactNode }) {
   const page = useOwnerPage(token);
   if (page.error) {
     const e = page.error instanceof ApiError ? page.error : new ApiError(0, 'NETWORK', 'No connection.');
@@ -25,7 +25,7 @@ export function OwnerPage({ token }: { token: string }) {
         <Loader aria-label="Loading your bike’s page" />
       </Center>
     );
-  return <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} />;
+  return <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} payment={payment} />;
 }
 
 type OwnerPageData = NonNullable<ReturnType<typeof useOwnerPage>['data']>;
@@ -80,6 +80,7 @@ function AnswerBar({ answered, pending, approved, onConfirm }: { answered: numbe
 }
 
 type Choices = ReturnType<typeof useChoices>;
+type BodyProps = { token: string; page: OwnerPageData; refetch: () => void; payment?: ReactNode };
 
 /**
  * The confirm dialog, whose code loads when the owner makes a first choice (so Confirm opens at once) and
@@ -114,7 +115,14 @@ function Decisions(props: {
   );
 }
 
-function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPageData; refetch: () => void }) {
+const SentNotice = () => (
+  <Text fw={600} c="teal" role="status">
+    Thank you — the shop has your answers.
+  </Text>
+);
+
+/** `payment`: the payments feature's card (amount due, pay button, "paid"), handed in by the route. */
+function OwnerPageBody({ token, page, refetch, payment }: BodyProps) {
   const c = useChoices(page.findings);
   const [confirming, setConfirming] = useState(false);
   const [everConfirmed, setEverConfirmed] = useState(false);
@@ -126,11 +134,8 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
       <BrandBar page={page} />
       <Stack gap="lg">
         <BikeAndJob page={page} />
-        {sent && (
-          <Text fw={600} c="teal" role="status">
-            Thank you — the shop has your answers.
-          </Text>
-        )}
+        {payment}
+        {sent && <SentNotice />}
         {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} />}
         <Measurements page={page} />
         {page.pairs.length > 0 && (
