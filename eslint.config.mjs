@@ -72,6 +72,21 @@ export default tseslint.config(
     rules: { 'no-restricted-imports': restrict(['^@benchproof/web$', 'The apps never import each other (rule 4).']) },
   },
   {
+    // better-sqlite3 in autocommit: INSERT/UPDATE … RETURNING read with .get() hands back the row from the first step,
+    // and a failed COMMIT (full disk) surfaces only at the statement's reset, where it is lost (issue 20).
+    files: ['apps/api/src/**/*.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: "CallExpression[callee.property.name='get'][callee.object.type='CallExpression'][callee.object.callee.property.name='returning']",
+          message:
+            'No .returning().get(): a failed commit is lost in autocommit. Use .returning().all()[0] (all() steps to the end, so the error throws), inside uow.run for more than one write.',
+        },
+      ],
+    },
+  },
+  {
     files: ['apps/web/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },
     plugins: { 'react-hooks': reactHooks },

@@ -38,6 +38,16 @@ function apiZones(apiFeatures) {
       from: apiFeatures.map((f) => `apps/api/src/${f}`),
       message: 'core/ and infra/ never import features (rule 5).',
     },
+    // The layering inside the API: core (ports: clock, DbTx, unit of work, auth, errors) < infra (adapters) < features.
+    {
+      target: 'apps/api/src/core',
+      from: 'apps/api/src/infra',
+      message: 'core/ never imports infra/: the port belongs in core, its adapter in infra (API layering).',
+    },
+    // Mail sits below reports: a report e-mail names its PDF by storage key and SHA-256, it never calls reports.
+    ...(apiFeatures.includes('mail') && apiFeatures.includes('reports')
+      ? [{ target: 'apps/api/src/mail', from: 'apps/api/src/reports', message: 'mail never reaches reports, not even through its index.ts (API layering).' }]
+      : []),
   ];
 }
 

@@ -17,7 +17,7 @@ import { PairsModule } from './pairs';
 import { ConsentModule } from './consent';
 import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
-import { ClockModule } from './infra/clock';
+import { ClockModule } from './core/clock';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';

@@ -1,14 +1,14 @@
-import { Inject, Injectable, type OnModuleInit } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import { blurRegions, migrateDocument, renderSvg } from '@benchproof/annotation';
 import type { AnnotatedSize } from '@benchproof/contracts';
 import { Readable } from 'node:stream';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { STORAGE, type Storage } from '../infra/storage';
-import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
+import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
 import { MediaService } from '../media';
 import { AnnotationsRepository } from './annotations.repository';
 
-export const RENDER_TASK = 'annotation.render';
+export const RENDER_TASK = 'annotation.render' as const;
 
 /** Where an annotated (or, without annotation, plain) JPEG of an asset lives. */
 export interface AnnotatedImage {
@@ -25,7 +25,7 @@ export interface AnnotatedImage {
  * per (asset, version, size); a version is immutable, so the cache never goes stale.
  */
 @Injectable()
-export class AnnotationRenderService implements OnModuleInit {
+export class AnnotationRenderService {
   private readonly inFlight = new Map<string, Promise<void>>();
 
   constructor(
@@ -36,16 +36,10 @@ export class AnnotationRenderService implements OnModuleInit {
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
   ) {}
 
-  onModuleInit(): void {
-    this.tasks.register(
-      RENDER_TASK,
-      async (t) => {
-        const assetId = Number(t.payload.assetId);
-        if (t.shopId === null) return;
-        for (const size of ['screen', 'print'] as const) await this.annotated(t.shopId, assetId, size);
-      },
-      { concurrency: 1 },
-    );
+  @TaskHandler(RENDER_TASK, { concurrency: 1 })
+  async prerender(t: TaskContext<typeof RENDER_TASK>): Promise<void> {
+    if (t.shopId === null) return;
+    for (const size of ['screen', 'print'] as const) await this.annotated(t.shopId, t.payload.assetId, size);
   }
 
   /** Renders a saved version ahead of the first request (report, owner page). */

@@ -10,10 +10,6 @@ export type AnnotationVersionRow = typeof annotationVersions.$inferSelect;
 export class AnnotationsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
-  }
-
   latest(shopId: number, assetId: number): AnnotationVersionRow | undefined {
     return this.db
       .select()
@@ -25,7 +21,7 @@ export class AnnotationsRepository {
   }
 
   insert(row: typeof annotationVersions.$inferInsert): AnnotationVersionRow {
-    return this.db.insert(annotationVersions).values(row).returning().get();
+    return this.db.insert(annotationVersions).values(row).returning().all()[0];
   }
 
   addEvidence(row: typeof measurementEvidence.$inferInsert): void {

@@ -5,17 +5,19 @@ import { DomainInputError } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { MediaService } from '../media';
 import { AnnotationRenderService } from './annotation-render.service';
 import { AnnotationsRepository, type AnnotationVersionRow } from './annotations.repository';
+import { UnitOfWork } from '../core/db';
 
 /** A photo's annotation: read (migrated), saved as a new version with optimistic concurrency, measured from. */
 @Injectable()
 export class AnnotationsService {
   constructor(
     private readonly repo: AnnotationsRepository,
+    private readonly uow: UnitOfWork,
     private readonly media: MediaService,
     private readonly inspection: InspectionService,
     private readonly render: AnnotationRenderService,
@@ -39,12 +41,12 @@ export class AnnotationsService {
         issues: [{ path: 'document.image', message: 'The annotation was drawn on a different image.' }],
       });
     }
-    const row = this.repo.transaction(() => {
+    const row = this.uow.run(() => {
       const current = this.repo.latest(actor.shopId, assetId)?.version ?? 0;
       if (current !== req.baseVersion) {
         throw new DomainError('CONFLICT', 'Someone saved this annotation after you opened it. Reload to see their version.', { currentVersion: current });
       }
-      return this.repo.insert({
+      const saved = this.repo.insert({
         shopId: actor.shopId,
         assetId,
         version: current + 1,
@@ -52,12 +54,13 @@ export class AnnotationsService {
         savedAt: this.clock.now(),
         savedBy: actor.id,
       });
-    });
-    this.audit.record(actor, {
-      action: 'annotation.saved',
-      entityType: 'media_asset',
-      entityId: assetId,
-      details: { version: row.version, shapes: doc.shapes.length },
+      this.audit.record(actor, {
+        action: 'annotation.saved',
+        entityType: 'media_asset',
+        entityId: assetId,
+        details: { version: saved.version, shapes: doc.shapes.length },
+      });
+      return saved;
     });
     this.render.enqueue(actor.shopId, assetId, row.version);
     return toDto(assetId, row);
@@ -82,21 +85,23 @@ export class AnnotationsService {
     if (!reading || reading.measuredMm === null) throw fail('Set a scale on the photo first (draw it over the steel rule).');
     const lengthValue = Math.round(reading.measuredMm * 100) / 100;
     const checkpointId = req.checkpointId ?? this.chainCheckpoint(actor, img.jobId);
-    const m = this.inspection.addMeasurement(actor, img.jobId, checkpointId, {
-      kind: 'chain_elongation',
-      method: 'ruler',
-      pitches: req.pitches,
-      lengthValue,
-      lengthUnit: 'mm',
+    return this.uow.run(() => {
+      const m = this.inspection.addMeasurement(actor, img.jobId, checkpointId, {
+        kind: 'chain_elongation',
+        method: 'ruler',
+        pitches: req.pitches,
+        lengthValue,
+        lengthUnit: 'mm',
+      });
+      this.repo.addEvidence({ shopId: actor.shopId, measurementId: m.id, assetId, annotationVersion: latest.version });
+      this.audit.record(actor, {
+        action: 'measurement.from_photo',
+        entityType: 'job',
+        entityId: img.jobId,
+        details: { measurementId: m.id, assetId, version: latest.version, lengthValue, pitches: req.pitches },
+      });
+      return m;
     });
-    this.repo.addEvidence({ shopId: actor.shopId, measurementId: m.id, assetId, annotationVersion: latest.version });
-    this.audit.record(actor, {
-      action: 'measurement.from_photo',
-      entityType: 'job',
-      entityId: img.jobId,
-      details: { measurementId: m.id, assetId, version: latest.version, lengthValue, pitches: req.pitches },
-    });
-    return m;
   }
 
   private chainCheckpoint(actor: AuthUser, jobId: number): number {

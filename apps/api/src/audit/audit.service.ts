@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { AuthUser } from '../core/auth';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { AuditRepository } from './audit.repository';
 
 export interface AuditEntry {

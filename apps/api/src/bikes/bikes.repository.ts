@@ -83,7 +83,7 @@ export class BikesRepository {
   }
 
   insert(row: NewBikeRow): BikeRow {
-    return this.db.insert(bikes).values(row).returning().get();
+    return this.db.insert(bikes).values(row).returning().all()[0];
   }
 
   update(shopId: number, id: number, patch: Partial<NewBikeRow>): BikeRow | undefined {
@@ -92,6 +92,6 @@ export class BikesRepository {
       .set(patch)
       .where(and(eq(bikes.shopId, shopId), eq(bikes.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 }

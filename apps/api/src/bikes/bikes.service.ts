@@ -3,7 +3,7 @@ import type { BikeInput, BikeListItem, BikeListQuery, BikePage, NewBikeInput, Up
 import type { AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { type BikeRow, BikesRepository } from './bikes.repository';
 
 const toDto = (b: BikeRow, ownerName: string): BikeListItem => ({

@@ -2,7 +2,6 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { consents } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
 
 export type ConsentRow = typeof consents.$inferSelect;
 export type NewConsentRow = typeof consents.$inferInsert;
@@ -12,13 +11,8 @@ export type NewConsentRow = typeof consents.$inferInsert;
 export class ConsentRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  /** One SQLite transaction (synchronous); domain events published inside it carry `tx`. */
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.db.transaction((tx) => fn(tx));
-  }
-
   insert(row: NewConsentRow): ConsentRow {
-    return this.db.insert(consents).values(row).returning().get();
+    return this.db.insert(consents).values(row).returning().all()[0];
   }
 
   /** Newest first; ties on time broken by id so the latest write wins. */

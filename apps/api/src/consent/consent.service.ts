@@ -5,9 +5,10 @@ import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { ConsentChangedEvent, publish } from '../core/events';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess, type JobCaller } from '../jobs';
 import { type ConsentRow, ConsentRepository } from './consent.repository';
+import { UnitOfWork } from '../core/db';
 
 const toDto = (r: ConsentRow): ConsentDto => ({
   id: r.id,
@@ -33,6 +34,7 @@ export type ConsentSource =
 export class ConsentService {
   constructor(
     private readonly repo: ConsentRepository,
+    private readonly uow: UnitOfWork,
     private readonly access: JobAccess,
     private readonly audit: AuditService,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -73,7 +75,7 @@ export class ConsentService {
     if (input.wordingVersion !== CONSENT_WORDING.version) {
       throw new DomainError('CONSENT_WORDING_CHANGED', undefined, { current: CONSENT_WORDING.version });
     }
-    return this.repo.transaction((tx) => {
+    return this.uow.run((tx) => {
       const row = this.insert(scope.shopId, jobId, input, source);
       const who = source.method === 'in_person' ? source.recordedBy : { shopId: scope.shopId, id: null };
       this.audit.record(who, {

@@ -70,7 +70,7 @@ export class CustomersRepository {
   }
 
   insert(row: NewCustomerRow): CustomerRow {
-    return this.db.insert(customers).values(row).returning().get();
+    return this.db.insert(customers).values(row).returning().all()[0];
   }
 
   update(shopId: number, id: number, patch: Partial<NewCustomerRow>): CustomerRow | undefined {
@@ -79,6 +79,6 @@ export class CustomersRepository {
       .set(patch)
       .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 }

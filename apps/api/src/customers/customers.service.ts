@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { CustomerInput, CustomerDto, CustomerListQuery, CustomerPage, UpdateCustomerRequest } from '@benchproof/contracts';
 import type { AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { type CustomerRow, CustomersRepository } from './customers.repository';
 
 export const toCustomerDto = (c: CustomerRow): CustomerDto => ({

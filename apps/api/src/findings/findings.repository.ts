@@ -2,7 +2,6 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { decisions, findings, recommendations } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
 
 export type FindingRow = typeof findings.$inferSelect;
 export type NewFindingRow = typeof findings.$inferInsert;
@@ -15,11 +14,6 @@ export type NewDecisionRow = typeof decisions.$inferInsert;
 @Injectable()
 export class FindingsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
-
-  /** `tx` is for domain events and task enqueues that must commit with the change. */
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.db.transaction((tx) => fn(tx));
-  }
 
   list(shopId: number, jobId: number): FindingRow[] {
     return this.db
@@ -39,7 +33,7 @@ export class FindingsRepository {
   }
 
   insert(row: NewFindingRow): FindingRow {
-    return this.db.insert(findings).values(row).returning().get();
+    return this.db.insert(findings).values(row).returning().all()[0];
   }
 
   update(shopId: number, id: number, patch: Partial<NewFindingRow>): FindingRow {
@@ -48,7 +42,7 @@ export class FindingsRepository {
       .set(patch)
       .where(and(eq(findings.shopId, shopId), eq(findings.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 
   /** Removes a finding with its recommendation and decision history. */
@@ -95,7 +89,7 @@ export class FindingsRepository {
   }
 
   insertRecommendation(row: NewRecommendationRow): RecommendationRow {
-    return this.db.insert(recommendations).values(row).returning().get();
+    return this.db.insert(recommendations).values(row).returning().all()[0];
   }
 
   updateRecommendation(shopId: number, id: number, patch: Partial<NewRecommendationRow>): RecommendationRow {
@@ -104,7 +98,7 @@ export class FindingsRepository {
       .set(patch)
       .where(and(eq(recommendations.shopId, shopId), eq(recommendations.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 
   decisions(shopId: number, recommendationIds: number[]): DecisionRow[] {
@@ -118,6 +112,6 @@ export class FindingsRepository {
   }
 
   insertDecision(row: NewDecisionRow): DecisionRow {
-    return this.db.insert(decisions).values(row).returning().get();
+    return this.db.insert(decisions).values(row).returning().all()[0];
   }
 }

@@ -16,12 +16,13 @@ import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
 import { publish, RecommendationDecidedEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { JobAccess, type EvidenceKind, type JobCaller, type JobRef } from '../jobs';
 import { ShopsService } from '../shops';
 import { type FindingRow, FindingsRepository, type RecommendationRow } from './findings.repository';
 import { addTotals, recommendationTotals, toDecisionDto, toFindingDto, toRecommendationDto, ZERO_TOTALS } from './findings.view';
+import { UnitOfWork } from '../core/db';
 
 /** One decision on a recommendation, from staff (phone, in person, e-mail) or from the owner page (owner_link). */
 export interface DecisionInput {
@@ -44,6 +45,7 @@ export interface DecisionInput {
 export class FindingsService {
   constructor(
     private readonly repo: FindingsRepository,
+    private readonly uow: UnitOfWork,
     private readonly jobs: JobAccess,
     private readonly bikes: BikesService,
     private readonly inspection: InspectionService,
@@ -96,7 +98,7 @@ export class FindingsService {
     const job = this.openJob(actor, jobId);
     if (input.checkpointId) this.inspection.requireCheckpoint(actor, jobId, input.checkpointId);
     const now = this.clock.now();
-    const row = this.repo.insert({ ...input, shopId: actor.shopId, jobId, createdBy: actor.id, createdAt: now, updatedAt: now });
+    const row = this.uow.run(() => this.repo.insert({ ...input, shopId: actor.shopId, jobId, createdBy: actor.id, createdAt: now, updatedAt: now }));
     return this.dtos(actor, job, [row])[0];
   }
 
@@ -104,7 +106,7 @@ export class FindingsService {
     const job = this.openJob(actor, jobId);
     this.owned(actor, jobId, findingId);
     if (patch.checkpointId) this.inspection.requireCheckpoint(actor, jobId, patch.checkpointId);
-    const row = this.repo.update(actor.shopId, findingId, { ...patch, updatedAt: this.clock.now() });
+    const row = this.uow.run(() => this.repo.update(actor.shopId, findingId, { ...patch, updatedAt: this.clock.now() }));
     return this.dtos(actor, job, [row])[0];
   }
 
@@ -112,14 +114,16 @@ export class FindingsService {
     this.openJob(actor, jobId);
     this.owned(actor, jobId, findingId);
     try {
-      this.repo.transaction(() => this.repo.delete(actor.shopId, findingId));
+      this.uow.run(() => {
+        this.repo.delete(actor.shopId, findingId);
+        this.audit.record(actor, { action: 'finding.deleted', entityType: 'job', entityId: jobId, details: { findingId } });
+      });
     } catch (e) {
       // finding_media (media feature) still points at it: the shots must be unlinked first.
       if ((e as { code?: string }).code === 'SQLITE_CONSTRAINT_FOREIGNKEY')
         throw new DomainError('CONFLICT', 'Unlink the shots of this finding before deleting it.');
       throw e;
     }
-    this.audit.record(actor, { action: 'finding.deleted', entityType: 'job', entityId: jobId, details: { findingId } });
   }
 
   /** Creates or replaces the finding's recommendation at the shop's current labour rate, tax rate and currency. */
@@ -141,14 +145,17 @@ export class FindingsService {
     };
     const existing = this.repo.recommendationOf(actor.shopId, findingId);
     // A changed price needs the owner's word again.
-    const row = existing
-      ? this.repo.updateRecommendation(actor.shopId, existing.id, { ...priced, decisionStatus: 'pending' })
-      : this.repo.insertRecommendation({ ...priced, shopId: actor.shopId, jobId, findingId, createdBy: actor.id, createdAt: now });
-    this.audit.record(actor, {
-      action: existing ? 'recommendation.replaced' : 'recommendation.created',
-      entityType: 'job',
-      entityId: jobId,
-      details: { recommendationId: row.id, previousDecision: existing?.decisionStatus ?? null },
+    const row = this.uow.run(() => {
+      const saved = existing
+        ? this.repo.updateRecommendation(actor.shopId, existing.id, { ...priced, decisionStatus: 'pending' })
+        : this.repo.insertRecommendation({ ...priced, shopId: actor.shopId, jobId, findingId, createdBy: actor.id, createdAt: now });
+      this.audit.record(actor, {
+        action: existing ? 'recommendation.replaced' : 'recommendation.created',
+        entityType: 'job',
+        entityId: jobId,
+        details: { recommendationId: saved.id, previousDecision: existing?.decisionStatus ?? null },
+      });
+      return saved;
     });
     return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]), finding.condition);
   }
@@ -181,18 +188,18 @@ export class FindingsService {
     const rec: RecommendationRow | undefined = this.repo.recommendation(scope.shopId, jobId, recommendationId);
     if (!rec) throw notFound('Recommendation');
     if (d.seen) this.requireSeenPrice(rec, d.seen);
-    const row = this.repo.transaction((tx) => {
+    const row = this.uow.run((tx) => {
       const inserted = this.repo.insertDecision({ ...d, shopId: scope.shopId, jobId, recommendationId, recordedAt: this.clock.now() });
       this.repo.updateRecommendation(scope.shopId, rec.id, { decisionStatus: d.status });
       publish(this.emitter, new RecommendationDecidedEvent(tx, scope.shopId, jobId, rec.id, d.status, d.channel));
+      const who = d.recordedBy === null ? { shopId: scope.shopId, id: null } : { shopId: scope.shopId, id: d.recordedBy };
+      this.audit.record(who, {
+        action: 'recommendation.decided',
+        entityType: 'job',
+        entityId: jobId,
+        details: { recommendationId, status: d.status, channel: d.channel, decidedByName: d.decidedByName },
+      });
       return inserted;
-    });
-    const who = d.recordedBy === null ? { shopId: scope.shopId, id: null } : { shopId: scope.shopId, id: d.recordedBy };
-    this.audit.record(who, {
-      action: 'recommendation.decided',
-      entityType: 'job',
-      entityId: jobId,
-      details: { recommendationId, status: d.status, channel: d.channel, decidedByName: d.decidedByName },
     });
     return toDecisionDto(row);
   }

@@ -3,7 +3,7 @@ import type { BikeHistory, JobDto, WearSeries } from '@benchproof/contracts';
 import { chainDueEstimate, chainWearLimits } from '@benchproof/domain';
 import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import { InspectionRepository, type MeasurementRow } from './inspection.repository';

@@ -40,7 +40,7 @@ export class InspectionRepository {
       .set(patch)
       .where(and(eq(checkpoints.shopId, shopId), eq(checkpoints.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 
   measurements(shopId: number, jobIds: number[]): MeasurementRow[] {
@@ -62,7 +62,7 @@ export class InspectionRepository {
   }
 
   insertMeasurement(row: NewMeasurementRow): MeasurementRow {
-    return this.db.insert(measurements).values(row).returning().get();
+    return this.db.insert(measurements).values(row).returning().all()[0];
   }
 
   deleteMeasurement(shopId: number, id: number): void {

@@ -15,7 +15,7 @@ import { BikesService } from '../bikes';
 import type { AuthUser } from '../core/auth';
 import { DOMAIN_EVENTS, type JobBookedInEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess, JobsService, type JobRef } from '../jobs';
 import { ShopsService } from '../shops';
 import { InspectionRepository, type CheckpointRow, type MeasurementRow } from './inspection.repository';

@@ -8,15 +8,17 @@ import type { AuthUser } from '../core/auth';
 import { JobBookedInEvent, publish } from '../core/events';
 import { DomainError } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { ShopsService } from '../shops';
 import { JobsRepository } from './jobs.repository';
+import { UnitOfWork } from '../core/db';
 
 /** Book-in: customer and bike found or created, number issued, first event written — all or nothing. Reached through JobsService.bookIn. */
 @Injectable()
 export class BookInService {
   constructor(
     private readonly repo: JobsRepository,
+    private readonly uow: UnitOfWork,
     private readonly customers: CustomersService,
     private readonly bikes: BikesService,
     private readonly shops: ShopsService,
@@ -27,7 +29,7 @@ export class BookInService {
 
   /** Returns the new job's id. */
   bookIn(actor: AuthUser, input: BookInRequest): number {
-    return this.repo.transaction((tx) => {
+    return this.uow.run((tx) => {
       const customer = this.resolveCustomer(actor, input);
       const bike = this.resolveBike(actor, customer, input);
       const now = this.clock.now();

@@ -3,7 +3,6 @@ import { and, asc, desc, eq } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { finalChecks, jobStatusEvents, jobs } from '../db/schema';
 import { JobsListQuery, type JobListRow, type JobSearch } from './jobs-list.query';
-import type { DbTx } from '../infra/tasks';
 
 export type JobRow = typeof jobs.$inferSelect;
 export type NewJobRow = typeof jobs.$inferInsert;
@@ -19,11 +18,6 @@ export class JobsRepository {
 
   constructor(@Inject(DB) private readonly db: Db) {
     this.list = new JobsListQuery(db);
-  }
-
-  /** `tx` is for domain events and task enqueues that must commit with the change. */
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.db.transaction((tx) => fn(tx));
   }
 
   /** One page of the jobs list with owner, bike and mechanic joined in, and the matching total. */
@@ -49,7 +43,7 @@ export class JobsRepository {
   }
 
   insert(row: NewJobRow): JobRow {
-    return this.db.insert(jobs).values(row).returning().get();
+    return this.db.insert(jobs).values(row).returning().all()[0];
   }
 
   update(shopId: number, id: number, patch: Partial<NewJobRow>): JobRow {
@@ -58,7 +52,7 @@ export class JobsRepository {
       .set(patch)
       .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 
   insertEvent(row: typeof jobStatusEvents.$inferInsert): void {
@@ -75,7 +69,7 @@ export class JobsRepository {
   }
 
   insertFinalCheck(row: typeof finalChecks.$inferInsert): FinalCheckRow {
-    return this.db.insert(finalChecks).values(row).returning().get();
+    return this.db.insert(finalChecks).values(row).returning().all()[0];
   }
 
   latestFinalCheck(shopId: number, jobId: number): FinalCheckRow | undefined {

@@ -19,7 +19,7 @@ import type { AuthUser } from '../core/auth';
 import { JobMovedEvent, publish } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import { BookInService } from './book-in.service';
@@ -28,6 +28,7 @@ import { type JobRow, JobsRepository } from './jobs.repository';
 import { JobBalances } from './job-balances';
 import { ReportSentChecks } from './report-sent';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
+import { UnitOfWork } from '../core/db';
 
 type Actor = Pick<AuthUser, 'shopId'>;
 
@@ -40,6 +41,7 @@ export class JobsService {
 
   constructor(
     private readonly repo: JobsRepository,
+    private readonly uow: UnitOfWork,
     private readonly customers: CustomersService,
     private readonly bikes: BikesService,
     private readonly users: UsersService,
@@ -117,8 +119,10 @@ export class JobsService {
   update(actor: AuthUser, id: number, patch: UpdateJobRequest): JobDetail {
     this.access.change(actor, id, 'job');
     this.checkStaff(actor, patch.mechanicId);
-    this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
-    this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });
+    this.uow.run(() => {
+      this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
+      this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });
+    });
     return this.get(actor, id);
   }
 
@@ -146,7 +150,7 @@ export class JobsService {
     note: string,
     confirm: { confirmNoReport?: boolean; unpaidReason?: string | null } = {},
   ): void {
-    this.repo.transaction((tx) => {
+    this.uow.run((tx) => {
       const job = this.load(actor, id);
       if (!canTransition(job.status, to))
         throw new DomainError('ILLEGAL_TRANSITION', undefined, { from: job.status, to, allowed: allowedNextStatuses(job.status) });
@@ -210,7 +214,7 @@ export class JobsService {
       throw new DomainError('FINAL_CHECK_SAME_PERSON');
     }
     const now = this.clock.now();
-    const row = this.repo.transaction(() => {
+    const row = this.uow.run(() => {
       const check = this.repo.insertFinalCheck({
         shopId: actor.shopId,
         jobId: id,

@@ -1,7 +1,7 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { retryDelayMs } from '@benchproof/domain';
 import { APP_CONFIG, type AppConfig } from '../config';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { isPermanentSmtpError, MAIL_TRANSPORT, type MailTransport, type OutgoingAttachment } from '../infra/mail';
 import { STORAGE, type Storage } from '../infra/storage';
 import type { TaskContext } from '../infra/tasks';

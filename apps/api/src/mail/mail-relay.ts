@@ -1,11 +1,11 @@
 import { Inject, Injectable, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
 import { APP_CONFIG, type AppConfig } from '../config';
-import { CLOCK, type Clock } from '../infra/clock';
-import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
+import { CLOCK, type Clock } from '../core/clock';
+import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
 import { MailDelivery } from './mail-delivery';
 import { MailRepository } from './mail.repository';
 
-export const MAIL_SEND = 'mail.send';
+export const MAIL_SEND = 'mail.send' as const;
 
 /** The task key of one round of a message: a resend is a new round, so a settled task never blocks it. */
 export const mailTaskKey = (row: { id: number; round: number }): string => `${row.id}.${row.round}`;
@@ -29,8 +29,6 @@ export class MailRelay implements OnModuleInit, OnApplicationShutdown {
   ) {}
 
   onModuleInit(): void {
-    // One attempt per task: the relay schedules retries, so a runner's own retries would only double them.
-    this.tasks.register(MAIL_SEND, (task) => this.delivery.deliver(task), { concurrency: 2, maxAttempts: 1 });
     this.sweep();
     this.timer = setInterval(() => this.sweep(), this.cfg.MAIL_SWEEP_MS);
     this.timer.unref();
@@ -38,6 +36,12 @@ export class MailRelay implements OnModuleInit, OnApplicationShutdown {
 
   onApplicationShutdown(): void {
     if (this.timer) clearInterval(this.timer);
+  }
+
+  /** One attempt per task: the relay schedules retries, so a runner's own retries would only double them. */
+  @TaskHandler(MAIL_SEND, { concurrency: 2, maxAttempts: 1 })
+  deliver(task: TaskContext<typeof MAIL_SEND>): Promise<void> {
+    return this.delivery.deliver(task);
   }
 
   /** Hands every due message to the runner. */

@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq, inArray, isNull, lte, ne, or, sql } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { outboxMessages } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 
 export type OutboxRow = typeof outboxMessages.$inferSelect;
 export type NewOutboxRow = typeof outboxMessages.$inferInsert;
@@ -12,12 +12,8 @@ export type NewOutboxRow = typeof outboxMessages.$inferInsert;
 export class MailRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.db.transaction((tx) => fn(tx));
-  }
-
   insert(row: NewOutboxRow, tx?: DbTx): OutboxRow {
-    return (tx ?? this.db).insert(outboxMessages).values(row).returning().get();
+    return (tx ?? this.db).insert(outboxMessages).values(row).returning().all()[0];
   }
 
   find(shopId: number, id: number): OutboxRow | undefined {
@@ -66,7 +62,7 @@ export class MailRepository {
         ),
       )
       .returning()
-      .get();
+      .all()[0];
   }
 
   /**
@@ -109,7 +105,7 @@ export class MailRepository {
       .set({ status: 'queued', attempts: 0, round: sql`${outboxMessages.round} + 1`, nextTryAt: null })
       .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id), eq(outboxMessages.status, 'failed')))
       .returning()
-      .get();
+      .all()[0];
   }
 
   /**

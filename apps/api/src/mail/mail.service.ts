@@ -7,8 +7,9 @@ import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
-import { TASK_RUNNER, type DbTx, type TaskRunner } from '../infra/tasks';
+import { CLOCK, type Clock } from '../core/clock';
+import { type DbTx, UnitOfWork } from '../core/db';
+import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import type { OutboxAttachmentRef } from '../db/schema';
@@ -45,6 +46,7 @@ type Actor = Pick<AuthUser, 'id' | 'shopId'>;
 export class MailService implements OnModuleInit {
   constructor(
     private readonly repo: MailRepository,
+    private readonly uow: UnitOfWork,
     private readonly delivery: MailDelivery,
     private readonly jobs: JobsService,
     private readonly access: JobAccess,
@@ -91,7 +93,7 @@ export class MailService implements OnModuleInit {
       this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(row), shopId: row.shopId }, t);
       return row;
     };
-    return this.toDto(tx ? write(tx) : this.repo.transaction(write));
+    return this.toDto(tx ? write(tx) : this.uow.run(write));
   }
 
   /** The bodies that replace the sent ones (MailRepository.markSent), when the message carries secrets. */
@@ -112,7 +114,7 @@ export class MailService implements OnModuleInit {
     this.access.read(actor, jobId);
     const row = this.repo.find(actor.shopId, id);
     if (!row || row.jobId !== jobId) throw notFound('Message');
-    const again = this.repo.transaction((tx) => {
+    const again = this.uow.run((tx) => {
       const updated = this.repo.requeue(actor.shopId, id, tx);
       if (!updated) throw new DomainError('MESSAGE_NOT_RESENDABLE', undefined, { status: row.status });
       this.tasks.enqueue({ kind: MAIL_SEND, key: mailTaskKey(updated), shopId: updated.shopId }, tx);
@@ -140,7 +142,7 @@ export class MailService implements OnModuleInit {
     const attachments: OutboxAttachmentRef[] = attached
       ? [{ filename: pdf.filename, contentType: 'application/pdf', size: pdf.size, sha256: pdf.sha256, source: { kind: 'report', reportId } }]
       : [];
-    return this.repo.transaction((tx) => {
+    return this.uow.run((tx) => {
       const dto = this.queue({ shopId: actor.shopId, jobId, kind: 'report_ready', reportId, to, ...rendered, attachments, createdBy: actor.id }, tx);
       this.audit.record(actor, { action: 'report.sent', entityType: 'report', entityId: reportId, details: { jobId, to, attached, messageId: dto.id } });
       return dto;

@@ -1,18 +1,19 @@
-import { Inject, Injectable, type OnApplicationBootstrap, type OnModuleInit } from '@nestjs/common';
+import { Inject, Injectable, type OnApplicationBootstrap } from '@nestjs/common';
 import type { MediaVariant } from '@benchproof/contracts';
 import { Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { DERIVATIVE_SIZES, IMAGE, type ImageAdapter, type Rendition, type SizedVariant } from '../infra/image';
 import { STORAGE, type Storage } from '../infra/storage';
-import { type DbTx, TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
+import type { DbTx } from '../core/db';
+import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
 import { MediaFileCache } from './media-file-cache';
 import { MediaPhashService } from './media-phash.service';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 
 const IMAGE_VARIANTS: SizedVariant[] = ['thumb', 'screen', 'print'];
 
-export const DERIVATIVES_TASK = 'media.derivatives';
+export const DERIVATIVES_TASK = 'media.derivatives' as const;
 const DERIVATIVES_MAX_ATTEMPTS = 3;
 
 /** One file per (asset, variant): a re-run after a crash overwrites instead of adding a file. */
@@ -23,7 +24,7 @@ export const derivativeKey = (row: Pick<MediaAssetRow, 'id' | 'shopId'>, variant
  * keyed by asset id) and flips its status pending → ready, or failed after the last attempt.
  */
 @Injectable()
-export class MediaDerivativesService implements OnModuleInit, OnApplicationBootstrap {
+export class MediaDerivativesService implements OnApplicationBootstrap {
   constructor(
     private readonly repo: MediaRepository,
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
@@ -33,10 +34,6 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     private readonly fileCache: MediaFileCache,
   ) {}
-
-  onModuleInit(): void {
-    this.tasks.register(DERIVATIVES_TASK, (t) => this.make(t), { concurrency: this.cfg.DERIVATIVES_CONCURRENCY, maxAttempts: DERIVATIVES_MAX_ATTEMPTS });
-  }
 
   /** Assets stored before the durable runner existed have no task row; give them one. */
   onApplicationBootstrap(): void {
@@ -53,7 +50,8 @@ export class MediaDerivativesService implements OnModuleInit, OnApplicationBoots
     return this.tasks.settled();
   }
 
-  private async make(task: TaskContext): Promise<void> {
+  @TaskHandler(DERIVATIVES_TASK, { concurrency: (cfg) => cfg.DERIVATIVES_CONCURRENCY, maxAttempts: DERIVATIVES_MAX_ATTEMPTS })
+  async make(task: TaskContext<typeof DERIVATIVES_TASK>): Promise<void> {
     const assetId = Number(task.key);
     const row = this.repo.findById(assetId);
     if (!row || row.derivativeStatus !== 'pending' || !row.originalKey) return;

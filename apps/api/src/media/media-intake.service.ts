@@ -6,7 +6,7 @@ import { AuditService } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { SNIFFER, type FileSniffer } from '../infra/sniff';
 import { STORAGE, UPLOAD_TEMP, type Storage, type UploadTemp } from '../infra/storage';
@@ -15,6 +15,7 @@ import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 import { acceptedType, type AcceptedType } from './media-types';
+import { UnitOfWork, type DbTx } from '../core/db';
 
 /** A file already on local disk (multer temp file or finished resumable upload). */
 export interface IncomingFile {
@@ -46,6 +47,7 @@ interface Probed {
 @Injectable()
 export class MediaIntakeService {
   constructor(
+    private readonly uow: UnitOfWork,
     private readonly repo: MediaRepository,
     private readonly derivatives: MediaDerivativesService,
     private readonly audit: AuditService,
@@ -63,14 +65,7 @@ export class MediaIntakeService {
       const { type, dims } = await this.validate(file);
       const kind = this.kindFor(actor, jobId, meta, type);
       const probed = await this.probe(file.path, type, dims);
-      const row = await this.store(actor, jobId, file, meta, { type, kind, probed });
-      this.audit.record(actor, {
-        action: 'media.uploaded',
-        entityType: 'media_asset',
-        entityId: row.id,
-        details: { jobId, kind, mime: row.mime, sha256: row.sha256, bytes: row.byteSize, channel },
-      });
-      if (type.family === 'image') this.derivatives.enqueue(row);
+      const row = await this.store(actor, jobId, file, meta, { type, kind, probed, channel });
       return toMediaDto(row, []);
     } finally {
       await this.temp.remove(file.path);
@@ -135,33 +130,54 @@ export class MediaIntakeService {
     jobId: number,
     file: IncomingFile,
     meta: UploadMeta,
-    found: { type: AcceptedType; kind: MediaKind; probed: Probed },
+    found: { type: AcceptedType; kind: MediaKind; probed: Probed; channel: 'multipart' | 'resumable' },
   ): Promise<MediaAssetRow> {
     const stored = await this.storage.adoptLocalFile(`originals/${actor.shopId}/${randomUUID()}`, file.path, { immutable: true, sha256: file.sha256 });
     try {
-      return this.repo.insert({
-        shopId: actor.shopId,
-        jobId,
-        kind: found.kind,
-        phase: meta.phase,
-        area: meta.area,
-        source: meta.source,
-        caption: meta.caption,
-        originalKey: stored.key,
-        originalName: file.originalName.slice(0, 255),
-        mime: found.type.mime,
-        sha256: stored.sha256,
-        byteSize: stored.bytes,
-        ...found.probed,
-        uploadedAt: this.clock.now(),
-        uploadedBy: actor.id,
-        sourceAssetId: meta.sourceAssetId ?? null,
-        timecodeMs: meta.timecodeMs ?? null,
-        derivativeStatus: found.type.family === 'image' ? 'pending' : 'ready',
-      });
+      return this.uow.run((tx) => this.remember(actor, jobId, file, meta, found, stored, tx));
     } catch (err) {
       await this.storage.delete(stored.key);
       throw err;
     }
+  }
+
+  /** The row, its audit record and its derivative task commit together (or the caller removes the file). */
+  private remember(
+    actor: AuthUser,
+    jobId: number,
+    file: IncomingFile,
+    meta: UploadMeta,
+    found: { type: AcceptedType; kind: MediaKind; probed: Probed; channel: 'multipart' | 'resumable' },
+    stored: { key: string; sha256: string; bytes: number },
+    tx: DbTx,
+  ): MediaAssetRow {
+    const row = this.repo.insert({
+      shopId: actor.shopId,
+      jobId,
+      kind: found.kind,
+      phase: meta.phase,
+      area: meta.area,
+      source: meta.source,
+      caption: meta.caption,
+      originalKey: stored.key,
+      originalName: file.originalName.slice(0, 255),
+      mime: found.type.mime,
+      sha256: stored.sha256,
+      byteSize: stored.bytes,
+      ...found.probed,
+      uploadedAt: this.clock.now(),
+      uploadedBy: actor.id,
+      sourceAssetId: meta.sourceAssetId ?? null,
+      timecodeMs: meta.timecodeMs ?? null,
+      derivativeStatus: found.type.family === 'image' ? 'pending' : 'ready',
+    });
+    this.audit.record(actor, {
+      action: 'media.uploaded',
+      entityType: 'media_asset',
+      entityId: row.id,
+      details: { jobId, kind: found.kind, mime: row.mime, sha256: row.sha256, bytes: row.byteSize, channel: found.channel },
+    });
+    if (found.type.family === 'image') this.derivatives.enqueue(row, tx);
+    return row;
   }
 }

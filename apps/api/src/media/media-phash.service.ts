@@ -3,10 +3,10 @@ import { PAIRABLE_KINDS, perceptualHash } from '@benchproof/domain';
 import { buffer } from 'node:stream/consumers';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { STORAGE, type Storage } from '../infra/storage';
-import { TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
+import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
 
-export const PHASH_TASK = 'media.phash';
+export const PHASH_TASK = 'media.phash' as const;
 
 /**
  * Computes the perceptual hash of a still once its derivatives exist, for pair
@@ -22,10 +22,7 @@ export class MediaPhashService implements OnApplicationBootstrap {
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(IMAGE) private readonly image: ImageAdapter,
-  ) {
-    // Registered here rather than at bootstrap so enqueues from other bootstrap hooks find a handler.
-    this.tasks.register(PHASH_TASK, (task) => this.run(task), { concurrency: 1, maxAttempts: 3 });
-  }
+  ) {}
 
   /** Assets hashed before this feature existed, or whose task was lost in a crash. */
   onApplicationBootstrap(): void {
@@ -38,7 +35,8 @@ export class MediaPhashService implements OnApplicationBootstrap {
     this.tasks.enqueue({ kind: PHASH_TASK, key: String(row.id), shopId: row.shopId });
   }
 
-  private async run(task: TaskContext): Promise<void> {
+  @TaskHandler(PHASH_TASK, { concurrency: 1, maxAttempts: 3 })
+  async run(task: TaskContext<typeof PHASH_TASK>): Promise<void> {
     const row = this.repo.findById(Number(task.key));
     if (!row || row.phash || row.purgedAt || row.derivativeStatus !== 'ready') return;
     const screen = this.repo.findDerivative(row.id, 'screen');

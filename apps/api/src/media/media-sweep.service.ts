@@ -1,11 +1,11 @@
 import { Inject, Injectable, Logger, type OnModuleInit } from '@nestjs/common';
 import { APP_CONFIG, type AppConfig } from '../config';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { removeLeftovers, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
-import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
+import { TASK_RUNNER, TaskHandler, type TaskRunner } from '../infra/tasks';
 import { MediaTusService } from './media-tus.service';
 
-export const SWEEP_TASK = 'storage.sweep';
+export const SWEEP_TASK = 'storage.sweep' as const;
 /** A live upload or storage write touches its file every few seconds; half an hour idle means it is dead. */
 const LIVE_WRITE_GRACE_MS = 30 * 60_000;
 /** Finished task rows are kept a week for the screens and for debugging. */
@@ -31,14 +31,14 @@ export class MediaSweepService implements OnModuleInit {
 
   /** Runs before the server listens and before the task runner starts, so nothing of ours is live. */
   async onModuleInit(): Promise<void> {
-    this.tasks.register(SWEEP_TASK, () => this.sweep(), { concurrency: 1, maxAttempts: 3 });
     const removed = await this.removeLeftovers(null);
     if (removed.length > 0) this.logger.log(`Removed ${removed.length} leftover file(s) at boot`);
     // Expires old tus uploads once the tus server is up, then keeps the periodic chain going.
     this.tasks.enqueue({ kind: SWEEP_TASK, key: `boot-${this.clock.now().toISOString()}`, shopId: null });
   }
 
-  private async sweep(): Promise<void> {
+  @TaskHandler(SWEEP_TASK, { concurrency: 1, maxAttempts: 3 })
+  async sweep(): Promise<void> {
     const now = this.clock.now();
     const removed = await this.removeLeftovers(new Date(now.getTime() - LIVE_WRITE_GRACE_MS));
     const expired = await this.tus.expireAbandoned();

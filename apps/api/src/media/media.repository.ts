@@ -56,7 +56,7 @@ export class MediaRepository {
   }
 
   insert(row: NewMediaAssetRow): MediaAssetRow {
-    return this.db.insert(mediaAssets).values(row).returning().get();
+    return this.db.insert(mediaAssets).values(row).returning().all()[0];
   }
 
   findInShop(shopId: number, id: number): MediaAssetRow | undefined {
@@ -120,7 +120,7 @@ export class MediaRepository {
   }
 
   update(id: number, patch: AssetPatch): MediaAssetRow {
-    return this.db.update(mediaAssets).set(patch).where(eq(mediaAssets.id, id)).returning().get();
+    return this.db.update(mediaAssets).set(patch).where(eq(mediaAssets.id, id)).returning().all()[0];
   }
 
   derivativesOf(assetIds: number[]): MediaDerivativeRow[] {
@@ -161,14 +161,9 @@ export class MediaRepository {
       .map((r) => r.assetId);
   }
 
+  /** Two statements: call inside the caller's unit of work. */
   replaceLinks(findingId: number, assetIds: number[]): void {
-    this.db.transaction((tx) => {
-      tx.delete(findingMedia).where(eq(findingMedia.findingId, findingId)).run();
-      assetIds.forEach((assetId, position) => tx.insert(findingMedia).values({ findingId, assetId, position }).run());
-    });
-  }
-
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
+    this.db.delete(findingMedia).where(eq(findingMedia.findingId, findingId)).run();
+    assetIds.forEach((assetId, position) => this.db.insert(findingMedia).values({ findingId, assetId, position }).run());
   }
 }

@@ -6,11 +6,12 @@ import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { FindingsService } from '../findings';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess, type JobCaller } from '../jobs';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
+import { UnitOfWork } from '../core/db';
 
 /** An upright derivative in storage and its pixel size. */
 export interface UprightImage {
@@ -27,6 +28,7 @@ export interface UprightImage {
 export class MediaService {
   constructor(
     private readonly repo: MediaRepository,
+    private readonly uow: UnitOfWork,
     private readonly jobs: JobAccess,
     private readonly findings: FindingsService,
     private readonly derivatives: MediaDerivativesService,
@@ -62,13 +64,14 @@ export class MediaService {
     this.assertOpenJob(actor, jobId);
     const { ids, ...tags } = req;
     const patch = Object.fromEntries(Object.entries(tags).filter(([, v]) => v !== undefined));
-    const updated = this.repo.transaction(() => {
+    const updated = this.uow.run(() => {
       const rows = this.repo.listByIds(actor.shopId, jobId, [...new Set(ids)]);
       const missing = ids.filter((id) => !rows.some((r) => r.id === id));
       if (missing.length) throw new DomainError('NOT_FOUND', 'Some media were not found in this job.', { missing });
-      return rows.map((r) => this.repo.update(r.id, patch));
+      const changed = rows.map((r) => this.repo.update(r.id, patch));
+      for (const r of changed) this.audit.record(actor, { action: 'media.retagged', entityType: 'media_asset', entityId: r.id, details: { jobId, ...patch } });
+      return changed;
     });
-    for (const r of updated) this.audit.record(actor, { action: 'media.retagged', entityType: 'media_asset', entityId: r.id, details: { jobId, ...patch } });
     return this.toDtos(updated);
   }
 
@@ -77,8 +80,10 @@ export class MediaService {
     this.assertOpenJob(actor, jobId);
     const row = this.owned(actor, jobId, id);
     if (row.deletedAt) return;
-    this.repo.update(id, { deletedAt: this.clock.now(), deletedBy: actor.id });
-    this.audit.record(actor, { action: 'media.deleted', entityType: 'media_asset', entityId: id, details: { jobId, sha256: row.sha256 } });
+    this.uow.run(() => {
+      this.repo.update(id, { deletedAt: this.clock.now(), deletedBy: actor.id });
+      this.audit.record(actor, { action: 'media.deleted', entityType: 'media_asset', entityId: id, details: { jobId, sha256: row.sha256 } });
+    });
   }
 
   /**
@@ -90,11 +95,11 @@ export class MediaService {
     if (!row || row.purgedAt) throw notFound('Media');
     if (!row.deletedAt) throw new DomainError('CONFLICT', 'Delete the media before purging it.');
     await this.derivatives.removeFiles(row);
-    this.repo.transaction(() => {
+    this.uow.run(() => {
       this.repo.deleteDerivatives(id);
       this.repo.update(id, { purgedAt: this.clock.now(), originalKey: null });
+      this.audit.record(actor, { action: 'media.purged', entityType: 'media_asset', entityId: id, details: { jobId: row.jobId, sha256: row.sha256 } });
     });
-    this.audit.record(actor, { action: 'media.purged', entityType: 'media_asset', entityId: id, details: { jobId: row.jobId, sha256: row.sha256 } });
   }
 
   /** Replaces the shots shown with a finding (order kept); they must be live media of the same job. */
@@ -105,8 +110,10 @@ export class MediaService {
     const rows = this.repo.listByIds(actor.shopId, jobId, unique);
     const missing = unique.filter((id) => !rows.some((r) => r.id === id));
     if (missing.length) throw new DomainError('VALIDATION_FAILED', 'Only live media of this job can be linked.', { missing });
-    this.repo.replaceLinks(findingId, unique);
-    this.audit.record(actor, { action: 'finding.media_linked', entityType: 'finding', entityId: findingId, details: { jobId, assetIds: unique } });
+    this.uow.run(() => {
+      this.repo.replaceLinks(findingId, unique);
+      this.audit.record(actor, { action: 'finding.media_linked', entityType: 'finding', entityId: findingId, details: { jobId, assetIds: unique } });
+    });
     return this.findingMedia(actor, jobId, findingId);
   }
 

@@ -11,12 +11,8 @@ export type NewOwnerLinkRow = typeof ownerLinks.$inferInsert;
 export class OwnerLinksRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
-  }
-
   insert(row: NewOwnerLinkRow): OwnerLinkRow {
-    return this.db.insert(ownerLinks).values(row).returning().get();
+    return this.db.insert(ownerLinks).values(row).returning().all()[0];
   }
 
   byTokenHash(hash: string): OwnerLinkRow | undefined {
@@ -54,6 +50,6 @@ export class OwnerLinksRepository {
       .set(patch)
       .where(and(eq(ownerLinks.shopId, shopId), eq(ownerLinks.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 }

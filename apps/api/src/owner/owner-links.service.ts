@@ -5,12 +5,13 @@ import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CustomersService } from '../customers';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess } from '../jobs';
 import { OwnerEventsBus } from './owner-events';
 import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';
 import { hashOwnerToken, newOwnerToken, ownerTokenSignatureOk } from './owner-token';
 import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort } from './owner.ports';
+import { UnitOfWork } from '../core/db';
 
 const DAY_MS = 24 * 3600 * 1000;
 const iso = (d: Date | null): string | null => (d ? d.toISOString() : null);
@@ -20,6 +21,7 @@ const iso = (d: Date | null): string | null => (d ? d.toISOString() : null);
 export class OwnerLinksService {
   constructor(
     private readonly repo: OwnerLinksRepository,
+    private readonly uow: UnitOfWork,
     private readonly access: JobAccess,
     private readonly customers: CustomersService,
     private readonly audit: AuditService,
@@ -61,7 +63,7 @@ export class OwnerLinksService {
     const token = newOwnerToken(this.cfg.jwtSecret);
     const now = this.clock.now();
     const expiresAt = new Date(now.getTime() + input.expiresInDays * DAY_MS);
-    const row = this.repo.transaction(() => {
+    const row = this.uow.run(() => {
       this.repo.revokeOpen(actor.shopId, jobId, now, actor.id);
       return this.repo.insert({ shopId: actor.shopId, jobId, tokenHash: hashOwnerToken(token), createdBy: actor.id, createdAt: now, expiresAt });
     });
@@ -81,12 +83,15 @@ export class OwnerLinksService {
       });
       mail = sent.status === 'queued' ? { status: 'queued', reason: null } : sent;
     }
-    const saved = mail.status === 'queued' && owner.email ? this.repo.update(actor.shopId, row.id, { sentTo: owner.email }) : row;
-    this.audit.record(actor, {
-      action: 'owner_link.created',
-      entityType: 'job',
-      entityId: jobId,
-      details: { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status },
+    const saved = this.uow.run(() => {
+      const saved = mail.status === 'queued' && owner.email ? this.repo.update(actor.shopId, row.id, { sentTo: owner.email }) : row;
+      this.audit.record(actor, {
+        action: 'owner_link.created',
+        entityType: 'job',
+        entityId: jobId,
+        details: { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status },
+      });
+      return saved;
     });
     this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
     return { link: this.toDto(saved), url, mail };
@@ -98,8 +103,11 @@ export class OwnerLinksService {
     if (!row) throw notFound('Owner link');
     if (row.revokedAt) return this.toDto(row);
     const now = this.clock.now();
-    const saved = this.repo.update(actor.shopId, linkId, { revokedAt: now, revokedBy: actor.id });
-    this.audit.record(actor, { action: 'owner_link.revoked', entityType: 'job', entityId: jobId, details: { linkId } });
+    const saved = this.uow.run(() => {
+      const saved = this.repo.update(actor.shopId, linkId, { revokedAt: now, revokedBy: actor.id });
+      this.audit.record(actor, { action: 'owner_link.revoked', entityType: 'job', entityId: jobId, details: { linkId } });
+      return saved;
+    });
     this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
     return this.toDto(saved);
   }
@@ -118,11 +126,13 @@ export class OwnerLinksService {
   /** Every page view: kept on the link for staff, audited, and pushed to the job page. */
   viewed(owner: OwnerActor): void {
     const now = this.clock.now();
-    this.repo.update(owner.shopId, owner.linkId, { lastViewedAt: now });
-    this.audit.record(
-      { shopId: owner.shopId, id: null },
-      { action: 'owner.viewed', entityType: 'job', entityId: owner.jobId, details: { linkId: owner.linkId } },
-    );
+    this.uow.run(() => {
+      this.repo.update(owner.shopId, owner.linkId, { lastViewedAt: now });
+      this.audit.record(
+        { shopId: owner.shopId, id: null },
+        { action: 'owner.viewed', entityType: 'job', entityId: owner.jobId, details: { linkId: owner.linkId } },
+      );
+    });
     this.bus.emit(owner.shopId, { type: 'viewed', jobId: owner.jobId, at: now.toISOString() });
   }
 }

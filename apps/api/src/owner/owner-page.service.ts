@@ -6,7 +6,7 @@ import { ConsentService } from '../consent';
 import { DomainError } from '../core/http';
 import { CustomersService } from '../customers';
 import { FindingsService } from '../findings';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';

@@ -12,10 +12,6 @@ export type ShotPairPatch = Partial<Pick<ShotPairRow, 'caption' | 'position' | '
 export class PairsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
-  }
-
   list(shopId: number, jobId: number): ShotPairRow[] {
     return this.db
       .select()
@@ -64,7 +60,7 @@ export class PairsRepository {
   }
 
   insert(row: NewShotPairRow): ShotPairRow {
-    return this.db.insert(shotPairs).values(row).returning().get();
+    return this.db.insert(shotPairs).values(row).returning().all()[0];
   }
 
   update(shopId: number, id: number, patch: ShotPairPatch): ShotPairRow {
@@ -73,7 +69,7 @@ export class PairsRepository {
       .set(patch)
       .where(and(eq(shotPairs.shopId, shopId), eq(shotPairs.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 
   delete(shopId: number, id: number): void {

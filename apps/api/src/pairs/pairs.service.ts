@@ -5,11 +5,12 @@ import { pairProblem, PAIRABLE_KINDS, suggestPairs, type PairProblem } from '@be
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess, type JobCaller } from '../jobs';
 import { MediaService, type ShotForPairing } from '../media';
 import { PairsRepository, type ShotPairRow } from './pairs.repository';
 import { cropColumns, toPairDto } from './pairs.view';
+import { UnitOfWork } from '../core/db';
 
 /** Domain problem → error code and the form field it belongs under. */
 const PROBLEM_ERRORS: Record<PairProblem, { code: 'PAIR_NOT_A_STILL' | 'PAIR_WRONG_PHASE'; field: 'beforeAssetId' | 'afterAssetId' }> = {
@@ -24,6 +25,7 @@ const PROBLEM_ERRORS: Record<PairProblem, { code: 'PAIR_NOT_A_STILL' | 'PAIR_WRO
 export class PairsService {
   constructor(
     private readonly repo: PairsRepository,
+    private readonly uow: UnitOfWork,
     private readonly jobs: JobAccess,
     private readonly media: MediaService,
     private readonly audit: AuditService,
@@ -60,8 +62,8 @@ export class PairsService {
     }
     if (this.repo.findByShots(actor.shopId, jobId, before.shot.id, after.shot.id)) throw new DomainError('PAIR_EXISTS');
     const now = this.clock.now();
-    const row = this.repo.transaction(() =>
-      this.repo.insert({
+    const row = this.uow.run(() => {
+      const saved = this.repo.insert({
         shopId: actor.shopId,
         jobId,
         beforeAssetId: before.shot.id,
@@ -72,13 +74,14 @@ export class PairsService {
         createdBy: actor.id,
         createdAt: now,
         updatedAt: now,
-      }),
-    );
-    this.audit.record(actor, {
-      action: 'pair.created',
-      entityType: 'job',
-      entityId: jobId,
-      details: { pairId: row.id, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId },
+      });
+      this.audit.record(actor, {
+        action: 'pair.created',
+        entityType: 'job',
+        entityId: jobId,
+        details: { pairId: saved.id, beforeAssetId: saved.beforeAssetId, afterAssetId: saved.afterAssetId },
+      });
+      return saved;
     });
     return toPairDto(row, before.dto, after.dto);
   }
@@ -87,20 +90,24 @@ export class PairsService {
     this.openJob(actor, jobId);
     this.owned(actor, jobId, pairId);
     const crop = patch.crop === undefined ? {} : cropColumns(patch.crop);
-    this.repo.update(actor.shopId, pairId, { ...(patch.caption === undefined ? {} : { caption: patch.caption }), ...crop, updatedAt: this.clock.now() });
-    this.audit.record(actor, { action: 'pair.updated', entityType: 'job', entityId: jobId, details: { pairId, fields: Object.keys(patch) } });
+    this.uow.run(() => {
+      this.repo.update(actor.shopId, pairId, { ...(patch.caption === undefined ? {} : { caption: patch.caption }), ...crop, updatedAt: this.clock.now() });
+      this.audit.record(actor, { action: 'pair.updated', entityType: 'job', entityId: jobId, details: { pairId, fields: Object.keys(patch) } });
+    });
     return this.one(actor, jobId, pairId);
   }
 
   delete(actor: AuthUser, jobId: number, pairId: number): void {
     this.openJob(actor, jobId);
     const row = this.owned(actor, jobId, pairId);
-    this.repo.delete(actor.shopId, pairId);
-    this.audit.record(actor, {
-      action: 'pair.deleted',
-      entityType: 'job',
-      entityId: jobId,
-      details: { pairId, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId },
+    this.uow.run(() => {
+      this.repo.delete(actor.shopId, pairId);
+      this.audit.record(actor, {
+        action: 'pair.deleted',
+        entityType: 'job',
+        entityId: jobId,
+        details: { pairId, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId },
+      });
     });
   }
 
@@ -115,8 +122,10 @@ export class PairsService {
       });
     }
     const now = this.clock.now();
-    this.repo.transaction(() => req.ids.forEach((id, position) => this.repo.update(actor.shopId, id, { position, updatedAt: now })));
-    this.audit.record(actor, { action: 'pairs.reordered', entityType: 'job', entityId: jobId, details: { ids: req.ids } });
+    this.uow.run(() => {
+      req.ids.forEach((id, position) => this.repo.update(actor.shopId, id, { position, updatedAt: now }));
+      this.audit.record(actor, { action: 'pairs.reordered', entityType: 'job', entityId: jobId, details: { ids: req.ids } });
+    });
     return this.list(actor, jobId);
   }
 

@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { BalanceDto } from '@benchproof/contracts';
 import { estimateTotals, jobBalance, paymentState, workChargeMinor, type Charge } from '@benchproof/domain';
 import { ShopsService } from '../shops';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 import { type ChargedRecommendation, PaymentsRepository, type PaymentRow } from './payments.repository';
 
 /** A recommendation's net: each line rounded as printed (libs/domain estimateTotals), tax left to the balance. */

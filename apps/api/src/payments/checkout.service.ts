@@ -3,8 +3,9 @@ import type { CheckoutStart, OwnerPayment } from '@benchproof/contracts';
 import type { OwnerActor } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
+import { UnitOfWork } from '../core/db';
 import { DomainError } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { PAYMENT_PROVIDER, PaymentProviderError, WebhookSignatureError, type PaymentProvider, type ProviderEvent } from '../infra/payments';
 import { JobAccess } from '../jobs';
 import { ShopsService } from '../shops';
@@ -21,6 +22,7 @@ export class CheckoutService {
   private readonly log = new Logger('Payments');
 
   constructor(
+    private readonly uow: UnitOfWork,
     private readonly repo: PaymentsRepository,
     private readonly balances: BalanceService,
     private readonly payments: PaymentsService,
@@ -59,14 +61,16 @@ export class CheckoutService {
       .catch((e: unknown) => {
         throw new DomainError('PAYMENT_PROVIDER_ERROR', undefined, { reason: e instanceof PaymentProviderError ? e.message : String(e) });
       });
-    this.repo.insertCheckout({
-      ...{ shopId: owner.shopId, jobId: job.id, providerId: session.id, idempotencyKey, amountMinor: dueMinor, currency },
-      ...{ url: session.url, status: 'open', createdAt: this.clock.now() },
+    this.uow.run(() => {
+      this.repo.insertCheckout({
+        ...{ shopId: owner.shopId, jobId: job.id, providerId: session.id, idempotencyKey, amountMinor: dueMinor, currency },
+        ...{ url: session.url, status: 'open', createdAt: this.clock.now() },
+      });
+      this.audit.record(
+        { shopId: owner.shopId, id: null },
+        { action: 'payment.checkout_opened', entityType: 'job', entityId: job.id, details: { amountMinor: dueMinor, session: session.id } },
+      );
     });
-    this.audit.record(
-      { shopId: owner.shopId, id: null },
-      { action: 'payment.checkout_opened', entityType: 'job', entityId: job.id, details: { amountMinor: dueMinor, session: session.id } },
-    );
     return { url: session.url };
   }
 
@@ -90,7 +94,7 @@ export class CheckoutService {
       return { received: true, recorded: false };
     }
     if (!event.paid) return { received: true, recorded: false };
-    const recorded = this.repo.transaction((tx) => {
+    const recorded = this.uow.run((tx) => {
       this.repo.setCheckoutStatus(checkout.id, 'complete', tx);
       const p = { paymentRef: event.paymentRef, amountMinor: event.amountMinor, currency: event.currency, expectedMinor: checkout.amountMinor };
       return this.payments.recordOnline({ shopId: checkout.shopId }, checkout.jobId, p, tx) !== null;

@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, inArray, isNotNull } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { checkoutSessions, jobs, payments, recommendations, users, workEntries } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 
 export type PaymentRow = typeof payments.$inferSelect;
 export type NewPaymentRow = typeof payments.$inferInsert;
@@ -17,10 +17,6 @@ export type ChargedWork = { jobId: number; minutes: number; rateMinor: number };
 @Injectable()
 export class PaymentsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
-
-  transaction<T>(fn: (tx: DbTx) => T): T {
-    return this.db.transaction((tx) => fn(tx));
-  }
 
   approvedRecommendations(shopId: number, jobIds: number[]): ChargedRecommendation[] {
     const r = recommendations;
@@ -79,7 +75,7 @@ export class PaymentsRepository {
 
   /** Inserts unless a row with the same provider reference exists (a replayed webhook); undefined then. */
   insert(row: NewPaymentRow, tx?: DbTx): PaymentRow | undefined {
-    return (tx ?? this.db).insert(payments).values(row).onConflictDoNothing({ target: payments.providerRef }).returning().get();
+    return (tx ?? this.db).insert(payments).values(row).onConflictDoNothing({ target: payments.providerRef }).returning().all()[0];
   }
 
   openCheckout(shopId: number, jobId: number, amountMinor: number): CheckoutRow | undefined {
@@ -103,10 +99,8 @@ export class PaymentsRepository {
   }
 
   insertCheckout(row: typeof checkoutSessions.$inferInsert): CheckoutRow {
-    return (
-      this.db.insert(checkoutSessions).values(row).onConflictDoNothing({ target: checkoutSessions.providerId }).returning().get() ??
-      this.checkoutByProviderId(row.providerId)!
-    );
+    this.db.insert(checkoutSessions).values(row).onConflictDoNothing({ target: checkoutSessions.providerId }).run();
+    return this.checkoutByProviderId(row.providerId)!;
   }
 
   /** Webhooks name the provider's session id only; the row tells shop and job. */

@@ -3,10 +3,11 @@ import type { BalanceDto, JobPayments, PaymentDto, RecordPaymentRequest, RefundR
 import { randomUUID } from 'node:crypto';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
+import { UnitOfWork } from '../core/db';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { PAYMENT_PROVIDER, PaymentProviderError, type PaymentProvider } from '../infra/payments';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 import { JobAccess, JobsService } from '../jobs';
 import { MailService } from '../mail';
 import { UsersService } from '../users';
@@ -26,6 +27,7 @@ const METHOD_LABEL: Record<PaymentRow['method'], string> = {
 @Injectable()
 export class PaymentsService implements OnModuleInit {
   constructor(
+    private readonly uow: UnitOfWork,
     private readonly repo: PaymentsRepository,
     private readonly balances: BalanceService,
     private readonly access: JobAccess,
@@ -56,7 +58,7 @@ export class PaymentsService implements OnModuleInit {
     this.access.read(actor, jobId);
     const takenBy = input.takenById ?? actor.id;
     if (input.takenById) this.users.get(actor, input.takenById);
-    this.repo.transaction((tx) => {
+    this.uow.run((tx) => {
       const before = this.balances.balance(actor.shopId, jobId, tx);
       if (before.dueMinor <= 0) throw new DomainError('NOTHING_DUE');
       if (input.amountMinor > before.dueMinor)
@@ -97,7 +99,7 @@ export class PaymentsService implements OnModuleInit {
         throw new DomainError('PAYMENT_PROVIDER_ERROR', undefined, { reason: e instanceof PaymentProviderError ? e.message : String(e) });
       });
     }
-    this.repo.transaction((tx) => {
+    this.uow.run((tx) => {
       const row = this.insertRow(
         {
           shopId: actor.shopId,

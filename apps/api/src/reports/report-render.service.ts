@@ -1,24 +1,21 @@
-import { Inject, Injectable, type OnApplicationBootstrap } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import { createElement } from 'react';
 import { Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
 import { APP_CONFIG, type AppConfig } from '../config';
-import type { AuthUser } from '../core/auth';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
+import type { DbTx } from '../core/db';
 import { IMAGE, type ImageAdapter } from '../infra/image';
 import { PDF, type PdfAdapter } from '../infra/pdf';
 import { STORAGE, type Storage } from '../infra/storage';
-import { TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
+import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
 import { ReportDocument } from './pdf/report.pdf';
 import type { IssueStamp, ReportImage, ReportSnapshot } from './report-data';
 import { ANNOTATED_IMAGE_SOURCE, type AnnotatedImageSource } from './report-sources';
 import { ReportsRepository, type ReportRow } from './reports.repository';
 
-export const RENDER_TASK = 'report.render';
+export const RENDER_TASK = 'report.render' as const;
 const SHOT_READS_AT_ONCE = 6;
-
-/** Who asked for the render: the shots are fetched with that person's access. */
-export type RenderActor = Pick<AuthUser, 'id' | 'shopId' | 'role' | 'email' | 'name'>;
 
 /**
  * Renders a report row to PDF in the background (task kind 'report.render', keyed
@@ -26,7 +23,7 @@ export type RenderActor = Pick<AuthUser, 'id' | 'shopId' | 'role' | 'email' | 'n
  * issued PDF and its SHA-256 never change.
  */
 @Injectable()
-export class ReportRenderService implements OnApplicationBootstrap {
+export class ReportRenderService {
   constructor(
     private readonly repo: ReportsRepository,
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
@@ -38,24 +35,22 @@ export class ReportRenderService implements OnApplicationBootstrap {
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
   ) {}
 
-  onApplicationBootstrap(): void {
-    this.tasks.register(RENDER_TASK, (task) => this.run(task), { concurrency: 1, maxAttempts: 3 });
-  }
-
-  enqueue(row: ReportRow, actor: RenderActor): void {
-    this.tasks.enqueue({ kind: RENDER_TASK, key: String(row.id), shopId: row.shopId, payload: { reportId: row.id, actor } });
+  /** The shots are read in the report's own shop; the snapshot already says what to print. */
+  enqueue(row: Pick<ReportRow, 'id' | 'shopId'>, tx?: DbTx): void {
+    this.tasks.enqueue({ kind: RENDER_TASK, key: String(row.id), shopId: row.shopId, payload: { reportId: row.id } }, tx);
   }
 
   progress(reportId: number): number {
     return this.tasks.status(RENDER_TASK, String(reportId))?.progress ?? 0;
   }
 
-  private async run(task: TaskContext): Promise<void> {
-    const row = this.repo.findById(Number(task.payload.reportId));
+  @TaskHandler(RENDER_TASK, { concurrency: 1, maxAttempts: 3 })
+  async run(task: TaskContext<typeof RENDER_TASK>): Promise<void> {
+    const row = this.repo.findById(task.payload.reportId);
     if (!row || row.state === 'ready') return;
     if (row.state === 'failed') this.repo.update(row.id, { state: 'rendering', error: null });
     try {
-      const pdf = await this.renderPdf(row, task.payload.actor as AuthUser, (f) => task.progress(f));
+      const pdf = await this.renderPdf(row, (f) => task.progress(f));
       const stored = await this.storage.put(`reports/${row.shopId}/${row.id}.pdf`, Readable.from([pdf]));
       this.repo.update(row.id, {
         state: 'ready',
@@ -73,12 +68,12 @@ export class ReportRenderService implements OnApplicationBootstrap {
   }
 
   /** Loads every shot (the prepared print JPEGs), then lays out and writes the PDF. */
-  async renderPdf(row: ReportRow, actor: AuthUser, progress: (f: number) => void = () => undefined): Promise<Buffer> {
+  async renderPdf(row: ReportRow, progress: (f: number) => void = () => undefined): Promise<Buffer> {
     const snap = row.snapshot as ReportSnapshot;
     const ids = [
       ...new Set([...snap.findings.flatMap((f) => f.shots), ...snap.pairs.flatMap((p) => [p.before, p.after]), ...snap.scopeStills].map((s) => s.assetId)),
     ];
-    const images = await this.loadShots(actor, ids, progress);
+    const images = await this.loadShots(row.shopId, ids, progress);
     const logo = await this.logo(snap.shop.logoKey);
     const doc = createElement(ReportDocument, { snap, pageSize: row.pageSize, images, logo, stamp: this.stamp(row) });
     progress(0.7);
@@ -91,14 +86,14 @@ export class ReportRenderService implements OnApplicationBootstrap {
    * Reads the shots a few at a time: one after another, 40 small file reads and their
    * lookups took about as long as a fifth of the layout, mostly waiting on the disk.
    */
-  private async loadShots(actor: AuthUser, ids: number[], progress: (f: number) => void): Promise<Map<number, ReportImage>> {
+  private async loadShots(shopId: number, ids: number[], progress: (f: number) => void): Promise<Map<number, ReportImage>> {
     const images = new Map<number, ReportImage>();
     let next = 0;
     let done = 0;
     const worker = async () => {
       while (next < ids.length) {
         const id = ids[next++];
-        const img = await this.shots.printJpeg(actor, id);
+        const img = await this.shots.printJpeg(shopId, id);
         if (img) images.set(id, img);
         progress(0.05 + (0.6 * ++done) / ids.length);
       }

@@ -13,7 +13,7 @@ import {
 } from '@benchproof/domain';
 import type { AuthUser } from '../core/auth';
 import { FindingsService } from '../findings';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { JobsService } from '../jobs';
 import { MediaService } from '../media';

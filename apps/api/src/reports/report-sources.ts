@@ -10,7 +10,7 @@ import type { ReportImage, ShotRef } from './report-data';
  * The bytes are embedded as they are, so they must already be sized for print.
  */
 export interface AnnotatedImageSource {
-  printJpeg(actor: AuthUser, assetId: number): Promise<ReportImage | null>;
+  printJpeg(shopId: number, assetId: number): Promise<ReportImage | null>;
 }
 export const ANNOTATED_IMAGE_SOURCE = Symbol('ANNOTATED_IMAGE_SOURCE');
 
@@ -32,9 +32,9 @@ export const PAIRS_SOURCE = Symbol('PAIRS_SOURCE');
 export class AnnotatedPrintSource implements AnnotatedImageSource {
   constructor(private readonly renders: AnnotationRenderService) {}
 
-  async printJpeg(actor: AuthUser, assetId: number): Promise<ReportImage | null> {
+  async printJpeg(shopId: number, assetId: number): Promise<ReportImage | null> {
     try {
-      const { data, width, height } = await this.renders.annotatedWithBytes(actor.shopId, assetId, 'print');
+      const { data, width, height } = await this.renders.annotatedWithBytes(shopId, assetId, 'print');
       return { data, width, height };
     } catch {
       // A video, or a photo whose derivatives are not made yet: the report prints the caption without the picture.

@@ -12,11 +12,11 @@ export class ReportsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
   insert(row: NewReportRow): ReportRow {
-    return this.db.insert(reports).values(row).returning().get();
+    return this.db.insert(reports).values(row).returning().all()[0];
   }
 
   update(id: number, patch: ReportPatch): ReportRow {
-    return this.db.update(reports).set(patch).where(eq(reports.id, id)).returning().get();
+    return this.db.update(reports).set(patch).where(eq(reports.id, id)).returning().all()[0];
   }
 
   /** Render tasks carry only the id; the task runner already scoped the work when it was queued. */
@@ -55,10 +55,6 @@ export class ReportsRepository {
       .where(and(eq(reports.shopId, shopId), eq(reports.jobId, jobId)))
       .get();
     return (row?.v ?? 0) + 1;
-  }
-
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
   }
 
   /**

@@ -6,16 +6,17 @@ import { buffer } from 'node:stream/consumers';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { PDF_PAGES, type PdfPageImages } from '../infra/pdf';
 import { STORAGE, type Storage } from '../infra/storage';
 import { JobAccess } from '../jobs';
 import { ShopsService } from '../shops';
 import type { ReportSnapshot } from './report-data';
-import { ReportRenderService, type RenderActor } from './report-render.service';
+import { ReportRenderService } from './report-render.service';
 import { ReportSnapshotService } from './report-snapshot.service';
 import { toReportDto } from './reports.mapper';
 import { ReportsRepository, type ReportRow } from './reports.repository';
+import { UnitOfWork } from '../core/db';
 
 /** An issued report's PDF, for the mail feature (attachment) and downloads. */
 export interface IssuedReportFile {
@@ -30,13 +31,12 @@ export interface IssuedReportFile {
   bytes(): Promise<Buffer>;
 }
 
-const actorOf = (u: AuthUser): RenderActor => ({ id: u.id, shopId: u.shopId, role: u.role, email: u.email, name: u.name });
-
 /** Drafts, issued versions and the public check of a job's bench report. */
 @Injectable()
 export class ReportsService implements OnApplicationBootstrap {
   constructor(
     private readonly repo: ReportsRepository,
+    private readonly uow: UnitOfWork,
     private readonly snapshots: ReportSnapshotService,
     private readonly renderer: ReportRenderService,
     private readonly jobs: JobAccess,
@@ -49,10 +49,7 @@ export class ReportsService implements OnApplicationBootstrap {
 
   /** Renders left unfinished by a restart are queued again (the render is idempotent). */
   onApplicationBootstrap(): void {
-    for (const row of this.repo.listRendering()) {
-      const actor = (row.snapshot as { renderedFor?: RenderActor }).renderedFor;
-      if (actor) this.renderer.enqueue(row, actor);
-    }
+    for (const row of this.repo.listRendering()) this.renderer.enqueue(row);
   }
 
   list(actor: AuthUser, jobId: number): ReportDto[] {
@@ -69,18 +66,21 @@ export class ReportsService implements OnApplicationBootstrap {
   /** Freezes the job's records now and renders a draft in the background; answers at once. */
   async createDraft(actor: AuthUser, jobId: number): Promise<ReportDto> {
     this.jobs.read(actor, jobId);
-    const snapshot = { ...(await this.snapshots.build(actor, jobId)), renderedFor: actorOf(actor) };
-    const row = this.repo.insert({
-      shopId: actor.shopId,
-      jobId,
-      kind: 'draft',
-      state: 'rendering',
-      pageSize: this.shops.settings(actor.shopId).pageSize,
-      snapshot,
-      createdBy: actor.id,
-      createdAt: this.clock.now(),
+    const snapshot = await this.snapshots.build(actor, jobId);
+    const row = this.uow.run((tx) => {
+      const draft = this.repo.insert({
+        shopId: actor.shopId,
+        jobId,
+        kind: 'draft',
+        state: 'rendering',
+        pageSize: this.shops.settings(actor.shopId).pageSize,
+        snapshot,
+        createdBy: actor.id,
+        createdAt: this.clock.now(),
+      });
+      this.renderer.enqueue(draft, tx);
+      return draft;
     });
-    this.renderer.enqueue(row, actorOf(actor));
     return this.get(actor, jobId, row.id);
   }
 
@@ -93,12 +93,12 @@ export class ReportsService implements OnApplicationBootstrap {
     if (draft.kind !== 'draft') throw new DomainError('CONFLICT', 'Only a draft can be issued.');
     if (draft.state !== 'ready') throw new DomainError('REPORT_NOT_READY');
     const issuedAt = this.clock.now();
-    const row = this.repo.transaction(() => {
+    const row = this.uow.run((tx) => {
       const version = this.repo.nextVersion(actor.shopId, jobId);
       const fingerprint = createHash('sha256')
         .update(JSON.stringify({ shopId: actor.shopId, jobId, version, issuedAt: issuedAt.toISOString(), snapshot: draft.snapshot }))
         .digest('hex');
-      return this.repo.insert({
+      const issued = this.repo.insert({
         shopId: actor.shopId,
         jobId,
         kind: 'issued',
@@ -112,13 +112,14 @@ export class ReportsService implements OnApplicationBootstrap {
         createdAt: issuedAt,
         issuedAt,
       });
-    });
-    this.renderer.enqueue(row, actorOf(actor));
-    this.audit.record(actor, {
-      action: 'report.issued',
-      entityType: 'report',
-      entityId: row.id,
-      details: { jobId, version: row.version, fingerprint: row.fingerprint },
+      this.renderer.enqueue(issued, tx);
+      this.audit.record(actor, {
+        action: 'report.issued',
+        entityType: 'report',
+        entityId: issued.id,
+        details: { jobId, version: issued.version, fingerprint: issued.fingerprint },
+      });
+      return issued;
     });
     return this.get(actor, jobId, row.id);
   }

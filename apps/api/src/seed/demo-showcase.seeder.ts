@@ -4,7 +4,7 @@ import { DEMO_SHOTS } from '@benchproof/seeds';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { consents, mediaAssets, shops, shotPairs } from '../db/schema';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 
 /**
  * Showcase demo: in every shop the older job with shots gets its true before/after

@@ -3,7 +3,7 @@ import { DEMO_BIKES, DEMO_JOBS, DEMO_OWNERS, type DemoJob } from '@benchproof/se
 import { FINAL_CHECK_ITEMS, type JobStatus } from '@benchproof/domain';
 import { type AuthUser } from '../core/auth';
 import { FindingsService } from '../findings';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { JobsService } from '../jobs';
 import { WorkLogService } from '../work-log';

@@ -5,7 +5,7 @@ import { DB, type Db } from '../core/db';
 import { shops, users } from '../db/schema';
 import { backdateJob } from './seed-backdate';
 import { SeedRecords, type ShopActors } from './seed-records';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { hashPassword } from '../users';
 import { DemoMediaSeeder } from './demo-media.seeder';
 import { DemoShowcaseSeeder } from './demo-showcase.seeder';
@@ -67,7 +67,7 @@ export class SeedService {
       .insert(shops)
       .values({ ...settings, createdAt: now })
       .returning()
-      .get();
+      .all()[0];
     for (const s of staff) {
       this.db
         .insert(users)

@@ -14,7 +14,7 @@ export class ShopsRepository {
   }
 
   update(id: number, patch: Partial<ShopRow>): ShopRow {
-    return this.db.update(shops).set(patch).where(eq(shops.id, id)).returning().get();
+    return this.db.update(shops).set(patch).where(eq(shops.id, id)).returning().all()[0];
   }
 
   /** Takes the shop's next job sequence number atomically. */
@@ -24,7 +24,7 @@ export class ShopsRepository {
       .set({ nextJobSeq: sql`${shops.nextJobSeq} + 1` })
       .where(eq(shops.id, id))
       .returning({ seq: shops.nextJobSeq })
-      .get();
+      .all()[0];
     return row.seq - 1;
   }
 }

@@ -4,6 +4,7 @@ import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
 import { type ShopRow, ShopsRepository } from './shops.repository';
+import { UnitOfWork } from '../core/db';
 
 const toDto = (s: ShopRow): ShopSettingsDto => ({
   id: s.id,
@@ -39,6 +40,7 @@ export interface ShopLogo {
 @Injectable()
 export class ShopsService {
   constructor(
+    private readonly uow: UnitOfWork,
     private readonly repo: ShopsRepository,
     private readonly audit: AuditService,
   ) {}
@@ -50,8 +52,11 @@ export class ShopsService {
   }
 
   update(actor: AuthUser, patch: UpdateShopSettingsRequest): ShopSettingsDto {
-    const updated = this.repo.update(actor.shopId, patch);
-    this.audit.record(actor, { action: 'shop.settings_updated', entityType: 'shop', entityId: actor.shopId, details: { fields: Object.keys(patch) } });
+    const updated = this.uow.run(() => {
+      const saved = this.repo.update(actor.shopId, patch);
+      this.audit.record(actor, { action: 'shop.settings_updated', entityType: 'shop', entityId: actor.shopId, details: { fields: Object.keys(patch) } });
+      return saved;
+    });
     return toDto(updated);
   }
 
@@ -65,17 +70,20 @@ export class ShopsService {
   /** Records a new logo (null removes it); returns the previous one so the caller can delete its file. */
   setLogo(actor: AuthUser, logo: ShopLogo | null): { settings: ShopSettingsDto; previous: ShopLogo | null } {
     const previous = this.logo(actor.shopId);
-    const updated = this.repo.update(actor.shopId, {
-      logoKey: logo?.key ?? null,
-      logoSha256: logo?.sha256 ?? null,
-      logoWidth: logo?.width ?? null,
-      logoHeight: logo?.height ?? null,
-    });
-    this.audit.record(actor, {
-      action: logo ? 'shop.logo_set' : 'shop.logo_removed',
-      entityType: 'shop',
-      entityId: actor.shopId,
-      details: { sha256: logo?.sha256 ?? null },
+    const updated = this.uow.run(() => {
+      const saved = this.repo.update(actor.shopId, {
+        logoKey: logo?.key ?? null,
+        logoSha256: logo?.sha256 ?? null,
+        logoWidth: logo?.width ?? null,
+        logoHeight: logo?.height ?? null,
+      });
+      this.audit.record(actor, {
+        action: logo ? 'shop.logo_set' : 'shop.logo_removed',
+        entityType: 'shop',
+        entityId: actor.shopId,
+        details: { sha256: logo?.sha256 ?? null },
+      });
+      return saved;
     });
     return { settings: toDto(updated), previous };
   }

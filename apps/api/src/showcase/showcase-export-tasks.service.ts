@@ -1,21 +1,17 @@
 import { PassThrough, Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
 import { randomUUID } from 'node:crypto';
-import { Inject, Injectable, type OnModuleInit } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import { ERROR_CODES, type ErrorCode, type ShowcaseExportTaskDto, type ShowcaseZipRequest } from '@benchproof/contracts';
 import type { AuthUser } from '../core/auth';
 import { DomainError } from '../core/http';
 import { STORAGE, type Storage } from '../infra/storage';
-import { TASK_RUNNER, type TaskContext, type TaskRunner } from '../infra/tasks';
+import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
+import { UsersService } from '../users';
 import { ShowcaseExportService } from './showcase-export.service';
 import { ShowcaseService } from './showcase.service';
 
-export const EXPORT_TASK = 'showcase.export';
-
-interface TaskPayload {
-  actor: AuthUser;
-  req: ShowcaseZipRequest;
-}
+export const EXPORT_TASK = 'showcase.export' as const;
 
 /** An export running in this process: which jobs it draws on, and how to stop it. */
 interface InFlight {
@@ -31,7 +27,7 @@ interface InFlight {
  * export at once (ShowcaseConsentListener calls `cancelFor`), not only at its next file.
  */
 @Injectable()
-export class ShowcaseExportTasks implements OnModuleInit {
+export class ShowcaseExportTasks {
   private readonly inFlight = new Map<string, InFlight>();
 
   constructor(
@@ -39,17 +35,13 @@ export class ShowcaseExportTasks implements OnModuleInit {
     private readonly exports: ShowcaseExportService,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
+    private readonly users: UsersService,
   ) {}
-
-  onModuleInit(): void {
-    this.tasks.register(EXPORT_TASK, (t) => this.run(t), { concurrency: 1, maxAttempts: 1 });
-  }
 
   start(actor: AuthUser, req: ShowcaseZipRequest): ShowcaseExportTaskDto {
     for (const item of req.items) this.showcase.clear(actor, item.pairId);
     const key = `${actor.id}-${randomUUID()}`;
-    const payload = { actor: { id: actor.id, shopId: actor.shopId, role: actor.role, email: actor.email, name: actor.name }, req };
-    this.tasks.enqueue({ kind: EXPORT_TASK, key, shopId: actor.shopId, payload });
+    this.tasks.enqueue({ kind: EXPORT_TASK, key, shopId: actor.shopId, payload: { userId: actor.id, req } });
     return this.status(actor, key);
   }
 
@@ -84,21 +76,25 @@ export class ShowcaseExportTasks implements OnModuleInit {
       if (run.shopId === shopId && run.jobIds.has(jobId)) run.abort.abort(new DomainError(problem, undefined, { jobId }));
     }
     for (const done of this.tasks.finished(EXPORT_TASK, shopId)) {
-      const pairIds = (done.payload as unknown as TaskPayload).req.items.map((i) => i.pairId);
+      const pairIds = done.payload.req.items.map((i) => i.pairId);
       if (!this.showcase.jobsOf(shopId, pairIds).has(jobId)) continue;
       await this.storage.delete(listKey(done.key));
       await this.storage.delete(zipKey(done.key));
     }
   }
 
-  private async run(t: TaskContext): Promise<void> {
-    const p = t.payload as unknown as TaskPayload;
-    const pairIds = p.req.items.map((i) => i.pairId);
+  /** Runs with the rights the user has now (a deactivated user's export fails FORBIDDEN). */
+  @TaskHandler(EXPORT_TASK, { concurrency: 1, maxAttempts: 1 })
+  async run(t: TaskContext<typeof EXPORT_TASK>): Promise<void> {
+    const { userId, req } = t.payload;
+    const actor = t.shopId === null ? null : this.users.identity(t.shopId, userId);
+    if (!actor) throw new Error('FORBIDDEN: The person who started this export can no longer make one.');
+    const pairIds = req.items.map((i) => i.pairId);
     const abort = new AbortController();
-    this.inFlight.set(t.key, { shopId: p.actor.shopId, jobIds: this.showcase.jobsOf(p.actor.shopId, pairIds), abort });
+    this.inFlight.set(t.key, { shopId: actor.shopId, jobIds: this.showcase.jobsOf(actor.shopId, pairIds), abort });
     const sink = new PassThrough();
     const stored = this.storage.put(zipKey(t.key), sink);
-    const written = this.exports.writeZip(p.actor, p.req, sink, (f) => t.progress(f), abort.signal);
+    const written = this.exports.writeZip(actor, req, sink, (f) => t.progress(f), abort.signal);
     try {
       await Promise.all([written, stored]);
       await this.storage.put(listKey(t.key), Readable.from(Buffer.from(JSON.stringify(pairIds))));

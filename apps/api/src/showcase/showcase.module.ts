@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { UsersModule } from '../users';
 import { AnnotationsModule } from '../annotations';
 import { AuditModule } from '../audit';
 import { ConsentModule } from '../consent';
@@ -15,7 +16,7 @@ import { ShowcaseRepository } from './showcase.repository';
 import { ShowcaseService } from './showcase.service';
 
 @Module({
-  imports: [AnnotationsModule, AuditModule, ConsentModule, FindingsModule, JobsModule, PairsModule, ShopsModule, WorkLogModule],
+  imports: [AnnotationsModule, AuditModule, ConsentModule, FindingsModule, JobsModule, PairsModule, ShopsModule, UsersModule, WorkLogModule],
   controllers: [ShowcaseController],
   providers: [ShowcaseRepository, ShowcaseService, ShowcaseExportService, ShowcaseExportTasks, ShowcaseConsentListener],
   exports: [ShowcaseService],

@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, eq, inArray } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
 import { showcaseItems } from '../db/schema';
-import type { DbTx } from '../infra/tasks';
+import type { DbTx } from '../core/db';
 
 export type ShowcaseMarkRow = typeof showcaseItems.$inferSelect;
 

@@ -13,8 +13,8 @@ import { ConsentService } from '../consent';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { FindingsService } from '../findings';
-import { CLOCK, type Clock } from '../infra/clock';
-import type { DbTx } from '../infra/tasks';
+import { CLOCK, type Clock } from '../core/clock';
+import { type DbTx, UnitOfWork } from '../core/db';
 import { JobAccess, JobsService } from '../jobs';
 import { PairsService } from '../pairs';
 import { ShopsService } from '../shops';
@@ -38,6 +38,7 @@ export interface ClearedItem {
 @Injectable()
 export class ShowcaseService {
   constructor(
+    private readonly uow: UnitOfWork,
     private readonly consent: ConsentService,
     private readonly pairs: PairsService,
     private readonly jobs: JobsService,
@@ -90,8 +91,10 @@ export class ShowcaseService {
       const message = 'The owner did not allow naming the bike’s make or model.';
       throw new DomainError('NO_CONSENT', message, { issues: [{ path: 'caption', message }] });
     }
-    this.repo.upsert(actor.shopId, pairId, patch, this.clock.now());
-    this.audit.record(actor, { action: 'showcase.item_updated', entityType: 'job', entityId: pair.jobId, details: { pairId, fields: Object.keys(patch) } });
+    this.uow.run(() => {
+      this.repo.upsert(actor.shopId, pairId, patch, this.clock.now());
+      this.audit.record(actor, { action: 'showcase.item_updated', entityType: 'job', entityId: pair.jobId, details: { pairId, fields: Object.keys(patch) } });
+    });
     return this.toItem(actor, pair, consent, this.repo.mark(actor.shopId, pairId));
   }
 

@@ -27,7 +27,7 @@ export class UsersRepository {
   }
 
   insert(row: NewUserRow): UserRow {
-    return this.db.insert(users).values(row).returning().get();
+    return this.db.insert(users).values(row).returning().all()[0];
   }
 
   update(shopId: number, id: number, patch: Partial<Pick<UserRow, 'role' | 'active' | 'name'>>): UserRow {
@@ -36,7 +36,7 @@ export class UsersRepository {
       .set(patch)
       .where(and(eq(users.shopId, shopId), eq(users.id, id)))
       .returning()
-      .get();
+      .all()[0];
   }
 
   setPasswordHash(shopId: number, id: number, passwordHash: string): void {
@@ -45,10 +45,5 @@ export class UsersRepository {
       .set({ passwordHash })
       .where(and(eq(users.shopId, shopId), eq(users.id, id)))
       .run();
-  }
-
-  /** Runs `fn` in one SQLite transaction so the last-manager rule cannot race. */
-  transaction<T>(fn: () => T): T {
-    return this.db.transaction(() => fn());
   }
 }

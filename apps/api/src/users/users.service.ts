@@ -3,9 +3,10 @@ import type { CreateUserRequest, UpdateUserRequest, UserDto } from '@benchproof/
 import { AuditService } from '../audit';
 import { SessionStore, type AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { hashPassword, verifyPassword } from './password';
 import { type UserRow, UsersRepository } from './users.repository';
+import { UnitOfWork } from '../core/db';
 
 const toDto = (u: UserRow): UserDto => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, createdAt: u.createdAt.toISOString() });
 
@@ -13,6 +14,7 @@ const toDto = (u: UserRow): UserDto => ({ id: u.id, name: u.name, email: u.email
 export class UsersService {
   constructor(
     private readonly repo: UsersRepository,
+    private readonly uow: UnitOfWork,
     private readonly audit: AuditService,
     private readonly sessions: SessionStore,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -20,6 +22,12 @@ export class UsersService {
 
   list(actor: AuthUser): UserDto[] {
     return this.repo.listByShop(actor.shopId).map(toDto);
+  }
+
+  /** An active staff member as a caller, for work done later on their behalf (background tasks carry only the id). */
+  identity(shopId: number, id: number): AuthUser | null {
+    const u = this.repo.findInShop(shopId, id);
+    return u?.active ? { id: u.id, shopId: u.shopId, role: u.role, email: u.email, name: u.name } : null;
   }
 
   /** Staff of the caller's shop, for pickers such as the assigned mechanic. */
@@ -32,21 +40,25 @@ export class UsersService {
   async create(actor: AuthUser, input: CreateUserRequest): Promise<UserDto> {
     const email = input.email.trim().toLowerCase();
     if (this.repo.findByEmail(email)) throw new DomainError('EMAIL_TAKEN', undefined, { field: 'email' });
-    const row = this.repo.insert({
-      shopId: actor.shopId,
-      email,
-      name: input.name.trim(),
-      role: input.role,
-      passwordHash: await hashPassword(input.password),
-      active: true,
-      createdAt: this.clock.now(),
+    const passwordHash = await hashPassword(input.password);
+    const row = this.uow.run(() => {
+      const saved = this.repo.insert({
+        shopId: actor.shopId,
+        email,
+        name: input.name.trim(),
+        role: input.role,
+        passwordHash,
+        active: true,
+        createdAt: this.clock.now(),
+      });
+      this.audit.record(actor, { action: 'user.created', entityType: 'user', entityId: saved.id, details: { role: saved.role } });
+      return saved;
     });
-    this.audit.record(actor, { action: 'user.created', entityType: 'user', entityId: row.id, details: { role: row.role } });
     return toDto(row);
   }
 
   update(actor: AuthUser, id: number, patch: UpdateUserRequest): UserDto {
-    const updated = this.repo.transaction(() => {
+    const updated = this.uow.run(() => {
       const user = this.repo.findInShop(actor.shopId, id);
       if (!user) throw notFound('User');
       const losesManager = user.role === 'manager' && user.active && (patch.active === false || (patch.role && patch.role !== 'manager'));
@@ -54,9 +66,9 @@ export class UsersService {
       const row = this.repo.update(actor.shopId, id, patch);
       // A deactivated user's tokens must not come back to life when the account is re-activated.
       if (patch.active === false) this.sessions.endAllOf(actor.shopId, id);
+      this.audit.record(actor, { action: 'user.updated', entityType: 'user', entityId: id, details: { ...patch } });
       return row;
     });
-    this.audit.record(actor, { action: 'user.updated', entityType: 'user', entityId: id, details: { ...patch } });
     return toDto(updated);
   }
 
@@ -66,9 +78,12 @@ export class UsersService {
     if (!user || !(await verifyPassword(user.passwordHash, currentPassword))) {
       throw new DomainError('INVALID_CREDENTIALS', 'The current password is not right.', { field: 'currentPassword' });
     }
-    this.repo.setPasswordHash(actor.shopId, actor.id, await hashPassword(newPassword));
-    this.sessions.endAllOf(actor.shopId, actor.id);
-    this.audit.record(actor, { action: 'user.password_changed', entityType: 'user', entityId: actor.id, details: {} });
+    const passwordHash = await hashPassword(newPassword);
+    this.uow.run(() => {
+      this.repo.setPasswordHash(actor.shopId, actor.id, passwordHash);
+      this.sessions.endAllOf(actor.shopId, actor.id);
+      this.audit.record(actor, { action: 'user.password_changed', entityType: 'user', entityId: actor.id, details: {} });
+    });
   }
 
   /**

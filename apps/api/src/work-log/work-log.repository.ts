@@ -29,7 +29,7 @@ export class WorkLogRepository {
   }
 
   insertWorkEntry(row: typeof workEntries.$inferInsert): WorkEntryRow {
-    return this.db.insert(workEntries).values(row).returning().get();
+    return this.db.insert(workEntries).values(row).returning().all()[0];
   }
 
   deleteWorkEntry(shopId: number, id: number): void {
@@ -49,6 +49,6 @@ export class WorkLogRepository {
   }
 
   insertTorqueEntry(row: typeof torqueEntries.$inferInsert): TorqueEntryRow {
-    return this.db.insert(torqueEntries).values(row).returning().get();
+    return this.db.insert(torqueEntries).values(row).returning().all()[0];
   }
 }

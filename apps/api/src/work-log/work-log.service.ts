@@ -4,12 +4,13 @@ import { isDomainInputError, isWrenchCalibrationOverdue, latestCalendarDate, tor
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CLOCK, type Clock } from '../infra/clock';
+import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess } from '../jobs';
 import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import type { StoredTorqueInput } from '../db/schema';
 import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
+import { UnitOfWork } from '../core/db';
 
 const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto => ({
   id: w.id,
@@ -55,6 +56,7 @@ function toTorqueDto(t: TorqueEntryRow, staff: Map<number, string>): TorqueEntry
 @Injectable()
 export class WorkLogService {
   constructor(
+    private readonly uow: UnitOfWork,
     private readonly repo: WorkLogRepository,
     private readonly jobs: JobAccess,
     private readonly users: UsersService,
@@ -83,15 +85,17 @@ export class WorkLogService {
     const { chargeable, ...entry } = input;
     // The rate is copied in, so a later change of the shop's rate does not re-price logged work.
     const rateMinor = chargeable ? this.shops.settings(actor.shopId).labourRateMinor : null;
-    const row = this.repo.insertWorkEntry({ ...entry, rateMinor, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() });
+    const row = this.uow.run(() => this.repo.insertWorkEntry({ ...entry, rateMinor, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() }));
     return toWorkDto(row, this.staff(actor));
   }
 
   deleteWork(actor: AuthUser, jobId: number, entryId: number): void {
     this.openJob(actor, jobId);
     if (!this.repo.workEntry(actor.shopId, jobId, entryId)) throw notFound('Work entry');
-    this.repo.deleteWorkEntry(actor.shopId, entryId);
-    this.audit.record(actor, { action: 'work_entry.deleted', entityType: 'job', entityId: jobId, details: { entryId } });
+    this.uow.run(() => {
+      this.repo.deleteWorkEntry(actor.shopId, entryId);
+      this.audit.record(actor, { action: 'work_entry.deleted', entityType: 'job', entityId: jobId, details: { entryId } });
+    });
   }
 
   listTorque(actor: AuthUser, jobId: number): TorqueEntryDto[] {
@@ -107,25 +111,33 @@ export class WorkLogService {
     this.requirePastCalibration(input.toolCalibratedOn, now);
     const verdict = this.verdict(input);
     const stored: StoredTorqueInput = { specified: input.specified, applied: input.applied, tolerancePct: input.tolerancePct ?? null };
-    const row = this.repo.insertTorqueEntry({
-      shopId: actor.shopId,
-      jobId,
-      fastener: input.fastener,
-      input: { ...stored },
-      result: { ...verdict },
-      specValue: input.specified.min,
-      specUnit: input.specified.unit,
-      appliedValue: input.applied.value,
-      appliedUnit: input.applied.unit,
-      specSource: input.specSource,
-      tool: input.tool,
-      toolCalibratedOn: input.toolCalibratedOn ?? null,
-      threadlocker: input.threadlocker ?? null,
-      carbonPart: input.carbonPart,
-      userId: actor.id,
-      at: now,
+    const row = this.uow.run(() => {
+      const saved = this.repo.insertTorqueEntry({
+        shopId: actor.shopId,
+        jobId,
+        fastener: input.fastener,
+        input: { ...stored },
+        result: { ...verdict },
+        specValue: input.specified.min,
+        specUnit: input.specified.unit,
+        appliedValue: input.applied.value,
+        appliedUnit: input.applied.unit,
+        specSource: input.specSource,
+        tool: input.tool,
+        toolCalibratedOn: input.toolCalibratedOn ?? null,
+        threadlocker: input.threadlocker ?? null,
+        carbonPart: input.carbonPart,
+        userId: actor.id,
+        at: now,
+      });
+      this.audit.record(actor, {
+        action: 'torque.recorded',
+        entityType: 'job',
+        entityId: jobId,
+        details: { torqueEntryId: saved.id, verdict: verdict.verdict },
+      });
+      return saved;
     });
-    this.audit.record(actor, { action: 'torque.recorded', entityType: 'job', entityId: jobId, details: { torqueEntryId: row.id, verdict: verdict.verdict } });
     return toTorqueDto(row, this.staff(actor));
   }
 

@@ -45,7 +45,7 @@ describe('domain events (@nestjs/event-emitter)', () => {
     const desk = await t.signIn(DEMO.desk);
     const job = await bookIn(desk);
     const onMove = (e: JobMovedEvent) => {
-      tasks.enqueue({ kind: 'test.notify', key: `job-${e.jobId}`, shopId: e.shopId }, e.tx);
+      tasks.enqueue({ kind: 'media.phash', key: `test-job-${e.jobId}`, shopId: e.shopId }, e.tx);
       throw new Error('listener failed after enqueueing');
     };
     emitter.on(DOMAIN_EVENTS.jobMoved, onMove);
@@ -53,6 +53,6 @@ describe('domain events (@nestjs/event-emitter)', () => {
     emitter.off(DOMAIN_EVENTS.jobMoved, onMove);
     expect(res.status).toBe(500);
     expect((await desk.agent.get(`/api/jobs/${job.id}`).expect(200)).body.status).toBe('booked_in');
-    expect(tasks.status('test.notify', `job-${job.id}`)).toBeNull();
+    expect(tasks.status('media.phash', `test-job-${job.id}`)).toBeNull();
   });
 });

@@ -4,7 +4,7 @@ import { createHash } from 'node:crypto';
 import { DB, type Db } from '../../src/core/db';
 import { outboxMessages, ownerLinks } from '../../src/db/schema';
 import type { AuthUser } from '../../src/core/auth';
-import { CLOCK, type Clock } from '../../src/infra/clock';
+import { CLOCK, type Clock } from '../../src/core/clock';
 import { OwnerLinksService } from '../../src/owner';
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
 import { eventually } from '../mail/mail-fixtures';

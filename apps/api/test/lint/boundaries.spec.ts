@@ -11,9 +11,9 @@ const ROOT = resolve(__dirname, '../../../..');
  */
 const eslint = new ESLint({ cwd: ROOT, overrideConfig: [{ files: ['**/*.{ts,tsx}'], ...tseslint.configs.disableTypeChecked }] });
 
-async function lintProbe(filePath: string, code: string): Promise<string[]> {
+async function lintProbe(filePath: string, code: string, ruleId = 'import-x/no-restricted-paths'): Promise<string[]> {
   const [result] = await eslint.lintText(code, { filePath: resolve(ROOT, filePath) });
-  return result.messages.filter((m) => m.ruleId === 'import-x/no-restricted-paths').map((m) => m.message);
+  return result.messages.filter((m) => m.ruleId === ruleId).map((m) => m.message);
 }
 
 // The first lint loads the whole config and resolver, which takes seconds on a shared machine.
@@ -52,5 +52,27 @@ describe('import boundaries hold on resolved paths (STYLE.md dependency rules)',
   it('refuses core/ importing a feature', async () => {
     const messages = await lintProbe('apps/api/src/core/http/probe.ts', "import { JobsService } from '../../jobs';\nexport const x = JobsService;\n");
     expect(messages).toEqual([expect.stringMatching(/core\/ and infra\/ never import features/)]);
+  });
+
+  it('refuses core/ importing infra/ (ports live in core, adapters in infra)', async () => {
+    const messages = await lintProbe('apps/api/src/core/db/probe.ts', "import { TASK_RUNNER } from '../../infra/tasks';\nexport const x = TASK_RUNNER;\n");
+    expect(messages).toEqual([expect.stringMatching(/core\/ never imports infra\//)]);
+    const infraUsesCore = await lintProbe('apps/api/src/infra/tasks/probe.ts', "import { UnitOfWork } from '../../core/db';\nexport const x = UnitOfWork;\n");
+    expect(infraUsesCore).toEqual([]);
+  });
+
+  it('refuses mail reaching reports, even through its index.ts', async () => {
+    const messages = await lintProbe('apps/api/src/mail/probe.ts', "import { ReportsService } from '../reports';\nexport const x = ReportsService;\n");
+    expect(messages).toEqual([expect.stringMatching(/mail never reaches reports/)]);
+    const reportsUseMail = await lintProbe('apps/api/src/reports/probe.ts', "import { MailService } from '../mail';\nexport const x = MailService;\n");
+    expect(reportsUseMail).toEqual([]);
+  });
+
+  it('refuses .returning().get() in the API (a failed commit on a full disk would be lost), allows .returning().all()', async () => {
+    const file = 'apps/api/src/findings/probe.ts';
+    const get = await lintProbe(file, 'declare const q: any;\nexport const row = q.insert(1).values(2).returning().get();\n', 'no-restricted-syntax');
+    expect(get).toEqual([expect.stringMatching(/No \.returning\(\)\.get\(\)/)]);
+    const all = await lintProbe(file, 'declare const q: any;\nexport const row = q.insert(1).values(2).returning().all()[0];\n', 'no-restricted-syntax');
+    expect(all).toEqual([]);
   });
 });

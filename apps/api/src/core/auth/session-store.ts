@@ -2,7 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, eq, lt, sql } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { sessions, users } from '../../db/schema';
-import { CLOCK, type Clock } from '../../infra/clock';
+import { CLOCK, type Clock } from '../clock';
 import { DB, type Db } from '../db';
 import type { AuthUser } from './auth-user';
 

@@ -3,6 +3,7 @@ import type Database from 'better-sqlite3';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import { DB } from './db.types';
 import { openDb } from './open-db';
+import { UnitOfWork } from './unit-of-work';
 
 const SQLITE = Symbol('SQLITE');
 
@@ -11,8 +12,9 @@ const SQLITE = Symbol('SQLITE');
   providers: [
     { provide: SQLITE, inject: [APP_CONFIG], useFactory: (cfg: AppConfig) => openDb(cfg.DATABASE_PATH) },
     { provide: DB, inject: [SQLITE], useFactory: (opened: ReturnType<typeof openDb>) => opened.db },
+    UnitOfWork,
   ],
-  exports: [DB],
+  exports: [DB, UnitOfWork],
 })
 export class DbModule implements OnApplicationShutdown {
   /** Re-gathers planner statistics as tables grow (SQLite: run PRAGMA optimize every few hours). */

@@ -1,4 +1,4 @@
-import type { DbTx } from '../../infra/tasks';
+import type { DbTx } from '../db';
 
 /**
  * Domain events, published through @nestjs/event-emitter (EventEmitter2). All are emitted

@@ -1,8 +1,9 @@
 export {
   TASK_RUNNER,
-  type DbTx,
+  type RawTaskContext,
+  type RawTaskSpec,
   type TaskContext,
-  type TaskHandler,
+  type TaskHandlerFn,
   type TaskKindOptions,
   type TaskRunner,
   type TaskRunnerHealth,
@@ -10,6 +11,9 @@ export {
   type TaskState,
   type TaskStatus,
 } from './tasks.port';
+export { TASK_KINDS, type NoPayload, type TaskKind, type TaskPayloads } from './task-kinds';
+export { TaskHandler, type TaskHandlerOptions } from './task-handler.decorator';
+export { TaskHandlerRegistry } from './task-handler.registry';
 export { TasksModule } from './tasks.module';
 export { SqliteTaskRunner, type SqliteRunnerOptions } from './sqlite-task-runner';
 export { TaskStore } from './task-store';

@@ -1,9 +1,9 @@
 import { Logger } from '@nestjs/common';
 import { openDb } from '../../core/db';
-import { systemClock } from '../clock';
+import { systemClock } from '../../core/clock';
 import { SqliteTaskRunner, type SqliteRunnerOptions } from './sqlite-task-runner';
 import { TaskStore } from './task-store';
-import type { TaskContext } from './tasks.port';
+import type { RawTaskContext } from './tasks.port';
 
 const OPTIONS: SqliteRunnerOptions = { pollMs: 1000, leaseMs: 30_000, backoff: { baseMs: 1000, maxMs: 60_000 }, maxAttempts: 5 };
 
@@ -15,7 +15,7 @@ const record = <T>(into: T[], item: T): Promise<void> => {
 function setUp(opts: Partial<SqliteRunnerOptions> = {}) {
   const { db, sqlite } = openDb(':memory:');
   const runner = new SqliteTaskRunner(new TaskStore(db), systemClock, { ...OPTIONS, ...opts });
-  const calls: TaskContext[] = [];
+  const calls: RawTaskContext[] = [];
   return { db, sqlite, runner, calls };
 }
 

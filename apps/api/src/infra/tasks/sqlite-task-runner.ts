@@ -1,10 +1,12 @@
 import { Logger } from '@nestjs/common';
 import { randomUUID } from 'node:crypto';
 import { hostname } from 'node:os';
-import type { Clock } from '../clock';
+import type { Clock } from '../../core/clock';
 import { type BackoffOptions, retryDelay } from './backoff';
 import { type TaskRow, type TaskStore, toStatus } from './task-store';
-import type { DbTx, TaskHandler, TaskKindOptions, TaskRunner, TaskRunnerHealth, TaskSpec, TaskStatus } from './tasks.port';
+import type { DbTx } from '../../core/db';
+import type { TaskKind, TaskPayloads } from './task-kinds';
+import type { RawTaskContext, RawTaskSpec, TaskHandlerFn, TaskKindOptions, TaskRunner, TaskRunnerHealth, TaskStatus } from './tasks.port';
 
 export interface SqliteRunnerOptions {
   /** How often to look for work enqueued by another process or freed by an expired lease (ms). */
@@ -18,7 +20,7 @@ export interface SqliteRunnerOptions {
 }
 
 interface Kind {
-  handler: TaskHandler;
+  handler: TaskHandlerFn;
   options: TaskKindOptions;
   running: number;
 }
@@ -46,12 +48,14 @@ export class SqliteTaskRunner implements TaskRunner {
     private readonly opts: SqliteRunnerOptions,
   ) {}
 
-  register(kind: string, handler: TaskHandler, options: TaskKindOptions): void {
+  /** Kinds are plain strings here, so the driver's own tests can use made-up kinds. */
+  register(kind: string, handler: TaskHandlerFn, options: TaskKindOptions): void {
+    if (this.kinds.has(kind)) throw new Error(`Task kind ${kind} already has a handler`);
     this.kinds.set(kind, { handler, options, running: 0 });
     this.wake();
   }
 
-  enqueue(spec: TaskSpec, tx?: DbTx): void {
+  enqueue(spec: RawTaskSpec, tx?: DbTx): void {
     this.store.insert(spec, this.clock.now(), tx);
     // After the caller's (synchronous) transaction has committed or rolled back.
     this.wake();
@@ -62,8 +66,8 @@ export class SqliteTaskRunner implements TaskRunner {
     return row ? toStatus(row) : null;
   }
 
-  finished(kind: string, shopId: number): { key: string; payload: Record<string, unknown> }[] {
-    return this.store.finished(kind, shopId);
+  finished<K extends TaskKind>(kind: K, shopId: number): { key: string; payload: TaskPayloads[K] }[] {
+    return this.store.finished(kind, shopId) as { key: string; payload: TaskPayloads[K] }[];
   }
 
   settled(): Promise<void> {
@@ -141,7 +145,7 @@ export class SqliteTaskRunner implements TaskRunner {
     const { leaseMs } = this.opts;
     const heartbeat = setInterval(() => this.safely(() => this.store.renew(row.id, this.owner, new Date(this.clock.now().getTime() + leaseMs))), leaseMs / 3);
     heartbeat.unref();
-    const ctx = {
+    const ctx: RawTaskContext = {
       kind: row.kind,
       key: row.key,
       shopId: row.shopId,

@@ -1,7 +1,7 @@
 import { and, asc, eq, gt, inArray, lt, lte, or, sql } from 'drizzle-orm';
-import type { Db } from '../../core/db';
 import { tasks } from '../../db/schema';
-import type { DbTx, TaskSpec, TaskStatus } from './tasks.port';
+import type { Db, DbTx } from '../../core/db';
+import type { RawTaskSpec, TaskStatus } from './tasks.port';
 
 export type TaskRow = typeof tasks.$inferSelect;
 
@@ -24,14 +24,14 @@ export class TaskStore {
   constructor(private readonly db: Db) {}
 
   /** Inserts in the caller's transaction when given; a failed task with the same key is queued afresh. */
-  insert(spec: TaskSpec, now: Date, tx?: DbTx): void {
+  insert(spec: RawTaskSpec, now: Date, tx?: DbTx): void {
     const fresh = {
       status: 'queued' as const,
       attempts: 0,
       lastError: null,
       progress: 0,
       nextRunAt: spec.runAt ?? now,
-      payload: spec.payload ?? {},
+      payload: (spec.payload ?? {}) as Record<string, unknown>,
       updatedAt: now,
     };
     (tx ?? this.db)

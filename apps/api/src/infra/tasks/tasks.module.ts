@@ -1,19 +1,23 @@
 import { type BeforeApplicationShutdown, Global, Inject, Module, type OnApplicationBootstrap } from '@nestjs/common';
+import { DiscoveryModule } from '@nestjs/core';
 import { APP_CONFIG, type AppConfig } from '../../config';
 import { DB, type Db } from '../../core/db';
-import { CLOCK, type Clock } from '../clock';
+import { CLOCK, type Clock } from '../../core/clock';
 import { SqliteTaskRunner } from './sqlite-task-runner';
+import { TaskHandlerRegistry } from './task-handler.registry';
 import { TaskStore } from './task-store';
 import { TASK_RUNNER } from './tasks.port';
 
 /**
  * The runner behind TASK_RUNNER, chosen by TASKS_DRIVER (only 'sqlite' today; DEVELOPERS.md
- * says how a BullMQ driver would plug in). Handlers register in their module's onModuleInit;
- * the runner starts taking work once the whole application has booted.
+ * says how a BullMQ driver would plug in). TaskHandlerRegistry registers every `@TaskHandler`
+ * method at init; the runner starts taking work once the whole application has booted.
  */
 @Global()
 @Module({
+  imports: [DiscoveryModule],
   providers: [
+    TaskHandlerRegistry,
     {
       provide: TASK_RUNNER,
       inject: [DB, CLOCK, APP_CONFIG],
