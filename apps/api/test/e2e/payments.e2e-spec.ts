@@ -14,10 +14,10 @@ describe('payments: balance, online checkout against the local fake, in-shop pay
   let base: string;
   beforeAll(async () => {
     ({ t, fake, base } = await appWithPaymentFake());
-  });
+  }, 180_000); // the demo seed plus a second server on a shared 2-core machine
   afterAll(async () => {
-    await t.close();
-    await fake.close();
+    await t?.close();
+    await fake?.close();
   });
 
   it('desk sees the balance in the jobs table and the "ready, unpaid" filter finds the job', async () => {
