@@ -106,5 +106,5 @@ describe('payments: the owner pays the seeded ready job from their page', () => 
     await page.goto(catcher.url);
     await page.getByRole('link', { name: /^Receipt/ }).waitFor();
     await shot(page, 'payments-inbox-receipt-390');
-  });
+  }, 240_000); // a fresh server with the demo seed, two fakes and five pages on a shared machine
 });
