@@ -56,12 +56,20 @@ export default tseslint.config(
   {
     files: ['libs/contracts/src/**'],
     rules: {
-      'no-restricted-imports': restrict(['^(?!\\.{1,2}/|zod$|@benchproof/domain$)', 'libs/contracts depends only on zod and @benchproof/domain (rule 3).']),
+      'no-restricted-imports': restrict([
+        '^(?!\\.{1,2}/|zod$|@benchproof/domain$|@benchproof/annotation$)',
+        'libs/contracts depends only on zod, @benchproof/domain and @benchproof/annotation (rule 3).',
+      ]),
     },
   },
   {
     files: ['libs/annotation/src/**'],
-    rules: { 'no-restricted-imports': restrict(['^(?!\\.{1,2}/|@benchproof/domain$)', 'libs/annotation is pure TypeScript: no React, no Konva (rule 2).']) },
+    rules: {
+      'no-restricted-imports': restrict([
+        '^(?!\\.{1,2}/|@benchproof/domain$|zod$|simplify-js$)',
+        'libs/annotation is pure TypeScript: no React, no Konva; zod for its schema, simplify-js for strokes (rule 2).',
+      ]),
+    },
   },
   {
     files: ['libs/*/src/**/*.test.ts'],

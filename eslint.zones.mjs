@@ -15,7 +15,7 @@ const API_SHARED = ['core', 'infra', 'config', 'db'];
 const PACKAGE_RULES = [
   ['libs/domain', ['libs/contracts', 'libs/annotation', 'apps', 'seeds'], 'libs/domain is pure: it imports nothing of the repo (rule 1).'],
   ['libs/annotation', ['libs/contracts', 'apps', 'seeds'], 'libs/annotation may use only libs/domain (rule 2).'],
-  ['libs/contracts', ['libs/annotation', 'apps', 'seeds'], 'libs/contracts depends only on zod and libs/domain (rule 3).'],
+  ['libs/contracts', ['apps', 'seeds'], 'libs/contracts depends only on zod, libs/domain and libs/annotation (rule 3).'],
   ['apps/api', 'apps/web', 'The apps never import each other (rule 4).'],
   ['apps/web', 'apps/api', 'The apps never import each other (rule 4).'],
 ];

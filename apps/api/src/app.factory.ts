@@ -10,6 +10,7 @@ import { resolve } from 'node:path';
 import helmet from 'helmet';
 import { Logger as PinoLogger } from 'nestjs-pino';
 import type { NextFunction, Request, Response } from 'express';
+import { annotationSaveBody } from './annotations';
 import { AppModule } from './app.module';
 import type { AppConfig } from './config';
 import { ErrorFilter } from './core/http';
@@ -35,6 +36,7 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const compress = compression({ threshold: 1024 });
   app.use((req: Request, res: Response, next: NextFunction) => (MEDIA_BYTES.test(req.path) ? next() : compress(req, res, next)));
   app.use(cookieParser());
+  app.use(annotationSaveBody());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());
   app.enableShutdownHooks();

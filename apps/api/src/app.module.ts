@@ -17,7 +17,9 @@ import { PairsModule } from './pairs';
 import { ConsentModule } from './consent';
 import { ShowcaseModule } from './showcase';
 import { OwnerModule } from './owner';
+import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './core/clock';
+import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
@@ -45,6 +47,7 @@ const FEATURES = [
   WorkLogModule,
   PairsModule,
   ConsentModule,
+  OwnerLinksModule,
   OwnerModule,
   AnnotationsModule,
   ReportsModule,
@@ -71,6 +74,7 @@ export class AppModule {
         SeedModule,
       ],
       controllers: [HealthController],
+      providers: [DiskSpace],
     };
   }
 }

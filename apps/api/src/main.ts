@@ -2,7 +2,7 @@ import './threadpool';
 import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { createApp } from './app.factory';
-import { loadConfig } from './config';
+import { ConfigError, loadConfig } from './config';
 
 async function bootstrap(): Promise<void> {
   const cfg = loadConfig();
@@ -11,4 +11,8 @@ async function bootstrap(): Promise<void> {
   new Logger('BenchProof').log(`Serving web and API on http://localhost:${cfg.PORT}`);
 }
 
-void bootstrap();
+bootstrap().catch((e: unknown) => {
+  // A configuration mistake gets its message alone, not a stack trace an operator has to read through.
+  console.error(e instanceof ConfigError ? `BenchProof cannot start: ${e.message}` : e);
+  process.exit(1);
+});

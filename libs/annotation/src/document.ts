@@ -1,46 +1,41 @@
-import { DEFAULT_WIDTH, PALETTE, PALETTE_COLOURS, type PaletteColour, type StrokeWidth } from './palette';
+import type { z } from 'zod';
+import { DEFAULT_WIDTH, PALETTE, PALETTE_COLOURS, type PaletteColour } from './palette';
+import {
+  ANNOTATION_SCHEMA_VERSION,
+  type AnnotationDocumentSchema,
+  type ArrowSchema,
+  type BlurSchema,
+  type LabelSchema,
+  type PenSchema,
+  type PointSchema,
+  type RingSchema,
+  type RulerSchema,
+  type ScaleSchema,
+} from './schema';
 
 /**
  * The annotation document: a versioned list of shapes over one photo, in coordinates
  * normalised to the upright image (0..1 on each axis), so the editor and the server
  * renderer draw the same thing at any resolution. Ring radii are normalised too:
- * rx to the image width, ry to the height.
+ * rx to the image width, ry to the height. The types are inferred from schema.ts.
  */
-export const ANNOTATION_SCHEMA_VERSION = 2;
+export { ANNOTATION_SCHEMA_VERSION };
 
 export const SHAPE_KINDS = ['ring', 'arrow', 'pen', 'label', 'ruler', 'scale', 'blur'] as const;
 export type ShapeKind = (typeof SHAPE_KINDS)[number];
 
-export interface Point {
-  x: number;
-  y: number;
-}
-
-export interface ShapeBase {
-  id: string;
-  colour: PaletteColour;
-  width: StrokeWidth;
-}
-
-export type RingShape = ShapeBase & { kind: 'ring'; centre: Point; rx: number; ry: number };
-export type ArrowShape = ShapeBase & { kind: 'arrow'; from: Point; to: Point };
-export type PenShape = ShapeBase & { kind: 'pen'; points: Point[] };
-export type LabelShape = ShapeBase & { kind: 'label'; at: Point; text: string };
-/** A measured line; `pitches` is set when it was laid over that many chain pitches. */
-export type RulerShape = ShapeBase & { kind: 'ruler'; from: Point; to: Point; pitches?: number };
-/** A line over something of known length: the photo's calibration. */
-export type ScaleShape = ShapeBase & { kind: 'scale'; from: Point; to: Point; knownMm: number };
-/** Redaction: everything inside is pixelated wherever the image leaves the shop. */
-export type BlurShape = ShapeBase & { kind: 'blur'; topLeft: Point; bottomRight: Point };
-
+export type Point = z.infer<typeof PointSchema>;
+export type RingShape = z.infer<typeof RingSchema>;
+export type ArrowShape = z.infer<typeof ArrowSchema>;
+export type PenShape = z.infer<typeof PenSchema>;
+export type LabelShape = z.infer<typeof LabelSchema>;
+export type RulerShape = z.infer<typeof RulerSchema>;
+export type ScaleShape = z.infer<typeof ScaleSchema>;
+export type BlurShape = z.infer<typeof BlurSchema>;
 export type Shape = RingShape | ArrowShape | PenShape | LabelShape | RulerShape | ScaleShape | BlurShape;
+export type ShapeBase = Pick<Shape, 'id' | 'colour' | 'width'>;
 
-export interface AnnotationDocument {
-  schemaVersion: typeof ANNOTATION_SCHEMA_VERSION;
-  /** Pixel size of the upright image the shapes were drawn on; needed to turn lengths into mm. */
-  image: { width: number; height: number };
-  shapes: Shape[];
-}
+export type AnnotationDocument = z.infer<typeof AnnotationDocumentSchema>;
 
 export const emptyDocument = (width: number, height: number): AnnotationDocument => ({
   schemaVersion: ANNOTATION_SCHEMA_VERSION,

@@ -1,4 +1,5 @@
 import type { AnnotationDocument, Point, Shape } from './document';
+import { placeCaption } from './marks';
 
 export interface Size {
   width: number;
@@ -74,6 +75,9 @@ function distanceToEllipse(p: Point, c: Point, rx: number, ry: number): number {
   return Math.abs(Math.hypot(dx, dy) * (1 - 1 / r));
 }
 
+const inBox = (p: Point, x0: number, y0: number, x1: number, y1: number, pad: number) =>
+  p.x >= x0 - pad && p.x <= x1 + pad && p.y >= y0 - pad && p.y <= y1 + pad;
+
 /** Whether a point in pixels touches a shape, within `tolerancePx` (a finger needs ~22 px). */
 export function hitsShape(shape: Shape, pointPx: Point, size: Size, tolerancePx: number): boolean {
   const px = (p: Point) => toPixel(p, size);
@@ -89,13 +93,15 @@ export function hitsShape(shape: Shape, pointPx: Point, size: Size, tolerancePx:
         shape.points.some((p, i) => i > 0 && distanceToSegment(pointPx, px(shape.points[i - 1]), px(p)) <= tolerancePx) ||
         (shape.points.length === 1 && Math.hypot(pointPx.x - px(shape.points[0]).x, pointPx.y - px(shape.points[0]).y) <= tolerancePx)
       );
-    case 'label':
+    case 'label': {
+      // Where the caption is drawn (kept inside the image), not just its anchor.
+      const b = placeCaption(shape.text, px(shape.at), size);
+      return inBox(pointPx, b.x, b.y, b.x + b.width, b.y + b.height, tolerancePx);
+    }
     case 'blur': {
-      const b = boundingBox(shape);
-      const tl = px({ x: b.x, y: b.y });
-      const br = px({ x: b.x + b.width, y: b.y + b.height });
-      const pad = shape.kind === 'label' ? Math.max(tolerancePx, 0.04 * Math.max(size.width, size.height)) : tolerancePx;
-      return pointPx.x >= tl.x - pad && pointPx.x <= br.x + pad && pointPx.y >= tl.y - pad && pointPx.y <= br.y + pad;
+      const tl = px(shape.topLeft);
+      const br = px(shape.bottomRight);
+      return inBox(pointPx, tl.x, tl.y, br.x, br.y, tolerancePx);
     }
   }
 }

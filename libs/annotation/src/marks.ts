@@ -1,5 +1,6 @@
 import { formatMm, mmPerPixel, pixelLength } from './calibration';
 import type { AnnotationDocument, Point, Shape } from './document';
+import { fontPx } from './palette';
 
 /**
  * Pixel geometry shared by the SVG renderer and the canvas editor, so both
@@ -67,4 +68,59 @@ export function captionAnchor(from: Point, to: Point, font: number): Point {
 /** Width of a caption box for `text` at `font` px: a fixed advance per character keeps both renderers in step. */
 export function captionBox(text: string, font: number): { width: number; height: number } {
   return { width: Math.ceil(text.length * font * 0.6 + font * 0.8), height: Math.ceil(font * 1.4) };
+}
+
+/** A caption's box in pixels: top-left corner and size. */
+export interface CaptionRect {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+}
+
+const within = (v: number, lo: number, hi: number) => Math.min(Math.max(v, lo), Math.max(lo, hi));
+
+/** The caption box for `text` centred on `at`, moved as little as needed to lie inside the image. */
+export function placeCaption(text: string, at: Point, size: { width: number; height: number }, font = fontPx(size)): CaptionRect {
+  const { width, height } = captionBox(text, font);
+  return { x: within(at.x - width / 2, 0, size.width - width), y: within(at.y - height / 2, 0, size.height - height), width, height };
+}
+
+const overlaps = (a: CaptionRect, b: CaptionRect) => a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
+
+/** Where a line's caption may go, best first: above its middle, below, then further out each way. */
+function lineCaptionSpots(from: Point, to: Point, font: number, step: number): Point[] {
+  const above = captionAnchor(from, to, font);
+  const below = { x: above.x, y: above.y + 2.2 * font };
+  const spots = [above, below];
+  for (let k = 1; k <= 4; k++) spots.push({ x: above.x, y: above.y - k * step }, { x: below.x, y: below.y + k * step });
+  return spots;
+}
+
+/**
+ * Every caption of the document in pixels of an image of `size`, inside the image: labels
+ * where the mechanic put them, then ruler and scale captions off their line's middle, each
+ * moved to the first spot that overlaps no caption placed before it. The SVG renderer and
+ * the editor both draw from this, so the server render, the PDF and the screen agree.
+ */
+export function captionLayout(doc: AnnotationDocument, size: { width: number; height: number }): Map<string, { text: string; box: CaptionRect }> {
+  const font = fontPx(size);
+  const out = new Map<string, { text: string; box: CaptionRect }>();
+  const px = (p: Point) => ({ x: p.x * size.width, y: p.y * size.height });
+  for (const s of doc.shapes) if (s.kind === 'label') out.set(s.id, { text: s.text, box: placeCaption(s.text, px(s.at), size, font) });
+  for (const s of doc.shapes) {
+    if (s.kind !== 'ruler' && s.kind !== 'scale') continue;
+    const text = captionOf(doc, s) ?? '';
+    const placed = [...out.values()].map((c) => c.box);
+    const spots = lineCaptionSpots(px(s.from), px(s.to), font, Math.ceil(font * 1.5)).map((at) => placeCaption(text, at, size, font));
+    out.set(s.id, { text, box: spots.find((b) => !placed.some((p) => overlaps(b, p))) ?? spots[0] });
+  }
+  return out;
+}
+
+/** A label's anchor moved so its caption lies inside the image (normalised in and out). */
+export function keepLabelInside<S extends Shape>(shape: S, size: { width: number; height: number }): S {
+  if (shape.kind !== 'label') return shape;
+  const b = placeCaption(shape.text, { x: shape.at.x * size.width, y: shape.at.y * size.height }, size);
+  return { ...shape, at: { x: (b.x + b.width / 2) / size.width, y: (b.y + b.height / 2) / size.height } };
 }

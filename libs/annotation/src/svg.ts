@@ -1,6 +1,6 @@
 import type { AnnotationDocument, Point, Shape } from './document';
 import { toPixel, type Size } from './geometry';
-import { arrowHead, arrowShaftEnd, captionAnchor, captionBox, captionOf, endTicks } from './marks';
+import { arrowHead, arrowShaftEnd, captionLayout, endTicks, placeCaption, type CaptionRect } from './marks';
 import { fontPx, outlinePx, PALETTE, strokePx } from './palette';
 
 const f = (n: number) => Number(n.toFixed(2));
@@ -17,19 +17,21 @@ function line(a: Point, b: Point, dash = ''): (s: string, w: number) => string {
   return (s, w) => `<line x1="${f(a.x)}" y1="${f(a.y)}" x2="${f(b.x)}" y2="${f(b.y)}" stroke="${s}" stroke-width="${f(w)}"${dash}/>`;
 }
 
-function caption(text: string, at: Point, shape: Shape, size: Size): string {
+/** A caption in its laid-out box (inside the image, clear of the other captions). */
+function caption(text: string, box: CaptionRect, shape: Shape, size: Size): string {
   const font = fontPx(size);
-  const box = captionBox(text, font);
   const c = PALETTE[shape.colour];
-  const x = at.x - box.width / 2;
-  const y = at.y - box.height / 2;
+  const cx = box.x + box.width / 2;
+  const cy = box.y + box.height / 2;
   return (
-    `<rect x="${f(x)}" y="${f(y)}" width="${box.width}" height="${box.height}" rx="${f(font * 0.25)}" fill="${c.ink}" stroke="${c.outline}" stroke-width="${f(font * 0.08)}"/>` +
-    `<text x="${f(at.x)}" y="${f(at.y + font * 0.35)}" font-family="Inter, DejaVu Sans, sans-serif" font-size="${font}" font-weight="600" text-anchor="middle" fill="${c.outline}">${esc(text)}</text>`
+    `<rect x="${f(box.x)}" y="${f(box.y)}" width="${box.width}" height="${box.height}" rx="${f(font * 0.25)}" fill="${c.ink}" stroke="${c.outline}" stroke-width="${f(font * 0.08)}"/>` +
+    `<text x="${f(cx)}" y="${f(cy + font * 0.35)}" font-family="Inter, DejaVu Sans, sans-serif" font-size="${font}" font-weight="600" text-anchor="middle" fill="${c.outline}">${esc(text)}</text>`
   );
 }
 
-function lineMark(doc: AnnotationDocument, shape: Shape & { from: Point; to: Point }, size: Size, dashed: boolean): string {
+type Captions = ReturnType<typeof captionLayout>;
+
+function lineMark(shape: Shape & { from: Point; to: Point }, size: Size, dashed: boolean, captions: Captions): string {
   const a = toPixel(shape.from, size);
   const b = toPixel(shape.to, size);
   const w = strokePx(shape.width, size);
@@ -37,13 +39,13 @@ function lineMark(doc: AnnotationDocument, shape: Shape & { from: Point; to: Poi
   const ticks = endTicks(a, b, w)
     .map(([p, q]) => twice(line(p, q), shape, size))
     .join('');
-  const text = captionOf(doc, shape);
-  const cap = text ? caption(text, captionAnchor(a, b, fontPx(size)), shape, size) : '';
+  const c = captions.get(shape.id);
+  const cap = c ? caption(c.text, c.box, shape, size) : '';
   return twice(line(a, b, dash), shape, size) + ticks + cap;
 }
 
 /** SVG markup of one shape over an image of `size` pixels (blur boxes draw nothing: the pixels are redacted). */
-export function shapeToSvg(doc: AnnotationDocument, shape: Shape, size: Size): string {
+export function shapeToSvg(doc: AnnotationDocument, shape: Shape, size: Size, captions: Captions = captionLayout(doc, size)): string {
   switch (shape.kind) {
     case 'ring': {
       const c = toPixel(shape.centre, size);
@@ -67,11 +69,11 @@ export function shapeToSvg(doc: AnnotationDocument, shape: Shape, size: Size): s
         size,
       );
     case 'label':
-      return caption(shape.text, toPixel(shape.at, size), shape, size);
+      return caption(shape.text, captions.get(shape.id)?.box ?? placeCaption(shape.text, toPixel(shape.at, size), size), shape, size);
     case 'ruler':
-      return lineMark(doc, shape, size, false);
+      return lineMark(shape, size, false, captions);
     case 'scale':
-      return lineMark(doc, shape, size, true);
+      return lineMark(shape, size, true, captions);
     case 'blur':
       return '';
   }
@@ -82,7 +84,8 @@ export function shapeToSvg(doc: AnnotationDocument, shape: Shape, size: Size): s
  * is drawn, for compositing over the upright image of that size.
  */
 export function renderSvg(doc: AnnotationDocument, size: Size): string {
-  const body = doc.shapes.map((s) => shapeToSvg(doc, s, size)).join('');
+  const captions = captionLayout(doc, size);
+  const body = doc.shapes.map((s) => shapeToSvg(doc, s, size, captions)).join('');
   return (
     `<svg xmlns="http://www.w3.org/2000/svg" width="${size.width}" height="${size.height}" viewBox="0 0 ${size.width} ${size.height}">` +
     `<g stroke-linecap="round" stroke-linejoin="round">${body}</g></svg>`

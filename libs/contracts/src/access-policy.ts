@@ -46,6 +46,8 @@ export const ACCESS_POLICY = {
   'shop.view': staff(...ALL_STAFF),
   'shop.edit': staff('manager'),
   'audit.view': staff('manager'),
+  /** Free space on the server's disks (the low-space warning). */
+  'storage.view': staff('manager'),
   /** Favourites, captions and the take-down list. */
   'showcase.manage': staff('manager'),
   /** Open the library and export from it; desk only where the shop allows it (canOpenShowcase). */

@@ -59,6 +59,11 @@ export const ERROR_CODES = {
   REPORT_NOT_READY: { status: 409, message: 'The report is still rendering or failed to render.' },
   RATE_LIMITED: { status: 429, message: 'Too many attempts. Wait a moment and try again.' },
   INTERNAL: { status: 500, message: 'Something went wrong on our side.' },
+  STORAGE_FULL: {
+    status: 507,
+    message:
+      'The server’s disk is full, so this was not saved. Keep the photo on this device and tell the shop manager: space must be freed before anything more can be saved.',
+  },
   NOT_READY: { status: 503, message: 'The server is starting or cannot reach its database or task runner.' },
 } as const satisfies Record<string, { status: number; message: string }>;
 

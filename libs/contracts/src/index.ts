@@ -26,3 +26,4 @@ export * from './reports';
 export * from './mail';
 export * from './showcase';
 export * from './payments';
+export * from './disk-space';

@@ -113,5 +113,19 @@ export const OwnerDecisionItemSchema = z.object({
   /** Declining a safety item needs this second confirmation. */
   safetyConfirmed: z.boolean().default(false),
 });
-export const OwnerDecisionsRequestSchema = z.object({ items: z.array(OwnerDecisionItemSchema).min(1).max(100) });
+/** One answer per item: a submission naming an item twice (same or opposite answers) is refused whole. */
+export const OwnerDecisionsRequestSchema = z.object({
+  items: z
+    .array(OwnerDecisionItemSchema)
+    .min(1)
+    .max(100)
+    .superRefine((items, ctx) => {
+      const seen = new Set<number>();
+      items.forEach((item, i) => {
+        if (seen.has(item.recommendationId))
+          ctx.addIssue({ code: 'custom', path: [i, 'recommendationId'], message: 'This item is answered twice; give one answer per item.' });
+        seen.add(item.recommendationId);
+      });
+    }),
+});
 export type OwnerDecisionsRequest = z.infer<typeof OwnerDecisionsRequestSchema>;

@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { AnnotatedSize } from '@benchproof/contracts';
-import type { Readable } from 'node:stream';
+import { type FileToSend, notFound } from '../core/http';
 import { STORAGE, type Storage } from '../infra/storage';
 import { AnnotationRenderService } from './annotation-render.service';
 
@@ -12,19 +12,18 @@ export class AnnotationFilesService {
     @Inject(STORAGE) private readonly storage: Storage,
   ) {}
 
-  async open(shopId: number, assetId: number, size: AnnotatedSize): Promise<{ headers: Record<string, string>; body: Readable }> {
+  async open(shopId: number, assetId: number, size: AnnotatedSize): Promise<FileToSend> {
     const img = await this.render.annotated(shopId, assetId, size);
     const stat = await this.storage.stat(img.key);
+    if (!stat) throw notFound('Media file');
     return {
-      headers: {
-        'Content-Type': 'image/jpeg',
-        'Cache-Control': 'private, no-cache',
-        ETag: `"a${assetId}-v${img.version}-${size}"`,
-        ...(stat ? { 'Content-Length': String(stat.bytes) } : {}),
-        'Content-Disposition': `inline; filename="media-${assetId}-annotated-${size}.jpg"`,
-        'X-Annotation-Version': String(img.version),
-      },
-      body: this.storage.createReadStream(img.key),
+      size: stat.bytes,
+      etag: `"a${assetId}-v${img.version}-${size}"`,
+      contentType: 'image/jpeg',
+      cacheControl: 'private, no-cache',
+      disposition: `inline; filename="media-${assetId}-annotated-${size}.jpg"`,
+      headers: { 'X-Annotation-Version': String(img.version) },
+      open: (range) => this.storage.createReadStream(img.key, range),
     };
   }
 }

@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { blurRegions, migrateDocument, renderSvg } from '@benchproof/annotation';
+import { blurRegions, renderSvg, type AnnotationDocument } from '@benchproof/annotation';
 import type { AnnotatedSize } from '@benchproof/contracts';
 import { Readable } from 'node:stream';
 import { IMAGE, type ImageAdapter } from '../infra/image';
@@ -76,8 +76,7 @@ export class AnnotationRenderService {
     return { ...img, data: await readAll(this.storage.createReadStream(img.key)) };
   }
 
-  private async render(baseKey: string, size: { width: number; height: number }, json: string, key: string): Promise<void> {
-    const doc = migrateDocument(JSON.parse(json));
+  private async render(baseKey: string, size: { width: number; height: number }, doc: AnnotationDocument, key: string): Promise<void> {
     const pixels = await readAll(this.storage.createReadStream(baseKey));
     const out = await this.image.annotate(pixels, renderSvg(doc, size), blurRegions(doc, size));
     if (await this.storage.stat(key)) return;

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Post, Put, Res } from '@nestjs/common';
+import { Body, Controller, Get, Param, ParseIntPipe, Post, Put, Req, Res } from '@nestjs/common';
 import { ApiParam, ApiTags } from '@nestjs/swagger';
 import {
   ANNOTATED_SIZES,
@@ -9,9 +9,9 @@ import {
   type ChainFromPhotoRequest,
   type SaveAnnotationRequest,
 } from '@benchproof/contracts';
-import type { Response } from 'express';
+import type { Request, Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ApiZodBody, sendFile, zod } from '../core/http';
 import { AnnotationFilesService } from './annotation-files.service';
 import { AnnotationsService } from './annotations.service';
 
@@ -52,11 +52,9 @@ export class AnnotationsController {
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
     @Param('size', zod(AnnotatedSizeSchema)) size: AnnotatedSize,
+    @Req() req: Request,
     @Res() res: Response,
   ): Promise<void> {
-    const reply = await this.files.open(user.shopId, id, size);
-    res.status(200).set(reply.headers);
-    reply.body.on('error', () => res.destroy());
-    reply.body.pipe(res);
+    await sendFile(req, res, await this.files.open(user.shopId, id, size));
   }
 }

@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { chainReadingFromRuler, migrateDocument, type AnnotationDocument } from '@benchproof/annotation';
+import { chainReadingFromRuler, compactDocument, type AnnotationDocument } from '@benchproof/annotation';
 import type { AnnotationDto, ChainFromPhotoRequest, MeasurementDto, SaveAnnotationRequest } from '@benchproof/contracts';
 import { DomainInputError } from '@benchproof/domain';
 import { AuditService } from '../audit';
@@ -33,7 +33,8 @@ export class AnnotationsService {
   /** Appends a version; refuses with CONFLICT when someone saved since `baseVersion`. */
   save(actor: AuthUser, assetId: number, req: SaveAnnotationRequest): AnnotationDto {
     const screen = this.media.uprightImage(actor.shopId, assetId, 'screen');
-    const doc: AnnotationDocument = req.document;
+    // Stored on the coordinate grid with long strokes simplified (libs/annotation compact.ts).
+    const doc: AnnotationDocument = compactDocument(req.document);
     // The document must describe this photo's upright shape (aspect), or mm would be wrong.
     const aspect = (s: { width: number; height: number }) => s.width / s.height;
     if (Math.abs(aspect(doc.image) - aspect(screen)) > 0.01) {
@@ -50,7 +51,7 @@ export class AnnotationsService {
         shopId: actor.shopId,
         assetId,
         version: current + 1,
-        document: JSON.stringify(doc),
+        document: doc,
         savedAt: this.clock.now(),
         savedBy: actor.id,
       });
@@ -72,7 +73,7 @@ export class AnnotationsService {
     const latest = this.repo.latest(actor.shopId, assetId);
     if (!latest || latest.version !== req.version)
       throw new DomainError('CONFLICT', 'Save the annotation before recording the reading.', { currentVersion: latest?.version ?? 0 });
-    const doc = migrateDocument(JSON.parse(latest.document));
+    const doc = latest.document;
     const fail = (message: string) => new DomainError('VALIDATION_FAILED', message, { issues: [{ path: 'rulerId', message }] });
     if (!doc.shapes.some((s) => s.id === req.rulerId && s.kind === 'ruler')) throw fail('Draw a ruler over the chain first.');
     let reading;
@@ -119,7 +120,7 @@ function toDto(assetId: number, row: AnnotationVersionRow | undefined): Annotati
   return {
     mediaId: assetId,
     version: row.version,
-    document: migrateDocument(JSON.parse(row.document)),
+    document: row.document,
     savedAt: row.savedAt.toISOString(),
     savedBy: row.savedBy,
   };

@@ -41,6 +41,8 @@ const EnvSchema = z.object({
     .default(15 * 60),
   /** Express 'trust proxy' (e.g. `loopback`, `1`, `10.0.0.0/8`). Unset: X-Forwarded-For is ignored. */
   TRUST_PROXY: z.string().min(1).optional(),
+  /** `production` refuses to start without PUBLIC_URL (owner links and report links are built from it, never from a request). */
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   PUBLIC_URL: z.string().url().optional(),
   /** The origin the web app is served from; the only one allowed cross-origin (tus CORS). Default: PUBLIC_URL's origin, else http://localhost:PORT. */
   APP_ORIGIN: z.string().url().optional(),
@@ -110,13 +112,25 @@ const EnvSchema = z.object({
   /** Unfinished resumable uploads expire after this many hours (tus expiration extension). */
   TUS_EXPIRE_HOURS: z.coerce.number().positive().default(24),
   STORAGE_SWEEP_MINUTES: z.coerce.number().positive().default(60),
+  /** A stored original that no media row names is removed by the sweep once it is this old (an upload in flight has no row yet). */
+  ORPHAN_GRACE_MINUTES: z.coerce.number().positive().default(60),
+  /** Readiness reports `low` (and managers see a warning) when the database's or the uploads' disk has less free space than this. */
+  DISK_LOW_MB: z.coerce.number().min(0).default(1024),
   /** pino level; 'silent' turns request logs off (tests). */
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
-export type AppConfig = z.infer<typeof EnvSchema> & { jwtSecret: string; appOrigin: string };
+export type AppConfig = z.infer<typeof EnvSchema> & {
+  jwtSecret: string;
+  appOrigin: string;
+  /** Where links in e-mails and PDFs point: PUBLIC_URL, else (development and test only) http://localhost:PORT. No trailing slash. */
+  publicUrl: string;
+};
 
 export const APP_CONFIG = Symbol('APP_CONFIG');
+
+/** A configuration the server must not start with; main.ts prints its message alone and exits. */
+export class ConfigError extends Error {}
 
 /**
  * Reads the environment once. Without JWT_SECRET a random secret is kept beside
@@ -125,11 +139,18 @@ export const APP_CONFIG = Symbol('APP_CONFIG');
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const parsed = EnvSchema.safeParse(env);
   if (!parsed.success) {
-    throw new Error(`Invalid environment: ${z.prettifyError(parsed.error)}`);
+    throw new ConfigError(`Invalid environment: ${z.prettifyError(parsed.error)}`);
   }
   const cfg = parsed.data;
-  const appOrigin = new URL(cfg.APP_ORIGIN ?? cfg.PUBLIC_URL ?? `http://localhost:${cfg.PORT}`).origin;
-  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH), appOrigin };
+  if (cfg.NODE_ENV === 'production' && !cfg.PUBLIC_URL) {
+    throw new ConfigError(
+      'PUBLIC_URL is required when NODE_ENV=production: owner links and report links are built from it. ' +
+        'Set it to the address customers open, e.g. PUBLIC_URL=https://workshop.example.com',
+    );
+  }
+  const publicUrl = (cfg.PUBLIC_URL ?? `http://localhost:${cfg.PORT}`).replace(/\/+$/, '');
+  const appOrigin = new URL(cfg.APP_ORIGIN ?? publicUrl).origin;
+  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH), appOrigin, publicUrl };
 }
 
 function secretBeside(databasePath: string): string {

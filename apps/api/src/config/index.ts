@@ -1,2 +1,2 @@
-export { APP_CONFIG, REPO_ROOT, loadConfig, type AppConfig } from './app-config';
+export { APP_CONFIG, ConfigError, REPO_ROOT, loadConfig, type AppConfig } from './app-config';
 export { ConfigModule } from './config.module';

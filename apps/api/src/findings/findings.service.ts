@@ -175,33 +175,35 @@ export class FindingsService {
 
   /** Staff record a decision the owner gave by phone, in person or by e-mail. */
   recordDecision(actor: AuthUser, jobId: number, recommendationId: number, input: RecordDecisionRequest): DecisionDto {
-    this.openJob(actor, jobId, 'decision');
     const decidedAt = input.decidedAt ? new Date(input.decidedAt) : this.clock.now();
     return this.decide(actor, jobId, recommendationId, { ...input, recordedBy: actor.id, decidedAt });
   }
 
   /**
    * The one way a decision is stored, for staff and for the owner page alike
-   * (channel owner_link, recordedBy null, scope from the owner link's job).
+   * (channel owner_link, recordedBy null). JobAccess checks the actor the same
+   * way for both: a closed job is JOB_CLOSED for the owner and for desk, and a
+   * manager's correction is the audited override. Row, recommendation status,
+   * event and audit entry commit together (inside the caller's transaction, if any).
    */
-  decide(scope: { shopId: number }, jobId: number, recommendationId: number, d: DecisionInput): DecisionDto {
-    const rec: RecommendationRow | undefined = this.repo.recommendation(scope.shopId, jobId, recommendationId);
-    if (!rec) throw notFound('Recommendation');
-    if (d.seen) this.requireSeenPrice(rec, d.seen);
-    const row = this.uow.run((tx) => {
-      const inserted = this.repo.insertDecision({ ...d, shopId: scope.shopId, jobId, recommendationId, recordedAt: this.clock.now() });
-      this.repo.updateRecommendation(scope.shopId, rec.id, { decisionStatus: d.status });
-      publish(this.emitter, new RecommendationDecidedEvent(tx, scope.shopId, jobId, rec.id, d.status, d.channel));
-      const who = d.recordedBy === null ? { shopId: scope.shopId, id: null } : { shopId: scope.shopId, id: d.recordedBy };
-      this.audit.record(who, {
+  decide(actor: JobCaller, jobId: number, recommendationId: number, d: DecisionInput): DecisionDto {
+    const shopId = actor.shopId;
+    return this.uow.run((tx) => {
+      this.jobs.change(actor, jobId, 'decision');
+      const rec: RecommendationRow | undefined = this.repo.recommendation(shopId, jobId, recommendationId);
+      if (!rec) throw notFound('Recommendation');
+      if (d.seen) this.requireSeenPrice(rec, d.seen);
+      const inserted = this.repo.insertDecision({ ...d, shopId, jobId, recommendationId, recordedAt: this.clock.now() });
+      this.repo.updateRecommendation(shopId, rec.id, { decisionStatus: d.status });
+      publish(this.emitter, new RecommendationDecidedEvent(tx, shopId, jobId, rec.id, d.status, d.channel));
+      this.audit.record(d.recordedBy === null ? { shopId, id: null } : { shopId, id: d.recordedBy }, {
         action: 'recommendation.decided',
         entityType: 'job',
         entityId: jobId,
         details: { recommendationId, status: d.status, channel: d.channel, decidedByName: d.decidedByName },
       });
-      return inserted;
+      return toDecisionDto(inserted);
     });
-    return toDecisionDto(row);
   }
 
   private requireSeenPrice(rec: RecommendationRow, seen: { updatedAt: string; grossMinor: number }): void {

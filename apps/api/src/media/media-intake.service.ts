@@ -136,7 +136,8 @@ export class MediaIntakeService {
     try {
       return this.uow.run((tx) => this.remember(actor, jobId, file, meta, found, stored, tx));
     } catch (err) {
-      await this.storage.delete(stored.key);
+      // No row, no file: the original must not outlive a failed commit (the sweep catches a crash in between).
+      await this.storage.delete(stored.key).catch(() => undefined);
       throw err;
     }
   }

@@ -1,9 +1,10 @@
 import { Inject, Injectable, Logger, type OnModuleInit } from '@nestjs/common';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
-import { removeLeftovers, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
+import { removeLeftovers, STORAGE, type Storage, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { TASK_RUNNER, TaskHandler, type TaskRunner } from '../infra/tasks';
 import { MediaTusService } from './media-tus.service';
+import { MediaRepository } from './media.repository';
 
 export const SWEEP_TASK = 'storage.sweep' as const;
 /** A live upload or storage write touches its file every few seconds; half an hour idle means it is dead. */
@@ -27,6 +28,8 @@ export class MediaSweepService implements OnModuleInit {
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly tus: MediaTusService,
+    private readonly repo: MediaRepository,
+    @Inject(STORAGE) private readonly storage: Storage,
   ) {}
 
   /** Runs before the server listens and before the task runner starts, so nothing of ours is live. */
@@ -37,15 +40,33 @@ export class MediaSweepService implements OnModuleInit {
     this.tasks.enqueue({ kind: SWEEP_TASK, key: `boot-${this.clock.now().toISOString()}`, shopId: null });
   }
 
+  /** One sweep now (the storage.sweep task's handler; tests call it too). */
   @TaskHandler(SWEEP_TASK, { concurrency: 1, maxAttempts: 3 })
   async sweep(): Promise<void> {
     const now = this.clock.now();
     const removed = await this.removeLeftovers(new Date(now.getTime() - LIVE_WRITE_GRACE_MS));
-    const expired = await this.tus.expireAbandoned();
+    const expired = (await this.tus.expireAbandoned()) + (await this.tus.removeUnreadable(new Date(now.getTime() - LIVE_WRITE_GRACE_MS)));
+    const orphans = await this.removeOrphanOriginals(new Date(now.getTime() - this.cfg.ORPHAN_GRACE_MINUTES * 60_000));
     const pruned = this.tasks.prune?.(new Date(now.getTime() - DONE_TASK_RETENTION_MS)) ?? 0;
-    if (removed.length + expired + pruned > 0)
-      this.logger.log(`Sweep: ${removed.length} leftover file(s), ${expired} expired upload(s), ${pruned} old task row(s)`);
+    if (removed.length + expired + orphans + pruned > 0)
+      this.logger.log(`Sweep: ${removed.length} leftover file(s), ${expired} dead upload(s), ${orphans} original(s) with no row, ${pruned} old task row(s)`);
     this.scheduleNext(now);
+  }
+
+  /**
+   * Originals that no media row names (the row's commit failed after the file was stored, and the
+   * process died before removing it). Only files older than the grace period are candidates, and
+   * the keys rows name are read after listing them, so a file whose row is committing is never taken.
+   */
+  private async removeOrphanOriginals(olderThan: Date): Promise<number> {
+    if (!this.storage.listKeys) return 0;
+    const candidates: string[] = [];
+    for await (const f of this.storage.listKeys('originals/')) if (f.modifiedAt < olderThan) candidates.push(f.key);
+    if (candidates.length === 0) return 0;
+    const named = this.repo.originalKeys();
+    const orphans = candidates.filter((k) => !named.has(k));
+    for (const key of orphans) await this.storage.delete(key);
+    return orphans.length;
   }
 
   /** One task per time slot: every chain (one per boot) converges on the same key, so they never pile up. */

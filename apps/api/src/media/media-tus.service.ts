@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import { NodeRequest, sendNodeResponse } from 'srvx/node';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
-import { DomainError, notFound } from '../core/http';
+import { DomainError, domainErrorOf, notFound } from '../core/http';
 import { UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { MediaIntakeService } from './media-intake.service';
 import { withJsonError } from './media-tus.errors';
@@ -108,6 +108,11 @@ export class MediaTusService implements OnModuleInit {
     return this.server.cleanUpExpiredUploads();
   }
 
+  /** Deletes uploads whose metadata is unreadable (a start cut off by a full disk or a crash) once idle since `olderThan`. */
+  removeUnreadable(olderThan: Date): Promise<number> {
+    return this.store.removeUnreadable(olderThan);
+  }
+
   private async assertAccess(actor: AuthUser, uploadId: string): Promise<Upload> {
     if (!UPLOAD_ID.test(uploadId)) throw notFound('Upload');
     const upload = await this.store.getUpload(uploadId).catch(() => null);
@@ -140,7 +145,7 @@ export class MediaTusService implements OnModuleInit {
       return { status_code: 204, headers: { 'BenchProof-Media-Id': String(asset.id) }, body: '' };
     } catch (err) {
       if (!(err instanceof DomainError)) this.logger.error((err as Error).stack ?? String(err));
-      const domain = err instanceof DomainError ? err : new DomainError('INTERNAL');
+      const domain = domainErrorOf(err);
       this.remember(upload.id, { shopId: actor.shopId, assetId: null, error: { code: domain.code, message: domain.message }, size: upload.offset });
       throw tusError(domain);
     } finally {

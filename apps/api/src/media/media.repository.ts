@@ -166,4 +166,10 @@ export class MediaRepository {
     this.db.delete(findingMedia).where(eq(findingMedia.findingId, findingId)).run();
     assetIds.forEach((assetId, position) => this.db.insert(findingMedia).values({ findingId, assetId, position }).run());
   }
+
+  /** Every original key a row still names (purged rows have none). */
+  originalKeys(): Set<string> {
+    const rows = this.db.select({ key: mediaAssets.originalKey }).from(mediaAssets).all();
+    return new Set(rows.flatMap((r) => (r.key ? [r.key] : [])));
+  }
 }

@@ -1,17 +1,3 @@
 export { OwnerModule } from './owner.module';
-export { OwnerLinksService } from './owner-links.service';
-export {
-  OWNER_LINK_MAILER,
-  OWNER_MEDIA,
-  OWNER_PAIRS,
-  OWNER_REPORT,
-  type OwnerActor,
-  type OwnerLinkMail,
-  type OwnerLinkMailerPort,
-  type OwnerMediaPort,
-  type OwnerPairsPort,
-  type OwnerReportPort,
-  type OwnerShotSource,
-  type StreamReply,
-} from './owner.ports';
-export { CurrentOwner, OwnerLinkGuard } from './owner-link.guard';
+export { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
+export { CurrentOwner, OwnerRoute, type LinkOwner } from './owner-link.guard';

@@ -1,16 +1,8 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { notFound } from '../core/http';
+import { type FileToSend, notFound } from '../core/http';
 import { FindingsService } from '../findings';
-import {
-  OWNER_MEDIA,
-  OWNER_PAIRS,
-  OWNER_REPORT,
-  type OwnerActor,
-  type OwnerMediaPort,
-  type OwnerPairsPort,
-  type OwnerReportPort,
-  type StreamReply,
-} from './owner.ports';
+import type { OwnerActor } from '../owner-links';
+import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort } from './owner.ports';
 
 /**
  * Bytes for the owner page. Only shots the page itself shows (linked to a
@@ -35,12 +27,12 @@ export class OwnerMediaService {
     return ids;
   }
 
-  open(owner: OwnerActor, assetId: number, variant: 'thumb' | 'screen', req: { range?: string; ifNoneMatch?: string }): Promise<StreamReply> {
+  open(owner: OwnerActor, assetId: number, variant: 'thumb' | 'screen'): Promise<FileToSend> {
     if (!this.shown(owner).has(assetId)) throw notFound('Media');
-    return this.media.open({ shopId: owner.shopId, jobId: owner.jobId }, assetId, variant, req);
+    return this.media.open({ shopId: owner.shopId, jobId: owner.jobId }, assetId, variant);
   }
 
-  report(owner: OwnerActor): Promise<StreamReply | null> {
+  report(owner: OwnerActor): Promise<FileToSend | null> {
     return this.reports.openPdf({ shopId: owner.shopId, jobId: owner.jobId });
   }
 }

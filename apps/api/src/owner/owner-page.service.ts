@@ -10,17 +10,9 @@ import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
-import { OwnerEventsBus } from './owner-events';
-import {
-  OWNER_MEDIA,
-  OWNER_PAIRS,
-  OWNER_REPORT,
-  type OwnerActor,
-  type OwnerMediaPort,
-  type OwnerPairsPort,
-  type OwnerReportPort,
-  type OwnerShotSource,
-} from './owner.ports';
+import { UnitOfWork } from '../core/db';
+import { OwnerEventsBus, type OwnerActor } from '../owner-links';
+import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
 
 /**
  * Everything the owner page shows and does, for one owner actor (one job).
@@ -43,6 +35,7 @@ export class OwnerPageService {
     @Inject(OWNER_PAIRS) private readonly pairs: OwnerPairsPort,
     @Inject(OWNER_REPORT) private readonly report: OwnerReportPort,
     @Inject(CLOCK) private readonly clock: Clock,
+    private readonly uow: UnitOfWork,
   ) {}
 
   page(owner: OwnerActor & { expiresAt: Date }, token: string): OwnerPageDto {
@@ -108,27 +101,32 @@ export class OwnerPageService {
   }
 
   /**
-   * The owner's answers, all or nothing: every item is checked (still pending,
-   * price as seen, safety declines confirmed) before any is stored, then each
-   * goes through FindingsService.decide — the same method staff use.
+   * The owner's answers, all or nothing by construction: one transaction holds every
+   * decision, its audit entry and the job's move, so a refusal of any item (closed
+   * job, already decided, price changed, unconfirmed safety decline) stores nothing.
+   * Each goes through FindingsService.decide, the same method staff use, with the
+   * owner actor, so JobAccess applies the closed-job rule to the owner as to staff.
    */
   decide(owner: OwnerActor, input: OwnerDecisionsRequest): void {
-    const byRec = new Map(this.findings.list(owner, owner.jobId).flatMap((f) => (f.recommendation ? [[f.recommendation.id, f] as const] : [])));
-    for (const item of input.items) this.check(byRec.get(item.recommendationId), item);
-    const ownerName = this.customers.get(owner, this.access.read(owner, owner.jobId).customerId).name;
     const decidedAt = this.clock.now();
-    for (const item of input.items) {
-      this.findings.decide(owner, owner.jobId, item.recommendationId, {
-        status: item.status,
-        channel: 'owner_link',
-        decidedByName: ownerName,
-        recordedBy: null,
-        decidedAt,
-        note: '',
-        seen: { updatedAt: item.seenUpdatedAt, grossMinor: item.seenGrossMinor },
-      });
-    }
-    this.moveJobOn(owner);
+    this.uow.run(() => {
+      const job = this.access.change(owner, owner.jobId, 'decision');
+      const byRec = new Map(this.findings.list(owner, owner.jobId).flatMap((f) => (f.recommendation ? [[f.recommendation.id, f] as const] : [])));
+      const ownerName = this.customers.get(owner, job.customerId).name;
+      for (const item of input.items) {
+        this.check(byRec.get(item.recommendationId), item);
+        this.findings.decide(owner, owner.jobId, item.recommendationId, {
+          status: item.status,
+          channel: 'owner_link',
+          decidedByName: ownerName,
+          recordedBy: null,
+          decidedAt,
+          note: '',
+          seen: { updatedAt: item.seenUpdatedAt, grossMinor: item.seenGrossMinor },
+        });
+      }
+      this.moveJobOn(owner);
+    });
     this.bus.emit(owner.shopId, { type: 'decided', jobId: owner.jobId, at: decidedAt.toISOString() });
   }
 

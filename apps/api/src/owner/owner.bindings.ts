@@ -1,12 +1,11 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { AnnotationRenderService } from '../annotations';
-import { notFound } from '../core/http';
+import { type FileToSend, notFound } from '../core/http';
 import { STORAGE, type Storage } from '../infra/storage';
-import { MailService } from '../mail';
 import { MediaService } from '../media';
 import { PairsService } from '../pairs';
 import { ReportsService } from '../reports';
-import type { OwnerLinkMail, OwnerLinkMailerPort, OwnerMediaPort, OwnerPairsPort, OwnerReportPort, OwnerShotSource, StreamReply } from './owner.ports';
+import type { OwnerMediaPort, OwnerPairsPort, OwnerReportPort, OwnerShotSource } from './owner.ports';
 
 type Scope = { shopId: number; jobId: number };
 const STILLS = new Set(['photo', 'scope_still']);
@@ -36,16 +35,19 @@ export class AnnotatedOwnerMedia implements OwnerMediaPort {
     return out;
   }
 
-  async open(scope: Scope, assetId: number, _variant: 'thumb' | 'screen', req: { ifNoneMatch?: string }): Promise<StreamReply> {
+  async open(scope: Scope, assetId: number): Promise<FileToSend> {
     // Live stills of this job only; uprightImage refuses deleted, purged and video assets.
     if (this.media.uprightImage(scope.shopId, assetId, 'screen').jobId !== scope.jobId) throw notFound('Media');
     const img = await this.renders.annotated(scope.shopId, assetId, 'screen');
     const stat = await this.storage.stat(img.key);
     if (!stat) throw notFound('Media file');
-    const etag = `"o${assetId}-v${img.version}"`;
-    const headers: Record<string, string> = { 'Content-Type': 'image/jpeg', 'Cache-Control': 'private, no-cache', ETag: etag };
-    if (req.ifNoneMatch?.split(',').some((t) => t.trim() === etag)) return { status: 304, headers, body: null };
-    return { status: 200, headers: { ...headers, 'Content-Length': String(stat.bytes) }, body: this.storage.createReadStream(img.key) };
+    return {
+      size: stat.bytes,
+      etag: `"o${assetId}-v${img.version}"`,
+      contentType: 'image/jpeg',
+      cacheControl: 'private, no-cache',
+      open: (range) => this.storage.createReadStream(img.key, range),
+    };
   }
 }
 
@@ -81,31 +83,18 @@ export class OwnerReportFromReports implements OwnerReportPort {
     return this.ready(scope);
   }
 
-  openPdf(scope: Scope): Promise<StreamReply | null> {
+  openPdf(scope: Scope): Promise<FileToSend | null> {
     const r = this.ready(scope);
     if (!r) return Promise.resolve(null);
     const pdf = this.reports.issuedPdf(scope.shopId, r.id);
     return Promise.resolve({
-      status: 200,
-      headers: {
-        'Content-Type': pdf.contentType,
-        'Content-Length': String(pdf.byteSize),
-        'Cache-Control': 'private, no-cache',
-        ETag: `"${pdf.sha256}"`,
-        'Content-Disposition': `attachment; filename="${pdf.filename}"`,
-      },
-      body: pdf.stream(),
+      size: pdf.byteSize,
+      etag: `"${pdf.sha256}"`,
+      contentType: pdf.contentType,
+      cacheControl: 'private, no-cache',
+      disposition: `attachment; filename="${pdf.filename}"`,
+      ranges: false,
+      open: () => pdf.stream(),
     });
-  }
-}
-
-/** The owner link goes out through the outbox as "your estimate needs your decision". */
-@Injectable()
-export class OutboxOwnerLinkMailer implements OwnerLinkMailerPort {
-  constructor(private readonly mail: MailService) {}
-
-  send(m: OwnerLinkMail): ReturnType<OwnerLinkMailerPort['send']> {
-    this.mail.queueEstimateDecision({ id: m.createdBy, shopId: m.shopId }, m.jobId, m.url);
-    return { status: 'queued' };
   }
 }

@@ -1,7 +1,7 @@
 import { ThrottlerModule } from '@nestjs/throttler';
-import { Module } from '@nestjs/common';
+import { type MiddlewareConsumer, Module, type NestModule } from '@nestjs/common';
+import type { NextFunction, Request, Response } from 'express';
 import { AnnotationsModule } from '../annotations';
-import { AuditModule } from '../audit';
 import { BikesModule } from '../bikes';
 import { ConsentModule } from '../consent';
 import { CustomersModule } from '../customers';
@@ -9,31 +9,36 @@ import { FindingsModule } from '../findings';
 import { InspectionModule } from '../inspection';
 import { StorageModule } from '../infra/storage';
 import { JobsModule } from '../jobs';
-import { MailModule } from '../mail';
 import { MediaModule } from '../media';
+import { OwnerLinksModule } from '../owner-links';
 import { PairsModule } from '../pairs';
 import { ReportsModule } from '../reports';
 import { ShopsModule } from '../shops';
-import { OwnerEventsBus } from './owner-events';
 import { OwnerLinkGuard } from './owner-link.guard';
-import { OwnerLinksController } from './owner-links.controller';
-import { OwnerLinksRepository } from './owner-links.repository';
-import { OwnerLinksService } from './owner-links.service';
 import { OwnerMediaService } from './owner-media.service';
 import { OwnerPageService } from './owner-page.service';
-import { AnnotatedOwnerMedia, OutboxOwnerLinkMailer, OwnerPairsFromPairs, OwnerReportFromReports } from './owner.bindings';
+import { AnnotatedOwnerMedia, OwnerPairsFromPairs, OwnerReportFromReports } from './owner.bindings';
 import { OwnerController } from './owner.controller';
-import { OWNER_LINK_MAILER, OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT } from './owner.ports';
+import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT } from './owner.ports';
 
 /**
- * The owner link and the owner page. The four ports are bound to the mail
- * outbox, annotated renders, pairs and reports (adapters in owner.bindings.ts).
+ * Owner answers hold the owner's name and prices: no shared cache and no browser
+ * history may keep them. Set before the guards run, so errors carry it too; file
+ * answers replace it with `private, no-cache`.
+ */
+function noStore(_req: Request, res: Response, next: NextFunction): void {
+  res.setHeader('Cache-Control', 'no-store');
+  next();
+}
+
+/**
+ * The public owner page (the staff side of links is ../owner-links). The three
+ * ports are bound to annotated renders, pairs and reports (owner.bindings.ts).
  */
 @Module({
-  // Owner routes are public: each address gets its own budget (ThrottlerGuard on the controller).
+  // Owner routes are public: each address gets its own budget (ThrottlerGuard via @OwnerRoute).
   imports: [
     ThrottlerModule.forRoot([{ ttl: 60_000, limit: 120 }]),
-    AuditModule,
     BikesModule,
     ConsentModule,
     CustomersModule,
@@ -41,26 +46,25 @@ import { OWNER_LINK_MAILER, OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT } from './own
     InspectionModule,
     JobsModule,
     MediaModule,
+    OwnerLinksModule,
     ShopsModule,
     AnnotationsModule,
-    MailModule,
     PairsModule,
     ReportsModule,
     StorageModule,
   ],
-  controllers: [OwnerController, OwnerLinksController],
+  controllers: [OwnerController],
   providers: [
-    OwnerLinksRepository,
-    OwnerLinksService,
     OwnerPageService,
     OwnerMediaService,
-    OwnerEventsBus,
     OwnerLinkGuard,
     { provide: OWNER_MEDIA, useClass: AnnotatedOwnerMedia },
     { provide: OWNER_PAIRS, useClass: OwnerPairsFromPairs },
     { provide: OWNER_REPORT, useClass: OwnerReportFromReports },
-    { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer },
   ],
-  exports: [OwnerLinksService],
 })
-export class OwnerModule {}
+export class OwnerModule implements NestModule {
+  configure(consumer: MiddlewareConsumer): void {
+    consumer.apply(noStore).forRoutes(OwnerController);
+  }
+}

@@ -1,20 +1,10 @@
-import type { OwnerActor as PolicyOwnerActor } from '@benchproof/contracts';
-import type { Readable } from 'node:stream';
+import type { FileToSend } from '../core/http';
 
 /**
  * What the owner page needs from other features (annotated renders, pairs,
- * reports, the mail outbox). Each is a small port bound by token in
- * owner.module.ts to an adapter in owner.bindings.ts.
+ * reports). Each is a small port bound by token in owner.module.ts to an
+ * adapter in owner.bindings.ts.
  */
-
-/** Who is calling an owner route: the policy's owner actor, plus the link it came through (consent, last viewed). */
-export type OwnerActor = PolicyOwnerActor & { linkId: number };
-
-export interface StreamReply {
-  status: 200 | 206 | 304 | 416;
-  headers: Record<string, string>;
-  body: Readable | null;
-}
 
 export interface OwnerShotSource {
   id: number;
@@ -27,12 +17,7 @@ export interface OwnerShotSource {
 export const OWNER_MEDIA = Symbol('OWNER_MEDIA');
 export interface OwnerMediaPort {
   shotsOfFindings(scope: { shopId: number; jobId: number }, findingIds: number[]): Map<number, OwnerShotSource[]>;
-  open(
-    scope: { shopId: number; jobId: number },
-    assetId: number,
-    variant: 'thumb' | 'screen',
-    req: { range?: string; ifNoneMatch?: string },
-  ): Promise<StreamReply>;
+  open(scope: { shopId: number; jobId: number }, assetId: number, variant: 'thumb' | 'screen'): Promise<FileToSend>;
 }
 
 /** Before/after pairs of the job, in the shop's order. */
@@ -45,22 +30,5 @@ export interface OwnerPairsPort {
 export const OWNER_REPORT = Symbol('OWNER_REPORT');
 export interface OwnerReportPort {
   latest(scope: { shopId: number; jobId: number }): { issuedAt: Date } | null;
-  openPdf(scope: { shopId: number; jobId: number }): Promise<StreamReply | null>;
-}
-
-/** Sends the owner link by e-mail ("estimate needs your decision"); desk can always copy the link too. */
-export const OWNER_LINK_MAILER = Symbol('OWNER_LINK_MAILER');
-export interface OwnerLinkMail {
-  shopId: number;
-  jobId: number;
-  linkId: number;
-  /** The staff member who created the link (the outbox row's author). */
-  createdBy: number;
-  to: string;
-  ownerName: string;
-  url: string;
-  expiresAt: Date;
-}
-export interface OwnerLinkMailerPort {
-  send(mail: OwnerLinkMail): { status: 'queued' } | { status: 'not_sent'; reason: string };
+  openPdf(scope: { shopId: number; jobId: number }): Promise<FileToSend | null>;
 }

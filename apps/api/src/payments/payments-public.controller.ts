@@ -1,24 +1,22 @@
-import { Controller, Get, Headers, HttpCode, Param, Post, Req, UseGuards } from '@nestjs/common';
+import { Controller, Get, Headers, HttpCode, Param, Post, Req } from '@nestjs/common';
 import type { RawBodyRequest } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { Throttle, ThrottlerGuard } from '@nestjs/throttler';
+import { Throttle } from '@nestjs/throttler';
 import type { Request } from 'express';
-import { assertCan, Public } from '../core/auth';
-import { CurrentOwner, OwnerLinkGuard, type OwnerActor } from '../owner';
+import { Can, Public } from '../core/auth';
+import { CurrentOwner, OwnerRoute, type LinkOwner } from '../owner';
 import { CheckoutService } from './checkout.service';
 
 /** The owner's side of paying: what is due, and a checkout for it (the owner link is the credential). */
 @ApiTags('owner')
-@Public()
-@UseGuards(ThrottlerGuard, OwnerLinkGuard)
-@Throttle({ default: { limit: 120, ttl: 60_000 } })
+@OwnerRoute()
 @Controller('owner/:token/payment')
 export class OwnerPaymentController {
   constructor(private readonly checkout: CheckoutService) {}
 
   @Get()
-  view(@CurrentOwner() owner: OwnerActor) {
-    assertCan(owner, 'owner.view');
+  @Can('owner.view')
+  view(@CurrentOwner() owner: LinkOwner) {
     return this.checkout.ownerView(owner);
   }
 
@@ -26,8 +24,8 @@ export class OwnerPaymentController {
   @Post('checkout')
   @HttpCode(200)
   @Throttle({ default: { limit: 10, ttl: 60_000 } })
-  start(@CurrentOwner() owner: OwnerActor, @Param('token') token: string, @Req() req: Request) {
-    assertCan(owner, 'owner.pay');
+  @Can('owner.pay')
+  start(@CurrentOwner() owner: LinkOwner, @Param('token') token: string, @Req() req: Request) {
     return this.checkout.start(owner, token, `${req.protocol}://${req.get('host') ?? 'localhost'}`);
   }
 }

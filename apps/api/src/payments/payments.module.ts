@@ -2,7 +2,7 @@ import { Module } from '@nestjs/common';
 import { AuditModule } from '../audit';
 import { JobsModule } from '../jobs';
 import { MailModule } from '../mail';
-import { OwnerModule } from '../owner';
+import { OwnerLinksModule } from '../owner-links';
 import { ShopsModule } from '../shops';
 import { UsersModule } from '../users';
 import { BalanceService } from './balance.service';
@@ -13,7 +13,7 @@ import { PaymentsRepository } from './payments.repository';
 import { PaymentsService } from './payments.service';
 
 @Module({
-  imports: [AuditModule, JobsModule, MailModule, OwnerModule, ShopsModule, UsersModule],
+  imports: [AuditModule, JobsModule, MailModule, OwnerLinksModule, ShopsModule, UsersModule],
   controllers: [PaymentsController, OwnerPaymentController, PaymentsWebhookController],
   providers: [PaymentsRepository, BalanceService, PaymentsService, CheckoutService],
   exports: [PaymentsService, BalanceService],

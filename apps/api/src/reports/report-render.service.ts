@@ -109,7 +109,7 @@ export class ReportRenderService {
 
   /** The short link printed on the last page: 16 hex of the fingerprint (64 bits) is enough to find one report. */
   verifyUrl(fingerprint: string): string {
-    const base = (this.cfg.PUBLIC_URL ?? `http://localhost:${this.cfg.PORT}`).replace(/\/$/, '');
+    const base = this.cfg.publicUrl;
     return `${base}/verify?c=${fingerprint.slice(0, 16)}`;
   }
 

@@ -1,9 +1,9 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { IssueReportRequestSchema, type IssueReportRequest } from '@benchproof/contracts';
-import type { Response } from 'express';
+import type { Request, Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, notFound, zod } from '../core/http';
+import { ApiZodBody, notFound, sendFile, zod } from '../core/http';
 import { ReportsService } from './reports.service';
 
 /** A job's bench report: drafts to preview, issued versions to keep and send. */
@@ -47,18 +47,18 @@ export class ReportsController {
     @Param('jobId', ParseIntPipe) jobId: number,
     @Param('id', ParseIntPipe) id: number,
     @Query('download') download: string | undefined,
+    @Req() req: Request,
     @Res() res: Response,
   ) {
     const file = this.reports.pdf(user, jobId, id);
-    res.set({
-      'Content-Type': 'application/pdf',
-      'Content-Length': String(file.byteSize),
-      ETag: `"${file.sha256}"`,
-      'Cache-Control': 'private, max-age=300',
-      'Content-Disposition': `${download ? 'attachment' : 'inline'}; filename="${file.filename}"`,
+    return sendFile(req, res, {
+      size: file.byteSize,
+      etag: `"${file.sha256}"`,
+      contentType: 'application/pdf',
+      cacheControl: 'private, max-age=300',
+      disposition: `${download ? 'attachment' : 'inline'}; filename="${file.filename}"`,
+      open: file.open,
     });
-    file.stream.on('error', () => res.destroy());
-    file.stream.pipe(res);
   }
 
   /** Page images for browsers without an inline PDF viewer. */

@@ -8,7 +8,7 @@ import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../core/clock';
 import { PDF_PAGES, type PdfPageImages } from '../infra/pdf';
-import { STORAGE, type Storage } from '../infra/storage';
+import { type ByteRange, STORAGE, type Storage } from '../infra/storage';
 import { JobAccess } from '../jobs';
 import { ShopsService } from '../shops';
 import type { ReportSnapshot } from './report-data';
@@ -125,9 +125,10 @@ export class ReportsService implements OnApplicationBootstrap {
   }
 
   /** The PDF of a rendered draft or version, for preview and download. */
-  pdf(actor: AuthUser, jobId: number, id: number): { stream: Readable; filename: string; sha256: string; byteSize: number } {
+  pdf(actor: AuthUser, jobId: number, id: number): { open: (range?: ByteRange) => Readable; filename: string; sha256: string; byteSize: number } {
     const row = this.ready(this.owned(actor, jobId, id));
-    return { stream: this.storage.createReadStream(row.storageKey), filename: this.filename(row), sha256: row.sha256, byteSize: row.byteSize };
+    const key = row.storageKey;
+    return { open: (range) => this.storage.createReadStream(key, range), filename: this.filename(row), sha256: row.sha256, byteSize: row.byteSize };
   }
 
   /** One page as PNG, for browsers that show no PDF inline; null past the last page. */

@@ -5,7 +5,7 @@ import { DB, type Db } from '../../src/core/db';
 import { outboxMessages, ownerLinks } from '../../src/db/schema';
 import type { AuthUser } from '../../src/core/auth';
 import { CLOCK, type Clock } from '../../src/core/clock';
-import { OwnerLinksService } from '../../src/owner';
+import { OwnerLinksService } from '../../src/owner-links';
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
 import { eventually } from '../mail/mail-fixtures';
 import { derivativesSettled, solidJpeg } from '../media/media-fixtures';

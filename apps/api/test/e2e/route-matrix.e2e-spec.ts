@@ -6,13 +6,15 @@ interface Operation {
   path: string;
   method: 'get' | 'post' | 'put' | 'patch' | 'delete';
   public: boolean;
+  /** Called with an owner link (`/api/owner/{token}/…`), not a staff session. */
+  ownerLink: boolean;
   action: Action | undefined;
 }
 
 /** Every operation in the OpenAPI document, so routes added later are covered automatically. */
 async function operations(t: TestApp): Promise<Operation[]> {
   const doc = (await t.http().get('/api/docs-json').expect(200)).body as {
-    paths: Record<string, Record<string, { 'x-public'?: boolean; 'x-action'?: Action }>>;
+    paths: Record<string, Record<string, { 'x-public'?: boolean; 'x-owner-link'?: boolean; 'x-action'?: Action }>>;
   };
   return Object.entries(doc.paths).flatMap(([path, ops]) =>
     Object.entries(ops).map(([method, op]) => ({
@@ -20,6 +22,7 @@ async function operations(t: TestApp): Promise<Operation[]> {
       path,
       method: method as Operation['method'],
       public: op['x-public'] === true,
+      ownerLink: op['x-owner-link'] === true,
       action: op['x-action'],
     })),
   );
@@ -45,10 +48,12 @@ describe('route matrix from the OpenAPI document and ACCESS_POLICY', () => {
   let t: TestApp;
   let ops: Operation[];
   let guarded: Operation[];
+  let owner: Operation[];
   beforeAll(async () => {
     t = await startTestApp();
     ops = await operations(t);
-    guarded = ops.filter((o) => !o.public);
+    guarded = ops.filter((o) => !o.public && !o.ownerLink);
+    owner = ops.filter((o) => o.ownerLink);
   });
   afterAll(() => t.close());
 
@@ -105,6 +110,34 @@ describe('route matrix from the OpenAPI document and ACCESS_POLICY', () => {
       }
     }
   }, 120_000); // every route × every role: about 400 requests
+
+  it('names an owner action from ACCESS_POLICY on every owner-link route', () => {
+    expect(owner.map((o) => o.route)).toEqual(expect.arrayContaining(['GET /api/owner/{token}', 'POST /api/owner/{token}/decisions']));
+    expect(owner.filter((o) => !o.path.startsWith('/api/owner/{token}')).map((o) => o.route)).toEqual([]);
+    expect(owner.filter((o) => !o.action || !ACCESS_POLICY[o.action].owner).map((o) => ({ route: o.route, action: o.action }))).toEqual([]);
+  });
+
+  it('answers every owner-link route with the owner actor exactly as ACCESS_POLICY says, and refuses it to a staff session', async () => {
+    const desk = await t.signIn(DEMO.desk);
+    const job = (await desk.agent.get('/api/jobs?open=true').expect(200)).body as { items: { id: number }[] };
+    const created = (await desk.agent.post(`/api/jobs/${job.items[0].id}/owner-links`).send({ expiresInDays: 7, send: false }).expect(201)).body as {
+      url: string;
+    };
+    const token = created.url.split('/o/')[1];
+    for (const op of owner) {
+      const path = concrete(op.path.replace('{token}', token));
+      const res = await t.http()[op.method](path).send({});
+      const seen = res.status === 403 && (res.body as { code?: string }).code === 'FORBIDDEN' ? 'forbidden' : 'let through';
+      expect({ route: op.route, seen }).toEqual({ route: op.route, seen: ACCESS_POLICY[op.action!].owner ? 'let through' : 'forbidden' });
+      // A staff session is no owner link: without a real token the route does not exist for it.
+      const staff = await desk.agent[op.method](concrete(op.path)).send({});
+      expect({ route: op.route, status: staff.status, code: (staff.body as { code?: string }).code }).toEqual({
+        route: op.route,
+        status: 404,
+        code: 'OWNER_LINK_INVALID',
+      });
+    }
+  });
 
   it('lets public routes answer without a session', async () => {
     await t.http().get('/api/health').expect(200, { status: 'ok' });

@@ -6,9 +6,20 @@ import type { AuthUser } from './auth-user';
 
 export const IS_PUBLIC = 'benchproof:public';
 export const ACTION = 'benchproof:action';
+export const OWNER_LINK = 'benchproof:owner-link';
 
 /** Lets a route answer without a session; marked `x-public` in the OpenAPI document too. */
 export const Public = (): MethodDecorator & ClassDecorator => applyDecorators(SetMetadata(IS_PUBLIC, true), ApiExtension('x-public', true));
+
+/**
+ * Marks a route whose caller is an owner-link holder rather than signed-in staff: no
+ * session is asked for, and the policy check waits for the owner-link guard, which
+ * produces the owner actor and then runs the same check (`checkRoutePolicy`) against
+ * the route's `@Can`. Use the owner feature's `@OwnerRoute()`, which adds that guard.
+ * The OpenAPI document marks such routes `x-owner-link` (the route matrix reads it).
+ */
+export const OwnerLink = (): MethodDecorator & ClassDecorator =>
+  applyDecorators(SetMetadata(IS_PUBLIC, true), SetMetadata(OWNER_LINK, true), ApiExtension('x-owner-link', true));
 
 /**
  * Names the policy action a route performs (ACCESS_POLICY in libs/contracts). The

@@ -1,7 +1,7 @@
-export { Public, Can, CurrentUser, CurrentActor } from './auth.decorators';
+export { Public, Can, CurrentUser, CurrentActor, OwnerLink } from './auth.decorators';
 export type { AuthUser, Role, SessionClaims } from './auth-user';
 export { AuthCoreModule } from './auth-core.module';
-export { PolicyGuard, assertCan, staffActor } from './policy.guard';
+export { PolicyGuard, assertCan, checkRoutePolicy, staffActor } from './policy.guard';
 export { CSRF, issueCsrfToken } from './csrf';
 export { SESSION_COOKIE, CSRF_COOKIE, CSRF_HEADER, sessionCookieOptions } from './session-cookie';
 export { SessionStore } from './session-store';

@@ -3,7 +3,7 @@ import { Reflector } from '@nestjs/core';
 import { type Action, type Actor, actorCan, rolesFor } from '@benchproof/contracts';
 import type { Request } from 'express';
 import { DomainError } from '../http';
-import { ACTION, IS_PUBLIC } from './auth.decorators';
+import { ACTION, IS_PUBLIC, OWNER_LINK } from './auth.decorators';
 import type { AuthUser } from './auth-user';
 
 type ActorRequest = Request & { user?: AuthUser; actor?: Actor };
@@ -19,6 +19,17 @@ export function assertCan(actor: Actor | undefined, action: Action): void {
 }
 
 /**
+ * The one policy check of a route: the `@Can` action it names, for the actor on the
+ * request (staff from the session, or the owner actor the owner-link guard produced).
+ * A route that names no action is refused.
+ */
+export function checkRoutePolicy(reflector: Reflector, ctx: ExecutionContext): void {
+  const action = reflector.getAllAndOverride<Action | undefined>(ACTION, [ctx.getHandler(), ctx.getClass()]);
+  if (!action) throw new DomainError('FORBIDDEN', 'This route names no policy action.');
+  assertCan(ctx.switchToHttp().getRequest<ActorRequest>().actor, action);
+}
+
+/**
  * Global guard after the session guard: sets req.actor for staff and checks the
  * route's @Can action. A signed-in route without @Can is refused, so a new route
  * cannot slip past the policy (the route-matrix test lists any that try).
@@ -31,11 +42,11 @@ export class PolicyGuard implements CanActivate {
     const targets = [ctx.getHandler(), ctx.getClass()];
     const req = ctx.switchToHttp().getRequest<ActorRequest>();
     if (req.user) req.actor = staffActor(req.user);
-    // Public routes (login, health, owner links) check their own actor: see the owner-link guard.
+    // Owner-link routes: the owner-link guard (after the rate limiter) sets the actor and runs checkRoutePolicy.
+    if (this.reflector.getAllAndOverride<boolean>(OWNER_LINK, targets)) return true;
+    // Public routes (login, health) have no actor to check.
     if (this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, targets)) return true;
-    const action = this.reflector.getAllAndOverride<Action | undefined>(ACTION, targets);
-    if (!action) throw new DomainError('FORBIDDEN', 'This route names no policy action.');
-    assertCan(req.actor, action);
+    checkRoutePolicy(this.reflector, ctx);
     return true;
   }
 }

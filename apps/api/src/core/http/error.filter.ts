@@ -2,6 +2,7 @@ import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, Logger 
 import { ERROR_CODES, type ErrorBody, type ErrorCode } from '@benchproof/contracts';
 import type { Response } from 'express';
 import { DomainError } from './domain-error';
+import { isStorageFull } from './storage-full';
 
 const CODE_BY_STATUS: Record<number, ErrorCode> = {
   400: 'VALIDATION_FAILED',
@@ -44,6 +45,8 @@ export class ErrorFilter implements ExceptionFilter {
     }
     const body = bodyTooLarge(exception);
     if (body) return { status: 413, body };
+    // A full uploads disk (ENOSPC) or database disk (SQLITE_FULL): say so, in words a desk person can act on.
+    if (isStorageFull(exception)) return { status: 507, body: { code: 'STORAGE_FULL', message: ERROR_CODES.STORAGE_FULL.message, details: null } };
     if (exception instanceof HttpException) {
       const status = exception.getStatus();
       const code = CODE_BY_STATUS[status] ?? (status >= 500 ? 'INTERNAL' : 'VALIDATION_FAILED');

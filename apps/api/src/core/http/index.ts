@@ -1,3 +1,5 @@
 export { DomainError, notFound } from './domain-error';
 export { ErrorFilter } from './error.filter';
 export { ZodPipe, zod, ApiZodBody, ApiZodQuery } from './zod';
+export { sendFile, type FileToSend, type FileStatus } from './file-answer';
+export { isStorageFull, domainErrorOf } from './storage-full';

@@ -1,8 +1,19 @@
-import { index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { migrateDocument, type AnnotationDocument } from '@benchproof/annotation';
+import { customType, index, integer, sqliteTable, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { mediaAssets } from './media-assets.table';
 import { shops } from './shops.table';
 import { users } from './users.table';
+
+/**
+ * An annotation document stored as JSON text: written as it is, read through the lib's
+ * migrations, so every reader gets the current schema version with its type, never a cast.
+ */
+const annotationDocument = customType<{ data: AnnotationDocument; driverData: string }>({
+  dataType: () => 'text',
+  toDriver: (doc) => JSON.stringify(doc),
+  fromDriver: (json) => migrateDocument(JSON.parse(json)),
+});
 
 /**
  * Every saved state of a photo's annotation (autosave appends a version; the latest
@@ -20,7 +31,7 @@ export const annotationVersions = sqliteTable(
       .notNull()
       .references(() => mediaAssets.id),
     version: integer('version').notNull(),
-    document: text('document').notNull(),
+    document: annotationDocument('document').notNull(),
     savedAt: timestamp('saved_at').notNull(),
     savedBy: integer('saved_by')
       .notNull()

@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import { createReadStream, createWriteStream } from 'node:fs';
-import { chmod, mkdir, rename, rm, stat, unlink } from 'node:fs/promises';
-import { dirname, join } from 'node:path';
+import { chmod, mkdir, readdir, rename, rm, stat, unlink } from 'node:fs/promises';
+import { dirname, join, relative, sep } from 'node:path';
 import { type Readable, Transform } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { assertSafeKey, type AdoptOptions, type ByteRange, type PutOptions, type Storage, type StoredObject } from './storage';
@@ -83,5 +83,18 @@ export class LocalDiskStorage implements Storage {
     await unlink(target).catch((err: NodeJS.ErrnoException) => {
       if (err.code !== 'ENOENT') throw err;
     });
+  }
+
+  async *listKeys(prefix: string): AsyncIterable<{ key: string; modifiedAt: Date }> {
+    const entries = await readdir(join(this.root, ...prefix.split('/').filter(Boolean)), { recursive: true, withFileTypes: true }).catch(() => []);
+    for (const e of entries) {
+      if (!e.isFile() || e.name.endsWith('.partial')) continue;
+      const path = join(e.parentPath, e.name);
+      const modifiedAt = await stat(path).then(
+        (st) => st.mtime,
+        () => null,
+      );
+      if (modifiedAt) yield { key: relative(this.root, path).split(sep).join('/'), modifiedAt };
+    }
   }
 }

@@ -38,6 +38,8 @@ export interface Storage {
   createReadStream(key: string, range?: ByteRange): Readable;
   stat(key: string): Promise<{ bytes: number } | null>;
   delete(key: string): Promise<void>;
+  /** Stored keys under a prefix with their last change, for the sweep of originals no row names (optional for a remote store). */
+  listKeys?(prefix: string): AsyncIterable<{ key: string; modifiedAt: Date }>;
 }
 
 export const STORAGE = Symbol('STORAGE');

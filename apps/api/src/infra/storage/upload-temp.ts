@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
 import { rm, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { diskStorage, type Options } from 'multer';
+import { diskStorage, type Options, type StorageEngine } from 'multer';
 
 /**
  * Scratch space for incoming bytes: multer writes each multipart file here (never in
@@ -23,7 +23,7 @@ export class UploadTemp {
   /** Multer options: disk storage with a random name (the client's name is never a path) and a byte cap. */
   multerOptions(maxFileBytes: number, maxFiles: number): Pick<Options, 'storage' | 'limits'> {
     return {
-      storage: diskStorage({ destination: this.multipartDir, filename: (_req, _file, cb) => cb(null, randomUUID()) }),
+      storage: removingOnError(diskStorage({ destination: this.multipartDir, filename: (_req, _file, cb) => cb(null, randomUUID()) })),
       limits: { fileSize: maxFileBytes, files: maxFiles, fields: 20, fieldSize: 64 * 1024 },
     };
   }
@@ -41,3 +41,16 @@ export class UploadTemp {
 }
 
 export const UPLOAD_TEMP = Symbol('UPLOAD_TEMP');
+
+/** Multer leaves the file it was writing when the write fails (a full disk): this removes it before passing the error on. */
+function removingOnError(disk: StorageEngine): StorageEngine {
+  return {
+    _handleFile: (req, file, cb) =>
+      disk._handleFile(req, file, (err, info) => {
+        const path = (file as { path?: string }).path;
+        if (!err || !path) return cb(err, info);
+        void rm(path, { force: true }).finally(() => cb(err));
+      }),
+    _removeFile: (req, file, cb) => disk._removeFile(req, file, cb),
+  };
+}

@@ -2,9 +2,11 @@ import { ROLE_LABELS, type SessionUser } from '@benchproof/contracts';
 import { ActionIcon, Burger, Button, Group, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconKey, IconLogout } from '@tabler/icons-react';
+import { Suspense } from 'react';
 import { Link, Outlet, useNavigate } from 'react-router';
 import { Logo } from '../../components/logo';
 import { useLogout, useSession } from '../../features/auth';
+import { DiskSpaceWarning } from '../../features/disk-space';
 import { useShopSettings } from '../../features/shop-settings';
 import { shopCan } from '../shop-access';
 import classes from './app-layout.module.css';
@@ -66,6 +68,11 @@ export function AppLayout() {
         <Navigation can={can} onNavigate={close} />
       </nav>
       <main className={classes.main}>
+        {can('storage.view') && (
+          <Suspense fallback={null}>
+            <DiskSpaceWarning />
+          </Suspense>
+        )}
         <Outlet />
       </main>
     </>

@@ -1,2 +1,3 @@
 export { AnnotateEditor, type AnnotateEditorProps } from './components/annotate-editor';
+export { AnnotatedStill } from './components/annotated-still';
 export { annotatedUrl, annotationQuery } from './api/annotation';

@@ -7,7 +7,7 @@ import { FrozenNotice } from '../../../components/frozen-notice';
 import { QueryState } from '../../../components/query-state';
 import { useCan, useSession } from '../../../features/auth';
 import { JobHeader, jobKeys, useJob } from '../../../features/jobs';
-import { useOwnerEvents } from '../../../features/owner';
+import { useOwnerEvents } from '../../../features/owner-links';
 import { FailedMessagesNotice } from '../../../features/mail';
 import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';

@@ -1,4 +1,4 @@
-import { toPixel, type AnnotationDocument, type Shape } from '@benchproof/annotation';
+import { captionLayout, toPixel, type AnnotationDocument, type Shape } from '@benchproof/annotation';
 import type Konva from 'konva';
 import type { RefObject } from 'react';
 import { Circle, Image as KImage, Layer, Stage } from 'react-konva';
@@ -53,6 +53,7 @@ function SelectionHandles({ shape, size, scale, onHandleDown }: HandlesProps) {
 export function AnnotateCanvas({ doc, image, box, view, tool, style, selectedId, onSelect, onCommit, stageRef }: Props) {
   const size = doc.image;
   const { shapes, selected, down, move, up, handleDown, cancel } = useCanvasGestures({ doc, view, tool, style, selectedId, onSelect, onCommit, stageRef });
+  const captions = captionLayout({ ...doc, shapes }, size);
 
   return (
     <Stage
@@ -77,7 +78,7 @@ export function AnnotateCanvas({ doc, image, box, view, tool, style, selectedId,
       <Layer name="photo">
         <KImage image={image} width={size.width} height={size.height} />
         {shapes.map((s) => (
-          <ShapeNode key={s.id} doc={{ ...doc, shapes }} shape={s} size={size} image={image} />
+          <ShapeNode key={s.id} shape={s} size={size} image={image} captions={captions} />
         ))}
       </Layer>
       <Layer name="handles">

@@ -1,15 +1,17 @@
 import { emptyDocument, type AnnotationDocument } from '@benchproof/annotation';
-import { Box, Center, Loader } from '@mantine/core';
+import { Center, Loader } from '@mantine/core';
 import { useElementSize } from '@mantine/hooks';
 import type Konva from 'konva';
 import { useEffect, useRef, useState } from 'react';
 import { useAnnotation } from '../api/annotation';
 import { AnnotateCanvas } from './annotate-canvas';
+import classes from './annotate-editor.module.css';
 import { AnnotateToolbar } from './annotate-toolbar';
 import { AskDialogs } from './ask-dialogs';
-import { ChainPanel } from './chain-panel';
 import { EditorHeader } from './editor-header';
 import { exportStagePng } from './export-png';
+import { MeasureSheet } from './measure-sheet';
+import { ToolHint } from './tool-hint';
 import { useAutosave } from './use-autosave';
 import { useShapeEditing } from './use-shape-editing';
 import { useView } from './use-view';
@@ -22,28 +24,35 @@ export interface AnnotateEditorProps {
   title: string;
 }
 
-function useLoadedImage(url: string): HTMLImageElement | null {
-  const [img, setImg] = useState<HTMLImageElement | null>(null);
+function useLoadedImage(url: string): { img: HTMLImageElement | null; failed: boolean } {
+  const [state, setState] = useState<{ img: HTMLImageElement | null; failed: boolean }>({ img: null, failed: false });
   useEffect(() => {
     const el = new window.Image();
-    el.onload = () => setImg(el);
+    el.onload = () => setState({ img: el, failed: false });
+    el.onerror = () => setState({ img: null, failed: true });
     el.src = url;
   }, [url]);
-  return img;
+  return state;
 }
 
-/** Full-screen annotation editor over the screen derivative; the original photo is never changed. */
+/**
+ * Full-screen annotation editor over the screen derivative; the original photo is never changed.
+ * A photo that does not exist or belongs to another shop throws its NOT_FOUND to the route's
+ * error page (the not-found page) instead of spinning.
+ */
 export function AnnotateEditor(props: AnnotateEditorProps) {
   const annotation = useAnnotation(props.mediaId);
   const image = useLoadedImage(props.imageUrl);
-  if (!annotation.data || !image)
+  if (annotation.error) throw annotation.error;
+  if (image.failed && annotation.data) throw new Error('The photo could not be loaded. Go back and open it again.');
+  if (!annotation.data || !image.img)
     return (
       <Center h="100dvh">
         <Loader />
       </Center>
     );
-  const doc = annotation.data.document ?? emptyDocument(image.naturalWidth, image.naturalHeight);
-  return <EditorBody {...props} image={image} initial={doc} version={annotation.data.version} />;
+  const doc = annotation.data.document ?? emptyDocument(image.img.naturalWidth, image.img.naturalHeight);
+  return <EditorBody {...props} image={image.img} initial={doc} version={annotation.data.version} />;
 }
 
 function EditorBody({
@@ -58,37 +67,39 @@ function EditorBody({
   const { ref: boxRef, width, height } = useElementSize();
   const box = { width: Math.max(1, width), height: Math.max(1, height) };
   const view = useView(Math.min(box.width / initial.image.width, box.height / initial.image.height), box, initial.image);
-  const ed = useShapeEditing(initial.shapes, view);
+  const ed = useShapeEditing(initial.shapes, initial.image, view);
   const doc: AnnotationDocument = { ...initial, shapes: ed.shapes };
-  const save = useAutosave(mediaId, doc, version);
+  const save = useAutosave(mediaId, doc, version, ed.saved);
+  // The measurement sheet opens when a ruler is selected and stays shut once closed, until a ruler is tapped again.
+  const [sheetClosed, setSheetClosed] = useState(false);
   const { selected } = ed;
+  const onSelect = (id: string | null) => {
+    setSheetClosed(false);
+    ed.canvas.onSelect(id);
+  };
 
   return (
-    <Box
-      pos="fixed"
-      inset={0}
-      bg="dark.8"
-      style={{ zIndex: 300, display: 'flex', flexDirection: 'column' }}
-      data-testid="annotate-editor"
-      data-shapes={ed.shapes.length}
-      data-zoom={view.zoom.toFixed(2)}
-    >
+    <div className={classes.editor} data-testid="annotate-editor" data-shapes={ed.shapes.length} data-zoom={view.zoom.toFixed(2)}>
       <EditorHeader backTo={backTo} title={title} save={save} onExport={() => exportStagePng(stageRef.current, view, doc.image, mediaId)} />
       <AnnotateToolbar {...ed.toolbar} />
-      <Box ref={boxRef} style={{ flex: 1, minHeight: 0, overflow: 'hidden' }} data-testid="annotate-stage">
-        <AnnotateCanvas doc={doc} image={image} box={box} view={view} stageRef={stageRef} {...ed.canvas} />
-      </Box>
-      {selected?.kind === 'ruler' && (
-        <ChainPanel
-          key={selected.id}
-          mediaId={mediaId}
-          doc={doc}
-          ruler={selected}
-          savedVersion={save.version}
-          onPitches={(n) => ed.put({ ...selected, pitches: n })}
-        />
-      )}
+      <div className={classes.stage}>
+        <div ref={boxRef} className={classes.canvas} data-testid="annotate-stage">
+          <AnnotateCanvas doc={doc} image={image} box={box} view={view} stageRef={stageRef} {...ed.canvas} onSelect={onSelect} />
+        </div>
+        <ToolHint tool={ed.toolbar.tool} />
+        {selected?.kind === 'ruler' && !sheetClosed && (
+          <MeasureSheet
+            key={selected.id}
+            mediaId={mediaId}
+            doc={doc}
+            ruler={selected}
+            savedVersion={save.version}
+            onPitches={(n) => ed.put({ ...selected, pitches: n })}
+            onClose={() => setSheetClosed(true)}
+          />
+        )}
+      </div>
       <AskDialogs asking={ed.asking} onDone={ed.put} onClose={ed.closeAsking} />
-    </Box>
+    </div>
   );
 }

@@ -1,5 +1,4 @@
-import { PALETTE, PALETTE_COLOURS, STROKE_WIDTH_NAMES } from '@benchproof/annotation';
-import { ActionIcon, Group, SegmentedControl, Tooltip } from '@mantine/core';
+import { ActionIcon, Tooltip } from '@mantine/core';
 import {
   IconArrowBackUp,
   IconArrowForwardUp,
@@ -17,6 +16,8 @@ import {
 } from '@tabler/icons-react';
 import type { ReactNode } from 'react';
 import type { Style, Tool } from '../model/edit';
+import classes from './annotate-editor.module.css';
+import { StylePicker } from './style-picker';
 
 const TOOL_ICONS: Record<Tool, [ReactNode, string, string]> = {
   select: [<IconPointer key="s" />, 'Select and move', 'V'],
@@ -51,80 +52,68 @@ interface ToolButtonProps {
   active?: boolean;
   disabled?: boolean;
   color?: string;
+  className?: string;
 }
 
-/** One 48 px icon button, named by its tooltip text (which carries the shortcut). */
-function ToolButton({ label, onClick, children, active, disabled, color }: ToolButtonProps) {
+/** One 44 px icon button, named by its tooltip text (which carries the shortcut). */
+function ToolButton({ label, onClick, children, active, disabled, color, className }: ToolButtonProps) {
   return (
-    <Tooltip label={label}>
-      <ActionIcon size={48} variant={active ? 'filled' : 'light'} color={color} disabled={disabled} aria-label={label} aria-pressed={active} onClick={onClick}>
+    <Tooltip label={label} events={{ hover: true, focus: false, touch: false }}>
+      <ActionIcon
+        size={44}
+        variant={active ? 'filled' : 'subtle'}
+        color={color ?? 'gray.0'}
+        className={className}
+        disabled={disabled}
+        aria-label={label}
+        aria-pressed={active}
+        onClick={onClick}
+      >
         {children}
       </ActionIcon>
     </Tooltip>
   );
 }
 
-/** Ink colour swatches and the stroke width for new shapes (and the selected one). */
-function StylePicker({ style, onStyle }: Pick<Props, 'style' | 'onStyle'>) {
-  return (
-    <>
-      <Group gap={4}>
-        {PALETTE_COLOURS.map((c) => (
-          <ActionIcon
-            key={c}
-            size={44}
-            radius="xl"
-            aria-label={`Colour ${c}`}
-            aria-pressed={style.colour === c}
-            onClick={() => onStyle({ ...style, colour: c })}
-            style={{
-              background: PALETTE[c].ink,
-              border: `${style.colour === c ? 5 : 3}px solid ${PALETTE[c].outline}`,
-              outline: style.colour === c ? '3px solid #fff' : undefined,
-            }}
-          />
-        ))}
-      </Group>
-      <SegmentedControl
-        size="md"
-        value={style.width}
-        onChange={(w) => onStyle({ ...style, width: w })}
-        data={STROKE_WIDTH_NAMES.map((w) => ({ value: w, label: w }))}
-        aria-label="Stroke width"
-      />
-    </>
-  );
-}
-
-/** Big targets (48 px) for a finger or a stylus at the workstand; shortcuts in the tooltips. */
+/**
+ * The one tool bar: the drawing tools in a strip that scrolls sideways on a phone, then undo,
+ * redo, delete and one control for colour and width. Zoom buttons show from tablet width
+ * (a phone pinches). Every target is at least 44 px.
+ */
 export function AnnotateToolbar(p: Props) {
   return (
-    <Group gap={6} p={6} wrap="wrap" bg="dark.7" data-testid="annotate-toolbar">
-      {(Object.keys(TOOL_ICONS) as Tool[]).map((t) => {
-        const [node, name, key] = TOOL_ICONS[t];
-        const label = `${name} (${key})`;
-        return (
-          <ToolButton key={label} label={label} onClick={() => p.onTool(t)} active={p.tool === t}>
-            {node}
+    <div className={classes.toolbar} data-testid="annotate-toolbar">
+      <div className={classes.tools} role="group" aria-label="Tools">
+        {(Object.keys(TOOL_ICONS) as Tool[]).map((t) => {
+          const [node, name, key] = TOOL_ICONS[t];
+          const label = `${name} (${key})`;
+          return (
+            <ToolButton key={label} label={label} onClick={() => p.onTool(t)} active={p.tool === t} color={p.tool === t ? 'blue' : undefined}>
+              {node}
+            </ToolButton>
+          );
+        })}
+      </div>
+      <div className={classes.actions}>
+        <ToolButton label="Undo (Ctrl+Z)" onClick={p.onUndo} disabled={!p.canUndo}>
+          <IconArrowBackUp />
+        </ToolButton>
+        <ToolButton label="Redo (Ctrl+Shift+Z)" onClick={p.onRedo} disabled={!p.canRedo}>
+          <IconArrowForwardUp />
+        </ToolButton>
+        {p.onDelete && (
+          <ToolButton label="Delete (Del)" onClick={() => p.onDelete?.()} color="red.4">
+            <IconTrash />
           </ToolButton>
-        );
-      })}
-      <ToolButton label="Undo (Ctrl+Z)" onClick={p.onUndo} disabled={!p.canUndo}>
-        <IconArrowBackUp />
-      </ToolButton>
-      <ToolButton label="Redo (Ctrl+Shift+Z)" onClick={p.onRedo} disabled={!p.canRedo}>
-        <IconArrowForwardUp />
-      </ToolButton>
-      <ToolButton label="Delete (Del)" onClick={() => p.onDelete?.()} disabled={!p.onDelete} color="red">
-        <IconTrash />
-      </ToolButton>
-      <ToolButton label="Zoom in (+)" onClick={p.onZoomIn}>
-        <IconZoomIn />
-      </ToolButton>
-      <ToolButton label="Zoom out (−)" onClick={p.onZoomOut}>
-        <IconZoomOut />
-      </ToolButton>
-      <StylePicker style={p.style} onStyle={p.onStyle} />
-    </Group>
+        )}
+        <ToolButton label="Zoom in (+)" onClick={p.onZoomIn} className={classes.wideOnly}>
+          <IconZoomIn />
+        </ToolButton>
+        <ToolButton label="Zoom out (−)" onClick={p.onZoomOut} className={classes.wideOnly}>
+          <IconZoomOut />
+        </ToolButton>
+        <StylePicker style={p.style} onStyle={p.onStyle} />
+      </div>
+    </div>
   );
 }

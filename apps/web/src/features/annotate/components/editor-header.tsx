@@ -1,6 +1,7 @@
-import { ActionIcon, Badge, Button, Group, Text } from '@mantine/core';
+import { ActionIcon, Badge, Button, Text } from '@mantine/core';
 import { IconArrowLeft, IconDownload } from '@tabler/icons-react';
 import { Link } from 'react-router';
+import classes from './annotate-editor.module.css';
 import type { SaveState, useAutosave } from './use-autosave';
 
 const SAVE_LABEL: Record<SaveState, [string, string]> = {
@@ -18,34 +19,26 @@ interface Props {
   onExport: () => void;
 }
 
-/**
- * The editor's top bar: back, title, save state, save now and download. The title keeps at least
- * 14rem, so on a phone the actions wrap onto a second row instead of being pushed off screen, and
- * the title wraps to two lines before it is cut.
- */
+/** The editor's one-row top bar: back, title (cut to one line), save state, save now and download. */
 export function EditorHeader({ backTo, title, save, onExport }: Props) {
   const [label, colour] = SAVE_LABEL[save.state];
   return (
-    <Group justify="space-between" gap="xs" p={6} c="white" wrap="wrap">
-      <Group gap="xs" wrap="nowrap" style={{ minWidth: 0, flex: '1 1 14rem' }}>
-        <ActionIcon component={Link} to={backTo} size={48} variant="subtle" color="gray.0" aria-label="Back">
-          <IconArrowLeft />
-        </ActionIcon>
-        <Text fw={600} lineClamp={2}>
-          {title}
-        </Text>
-      </Group>
-      <Group gap="xs" wrap="wrap" justify="flex-end" ml="auto">
-        <Badge color={colour} size="lg" data-testid="save-state">
-          {label}
-        </Badge>
-        <Button size="md" h={48} onClick={() => void save.flush()} disabled={save.state === 'saved'}>
-          Save
-        </Button>
-        <ActionIcon size={48} variant="light" aria-label="Download the annotated image" onClick={onExport}>
-          <IconDownload />
-        </ActionIcon>
-      </Group>
-    </Group>
+    <header className={classes.header}>
+      <ActionIcon component={Link} to={backTo} size={44} variant="subtle" color="gray.0" aria-label="Back">
+        <IconArrowLeft />
+      </ActionIcon>
+      <Text fw={600} size="sm" truncate="end" className={classes.title} title={title}>
+        {title}
+      </Text>
+      <Badge color={colour} size="md" maw="9.5rem" data-testid="save-state" title={label}>
+        {label}
+      </Badge>
+      <Button size="sm" h={44} px="sm" onClick={() => void save.flush()} disabled={save.state === 'saved'}>
+        Save
+      </Button>
+      <ActionIcon size={44} variant="subtle" color="gray.0" aria-label="Download the annotated image" onClick={onExport}>
+        <IconDownload />
+      </ActionIcon>
+    </header>
   );
 }

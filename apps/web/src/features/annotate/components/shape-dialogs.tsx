@@ -41,6 +41,8 @@ export function ScaleDialog({ opened, onDone, onCancel }: { opened: boolean; onD
 
 export function LabelDialog({ opened, initial, onDone, onCancel }: { opened: boolean; initial: string; onDone: (text: string) => void; onCancel: () => void }) {
   const [text, setText] = useState(initial);
+  // No error before the mechanic has typed anything; after that, an empty label says why it cannot be placed.
+  const [touched, setTouched] = useState(false);
   const ok = text.trim().length > 0 && text.length <= 120;
   return (
     <Modal opened={opened} onClose={onCancel} title="Label" centered zIndex={400}>
@@ -49,9 +51,12 @@ export function LabelDialog({ opened, initial, onDone, onCancel }: { opened: boo
           size="lg"
           label="Text"
           value={text}
-          onChange={(e) => setText(e.currentTarget.value)}
+          onChange={(e) => {
+            setText(e.currentTarget.value);
+            setTouched(true);
+          }}
           maxLength={120}
-          error={!ok ? 'A label needs 1 to 120 characters.' : undefined}
+          error={touched && !ok ? 'A label needs 1 to 120 characters.' : undefined}
           data-autofocus
         />
         <Group justify="flex-end">

@@ -1,16 +1,15 @@
 import {
   arrowHead,
   arrowShaftEnd,
-  captionAnchor,
-  captionBox,
-  captionOf,
+  type captionLayout,
   endTicks,
   fontPx,
   outlinePx,
   PALETTE,
+  placeCaption,
   strokePx,
   toPixel,
-  type AnnotationDocument,
+  type CaptionRect,
   type Point,
   type Shape,
   type Size,
@@ -34,25 +33,18 @@ function Twice({ shape, size, points, dash, closed }: { shape: Shape; size: Size
   );
 }
 
-function Caption({ text, at, shape, size }: { text: string; at: Point; shape: Shape; size: Size }) {
+type Captions = ReturnType<typeof captionLayout>;
+
+/** A caption in its laid-out box (inside the photo, clear of the others), as the SVG renderer draws it. */
+function Caption({ text, box, shape, size }: { text: string; box: CaptionRect; shape: Shape; size: Size }) {
   const font = fontPx(size);
-  const box = captionBox(text, font);
   const c = PALETTE[shape.colour];
   return (
     <>
-      <Rect
-        x={at.x - box.width / 2}
-        y={at.y - box.height / 2}
-        width={box.width}
-        height={box.height}
-        cornerRadius={font * 0.25}
-        fill={c.ink}
-        stroke={c.outline}
-        strokeWidth={font * 0.08}
-      />
+      <Rect x={box.x} y={box.y} width={box.width} height={box.height} cornerRadius={font * 0.25} fill={c.ink} stroke={c.outline} strokeWidth={font * 0.08} />
       <Text
-        x={at.x - box.width / 2}
-        y={at.y - box.height / 2}
+        x={box.x}
+        y={box.y}
         width={box.width}
         height={box.height}
         align="center"
@@ -67,18 +59,18 @@ function Caption({ text, at, shape, size }: { text: string; at: Point; shape: Sh
   );
 }
 
-function LineMark({ doc, shape, size }: { doc: AnnotationDocument; shape: Shape & { from: Point; to: Point }; size: Size }) {
+function LineMark({ shape, size, captions }: { shape: Shape & { from: Point; to: Point }; size: Size; captions: Captions }) {
   const a = toPixel(shape.from, size);
   const b = toPixel(shape.to, size);
   const w = strokePx(shape.width, size);
-  const text = captionOf(doc, shape);
+  const cap = captions.get(shape.id);
   return (
     <>
       <Twice shape={shape} size={size} points={[a, b]} dash={shape.kind === 'scale' ? [3 * w, 2 * w] : undefined} />
       {endTicks(a, b, w).map((t, i) => (
         <Twice key={i} shape={shape} size={size} points={t} />
       ))}
-      {text && <Caption text={text} at={captionAnchor(a, b, fontPx(size))} shape={shape} size={size} />}
+      {cap && <Caption text={cap.text} box={cap.box} shape={shape} size={size} />}
     </>
   );
 }
@@ -110,7 +102,15 @@ function BlurNode({ shape, size, image }: { shape: Shape & { kind: 'blur' }; siz
   );
 }
 
-export function ShapeNode({ doc, shape, size, image }: { doc: AnnotationDocument; shape: Shape; size: Size; image: HTMLImageElement }) {
+interface NodeProps {
+  shape: Shape;
+  size: Size;
+  image: HTMLImageElement;
+  /** The document's caption layout (marks.ts), shared by every node. */
+  captions: Captions;
+}
+
+export function ShapeNode({ shape, size, image, captions }: NodeProps) {
   switch (shape.kind) {
     case 'ring': {
       const c = toPixel(shape.centre, size);
@@ -144,14 +144,14 @@ export function ShapeNode({ doc, shape, size, image }: { doc: AnnotationDocument
     case 'label':
       return (
         <Group>
-          <Caption text={shape.text} at={toPixel(shape.at, size)} shape={shape} size={size} />
+          <Caption text={shape.text} box={captions.get(shape.id)?.box ?? placeCaption(shape.text, toPixel(shape.at, size), size)} shape={shape} size={size} />
         </Group>
       );
     case 'ruler':
     case 'scale':
       return (
         <Group>
-          <LineMark doc={doc} shape={shape} size={size} />
+          <LineMark shape={shape} size={size} captions={captions} />
         </Group>
       );
     case 'blur':

@@ -1,4 +1,4 @@
-import type { Shape } from '@benchproof/annotation';
+import { compactShape, keepLabelInside, type Shape, type Size } from '@benchproof/annotation';
 import { useState } from 'react';
 import type { Style, Tool } from '../model/edit';
 import { useEditorKeys } from './use-keys';
@@ -9,8 +9,11 @@ import { useShapeHistory } from './use-shape-history';
  * a new scale or label waiting for its length or text, and the keyboard shortcuts.
  * Returns what the toolbar and the canvas take as props.
  */
-export function useShapeEditing(initial: Shape[], zoom: { zoomIn: () => void; zoomOut: () => void }) {
+export function useShapeEditing(initial: Shape[], image: Size, zoom: { zoomIn: () => void; zoomOut: () => void }) {
   const history = useShapeHistory(initial);
+  // Every kept shape is on the stored grid, strokes simplified and labels inside the photo,
+  // so what is on screen is exactly what the save sends and the server keeps.
+  const put = (s: Shape) => history.put(compactShape(keepLabelInside(s, image), image));
   const [tool, setTool] = useState<Tool>('select');
   const [style, setStyle] = useState<Style>({ colour: 'amber', width: 'medium' });
   const [selectedId, setSelectedId] = useState<string | null>(null);
@@ -26,7 +29,7 @@ export function useShapeEditing(initial: Shape[], zoom: { zoomIn: () => void; zo
   const onCommit = (s: Shape) => {
     const isNew = !history.shapes.some((x) => x.id === s.id);
     if (isNew && (s.kind === 'scale' || s.kind === 'label')) setAsking(s);
-    else history.put(s);
+    else put(s);
   };
   const deselect = () => setSelectedId(null);
   useEditorKeys({ undo: history.undo, redo: history.redo, remove, deselect, tool: setTool, zoomIn: zoom.zoomIn, zoomOut: zoom.zoomOut }, asking === null);
@@ -39,7 +42,7 @@ export function useShapeEditing(initial: Shape[], zoom: { zoomIn: () => void; zo
   // A new style applies to the selected shape too.
   const chooseStyle = (s: Style) => {
     setStyle(s);
-    if (selected) history.put({ ...selected, ...s });
+    if (selected) put({ ...selected, ...s });
   };
 
   const toolbar = {
@@ -56,5 +59,6 @@ export function useShapeEditing(initial: Shape[], zoom: { zoomIn: () => void; zo
     onZoomOut: zoom.zoomOut,
   };
   const canvas = { tool, style, selectedId, onSelect: setSelectedId, onCommit };
-  return { shapes: history.shapes, selected, put: history.put, asking, closeAsking: () => setAsking(null), toolbar, canvas };
+  const saved = { dirty: history.dirty, markSaved: history.markSaved };
+  return { shapes: history.shapes, selected, put, saved, asking, closeAsking: () => setAsking(null), toolbar, canvas };
 }

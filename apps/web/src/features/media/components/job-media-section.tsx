@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { Link } from 'react-router';
 import { QueryState } from '../../../components/query-state';
 import { useMedia } from '../api/media';
+import type { RenderStill } from '../viewer/media-stage';
 import { MediaViewer } from '../viewer/media-viewer';
 import { groupMedia, viewerOrder } from './grouping';
 import { MediaBulkBar } from './media-bulk-bar';
@@ -45,7 +46,7 @@ function SectionHeader({ jobId, count }: { jobId: number; count: number }) {
 }
 
 /** The job's shots: add, filter, select for bulk re-tag or delete, and open full screen. */
-export function JobMediaSection({ jobId, canSeeDeleted = false }: { jobId: number; canSeeDeleted?: boolean }) {
+export function JobMediaSection({ jobId, canSeeDeleted = false, renderStill }: { jobId: number; canSeeDeleted?: boolean; renderStill?: RenderStill }) {
   const [filters, setFilters] = useState<MediaListQuery>({});
   const media = useMedia(jobId, filters);
   const { selected, toggle, clear } = useSelection();
@@ -64,7 +65,7 @@ export function JobMediaSection({ jobId, canSeeDeleted = false }: { jobId: numbe
         {media.data && !ordered.length && <Text c="dimmed">No shots match. Use “Add shots” to take some.</Text>}
         <MediaGrid groups={groups} selected={selected} onSelect={toggle} onOpen={(a) => setViewing(ordered.indexOf(a))} />
       </Stack>
-      <MediaViewer jobId={jobId} assets={ordered} index={viewing} onIndex={setViewing} />
+      <MediaViewer jobId={jobId} assets={ordered} index={viewing} onIndex={setViewing} renderStill={renderStill} />
     </Paper>
   );
 }

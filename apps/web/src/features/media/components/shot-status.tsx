@@ -40,12 +40,20 @@ export function ShotProgress({ item }: { item: QueueItem }) {
         aria-label={`Upload of ${item.file.name}`}
         aria-valuenow={pct}
       />
-      {item.error && item.status !== 'done' && (
-        <Text size="sm" c={item.status === 'failed' ? 'red.8' : 'dimmed'} role={item.status === 'failed' ? 'alert' : undefined}>
-          {item.error}
-          {item.status === 'waiting_retry' && ` Trying again (attempt ${item.attempts + 1}).`}
-        </Text>
-      )}
+      {item.error && item.status !== 'done' && <ShotError item={item} />}
     </>
+  );
+}
+
+/** The server's words; a full server disk is said plainly and loudly, since only the manager can fix it. */
+function ShotError({ item }: { item: QueueItem }) {
+  const full = item.errorCode === 'STORAGE_FULL';
+  const loud = item.status === 'failed' || full;
+  return (
+    <Text size="sm" c={loud ? 'red.8' : 'dimmed'} role={loud ? 'alert' : undefined}>
+      {item.error}
+      {full && ' This shot stays here and is sent again every minute.'}
+      {!full && item.status === 'waiting_retry' && ` Trying again (attempt ${item.attempts + 1}).`}
+    </Text>
   );
 }

@@ -14,6 +14,18 @@ describe('upload queue', () => {
     expect(nextToStart(items, 2).map((i) => i.id)).toEqual([items[1].id]);
   });
 
+  it('keeps a shot the server could not store for lack of disk space queued, however often, and never marks it failed', () => {
+    let items = make(1);
+    const id = items[0].id;
+    const message = 'The server’s disk is full … tell the shop manager';
+    for (let n = 0; n < MAX_AUTO_ATTEMPTS + 3; n++) {
+      items = queueReducer(queueReducer(items, { type: 'started', id }), { type: 'failed', id, message, retryable: true, now: 1000, code: 'STORAGE_FULL' });
+      expect(items[0]).toMatchObject({ status: 'waiting_retry', errorCode: 'STORAGE_FULL', error: message, retryAt: 61_000 });
+      items = queueReducer(items, { type: 'retryDue', now: 61_000 });
+      expect(items[0].status).toBe('queued');
+    }
+  });
+
   it('backs off 1 s, 2 s, 4 s … up to 30 s', () => {
     expect([1, 2, 3, 4, 5, 6, 9].map(backoffMs)).toEqual([1000, 2000, 4000, 8000, 16000, 30000, 30000]);
   });

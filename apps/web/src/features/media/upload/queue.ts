@@ -28,6 +28,8 @@ export interface QueueItem {
   attempts: number;
   retryAt: number | null;
   error: string | null;
+  /** The server's error code of the last failure (STORAGE_FULL keeps the shot waiting, never failed). */
+  errorCode: string | null;
   assetId: number | null;
   selected: boolean;
 }
@@ -38,7 +40,7 @@ export type QueueAction =
   | { type: 'progress'; id: string; progress: number }
   | { type: 'stored'; id: string; assetId: number; tags: ShotTags }
   | { type: 'tagsSaved'; id: string; tags: ShotTags }
-  | { type: 'failed'; id: string; message: string; retryable: boolean; now: number }
+  | { type: 'failed'; id: string; message: string; retryable: boolean; now: number; code?: string }
   | { type: 'retryDue'; now: number }
   | { type: 'retryNow'; id?: string }
   | { type: 'pause'; id: string }
@@ -51,6 +53,9 @@ export type QueueAction =
 export const MAX_AUTO_ATTEMPTS = 6;
 /** Files above this size (and every video) go through the resumable protocol. */
 export const TUS_THRESHOLD_BYTES = 16 * 1024 * 1024;
+
+/** A full server disk is not this shot's fault: it stays queued and is offered again every minute until space is freed. */
+export const STORAGE_FULL_RETRY_MS = 60_000;
 
 /** Exponential backoff: 1 s, 2 s, 4 s … capped at 30 s. */
 export function backoffMs(attempts: number): number {
@@ -79,6 +84,7 @@ export function newItem(jobId: number, file: File, tags: ShotTags, extra: Partia
     attempts: 0,
     retryAt: null,
     error: null,
+    errorCode: null,
     assetId: null,
     selected: false,
   };
@@ -91,9 +97,17 @@ export const needsRetag = (i: QueueItem): boolean => i.status === 'done' && i.sa
 
 function onFailed(item: QueueItem, a: Extract<QueueAction, { type: 'failed' }>): QueueItem {
   if (item.status === 'paused') return item;
+  if (a.code === 'STORAGE_FULL') return { ...item, error: a.message, errorCode: a.code, status: 'waiting_retry', retryAt: a.now + STORAGE_FULL_RETRY_MS };
   const attempts = item.attempts + 1;
   const auto = a.retryable && attempts < MAX_AUTO_ATTEMPTS;
-  return { ...item, attempts, error: a.message, status: auto ? 'waiting_retry' : 'failed', retryAt: auto ? a.now + backoffMs(attempts) : null };
+  return {
+    ...item,
+    attempts,
+    error: a.message,
+    errorCode: a.code ?? null,
+    status: auto ? 'waiting_retry' : 'failed',
+    retryAt: auto ? a.now + backoffMs(attempts) : null,
+  };
 }
 
 function update(item: QueueItem, a: QueueAction): QueueItem {
@@ -103,7 +117,7 @@ function update(item: QueueItem, a: QueueAction): QueueItem {
     case 'progress':
       return item.status === 'uploading' ? { ...item, progress: Math.max(item.progress, a.progress) } : item;
     case 'stored':
-      return { ...item, status: 'done', progress: 1, assetId: a.assetId, savedTags: a.tags, error: null, retryAt: null };
+      return { ...item, status: 'done', progress: 1, assetId: a.assetId, savedTags: a.tags, error: null, errorCode: null, retryAt: null };
     case 'tagsSaved':
       return { ...item, savedTags: a.tags };
     case 'failed':

@@ -4,7 +4,7 @@ import { csrfHeader } from '../../../lib/api-client';
 import { isRetryableStatus, type QueueItem } from './queue';
 
 /** What a finished or failed transfer tells the queue. */
-export type TransferOutcome = { ok: true; assetId: number } | { ok: false; message: string; retryable: boolean };
+export type TransferOutcome = { ok: true; assetId: number } | { ok: false; message: string; retryable: boolean; code?: string };
 
 export interface Transfer {
   done: Promise<TransferOutcome>;
@@ -33,6 +33,16 @@ export function messageFromBody(status: number, text: string): string {
   return status === 0 ? OFFLINE : `Upload failed (${status}).`;
 }
 
+/** The error code of a failed answer, when its body is the API's `{code, message, details}`. */
+export function codeFromBody(text: string): string | undefined {
+  try {
+    const code = (JSON.parse(text) as { code?: unknown }).code;
+    return typeof code === 'string' ? code : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
 function outcomeOfForm(xhr: XMLHttpRequest): TransferOutcome {
   if (xhr.status === 201 || xhr.status === 207) {
     const body = JSON.parse(xhr.responseText) as UploadBatchResult;
@@ -40,7 +50,7 @@ function outcomeOfForm(xhr: XMLHttpRequest): TransferOutcome {
     if (result?.ok) return { ok: true, assetId: result.asset.id };
     return { ok: false, message: result?.error.message ?? 'The server did not store the file.', retryable: false };
   }
-  return { ok: false, message: messageFromBody(xhr.status, xhr.responseText), retryable: isRetryableStatus(xhr.status) };
+  return { ok: false, message: messageFromBody(xhr.status, xhr.responseText), retryable: isRetryableStatus(xhr.status), code: codeFromBody(xhr.responseText) };
 }
 
 /** One photo in one multipart request, so each shot has its own progress and its own retries. */
@@ -73,7 +83,7 @@ function tusFailure(err: Error): TransferOutcome {
   const res = (err as tus.DetailedError).originalResponse ?? null;
   if (!res) return { ok: false, message: OFFLINE, retryable: true };
   const status = res.getStatus();
-  return { ok: false, message: messageFromBody(status, res.getBody()), retryable: isRetryableStatus(status) };
+  return { ok: false, message: messageFromBody(status, res.getBody()), retryable: isRetryableStatus(status), code: codeFromBody(res.getBody()) };
 }
 
 /**

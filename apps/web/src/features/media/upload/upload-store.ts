@@ -67,7 +67,7 @@ class UploadStore {
         this.dispatch({ type: 'stored', id: item.id, assetId: outcome.assetId, tags: item.tags });
         void queryClient.invalidateQueries({ queryKey: mediaKeys.ofJob(item.jobId) });
         if (item.file.type.startsWith('video/')) this.poster(item.jobId, outcome.assetId, item.file);
-      } else this.dispatch({ type: 'failed', id: item.id, message: outcome.message, retryable: outcome.retryable, now: Date.now() });
+      } else this.dispatch({ type: 'failed', id: item.id, message: outcome.message, retryable: outcome.retryable, now: Date.now(), code: outcome.code });
     });
   }
 

@@ -1,13 +1,16 @@
 import type { MediaAssetDto } from '@benchproof/contracts';
 import { isVideoKind } from '@benchproof/domain';
 import { Center, Loader, Text } from '@mantine/core';
-import type { CSSProperties } from 'react';
+import type { CSSProperties, ReactNode } from 'react';
+
+/** Draws a still (photo or scope still) in place of the plain screen image, e.g. with its annotations; from app/routes. */
+export type RenderStill = (asset: MediaAssetDto & { urls: { screen: string } }) => ReactNode;
 
 /** Fills the stage and letterboxes, whatever the shape of the shot or the screen. */
 const FILL: CSSProperties = { position: 'absolute', inset: 0, width: '100%', height: '100%', objectFit: 'contain' };
 
 /** The screen-size image, or the original video streamed with range requests so it can seek. */
-export function MediaStage({ asset }: { asset: MediaAssetDto }) {
+export function MediaStage({ asset, renderStill }: { asset: MediaAssetDto; renderStill?: RenderStill }) {
   if (isVideoKind(asset.kind)) {
     return (
       <video
@@ -29,5 +32,7 @@ export function MediaStage({ asset }: { asset: MediaAssetDto }) {
       </Center>
     );
   }
-  return <img key={asset.id} src={asset.urls.screen} alt={asset.caption || `Shot ${asset.id}`} draggable={false} data-testid="viewer-image" style={FILL} />;
+  const screen = asset.urls.screen;
+  if (renderStill && (asset.kind === 'photo' || asset.kind === 'scope_still')) return renderStill({ ...asset, urls: { ...asset.urls, screen } });
+  return <img key={asset.id} src={screen} alt={asset.caption || `Shot ${asset.id}`} draggable={false} data-testid="viewer-image" style={FILL} />;
 }

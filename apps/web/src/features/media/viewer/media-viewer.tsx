@@ -2,7 +2,7 @@ import type { MediaAssetDto } from '@benchproof/contracts';
 import { ActionIcon, Box, Group, Modal, Stack, Text } from '@mantine/core';
 import { IconChevronLeft, IconChevronRight, IconX } from '@tabler/icons-react';
 import { MediaDetails } from './media-details';
-import { MediaStage } from './media-stage';
+import { MediaStage, type RenderStill } from './media-stage';
 import { useSwipe } from './use-swipe';
 import { useViewerNav } from './use-viewer-nav';
 import { ViewerActions } from './viewer-actions';
@@ -12,10 +12,11 @@ interface Props {
   assets: MediaAssetDto[];
   index: number | null;
   onIndex: (i: number | null) => void;
+  renderStill?: RenderStill;
 }
 
 /** The shot itself, with swipe on touch and big previous/next buttons on wider screens. */
-function ViewerStage({ asset, onPrev, onNext }: { asset: MediaAssetDto; onPrev: () => void; onNext: () => void }) {
+function ViewerStage({ asset, onPrev, onNext, renderStill }: { asset: MediaAssetDto; onPrev: () => void; onNext: () => void; renderStill?: RenderStill }) {
   const swipe = useSwipe(onPrev, onNext);
   return (
     <Box
@@ -32,7 +33,7 @@ function ViewerStage({ asset, onPrev, onNext }: { asset: MediaAssetDto; onPrev: 
         userSelect: 'none',
       }}
     >
-      <MediaStage asset={asset} />
+      <MediaStage asset={asset} renderStill={renderStill} />
       <ActionIcon size={56} radius="xl" variant="filled" color="dark" pos="absolute" left={8} aria-label="Previous shot" onClick={onPrev} visibleFrom="sm">
         <IconChevronLeft />
       </ActionIcon>
@@ -44,7 +45,7 @@ function ViewerStage({ asset, onPrev, onNext }: { asset: MediaAssetDto; onPrev: 
 }
 
 /** Full-screen viewer: swipe or arrow keys to move, details and actions underneath. */
-export function MediaViewer({ jobId, assets, index, onIndex }: Props) {
+export function MediaViewer({ jobId, assets, index, onIndex, renderStill }: Props) {
   const { asset, at, count, prev, next } = useViewerNav(assets, index, onIndex);
   return (
     <Modal
@@ -64,7 +65,7 @@ export function MediaViewer({ jobId, assets, index, onIndex }: Props) {
               <IconX />
             </ActionIcon>
           </Group>
-          <ViewerStage asset={asset} onPrev={prev} onNext={next} />
+          <ViewerStage asset={asset} onPrev={prev} onNext={next} renderStill={renderStill} />
           <Stack gap="sm" p="md" bg="white">
             <MediaDetails asset={asset} />
             <ViewerActions jobId={jobId} asset={asset} onDeleted={() => onIndex(count > 1 ? at % (count - 1) : null)} />

@@ -15,10 +15,12 @@ interface Props {
   finding: OwnerFinding;
   choice: Choice | undefined;
   onChoose: (c: Choice) => void;
+  /** The bike was handed back or the job cancelled: the page is for reading, no more answers. */
+  closed?: boolean;
 }
 
 /** One finding in plain words, its photos, and — when priced — the owner's approve/decline choice. */
-export function OwnerFindingCard({ finding: f, choice, onChoose }: Props) {
+export function OwnerFindingCard({ finding: f, choice, onChoose, closed = false }: Props) {
   const rec = f.recommendation;
   const area = INSPECTION_AREA_LABELS[f.area];
   return (
@@ -50,7 +52,7 @@ export function OwnerFindingCard({ finding: f, choice, onChoose }: Props) {
                 {formatMoney(rec.totals.grossMinor, rec.currency)}
               </Text>
             </Group>
-            <Choice rec={rec} choice={choice} onChoose={onChoose} />
+            <Choice rec={rec} choice={choice} onChoose={onChoose} closed={closed} />
           </Stack>
         )}
       </Stack>
@@ -58,8 +60,16 @@ export function OwnerFindingCard({ finding: f, choice, onChoose }: Props) {
   );
 }
 
-/** Approve / Decline while the item is pending; the recorded answer once decided. */
-function Choice({ rec, choice, onChoose }: { rec: NonNullable<Props['finding']['recommendation']>; choice: Props['choice']; onChoose: Props['onChoose'] }) {
+type ChoiceProps = { rec: NonNullable<Props['finding']['recommendation']>; choice: Props['choice']; onChoose: Props['onChoose']; closed: boolean };
+
+/** Approve / Decline while the item is pending on an open job; the recorded answer once decided. */
+function Choice({ rec, choice, onChoose, closed }: ChoiceProps) {
+  if (closed && rec.decisionStatus === 'pending')
+    return (
+      <Badge size="lg" color="gray" variant="light">
+        Not answered
+      </Badge>
+    );
   return rec.decisionStatus === 'pending' ? (
     <Group grow gap="sm">
       <Button

@@ -1,6 +1,6 @@
 import type { OwnerFinding } from '@benchproof/contracts';
-import { formatMoney } from '@benchproof/domain';
-import { Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
+import { formatMoney, TERMINAL_STATUSES } from '@benchproof/domain';
+import { Alert, Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
 import { Suspense, useState, type ReactNode } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useOwnerPage } from '../api/owner-page';
@@ -35,10 +35,12 @@ function FindingsToDecide({
   findings,
   choices,
   onChoose,
+  closed,
 }: {
   findings: OwnerFinding[];
   choices: Record<number, Choice>;
   onChoose: (recId: number, c: Choice) => void;
+  closed: boolean;
 }) {
   const sorted = [...findings].sort((a, b) => Number(b.doNotRide) - Number(a.doNotRide));
   return (
@@ -52,6 +54,7 @@ function FindingsToDecide({
           finding={f}
           choice={f.recommendation ? choices[f.recommendation.id] : undefined}
           onChoose={(ch) => f.recommendation && onChoose(f.recommendation.id, ch)}
+          closed={closed}
         />
       ))}
     </Stack>
@@ -115,7 +118,17 @@ function Decisions(props: {
   );
 }
 
-const SentNotice = () => (
+/** Said at the top of a closed job's page: still readable, no more answers here. */
+function ClosedNotice({ status }: { status: string }) {
+  return (
+    <Alert color="gray" title="This job is closed" role="status" data-testid="job-closed">
+      {status === 'cancelled' ? 'The shop cancelled this job.' : 'Your bike has been handed back.'} You can still read the findings, see the photos and download
+      the report. Items can no longer be approved or declined here: call the shop if something still needs doing.
+    </Alert>
+  );
+}
+
+const ThanksNote = () => (
   <Text fw={600} c="teal" role="status">
     Thank you — the shop has your answers.
   </Text>
@@ -123,6 +136,7 @@ const SentNotice = () => (
 
 /** `payment`: the payments feature's card (amount due, pay button, "paid"), handed in by the route. */
 function OwnerPageBody({ token, page, refetch, payment }: BodyProps) {
+  const closed = (TERMINAL_STATUSES as readonly string[]).includes(page.job.status);
   const c = useChoices(page.findings);
   const [confirming, setConfirming] = useState(false);
   const [everConfirmed, setEverConfirmed] = useState(false);
@@ -134,9 +148,10 @@ function OwnerPageBody({ token, page, refetch, payment }: BodyProps) {
       <BrandBar page={page} />
       <Stack gap="lg">
         <BikeAndJob page={page} />
+        {closed && <ClosedNotice status={page.job.status} />}
         {payment}
-        {sent && <SentNotice />}
-        {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} />}
+        {sent && <ThanksNote />}
+        {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} closed={closed} />}
         <Measurements page={page} />
         {page.pairs.length > 0 && (
           <Deferred>
@@ -148,7 +163,7 @@ function OwnerPageBody({ token, page, refetch, payment }: BodyProps) {
         </Deferred>
         <ReportAndContact page={page} />
       </Stack>
-      {c.pending.length > 0 && (
+      {c.pending.length > 0 && !closed && (
         <AnswerBar
           answered={c.chosen.length}
           pending={c.pending.length}

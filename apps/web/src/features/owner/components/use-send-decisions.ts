@@ -42,7 +42,8 @@ export function useSendDecisions({ token, chosen, choices, onDone, onPriceChange
       {
         onSuccess: onDone,
         onError: (e) => {
-          if ((e as ApiError).code === 'PRICE_CHANGED') onPriceChanged();
+          // The shop re-priced, or the job closed meanwhile: show the page as it is now.
+          if ((e as ApiError).code === 'PRICE_CHANGED' || (e as ApiError).code === 'JOB_CLOSED') onPriceChanged();
         },
       },
     );

@@ -1,5 +1,5 @@
 import { roleCan } from '@benchproof/contracts';
-import { OwnerLinkPanel } from '../../../../features/owner';
+import { OwnerLinkPanel } from '../../../../features/owner-links';
 import type { SectionProps } from '../job-sections';
 
 export default function OwnerSection({ job, me }: SectionProps) {

@@ -1,7 +1,6 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Req, Sse } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Sse } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CreateOwnerLinkRequestSchema, type AuditEvent, type CreateOwnerLinkRequest } from '@benchproof/contracts';
-import type { Request } from 'express';
 import { interval, map, merge, type Observable } from 'rxjs';
 import { AuditService } from '../audit';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
@@ -14,7 +13,7 @@ import { OwnerLinksService } from './owner-links.service';
 const OWNER_ACTIONS = new Set(['owner.viewed', 'owner_link.created', 'owner_link.revoked', 'recommendation.decided', 'consent.granted', 'consent.revoked']);
 
 /** Staff side of owner links: create (copy or e-mail), list with expiry, revoke, and watch what the owner does. */
-@ApiTags('owner')
+@ApiTags('owner-links')
 @Controller('jobs/:jobId')
 export class OwnerLinksController {
   constructor(
@@ -33,13 +32,8 @@ export class OwnerLinksController {
   @Post('owner-links')
   @Can('owner_links.manage')
   @ApiZodBody(CreateOwnerLinkRequestSchema)
-  create(
-    @CurrentUser() user: AuthUser,
-    @Param('jobId', ParseIntPipe) jobId: number,
-    @Body(zod(CreateOwnerLinkRequestSchema)) body: CreateOwnerLinkRequest,
-    @Req() req: Request,
-  ) {
-    return this.links.create(user, jobId, body, `${req.protocol}://${req.get('host') ?? 'localhost'}`);
+  create(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(CreateOwnerLinkRequestSchema)) body: CreateOwnerLinkRequest) {
+    return this.links.create(user, jobId, body);
   }
 
   @Post('owner-links/:linkId/revoke')

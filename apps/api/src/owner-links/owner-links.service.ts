@@ -10,7 +10,7 @@ import { JobAccess } from '../jobs';
 import { OwnerEventsBus } from './owner-events';
 import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';
 import { hashOwnerToken, newOwnerToken, ownerTokenSignatureOk } from './owner-token';
-import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort } from './owner.ports';
+import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort } from './owner-links.ports';
 import { UnitOfWork } from '../core/db';
 
 const DAY_MS = 24 * 3600 * 1000;
@@ -56,7 +56,7 @@ export class OwnerLinksService {
    * A new link for the job; earlier links stop working so only one is live.
    * The token leaves the server only in this answer and in the e-mail.
    */
-  create(actor: AuthUser, jobId: number, input: CreateOwnerLinkRequest, origin: string): CreatedOwnerLinkDto {
+  create(actor: AuthUser, jobId: number, input: CreateOwnerLinkRequest): CreatedOwnerLinkDto {
     const job = this.access.read(actor, jobId);
     if (job.status === 'cancelled') throw new DomainError('CONFLICT', 'The job is cancelled; there is nothing for the owner to see.');
     const owner = this.customers.get(actor, job.customerId);
@@ -67,7 +67,8 @@ export class OwnerLinksService {
       this.repo.revokeOpen(actor.shopId, jobId, now, actor.id);
       return this.repo.insert({ shopId: actor.shopId, jobId, tokenHash: hashOwnerToken(token), createdBy: actor.id, createdAt: now, expiresAt });
     });
-    const url = `${(this.cfg.PUBLIC_URL ?? origin).replace(/\/$/, '')}/o/${token}`;
+    // From configuration only: a forged Host header must never end up in an e-mail.
+    const url = `${this.cfg.publicUrl}/o/${token}`;
     let mail: CreatedOwnerLinkDto['mail'] = { status: 'not_sent', reason: 'Not asked to send.' };
     if (input.send && !owner.email) mail = { status: 'not_sent', reason: 'The owner has no e-mail address; copy the link for a text message.' };
     else if (input.send && owner.email) {

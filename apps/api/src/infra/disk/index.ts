@@ -1,0 +1,1 @@
+export { DiskSpace } from './disk-space';

@@ -1,0 +1,24 @@
+import { Module } from '@nestjs/common';
+import { AuditModule } from '../audit';
+import { CustomersModule } from '../customers';
+import { JobsModule } from '../jobs';
+import { MailModule } from '../mail';
+import { OwnerEventsBus } from './owner-events';
+import { OutboxOwnerLinkMailer } from './owner-links.bindings';
+import { OwnerLinksController } from './owner-links.controller';
+import { OwnerLinksRepository } from './owner-links.repository';
+import { OwnerLinksService } from './owner-links.service';
+import { OWNER_LINK_MAILER } from './owner-links.ports';
+
+/**
+ * The staff side of owner links: create (copy or e-mail), list, revoke, watch the
+ * owner's activity. The public owner page (../owner) resolves tokens through the
+ * exported OwnerLinksService and reports activity on the exported bus.
+ */
+@Module({
+  imports: [AuditModule, CustomersModule, JobsModule, MailModule],
+  controllers: [OwnerLinksController],
+  providers: [OwnerLinksRepository, OwnerLinksService, OwnerEventsBus, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
+  exports: [OwnerLinksService, OwnerEventsBus],
+})
+export class OwnerLinksModule {}
