@@ -3,8 +3,6 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { startMailCatcher, type MailCatcher } from '../../api/scripts/mail-catcher.mjs';
-import { startPaymentFake, type PaymentFake } from '../../api/scripts/payment-fake.mjs';
 import { DEMO_PASSWORD, openBrowser, PHONE, shot, type Browser } from './support/browser';
 
 const root = resolve(import.meta.dirname, '../../..');
@@ -38,25 +36,38 @@ async function waitForHealth(base: string): Promise<void> {
  */
 describe('payments: the owner pays the seeded ready job from their page', () => {
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-pay-browser-'));
-  let server: ChildProcess | null = null;
+  const procs: ChildProcess[] = [];
   let browser: Browser | null = null;
-  let fake: PaymentFake;
-  let catcher: MailCatcher;
   afterAll(async () => {
     await browser?.close();
-    server?.kill('SIGTERM');
-    await fake?.close();
-    await catcher?.close();
+    procs.forEach((p) => p.kill('SIGTERM'));
     rmSync(dir, { recursive: true, force: true });
   });
+  // The fake and the catcher run as their own processes (`npm run payments:fake`, `npm run mail`), as npm start runs them.
+  const script = (name: string, env: Record<string, string>, ready: string) =>
+    new Promise<void>((ok, fail) => {
+      const p = spawn(process.execPath, [join(root, 'apps/api/scripts', name)], {
+        cwd: root,
+        env: { ...process.env, ...env },
+        stdio: ['ignore', 'pipe', 'inherit'],
+      });
+      procs.push(p);
+      p.stdout?.on('data', (d: Buffer) => d.toString().includes(ready) && ok());
+      p.once('exit', (code) => fail(new Error(`${name} exited ${code}`)));
+    });
 
   it('pays on the hosted page, shows "paid", zero balance for desk and the receipt in the inbox', async () => {
-    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    fake = await startPaymentFake({ port: 0, webhookSecret: 'whsec_browser' });
-    const port = await freePort();
+    const [port, fakePort, smtpPort, inboxPort] = [await freePort(), await freePort(), await freePort(), await freePort()];
     const base = `http://127.0.0.1:${port}`;
-    fake.setWebhookUrl(`${base}/api/payments/webhook`);
-    server = spawn(process.execPath, [join(root, 'dist/apps/api/apps/api/src/main.js')], {
+    const fake = { url: `http://127.0.0.1:${fakePort}` };
+    const catcher = { url: `http://127.0.0.1:${inboxPort}`, smtpUrl: `smtp://127.0.0.1:${smtpPort}` };
+    await script(
+      'payment-fake.mjs',
+      { PAYMENT_FAKE_PORT: String(fakePort), PAYMENT_FAKE_WEBHOOK_URL: `${base}/api/payments/webhook`, STRIPE_WEBHOOK_SECRET: 'whsec_browser' },
+      'fake on',
+    );
+    await script('mail-catcher.mjs', { MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(inboxPort) }, 'Catching');
+    const server = spawn(process.execPath, [join(root, 'dist/apps/api/apps/api/src/main.js')], {
       cwd: root,
       stdio: 'ignore',
       env: {
@@ -65,6 +76,7 @@ describe('payments: the owner pays the seeded ready job from their page', () => 
         ...{ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '200', STRIPE_API_URL: fake.url, STRIPE_WEBHOOK_SECRET: 'whsec_browser', LOGIN_THROTTLE_LIMIT: '1000' },
       },
     });
+    procs.push(server);
     await waitForHealth(base);
     browser = await openBrowser(PHONE);
     const { page, context } = browser;
@@ -100,7 +112,13 @@ describe('payments: the owner pays the seeded ready job from their page', () => 
     expect(await page.getByTestId('balance-due').textContent()).toBe('£0.00');
     await shot(page, 'payments-desk-paid-390');
 
-    const [receipt] = (await catcher.waitFor(1, 15_000)).filter((m) => m.subject.startsWith('Receipt'));
+    let receipt: { subject: string; to: string; text: string } | undefined;
+    for (let i = 0; i < 60 && !receipt; i++) {
+      const caught = (await (await fetch(`${catcher.url}/api/messages`)).json()) as { subject: string; to: string; text: string }[];
+      receipt = caught.find((m) => m.subject.startsWith('Receipt'));
+      if (!receipt) await new Promise((r) => setTimeout(r, 250));
+    }
+    if (!receipt) throw new Error('no receipt in the local inbox');
     expect(receipt.to).toContain('anouk.selberg@example.test');
     expect(receipt.text).toContain('paid in full');
     await page.goto(catcher.url);
