@@ -78,8 +78,11 @@ export function startBare(dir, script) {
   return once(child, 'message').then(([msg]) => ({ child, port: msg.port }));
 }
 
+/** The allocator settings `npm start` gives the server (apps/api/scripts/start.mjs). */
+export const START_ENV = { MALLOC_ARENA_MAX: '2', MALLOC_TRIM_THRESHOLD_: '131072' };
+
 export function startApi(entry, env) {
-  return spawn(process.execPath, [entry], { env: { MALLOC_ARENA_MAX: '2', ...process.env, ...env }, stdio: ['ignore', 'ignore', 'inherit'] });
+  return spawn(process.execPath, [entry], { env: { ...START_ENV, ...process.env, ...env }, stdio: ['ignore', 'ignore', 'inherit'] });
 }
 
 export const ENTRY_REL = 'dist/apps/api/apps/api/src/main.js';

@@ -31,7 +31,7 @@ function bareServer(payload) {
   });
 }
 
-async function measure(api, cookie, path, label) {
+async function measure(api, cookie, path, label, minRatio, maxP99) {
   const url = `${api.base}${path}`;
   const payload = await (await fetch(url, { headers: { cookie } })).json();
   const bare = await bareServer(payload);
@@ -41,8 +41,9 @@ async function measure(api, cookie, path, label) {
   bare.close();
   await load(url, { cookie }, 2);
   const p = await medianOf3(() => load(url, { cookie }), 'rps');
-  emitRow(atLeast(`${label}, 50 conns, ${JOBS} jobs: req/s`, b.rps, p.rps, 'req/s', 0.5, p.errors ? ` (${p.errors} errors)` : ''));
-  emitRow({ ...atMost(`${label}: p99 latency`, b.p99, p.p99, 'ms', Infinity), target: '≤ 50 ms', met: p.p99 <= 50 });
+  const row = atLeast(`${label}, 50 conns, ${JOBS} jobs: req/s`, b.rps, p.rps, 'req/s', minRatio, p.errors ? ` (${p.errors} errors)` : '');
+  emitRow({ ...row, target: `${row.target}, no errors`, met: row.met && p.errors === 0 });
+  emitRow({ ...atMost(`${label}: p99 latency`, b.p99, p.p99, 'ms', Infinity), target: `≤ ${maxP99} ms`, met: p.p99 <= maxP99 });
 }
 
 async function main() {
@@ -56,8 +57,10 @@ async function main() {
     api = await startDemoApi(root, dir);
     await waitForIdleTasks(api.base);
     const { cookie } = await signIn(api.base);
-    await measure(api, cookie, '/api/jobs?open=true', 'jobs list, default page');
-    await measure(api, cookie, '/api/jobs?q=ada', 'jobs search "ada"');
+    // Issue 22's targets: the open-jobs page ≥ 0.35× the bare route with p99 ≤ 60 ms; search and filters ≥ 0.3×, p99 ≤ 80 ms.
+    await measure(api, cookie, '/api/jobs?open=true', 'jobs list, default page', 0.35, 60);
+    await measure(api, cookie, '/api/jobs?q=ada', 'jobs search "ada"', 0.3, 80);
+    await measure(api, cookie, '/api/jobs?status=in_work', 'jobs filtered by status', 0.3, 80);
   } finally {
     await api.stop();
     rmSync(dir, { recursive: true, force: true });

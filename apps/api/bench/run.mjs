@@ -14,7 +14,9 @@ if (!existsSync(join(root, 'dist/apps/api')) || !existsSync(join(root, 'dist/app
   if (built.status !== 0) process.exit(built.status ?? 1);
 }
 const BENCHES = [
+  'ladder.bench.mjs',
   'jobs-list.bench.mjs',
+  'memory.bench.mjs',
   'photo.bench.mjs',
   'media-serve.bench.mjs',
   'web-load.bench.mjs',

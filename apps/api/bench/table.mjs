@@ -46,7 +46,7 @@ export const fmt = (n) => (n >= 100 ? n.toFixed(0) : n >= 10 ? n.toFixed(1) : n.
 
 export function printTable(rows) {
   const cols = ['benchmark', 'baseline', 'product', 'ratio', 'target', 'met'];
-  const cells = rows.map((r) => cols.map((c) => (c === 'met' ? (r.met ? 'yes' : 'NO') : String(r[c] ?? '—'))));
+  const cells = rows.map((r) => cols.map((c) => (c === 'met' ? (r.met === null ? '—' : r.met ? 'yes' : 'NO') : String(r[c] ?? '—'))));
   const width = cols.map((c, i) => Math.max(c.length, ...cells.map((r) => r[i].length)));
   const line = (vals) => `| ${vals.map((v, i) => v.padEnd(width[i])).join(' | ')} |`;
   console.log(line(cols));

@@ -42,7 +42,9 @@ if (process.env.PAYMENT_FAKE !== 'false' && /^http:\/\/(127\.0\.0\.1|localhost):
 
 // Fewer glibc malloc arenas so memory freed after a burst of photo work goes back to the
 // system (sharp's docs on glibc fragmentation); the bench measures idle RSS before and after.
-const env = { MALLOC_ARENA_MAX: '2', ...process.env };
+// A 128 KB trim threshold hands the top of the heap back once freed: without it about 35 MB of
+// the compiler's boot-time scratch memory stayed resident for good (DEVELOPERS.md, memory).
+const env = { MALLOC_ARENA_MAX: '2', MALLOC_TRIM_THRESHOLD_: '131072', ...process.env };
 // Opt-in jemalloc (Debian libjemalloc2) for hosts short of memory rather than CPU: idle RSS
 // after photo bursts stays flat, but each photo costs more CPU (DEVELOPERS.md, Benchmarks).
 const JEMALLOC = '/usr/lib/x86_64-linux-gnu/libjemalloc.so.2';

@@ -8,12 +8,12 @@ import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import helmet from 'helmet';
-import { Logger as PinoLogger } from 'nestjs-pino';
 import type { NextFunction, Request, Response } from 'express';
 import { annotationSaveBody } from './annotations';
 import { AppModule } from './app.module';
 import type { AppConfig } from './config';
 import { ErrorFilter } from './core/http';
+import { createLogger, NestPinoLogger, requestLog } from './core/logging';
 import { SeedService } from './seed';
 
 /** The routes that send stored media files (staff and owner-page), e.g. /api/media/12/screen. */
@@ -27,8 +27,10 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
     // The payment provider signs the exact bytes it sent; its webhook needs them (req.rawBody).
     rawBody: true,
   });
-  // Nest's own log lines go through pino too, as JSON at LOG_LEVEL.
-  if (opts.logger !== false) app.useLogger(app.get(PinoLogger));
+  // One pino logger: a line per request, and Nest's own log lines as JSON at LOG_LEVEL.
+  const logger = createLogger(cfg);
+  if (opts.logger !== false) app.useLogger(new NestPinoLogger(logger));
+  app.use(requestLog(logger));
   // Behind a proxy, TRUST_PROXY says which hops may set X-Forwarded-For; without it req.ip is the socket's address.
   app.set('trust proxy', trustProxy(cfg.TRUST_PROXY));
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
@@ -72,8 +74,9 @@ function setUpOpenApi(app: NestExpressApplication): void {
     .setVersion('0.1.0')
     .addCookieAuth('bp_session')
     .build();
-  const document = SwaggerModule.createDocument(app, config);
-  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs-json' });
+  // Built on the first request for it, not at boot: the document and the JSON schemas behind it are
+  // several MB of heap that a workshop's server otherwise keeps without ever serving.
+  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, config), { jsonDocumentUrl: 'api/docs-json' });
 }
 
 /**

@@ -1,6 +1,5 @@
 import { type DynamicModule, Module } from '@nestjs/common';
 import { EventEmitterModule } from '@nestjs/event-emitter';
-import { LoggerModule } from 'nestjs-pino';
 import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { AuthModule } from './auth';
@@ -8,7 +7,6 @@ import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
 import { AuthCoreModule } from './core/auth';
 import { DbModule } from './core/db';
-import { requestLogging } from './core/logging';
 import { CustomersModule } from './customers';
 import { FindingsModule } from './findings';
 import { HealthController } from './health/health.controller';
@@ -63,7 +61,6 @@ export class AppModule {
       module: AppModule,
       imports: [
         ConfigModule.forRoot(cfg),
-        LoggerModule.forRoot(requestLogging(cfg)),
         ClockModule,
         TasksModule,
         PaymentProviderModule,

@@ -31,8 +31,17 @@ const staffMember = (id: number | null, staff: Map<number, string>) => person(id
 
 /** A list row from the joined read model (owner, bike and mechanic names come with the row). */
 export function toJobListDto(row: JobListRow, today: string): JobDto {
+  // One object per row, written out (the list's hot path: no spread of an intermediate object).
   return {
-    ...baseDto(row, row.mechanicName, today),
+    id: row.id,
+    number: row.number,
+    status: row.status,
+    mechanic: person(row.mechanicId, row.mechanicName),
+    promisedOn: row.promisedOn ?? '',
+    reportedSymptoms: row.reportedSymptoms,
+    createdAt: row.createdAt.toISOString(),
+    overdue: isOverdue(row, today),
+    dueMinor: null,
     customer: { id: row.customerId, name: row.ownerName },
     bike: { id: row.bikeId, maker: row.bikeMaker, model: row.bikeModel, colour: row.bikeColour || null, serialNumber: row.bikeSerial || null },
   };

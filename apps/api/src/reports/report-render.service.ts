@@ -9,7 +9,6 @@ import { IMAGE, type ImageAdapter } from '../infra/image';
 import { PDF, type PdfAdapter } from '../infra/pdf';
 import { STORAGE, type Storage } from '../infra/storage';
 import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
-import { ReportDocument } from './pdf/report.pdf';
 import type { IssueStamp, ReportImage, ReportSnapshot } from './report-data';
 import { ANNOTATED_IMAGE_SOURCE, type AnnotatedImageSource } from './report-sources';
 import { ReportsRepository, type ReportRow } from './reports.repository';
@@ -75,6 +74,8 @@ export class ReportRenderService {
     ];
     const images = await this.loadShots(row.shopId, ids, progress);
     const logo = await this.logo(snap.shop.logoKey);
+    // The document and react-pdf load with the first render: most processes never render a report (see DEVELOPERS.md, memory).
+    const { ReportDocument } = await import('./pdf/report.pdf.js');
     const doc = createElement(ReportDocument, { snap, pageSize: row.pageSize, images, logo, stamp: this.stamp(row) });
     progress(0.7);
     const pdf = await this.pdf.render(doc);

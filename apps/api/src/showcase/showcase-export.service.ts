@@ -2,7 +2,6 @@ import { PassThrough, type Writable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
 import { Inject, Injectable } from '@nestjs/common';
 import { SHOWCASE_SIZES, type ShowcaseExportQuery, type ShowcaseZipRequest } from '@benchproof/contracts';
-import { ZipFile } from 'yazl';
 import { AnnotationRenderService } from '../annotations';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
@@ -85,6 +84,8 @@ export class ShowcaseExportService {
 
   /** `signal` stops the zip between files and while it waits on the reader (a revocation, see ShowcaseExportTasks). */
   async writeZip(actor: AuthUser, req: ShowcaseZipRequest, out: Writable, progress: (f: number) => void, signal?: AbortSignal): Promise<void> {
+    // The archive writer loads with the first export, not at boot.
+    const { ZipFile } = await import('yazl');
     const zip = new ZipFile();
     let sent = 0;
     let added = 0;

@@ -66,6 +66,7 @@ export class UsersService {
       const row = this.repo.update(actor.shopId, id, patch);
       // A deactivated user's tokens must not come back to life when the account is re-activated.
       if (patch.active === false) this.sessions.endAllOf(actor.shopId, id);
+      else this.sessions.userChanged(id);
       this.audit.record(actor, { action: 'user.updated', entityType: 'user', entityId: id, details: { ...patch } });
       return row;
     });

@@ -5,20 +5,25 @@ import { sessions, users } from '../../db/schema';
 import { CLOCK, type Clock } from '../clock';
 import { DB, type Db } from '../db';
 import type { AuthUser } from './auth-user';
+import { SessionCache } from './session-cache';
 
 /**
- * Server-side sessions: a token is only good while its row exists. The lookup on
- * every request is one prepared, primary-key query joined to the user, so a
- * deactivated user or an ended session is refused at the next request.
+ * Server-side sessions: a token is only good while its row exists. The lookup is one
+ * prepared, primary-key query joined to the user, remembered for a few seconds per
+ * session id (`SessionCache`); every way a session ends — sign-out, deactivation, a
+ * password change, a role change — goes through `end`/`endAllOf`/`userChanged` here,
+ * which forget the cached answer at once, so the next request is refused.
  */
 @Injectable()
 export class SessionStore {
   private readonly lookup;
+  private readonly cache: SessionCache;
 
   constructor(
     @Inject(DB) private readonly db: Db,
     @Inject(CLOCK) private readonly clock: Clock,
   ) {
+    this.cache = new SessionCache(() => this.clock.now().getTime());
     this.lookup = db
       .select({
         id: users.id,
@@ -47,14 +52,15 @@ export class SessionStore {
 
   /** The user behind a live session, or null when it ended, expired or the user was deactivated. */
   resolve(sid: string, userId: number, shopId: number): AuthUser | null {
-    const row = this.lookup.get({ sid });
-    if (!row || row.id !== userId || row.shopId !== shopId || !row.active) return null;
-    if (row.expiresAt.getTime() <= this.clock.now().getTime()) return null;
-    return { id: row.id, shopId: row.shopId, role: row.role, email: row.email, name: row.name };
+    const found = this.cache.get(sid) ?? this.cache.put(sid, this.read(sid));
+    const user = found.user;
+    if (!user || user.id !== userId || user.shopId !== shopId) return null;
+    return found.expiresAt <= this.clock.now().getTime() ? null : user;
   }
 
   end(sid: string): void {
     this.db.delete(sessions).where(eq(sessions.id, sid)).run();
+    this.cache.forgetSession(sid);
   }
 
   /** Ends every session of a user (deactivation, password change); scoped by shop like every write. */
@@ -63,5 +69,17 @@ export class SessionStore {
       .delete(sessions)
       .where(and(eq(sessions.shopId, shopId), eq(sessions.userId, userId)))
       .run();
+    this.cache.forgetUser(userId);
+  }
+
+  /** A user's role, name or e-mail changed: their live sessions answer with the new values from the next request. */
+  userChanged(userId: number): void {
+    this.cache.forgetUser(userId);
+  }
+
+  private read(sid: string): { user: AuthUser | null; expiresAt: number } {
+    const row = this.lookup.get({ sid });
+    if (!row || !row.active) return { user: null, expiresAt: 0 };
+    return { user: { id: row.id, shopId: row.shopId, role: row.role, email: row.email, name: row.name }, expiresAt: row.expiresAt.getTime() };
   }
 }

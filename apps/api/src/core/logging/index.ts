@@ -1,1 +1,1 @@
-export { requestLogging, redactUrl } from './request-logging';
+export { createLogger, requestLog, redactUrl, NestPinoLogger } from './request-log';

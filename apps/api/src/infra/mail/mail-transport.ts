@@ -1,5 +1,5 @@
 import type { Readable } from 'node:stream';
-import { createTransport, type Transporter } from 'nodemailer';
+import type { Transporter } from 'nodemailer';
 import type SMTPTransport from 'nodemailer/lib/smtp-transport';
 
 /** One attachment; `content` is read while the message is sent, so large files are never held twice. */
@@ -46,15 +46,21 @@ export function isPermanentSmtpError(err: unknown): boolean {
  * so an unreachable relay fails an attempt quickly and the outbox backs off.
  */
 export class SmtpMailTransport implements MailTransport {
-  private readonly transporter: Transporter<SMTPTransport.SentMessageInfo, SMTPTransport.Options>;
+  private transporter?: Promise<Transporter<SMTPTransport.SentMessageInfo, SMTPTransport.Options>>;
 
-  constructor(url: string) {
-    const options: SMTPTransport.Options = { url, connectionTimeout: 15_000, greetingTimeout: 15_000, socketTimeout: 60_000 };
-    this.transporter = createTransport(options);
+  constructor(private readonly url: string) {}
+
+  /** nodemailer (about 13 MB of RSS) loads with the first message, not at boot. */
+  private connect() {
+    const options: SMTPTransport.Options = { url: this.url, connectionTimeout: 15_000, greetingTimeout: 15_000, socketTimeout: 60_000 };
+    this.transporter ??= import('nodemailer').then(({ createTransport }) => createTransport(options));
+    return this.transporter;
   }
 
   async send(mail: OutgoingMail): Promise<SentReceipt> {
-    const info = await this.transporter.sendMail({
+    const info = await (
+      await this.connect()
+    ).sendMail({
       from: mail.from,
       to: mail.to,
       subject: mail.subject,
@@ -68,6 +74,6 @@ export class SmtpMailTransport implements MailTransport {
   }
 
   close(): void {
-    this.transporter.close();
+    void this.transporter?.then((t) => t.close());
   }
 }

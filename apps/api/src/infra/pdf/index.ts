@@ -1,4 +1,3 @@
 export { PDF, PDF_FONT, PdfAdapter } from './pdf.adapter';
 export { PDF_PAGES, PdfPageImages } from './pdf-pages';
-export { qrPath } from './qr';
 export { PdfModule } from './pdf.module';

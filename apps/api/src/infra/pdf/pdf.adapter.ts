@@ -1,18 +1,16 @@
-import { Font, renderToBuffer } from '@react-pdf/renderer';
 import type { ReactElement } from 'react';
 
 /** The one family the report uses; registered once per process. */
 export const PDF_FONT = 'Inter';
 
-let registered = false;
+type ReactPdf = typeof import('@react-pdf/renderer');
 
 /**
  * Inter TTF from @expo-google-fonts/inter (SIL OFL 1.1; the full glyph set, so
  * owner names with ő, ł, ş render — the web's woff subsets do not, see STACK.md).
  * react-pdf embeds a subset of it in every PDF.
  */
-function registerFonts(): void {
-  if (registered) return;
+function registerFonts({ Font }: ReactPdf): void {
   const file = (path: string) => require.resolve(`@expo-google-fonts/inter/${path}`);
   Font.register({
     family: PDF_FONT,
@@ -25,18 +23,24 @@ function registerFonts(): void {
   });
   // Words are never split with hyphens we did not write (names, part numbers).
   Font.registerHyphenationCallback((word) => [word]);
-  registered = true;
 }
 
-/** Renders react-pdf documents to PDF bytes. */
+/**
+ * Renders react-pdf documents to PDF bytes. react-pdf (with yoga, pdfkit and fontkit, about 50 MB of
+ * RSS) loads and the fonts register with the first render, not at boot.
+ */
 export class PdfAdapter {
-  constructor() {
-    registerFonts();
-  }
+  private renderer?: Promise<ReactPdf>;
 
   async render(document: ReactElement): Promise<Buffer> {
+    const { renderToBuffer } = await this.load();
     // renderToBuffer's type wants a <Document> element; our callers always pass one.
     return renderToBuffer(document as Parameters<typeof renderToBuffer>[0]);
+  }
+
+  private load(): Promise<ReactPdf> {
+    this.renderer ??= import('@react-pdf/renderer').then((pdf) => (registerFonts(pdf), pdf));
+    return this.renderer;
   }
 
   /** Pages in a PDF written by react-pdf (pdfkit writes one "/Type /Page" object per page, uncompressed). */

@@ -1,4 +1,4 @@
-import mediaInfoFactory, { type MediaInfo, type ReadChunkFunc } from 'mediainfo.js';
+import type { MediaInfo, ReadChunkFunc } from 'mediainfo.js';
 import { open } from 'node:fs/promises';
 
 /** What a readable video reports; the duration is null only for a live-recorded WebM (see below). */
@@ -50,7 +50,8 @@ export class VideoProbe {
 
   private load(): Promise<MediaInfo<'object'>> {
     const wasm = require.resolve('mediainfo.js/MediaInfoModule.wasm');
-    this.instance ??= mediaInfoFactory({ format: 'object', locateFile: () => wasm });
+    // The module and its wasm load with the first video, not at boot.
+    this.instance ??= import('mediainfo.js').then(({ default: mediaInfoFactory }) => mediaInfoFactory({ format: 'object', locateFile: () => wasm }));
     return this.instance;
   }
 }

@@ -1,5 +1,5 @@
 import { Path, Svg, Text, View } from '@react-pdf/renderer';
-import { qrPath } from '../../infra/pdf';
+import { qrPath } from '../../infra/pdf/qr';
 import type { IssueStamp, ReportSnapshot } from '../report-data';
 import { fmtDate } from './format';
 import { MUTED, styles } from './theme';
