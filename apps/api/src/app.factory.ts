@@ -24,6 +24,8 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
     logger: opts.logger === false ? false : ['log', 'warn', 'error'],
     bufferLogs: opts.logger !== false,
+    // The payment provider signs the exact bytes it sent; its webhook needs them (req.rawBody).
+    rawBody: true,
   });
   // One pino logger: a line per request, and Nest's own log lines as JSON at LOG_LEVEL.
   const logger = createLogger(cfg);

@@ -27,6 +27,8 @@ import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { ReportsModule } from './reports';
 import { MailModule } from './mail';
+import { PaymentsModule } from './payments';
+import { PaymentProviderModule } from './infra/payments';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
@@ -66,6 +68,7 @@ const FEATURES = [
   PasswordResetsModule,
   SetupModule,
   ImportsModule,
+  PaymentsModule,
 ];
 
 @Module({})
@@ -78,6 +81,7 @@ export class AppModule {
         ClockModule,
         TasksModule,
         ScheduleModule.forRoot(),
+        PaymentProviderModule,
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,

@@ -99,9 +99,19 @@ export const ACCESS_POLICY = {
   'consent.record': staff('manager', 'desk'),
   'reports.view': staff(...ALL_STAFF),
   'reports.issue': staff('manager', 'desk'),
+  /** See the balance and the payments of a job. */
+  'payments.view': staff(...ALL_STAFF),
+  /** Record money taken at the counter (card terminal, cash, bank transfer). */
+  'payments.record': staff('manager', 'desk'),
+  /** Give money back against a payment, with a reason. */
+  'payments.refund': staff('manager'),
+  /** Texts of a job and their delivery status. */
+  'texts.view': staff(...ALL_STAFF),
   'owner.view': ownerOnly,
   'owner.decide': ownerOnly,
   'owner.consent': ownerOnly,
+  /** Pay what is due through the hosted checkout. */
+  'owner.pay': ownerOnly,
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof ACCESS_POLICY;

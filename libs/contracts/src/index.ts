@@ -31,4 +31,5 @@ export * from './data-export';
 export * from './accounts';
 export * from './shop-locale';
 export * from './imports';
+export * from './payments';
 export * from './disk-space';

@@ -72,6 +72,22 @@ const EnvSchema = z.object({
   /** First retry of a 'mail.send' task after this many ms; the task runner's backoff doubles it (capped at 10 min). */
   MAIL_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
   MAIL_MAX_ATTEMPTS: z.coerce.number().int().positive().default(8),
+  /** Card payments (the provider's SDK). The defaults reach the local fake (`npm start` runs it on 12111). */
+  STRIPE_SECRET_KEY: z.string().min(1).default('sk_test_local_fake'),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).default('whsec_local_fake'),
+  /** Where the SDK sends its API calls (host, port and protocol); 'provider' = the SDK's own default host. */
+  STRIPE_API_URL: z.union([z.string().url(), z.literal('provider')]).default('http://127.0.0.1:12111'),
+  PAYMENT_FAKE: bool.default(true),
+  /** Text messages (the provider's SDK). The defaults reach the local fake (`npm start` runs it on 12112). */
+  TWILIO_ACCOUNT_SID: z.string().min(1).default('AC00000000000000000000000000000000'),
+  TWILIO_AUTH_TOKEN: z.string().min(1).default('local_fake_auth_token'),
+  /** The sender: a number in E.164 or a messaging service id. */
+  TWILIO_FROM: z.string().min(1).default('+15005550006'),
+  /** Where the SDK's custom httpClient sends its requests; 'provider' = the SDK's own default client and hosts. */
+  TWILIO_API_URL: z.union([z.string().url(), z.literal('provider')]).default('http://127.0.0.1:12112'),
+  TEXT_FAKE: bool.default(true),
+  TEXT_MAX_ATTEMPTS: z.coerce.number().int().positive().default(6),
+  TEXT_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
   MAX_PHOTO_BYTES: z.coerce
     .number()
     .int()

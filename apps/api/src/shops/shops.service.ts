@@ -19,6 +19,8 @@ const toDto = (s: ShopRow): ShopSettingsDto => ({
   currency: s.currency,
   locale: s.locale ?? null,
   dateLocale: shopLocale(s),
+  country: s.country,
+  taxNumber: s.taxNumber,
   units: s.units,
   pageSize: s.pageSize,
   finalCheckSecondPerson: s.finalCheckSecondPerson,

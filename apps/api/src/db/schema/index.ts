@@ -30,3 +30,5 @@ export * from './showcase-exports.table';
 export * from './account-tokens.table';
 export * from './invitations.table';
 export * from './recovery-codes.table';
+export * from './payments.table';
+export * from './text-messages.table';
