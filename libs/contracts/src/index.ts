@@ -29,7 +29,6 @@ export * from './showcase';
 export * from './backups';
 export * from './data-export';
 export * from './accounts';
-export * from './shop-locale';
 export * from './imports';
 export * from './payments';
 export * from './disk-space';

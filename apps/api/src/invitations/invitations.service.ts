@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { defaultLocaleFor, formatShopDate, ROLE_LABELS, type InvitationDto, type InvitationPreview, type InviteRequest } from '@benchproof/contracts';
+import { formatDate } from '@benchproof/domain';
+import { ROLE_LABELS, type InvitationDto, type InvitationPreview, type InviteRequest } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import { AuthService, type SignInOutcome } from '../auth';
 import { APP_CONFIG, type AppConfig } from '../config';
@@ -125,7 +126,7 @@ export class InvitationsService {
   private send(actor: AuthUser, inv: InvitationRow, token: string, tx: DbTx): void {
     const shop = this.shops.settings(actor.shopId);
     const link = `${this.cfg.appOrigin}/join#${token}`;
-    const expiresOn = formatShopDate(inv.expiresAt, defaultLocaleFor(shop.currency));
+    const expiresOn = formatDate(inv.expiresAt, shop.dateLocale);
     const rendered = invitationMail({ shop, name: inv.name, roleLabel: ROLE_LABELS[inv.role], inviterName: actor.name, link, expiresOn });
     this.mail.queue(
       { shopId: actor.shopId, jobId: null, kind: 'invitation', to: inv.email, ...rendered, attachments: [], createdBy: actor.id, secrets: [link] },

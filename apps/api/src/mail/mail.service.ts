@@ -188,7 +188,7 @@ export class MailService {
     if (!to) return null;
     const ctx = this.context(scope, job);
     const settings = this.shops.settings(scope.shopId);
-    const paidOn = money.paidAt.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
+    const paidOn = formatDate(money.paidAt, settings.dateLocale, { timeZone: 'UTC' });
     const rendered = paymentReceiptMail({ ...ctx, ...money, shop: { ...ctx.shop, taxNumber: settings.taxNumber, currency: settings.currency }, paidOn });
     return this.queue({ shopId: scope.shopId, jobId, kind: 'payment_receipt', to, ...rendered, attachments: [] }, tx);
   }

@@ -21,6 +21,9 @@ class MostKinds {
     this.seen.push(t.key);
     return Promise.resolve();
   }
+  @TaskHandler('backup.run', { concurrency: 1 }) backup(): Promise<void> {
+    return noop();
+  }
   @TaskHandler('media.phash', { concurrency: 1 }) phash(): Promise<void> {
     return noop();
   }

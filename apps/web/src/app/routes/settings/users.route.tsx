@@ -1,4 +1,4 @@
-import { defaultLocaleFor, formatShopDate } from '@benchproof/contracts';
+import { formatDate } from '@benchproof/domain';
 import { Button, Modal } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { useQuery } from '@tanstack/react-query';
@@ -12,8 +12,7 @@ export function UsersRoute() {
   const [opened, { open, close }] = useDisclosure();
   const { data: me } = useSession();
   const { data: shop } = useQuery(shopSettingsQuery);
-  // TODO(locale): use the shop's own locale setting once it lands; until then the currency's usual locale.
-  const locale = defaultLocaleFor(shop?.currency ?? 'GBP');
+  const locale = shop?.dateLocale ?? 'en-GB';
   return (
     <>
       <PageHeader
@@ -25,7 +24,7 @@ export function UsersRoute() {
           </Button>
         }
       />
-      <InvitationsList formatDate={(iso) => formatShopDate(iso, locale)} />
+      <InvitationsList formatDate={(iso) => formatDate(iso, locale)} />
       <UsersTable me={me?.id ?? 0} />
       <Modal opened={opened} onClose={close} title="Invite to your workshop" size="md">
         <InviteForm onDone={close} />

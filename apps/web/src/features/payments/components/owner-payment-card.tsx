@@ -1,6 +1,6 @@
 import { formatMoney } from '@benchproof/domain';
 import { Alert, Button, Card, Stack, Text, Title } from '@mantine/core';
-import dayjs from 'dayjs';
+import { useDates } from '../../../lib/dates';
 import { formFailure } from '../../../lib/form';
 import { useOwnerPayment, useStartCheckout } from '../api/payments';
 
@@ -10,6 +10,7 @@ import { useOwnerPayment, useStartCheckout } from '../api/payments';
  * records to show the payment (the provider's signed notice), polling for a short while.
  */
 export function OwnerPaymentCard({ token, returned }: { token: string; returned: 'done' | 'cancelled' | null }) {
+  const dates = useDates();
   const q = useOwnerPayment(token, returned === 'done');
   const start = useStartCheckout(token);
   const b = q.data?.balance;
@@ -23,7 +24,7 @@ export function OwnerPaymentCard({ token, returned }: { token: string; returned:
         </Title>
         {b.state === 'paid' || b.dueMinor <= 0 ? (
           <Text fw={700} c="teal" role="status" data-testid="paid-status">
-            Paid{b.paidAt ? ` on ${dayjs(b.paidAt).format('D MMMM YYYY')}` : ''}. Thank you!
+            Paid{b.paidAt ? ` on ${dates.date(b.paidAt)}` : ''}. Thank you!
           </Text>
         ) : (
           <>

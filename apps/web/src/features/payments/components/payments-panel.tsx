@@ -1,9 +1,9 @@
 import type { BalanceDto, PaymentDto } from '@benchproof/contracts';
 import { formatMoney, minorToMajorText } from '@benchproof/domain';
 import { Alert, Badge, Button, Card, Group, Stack, Text, Title } from '@mantine/core';
-import dayjs from 'dayjs';
 import { useState } from 'react';
 import { QueryState } from '../../../components/query-state';
+import { useDates } from '../../../lib/dates';
 import { useJobPayments } from '../api/payments';
 import { METHOD_LABELS, RecordPaymentForm, RefundDialog } from './payment-forms';
 
@@ -16,6 +16,7 @@ export const STATE_LABELS: Record<BalanceDto['state'], string> = {
 };
 
 function BalanceCard({ b }: { b: BalanceDto }) {
+  const dates = useDates();
   const m = (v: number) => formatMoney(v, b.currency);
   return (
     <Card withBorder padding="md">
@@ -36,12 +37,13 @@ function BalanceCard({ b }: { b: BalanceDto }) {
         Work {m(b.netMinor)} + tax {m(b.taxMinor)} = {m(b.grossMinor)} · paid {m(b.paidMinor)}
         {b.refundedMinor > 0 ? ` · refunded ${m(b.refundedMinor)}` : ''}
       </Text>
-      {b.paidAt && <Text size="sm">Paid in full on {dayjs(b.paidAt).format('D MMM YYYY')}</Text>}
+      {b.paidAt && <Text size="sm">Paid in full on {dates.date(b.paidAt)}</Text>}
     </Card>
   );
 }
 
 function PaymentRow({ p, canRefund, onRefund }: { p: PaymentDto; canRefund: boolean; onRefund: () => void }) {
+  const dates = useDates();
   const sign = p.kind === 'refund' ? '−' : '';
   return (
     <Card withBorder padding="sm">
@@ -52,7 +54,7 @@ function PaymentRow({ p, canRefund, onRefund }: { p: PaymentDto; canRefund: bool
             {formatMoney(p.amountMinor, p.currency)}
           </Text>
           <Text size="xs" c="dimmed">
-            {dayjs(p.at).format('D MMM HH:mm')} · {p.staff?.name ?? 'owner, online'}
+            {dates.dateTime(p.at)} · {p.staff?.name ?? 'owner, online'}
             {p.note ? ` · ${p.note}` : ''}
           </Text>
         </div>
