@@ -5,10 +5,13 @@ import { codeNow, newAgent } from './accounts-helpers';
 
 /** Every operation of the OpenAPI document that needs a session (the route matrix's list). */
 async function guardedRoutes(t: TestApp): Promise<Array<{ method: 'get' | 'post' | 'put' | 'patch' | 'delete'; path: string }>> {
-  const doc = (await t.http().get('/api/docs-json').expect(200)).body as { paths: Record<string, Record<string, { 'x-public'?: boolean }>> };
+  const doc = (await t.http().get('/api/docs-json').expect(200)).body as {
+    paths: Record<string, Record<string, { 'x-public'?: boolean; 'x-owner-link'?: boolean }>>;
+  };
   return Object.entries(doc.paths).flatMap(([path, ops]) =>
     Object.entries(ops)
-      .filter(([, op]) => op['x-public'] !== true)
+      // Owner-link routes take no staff session at all (a missing link is 404 OWNER_LINK_INVALID; route-matrix covers them).
+      .filter(([, op]) => op['x-public'] !== true && op['x-owner-link'] !== true)
       .map(([method]) => ({ method: method as 'get', path: path.replace(/\{[^}]+\}/g, '1') })),
   );
 }
