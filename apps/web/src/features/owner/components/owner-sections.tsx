@@ -117,7 +117,12 @@ export function ReportAndContact({ page }: { page: OwnerPageDto }) {
         {GENERAL_SAFETY}
       </Text>
       <Text size="sm">
-        Questions? {page.shop.phone && <Anchor href={`tel:${page.shop.phone.replace(/[^+\d]/g, '')}`}>{page.shop.phone}</Anchor>}
+        Questions?{' '}
+        {page.shop.phone && (
+          <Anchor className={classes.tapLink} href={`tel:${page.shop.phone.replace(/[^+\d]/g, '')}`}>
+            {page.shop.phone}
+          </Anchor>
+        )}
         {page.shop.email && (
           <>
             {' '}
