@@ -7,24 +7,23 @@ import { PairSlider } from './pair-slider';
 const shot = (id: number) => ({ id, caption: '', width: 800, height: 600, thumbUrl: `/t/${id}`, screenUrl: `/s/${id}` });
 const pair = (caption: string): OwnerPair => ({ id: 1, caption, before: shot(1), after: shot(2) });
 
+const showPair = (caption: string) =>
+  render(
+    <MantineProvider theme={theme}>
+      <PairSlider pair={pair(caption)} />
+    </MantineProvider>,
+  );
+
 describe('accessible names on the owner page', () => {
   it('names an uncaptioned pair "Before photo", never "Before: " with nothing after it, and names the slider', () => {
-    render(
-      <MantineProvider theme={theme}>
-        <PairSlider pair={pair('')} />
-      </MantineProvider>,
-    );
+    showPair('');
     expect(screen.getByRole('img', { name: 'Before photo' })).toBeTruthy();
     expect(screen.getByRole('img', { name: 'After photo' })).toBeTruthy();
     expect(screen.getByRole('slider', { name: 'Before and after: photos' })).toBeTruthy();
   });
 
   it('names a captioned pair by its caption', () => {
-    render(
-      <MantineProvider theme={theme}>
-        <PairSlider pair={pair('Rear brake pads')} />
-      </MantineProvider>,
-    );
+    showPair('Rear brake pads');
     expect(screen.getByRole('img', { name: 'Before: Rear brake pads' })).toBeTruthy();
     expect(screen.getByRole('slider', { name: 'Before and after: Rear brake pads' })).toBeTruthy();
   });
