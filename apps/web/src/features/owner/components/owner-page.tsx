@@ -34,7 +34,7 @@ export function OwnerPage({ token }: { token: string }) {
 }
 
 /** About the consent card's height on a 390 px phone (measured in Chromium), so the page does not jump when it loads. */
-const CONSENT_CARD_HEIGHT = 560;
+const CONSENT_CARD_HEIGHT = 660;
 
 type OwnerPageData = NonNullable<ReturnType<typeof useOwnerPage>['data']>;
 
