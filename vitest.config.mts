@@ -37,6 +37,27 @@ export default defineConfig({
         },
       },
       {
+        // The media flows that touch storage, again with media in an S3 bucket (s3rver on loopback, one per test app).
+        test: {
+          name: 'api-s3',
+          root: 'apps/api',
+          environment: 'node',
+          globals: true,
+          include: [
+            'test/e2e/media-intake.e2e-spec.ts',
+            'test/e2e/media-images.e2e-spec.ts',
+            'test/e2e/media-tus.e2e-spec.ts',
+            'test/e2e/media-access.e2e-spec.ts',
+            'test/e2e/backup-restore.e2e-spec.ts',
+            'test/s3/**/*.e2e-spec.ts',
+          ],
+          env: { TEST_STORAGE: 's3' },
+          setupFiles: ['reflect-metadata'],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
         test: {
           name: 'browser',
           root: 'apps/web/e2e',

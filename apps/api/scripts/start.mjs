@@ -31,6 +31,15 @@ if (process.env.MAIL_CATCHER !== 'false' && local && existsSync(catcher)) {
   console.log(`[start] Mail goes to ${smtpUrl.replace(/\/\/[^@/]*@/, '//***@')} (no local catcher)`);
 }
 
+// The local card-payment fake starts only when the SDK is meant to reach it (STRIPE_API_URL unset or the default).
+const paymentFake = resolve(root, 'apps/api/scripts/payment-fake.mjs');
+const stripeUrl = process.env.STRIPE_API_URL ?? 'http://127.0.0.1:12111';
+if (process.env.PAYMENT_FAKE !== 'false' && /^http:\/\/(127\.0\.0\.1|localhost):12111\/?$/.test(stripeUrl) && existsSync(paymentFake)) {
+  children.push(spawn(process.execPath, [paymentFake], { cwd: root, stdio: 'inherit' }));
+} else {
+  console.log(`[start] Card payments go to ${stripeUrl === 'provider' ? 'the provider' : stripeUrl} (no local fake)`);
+}
+
 // Fewer glibc malloc arenas so memory freed after a burst of photo work goes back to the
 // system (sharp's docs on glibc fragmentation); the bench measures idle RSS before and after.
 // A 128 KB trim threshold hands the top of the heap back once freed: without it about 35 MB of

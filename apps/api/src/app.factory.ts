@@ -8,7 +8,7 @@ import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import helmet from 'helmet';
-import type { NextFunction, Request, Response } from 'express';
+import { json, type NextFunction, type Request, type Response } from 'express';
 import { annotationSaveBody } from './annotations';
 import { AppModule } from './app.module';
 import type { AppConfig } from './config';
@@ -24,6 +24,8 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
     logger: opts.logger === false ? false : ['log', 'warn', 'error'],
     bufferLogs: opts.logger !== false,
+    // The payment provider signs the exact bytes it sent; its webhook needs them (req.rawBody).
+    rawBody: true,
   });
   // One pino logger: a line per request, and Nest's own log lines as JSON at LOG_LEVEL.
   const logger = createLogger(cfg);
@@ -36,6 +38,10 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const compress = compression({ threshold: 1024 });
   app.use((req: Request, res: Response, next: NextFunction) => (MEDIA_BYTES.test(req.path) ? next() : compress(req, res, next)));
   app.use(cookieParser());
+  // A CSV import carries a whole spreadsheet (IMPORT_MAX_CHARS); every other JSON body keeps the default 100 kB limit.
+  // Wrapped: Nest skips its own JSON parser when it finds a middleware named 'jsonParser' anywhere in the stack.
+  const importJson = json({ limit: '6mb' });
+  app.use('/api/imports', (req: Request, res: Response, next: NextFunction) => importJson(req, res, next));
   app.use(annotationSaveBody());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());

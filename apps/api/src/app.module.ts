@@ -5,6 +5,8 @@ import { AnnotationsModule } from './annotations';
 import { AuditModule } from './audit';
 import { BackgroundWorkModule } from './background-work';
 import { AuthModule } from './auth';
+import { BackupsModule } from './backups';
+import { DataExportModule } from './data-export';
 import { BikesModule } from './bikes';
 import { type AppConfig, ConfigModule } from './config';
 import { AuthCoreModule } from './core/auth';
@@ -25,10 +27,17 @@ import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { ReportsModule } from './reports';
 import { MailModule } from './mail';
+import { PaymentsModule } from './payments';
+import { PaymentProviderModule } from './infra/payments';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
 import { WorkLogModule } from './work-log';
+import { InvitationsModule } from './invitations';
+import { PasswordResetsModule } from './password-resets';
+import { SetupModule } from './setup';
+import { ImportsModule } from './imports';
+import { TwoFactorModule } from './two-factor';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
@@ -52,6 +61,14 @@ const FEATURES = [
   ReportsModule,
   MailModule,
   ShowcaseModule,
+  BackupsModule,
+  DataExportModule,
+  TwoFactorModule,
+  InvitationsModule,
+  PasswordResetsModule,
+  SetupModule,
+  ImportsModule,
+  PaymentsModule,
 ];
 
 @Module({})
@@ -64,6 +81,7 @@ export class AppModule {
         ClockModule,
         TasksModule,
         ScheduleModule.forRoot(),
+        PaymentProviderModule,
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,

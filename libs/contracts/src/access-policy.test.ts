@@ -5,7 +5,7 @@ const staff = (role: 'manager' | 'desk' | 'mechanic'): Actor => ({ kind: 'staff'
 
 describe('ACCESS_POLICY', () => {
   it('lets an owner link do the owner-facing actions and nothing else', () => {
-    expect(ACTIONS.filter((a) => actorCan(owner, a))).toEqual(['owner.view', 'owner.decide', 'owner.consent']);
+    expect(ACTIONS.filter((a) => actorCan(owner, a))).toEqual(['owner.view', 'owner.decide', 'owner.consent', 'owner.pay']);
   });
 
   it('never lets staff act as the owner', () => {

@@ -41,6 +41,8 @@ export const ACCESS_POLICY = {
   'session.view': staff(...ALL_STAFF),
   /** Every signed-in staff member may change their own password. */
   'account.change_password': staff(...ALL_STAFF),
+  /** Every signed-in staff member may set up or turn off their own two-step sign-in. */
+  'account.two_factor': staff(...ALL_STAFF),
   'users.view': staff(...ALL_STAFF),
   'users.manage': staff('manager'),
   'shop.view': staff(...ALL_STAFF),
@@ -48,6 +50,10 @@ export const ACCESS_POLICY = {
   'audit.view': staff('manager'),
   /** See background work that failed (thumbnails, renders, e-mails) and run it again. */
   'work.retry': staff('manager'),
+  /** List backups and make one now (the whole database: restore is a server command). */
+  'backups.manage': staff('manager'),
+  /** Download everything of the shop as one zip. */
+  'shop.export': staff('manager'),
   /** Free space on the server's disks (the low-space warning). */
   'storage.view': staff('manager'),
   /** Favourites, captions and the take-down list. */
@@ -56,6 +62,12 @@ export const ACCESS_POLICY = {
   'showcase.view': staff('manager', 'desk'),
   'customers.view': staff(...ALL_STAFF),
   'customers.edit': staff('manager', 'desk'),
+  /** Download one customer's own data when they ask for it. */
+  'customers.export': staff('manager', 'desk'),
+  /** Erase a customer's personal data on request (audited, cannot be undone). */
+  'customers.erase': staff('manager'),
+  /** Bring customers and bikes in from a CSV file, many at once. */
+  'customers.import': staff('manager'),
   'bikes.view': staff(...ALL_STAFF),
   'bikes.edit': staff('manager', 'desk'),
   'jobs.view': staff(...ALL_STAFF),
@@ -87,9 +99,19 @@ export const ACCESS_POLICY = {
   'consent.record': staff('manager', 'desk'),
   'reports.view': staff(...ALL_STAFF),
   'reports.issue': staff('manager', 'desk'),
+  /** See the balance and the payments of a job. */
+  'payments.view': staff(...ALL_STAFF),
+  /** Record money taken at the counter (card terminal, cash, bank transfer). */
+  'payments.record': staff('manager', 'desk'),
+  /** Give money back against a payment, with a reason. */
+  'payments.refund': staff('manager'),
+  /** Texts of a job and their delivery status. */
+  'texts.view': staff(...ALL_STAFF),
   'owner.view': ownerOnly,
   'owner.decide': ownerOnly,
   'owner.consent': ownerOnly,
+  /** Pay what is due through the hosted checkout. */
+  'owner.pay': ownerOnly,
 } as const satisfies Record<string, Rule>;
 
 export type Action = keyof typeof ACCESS_POLICY;

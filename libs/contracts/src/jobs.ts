@@ -56,6 +56,8 @@ export const JobDtoSchema = z.object({
   createdAt: IsoDateTimeSchema,
   /** Promised date passed and the bike is not ready, collected or cancelled. */
   overdue: z.boolean(),
+  /** Money still due in the shop's minor units (payments feature); null where the list does not say. */
+  dueMinor: z.number().int().nullable(),
 });
 export type JobDto = z.infer<typeof JobDtoSchema>;
 
@@ -67,6 +69,8 @@ export const JobListQuerySchema = pagingQuerySchema(JOB_SORT_FIELDS).extend({
   overdue: z.stringbool().optional(),
   /** true: only jobs still open (not collected or cancelled); false: only closed ones. */
   open: z.stringbool().optional(),
+  /** true: only jobs that are ready to collect and still have money due. */
+  readyUnpaid: z.stringbool().optional(),
 });
 export type JobListQuery = z.infer<typeof JobListQuerySchema>;
 
@@ -75,6 +79,8 @@ export const TransitionRequestSchema = z.object({
   note: optionalText(500),
   /** Desk confirms handing the bike over although no report was sent (else REPORT_NOT_SENT). */
   confirmNoReport: z.boolean().optional(),
+  /** Why the bike goes home with money still due; without it, a hand-over with a balance answers UNPAID_BALANCE. */
+  unpaidReason: optionalText(500).optional(),
 });
 export type TransitionRequest = z.infer<typeof TransitionRequestSchema>;
 

@@ -26,6 +26,8 @@ export const UploadMetaSchema = z.object({
   caption: caption.default(''),
   sourceAssetId: z.coerce.number().int().positive().optional(),
   timecodeMs: z.coerce.number().int().min(0).optional(),
+  /** Made up by the device for one shot (a UUID): sending it again returns the asset already stored instead of a second one. */
+  clientId: z.uuid().optional(),
 });
 export type UploadMeta = z.infer<typeof UploadMetaSchema>;
 

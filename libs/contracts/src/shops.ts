@@ -47,6 +47,10 @@ const settingsFields = {
   currency: CurrencySchema,
   /** How dates and times are written (web, e-mail, PDF); null: the one that fits the currency (domain shopLocale). */
   locale: z.enum(SHOP_LOCALES).nullable(),
+  /** ISO 3166-1 alpha-2: phone numbers typed without a country code are read as this country's. */
+  country: z.string().regex(/^[A-Z]{2}$/, 'Two capital letters, e.g. GB'),
+  /** Printed on receipts when set. */
+  taxNumber: z.string().trim().max(40),
   units: UnitSystemSchema,
   pageSize: PageSizeSchema,
   /** Final check must be signed off by someone other than the mechanic. */
@@ -64,6 +68,8 @@ export const ShopSettingsDtoSchema = z.object({
   logo: z.object({ url: z.string(), width: z.number().int(), height: z.number().int() }).nullable(),
   /** The locale in force: `locale`, else the one from the currency. Every date is written with it. */
   dateLocale: z.enum(SHOP_LOCALES),
+  /** Every account must sign in with a second factor (changed through PUT /api/shop/two-factor). */
+  requireTwoFactor: z.boolean(),
 });
 export type ShopSettingsDto = z.infer<typeof ShopSettingsDtoSchema>;
 

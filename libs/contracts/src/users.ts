@@ -1,17 +1,9 @@
 import { z } from 'zod';
 import { RoleSchema } from './auth';
-import { EmailSchema, IdSchema, IsoDateTimeSchema, requiredText } from './common';
+import { IdSchema, IsoDateTimeSchema } from './common';
 
 /** Minimum password length for staff accounts. */
 export const MIN_PASSWORD_LENGTH = 10;
-
-export const CreateUserRequestSchema = z.object({
-  name: requiredText(100),
-  email: EmailSchema,
-  role: RoleSchema,
-  password: z.string().min(MIN_PASSWORD_LENGTH, `At least ${MIN_PASSWORD_LENGTH} characters`).max(200),
-});
-export type CreateUserRequest = z.infer<typeof CreateUserRequestSchema>;
 
 export const UpdateUserRequestSchema = z
   .object({ role: RoleSchema.optional(), active: z.boolean().optional() })

@@ -10,6 +10,8 @@ export const WorkEntryRequestSchema = z.object({
     .int()
     .min(0)
     .max(24 * 60),
+  /** Charged to the owner at the shop's labour rate (adds to the job's balance). */
+  chargeable: z.boolean().default(false),
 });
 export type WorkEntryRequest = z.infer<typeof WorkEntryRequestSchema>;
 
@@ -18,6 +20,8 @@ export const WorkEntryDtoSchema = z.object({
   description: z.string(),
   partsUsed: z.string(),
   minutes: z.number().int(),
+  /** The hourly rate it is charged at, or null when it is not charged. */
+  rateMinor: z.number().int().nullable(),
   userId: z.number().int().nullable(),
   userName: z.string().nullable(),
   at: IsoDateTimeSchema,

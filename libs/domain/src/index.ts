@@ -13,6 +13,7 @@ export * from './clearance';
 export * from './bearing-play';
 export * from './measurement';
 export * from './money';
+export * from './balance';
 export * from './contrast';
 export * from './media-tags';
 export * from './job-number';

@@ -128,7 +128,7 @@ export const LANTERN_VISITS: DemoJob[] = [
         },
       },
     ],
-    work: [{ description: 'Replaced rear inner tube', partsUsed: 'Inner tube 700×25–32', minutes: 15 }],
+    work: [{ description: 'Replaced rear inner tube', partsUsed: 'Inner tube 700×25–32', minutes: 15, chargeable: true }],
   },
   {
     shop: 'lantern',

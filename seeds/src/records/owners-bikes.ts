@@ -6,7 +6,7 @@ export const DEMO_OWNERS: DemoOwner[] = [
   { key: 'caspian', name: 'Caspian Mordell', email: null, phone: '+44 1632 960 112', preferredChannel: 'phone' },
   { key: 'wilhelmina', name: 'Wilhelmina Tarrant', email: 'w.tarrant@example.test', phone: '+44 1632 960 245', preferredChannel: 'email' },
   { key: 'jory', name: 'Jory Pellham', email: 'jory.pellham@example.test', phone: null, preferredChannel: 'email' },
-  { key: 'anouk', name: 'Anouk Selberg', email: null, phone: '+44 1632 960 377', preferredChannel: 'sms' },
+  { key: 'anouk', name: 'Anouk Selberg', email: 'anouk.selberg@example.test', phone: '+61 491 570 156', preferredChannel: 'sms' }, // a number from Australia's range set aside for fiction (ACMA; from memory): libphonenumber-js takes it as a valid mobile, unlike the UK's drama range
   { key: 'fenwick', name: 'Fenwick Aldous', email: 'fenwick@example.test', phone: null, preferredChannel: 'email' },
   { key: 'reed-owner', name: 'Marisol Quent', email: 'marisol.quent@example.test', phone: null, preferredChannel: 'email' },
 ];

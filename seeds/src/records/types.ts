@@ -83,7 +83,8 @@ export interface DemoJob {
   conditions?: Record<string, Condition>;
   measurements?: { checkpoint: string; input: MeasurementInput }[];
   findings?: DemoFinding[];
-  work?: { description: string; partsUsed: string; minutes: number }[];
+  /** `chargeable`: the time is charged to the owner at the shop's labour rate. */
+  work?: { description: string; partsUsed: string; minutes: number; chargeable?: boolean }[];
   torque?: DemoTorque[];
   /** Who signs the final check (e-mail), for jobs at ready or beyond. */
   checker?: string;

@@ -1,34 +1,33 @@
 import { Body, Controller, Get, HttpCode, Inject, Post, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { ChangePasswordRequestSchema, LoginRequestSchema, type ChangePasswordRequest, type LoginRequest } from '@benchproof/contracts';
+import {
+  ChallengeRequestSchema,
+  ChangePasswordRequestSchema,
+  CodeStepRequestSchema,
+  LoginRequestSchema,
+  type ChallengeRequest,
+  type ChangePasswordRequest,
+  type CodeStepRequest,
+  type LoginRequest,
+} from '@benchproof/contracts';
 import type { DoubleCsrfUtilities } from 'csrf-csrf';
 import type { Request, Response } from 'express';
-import { APP_CONFIG, type AppConfig } from '../config';
-import {
-  Can,
-  CSRF,
-  CSRF_COOKIE,
-  CurrentUser,
-  issueCsrfToken,
-  Public,
-  SESSION_COOKIE,
-  sessionCookieOptions,
-  sessionTokenFrom,
-  type AuthUser,
-} from '../core/auth';
+import { Can, CSRF, CSRF_COOKIE, CurrentUser, issueCsrfToken, Public, SESSION_COOKIE, sessionTokenFrom, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
-import { AuthService, type IssuedSession } from './auth.service';
+import { AuthService } from './auth.service';
+import { clientAddress, SessionResponder } from './session-responder';
 
 /**
  * Sessions live in an httpOnly cookie so `<img>` and `<video>` tags load protected
  * media without tokens in URLs; every state-changing call echoes a CSRF token.
+ * With a second factor, the password answers a challenge instead, and only the code step opens a session.
  */
 @ApiTags('auth')
 @Controller('auth')
 export class AuthController {
   constructor(
     private readonly auth: AuthService,
-    @Inject(APP_CONFIG) private readonly cfg: AppConfig,
+    private readonly respond: SessionResponder,
     @Inject(CSRF) private readonly csrf: DoubleCsrfUtilities,
   ) {}
 
@@ -37,9 +36,35 @@ export class AuthController {
   @HttpCode(200)
   @ApiZodBody(LoginRequestSchema)
   async login(@Body(zod(LoginRequestSchema)) body: LoginRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
-    // req.ip follows X-Forwarded-For only when TRUST_PROXY configures Express's 'trust proxy'.
-    const session = await this.auth.login(body.email, body.password, req.ip ?? req.socket.remoteAddress ?? 'unknown');
-    return this.startSession(session, req, res);
+    return this.respond.outcome(await this.auth.login(body.email, body.password, clientAddress(req)), req, res);
+  }
+
+  /** Second step: the six-digit code (or a recovery code) for the challenge the password step gave. */
+  @Post('login/code')
+  @Public()
+  @HttpCode(200)
+  @ApiZodBody(CodeStepRequestSchema)
+  async code(@Body(zod(CodeStepRequestSchema)) body: CodeStepRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+    return this.respond.session(await this.auth.withCode(body.challenge, body.code, clientAddress(req)), req, res);
+  }
+
+  /** The shop requires a second factor this account has not set up: its secret and QR code, before any session. */
+  @Post('login/enrol')
+  @Public()
+  @HttpCode(200)
+  @ApiZodBody(ChallengeRequestSchema)
+  enrol(@Body(zod(ChallengeRequestSchema)) body: ChallengeRequest) {
+    return this.auth.enrolStart(body.challenge);
+  }
+
+  /** Confirms that set-up with a first code: a session and the ten recovery codes, shown this once. */
+  @Post('login/enrol/confirm')
+  @Public()
+  @HttpCode(200)
+  @ApiZodBody(CodeStepRequestSchema)
+  async enrolConfirm(@Body(zod(CodeStepRequestSchema)) body: CodeStepRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+    const { session, recoveryCodes } = await this.auth.enrolConfirm(body.challenge, body.code, clientAddress(req));
+    return { ...this.respond.session(session, req, res), recoveryCodes };
   }
 
   /** Changes the caller's password, ends all their sessions and starts a new one on this device. */
@@ -53,8 +78,7 @@ export class AuthController {
     @Req() req: Request,
     @Res({ passthrough: true }) res: Response,
   ) {
-    const session = await this.auth.changePassword(user, body.currentPassword, body.newPassword);
-    return this.startSession(session, req, res);
+    return this.respond.session(await this.auth.changePassword(user, body.currentPassword, body.newPassword), req, res);
   }
 
   /** The current session, with a fresh CSRF token for the page that just loaded. */
@@ -71,11 +95,5 @@ export class AuthController {
     await this.auth.logout(sessionTokenFrom(req));
     res.clearCookie(SESSION_COOKIE, { path: '/' });
     res.clearCookie(CSRF_COOKIE, { path: '/' });
-  }
-
-  private startSession(session: IssuedSession, req: Request, res: Response) {
-    res.cookie(SESSION_COOKIE, session.token, sessionCookieOptions(this.cfg.COOKIE_SECURE, this.cfg.SESSION_TTL_SECONDS * 1000));
-    const csrfToken = issueCsrfToken(this.csrf, req, res, session.token);
-    return { user: session.user, expiresAt: session.expiresAt, csrfToken };
   }
 }

@@ -1,1 +1,3 @@
 export { AuthModule } from './auth.module';
+export { AuthService, type SignInOutcome } from './auth.service';
+export { SessionResponder, clientAddress } from './session-responder';

@@ -39,6 +39,16 @@ const EnvSchema = z.object({
     .int()
     .positive()
     .default(15 * 60),
+  /** Password-reset links one typed address, and one client address, may ask for within the window. */
+  RESET_THROTTLE_LIMIT: z.coerce.number().int().positive().default(5),
+  RESET_THROTTLE_ADDRESS_LIMIT: z.coerce.number().int().positive().default(20),
+  RESET_THROTTLE_WINDOW_SECONDS: z.coerce.number().int().positive().default(3600),
+  /** 'open' lets new workshops sign themselves up (hosted service); 'closed' (default) allows only first-run setup. */
+  SIGNUP: z.enum(['open', 'closed']).default('closed'),
+  /** Sign-ups one client address may start within an hour (SIGNUP=open). */
+  SIGNUP_LIMIT: z.coerce.number().int().positive().default(5),
+  /** The one-time first-run setup code; unset: a random one is printed at start while the database has no shop. */
+  SETUP_CODE: z.string().min(8).optional(),
   /** Express 'trust proxy' (e.g. `loopback`, `1`, `10.0.0.0/8`). Unset: X-Forwarded-For is ignored. */
   TRUST_PROXY: z.string().min(1).optional(),
   /** `production` refuses to start without PUBLIC_URL (owner links and report links are built from it, never from a request). */
@@ -62,6 +72,22 @@ const EnvSchema = z.object({
   /** First retry of a 'mail.send' task after this many ms; the task runner's backoff doubles it (capped at 10 min). */
   MAIL_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
   MAIL_MAX_ATTEMPTS: z.coerce.number().int().positive().default(8),
+  /** Card payments (the provider's SDK). The defaults reach the local fake (`npm start` runs it on 12111). */
+  STRIPE_SECRET_KEY: z.string().min(1).default('sk_test_local_fake'),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).default('whsec_local_fake'),
+  /** Where the SDK sends its API calls (host, port and protocol); 'provider' = the SDK's own default host. */
+  STRIPE_API_URL: z.union([z.string().url(), z.literal('provider')]).default('http://127.0.0.1:12111'),
+  PAYMENT_FAKE: bool.default(true),
+  /** Text messages (the provider's SDK). The defaults reach the local fake (`npm start` runs it on 12112). */
+  TWILIO_ACCOUNT_SID: z.string().min(1).default('AC00000000000000000000000000000000'),
+  TWILIO_AUTH_TOKEN: z.string().min(1).default('local_fake_auth_token'),
+  /** The sender: a number in E.164 or a messaging service id. */
+  TWILIO_FROM: z.string().min(1).default('+15005550006'),
+  /** Where the SDK's custom httpClient sends its requests; 'provider' = the SDK's own default client and hosts. */
+  TWILIO_API_URL: z.union([z.string().url(), z.literal('provider')]).default('http://127.0.0.1:12112'),
+  TEXT_FAKE: bool.default(true),
+  TEXT_MAX_ATTEMPTS: z.coerce.number().int().positive().default(6),
+  TEXT_RETRY_BASE_MS: z.coerce.number().int().positive().default(30_000),
   MAX_PHOTO_BYTES: z.coerce
     .number()
     .int()
@@ -93,6 +119,19 @@ const EnvSchema = z.object({
   MEDIA_CACHE_MB: z.coerce.number().min(0).default(32),
   /** Unfinished resumable uploads expire after this many hours (tus expiration extension). */
   TUS_EXPIRE_HOURS: z.coerce.number().positive().default(24),
+  /** Where media, reports and backups live: 'local' (UPLOADS_DIR) or 's3' (an S3-compatible bucket, S3_* below). */
+  STORAGE: z.enum(['local', 's3']).default('local'),
+  S3_BUCKET: z.string().min(3).optional(),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  /** For an S3-compatible store (MinIO, Ceph, a local fake); unset = AWS. */
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_FORCE_PATH_STYLE: bool.default(false),
+  /** Both or neither; neither = the AWS SDK's default credential chain (environment, shared files, instance role). */
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  /** A database backup every this many hours (0 = only on demand); the newest BACKUP_KEEP are kept. */
+  BACKUP_EVERY_HOURS: z.coerce.number().min(0).default(24),
+  BACKUP_KEEP: z.coerce.number().int().min(1).default(14),
   STORAGE_SWEEP_MINUTES: z.coerce.number().positive().default(60),
   /** A stored original that no media row names is removed by the sweep once it is this old (an upload in flight has no row yet). */
   ORPHAN_GRACE_MINUTES: z.coerce.number().positive().default(60),
@@ -124,6 +163,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     throw new ConfigError(`Invalid environment: ${z.prettifyError(parsed.error)}`);
   }
   const cfg = parsed.data;
+  if (cfg.STORAGE === 's3' && !cfg.S3_BUCKET) throw new Error('Invalid environment: STORAGE=s3 needs S3_BUCKET');
+  if (!cfg.S3_ACCESS_KEY_ID !== !cfg.S3_SECRET_ACCESS_KEY)
+    throw new Error('Invalid environment: set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither');
   if (cfg.NODE_ENV === 'production' && !cfg.PUBLIC_URL) {
     throw new ConfigError(
       'PUBLIC_URL is required when NODE_ENV=production: owner links and report links are built from it. ' +

@@ -60,6 +60,16 @@ export class CustomersRepository {
       .get();
   }
 
+  /** Every customer's contact fields in the shop, for matching an import against (id, name, e-mail, phone). */
+  contacts(shopId: number): Array<Pick<CustomerRow, 'id' | 'name' | 'email' | 'phone' | 'notes'>> {
+    return this.db
+      .select({ id: customers.id, name: customers.name, email: customers.email, phone: customers.phone, notes: customers.notes })
+      .from(customers)
+      .where(eq(customers.shopId, shopId))
+      .orderBy(asc(customers.id))
+      .all();
+  }
+
   findMany(shopId: number, ids: number[]): CustomerRow[] {
     if (ids.length === 0) return [];
     return this.db

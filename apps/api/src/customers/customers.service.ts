@@ -55,6 +55,11 @@ export class CustomersService {
     return toCustomerDto(row);
   }
 
+  /** Every customer of the shop with contact fields, oldest first (import matching, CSV export). */
+  contacts(actor: Pick<AuthUser, 'shopId'>): Array<{ id: number; name: string; email: string | null; phone: string | null; notes: string | null }> {
+    return this.repo.contacts(actor.shopId).map((c) => ({ id: c.id, name: c.name, email: c.email || null, phone: c.phone || null, notes: c.notes || null }));
+  }
+
   /** Customers by id, keyed by id; ids of other shops are simply absent. */
   byIds(actor: Pick<AuthUser, 'shopId'>, ids: number[]): Map<number, CustomerDto> {
     return new Map(this.repo.findMany(actor.shopId, [...new Set(ids)]).map((c) => [c.id, toCustomerDto(c)]));

@@ -51,13 +51,15 @@ const SORT_COLUMN = { promisedOn: jobs.promisedOn, createdAt: jobs.createdAt, nu
 export interface JobSearch {
   query: JobListQuery;
   today: string;
+  /** With the "ready, unpaid" filter: the ready jobs with money due (the payments feature works them out). */
+  readyUnpaidIds?: number[];
 }
 
 const p = (name: string) => sql.placeholder(name);
 
 /** Which filters are present and how the page is sorted: everything that changes the SQL, none of the values. */
 const shapeOf = (f: JobListQuery, text: boolean): string =>
-  [f.status?.length ?? 0, !!f.mechanicId, !!f.promisedAfter, !!f.promisedBefore, f.overdue, f.open, text, f.sort, f.order].join('|');
+  [f.status?.length ?? 0, !!f.mechanicId, !!f.promisedAfter, !!f.promisedBefore, f.overdue, f.open, !!f.readyUnpaid, text, f.sort, f.order].join('|');
 
 /**
  * Status filters are written as IN lists (never NOT IN) so the (shop, status, promised, id)
@@ -80,12 +82,14 @@ function filters(f: JobListQuery, text: boolean): SQL | undefined {
     f.overdue === undefined ? undefined : f.overdue ? overdue : notOverdue,
     f.open === undefined ? undefined : inArray(jobs.status, f.open ? OPEN : [...TERMINAL_STATUSES]),
     text ? sql`${jobs.id} IN (SELECT rowid FROM job_search WHERE job_search MATCH ${p('text')})` : undefined,
+    f.readyUnpaid ? and(eq(jobs.status, 'ready'), sql`${jobs.id} IN (SELECT value FROM json_each(${p('readyUnpaidIds')}))`) : undefined,
   );
 }
 
-function valuesOf(shopId: number, { query: f, today }: JobSearch, text: string | null): Record<string, unknown> {
+function valuesOf(shopId: number, { query: f, today, readyUnpaidIds }: JobSearch, text: string | null): Record<string, unknown> {
   const values: Record<string, unknown> = {
     ...{ shopId, today, text, mechanicId: f.mechanicId, promisedAfter: f.promisedAfter, promisedBefore: f.promisedBefore },
+    readyUnpaidIds: JSON.stringify(readyUnpaidIds ?? []),
     ...{ limit: f.pageSize, offset: (f.page - 1) * f.pageSize },
   };
   f.status?.forEach((st, i) => (values[`status${i}`] = st));

@@ -25,6 +25,7 @@ import { UsersService } from '../users';
 import { BookInService } from './book-in.service';
 import { JobAccess, type JobRef, toJobRef } from './job-access.service';
 import { type JobRow, JobsRepository } from './jobs.repository';
+import { JobBalances } from './job-balances';
 import { STATUS_TIME_FIELD, toDetail, toFinalCheckDto, toJobDto, toJobListDto, type SummaryContext } from './jobs.view';
 import { UnitOfWork } from '../core/db';
 
@@ -32,6 +33,9 @@ type Actor = Pick<AuthUser, 'shopId'>;
 
 @Injectable()
 export class JobsService {
+  /** Money due per job; the payments feature binds its answer here. */
+  readonly balances = new JobBalances();
+
   constructor(
     private readonly repo: JobsRepository,
     private readonly uow: UnitOfWork,
@@ -73,8 +77,14 @@ export class JobsService {
 
   list(actor: AuthUser, query: JobListQuery): JobPage {
     const today = this.today();
-    const { rows, total } = this.repo.page(actor.shopId, { query, today });
-    return { items: rows.map((r) => toJobListDto(r, today)), total, page: query.page, pageSize: query.pageSize };
+    const readyUnpaidIds = query.readyUnpaid ? this.balances.readyUnpaidIds(actor.shopId) : undefined;
+    const { rows, total } = this.repo.page(actor.shopId, { query, today, readyUnpaidIds });
+    const due = this.balances.dueByJob(
+      actor.shopId,
+      rows.map((r) => r.id),
+    );
+    const items = rows.map((r) => ({ ...toJobListDto(r, today), dueMinor: due.get(r.id) ?? null }));
+    return { items, total, page: query.page, pageSize: query.pageSize };
   }
 
   /** Every visit of one bike, oldest first. */
@@ -115,7 +125,7 @@ export class JobsService {
 
   /** Moves the job along JOB_TRANSITIONS (libs/domain); anything else is ILLEGAL_TRANSITION. */
   transition(actor: AuthUser, id: number, input: TransitionRequest): JobDetail {
-    this.move(actor, id, input.to, input.note ?? '', input.confirmNoReport);
+    this.move(actor, id, input.to, input.note ?? '', { confirmNoReport: input.confirmNoReport, unpaidReason: input.unpaidReason });
     return this.get(actor, id);
   }
 
@@ -135,7 +145,13 @@ export class JobsService {
     this.move({ shopId: scope.shopId, id: null }, id, to, note);
   }
 
-  private move(actor: { shopId: number; id: number | null }, id: number, to: JobRow['status'], note: string, confirmNoReport?: boolean): void {
+  private move(
+    actor: { shopId: number; id: number | null },
+    id: number,
+    to: JobRow['status'],
+    note: string,
+    confirm: { confirmNoReport?: boolean; unpaidReason?: string | null } = {},
+  ): void {
     this.uow.run((tx) => {
       const job = this.load(actor, id);
       if (!canTransition(job.status, to))
@@ -143,7 +159,8 @@ export class JobsService {
       if (to === 'ready') this.requirePassedCheck(actor, job);
       // Collected is terminal, so only the hand-over ever sets collectedWithoutReport.
       const withoutReport = to === 'collected' && !job.reportSent;
-      if (withoutReport && !confirmNoReport) throw new DomainError('REPORT_NOT_SENT');
+      if (withoutReport && !confirm.confirmNoReport) throw new DomainError('REPORT_NOT_SENT');
+      const unpaid = to === 'collected' ? this.unpaidHandover(actor.shopId, id, confirm.unpaidReason) : null;
       const now = this.clock.now();
       this.repo.update(actor.shopId, id, { status: to, [STATUS_TIME_FIELD[to]]: now, updatedAt: now, collectedWithoutReport: withoutReport });
       this.repo.insertEvent({
@@ -152,13 +169,23 @@ export class JobsService {
         fromStatus: job.status,
         toStatus: to,
         userId: actor.id,
-        note: note || (withoutReport ? 'Handed over without a report' : ''),
+        note: [note || (withoutReport ? 'Handed over without a report' : ''), unpaid?.note ?? ''].filter(Boolean).join(' · '),
         at: now,
       });
-      const details = { from: job.status, to, ...(actor.id === null ? { by: 'owner_link' } : {}), ...(withoutReport ? { withoutReport } : {}) };
+      const details = {
+        ...{ from: job.status, to, ...(actor.id === null ? { by: 'owner_link' } : {}), ...(withoutReport ? { withoutReport } : {}) },
+        ...(unpaid ? { unpaidMinor: unpaid.dueMinor, unpaidReason: unpaid.reason } : {}),
+      };
       this.audit.record(actor, { action: 'job.status_changed', entityType: 'job', entityId: id, details });
       publish(this.emitter, new JobMovedEvent(tx, actor.shopId, id, job.status, to, actor.id));
     });
+  }
+
+  /** A hand-over with money due: desk's reason is required and goes into the status history and audit. */
+  private unpaidHandover(shopId: number, id: number, reason: string | null | undefined): { dueMinor: number; reason: string; note: string } | null {
+    const dueMinor = this.balances.requireSettled(shopId, id, reason);
+    if (dueMinor <= 0 || !reason) return null;
+    return { dueMinor, reason, note: `Went home unpaid: ${reason}` };
   }
 
   /** Ready needs a passed final check taken since the job last entered final check. */

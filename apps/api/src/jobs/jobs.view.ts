@@ -41,6 +41,7 @@ export function toJobListDto(row: JobListRow, today: string): JobDto {
     reportedSymptoms: row.reportedSymptoms,
     createdAt: row.createdAt.toISOString(),
     overdue: isOverdue(row, today),
+    dueMinor: null,
     customer: { id: row.customerId, name: row.ownerName },
     bike: { id: row.bikeId, maker: row.bikeMaker, model: row.bikeModel, colour: row.bikeColour || null, serialNumber: row.bikeSerial || null },
   };
@@ -58,6 +59,7 @@ function baseDto(job: ListedJob, mechanicName: string | null | undefined, today:
     reportedSymptoms: job.reportedSymptoms,
     createdAt: job.createdAt.toISOString(),
     overdue: isOverdue(job, today),
+    dueMinor: null,
   };
 }
 

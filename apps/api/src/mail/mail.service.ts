@@ -18,6 +18,7 @@ import { MAIL_SEND } from './mail-delivery';
 import { type OutboxRow, MailRepository } from './mail.repository';
 import { estimateDecisionMail } from './templates/estimate-decision';
 import { type RenderedMail, type ShopBrand, withoutSecrets } from './templates/layout';
+import { paymentReceiptMail, type ReceiptLine } from './templates/payment-receipt';
 import { reportReadyMail } from './templates/report-ready';
 
 /** A message to queue. Attachments are references, opened at send time. */
@@ -175,6 +176,23 @@ export class MailService {
     );
   }
 
+  /** Queues the "paid in full" receipt in the payment's transaction; null when the owner has no e-mail address. */
+  queueReceipt(
+    scope: { shopId: number },
+    jobId: number,
+    money: { netMinor: number; taxMinor: number; grossMinor: number; payments: ReceiptLine[]; paidAt: Date },
+    tx: DbTx,
+  ): OutboxMessageDto | null {
+    const job = this.access.read(scope, jobId);
+    const to = this.customers.get(scope, job.customerId).email;
+    if (!to) return null;
+    const ctx = this.context(scope, job);
+    const settings = this.shops.settings(scope.shopId);
+    const paidOn = money.paidAt.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
+    const rendered = paymentReceiptMail({ ...ctx, ...money, shop: { ...ctx.shop, taxNumber: settings.taxNumber, currency: settings.currency }, paidOn });
+    return this.queue({ shopId: scope.shopId, jobId, kind: 'payment_receipt', to, ...rendered, attachments: [] }, tx);
+  }
+
   private recipient(actor: Actor, customerId: number, override: string | undefined): string {
     const to = override ?? this.customers.get(actor, customerId).email;
     if (!to) throw new DomainError('NO_OWNER_EMAIL', undefined, { field: 'to' });
@@ -182,7 +200,7 @@ export class MailService {
   }
 
   private context(
-    actor: Actor,
+    actor: Pick<Actor, 'shopId'>,
     job: { number: string; customerId: number; bikeId: number },
   ): { shop: ShopBrand; ownerName: string; jobNumber: string; dated: string; bikeLabel: string } {
     const shop = this.shops.settings(actor.shopId);

@@ -62,14 +62,33 @@ export class MediaIntakeService {
 
   async intake(actor: AuthUser, jobId: number, file: IncomingFile, meta: UploadMeta, channel: 'multipart' | 'resumable'): Promise<MediaAssetDto> {
     try {
+      const earlier = this.earlier(actor, jobId, meta);
+      if (earlier) return earlier;
       const { type, dims } = await this.validate(file);
       const kind = this.kindFor(actor, jobId, meta, type);
       const probed = await this.probe(file.path, type, dims);
-      const row = await this.store(actor, jobId, file, meta, { type, kind, probed, channel });
+      let row: MediaAssetRow;
+      try {
+        row = await this.store(actor, jobId, file, meta, { type, kind, probed, channel });
+      } catch (err) {
+        // Two sends of one shot raced past the look-up: the unique (shop, client id) index kept one; answer with it.
+        const raced = isClientIdClash(err) ? this.earlier(actor, jobId, meta) : null;
+        if (raced) return raced;
+        throw err;
+      }
       return toMediaDto(row, []);
     } finally {
       await this.temp.remove(file.path);
     }
+  }
+
+  /** The asset an earlier send of the same client id stored (a retry after a lost answer), else null. */
+  private earlier(actor: AuthUser, jobId: number, meta: UploadMeta): MediaAssetDto | null {
+    if (!meta.clientId) return null;
+    const row = this.repo.findByClientId(actor.shopId, meta.clientId);
+    if (!row) return null;
+    if (row.jobId !== jobId) throw new DomainError('CONFLICT', 'This shot was already uploaded to another job.', { assetId: row.id });
+    return toMediaDto(row, this.repo.derivativesOf([row.id]));
   }
 
   /** Removes a temp file that was not (or no longer) needed; harmless after a successful move. */
@@ -170,6 +189,7 @@ export class MediaIntakeService {
       uploadedBy: actor.id,
       sourceAssetId: meta.sourceAssetId ?? null,
       timecodeMs: meta.timecodeMs ?? null,
+      clientId: meta.clientId ?? null,
       derivativeStatus: found.type.family === 'image' ? 'pending' : 'ready',
     });
     this.audit.record(actor, {
@@ -181,4 +201,12 @@ export class MediaIntakeService {
     if (found.type.family === 'image') this.derivatives.enqueue(row, tx);
     return row;
   }
+}
+
+/** better-sqlite3's unique-constraint failure on the client id index (drizzle may wrap it as `cause`). */
+function isClientIdClash(err: unknown): boolean {
+  for (let e: unknown = err; e instanceof Error; e = e.cause) {
+    if ((e as { code?: string }).code === 'SQLITE_CONSTRAINT_UNIQUE' && e.message.includes('client_id')) return true;
+  }
+  return false;
 }

@@ -72,9 +72,8 @@ export class MediaSweepService implements OnModuleInit, OnApplicationBootstrap {
    * the keys rows name are read after listing them, so a file whose row is committing is never taken.
    */
   private async removeOrphanOriginals(olderThan: Date): Promise<number> {
-    if (!this.storage.listKeys) return 0;
     const candidates: string[] = [];
-    for await (const f of this.storage.listKeys('originals/')) if (f.modifiedAt < olderThan) candidates.push(f.key);
+    for (const f of await this.storage.list('originals/')) if (f.modifiedAt < olderThan) candidates.push(f.key);
     if (candidates.length === 0) return 0;
     const named = this.repo.originalKeys();
     const orphans = candidates.filter((k) => !named.has(k));

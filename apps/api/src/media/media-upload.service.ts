@@ -26,6 +26,7 @@ export class MediaUploadService {
       this.media.assertOpenJob(actor, jobId);
       const meta = new ZodPipe(UploadMetaSchema).transform(fields);
       if (!files.length) throw new DomainError('VALIDATION_FAILED', 'Attach at least one file in the "files" field.');
+      if (meta.clientId && files.length > 1) throw new DomainError('VALIDATION_FAILED', 'A clientId names one shot: send one file with it.');
       const results: UploadFileResult[] = [];
       for (const [index, file] of files.entries()) results.push(await this.one(actor, jobId, file, meta, index));
       const assets = results.flatMap((r) => (r.ok ? [r.asset] : []));

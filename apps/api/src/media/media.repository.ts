@@ -67,6 +67,14 @@ export class MediaRepository {
       .get();
   }
 
+  findByClientId(shopId: number, clientId: string): MediaAssetRow | undefined {
+    return this.db
+      .select()
+      .from(mediaAssets)
+      .where(and(eq(mediaAssets.shopId, shopId), eq(mediaAssets.clientId, clientId)))
+      .get();
+  }
+
   findById(id: number): MediaAssetRow | undefined {
     return this.db.select().from(mediaAssets).where(eq(mediaAssets.id, id)).get();
   }

@@ -18,5 +18,6 @@ export const UPLOAD_FORM = {
     caption: { type: 'string' as const, maxLength: 500 },
     sourceAssetId: { type: 'integer' as const, description: 'For a still grabbed from a video of this job' },
     timecodeMs: { type: 'integer' as const, description: 'Position of the still in the source video' },
+    clientId: { type: 'string' as const, format: 'uuid', description: 'Made up by the device for one shot; sent again, the stored asset is answered' },
   },
 };

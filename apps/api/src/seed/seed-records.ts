@@ -99,7 +99,7 @@ export class SeedRecords {
   }
 
   private logWork(job: DemoJob, jobId: number, mech: AuthUser): void {
-    for (const w of job.work ?? []) this.workLog.addWork(mech, jobId, w);
+    for (const w of job.work ?? []) this.workLog.addWork(mech, jobId, { chargeable: false, ...w });
     for (const t of job.torque ?? []) {
       // The entry is backdated by the job's daysAgo afterwards; the calibration day is counted from then.
       const toolCalibratedOn = t.toolCalibratedDaysBefore === undefined ? undefined : this.daysBeforeNow(job.daysAgo + t.toolCalibratedDaysBefore);

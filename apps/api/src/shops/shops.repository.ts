@@ -13,6 +13,14 @@ export class ShopsRepository {
     return this.db.select().from(shops).where(eq(shops.id, id)).get();
   }
 
+  insert(row: typeof shops.$inferInsert): ShopRow {
+    return this.db.insert(shops).values(row).returning().all()[0];
+  }
+
+  any(): boolean {
+    return Boolean(this.db.select({ id: shops.id }).from(shops).limit(1).get());
+  }
+
   update(id: number, patch: Partial<ShopRow>): ShopRow {
     return this.db.update(shops).set(patch).where(eq(shops.id, id)).returning().all()[0];
   }

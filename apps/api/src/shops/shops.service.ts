@@ -1,9 +1,10 @@
-import { Injectable } from '@nestjs/common';
-import type { ShopSettingsDto, UpdateShopSettingsRequest } from '@benchproof/contracts';
+import { Inject, Injectable } from '@nestjs/common';
+import type { NewShop, ShopSettingsDto, UpdateShopSettingsRequest } from '@benchproof/contracts';
 import { shopLocale } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import type { AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
+import { CLOCK, type Clock } from '../core/clock';
 import { type ShopRow, ShopsRepository } from './shops.repository';
 import { UnitOfWork } from '../core/db';
 
@@ -18,6 +19,8 @@ const toDto = (s: ShopRow): ShopSettingsDto => ({
   currency: s.currency,
   locale: s.locale ?? null,
   dateLocale: shopLocale(s),
+  country: s.country,
+  taxNumber: s.taxNumber,
   units: s.units,
   pageSize: s.pageSize,
   finalCheckSecondPerson: s.finalCheckSecondPerson,
@@ -26,6 +29,7 @@ const toDto = (s: ShopRow): ShopSettingsDto => ({
   brandAccent: s.brandAccent,
   reportFooter: s.reportFooter,
   showcaseDeskAccess: s.showcaseDeskAccess,
+  requireTwoFactor: s.requireTwoFactor,
   logo: s.logoKey && s.logoWidth && s.logoHeight ? { url: `/api/shop/logo?v=${s.logoSha256?.slice(0, 12)}`, width: s.logoWidth, height: s.logoHeight } : null,
 });
 
@@ -44,6 +48,7 @@ export class ShopsService {
     private readonly uow: UnitOfWork,
     private readonly repo: ShopsRepository,
     private readonly audit: AuditService,
+    @Inject(CLOCK) private readonly clock: Clock,
   ) {}
 
   settings(shopId: number): ShopSettingsDto {
@@ -59,6 +64,25 @@ export class ShopsService {
       return saved;
     });
     return toDto(updated);
+  }
+
+  /** Makes a new shop (first-run setup, self-service sign-up); call inside the cause's transaction. */
+  create(input: NewShop): ShopSettingsDto {
+    return toDto(this.repo.insert({ ...input, createdAt: this.clock.now() }));
+  }
+
+  /** Whether the shop exists at all (setup is open only while none does). */
+  anyShop(): boolean {
+    return this.repo.any();
+  }
+
+  requiresTwoFactor(shopId: number): boolean {
+    return this.repo.find(shopId)?.requireTwoFactor ?? false;
+  }
+
+  setRequireTwoFactor(actor: AuthUser, required: boolean): void {
+    this.repo.update(actor.shopId, { requireTwoFactor: required });
+    this.audit.record(actor, { action: 'shop.two_factor_required', entityType: 'shop', entityId: actor.shopId, details: { required } });
   }
 
   /** The shop's report logo, or null when none was uploaded. */

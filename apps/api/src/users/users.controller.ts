@@ -1,6 +1,6 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Get, Param, ParseIntPipe, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { CreateUserRequestSchema, UpdateUserRequestSchema, type CreateUserRequest, type UpdateUserRequest } from '@benchproof/contracts';
+import { UpdateUserRequestSchema, type UpdateUserRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { UsersService } from './users.service';
@@ -15,13 +15,6 @@ export class UsersController {
   @Can('users.view')
   list(@CurrentUser() user: AuthUser) {
     return this.users.list(user);
-  }
-
-  @Post()
-  @Can('users.manage')
-  @ApiZodBody(CreateUserRequestSchema)
-  create(@CurrentUser() user: AuthUser, @Body(zod(CreateUserRequestSchema)) body: CreateUserRequest) {
-    return this.users.create(user, body);
   }
 
   @Patch(':id')

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, isNull, lt, or } from 'drizzle-orm';
 import { DB, type Db } from '../core/db';
-import { users } from '../db/schema';
+import { shops, users } from '../db/schema';
 
 export type UserRow = typeof users.$inferSelect;
 export type NewUserRow = typeof users.$inferInsert;
@@ -39,11 +39,34 @@ export class UsersRepository {
       .all()[0];
   }
 
+  /** Second-factor fields of one user (set, replace or clear). */
+  setTotp(shopId: number, id: number, patch: Partial<Pick<UserRow, 'totpSecret' | 'totpEnabledAt' | 'totpLastStep'>>): void {
+    this.db
+      .update(users)
+      .set(patch)
+      .where(and(eq(users.shopId, shopId), eq(users.id, id)))
+      .run();
+  }
+
+  /** Records a used TOTP time step only if it is later than the last one: the same code never works twice. */
+  takeTotpStep(shopId: number, id: number, step: number): boolean {
+    const res = this.db
+      .update(users)
+      .set({ totpLastStep: step })
+      .where(and(eq(users.shopId, shopId), eq(users.id, id), or(isNull(users.totpLastStep), lt(users.totpLastStep, step))))
+      .run();
+    return res.changes === 1;
+  }
+
   setPasswordHash(shopId: number, id: number, passwordHash: string): void {
     this.db
       .update(users)
       .set({ passwordHash })
       .where(and(eq(users.shopId, shopId), eq(users.id, id)))
       .run();
+  }
+
+  shopName(shopId: number): string {
+    return this.db.select({ name: shops.name }).from(shops).where(eq(shops.id, shopId)).get()?.name ?? '';
   }
 }

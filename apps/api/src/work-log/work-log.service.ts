@@ -6,6 +6,7 @@ import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess } from '../jobs';
+import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import type { StoredTorqueInput } from '../db/schema';
 import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
@@ -16,6 +17,7 @@ const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto =>
   description: w.description,
   partsUsed: w.partsUsed,
   minutes: w.minutes,
+  rateMinor: w.rateMinor ?? null,
   userId: w.userId,
   userName: w.userId ? (staff.get(w.userId) ?? null) : null,
   at: w.at.toISOString(),
@@ -59,6 +61,7 @@ export class WorkLogService {
     private readonly jobs: JobAccess,
     private readonly users: UsersService,
     private readonly audit: AuditService,
+    private readonly shops: ShopsService,
     @Inject(CLOCK) private readonly clock: Clock,
   ) {}
 
@@ -79,10 +82,10 @@ export class WorkLogService {
 
   addWork(actor: AuthUser, jobId: number, input: WorkEntryRequest): WorkEntryDto {
     this.openJob(actor, jobId);
-    const row = this.uow.run(() => {
-      const saved = this.repo.insertWorkEntry({ ...input, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() });
-      return saved;
-    });
+    const { chargeable, ...entry } = input;
+    // The rate is copied in, so a later change of the shop's rate does not re-price logged work.
+    const rateMinor = chargeable ? this.shops.settings(actor.shopId).labourRateMinor : null;
+    const row = this.uow.run(() => this.repo.insertWorkEntry({ ...entry, rateMinor, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() }));
     return toWorkDto(row, this.staff(actor));
   }
 

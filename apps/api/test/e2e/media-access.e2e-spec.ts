@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { binary, bookJob, derivativesSettled, filesUnder, patternBytes, solidJpeg, paddedMp4, CLIP_MP4 } from '../media/media-fixtures';
+import { binary, bookJob, derivativesSettled, patternBytes, solidJpeg, paddedMp4, CLIP_MP4 } from '../media/media-fixtures';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 
 /** A supertest agent indexed by HTTP verb, so one loop can call every route of the table. */
@@ -192,7 +192,7 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
   });
 
   it('serves nothing from uploads/ by a guessable path', async () => {
-    const stored = filesUnder(t.cfg.UPLOADS_DIR);
+    const stored = t.storedFiles();
     expect(stored.length).toBeGreaterThan(0);
     for (const p of stored.slice(0, 5)) {
       for (const url of [`/uploads${p}`, p, `/api/uploads${p}`]) expect((await mech.agent.get(url)).status).toBe(404);
@@ -201,17 +201,17 @@ describe('media serving, ranges, tags, delete/purge and shop isolation', () => {
 
   it('soft-deletes with an audit event, keeps the files, and lets only a manager purge them', async () => {
     const manager = await t.signIn(DEMO.manager);
-    const keysBefore = filesUnder(t.cfg.UPLOADS_DIR).length;
+    const keysBefore = t.storedFiles().length;
     await mech.agent.delete(`/api/jobs/${jobId}/media/${photo.id}`).expect(204);
     expect((await mech.agent.get(`/api/jobs/${jobId}/media`).expect(200)).body.map((a: { id: number }) => a.id)).not.toContain(photo.id);
     await mech.agent.get(`/api/media/${photo.id}/original`).expect(404);
     const listed = (await manager.agent.get(`/api/jobs/${jobId}/media?includeDeleted=true`).expect(200)).body;
     expect(listed.find((a: { id: number }) => a.id === photo.id).deletedAt).toEqual(expect.any(String));
-    expect(filesUnder(t.cfg.UPLOADS_DIR).length).toBe(keysBefore);
+    expect(t.storedFiles().length).toBe(keysBefore);
     expect((await mech.agent.post(`/api/media/${photo.id}/purge`).expect(403)).body.code).toBe('FORBIDDEN');
     expect((await manager.agent.post(`/api/media/${videoAsset.id}/purge`).expect(409)).body.code).toBe('CONFLICT');
     await manager.agent.post(`/api/media/${photo.id}/purge`).expect(204);
-    expect(filesUnder(t.cfg.UPLOADS_DIR).length).toBe(keysBefore - 4);
+    expect(t.storedFiles().length).toBe(keysBefore - 4);
     await manager.agent.get(`/api/media/${photo.id}/original`).expect(404);
     const audit = (await manager.agent.get(`/api/audit?entityType=media_asset&entityId=${photo.id}`).expect(200)).body as { action: string }[];
     expect(audit.map((e) => e.action)).toEqual(expect.arrayContaining(['media.uploaded', 'media.retagged', 'media.deleted', 'media.purged']));

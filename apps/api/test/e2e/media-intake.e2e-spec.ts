@@ -1,8 +1,10 @@
 import { statSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
-import { bookJob, derivativesSettled, filesUnder, solidJpeg } from '../media/media-fixtures';
-import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
+import { bookJob, derivativesSettled, solidJpeg } from '../media/media-fixtures';
+import { Readable } from 'node:stream';
+import { STORAGE, type Storage } from '../../src/infra/storage';
+import { DEMO, ON_S3, startTestApp, type SignedIn, type TestApp } from '../test-app';
 
 /** A PNG header (signature + IHDR with a valid CRC) claiming width × height, with one tiny IDAT. */
 function pngClaiming(width: number, height: number): Buffer {
@@ -47,7 +49,7 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
     mech = await t.signIn(DEMO.mechanic);
     jobId = await bookJob(t);
     await derivativesSettled(t);
-    seeded = filesUnder(t.cfg.UPLOADS_DIR);
+    seeded = t.storedFiles();
   });
   afterAll(() => t.close());
 
@@ -91,7 +93,7 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
   });
 
   it('left no file behind after the refusals, and the server still answers', async () => {
-    expect(filesUnder(t.cfg.UPLOADS_DIR)).toEqual(seeded);
+    expect(t.storedFiles()).toEqual(seeded);
     await t.http().get('/api/health').expect(200);
   });
 
@@ -135,10 +137,17 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
   it('answers 201 when all files are stored; originals are stored by id, read-only, never by the uploaded name', async () => {
     const res = await upload('../../etc/passwd.jpg', await solidJpeg(40, 30)).expect(201);
     expect(res.body.results).toEqual([expect.objectContaining({ ok: true, name: expect.stringContaining('passwd.jpg') })]);
-    const stored = filesUnder(t.cfg.UPLOADS_DIR).filter((f) => f.startsWith('/originals/'));
+    const stored = t.storedFiles().filter((f) => f.startsWith('/originals/'));
     expect(stored.length).toBeGreaterThan(0);
     expect(stored.filter((f) => f.includes('passwd') || !/^\/originals\/\d+\/[0-9a-f-]{36}$/.test(f))).toEqual([]);
-    expect(stored.map((f) => (statSync(join(t.cfg.UPLOADS_DIR, f)).mode & 0o777).toString(8))).toEqual(stored.map(() => '444'));
+    if (ON_S3) {
+      // A bucket has no file modes: a second write of a stored original is refused instead.
+      const key = stored[0].slice(1);
+      await expect(t.app.get<Storage>(STORAGE).put(key, Readable.from([Buffer.from('x')]), { immutable: true })).rejects.toThrow(/never overwritten/);
+      expect((await t.app.get<Storage>(STORAGE).stat(key))?.bytes).toBeGreaterThan(1);
+    } else {
+      expect(stored.map((f) => (statSync(join(t.cfg.UPLOADS_DIR, f)).mode & 0o777).toString(8))).toEqual(stored.map(() => '444'));
+    }
   });
 
   it('validates the tags and cleans up the temp files when they are wrong', async () => {
@@ -149,7 +158,7 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
       .attach('files', await solidJpeg(20, 20), 'x.jpg')
       .expect(400);
     expect(res.body.code).toBe('VALIDATION_FAILED');
-    expect(filesUnder(t.cfg.UPLOADS_DIR).filter((f) => f.startsWith('/tmp/'))).toEqual([]);
+    expect(t.storedFiles().filter((f) => f.startsWith('/tmp/'))).toEqual([]);
   });
 
   it('keeps stills grabbed from a video tied to that video, and refuses a source that is not a video', async () => {
@@ -167,7 +176,7 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
 
   it('answers 404 for a job of another shop, and stores nothing', async () => {
     const other = await t.signIn(DEMO.otherShopMechanic);
-    const before = filesUnder(t.cfg.UPLOADS_DIR).length;
+    const before = t.storedFiles().length;
     const res = await other.agent
       .post(`/api/jobs/${jobId}/media`)
       .field('phase', 'before')
@@ -175,6 +184,6 @@ describe('media intake: the type comes from the bytes, and a refused file leaves
       .attach('files', await solidJpeg(20, 20), 'x.jpg')
       .expect(404);
     expect(res.body.code).toBe('NOT_FOUND');
-    expect(filesUnder(t.cfg.UPLOADS_DIR).length).toBe(before);
+    expect(t.storedFiles().length).toBe(before);
   });
 });

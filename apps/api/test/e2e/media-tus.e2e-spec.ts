@@ -1,20 +1,8 @@
 import { createHash } from 'node:crypto';
 import { request as httpRequest } from 'node:http';
 import { Upload } from 'tus-js-client';
-import { bookJob, CLIP_MP4, filesUnder, paddedMp4, patternBytes } from '../media/media-fixtures';
+import { bookJob, CLIP_MP4, paddedMp4, patternBytes, rawSession, type RawSession as Session } from '../media/media-fixtures';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
-
-interface Session {
-  cookie: string;
-  csrf: string;
-}
-
-/** Signs in over plain HTTP and keeps the raw cookies, as a tus client sends them. */
-async function rawSession(t: TestApp, email: string): Promise<Session> {
-  const res = await t.http().post('/api/auth/login').send({ email, password: 'bench-demo-2026' }).expect(200);
-  const cookies = (res.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]);
-  return { cookie: cookies.join('; '), csrf: res.body.csrfToken as string };
-}
 
 const b64 = (s: string) => Buffer.from(s).toString('base64');
 const tusHeaders = (s: Session) => ({ 'Tus-Resumable': '1.0.0', Cookie: s.cookie, 'x-csrf-token': s.csrf });
@@ -100,7 +88,7 @@ describe('resumable uploads (tus 1.0) for large videos', () => {
     expect(asset.sha256).toBe(createHash('sha256').update(file).digest('hex'));
     const status = (await agent.get(location.pathname).expect(200)).body;
     expect(status).toMatchObject({ assetId, offset: file.length, error: null });
-    expect(filesUnder(t.cfg.UPLOADS_DIR).filter((f) => f.startsWith('/tus/'))).toEqual([]);
+    expect(t.storedFiles().filter((f) => f.startsWith('/tus/'))).toEqual([]);
   });
 
   it('refuses a finished upload that is not media, with the error code, leaving nothing behind', async () => {
@@ -122,7 +110,7 @@ describe('resumable uploads (tus 1.0) for large videos', () => {
       .send(bytes)
       .expect(415);
     expect(JSON.parse(res.text).code).toBe('UNSUPPORTED_MEDIA_TYPE');
-    expect(filesUnder(t.cfg.UPLOADS_DIR).filter((f) => f.startsWith('/tus/'))).toEqual([]);
+    expect(t.storedFiles().filter((f) => f.startsWith('/tus/'))).toEqual([]);
   });
 
   it('checks the session, the CSRF header, the job and the shop', async () => {

@@ -1,4 +1,4 @@
-import { bookJob, CLIP_MP4, CLIP_WEBM, CLIP_WEBM_LIVE, derivativesSettled, filesUnder, junkMp4 } from '../media/media-fixtures';
+import { bookJob, CLIP_MP4, CLIP_WEBM, CLIP_WEBM_LIVE, derivativesSettled, junkMp4 } from '../media/media-fixtures';
 import { DEMO_PASSWORD } from '@benchproof/seeds';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
 
@@ -16,7 +16,7 @@ describe('video intake: a video must be one', () => {
     mech = await t.signIn(DEMO.mechanic);
     jobId = await bookJob(t);
     await derivativesSettled(t);
-    seeded = filesUnder(t.cfg.UPLOADS_DIR);
+    seeded = t.storedFiles();
     const login = await t.http().post('/api/auth/login').send({ email: DEMO.mechanic, password: DEMO_PASSWORD }).expect(200);
     const cookie = (login.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
     tus = { 'Tus-Resumable': '1.0.0', Cookie: cookie, 'x-csrf-token': login.body.csrfToken as string };
@@ -32,14 +32,14 @@ describe('video intake: a video must be one', () => {
     const res = await upload('clip.mp4', junkMp4(20_000)).expect(422);
     expect(res.body).toMatchObject({ code: 'VIDEO_UNREADABLE', message: expect.stringContaining('could not be read') });
     expect(await videosOfJob()).toEqual([]);
-    expect(filesUnder(t.cfg.UPLOADS_DIR)).toEqual(seeded);
+    expect(t.storedFiles()).toEqual(seeded);
   });
 
   it('refuses a WebM header followed by noise (no picture track)', async () => {
     const ebmlHeader = CLIP_WEBM.bytes.subarray(0, 40);
     const res = await upload('clip.webm', Buffer.concat([ebmlHeader, junkMp4(8_000).subarray(24)])).expect(422);
     expect(res.body.code).toBe('VIDEO_UNREADABLE');
-    expect(filesUnder(t.cfg.UPLOADS_DIR)).toEqual(seeded);
+    expect(t.storedFiles()).toEqual(seeded);
   });
 
   it('refuses the same junk over tus with the same JSON error, leaving no partial upload', async () => {
@@ -57,7 +57,7 @@ describe('video intake: a video must be one', () => {
       .expect(422);
     expect(JSON.parse(res.text)).toMatchObject({ code: 'VIDEO_UNREADABLE', details: null });
     expect(await videosOfJob()).toEqual([]);
-    expect(filesUnder(t.cfg.UPLOADS_DIR)).toEqual(seeded);
+    expect(t.storedFiles()).toEqual(seeded);
   });
 
   it.each([

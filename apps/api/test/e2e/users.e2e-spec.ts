@@ -7,22 +7,7 @@ describe('users admin and shop isolation', () => {
   });
   afterAll(() => t.close());
 
-  it('lets a manager add a user who can then sign in', async () => {
-    const { agent } = await t.signIn(DEMO.manager);
-    const res = await agent
-      .post('/api/users')
-      .send({ name: 'Wren Talbot', email: 'wren@lantern-spoke.test', role: 'mechanic', password: 'a-long-password' })
-      .expect(201);
-    expect(res.body).toMatchObject({ name: 'Wren Talbot', role: 'mechanic', active: true });
-    expect(res.body.passwordHash).toBeUndefined();
-    await t.http().post('/api/auth/login').send({ email: 'wren@lantern-spoke.test', password: 'a-long-password' }).expect(200);
-  });
-
-  it('rejects a duplicate e-mail with EMAIL_TAKEN', async () => {
-    const { agent } = await t.signIn(DEMO.manager);
-    const res = await agent.post('/api/users').send({ name: 'Copy', email: DEMO.desk, role: 'desk', password: 'a-long-password' }).expect(409);
-    expect(res.body.code).toBe('EMAIL_TAKEN');
-  });
+  // New staff arrive by invitation and choose their own password: invitations.e2e-spec.ts.
 
   it('will not demote or deactivate the last active manager', async () => {
     const { agent, user } = await t.signIn(DEMO.manager);

@@ -1,13 +1,13 @@
 import { BRAKE_TYPES, CABLE_ROUTINGS, DROPOUT_TYPES, FRAME_MATERIALS } from '@benchproof/domain';
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { MediaDerivativesService } from '../../src/media';
 import { DEMO, type TestApp } from '../test-app';
 
-/** Books a fresh job in the first demo shop through the public API, as the desk would (new customer, new bike). */
-export async function bookJob(t: TestApp): Promise<number> {
-  const { agent } = await t.signIn(DEMO.desk);
+/** Books a fresh job through the public API (the first demo shop's desk unless `as` says otherwise; new customer, new bike). */
+export async function bookJob(t: TestApp, as: string = DEMO.desk): Promise<number> {
+  const { agent } = await t.signIn(as);
   const res = await agent.post('/api/jobs').send({
     newCustomer: { name: 'Media Test Owner', email: 'owner@media.test', phone: null, preferredChannel: 'email', notes: null },
     newBike: {
@@ -34,19 +34,7 @@ export async function bookJob(t: TestApp): Promise<number> {
 /** Waits for the derivative queue to go idle (no timing involved). */
 export const derivativesSettled = (t: TestApp): Promise<void> => t.app.get(MediaDerivativesService).settled();
 
-/** Every regular file under a folder, recursively, as paths relative to it (folders are fine to leave). */
-export function filesUnder(dir: string): string[] {
-  const out: string[] = [];
-  const walk = (d: string) => {
-    for (const name of readdirSync(d)) {
-      const p = join(d, name);
-      if (statSync(p).isDirectory()) walk(p);
-      else out.push(p.slice(dir.length));
-    }
-  };
-  walk(dir);
-  return out;
-}
+export { filesUnder } from '../test-app';
 
 /** A plain JPEG of one colour. */
 export const solidJpeg = (w: number, h: number, colour = '#3a6ea5'): Promise<Buffer> =>
@@ -120,4 +108,16 @@ export function patternBytes(n: number, seed = 1): Buffer {
     out[i] = x >>> 24;
   }
   return out;
+}
+
+export interface RawSession {
+  cookie: string;
+  csrf: string;
+}
+
+/** Signs in over plain HTTP and keeps the raw cookies, as a tus client sends them. */
+export async function rawSession(t: TestApp, email: string): Promise<RawSession> {
+  const res = await t.http().post('/api/auth/login').send({ email, password: 'bench-demo-2026' }).expect(200);
+  const cookies = (res.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]);
+  return { cookie: cookies.join('; '), csrf: res.body.csrfToken as string };
 }

@@ -1,6 +1,6 @@
 import type { ComponentType } from 'react';
 import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
-import { requireAction, requireSession, requireShowcase } from './guards';
+import { redirectToSetup, requireAction, requireSession, requireShowcase } from './guards';
 import { warmJobsList } from './routes/jobs/jobs.loader';
 import { NotFoundRoute } from './routes/errors/not-found.route';
 import { RouteError } from './routes/errors/route-error';
@@ -72,6 +72,14 @@ const signedIn: RouteObject[] = [
     ),
   },
   {
+    path: 'customers/import',
+    loader: requireAction('customers.import'),
+    lazy: page(
+      inFrame((p) => p.customersImport),
+      (m) => m.ImportRoute,
+    ),
+  },
+  {
     path: 'customers/:customerId',
     lazy: page(
       inFrame((p) => p.customer),
@@ -119,9 +127,58 @@ const signedIn: RouteObject[] = [
   { path: '*', element: <NotFoundRoute /> },
 ];
 
+/** Pages reached from e-mailed links or before any account exists (features/auth). */
+const accountPages: RouteObject[] = [
+  {
+    path: '/setup',
+    lazy: page(
+      () => import('./routes/accounts/setup.route'),
+      (m) => m.SetupRoute,
+    ),
+  },
+  {
+    path: '/signup',
+    lazy: page(
+      () => import('./routes/accounts/setup.route'),
+      (m) => m.SignupRoute,
+    ),
+  },
+  {
+    path: '/signup/confirm',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.ConfirmSignupRoute,
+    ),
+  },
+  {
+    path: '/join',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.JoinRoute,
+    ),
+  },
+  {
+    path: '/reset-password',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.ResetPasswordRoute,
+    ),
+  },
+  {
+    path: '/forgot-password',
+    lazy: page(
+      () => import('./routes/accounts/links.route'),
+      (m) => m.ForgotPasswordRoute,
+    ),
+  },
+];
+
 export const routes: RouteObject[] = [
+  ...accountPages.map((r) => ({ ...r, errorElement: <RouteError /> })),
   {
     path: '/sign-in',
+    // A server with no workshop yet opens on its setup screen instead.
+    loader: redirectToSetup,
     lazy: page(
       () => import('./routes/auth/sign-in.route'),
       (m) => m.SignInRoute,

@@ -6,3 +6,4 @@ export { CSRF, issueCsrfToken } from './csrf';
 export { SESSION_COOKIE, CSRF_COOKIE, CSRF_HEADER, sessionCookieOptions } from './session-cookie';
 export { SessionStore } from './session-store';
 export { sessionTokenFrom } from './jwt.strategy';
+export { newLinkToken, hashLinkToken } from './link-token';

@@ -2,11 +2,9 @@ import { Global, Inject, Injectable, Module, type OnApplicationShutdown } from '
 import { Interval } from '@nestjs/schedule';
 import type Database from 'better-sqlite3';
 import { APP_CONFIG, type AppConfig } from '../../config';
-import { DB } from './db.types';
+import { DB, SQLITE } from './db.types';
 import { openDb } from './open-db';
 import { UnitOfWork } from './unit-of-work';
-
-const SQLITE = Symbol('SQLITE');
 
 /** Periodic upkeep of the database, on @nestjs/schedule. */
 @Injectable()
@@ -28,7 +26,7 @@ export class DbMaintenance {
     UnitOfWork,
     DbMaintenance,
   ],
-  exports: [DB, UnitOfWork],
+  exports: [DB, SQLITE, UnitOfWork],
 })
 export class DbModule implements OnApplicationShutdown {
   constructor(@Inject(SQLITE) private readonly opened: { sqlite: Database.Database }) {}

@@ -7,3 +7,6 @@ export type Db = BetterSQLite3Database<typeof schema>;
 export type DbTx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
 export const DB = Symbol('DB');
+
+/** The better-sqlite3 connection itself, for what Drizzle does not wrap (the online backup API). */
+export const SQLITE = Symbol('SQLITE');

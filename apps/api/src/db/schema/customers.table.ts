@@ -17,6 +17,8 @@ export const customers = sqliteTable(
     email: text('email').notNull().default(''),
     phone: text('phone').notNull().default(''),
     notes: text('notes').notNull().default(''),
+    /** The owner replied STOP to a text: no further texts until they opt back in. */
+    smsOptOutAt: timestamp('sms_opt_out_at'),
     preferredChannel: text('preferred_channel').$type<ContactChannel>().notNull().default('email'),
     createdAt: timestamp('created_at').notNull(),
     updatedAt: timestamp('updated_at').notNull(),

@@ -27,3 +27,8 @@ export * from './reports.table';
 export * from './outbox-messages.table';
 export * from './showcase-items.table';
 export * from './showcase-exports.table';
+export * from './account-tokens.table';
+export * from './invitations.table';
+export * from './recovery-codes.table';
+export * from './payments.table';
+export * from './text-messages.table';

@@ -1,7 +1,7 @@
 // Type-only: drizzle-kit loads this file without the workspace libs.
 import type { DerivativeStatus } from '@benchproof/contracts';
 import type { MediaArea, MediaKind, MediaPhase, MediaSource } from '@benchproof/domain';
-import { type AnySQLiteColumn, index, integer, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { type AnySQLiteColumn, index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { jobs } from './jobs.table';
 import { shops } from './shops.table';
@@ -49,6 +49,12 @@ export const mediaAssets = sqliteTable(
     deletedAt: timestamp('deleted_at'),
     deletedBy: integer('deleted_by').references(() => users.id),
     purgedAt: timestamp('purged_at'),
+    /** Id the uploading device made up for this shot (a UUID); the same id again returns this asset. */
+    clientId: text('client_id'),
   },
-  (t) => [index('media_assets_shop_job_idx').on(t.shopId, t.jobId), index('media_assets_status_idx').on(t.derivativeStatus)],
+  (t) => [
+    index('media_assets_shop_job_idx').on(t.shopId, t.jobId),
+    index('media_assets_status_idx').on(t.derivativeStatus),
+    uniqueIndex('media_assets_shop_client_idx').on(t.shopId, t.clientId),
+  ],
 );

@@ -15,6 +15,10 @@ export const shops = sqliteTable('shops', {
   currency: text('currency').notNull().default('EUR'),
   /** How dates are written (a ShopLocale); null: the one that fits the currency. */
   locale: text('locale').$type<ShopLocale>(),
+  /** ISO 3166-1 alpha-2; phone numbers typed without a country code are read as this country's. */
+  country: text('country').notNull().default('GB'),
+  /** Printed on receipts when set (VAT or sales-tax registration). */
+  taxNumber: text('tax_number').notNull().default(''),
   units: text('units').$type<UnitSystem>().notNull().default('metric'),
   pageSize: text('page_size').$type<PageSize>().notNull().default('A4'),
   finalCheckSecondPerson: integer('final_check_second_person', { mode: 'boolean' }).notNull().default(true),
@@ -30,6 +34,8 @@ export const shops = sqliteTable('shops', {
   logoHeight: integer('logo_height'),
   /** Desk staff may open the showcase library (managers always may); off until a manager allows it. */
   showcaseDeskAccess: integer('showcase_desk_access', { mode: 'boolean' }).notNull().default(false),
+  /** Every account of the shop must sign in with a second factor (TOTP). */
+  requireTwoFactor: integer('require_two_factor', { mode: 'boolean' }).notNull().default(false),
   nextJobSeq: integer('next_job_seq').notNull().default(1),
   createdAt: timestamp('created_at').notNull(),
 });

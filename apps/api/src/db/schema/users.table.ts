@@ -17,6 +17,12 @@ export const users = sqliteTable(
     passwordHash: text('password_hash').notNull(),
     active: integer('active', { mode: 'boolean' }).notNull().default(true),
     createdAt: timestamp('created_at').notNull(),
+    /** TOTP secret (base32), sealed with AES-256-GCM under a key derived from the session secret; null = no second factor. */
+    totpSecret: text('totp_secret'),
+    /** Set when enrolment was confirmed with a first code; a secret without it is an unfinished enrolment. */
+    totpEnabledAt: timestamp('totp_enabled_at'),
+    /** The last accepted TOTP time step, so the same code cannot be used twice. */
+    totpLastStep: integer('totp_last_step'),
   },
   (t) => [uniqueIndex('users_email_unique').on(t.email), index('users_shop_idx').on(t.shopId)],
 );

@@ -18,6 +18,8 @@ export const workEntries = sqliteTable(
     description: text('description').notNull(),
     partsUsed: text('parts_used').notNull().default(''),
     minutes: integer('minutes').notNull(),
+    /** Charged to the owner at `rateMinor` per hour (the shop's labour rate when logged); null = not charged. */
+    rateMinor: integer('rate_minor'),
     userId: integer('user_id').references(() => users.id),
     at: timestamp('at').notNull(),
   },

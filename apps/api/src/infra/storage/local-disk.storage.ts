@@ -1,34 +1,10 @@
-import { createHash } from 'node:crypto';
 import { createReadStream, createWriteStream } from 'node:fs';
 import { chmod, mkdir, readdir, rename, rm, stat, unlink } from 'node:fs/promises';
-import { dirname, join, relative, sep } from 'node:path';
-import { type Readable, Transform } from 'node:stream';
+import { dirname, join } from 'node:path';
+import type { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { assertSafeKey, type AdoptOptions, type ByteRange, type PutOptions, type Storage, type StoredObject } from './storage';
-
-/** Streams the bytes through a SHA-256 and a counter on their way to `sink`. */
-function hashing(): { tap: Transform; result: () => { bytes: number; sha256: string } } {
-  const hash = createHash('sha256');
-  let bytes = 0;
-  const tap = new Transform({
-    transform(chunk: Buffer, _enc, done) {
-      hash.update(chunk);
-      bytes += chunk.length;
-      done(null, chunk);
-    },
-  });
-  return { tap, result: () => ({ bytes, sha256: hash.digest('hex') }) };
-}
-
-async function hashFile(path: string): Promise<{ bytes: number; sha256: string }> {
-  const hash = createHash('sha256');
-  let bytes = 0;
-  for await (const chunk of createReadStream(path) as AsyncIterable<Buffer>) {
-    hash.update(chunk);
-    bytes += chunk.length;
-  }
-  return { bytes, sha256: hash.digest('hex') };
-}
+import { hashFile, hashing } from './hashing';
+import { assertSafeKey, type AdoptOptions, type ByteRange, type ListedObject, type PutOptions, type Storage, type StoredObject } from './storage';
 
 /** Media files under one root folder (cfg.UPLOADS_DIR); nothing here is served statically. */
 export class LocalDiskStorage implements Storage {
@@ -85,16 +61,21 @@ export class LocalDiskStorage implements Storage {
     });
   }
 
-  async *listKeys(prefix: string): AsyncIterable<{ key: string; modifiedAt: Date }> {
-    const entries = await readdir(join(this.root, ...prefix.split('/').filter(Boolean)), { recursive: true, withFileTypes: true }).catch(() => []);
-    for (const e of entries) {
-      if (!e.isFile() || e.name.endsWith('.partial')) continue;
-      const path = join(e.parentPath, e.name);
-      const modifiedAt = await stat(path).then(
-        (st) => st.mtime,
-        () => null,
-      );
-      if (modifiedAt) yield { key: relative(this.root, path).split(sep).join('/'), modifiedAt };
-    }
+  async list(prefix: string): Promise<ListedObject[]> {
+    const out: ListedObject[] = [];
+    const walk = async (dir: string, rel: string): Promise<void> => {
+      for (const e of await readdir(dir, { withFileTypes: true }).catch(() => [])) {
+        const key = rel ? `${rel}/${e.name}` : e.name;
+        if (e.isDirectory()) await walk(join(dir, e.name), key);
+        else if (key.startsWith(prefix) && !e.name.endsWith('.partial')) {
+          const st = await stat(join(dir, e.name)).catch(() => null);
+          if (st) out.push({ key, bytes: st.size, modifiedAt: st.mtime });
+        }
+      }
+    };
+    // Only the folder the prefix names is walked (tmp/ and tus/ hold no stored objects).
+    const folder = prefix.includes('/') ? prefix.slice(0, prefix.lastIndexOf('/')) : '';
+    await walk(join(this.root, ...folder.split('/').filter(Boolean)), folder);
+    return out.sort((a, b) => a.key.localeCompare(b.key));
   }
 }

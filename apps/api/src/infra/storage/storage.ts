@@ -13,6 +13,12 @@ export interface ByteRange {
   end: number;
 }
 
+export interface ListedObject {
+  key: string;
+  bytes: number;
+  modifiedAt: Date;
+}
+
 export interface PutOptions {
   /** Originals are written once and then made read-only. */
   immutable?: boolean;
@@ -26,7 +32,8 @@ export interface AdoptOptions extends PutOptions {
 /**
  * Where media files live. Keys are opaque, built by the caller from ids only (never
  * from an uploaded file name). The local-disk implementation is the default; an
- * S3-compatible one can implement the same four calls.
+ * S3-compatible one (`STORAGE=s3`) implements the same calls. Reads are streams that
+ * may start anywhere: `createReadStream(key, range)` is how HTTP Range answers are served.
  */
 export interface Storage {
   put(key: string, source: Readable, opts?: PutOptions): Promise<StoredObject>;
@@ -38,8 +45,8 @@ export interface Storage {
   createReadStream(key: string, range?: ByteRange): Readable;
   stat(key: string): Promise<{ bytes: number } | null>;
   delete(key: string): Promise<void>;
-  /** Stored keys under a prefix with their last change, for the sweep of originals no row names (optional for a remote store). */
-  listKeys?(prefix: string): AsyncIterable<{ key: string; modifiedAt: Date }>;
+  /** Stored objects whose key starts with `prefix`, by key, with size and last change (backups, their retention, the sweep of originals no row names). */
+  list(prefix: string): Promise<ListedObject[]>;
 }
 
 export const STORAGE = Symbol('STORAGE');

@@ -13,6 +13,8 @@ export type TaskPayloads = {
   'media.derivatives': NoPayload;
   /** key = asset id: perceptual hash of a still for pair suggestions (media). */
   'media.phash': NoPayload;
+  /** key `slot-<n>`: the scheduled database backup of BACKUP_EVERY_HOURS, then retention (backups). */
+  'backup.run': NoPayload;
   /** key `<assetId>:v<version>`: burn an annotation version into its screen and print JPEGs (annotations). */
   'annotation.render': { assetId: number; version: number };
   /** key = report id: lay out the frozen snapshot as a PDF (reports). */
@@ -29,6 +31,7 @@ export const TASK_KINDS = Object.keys({
   'mail.send': 1,
   'media.derivatives': 1,
   'media.phash': 1,
+  'backup.run': 1,
   'annotation.render': 1,
   'report.render': 1,
   'showcase.export': 1,

@@ -17,6 +17,7 @@ export const pages = {
   annotate: () => import('../routes/jobs/annotate.route'),
   scope: () => import('../routes/jobs/scope.route'),
   customers: () => import('../routes/customers/customers.route'),
+  customersImport: () => import('../routes/customers/import.route'),
   customer: () => import('../routes/customers/customer.route'),
   bike: () => import('../routes/bikes/bike.route'),
   showcase: () => import('../routes/showcase/showcase.route'),

@@ -1,3 +1,4 @@
 export { usersQuery, useUsers } from './api/users';
-export { AddUserForm } from './components/add-user-form';
+export { InviteForm } from './components/invite-form';
+export { InvitationsList } from './components/invitations-list';
 export { UsersTable } from './components/users-table';

@@ -1,7 +1,7 @@
 import { Button, Modal } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconUserPlus } from '@tabler/icons-react';
-import { useNavigate } from 'react-router';
+import { IconTableImport, IconUserPlus } from '@tabler/icons-react';
+import { Link, useNavigate } from 'react-router';
 import { PageHeader } from '../../../components/page-header';
 import { useCan } from '../../../features/auth';
 import { CustomerForm, CustomersTable } from '../../../features/customers';
@@ -9,18 +9,26 @@ import { CustomerForm, CustomersTable } from '../../../features/customers';
 export function CustomersRoute() {
   const [opened, { open, close }] = useDisclosure();
   const navigate = useNavigate();
-  const canEdit = useCan()('customers.edit');
+  const can = useCan();
+  const canEdit = can('customers.edit');
   return (
     <>
       <PageHeader
         title="Customers & bikes"
         subtitle="Owners, their bikes, and each bike's history."
         actions={
-          canEdit && (
-            <Button size="lg" leftSection={<IconUserPlus />} onClick={open}>
-              Add customer
-            </Button>
-          )
+          <>
+            {can('customers.import') && (
+              <Button size="lg" variant="default" leftSection={<IconTableImport />} component={Link} to="/customers/import">
+                Import from a spreadsheet
+              </Button>
+            )}
+            {canEdit && (
+              <Button size="lg" leftSection={<IconUserPlus />} onClick={open}>
+                Add customer
+              </Button>
+            )}
+          </>
         }
       />
       <CustomersTable />

@@ -21,6 +21,7 @@ export const JOB_SECTIONS = [
   { value: 'report', label: 'Report' },
   { value: 'owner', label: 'Owner link' },
   { value: 'messages', label: 'E-mails' },
+  { value: 'payment', label: 'Payment' },
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
 
@@ -37,6 +38,7 @@ const LAZY: Record<Exclude<JobSection, 'intake'>, ComponentType<SectionProps>> =
   report: lazy(() => import('./sections/report-section')),
   owner: lazy(() => import('./sections/owner-section')),
   messages: lazy(() => import('./sections/messages-section')),
+  payment: lazy(() => import('./sections/payment-section')),
 };
 
 /** One section of the job page; each comes from its own feature. */

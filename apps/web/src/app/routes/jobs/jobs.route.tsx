@@ -5,6 +5,7 @@ import { Link, useSearchParams } from 'react-router';
 import { PageHeader } from '../../../components/page-header';
 import { useCan, useSession } from '../../../features/auth';
 import { JobsTable } from '../../../features/jobs';
+import { useShopSettings } from '../../../features/shop-settings';
 import { useStaff } from '../staff';
 
 /** Why a page sent the user here (guards.ts adds `?denied=<action>`): who may open it. */
@@ -36,6 +37,7 @@ function DeniedNotice() {
 export function JobsRoute() {
   const { mechanics } = useStaff();
   const canBook = useCan()('jobs.book_in');
+  const currency = useShopSettings().data?.currency;
   return (
     <>
       <PageHeader
@@ -50,7 +52,7 @@ export function JobsRoute() {
         }
       />
       <DeniedNotice />
-      <JobsTable mechanics={mechanics} />
+      <JobsTable mechanics={mechanics} currency={currency} />
     </>
   );
 }

@@ -1,4 +1,4 @@
-import type { ChangePasswordRequest, LoginRequest, LoginResponse, SessionResponse } from '@benchproof/contracts';
+import type { ChangePasswordRequest, LoginRequest, LoginResponse, SessionResponse, SignInStep } from '@benchproof/contracts';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, ApiError, setCsrfToken } from '../../../lib/api-client';
 
@@ -31,8 +31,10 @@ export const useSession = () => useQuery(sessionQuery);
 export function useLogin() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: LoginRequest) => api<LoginResponse>('/auth/login', { method: 'POST', body, quietAuth: true }),
+    mutationFn: (body: LoginRequest) => api<SignInStep>('/auth/login', { method: 'POST', body, quietAuth: true }),
     onSuccess: (res) => {
+      // With a second factor the password only earns a challenge; SecondStep finishes the sign-in.
+      if (res.step !== 'done') return;
       setCsrfToken(res.csrfToken);
       qc.clear();
       qc.setQueryData(sessionKey, res.user);

@@ -1,10 +1,14 @@
-import type { LoginRequest } from '@benchproof/contracts';
-import { Alert, Button, PasswordInput, Stack, TextInput } from '@mantine/core';
+import type { LoginRequest, SignInStep } from '@benchproof/contracts';
+import { Alert, Anchor, Button, PasswordInput, Stack, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertTriangle, IconLogin } from '@tabler/icons-react';
-import type { FormEvent } from 'react';
+import { lazy, Suspense, useState, type FormEvent } from 'react';
+import { Link } from 'react-router';
 import { ApiError } from '../../../lib/api-client';
 import { useLogin } from '../api/session';
+
+/** The second step loads only for accounts that need it, keeping the sign-in screen's first load small. */
+const SecondStep = lazy(() => import('./second-step').then((m) => ({ default: m.SecondStep })));
 
 let check: Promise<((values: LoginRequest) => Record<string, string>) | null> | null = null;
 /** Starts fetching the contract check once; resolves to null offline (the api validates with the same schema). */
@@ -16,6 +20,7 @@ const loadCheck = () =>
 
 export function SignInForm({ onSignedIn, notice }: { onSignedIn: () => void; notice?: string | null }) {
   const login = useLogin();
+  const [challenge, setChallenge] = useState<Extract<SignInStep, { step: 'code' | 'enrol' }> | null>(null);
   const form = useForm<LoginRequest>({ initialValues: { email: '', password: '' } });
   const error = login.error instanceof ApiError ? login.error.message : login.error ? 'Sign-in failed.' : null;
   const submit = async (e: FormEvent) => {
@@ -23,8 +28,15 @@ export function SignInForm({ onSignedIn, notice }: { onSignedIn: () => void; not
     const values = form.getValues();
     const errors = (await loadCheck())?.(values) ?? {};
     form.setErrors(errors);
-    if (Object.keys(errors).length === 0) login.mutate(values, { onSuccess: onSignedIn });
+    if (Object.keys(errors).length === 0) login.mutate(values, { onSuccess: (res) => (res.step === 'done' ? onSignedIn() : setChallenge(res)) });
   };
+
+  if (challenge)
+    return (
+      <Suspense fallback={null}>
+        <SecondStep challenge={challenge} onSignedIn={onSignedIn} />
+      </Suspense>
+    );
 
   return (
     <form onSubmit={(e) => void submit(e)} onFocus={() => void loadCheck()} noValidate>
@@ -44,6 +56,9 @@ export function SignInForm({ onSignedIn, notice }: { onSignedIn: () => void; not
         <Button type="submit" size="lg" loading={login.isPending} leftSection={<IconLogin />}>
           Sign in
         </Button>
+        <Anchor component={Link} to="/forgot-password" ta="center" py="xs">
+          Forgot your password?
+        </Anchor>
       </Stack>
     </form>
   );

@@ -2,13 +2,14 @@ import type { JobDto } from '@benchproof/contracts';
 import { Card, Group, Stack, Text, UnstyledButton } from '@mantine/core';
 import { IconChevronRight } from '@tabler/icons-react';
 import { Link } from 'react-router';
+import { formatMoney } from '@benchproof/domain';
 import { jobBikeLabel } from './job-label';
 import { JobStatusBadge } from './job-status-badge';
 import { PromisedDate } from './promised-date';
 import classes from './jobs.module.css';
 
 /** The jobs list on a phone: one big tappable card per job. */
-export function JobCards({ jobs }: { jobs: JobDto[] }) {
+export function JobCards({ jobs, currency }: { jobs: JobDto[]; currency: string }) {
   return (
     <Stack gap="sm">
       {jobs.map((job) => (
@@ -27,6 +28,11 @@ export function JobCards({ jobs }: { jobs: JobDto[] }) {
                   {job.customer.name} · {job.mechanic?.name ?? 'No mechanic yet'}
                 </Text>
                 <PromisedDate promisedOn={job.promisedOn} overdue={job.overdue} />
+                {job.dueMinor !== null && job.dueMinor > 0 && (
+                  <Text size="sm" fw={600}>
+                    Due {formatMoney(job.dueMinor, currency)}
+                  </Text>
+                )}
               </Stack>
               <IconChevronRight aria-hidden />
             </Group>

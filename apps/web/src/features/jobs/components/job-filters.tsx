@@ -106,7 +106,9 @@ function PromisedRange({ from, to, update }: { from: string; to: string; update:
 
 /** Status chips, mechanic, promised range and free text for the jobs table. */
 export function JobFilters({ params, includeClosed, update, mechanics }: Props) {
-  const active = Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed);
+  const active = Boolean(
+    params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed || params.readyUnpaid,
+  );
   const byStatus = Boolean(params.status?.length);
   return (
     <Stack gap="sm" mb="md">
@@ -114,6 +116,9 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
       <Group gap="sm">
         <FilterToggle on={includeClosed || byStatus} disabled={byStatus} onClick={() => update({ closed: includeClosed ? null : '1' })}>
           Include collected and cancelled jobs
+        </FilterToggle>
+        <FilterToggle on={!!params.readyUnpaid} onClick={() => update({ unpaid: params.readyUnpaid ? null : '1' })}>
+          Ready, unpaid
         </FilterToggle>
         <Text size="sm" c="dimmed">
           {byStatus ? 'The chosen statuses decide which jobs are listed.' : 'Off: only jobs still in the workshop.'}
@@ -135,7 +140,7 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
           <Button
             variant="subtle"
             leftSection={<IconX size={18} />}
-            onClick={() => update({ q: null, status: [], mechanicId: null, promisedAfter: null, promisedBefore: null, closed: null })}
+            onClick={() => update({ q: null, status: [], mechanicId: null, promisedAfter: null, promisedBefore: null, closed: null, unpaid: null })}
           >
             Clear filters
           </Button>

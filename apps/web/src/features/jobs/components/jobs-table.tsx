@@ -1,4 +1,5 @@
 import type { JobDto, JobListQuery } from '@benchproof/contracts';
+import { formatMoney } from '@benchproof/domain';
 import { Box, Group, NativeSelect, Text, UnstyledButton } from '@mantine/core';
 import { IconArrowDown, IconArrowUp, IconSelector } from '@tabler/icons-react';
 import type { ReactNode } from 'react';
@@ -43,7 +44,11 @@ function SortHeader({ field, sort, onSort, children }: { field: SortField; sort:
   );
 }
 
-function JobRow({ job }: { job: JobDto }) {
+/** Money still due, or a dash; a row with nothing charged yet shows nothing. */
+const dueLabel = (due: number | null, currency: string): string =>
+  due && due > 0 ? formatMoney(due, currency) : due !== null && due < 0 ? `${formatMoney(-due, currency)} to refund` : '—';
+
+function JobRow({ job, currency }: { job: JobDto; currency: string }) {
   const navigate = useNavigate();
   return (
     <tr className={job.overdue ? classes.overdueRow : undefined} onClick={() => void navigate(`/jobs/${job.id}`)} style={{ cursor: 'pointer' }}>
@@ -69,11 +74,14 @@ function JobRow({ job }: { job: JobDto }) {
       <td>
         <PromisedDate promisedOn={job.promisedOn} overdue={job.overdue} />
       </td>
+      <td>
+        <Text size="sm">{dueLabel(job.dueMinor, currency)}</Text>
+      </td>
     </tr>
   );
 }
 
-function DesktopTable({ jobs, sort, onSort }: { jobs: JobDto[]; sort: Sort; onSort: (s: Sort) => void }) {
+function DesktopTable({ jobs, sort, onSort, currency }: { jobs: JobDto[]; sort: Sort; onSort: (s: Sort) => void; currency: string }) {
   return (
     // Plain table markup styled like Mantine's Table (jobs.module.css): Mantine's Table always brings its ScrollArea.
     <div className={classes.tableScroll}>
@@ -91,11 +99,12 @@ function DesktopTable({ jobs, sort, onSort }: { jobs: JobDto[]; sort: Sort; onSo
             <SortHeader field="promisedOn" sort={sort} onSort={onSort}>
               Promised
             </SortHeader>
+            <th>Due</th>
           </tr>
         </thead>
         <tbody>
           {jobs.map((j) => (
-            <JobRow key={j.id} job={j} />
+            <JobRow key={j.id} job={j} currency={currency} />
           ))}
         </tbody>
       </table>
@@ -104,7 +113,7 @@ function DesktopTable({ jobs, sort, onSort }: { jobs: JobDto[]; sort: Sort; onSo
 }
 
 /** The jobs table: filters in the address bar, paging and sort on the server, cards on phones. */
-export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE }: { mechanics: Option[]; pageSize?: number }) {
+export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE, currency = 'EUR' }: { mechanics: Option[]; pageSize?: number; currency?: string }) {
   const { params, includeClosed, update } = useJobListParams(pageSize);
   const jobs = useJobs(params);
   const data = jobs.data;
@@ -139,10 +148,10 @@ export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE }: { mechanics:
             />
           </Group>
           <Box visibleFrom="sm">
-            <DesktopTable jobs={data.items} sort={sort} onSort={onSort} />
+            <DesktopTable jobs={data.items} sort={sort} onSort={onSort} currency={currency} />
           </Box>
           <Box hiddenFrom="sm">
-            <JobCards jobs={data.items} />
+            <JobCards jobs={data.items} currency={currency} />
           </Box>
           {pages > 1 && (
             <Box mt="md">

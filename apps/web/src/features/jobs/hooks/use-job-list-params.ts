@@ -9,7 +9,7 @@ const isSortField = (v: string | null): v is SortField => (JOB_SORT_FIELDS as re
 /** Jobs per page of the list. */
 export const JOBS_PAGE_SIZE = 20;
 
-type Key = 'q' | 'mechanicId' | 'promisedAfter' | 'promisedBefore' | 'sort' | 'order' | 'page' | 'closed';
+type Key = 'q' | 'mechanicId' | 'promisedAfter' | 'promisedBefore' | 'sort' | 'order' | 'page' | 'closed' | 'unpaid';
 
 /** The list request the address bar asks for; the jobs route's loader warms the cache with the same key. */
 export function jobListParams(search: URLSearchParams, pageSize: number = JOBS_PAGE_SIZE): JobListParams {
@@ -23,6 +23,7 @@ export function jobListParams(search: URLSearchParams, pageSize: number = JOBS_P
     mechanicId: Number(search.get('mechanicId')) || undefined,
     promisedAfter: search.get('promisedAfter') ?? undefined,
     promisedBefore: search.get('promisedBefore') ?? undefined,
+    readyUnpaid: search.get('unpaid') === '1' ? true : undefined,
     sort: isSortField(sort) ? sort : 'promisedOn',
     order: search.get('order') === 'desc' ? 'desc' : 'asc',
     page: Number(search.get('page')) || 1,

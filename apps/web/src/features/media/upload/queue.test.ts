@@ -1,3 +1,5 @@
+import { UploadMetaSchema } from '@benchproof/contracts';
+import { tagFields } from './transports';
 import { backoffMs, MAX_AUTO_ATTEMPTS, needsRetag, newItem, nextRetryAt, nextToStart, queueReducer, transportFor, type QueueItem } from './queue';
 
 const tags = { phase: 'before', area: 'brakes', caption: '' } as const;
@@ -7,6 +9,16 @@ const fail = (items: QueueItem[], id: string, retryable: boolean, now = 1000) =>
   queueReducer(items, { type: 'failed', id, message: 'No connection', retryable, now });
 
 describe('upload queue', () => {
+  it('gives every shot its own client id, sent with its tags on every attempt, which the API schema accepts', () => {
+    const items = make(50);
+    expect(new Set(items.map((i) => i.clientId)).size).toBe(50);
+    // RFC 9562 version 4 layout: version nibble 4, variant bits 10xx.
+    for (const i of items) expect(i.clientId).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
+    const retried = queueReducer(fail(items, items[0].id, true), { type: 'retryNow' })[0];
+    expect(tagFields(retried).clientId).toBe(items[0].clientId);
+    expect(UploadMetaSchema.parse(tagFields(retried)).clientId).toBe(items[0].clientId);
+  });
+
   it('starts at most the parallel limit and queues the rest', () => {
     let items = queueReducer([], { type: 'add', items: make(3) });
     expect(nextToStart(items, 2)).toHaveLength(2);

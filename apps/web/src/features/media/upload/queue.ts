@@ -12,6 +12,8 @@ export type ShotStatus = 'queued' | 'uploading' | 'paused' | 'waiting_retry' | '
 
 export interface QueueItem {
   id: string;
+  /** UUID sent with every attempt: the server answers a repeat with the asset it already stored, so a retry never doubles a shot. */
+  clientId: string;
   jobId: number;
   file: File;
   transport: Transport;
@@ -66,11 +68,37 @@ export function transportFor(file: File): Transport {
   return file.type.startsWith('video/') || file.size > TUS_THRESHOLD_BYTES ? 'tus' : 'form';
 }
 
+/**
+ * A random (version 4) UUID, RFC 9562 §5.4. `crypto.randomUUID` exists only in secure contexts, and the
+ * workshop server may be opened over plain http on the shop's network; `getRandomValues` works in both.
+ */
+export function newClientId(): string {
+  const b = crypto.getRandomValues(new Uint8Array(16));
+  b[6] = (b[6] & 0x0f) | 0x40;
+  b[8] = (b[8] & 0x3f) | 0x80;
+  const hex = Array.from(b, (x) => x.toString(16).padStart(2, '0')).join('');
+  return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
+}
+
+/** The state of a shot nothing has been sent of yet, as far as this page knows. */
+export const NOT_SENT = {
+  savedTags: null,
+  status: 'queued',
+  progress: 0,
+  attempts: 0,
+  retryAt: null,
+  error: null,
+  errorCode: null,
+  assetId: null,
+  selected: false,
+} as const satisfies Partial<QueueItem>;
+
 let seq = 0;
 export function newItem(jobId: number, file: File, tags: ShotTags, extra: Partial<Pick<QueueItem, 'source' | 'sourceAssetId' | 'timecodeMs'>> = {}): QueueItem {
   seq += 1;
   return {
     id: `shot-${Date.now().toString(36)}-${seq}`,
+    clientId: newClientId(),
     jobId,
     file,
     transport: transportFor(file),
@@ -78,15 +106,7 @@ export function newItem(jobId: number, file: File, tags: ShotTags, extra: Partia
     sourceAssetId: extra.sourceAssetId,
     timecodeMs: extra.timecodeMs,
     tags,
-    savedTags: null,
-    status: 'queued',
-    progress: 0,
-    attempts: 0,
-    retryAt: null,
-    error: null,
-    errorCode: null,
-    assetId: null,
-    selected: false,
+    ...NOT_SENT,
   };
 }
 

@@ -13,8 +13,15 @@ export interface Transfer {
 
 const OFFLINE = 'No connection to the workshop server. The shot is kept and will be sent again.';
 
-function tagFields(item: QueueItem): Record<string, string> {
-  const fields: Record<string, string> = { phase: item.tags.phase, area: item.tags.area, source: item.source, caption: item.tags.caption };
+/** Form fields (multipart) and Upload-Metadata (tus) of one shot: its tags and its client id. */
+export function tagFields(item: QueueItem): Record<string, string> {
+  const fields: Record<string, string> = {
+    phase: item.tags.phase,
+    area: item.tags.area,
+    source: item.source,
+    caption: item.tags.caption,
+    clientId: item.clientId,
+  };
   if (item.sourceAssetId !== undefined) fields.sourceAssetId = String(item.sourceAssetId);
   if (item.timecodeMs !== undefined) fields.timecodeMs = String(item.timecodeMs);
   return fields;

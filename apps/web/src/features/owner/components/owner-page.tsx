@@ -1,7 +1,7 @@
 import type { OwnerFinding } from '@benchproof/contracts';
 import { formatMoney, TERMINAL_STATUSES } from '@benchproof/domain';
 import { Alert, Button, Center, Group, Loader, Skeleton, Stack, Text, Title } from '@mantine/core';
-import { Suspense, useState } from 'react';
+import { Suspense, useState, type ReactNode } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useOwnerPage } from '../api/owner-page';
 import { Deferred } from './deferred';
@@ -14,7 +14,7 @@ import { useChoices, type Choice } from './use-choices';
 import { DatesLocale } from '../../../lib/dates';
 
 /** The owner's private page for one job, phone-first: evidence, decisions, consent. */
-export function OwnerPage({ token }: { token: string }) {
+export function OwnerPage({ token, payment }: { token: string; payment?: ReactNode }) {
   const page = useOwnerPage(token);
   if (page.error) {
     const e = page.error instanceof ApiError ? page.error : new ApiError(0, 'NETWORK', 'No connection.');
@@ -28,7 +28,7 @@ export function OwnerPage({ token }: { token: string }) {
     );
   return (
     <DatesLocale locale={page.data.shop.dateLocale}>
-      <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} />
+      <OwnerPageBody token={token} page={page.data} refetch={() => void page.refetch()} payment={payment} />
     </DatesLocale>
   );
 }
@@ -91,6 +91,7 @@ function AnswerBar({ answered, pending, approved, onConfirm }: { answered: numbe
 }
 
 type Choices = ReturnType<typeof useChoices>;
+type BodyProps = { token: string; page: OwnerPageData; refetch: () => void; payment?: ReactNode };
 
 /**
  * The confirm dialog, whose code loads when the owner makes a first choice (so Confirm opens at once) and
@@ -141,7 +142,8 @@ const ThanksNote = () => (
   </Text>
 );
 
-function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPageData; refetch: () => void }) {
+/** `payment`: the payments feature's card (amount due, pay button, "paid"), handed in by the route. */
+function OwnerPageBody({ token, page, refetch, payment }: BodyProps) {
   const closed = (TERMINAL_STATUSES as readonly string[]).includes(page.job.status);
   const c = useChoices(page.findings);
   const [confirming, setConfirming] = useState(false);
@@ -155,6 +157,7 @@ function OwnerPageBody({ token, page, refetch }: { token: string; page: OwnerPag
       <Stack gap="lg">
         <BikeAndJob page={page} />
         {closed && <ClosedNotice status={page.job.status} />}
+        {payment}
         {sent && <ThanksNote />}
         {page.findings.length > 0 && <FindingsToDecide findings={page.findings} choices={c.choices} onChoose={choose} closed={closed} />}
         <Measurements page={page} />

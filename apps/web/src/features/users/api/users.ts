@@ -1,4 +1,4 @@
-import type { CreateUserRequest, UpdateUserRequest, UserDto } from '@benchproof/contracts';
+import type { InvitationDto, InviteRequest, UpdateUserRequest, UserDto } from '@benchproof/contracts';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 
@@ -6,13 +6,20 @@ export const usersQuery = queryOptions({ queryKey: ['users'], queryFn: () => api
 
 export const useUsers = () => useQuery(usersQuery);
 
-export function useCreateUser() {
+export const invitationsQuery = queryOptions({ queryKey: ['invitations'], queryFn: () => api<InvitationDto[]>('/invitations') });
+
+export const useInvitations = () => useQuery(invitationsQuery);
+
+function useInvitationChange<V>(call: (v: V) => Promise<unknown>) {
   const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (body: CreateUserRequest) => api<UserDto>('/users', { method: 'POST', body }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: usersQuery.queryKey }),
-  });
+  return useMutation({ mutationFn: call, onSuccess: () => qc.invalidateQueries({ queryKey: invitationsQuery.queryKey }) });
 }
+
+export const useInvite = () => useInvitationChange((body: InviteRequest) => api<InvitationDto>('/invitations', { method: 'POST', body }));
+export const useResendInvitation = () => useInvitationChange((id: number) => api<InvitationDto>(`/invitations/${id}/resend`, { method: 'POST' }));
+export const useWithdrawInvitation = () => useInvitationChange((id: number) => api<void>(`/invitations/${id}`, { method: 'DELETE' }));
+
+export const useSendResetLink = () => useMutation({ mutationFn: (id: number) => api<{ message: string }>(`/users/${id}/password-link`, { method: 'POST' }) });
 
 export function useUpdateUser() {
   const qc = useQueryClient();

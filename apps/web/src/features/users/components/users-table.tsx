@@ -2,7 +2,7 @@ import { ROLE_LABELS, ROLES, type Role, type UserDto } from '@benchproof/contrac
 import { Alert, Badge, Button, Group, Select, Table, Text } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
 import { ApiError } from '../../../lib/api-client';
-import { useUpdateUser, useUsers } from '../api/users';
+import { useSendResetLink, useUpdateUser, useUsers } from '../api/users';
 
 const roleOptions = ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }));
 
@@ -38,7 +38,8 @@ function UserRow({ user, me }: { user: UserDto; me: number }) {
       </Table.Td>
       <Table.Td>{user.active ? <Badge color="bench">Active</Badge> : <Badge color="gray">Deactivated</Badge>}</Table.Td>
       <Table.Td>
-        <Group justify="flex-end">
+        <Group justify="flex-end" gap="xs">
+          {user.active && user.id !== me && <ResetLinkButton user={user} />}
           <Button
             variant="light"
             color={user.active ? 'red' : 'bench'}
@@ -50,6 +51,17 @@ function UserRow({ user, me }: { user: UserDto; me: number }) {
         </Group>
       </Table.Td>
     </Table.Tr>
+  );
+}
+
+/** Mails the person a link to choose a new password; nobody sees or types it for them. */
+function ResetLinkButton({ user }: { user: UserDto }) {
+  const send = useSendResetLink();
+  const done = () => notifications.show({ color: 'teal', title: 'Link sent', message: `${user.name} can now choose a new password from their e-mail.` });
+  return (
+    <Button variant="default" loading={send.isPending} onClick={() => send.mutate(user.id, { onSuccess: done })}>
+      Send password link
+    </Button>
   );
 }
 

@@ -1,5 +1,5 @@
 import { WorkEntryRequestSchema, type WorkEntryRequest } from '@benchproof/contracts';
-import { Alert, Button, Card, Group, NumberInput, Stack, Text, Textarea, Title } from '@mantine/core';
+import { Alert, Button, Card, Checkbox, Group, NumberInput, Stack, Text, Textarea, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { QueryState } from '../../../components/query-state';
 import { contractResolver, formFailure, showServerFieldErrors } from '../../../lib/form';
@@ -9,7 +9,7 @@ import { useDates } from '../../../lib/dates';
 function WorkEntryForm({ jobId }: { jobId: number }) {
   const add = useAddWorkEntry(jobId);
   const form = useForm<WorkEntryRequest>({
-    initialValues: { description: '', partsUsed: '', minutes: 15 },
+    initialValues: { description: '', partsUsed: '', minutes: 15, chargeable: false },
     validate: contractResolver(WorkEntryRequestSchema, (v: WorkEntryRequest) => v),
   });
   const submit = form.onSubmit((v) => add.mutate(v, { onSuccess: () => form.reset(), onError: (e) => showServerFieldErrors(form, e) }));
@@ -20,6 +20,7 @@ function WorkEntryForm({ jobId }: { jobId: number }) {
         <Textarea label="What was done" autosize minRows={2} withAsterisk {...form.getInputProps('description')} />
         <Textarea label="Parts used" autosize minRows={1} {...form.getInputProps('partsUsed')} />
         <NumberInput label="Minutes" inputMode="numeric" min={0} max={1440} step={5} allowDecimal={false} size="lg" {...form.getInputProps('minutes')} />
+        <Checkbox size="md" label="Charge this time to the owner (shop labour rate)" {...form.getInputProps('chargeable', { type: 'checkbox' })} />
         {failure && <Alert color="red">{failure}</Alert>}
         <Button type="submit" size="lg" loading={add.isPending}>
           Log work
@@ -48,7 +49,7 @@ export function WorkEntries({ jobId, canRecord = true }: { jobId: number; canRec
           <Text style={{ whiteSpace: 'pre-wrap' }}>{e.description}</Text>
           {e.partsUsed && <Text size="sm">Parts: {e.partsUsed}</Text>}
           <Text size="xs" c="dimmed">
-            {e.minutes} min · {e.userName ?? 'someone'} · {dates.dateTime(e.at)}
+            {e.minutes} min{e.rateMinor !== null ? ' · charged' : ''} · {e.userName ?? 'someone'} · {dates.dateTime(e.at)}
           </Text>
         </Card>
       ))}

@@ -1,0 +1,1 @@
+export { DataExportModule } from './data-export.module';

@@ -1,0 +1,1 @@
+export { InvitationsModule } from './invitations.module';

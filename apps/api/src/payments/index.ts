@@ -1,0 +1,3 @@
+export { PaymentsModule } from './payments.module';
+export { PaymentsService } from './payments.service';
+export { BalanceService } from './balance.service';

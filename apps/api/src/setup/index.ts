@@ -1,0 +1,2 @@
+export { SetupModule } from './setup.module';
+export { SetupCode } from './setup-code';

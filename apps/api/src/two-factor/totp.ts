@@ -1,0 +1,57 @@
+import { generateSecret, generateSync, generateURI, verifySync } from 'otplib';
+import { createCipheriv, createDecipheriv, createHash, createHmac, randomBytes } from 'node:crypto';
+
+/**
+ * TOTP as RFC 6238 describes it with the values authenticator apps expect: HMAC-SHA-1, 6 digits,
+ * 30-second steps from the Unix epoch (RFC 6238 §4 defaults). otplib does the arithmetic; the RFC's
+ * Appendix B vectors check it in totp.spec.ts.
+ */
+export const TOTP_DIGITS = 6;
+export const TOTP_PERIOD_SECONDS = 30;
+/** One step either side: a phone clock a little off still works (RFC 6238 §5.2 recommends at most one step back). */
+export const TOTP_TOLERANCE_SECONDS = 30;
+
+export const newTotpSecret = (): string => generateSecret();
+
+export const totpUri = (secret: string, account: string, issuer: string): string => generateURI({ secret, label: account, issuer });
+
+/** The code for a moment (tests and the enrolment screen's check). */
+export const totpAt = (secret: string, epochSeconds: number): string => generateSync({ secret, epoch: epochSeconds });
+
+/** The time step a code belongs to when it is valid now (±1 step), else null. */
+export function totpStep(secret: string, code: string, epochSeconds: number): number | null {
+  if (!/^\d{6}$/.test(code)) return null;
+  const res = verifySync({ secret, token: code, epoch: epochSeconds, epochTolerance: TOTP_TOLERANCE_SECONDS });
+  return res.valid ? (res as { timeStep: number }).timeStep : null;
+}
+
+/** AES-256-GCM with a key derived (HMAC) from the server secret, so a copied database holds no usable TOTP secrets. */
+export function sealSecret(serverSecret: string, plain: string): string {
+  const iv = randomBytes(12);
+  const cipher = createCipheriv('aes-256-gcm', sealKey(serverSecret), iv);
+  const body = Buffer.concat([cipher.update(plain, 'utf8'), cipher.final()]);
+  return ['v1', iv.toString('base64url'), cipher.getAuthTag().toString('base64url'), body.toString('base64url')].join('.');
+}
+
+export function openSecret(serverSecret: string, sealed: string): string {
+  const [v, iv, tag, body] = sealed.split('.');
+  if (v !== 'v1' || !iv || !tag || !body) throw new Error('Unreadable TOTP secret');
+  const decipher = createDecipheriv('aes-256-gcm', sealKey(serverSecret), Buffer.from(iv, 'base64url'));
+  decipher.setAuthTag(Buffer.from(tag, 'base64url'));
+  return Buffer.concat([decipher.update(Buffer.from(body, 'base64url')), decipher.final()]).toString('utf8');
+}
+
+const sealKey = (serverSecret: string): Buffer => createHmac('sha256', serverSecret).update('benchproof:totp-seal:v1').digest();
+
+/** Ten recovery codes, 10 characters each from an alphabet without look-alikes (0/O, 1/l), shown as xxxxx-xxxxx. */
+export function newRecoveryCodes(count = 10): string[] {
+  const alphabet = 'abcdefghjkmnpqrstuvwxyz23456789';
+  return Array.from({ length: count }, () => {
+    const bytes = randomBytes(10);
+    const chars = [...bytes].map((b) => alphabet[b % alphabet.length]).join('');
+    return `${chars.slice(0, 5)}-${chars.slice(5)}`;
+  });
+}
+
+/** What the database keeps of a recovery code: the SHA-256 of its normalised form (no dash, lower case). */
+export const hashRecoveryCode = (code: string): string => createHash('sha256').update(code.replace(/[\s-]/g, '').toLowerCase()).digest('hex');

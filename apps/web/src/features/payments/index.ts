@@ -1,0 +1,2 @@
+export { PaymentsPanel } from './components/payments-panel';
+export { OwnerPaymentCard } from './components/owner-payment-card';
