@@ -84,8 +84,8 @@ describe('the owner page: desk sends the link, the owner decides and consents, d
     // ── Desk, without reloading: status moved on, both decisions and the consent show ──
     await headerStatus(desk.page, 'In work');
     const activity = desk.page.getByTestId('owner-activity-item');
-    await activity.filter({ hasText: /approved item #\d+ \(owner link\)/ }).waitFor();
-    await activity.filter({ hasText: /declined item #\d+ \(owner link\)/ }).waitFor();
+    await activity.filter({ hasText: /approved (?!item #)\S.* \(owner link\)/ }).waitFor();
+    await activity.filter({ hasText: /declined (?!item #)\S.* \(owner link\)/ }).waitFor();
     await activity.filter({ hasText: 'Consent granted (owner link)' }).waitFor({ timeout: 10_000 });
     await desk.page.getByTestId('consent-state').getByText('Granted').waitFor();
     expect(navigations).toEqual([]);

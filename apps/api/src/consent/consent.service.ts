@@ -95,7 +95,8 @@ export class ConsentService {
       shopId,
       jobId,
       granted: input.granted,
-      nameMakeModel: input.granted && input.nameMakeModel,
+      // kept on a withdrawal too, so granting again keeps the owner's choice; nothing is shown without a grant
+      nameMakeModel: input.nameMakeModel,
       wordingVersion: input.wordingVersion,
       method: source.method,
       givenByName: fromStaff ? (input as RecordConsentRequest).givenByName : source.givenByName,

@@ -200,7 +200,7 @@ export class FindingsService {
         action: 'recommendation.decided',
         entityType: 'job',
         entityId: jobId,
-        details: { recommendationId, status: d.status, channel: d.channel, decidedByName: d.decidedByName },
+        details: { recommendationId, summary: rec.summary, status: d.status, channel: d.channel, decidedByName: d.decidedByName },
       });
       return toDecisionDto(inserted);
     });

@@ -77,8 +77,14 @@ describe('owner link: decisions and consent', () => {
       .send({ items: [{ ...seen(done, s.chainRec), status: 'declined' }] })
       .expect(409);
     expect(again.body.code).toBe('CONFLICT');
-    const activity = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-activity`).expect(200)).body as { action: string; details: { channel?: string } }[];
-    expect(activity.filter((a) => a.action === 'recommendation.decided' && a.details.channel === 'owner_link')).toHaveLength(2);
+    const activity = (await s.desk.agent.get(`/api/jobs/${s.jobId}/owner-activity`).expect(200)).body as {
+      action: string;
+      details: { channel?: string; summary?: string };
+    }[];
+    const decided = activity.filter((a) => a.action === 'recommendation.decided' && a.details.channel === 'owner_link');
+    expect(decided).toHaveLength(2);
+    // the activity names the item the owner answered, not only its number
+    expect(decided.every((a) => typeof a.details.summary === 'string' && a.details.summary.length > 0)).toBe(true);
     expect(activity.some((a) => a.action === 'owner.viewed')).toBe(true);
   });
 
@@ -101,5 +107,15 @@ describe('owner link: decisions and consent', () => {
       .expect(403);
     const activity = (await other.desk.agent.get(`/api/jobs/${other.jobId}/owner-activity`).expect(200)).body as { action: string }[];
     expect(activity.map((a) => a.action)).toEqual(expect.arrayContaining(['consent.granted', 'consent.revoked']));
+  });
+
+  it('keeps whether the bike may be named across a withdrawal, so consenting again does not reset it', async () => {
+    const { token } = await createLink(other.desk, other.jobId);
+    const send = (granted: boolean) =>
+      t.http().post(`/api/owner/${token}/consent`).send({ granted, nameMakeModel: true, wordingVersion: CONSENT_WORDING.version }).expect(200);
+    await send(false);
+    expect((await ownerPage(t, token)).consent).toMatchObject({ granted: false, nameMakeModel: true });
+    await send(true);
+    expect((await ownerPage(t, token)).consent).toMatchObject({ granted: true, nameMakeModel: true });
   });
 });

@@ -6,11 +6,11 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { queryClient } from '../lib/query-client';
 import { NotificationsHost } from './notifications-host';
-import { theme } from './theme';
+import { cssVariablesResolver, theme } from './theme';
 
 export function AppProvider({ children }: { children: ReactNode }) {
   return (
-    <MantineProvider theme={theme} defaultColorScheme="light">
+    <MantineProvider theme={theme} cssVariablesResolver={cssVariablesResolver} defaultColorScheme="light">
       <NotificationsHost />
       <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>
     </MantineProvider>

@@ -8,7 +8,8 @@ const LABELS: Record<string, (d: Record<string, unknown>) => string> = {
   'owner.viewed': () => 'Owner opened the page',
   'owner_link.created': (d) => `Link created (e-mail ${d.mail === 'queued' ? 'queued' : 'not sent'})`,
   'owner_link.revoked': () => 'Link revoked',
-  'recommendation.decided': (d) => `${str(d.decidedByName, 'Owner')} ${str(d.status)} item #${str(d.recommendationId)} (${str(d.channel)})`,
+  'recommendation.decided': (d) =>
+    `${str(d.decidedByName, 'Owner')} ${str(d.status)} ${str(d.summary) || `item #${str(d.recommendationId)}`} (${str(d.channel)})`,
   'consent.granted': (d) => `Consent granted (${str(d.method)})`,
   'consent.revoked': (d) => `Consent refused or withdrawn (${str(d.method)})`,
 };

@@ -3,6 +3,7 @@ import { DECLINED_SAFETY_NOTICE, formatMoney, INSPECTION_AREA_LABELS } from '@be
 import { Alert, Button, Checkbox, Group, List, Modal, Stack, Text } from '@mantine/core';
 import type { ApiError } from '../../../lib/api-client';
 import type { Choice } from './use-choices';
+import classes from './owner.module.css';
 import { useSendDecisions } from './use-send-decisions';
 
 interface Props {
@@ -16,6 +17,8 @@ interface Props {
   approvedMinor: number;
   currency: string;
 }
+
+const wrap = { root: classes.wrapButton, label: classes.wrapLabel };
 
 /** Each answer in one line, as the owner chose it. */
 function AnswerList({ chosen, choices }: { chosen: OwnerFinding[]; choices: Record<number, Choice> }) {
@@ -48,10 +51,10 @@ export function ConfirmDecisions({ token, opened, onClose, onDone, onPriceChange
         ))}
         {send.error && <SendError err={send.error} />}
         <Group grow>
-          <Button size="lg" mih={52} variant="default" onClick={onClose}>
+          <Button size="lg" variant="default" onClick={onClose} classNames={wrap}>
             Back
           </Button>
-          <Button size="lg" mih={52} onClick={send.submit} loading={send.sending} disabled={!send.ready || chosen.length === 0}>
+          <Button size="lg" onClick={send.submit} classNames={wrap} loading={send.sending} disabled={!send.ready || chosen.length === 0}>
             Send answers
           </Button>
         </Group>

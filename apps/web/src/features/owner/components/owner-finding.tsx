@@ -33,7 +33,7 @@ export function OwnerFindingCard({ finding: f, choice, onChoose, closed = false 
           <ConditionBadge condition={f.condition} />
         </Group>
         {f.doNotRide && (
-          <Alert color="red" variant="filled" icon={<IconAlertOctagon />} title={DO_NOT_RIDE.toUpperCase()}>
+          <Alert color="red.9" variant="filled" icon={<IconAlertOctagon />} title={DO_NOT_RIDE.toUpperCase()}>
             This is unsafe. Please do not ride the bike until it is fixed.
           </Alert>
         )}
@@ -75,7 +75,7 @@ function Choice({ rec, choice, onChoose, closed }: ChoiceProps) {
       <Button
         size="lg"
         mih={52}
-        color="teal"
+        color="teal.9"
         variant={choice === 'approved' ? 'filled' : 'outline'}
         leftSection={<IconCheck />}
         onClick={() => onChoose('approved')}

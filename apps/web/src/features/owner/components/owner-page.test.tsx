@@ -1,13 +1,32 @@
 import type { OwnerPageDto } from '@benchproof/contracts';
 import { MantineProvider } from '@mantine/core';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen } from '@testing-library/react';
+import { fireEvent, render, screen } from '@testing-library/react';
 import { theme } from '../../../app/theme';
 import { OwnerPage } from './owner-page';
 
 const totals = { partsMinor: 3500, labourMinor: 1500, netMinor: 5000, taxMinor: 1000, grossMinor: 6000 };
 
-function page(status: string): OwnerPageDto {
+const earlierApproved: OwnerPageDto['findings'][number] = {
+  id: 2,
+  area: 'brakes',
+  condition: 'worn',
+  description: 'Pads thin',
+  doNotRide: false,
+  cautions: [],
+  shots: [],
+  recommendation: {
+    id: 12,
+    summary: 'New brake pads',
+    urgency: 'soon',
+    currency: 'GBP',
+    totals: { ...totals, grossMinor: 2500 },
+    decisionStatus: 'approved',
+    updatedAt: '2026-01-01T00:00:00.000Z',
+  },
+};
+
+function page(status: string, extra: OwnerPageDto['findings'] = []): OwnerPageDto {
   return {
     shop: { name: 'Test Cycles', phone: '0100 000000', email: 'shop@example.test', brandPrimary: '#224466', brandAccent: '#cc8833', dateLocale: 'en-GB' },
     job: { number: 'J-0001', status, reportedSymptoms: 'Chain skips', promisedOn: null },
@@ -33,6 +52,7 @@ function page(status: string): OwnerPageDto {
           updatedAt: '2026-01-01T00:00:00.000Z',
         },
       },
+      ...extra,
     ],
     measurements: [],
     pairs: [],
@@ -41,8 +61,10 @@ function page(status: string): OwnerPageDto {
   };
 }
 
-function show(status: string) {
-  vi.stubGlobal('fetch', () => Promise.resolve(new Response(JSON.stringify(page(status)), { status: 200, headers: { 'content-type': 'application/json' } })));
+function show(status: string, extra: OwnerPageDto['findings'] = []) {
+  vi.stubGlobal('fetch', () =>
+    Promise.resolve(new Response(JSON.stringify(page(status, extra)), { status: 200, headers: { 'content-type': 'application/json' } })),
+  );
   vi.stubGlobal(
     'IntersectionObserver',
     class {
@@ -76,5 +98,22 @@ describe('owner page of a closed job', () => {
     show('waiting_owner');
     expect(await screen.findByRole('button', { name: /Approve/ }, { timeout: 15_000 })).toBeTruthy();
     expect(screen.queryByText('This job is closed')).toBeNull();
+  });
+});
+
+describe('owner page answers and consent', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('counts an item approved on an earlier visit in the approved total', { timeout: 30_000 }, async () => {
+    show('waiting_owner', [earlierApproved]);
+    const total = await screen.findByTestId('running-total', undefined, { timeout: 15_000 });
+    expect(total.textContent).toBe('Approved: £25.00');
+    fireEvent.click(screen.getByRole('button', { name: /Approve/ }));
+    expect(screen.getByTestId('running-total').textContent).toBe('Approved: £85.00');
+  });
+
+  it('holds the consent section’s place with a placeholder while it loads', { timeout: 30_000 }, async () => {
+    show('waiting_owner');
+    expect(await screen.findByTestId('consent-placeholder', undefined, { timeout: 15_000 })).toBeTruthy();
   });
 });

@@ -1,6 +1,6 @@
 import type { OwnerFinding } from '@benchproof/contracts';
 import { formatMoney, TERMINAL_STATUSES } from '@benchproof/domain';
-import { Alert, Button, Center, Group, Loader, Stack, Text, Title } from '@mantine/core';
+import { Alert, Button, Center, Group, Loader, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { Suspense, useState, type ReactNode } from 'react';
 import { ApiError } from '../../../lib/api-client';
 import { useOwnerPage } from '../api/owner-page';
@@ -32,6 +32,9 @@ export function OwnerPage({ token, payment }: { token: string; payment?: ReactNo
     </DatesLocale>
   );
 }
+
+/** About the consent card's height on a 390 px phone (measured in Chromium), so the page does not jump when it loads. */
+const CONSENT_CARD_HEIGHT = 660;
 
 type OwnerPageData = NonNullable<ReturnType<typeof useOwnerPage>['data']>;
 
@@ -163,7 +166,7 @@ function OwnerPageBody({ token, page, refetch, payment }: BodyProps) {
             <Pairs page={page} />
           </Deferred>
         )}
-        <Deferred>
+        <Deferred placeholder={<Skeleton h={CONSENT_CARD_HEIGHT} radius="md" data-testid="consent-placeholder" />}>
           <ConsentCard token={token} consent={page.consent} />
         </Deferred>
         <ReportAndContact page={page} />
@@ -172,7 +175,7 @@ function OwnerPageBody({ token, page, refetch, payment }: BodyProps) {
         <AnswerBar
           answered={c.chosen.length}
           pending={c.pending.length}
-          approved={formatMoney(c.approvedMinor, currency)}
+          approved={formatMoney(c.totalApprovedMinor, currency)}
           onConfirm={() => (setConfirming(true), setEverConfirmed(true))}
         />
       )}

@@ -14,7 +14,7 @@ export function BrandBar({ page }: { page: OwnerPageDto }) {
   return (
     <div className={classes.brandBar} style={{ background: shop.brandPrimary, borderBottom: `6px solid ${shop.brandAccent}` }}>
       <Group justify="space-between" wrap="nowrap">
-        <Text fw={800} size="xl" c="#fff">
+        <Text fw={800} size="xl" c="#fff" miw={0}>
           {shop.name}
         </Text>
         {shop.phone && (
@@ -23,6 +23,7 @@ export function BrandBar({ page }: { page: OwnerPageDto }) {
             href={`tel:${shop.phone.replace(/[^+\d]/g, '')}`}
             size="md"
             mih={44}
+            className={classes.keepWidth}
             color={shop.brandAccent}
             c="#1a1a1a"
             leftSection={<IconPhone size={20} />}
@@ -101,7 +102,14 @@ export function ReportAndContact({ page }: { page: OwnerPageDto }) {
   return (
     <Stack gap="sm">
       {page.report && (
-        <Button component="a" href={page.report.pdfUrl} size="lg" mih={52} variant="light" leftSection={<IconDownload />}>
+        <Button
+          component="a"
+          href={page.report.pdfUrl}
+          size="lg"
+          variant="light"
+          leftSection={<IconDownload />}
+          classNames={{ root: classes.wrapButton, label: classes.wrapLabel }}
+        >
           Download the bench report (PDF)
         </Button>
       )}
@@ -109,7 +117,12 @@ export function ReportAndContact({ page }: { page: OwnerPageDto }) {
         {GENERAL_SAFETY}
       </Text>
       <Text size="sm">
-        Questions? {page.shop.phone && <Anchor href={`tel:${page.shop.phone.replace(/[^+\d]/g, '')}`}>{page.shop.phone}</Anchor>}
+        Questions?{' '}
+        {page.shop.phone && (
+          <Anchor className={classes.tapLink} href={`tel:${page.shop.phone.replace(/[^+\d]/g, '')}`}>
+            {page.shop.phone}
+          </Anchor>
+        )}
         {page.shop.email && (
           <>
             {' '}

@@ -11,6 +11,8 @@ export function useChoices(findings: OwnerFinding[]) {
     (sum, f) => (f.recommendation && choices[f.recommendation.id] === 'approved' ? sum + f.recommendation.totals.grossMinor : sum),
     0,
   );
+  /** Items approved on an earlier visit count in the total the owner sees, beside this visit's choices. */
+  const earlierMinor = findings.reduce((sum, f) => (f.recommendation?.decisionStatus === 'approved' ? sum + f.recommendation.totals.grossMinor : sum), 0);
   const pendingMinor = pending.reduce((sum, f) => sum + (f.recommendation?.totals.grossMinor ?? 0), 0);
   const chosen = pending.filter((f) => f.recommendation && choices[f.recommendation.id]);
   return {
@@ -20,6 +22,7 @@ export function useChoices(findings: OwnerFinding[]) {
     pending,
     chosen,
     approvedMinor,
+    totalApprovedMinor: earlierMinor + approvedMinor,
     pendingMinor,
   };
 }

@@ -19,7 +19,14 @@ function SuggestionCard({ s, onPick, busy }: { s: PairSuggestionDto; onPick: () 
       <SimpleGrid cols={2} spacing={6}>
         {[s.before, s.after].map((a, i) => (
           <Stack key={a.id} gap={2}>
-            <Image src={a.urls.thumb ?? undefined} alt={`${i === 0 ? 'Before' : 'After'}: ${a.caption}`} radius="sm" fallbackSrc="" h={110} fit="cover" />
+            <Image
+              src={a.urls.thumb ?? undefined}
+              alt={`${i === 0 ? 'Before' : 'After'}${a.caption ? `: ${a.caption}` : ' photo'}`}
+              radius="sm"
+              fallbackSrc=""
+              h={110}
+              fit="cover"
+            />
             <Text size="xs" c="dimmed" lineClamp={1}>
               {i === 0 ? 'Before' : 'After'} · {a.caption || 'No caption'}
             </Text>

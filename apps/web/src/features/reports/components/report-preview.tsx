@@ -49,7 +49,7 @@ export function ReportPreview({ report }: { report: ReportDto }) {
             fit="contain"
             style={{ border: '1px solid var(--mantine-color-gray-4)' }}
           />
-          <Pagination total={pages} value={page} onChange={setPage} size="lg" />
+          <Pagination total={pages} value={page} onChange={setPage} />
         </Stack>
       )}
     </Stack>
