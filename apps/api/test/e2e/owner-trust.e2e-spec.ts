@@ -16,7 +16,8 @@ describe('owner path: what the shop and the owner can trust', () => {
   let manager: SignedIn;
   beforeAll(async () => {
     // No PUBLIC_URL: in development and tests, links point at localhost:PORT from the configuration.
-    t = await startTestApp({ PORT: '4567' });
+    // No mail server here: one attempt, so an owner-link e-mail that cannot go leaves no retry waiting (derivativesSettled waits for queued work).
+    t = await startTestApp({ PORT: '4567', MAIL_MAX_ATTEMPTS: '1' });
     manager = await t.signIn(DEMO.manager);
   });
   afterAll(() => t.close());

@@ -85,7 +85,7 @@ describe('S3 storage (against s3rver on loopback)', () => {
   it('lists the objects under a prefix with their sizes', async () => {
     await store.put('backups/2026-01-01t00-00-00z/manifest.json', Readable.from([Buffer.from('{}')]));
     await store.put('backups/2026-01-02t00-00-00z/manifest.json', Readable.from([Buffer.from('{ }')]));
-    expect(await store.list('backups/')).toEqual([
+    expect((await store.list('backups/')).map(({ key, bytes }) => ({ key, bytes }))).toEqual([
       { key: 'backups/2026-01-01t00-00-00z/manifest.json', bytes: 2 },
       { key: 'backups/2026-01-02t00-00-00z/manifest.json', bytes: 3 },
     ]);
