@@ -95,7 +95,8 @@ class FakeTexts {
   create(params) {
     const failure = this.failures.shift();
     if (failure) return { status: failure.status, body: { code: failure.code, message: failure.message, more_info: '', status: failure.status } };
-    if (!E164.test(params.To ?? '')) return { status: 400, body: { code: 21211, message: `The 'To' number ${params.To} is not a valid phone number.`, status: 400 } };
+    if (!E164.test(params.To ?? ''))
+      return { status: 400, body: { code: 21211, message: `The 'To' number ${params.To} is not a valid phone number.`, status: 400 } };
     if (!params.Body) return { status: 400, body: { code: 21602, message: 'Message body is required.', status: 400 } };
     const now = new Date().toUTCString();
     const m = {
@@ -119,7 +120,16 @@ class FakeTexts {
   }
 
   statusCallback(m, status = m.status) {
-    const params = { AccountSid: this.accountSid, ApiVersion: '2010-04-01', From: m.from, MessageSid: m.sid, MessageStatus: status, SmsSid: m.sid, SmsStatus: status, To: m.to };
+    const params = {
+      AccountSid: this.accountSid,
+      ApiVersion: '2010-04-01',
+      From: m.from,
+      MessageSid: m.sid,
+      MessageStatus: status,
+      SmsSid: m.sid,
+      SmsStatus: status,
+      To: m.to,
+    };
     return this.post(m.status_callback, params, this.callbacks);
   }
 
@@ -170,10 +180,16 @@ async function site(fake, req, res, url, body) {
   }
   if (req.method === 'POST' && url.pathname === '/api/fail-next') {
     const p = JSON.parse(body || '{}');
-    for (let i = 0; i < (p.count ?? 1); i++) fake.failures.push({ status: p.status ?? 500, code: p.code ?? 20500, message: p.message ?? 'Internal Server Error' });
+    for (let i = 0; i < (p.count ?? 1); i++)
+      fake.failures.push({ status: p.status ?? 500, code: p.code ?? 20500, message: p.message ?? 'Internal Server Error' });
     return json(res, 200, { queued: fake.failures.length });
   }
-  const lists = { '/api/messages': () => fake.messages, '/api/requests': () => fake.requests, '/api/callbacks': () => fake.callbacks, '/api/replies': () => fake.inbound };
+  const lists = {
+    '/api/messages': () => fake.messages,
+    '/api/requests': () => fake.requests,
+    '/api/callbacks': () => fake.callbacks,
+    '/api/replies': () => fake.inbound,
+  };
   if (req.method === 'GET' && lists[url.pathname]) return json(res, 200, lists[url.pathname]());
   return providerError(res, 404, 20404, 'Not found');
 }

@@ -1,4 +1,4 @@
-import { LINK_REMOVED, textBody } from './text-bodies';
+import { textBody } from './text-bodies';
 
 const LINK = 'http://localhost:3000/o/abc.def';
 

@@ -51,7 +51,16 @@ export class TextsRepository {
     const t = textMessages;
     this.db
       .update(t)
-      .set({ status: 'sent', attempts, providerSid: sid, sentAt: at, statusAt: at, lastError: null, body: sql`coalesce(${t.bodyAfterSend}, ${t.body})`, bodyAfterSend: null })
+      .set({
+        status: 'sent',
+        attempts,
+        providerSid: sid,
+        sentAt: at,
+        statusAt: at,
+        lastError: null,
+        body: sql`coalesce(${t.bodyAfterSend}, ${t.body})`,
+        bodyAfterSend: null,
+      })
       .where(and(eq(t.shopId, shopId), eq(t.id, id)))
       .run();
   }

@@ -1,8 +1,7 @@
 import type { CreatedOwnerLinkDto, CustomerDto, OutboxMessageDto } from '@benchproof/contracts';
 import { FINAL_CHECK_ITEMS } from '@benchproof/domain';
 import { signRequest } from '../../scripts/text-fake.mjs';
-import { eventually } from '../mail/mail-fixtures';
-import { appWithTextFake, jobForTexter, jobTexts, TEXT_AUTH, textReaches, type TextFake } from '../texts/text-fixtures';
+import { appWithTextFake, jobForTexter, jobTexts, TEXT_AUTH, textReaches, until, type TextFake } from '../texts/text-fixtures';
 import { DEMO, type SignedIn, type TestApp } from '../test-app';
 
 const sendLink = async (desk: SignedIn, jobId: number) =>
@@ -29,7 +28,7 @@ describe('texts: owners who prefer texts get links by text through the provider 
     expect(customer.phone).toBe('+442079460321');
     const created = await sendLink(desk, jobId);
     expect(created.mail).toEqual({ status: 'queued', reason: null, channel: 'sms' });
-    const [text] = await eventually(async () => (textsTo(fake, '+442079460321').length ? textsTo(fake, '+442079460321') : undefined), 'the text');
+    const [text] = await until(() => (textsTo(fake, '+442079460321').length ? textsTo(fake, '+442079460321') : undefined), 'the text');
     // The shop's name, one sentence and the link; nothing else.
     expect(text.body).toBe(`Lantern & Spoke Workshop: your bike's service page: ${created.url}`);
     expect(created.url.startsWith(`${base}/o/`)).toBe(true);
@@ -39,7 +38,7 @@ describe('texts: owners who prefer texts get links by text through the provider 
     const delivered = await textReaches(desk, jobId, 'delivered');
     expect(delivered).toMatchObject({ kind: 'owner_link', to: '+442079460321', attempts: 1, lastError: null });
     expect(delivered.body).not.toContain(token); // the stored row drops the link once the provider has it
-    const answered = await eventually(async () => {
+    const answered = await until(() => {
       const mine = fake.callbacks().filter((c) => c.params.To === '+442079460321');
       return mine.length === 2 && mine.every((c) => c.status !== null) ? mine : undefined;
     }, 'both status callbacks answered');
@@ -59,7 +58,7 @@ describe('texts: owners who prefer texts get links by text through the provider 
     const { jobId } = await jobForTexter(desk, '+61 491 570 157', 'Orla Venn', { mechanicId: mech.user.id });
     for (const to of ['on_stand', 'waiting_owner']) await desk.agent.post(`/api/jobs/${jobId}/transitions`).send({ to }).expect(200);
     const created = await sendLink(desk, jobId);
-    await eventually(async () => textsTo(fake, '+61491570157')[0], 'the decision text');
+    await until(() => textsTo(fake, '+61491570157')[0], 'the decision text');
     expect(textsTo(fake, '+61491570157')[0].body).toBe(`Lantern & Spoke Workshop: your estimate needs a decision: ${created.url}`);
     const j = `/api/jobs/${jobId}`;
     for (const to of ['in_work', 'final_check']) await desk.agent.post(`${j}/transitions`).send({ to }).expect(200);
@@ -67,7 +66,7 @@ describe('texts: owners who prefer texts get links by text through the provider 
     await checker.agent.post(`${j}/final-check`).send({ items, passed: true, testRideNotes: null, note: null }).expect(201);
     expect(textsTo(fake, '+61491570157')).toHaveLength(1); // nothing on the way to ready
     await desk.agent.post(`${j}/transitions`).send({ to: 'ready' }).expect(200);
-    await eventually(async () => textsTo(fake, '+61491570157')[1], 'the ready text');
+    await until(() => textsTo(fake, '+61491570157')[1], 'the ready text');
     expect(textsTo(fake, '+61491570157')[1].body).toBe('Lantern & Spoke Workshop: your bike is ready to collect.');
     const texts = await jobTexts(desk, jobId);
     expect(texts.map((m) => m.kind)).toEqual(['ready_to_collect', 'estimate_decision']);
@@ -144,6 +143,6 @@ describe('texts: owners who prefer texts get links by text through the provider 
     const stop = { AccountSid: TEXT_AUTH.TWILIO_ACCOUNT_SID, Body: 'STOP', From: '+442079460326', To: '+15005550006' };
     await t.http().post('/api/texts/inbound').type('form').set('x-twilio-signature', forged).send(stop).expect(400);
     await sendLink(desk, jobId);
-    await eventually(async () => (textsTo(fake, '+442079460326').length === 2 ? true : undefined), 'a second text (no opt-out recorded)');
+    await until(() => (textsTo(fake, '+442079460326').length === 2 ? true : undefined), 'a second text (no opt-out recorded)');
   });
 });

@@ -47,3 +47,6 @@ export const jobTexts = async (s: SignedIn, jobId: number) => (await s.agent.get
 /** Waits until the job's newest text reaches `status`. */
 export const textReaches = (s: SignedIn, jobId: number, status: TextMessageDto['status']) =>
   eventually(async () => (await jobTexts(s, jobId)).find((m) => m.status === status), `a text of job ${jobId} to be ${status}`);
+
+/** `eventually` for a check that needs no request (the fake's own lists). */
+export const until = <T>(check: () => T | undefined, what: string): Promise<T> => eventually(() => Promise.resolve(check()), what);
