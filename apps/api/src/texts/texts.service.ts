@@ -75,7 +75,8 @@ export class TextsService {
 
   private toDto(r: TextRow): TextMessageDto {
     return {
-      ...{ id: r.id, jobId: r.jobId, customerId: r.customerId, kind: r.kind, to: r.toNumber, body: r.body, status: r.status },
+      // Never the link itself: staff who may not send links see the text as it will be kept.
+      ...{ id: r.id, jobId: r.jobId, customerId: r.customerId, kind: r.kind, to: r.toNumber, body: r.bodyAfterSend ?? r.body, status: r.status },
       ...{ attempts: r.attempts, maxAttempts: this.cfg.TEXT_MAX_ATTEMPTS, lastError: r.lastError },
       nextTryAt: r.status === 'queued' ? (this.tasks.status(TEXT_SEND, String(r.id))?.nextRunAt ?? null) : null,
       sentAt: r.sentAt?.toISOString() ?? null,
