@@ -135,7 +135,9 @@ export function BookInForm({ slots, mechanics, onBooked }: { slots: BookInSlots;
   const bookIn = useBookIn();
   const models = { customer: slots.customerModel, bike: slots.bikeModel };
   const form = useForm<BookInValues>({ mode: 'controlled', initialValues: initialBookIn(models), validate: validateBookIn(models) });
-  const submit = form.onSubmit((values) => bookIn.mutate(parseBookIn(values, models), { onSuccess: onBooked, onError: (e) => showServerFieldErrors(form, e, NEW_OWNER_BOXES) }));
+  const submit = form.onSubmit((values) =>
+    bookIn.mutate(parseBookIn(values, models), { onSuccess: onBooked, onError: (e) => showServerFieldErrors(form, e, NEW_OWNER_BOXES) }),
+  );
   const failure = formFailure(bookIn.error);
   const hasErrors = Object.keys(form.errors).length > 0;
   return (
