@@ -84,7 +84,7 @@ describe('texts: the demo customer who prefers texts gets the owner link by text
     await page.getByText('Text queued to the owner (they prefer texts).').waitFor();
     await page.goto(`${base}/jobs/${job.id}?section=messages`);
     const card = page.getByTestId('text-message').first();
-    await card.getByText('Delivered to the phone').waitFor({ timeout: 20_000 });
+    await card.getByText('Delivered to the phone', { exact: true }).waitFor({ timeout: 20_000 });
     expect(await card.textContent()).toContain('To +61491570156');
     await card.scrollIntoViewIfNeeded();
     await shot(page, 'texts-desk-status-390');
