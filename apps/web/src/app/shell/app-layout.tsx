@@ -14,6 +14,7 @@ import { shopCan } from '../shop-access';
 import classes from './app-layout.module.css';
 import { Navigation } from './navigation';
 import { SignOutButton } from './sign-out';
+import { UpdatePrompt } from './update-prompt';
 
 /** The signed-in user's name and role, the change-password key and sign-out, at the header's right. */
 function AccountActions({ user }: { user: SessionUser }) {
@@ -77,6 +78,7 @@ export function AppLayout() {
             <DiskSpaceWarning />
           </Suspense>
         )}
+        <UpdatePrompt />
         <DatesLocale locale={shop?.dateLocale}>
           <Outlet />
         </DatesLocale>

@@ -22,15 +22,13 @@ export function SignOutButton() {
   }
   return (
     <>
-      <Button
-        variant="subtle"
-        color="gray"
-        leftSection={<IconLogout size={20} />}
-        onClick={() => (waiting ? open() : signOut(true))}
-        loading={logout.isPending}
-      >
+      <Button variant="subtle" color="gray" leftSection={<IconLogout size={20} />} onClick={ask} loading={logout.isPending} visibleFrom="xs">
         Sign out
       </Button>
+      {/* On a phone the header also carries the upload badge: sign-out is an icon there, like the key. */}
+      <ActionIcon variant="subtle" color="gray" size={44} onClick={ask} loading={logout.isPending} hiddenFrom="xs" aria-label="Sign out" title="Sign out">
+        <IconLogout size={22} />
+      </ActionIcon>
       <Modal opened={asking} onClose={close} title="Shots still waiting" centered>
         <Stack gap="md">
           <Text>
