@@ -115,7 +115,7 @@ describe('capture that survives the Wi-Fi (phone)', () => {
     await b.page.waitForTimeout(1500);
     expect(await b.page.getByTestId('shot-card').count()).toBe(0);
     expect((await assetsOf(b.page, jobId)).length).toBe(3);
-  });
+  }, 120_000); // a long flow on a shared, loaded machine: two reloads and three uploads
 
   it('sign-out with shots waiting: kept for the same user, never shown to another; "delete" removes them', async () => {
     b = await openBrowser(PHONE);
@@ -161,5 +161,5 @@ describe('capture that survives the Wi-Fi (phone)', () => {
     await b.page.getByText('No shots yet').waitFor();
     await b.page.waitForTimeout(1000);
     expect((await assetsOf(b.page, jobId)).length).toBe(2);
-  });
+  }, 120_000); // four sign-ins and two upload rounds
 });
