@@ -1,6 +1,6 @@
 import { EventEmitter } from 'node:events';
 import { fromEvent, type Observable } from 'rxjs';
-import type { LiveUpdates } from './live-updates.port';
+import type { LiveUpdates } from '../../core/events';
 
 /** One process (the embedded default): topics are events of one emitter. */
 export class InProcessLiveUpdates implements LiveUpdates {

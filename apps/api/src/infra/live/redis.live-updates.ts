@@ -2,7 +2,7 @@ import { Logger } from '@nestjs/common';
 import type { Redis } from 'ioredis';
 import { Observable, type Subscriber } from 'rxjs';
 import type { RedisConnections } from '../redis';
-import type { LiveUpdates } from './live-updates.port';
+import type { LiveUpdates } from '../../core/events';
 
 /**
  * Several processes: PUBLISH on the shared connection, one subscriber connection per process that
