@@ -1,0 +1,56 @@
+import { spawn } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { API_ENTRY, type BuiltServer, startBuiltServer } from './built-server';
+import { describeRedis, freshPrefix, REDIS_URL, until } from './redis-suite';
+
+/** The API processes the primary forked (Linux: /proc/<pid>/task/<pid>/children). */
+const childrenOf = (pid: number): number[] =>
+  readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8')
+    .trim()
+    .split(/\s+/)
+    .filter(Boolean)
+    .map(Number);
+
+describe('WEB_CONCURRENCY without Redis', () => {
+  it('refuses to start, saying why', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'benchproof-wc-'));
+    const env: Record<string, string | undefined> = { ...process.env, WEB_CONCURRENCY: '2', DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), PORT: '0' };
+    delete env.REDIS_URL;
+    const proc = spawn(process.execPath, [API_ENTRY], { env, stdio: ['ignore', 'pipe', 'pipe'] });
+    let out = '';
+    proc.stdout.on('data', (d) => (out += String(d)));
+    proc.stderr.on('data', (d) => (out += String(d)));
+    const code = await new Promise((r) => proc.once('exit', r));
+    rmSync(dir, { recursive: true, force: true });
+    expect(code).toBe(1);
+    expect(out).toContain('BenchProof cannot start: WEB_CONCURRENCY=2 needs REDIS_URL');
+  });
+});
+
+describeRedis('WEB_CONCURRENCY=2 with Redis', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'benchproof-wc-'));
+  let server: BuiltServer;
+  afterAll(async () => {
+    await server?.stop();
+    rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('serves one port from two API processes and replaces one that dies', { timeout: 240_000 }, async () => {
+    const env = { WEB_CONCURRENCY: '2', TASKS: 'redis', REDIS_URL: REDIS_URL!, REDIS_PREFIX: freshPrefix(), DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads') };
+    server = await startBuiltServer(env);
+    const primary = server.proc.pid!;
+    const first = childrenOf(primary);
+    expect(first).toHaveLength(2);
+    process.kill(first[0], 'SIGKILL');
+    // The survivor keeps answering on the same port while the primary starts a replacement.
+    for (let i = 0; i < 10; i++) expect((await fetch(`${server.base}/api/health`, { headers: { connection: 'close' } })).status).toBe(200);
+    const now = await until('a replacement process', () => {
+      const c = childrenOf(primary);
+      return c.length === 2 && !c.includes(first[0]) ? c : undefined;
+    });
+    expect(now).toContain(first[1]);
+    await until('the replacement to answer', async () => ((await fetch(`${server.base}/api/health/ready`).catch(() => null))?.ok ? true : undefined));
+  });
+});
