@@ -18,19 +18,26 @@ export async function runPrimary(processes: number): Promise<void> {
       worker.once('listening', () => resolve(worker));
       worker.once('exit', (code) => reject(new Error(`API process ${worker.process.pid} exited with ${code} before listening`)));
     });
-  await fork();
-  await Promise.all(Array.from({ length: processes - 1 }, fork));
-  logger.log(`${processes} API processes serving (pids ${Object.values(cluster.workers ?? {}).map((w) => w?.process.pid).join(', ')})`);
+  let serving = false;
   cluster.on('exit', (worker, code, signal) => {
     if (stopping) {
       if (Object.keys(cluster.workers ?? {}).length === 0) process.exit(0);
       return;
     }
+    if (!serving) return; // a process that dies while starting rejects its fork: start-up fails below
     logger.warn(`API process ${worker.process.pid} ended (${signal ?? code}); starting another`);
     const wait = Math.max(0, lastRestart + 1000 - Date.now());
     lastRestart = Date.now() + wait;
     setTimeout(() => void fork().catch((e: Error) => logger.error(e.message)), wait);
   });
+  await fork();
+  await Promise.all(Array.from({ length: processes - 1 }, fork));
+  serving = true;
+  logger.log(
+    `${processes} API processes serving (pids ${Object.values(cluster.workers ?? {})
+      .map((w) => w?.process.pid)
+      .join(', ')})`,
+  );
   for (const signal of ['SIGTERM', 'SIGINT'] as const) {
     process.on(signal, () => {
       stopping = true;

@@ -104,7 +104,10 @@ const EnvSchema = z.object({
   /** The older name of TASKS; TASKS wins when both are set. */
   TASKS_DRIVER: z.enum(['sqlite', 'redis']).default('sqlite'),
   /** redis://[user:pass@]host:port[/db]: shared state of several API processes (tasks, live updates, rate limits). Unset: everything in this process. */
-  REDIS_URL: z.string().regex(/^rediss?:\/\//, 'must start with redis:// or rediss://').optional(),
+  REDIS_URL: z
+    .string()
+    .regex(/^rediss?:\/\//, 'must start with redis:// or rediss://')
+    .optional(),
   /** Prefix of every Redis key and channel of this deployment (two deployments may share one Redis). */
   REDIS_PREFIX: z.string().min(1).default('benchproof'),
   /** API processes serving one port (node:cluster); above 1 needs REDIS_URL. */
@@ -188,7 +191,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
 
 /** Several processes share tasks, live updates and rate limits only through Redis; refuse a setup that would split them silently. */
 function checkSharedState(cfg: z.infer<typeof EnvSchema>): void {
-  if ((cfg.TASKS ?? cfg.TASKS_DRIVER) === 'redis' && !cfg.REDIS_URL) throw new ConfigError('TASKS=redis needs REDIS_URL (e.g. REDIS_URL=redis://127.0.0.1:6379).');
+  if ((cfg.TASKS ?? cfg.TASKS_DRIVER) === 'redis' && !cfg.REDIS_URL)
+    throw new ConfigError('TASKS=redis needs REDIS_URL (e.g. REDIS_URL=redis://127.0.0.1:6379).');
   if (cfg.WEB_CONCURRENCY > 1 && !cfg.REDIS_URL) {
     throw new ConfigError(
       `WEB_CONCURRENCY=${cfg.WEB_CONCURRENCY} needs REDIS_URL: with several API processes, live updates to staff and rate limits must be shared ` +

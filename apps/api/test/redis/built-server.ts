@@ -19,7 +19,15 @@ export async function startBuiltServer(env: Record<string, string>): Promise<Bui
   const port = await freePort();
   let out = '';
   const proc = spawn(process.execPath, [API_ENTRY], {
-    env: { ...process.env, PORT: String(port), WEB_DIST: join(env.DATABASE_PATH, '..', 'no-web'), MAIL_CATCHER: 'false', LOG_LEVEL: 'warn', LOGIN_THROTTLE_ADDRESS_LIMIT: '1000', ...env },
+    env: {
+      ...process.env,
+      PORT: String(port),
+      WEB_DIST: join(env.DATABASE_PATH, '..', 'no-web'),
+      MAIL_CATCHER: 'false',
+      LOG_LEVEL: 'warn',
+      LOGIN_THROTTLE_ADDRESS_LIMIT: '1000',
+      ...env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   proc.stdout?.on('data', (d) => (out += String(d)));

@@ -27,7 +27,13 @@ describeRedis('BullMqTaskRunner', () => {
     const { db, sqlite } = openDb(join(dir, `${freshPrefix()}.sqlite`));
     sqlite.pragma('foreign_keys = OFF'); // made-up shop ids for the manager's failed list, no shops table rows
     const redis = new RedisConnections(REDIS_URL!, freshPrefix());
-    const opts = { pollMs: 200, leaseMs: 5000, backoff: { baseMs: backoffMs, maxMs: backoffMs }, longBackoff: { baseMs: 3_600_000, maxMs: 86_400_000 }, maxAttempts: 5 };
+    const opts = {
+      pollMs: 200,
+      leaseMs: 5000,
+      backoff: { baseMs: backoffMs, maxMs: backoffMs },
+      longBackoff: { baseMs: 3_600_000, maxMs: 86_400_000 },
+      maxAttempts: 5,
+    };
     const runner = new BullMqTaskRunner(new TaskStore(db), redis, systemClock, opts, db);
     open.push({ runner, redis, close: () => sqlite.close() });
     const calls: RawTaskContext[] = [];
@@ -109,11 +115,10 @@ describeRedis('BullMqTaskRunner', () => {
   it('fails at once on a PermanentTaskError, and a manager retry runs it again with fresh attempts', async () => {
     const { runner } = setUp(50);
     let calls = 0;
-    runner.register(
-      'demo.refused',
-      () => (++calls === 1 ? Promise.reject(new PermanentTaskError('recipient refused')) : Promise.resolve()),
-      { concurrency: 1, maxAttempts: 5 },
-    );
+    runner.register('demo.refused', () => (++calls === 1 ? Promise.reject(new PermanentTaskError('recipient refused')) : Promise.resolve()), {
+      concurrency: 1,
+      maxAttempts: 5,
+    });
     runner.start();
     runner.enqueue({ kind: 'demo.refused', key: 'm1', shopId: 4 });
     await runner.settled();

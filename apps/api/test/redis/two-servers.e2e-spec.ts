@@ -14,7 +14,11 @@ import { type BuiltServer, startBuiltServer } from './built-server';
 
 /** A cookie session made with fetch (for a stream, or to use on the other process). */
 async function cookieSession(base: string, email: string, password = DEMO_PASSWORD): Promise<{ cookie: string; csrf: string }> {
-  const res = await fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password }) });
+  const res = await fetch(`${base}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
   if (res.status !== 200) throw new Error(`sign-in ${res.status}`);
   const cookie = res.headers
     .getSetCookie()
@@ -59,7 +63,14 @@ describeRedis('two API processes on one database and one Redis', () => {
   let b: BuiltServer;
   let redis: Redis;
   beforeAll(async () => {
-    const env = { DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), TASKS: 'redis', REDIS_URL: REDIS_URL!, REDIS_PREFIX: prefix, LOGIN_THROTTLE_LIMIT: '3' };
+    const env = {
+      DATABASE_PATH: join(dir, 'db.sqlite'),
+      UPLOADS_DIR: join(dir, 'uploads'),
+      TASKS: 'redis',
+      REDIS_URL: REDIS_URL!,
+      REDIS_PREFIX: prefix,
+      LOGIN_THROTTLE_LIMIT: '3',
+    };
     a = await startBuiltServer(env);
     b = await startBuiltServer(env);
     redis = new Redis(REDIS_URL!);
@@ -127,7 +138,12 @@ describeRedis('two API processes on one database and one Redis', () => {
     await request(a.base).post('/api/auth/logout').set('cookie', s.cookie).set('x-csrf-token', s.csrf).expect(204);
     // B cached the session for 5 s; the broadcast makes it ask the database again well before that.
     const started = Date.now();
-    await until('B to refuse the ended session', async () => ((await request(b.base).get('/api/auth/session').set('cookie', s.cookie)).status === 401 ? true : undefined), 2000, 20);
+    await until(
+      'B to refuse the ended session',
+      async () => ((await request(b.base).get('/api/auth/session').set('cookie', s.cookie)).status === 401 ? true : undefined),
+      2000,
+      20,
+    );
     expect(Date.now() - started).toBeLessThan(2000);
   });
 });

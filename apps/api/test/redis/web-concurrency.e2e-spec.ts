@@ -6,17 +6,18 @@ import { API_ENTRY, type BuiltServer, startBuiltServer } from './built-server';
 import { describeRedis, freshPrefix, REDIS_URL, until } from './redis-suite';
 
 /** The API processes the primary forked (Linux: /proc/<pid>/task/<pid>/children). */
-const childrenOf = (pid: number): number[] =>
-  readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8')
-    .trim()
-    .split(/\s+/)
-    .filter(Boolean)
-    .map(Number);
+const childrenOf = (pid: number): number[] => readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8').trim().split(/\s+/).filter(Boolean).map(Number);
 
 describe('WEB_CONCURRENCY without Redis', () => {
   it('refuses to start, saying why', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'benchproof-wc-'));
-    const env: Record<string, string | undefined> = { ...process.env, WEB_CONCURRENCY: '2', DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads'), PORT: '0' };
+    const env: Record<string, string | undefined> = {
+      ...process.env,
+      WEB_CONCURRENCY: '2',
+      DATABASE_PATH: join(dir, 'db.sqlite'),
+      UPLOADS_DIR: join(dir, 'uploads'),
+      PORT: '0',
+    };
     delete env.REDIS_URL;
     const proc = spawn(process.execPath, [API_ENTRY], { env, stdio: ['ignore', 'pipe', 'pipe'] });
     let out = '';
@@ -37,9 +38,18 @@ describeRedis('WEB_CONCURRENCY=2 with Redis', () => {
     rmSync(dir, { recursive: true, force: true });
   });
 
-  it('serves one port from two API processes and replaces one that dies', { timeout: 240_000 }, async () => {
-    const env = { WEB_CONCURRENCY: '2', TASKS: 'redis', REDIS_URL: REDIS_URL!, REDIS_PREFIX: freshPrefix(), DATABASE_PATH: join(dir, 'db.sqlite'), UPLOADS_DIR: join(dir, 'uploads') };
+  it('serves one port from two API processes and replaces one that dies', { timeout: 400_000 }, async () => {
+    const env = {
+      WEB_CONCURRENCY: '2',
+      TASKS: 'redis',
+      REDIS_URL: REDIS_URL!,
+      REDIS_PREFIX: freshPrefix(),
+      DATABASE_PATH: join(dir, 'db.sqlite'),
+      UPLOADS_DIR: join(dir, 'uploads'),
+    };
     server = await startBuiltServer(env);
+    // Ready means the first process answers; the second starts after it (only the first migrates and seeds).
+    await until('both processes', () => (server.output().includes('2 API processes serving') ? true : undefined), 180_000, 200);
     const primary = server.proc.pid!;
     const first = childrenOf(primary);
     expect(first).toHaveLength(2);

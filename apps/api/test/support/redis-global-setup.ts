@@ -14,7 +14,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   if (missing) {
     console.log(`[api-redis] ${missing}`);
     project.provide('redisUrl', null);
-    return async () => undefined;
+    return () => Promise.resolve();
   }
   const server = await startRedisServer();
   project.provide('redisUrl', server.url);

@@ -30,7 +30,9 @@ export async function freePort(): Promise<number> {
 /** A throw-away Redis on a free loopback port: no snapshots, no append-only file; stopped by its pid. */
 export async function startRedisServer(): Promise<RedisServer> {
   const port = await freePort();
-  const child = spawn(REDIS_SERVER_BIN, ['--port', String(port), '--bind', '127.0.0.1', '--save', '', '--appendonly', 'no'], { stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(REDIS_SERVER_BIN, ['--port', String(port), '--bind', '127.0.0.1', '--save', '', '--appendonly', 'no'], {
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   await readyOrExit(child);
   return {
     url: `redis://127.0.0.1:${port}`,

@@ -33,9 +33,9 @@ export class RedisLiveUpdates implements LiveUpdates {
         this.listeners.set(channel, set);
         this.subscriber.subscribe(channel).catch((err: Error) => sub.error(err));
       }
-      set.add(sub as Subscriber<object>);
+      set.add(sub);
       return () => {
-        set.delete(sub as Subscriber<object>);
+        set.delete(sub);
         if (set.size > 0 || this.listeners.get(channel) !== set) return;
         this.listeners.delete(channel);
         this.subscriber.unsubscribe(channel).catch(() => undefined);

@@ -115,7 +115,7 @@ export class BullMqTaskRunner implements TaskRunner {
     this.state = 'stopped';
     if (this.timer) clearTimeout(this.timer);
     await this.relaying;
-    await Promise.allSettled([...this.kinds.values()].map((k) => k.worker?.close()));
+    await Promise.allSettled([...this.kinds.values()].flatMap((k) => (k.worker ? [k.worker.close()] : [])));
     await Promise.allSettled([...this.kinds.values()].map((k) => k.queue.close()));
   }
 
@@ -133,7 +133,7 @@ export class BullMqTaskRunner implements TaskRunner {
       maxStalledCount: 5,
       removeOnComplete: { age: 24 * 3600, count: 10_000 },
       removeOnFail: { age: 7 * 24 * 3600 },
-      settings: { backoffStrategy: (_made: number, _type?: string, err?: Error) => (err as RetryError | undefined)?.retryInMs ?? this.opts.backoff.baseMs },
+      settings: { backoffStrategy: (_made: number, _type?: string, err?: RetryError) => err?.retryInMs ?? this.opts.backoff.baseMs },
     });
     worker.on('error', (err) => this.logger.warn(`worker ${name}: ${err.message}`));
     return worker;
@@ -176,7 +176,9 @@ export class BullMqTaskRunner implements TaskRunner {
     const max = kind.options.maxAttempts ?? this.opts.maxAttempts;
     const later = isTransientError(err) ? new Date(now + retryDelay(Math.max(1, row.attempts - max + 1), this.opts.longBackoff)) : null;
     this.safely(() => this.store.fail(row.id, `queue:${jobId}`, new Date(now), message, null, later));
-    this.logger.warn(`${row.kind}:${row.key} attempt ${row.attempts} failed (${message})${later ? `; transient, again at ${later.toISOString()}` : '; giving up'}`);
+    this.logger.warn(
+      `${row.kind}:${row.key} attempt ${row.attempts} failed (${message})${later ? `; transient, again at ${later.toISOString()}` : '; giving up'}`,
+    );
     return new UnrecoverableError(message);
   }
 
