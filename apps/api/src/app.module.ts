@@ -23,6 +23,8 @@ import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './core/clock';
 import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
+import { RedisModule } from './infra/redis';
+import { LiveUpdatesModule } from './infra/live';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { ReportsModule } from './reports';
@@ -82,6 +84,8 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot(cfg),
         ClockModule,
+        RedisModule,
+        LiveUpdatesModule,
         TasksModule,
         ScheduleModule.forRoot(),
         PaymentProviderModule,

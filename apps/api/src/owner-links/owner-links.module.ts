@@ -4,7 +4,7 @@ import { CustomersModule } from '../customers';
 import { JobsModule } from '../jobs';
 import { MailModule } from '../mail';
 import { TextsModule } from '../texts';
-import { OwnerEventsBus } from './owner-events';
+import { OwnerLiveEvents } from './owner-events';
 import { OutboxOwnerLinkMailer } from './owner-links.bindings';
 import { OwnerLinksController } from './owner-links.controller';
 import { OwnerLinksRepository } from './owner-links.repository';
@@ -19,7 +19,7 @@ import { OWNER_LINK_MAILER } from './owner-links.ports';
 @Module({
   imports: [AuditModule, CustomersModule, JobsModule, MailModule, TextsModule],
   controllers: [OwnerLinksController],
-  providers: [OwnerLinksRepository, OwnerLinksService, OwnerEventsBus, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
-  exports: [OwnerLinksService, OwnerEventsBus],
+  providers: [OwnerLinksRepository, OwnerLinksService, OwnerLiveEvents, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
+  exports: [OwnerLinksService, OwnerLiveEvents],
 })
 export class OwnerLinksModule {}

@@ -6,7 +6,7 @@ import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess } from '../jobs';
-import { OwnerEventsBus } from './owner-events';
+import { OwnerLiveEvents } from './owner-events';
 import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';
 import { hashOwnerToken, newOwnerToken, ownerTokenSignatureOk } from './owner-token';
 import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort, type OwnerLinkSent } from './owner-links.ports';
@@ -23,7 +23,7 @@ export class OwnerLinksService {
     private readonly uow: UnitOfWork,
     private readonly access: JobAccess,
     private readonly audit: AuditService,
-    private readonly bus: OwnerEventsBus,
+    private readonly bus: OwnerLiveEvents,
     @Inject(OWNER_LINK_MAILER) private readonly mailer: OwnerLinkMailerPort,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     @Inject(CLOCK) private readonly clock: Clock,

@@ -11,7 +11,7 @@ import { InspectionService } from '../inspection';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import { UnitOfWork } from '../core/db';
-import { OwnerEventsBus, type OwnerActor } from '../owner-links';
+import { OwnerLiveEvents, type OwnerActor } from '../owner-links';
 import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
 
 /**
@@ -30,7 +30,7 @@ export class OwnerPageService {
     private readonly findings: FindingsService,
     private readonly inspection: InspectionService,
     private readonly consent: ConsentService,
-    private readonly bus: OwnerEventsBus,
+    private readonly bus: OwnerLiveEvents,
     @Inject(OWNER_MEDIA) private readonly media: OwnerMediaPort,
     @Inject(OWNER_PAIRS) private readonly pairs: OwnerPairsPort,
     @Inject(OWNER_REPORT) private readonly report: OwnerReportPort,
