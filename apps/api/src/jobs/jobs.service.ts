@@ -33,9 +33,6 @@ type Actor = Pick<AuthUser, 'shopId'>;
 
 @Injectable()
 export class JobsService {
-  /** Money due per job; the payments feature binds its answer here. */
-  readonly balances = new JobBalances();
-
   constructor(
     private readonly repo: JobsRepository,
     private readonly uow: UnitOfWork,
@@ -46,6 +43,7 @@ export class JobsService {
     private readonly audit: AuditService,
     private readonly access: JobAccess,
     private readonly booking: BookInService,
+    private readonly balances: JobBalances,
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly emitter: EventEmitter2,
   ) {}
