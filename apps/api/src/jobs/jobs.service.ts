@@ -112,13 +112,15 @@ export class JobsService {
   }
 
   update(actor: AuthUser, id: number, patch: UpdateJobRequest): JobDetail {
-    this.access.change(actor, id, 'job');
-    this.checkStaff(actor, patch.mechanicId);
-    this.uow.run(() => {
-      this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
-      this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });
+    return this.uow.run((tx) => {
+      this.access.change(actor, id, 'job', tx);
+      this.checkStaff(actor, patch.mechanicId);
+      this.uow.run(() => {
+        this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
+        this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });
+      });
+      return this.get(actor, id);
     });
-    return this.get(actor, id);
   }
 
   /** Moves the job along JOB_TRANSITIONS (libs/domain); anything else is ILLEGAL_TRANSITION. */
