@@ -1,16 +1,7 @@
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
+import { ALL_PASS } from '../support/final-check';
 import { bookIn } from './records-helpers';
 
-const ALL_PASS = {
-  brakes: true,
-  shifting: true,
-  steering: true,
-  fasteners_torqued: true,
-  wheels_true_centred: true,
-  tyres_pressure: true,
-  axles_closed: true,
-  test_ride: true,
-};
 const WORK = { description: 'Trued rear wheel', minutes: 15 };
 const FINDING = { area: 'drivetrain', condition: 'worn', description: 'Chain at 0.5 % elongation' };
 
