@@ -1,6 +1,6 @@
 import { roleCan } from '@benchproof/contracts';
 import { MessagesPanel } from '../../../../features/mail';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 // The mail feature (features/mail) owns this section: delivery status and resend.
 export default function MessagesSection({ job, me }: SectionProps) {
