@@ -116,8 +116,8 @@ export class OwnerPageService {
    */
   decide(owner: OwnerActor, input: OwnerDecisionsRequest): void {
     const decidedAt = this.clock.now();
-    this.uow.run(() => {
-      const job = this.access.change(owner, owner.jobId, 'decision');
+    this.uow.run((tx) => {
+      const job = this.access.change(owner, owner.jobId, 'decision', tx);
       const byRec = new Map(this.findings.list(owner, owner.jobId).flatMap((f) => (f.recommendation ? [[f.recommendation.id, f] as const] : [])));
       const ownerName = this.customers.get(owner, job.customerId).name;
       for (const item of input.items) {

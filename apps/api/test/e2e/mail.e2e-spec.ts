@@ -2,6 +2,7 @@ import type { OutboxMessageDto } from '@benchproof/contracts';
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
 import { eventually, FakeReportFiles, freePort, makePdf, sha256 } from '../mail/mail-fixtures';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
+import { ALL_PASS } from '../support/final-check';
 import { bookIn } from './records-helpers';
 
 /** Short retry and sweep times so an outage of a second is retried within the test. */
@@ -78,16 +79,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
       await checker.agent
         .post(`/api/jobs/${jobId}/final-check`)
         .send({
-          items: {
-            brakes: true,
-            shifting: true,
-            steering: true,
-            fasteners_torqued: true,
-            wheels_true_centred: true,
-            tyres_pressure: true,
-            axles_closed: true,
-            test_ride: true,
-          },
+          items: ALL_PASS,
           passed: true,
         })
         .expect(201);

@@ -6,10 +6,11 @@ import { outboxMessages, ownerLinks } from '../../src/db/schema';
 import type { AuthUser } from '../../src/core/auth';
 import { CLOCK, type Clock } from '../../src/core/clock';
 import { OwnerLinksService } from '../../src/owner-links';
-import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
+import type { MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { startAppWithMail, stopAppWithMail } from '../support/app-with-mail';
 import { eventually } from '../mail/mail-fixtures';
 import { derivativesSettled, solidJpeg } from '../media/media-fixtures';
-import { startTestApp, type TestApp } from '../test-app';
+import type { TestApp } from '../test-app';
 import { createLink, ownerPage, ownerScenario, seen, type OwnerScenario } from './owner-helpers';
 
 describe('owner link', () => {
@@ -18,15 +19,11 @@ describe('owner link', () => {
   let other: OwnerScenario;
   let catcher: MailCatcher;
   beforeAll(async () => {
-    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    t = await startTestApp({ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100' });
+    ({ t, catcher } = await startAppWithMail({ MAIL_SWEEP_MS: '100' }));
     s = await ownerScenario(t);
     other = await ownerScenario(t);
   });
-  afterAll(async () => {
-    await t.close();
-    await catcher.close();
-  });
+  afterAll(() => stopAppWithMail(t, catcher));
 
   it('is returned once as a URL and stored only as a SHA-256 hash', async () => {
     const created = await createLink(s.desk, s.jobId);

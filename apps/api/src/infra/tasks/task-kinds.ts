@@ -27,6 +27,8 @@ export type TaskPayloads = {
 
 export type NoPayload = Record<string, never>;
 export type TaskKind = keyof TaskPayloads;
+/** Any declared kind's payload: what the tasks.payload column holds. */
+export type TaskPayload = TaskPayloads[TaskKind];
 
 /** The declared kinds at run time (the compiler keeps this in step with TaskPayloads). */
 export const TASK_KINDS = Object.keys({

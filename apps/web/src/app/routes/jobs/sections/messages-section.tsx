@@ -1,7 +1,7 @@
 import { roleCan } from '@benchproof/contracts';
 import { Stack } from '@mantine/core';
 import { MessagesPanel, TextsPanel } from '../../../../features/mail';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 // The mail feature (features/mail) owns this section: e-mail and text delivery status, e-mail resend.
 export default function MessagesSection({ job, me }: SectionProps) {
