@@ -24,5 +24,5 @@ export const sealSecrets = (serverSecret: string, secrets: readonly string[]): s
 export function openSecrets(serverSecret: string, sealed: string): string[] {
   const parsed: unknown = JSON.parse(openText(serverSecret, OUTBOX_SEAL, sealed));
   if (!Array.isArray(parsed) || !parsed.every((s) => typeof s === 'string')) throw new Error('Unreadable sealed secrets');
-  return parsed as string[];
+  return parsed;
 }
