@@ -43,6 +43,10 @@ export class PaymentsService implements OnModuleInit {
     this.jobs.balances.use({
       dueByJob: (shopId, ids) => new Map([...this.balances.balances(shopId, ids)].map(([id, b]) => [id, b.dueMinor])),
       readyUnpaidIds: (shopId) => this.balances.readyUnpaidIds(shopId),
+      settlement: (shopId, jobId) => {
+        const b = this.balances.balance(shopId, jobId);
+        return { grossMinor: b.grossMinor, dueMinor: b.dueMinor, paidAt: b.paidAt };
+      },
     });
   }
 
