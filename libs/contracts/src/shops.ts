@@ -1,11 +1,6 @@
-import { chainWearLimits, MAX_BICYCLE_CHAIN_LIMIT_PCT, SHOP_LOCALES } from '@benchproof/domain';
-import countries from 'i18n-iso-countries';
+import { chainWearLimits, isCountryCode, MAX_BICYCLE_CHAIN_LIMIT_PCT, SHOP_LOCALES } from '@benchproof/domain';
 import { z } from 'zod';
 import { IdSchema, requiredText } from './common';
-
-/** ISO 3166-1 alpha-2 codes, from i18n-iso-countries' table: the settings' country list and its check. */
-export const COUNTRY_CODES: readonly string[] = Object.keys(countries.getAlpha2Codes()).sort();
-const KNOWN_COUNTRIES = new Set(COUNTRY_CODES);
 
 export const UNIT_SYSTEMS = ['metric', 'imperial'] as const;
 export const UnitSystemSchema = z.enum(UNIT_SYSTEMS);
@@ -53,7 +48,7 @@ const settingsFields = {
   /** How dates and times are written (web, e-mail, PDF); null: the one that fits the currency (domain shopLocale). */
   locale: z.enum(SHOP_LOCALES).nullable(),
   /** ISO 3166-1 alpha-2: phone numbers typed without a country code are read as this country's. */
-  country: z.string().refine((c) => KNOWN_COUNTRIES.has(c), 'Choose the country from the list'),
+  country: z.string().refine((c): boolean => isCountryCode(c), 'Choose the country from the list'),
   /** Printed on receipts when set. */
   taxNumber: z.string().trim().max(40),
   units: UnitSystemSchema,

@@ -1,4 +1,5 @@
-import { COUNTRY_CODES, type ShopSettingsDto } from '@benchproof/contracts';
+import type { ShopSettingsDto } from '@benchproof/contracts';
+import { COUNTRY_CODES } from '@benchproof/domain';
 import { Paper, Select, SimpleGrid, Stack, TextInput, Title } from '@mantine/core';
 import type { UseFormReturnType } from '@mantine/form';
 import { useMemo } from 'react';
