@@ -95,7 +95,7 @@ describe('report e-mail: one message with the PDF and the owner link, worded by 
 });
 
 describe('report e-mail over the attachment budget', () => {
-  it('goes as the owner link, with no attachment, and the link opens the page', async () => {
+  it('goes as the owner link, with no attachment, and the link opens the page', { timeout: 90_000 }, async () => {
     const catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
     const pdf = await makePdf('Large report', 40);
     const t = await startTestApp({ ...FAST, SMTP_URL: catcher.smtpUrl, MAIL_ATTACHMENT_BUDGET: String(pdf.length - 1) });
@@ -119,45 +119,50 @@ describe('report e-mail over the attachment budget', () => {
 });
 
 describe('no owner secret in clear at rest', () => {
-  it('queued mail keeps the link sealed (no row, no database or WAL byte holds it); the e-mail that arrives has a working link', async () => {
-    const port = await freePort();
-    const t = await startTestApp({ ...FAST, SMTP_URL: `smtp://127.0.0.1:${port}` });
-    let catcher: MailCatcher | null = null;
-    try {
-      const reports = new FakeReportFiles(t.app);
-      const desk = await t.signIn(DEMO.desk);
-      const linkJob = await bookIn(desk);
-      const created = await createLink(desk, linkJob.id); // desk's owner-link e-mail
-      const reportJob = await bookIn(desk);
-      await reports.issue(951, desk.user.shopId, reportJob.id, await makePdf('sealed'));
-      await desk.agent.post(`/api/jobs/${reportJob.id}/reports/951/send`).send({}).expect(202);
-      const messages = async (jobId: number) => (await desk.agent.get(`/api/jobs/${jobId}/messages`).expect(200)).body as OutboxMessageDto[];
-      await eventually(async () => ((await messages(reportJob.id))[0]?.attempts >= 1 ? true : undefined), 'a failed first attempt');
-      expect((await messages(reportJob.id))[0].status).not.toBe('sent');
+  it(
+    'queued mail keeps the link sealed (no row, no database or WAL byte holds it); the e-mail that arrives has a working link',
+    { timeout: 90_000 },
+    async () => {
+      const port = await freePort();
+      const t = await startTestApp({ ...FAST, SMTP_URL: `smtp://127.0.0.1:${port}` });
+      let catcher: MailCatcher | null = null;
+      try {
+        const reports = new FakeReportFiles(t.app);
+        const desk = await t.signIn(DEMO.desk);
+        const linkJob = await bookIn(desk);
+        const created = await createLink(desk, linkJob.id); // desk's owner-link e-mail
+        const reportJob = await bookIn(desk);
+        await reports.issue(951, desk.user.shopId, reportJob.id, await makePdf('sealed'));
+        await desk.agent.post(`/api/jobs/${reportJob.id}/reports/951/send`).send({}).expect(202);
+        const messages = async (jobId: number) => (await desk.agent.get(`/api/jobs/${jobId}/messages`).expect(200)).body as OutboxMessageDto[];
+        await eventually(async () => ((await messages(reportJob.id))[0]?.attempts >= 1 ? true : undefined), 'a failed first attempt');
+        expect((await messages(reportJob.id))[0].status).not.toBe('sent');
 
-      const secret = created.token.split('.')[0];
-      const db = t.app.get<Db>(DB);
-      const tables = db.all<{ name: string }>(sql`SELECT name FROM sqlite_master WHERE type = 'table'`).map((r) => r.name);
-      const rowsWith = (needle: string) => tables.filter((name) => db.all(sql.raw(`SELECT * FROM "${name}"`)).some((r) => JSON.stringify(r).includes(needle)));
-      const filesWith = (needle: string) =>
-        ['', '-wal'].map((x) => `${t.cfg.DATABASE_PATH}${x}`).filter((f) => existsSync(f) && readFileSync(f).includes(needle));
-      expect(rowsWith(secret)).toEqual([]);
-      expect(filesWith(secret)).toEqual([]);
-      expect(rowsWith('/o/')).toEqual([]); // the report e-mail's link too (its token is not known to the test yet)
+        const secret = created.token.split('.')[0];
+        const db = t.app.get<Db>(DB);
+        const tables = db.all<{ name: string }>(sql`SELECT name FROM sqlite_master WHERE type = 'table'`).map((r) => r.name);
+        const rowsWith = (needle: string) =>
+          tables.filter((name) => db.all(sql.raw(`SELECT * FROM "${name}"`)).some((r) => JSON.stringify(r).includes(needle)));
+        const filesWith = (needle: string) =>
+          ['', '-wal'].map((x) => `${t.cfg.DATABASE_PATH}${x}`).filter((f) => existsSync(f) && readFileSync(f).includes(needle));
+        expect(rowsWith(secret)).toEqual([]);
+        expect(filesWith(secret)).toEqual([]);
+        expect(rowsWith('/o/')).toEqual([]); // the report e-mail's link too (its token is not known to the test yet)
 
-      catcher = await startMailCatcher({ smtpPort: port, httpPort: 0 });
-      const [a, b] = await catcher.waitFor(2, 20_000);
-      const byJob = (n: string) => [a, b].find((m) => m.subject.includes(n) || m.text.includes(n));
-      expect(byJob(created.url)?.text).toContain(created.url);
-      expect((await ownerPage(t, created.token)).job.number).toBe(linkJob.number);
-      const reportToken = tokenIn(byJob(reportJob.number) as Caught);
-      expect((await ownerPage(t, reportToken)).job.number).toBe(reportJob.number);
-      await eventually(async () => ((await messages(reportJob.id))[0]?.status === 'sent' ? true : undefined), 'sent status');
-      expect(filesWith(reportToken.split('.')[0])).toEqual([]);
-      expect(rowsWith(reportToken.split('.')[0])).toEqual([]);
-    } finally {
-      await t.close();
-      await catcher?.close();
-    }
-  });
+        catcher = await startMailCatcher({ smtpPort: port, httpPort: 0 });
+        const [a, b] = await catcher.waitFor(2, 20_000);
+        const byJob = (n: string) => [a, b].find((m) => m.subject.includes(n) || m.text.includes(n));
+        expect(byJob(created.url)?.text).toContain(created.url);
+        expect((await ownerPage(t, created.token)).job.number).toBe(linkJob.number);
+        const reportToken = tokenIn(byJob(reportJob.number) as Caught);
+        expect((await ownerPage(t, reportToken)).job.number).toBe(reportJob.number);
+        await eventually(async () => ((await messages(reportJob.id))[0]?.status === 'sent' ? true : undefined), 'sent status');
+        expect(filesWith(reportToken.split('.')[0])).toEqual([]);
+        expect(rowsWith(reportToken.split('.')[0])).toEqual([]);
+      } finally {
+        await t.close();
+        await catcher?.close();
+      }
+    },
+  );
 });
