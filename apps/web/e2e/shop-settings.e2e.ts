@@ -13,7 +13,7 @@ describe('shop settings on a phone: country and tax number for receipts', () => 
     const { page } = b;
     await signIn(page, MANAGER);
     await page.goto('/settings/shop');
-    const country = page.getByRole('textbox', { name: 'Country' });
+    const country = page.locator('input').and(page.getByLabel('Country', { exact: true }));
     await country.scrollIntoViewIfNeeded();
     await country.click();
     await country.fill('germ');
@@ -27,7 +27,14 @@ describe('shop settings on a phone: country and tax number for receipts', () => 
     await page.getByRole('button', { name: 'Save settings' }).click();
     await page.getByText('Settings saved.').waitFor();
     await page.reload();
-    await expect.poll(() => page.getByRole('textbox', { name: 'Country' }).inputValue()).toBe('Germany (DE)');
+    await expect
+      .poll(() =>
+        page
+          .locator('input')
+          .and(page.getByLabel('Country', { exact: true }))
+          .inputValue(),
+      )
+      .toBe('Germany (DE)');
     expect(await page.getByLabel('Tax number').inputValue()).toBe('DE 123 456 789');
   });
 });
