@@ -29,6 +29,8 @@ import { ReportsModule } from './reports';
 import { MailModule } from './mail';
 import { PaymentsModule } from './payments';
 import { PaymentProviderModule } from './infra/payments';
+import { TextProviderModule } from './infra/texts';
+import { TextsModule } from './texts';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
@@ -69,6 +71,7 @@ const FEATURES = [
   SetupModule,
   ImportsModule,
   PaymentsModule,
+  TextsModule,
 ];
 
 @Module({})
@@ -82,6 +85,7 @@ export class AppModule {
         TasksModule,
         ScheduleModule.forRoot(),
         PaymentProviderModule,
+        TextProviderModule,
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,

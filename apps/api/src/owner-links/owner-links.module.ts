@@ -3,6 +3,7 @@ import { AuditModule } from '../audit';
 import { CustomersModule } from '../customers';
 import { JobsModule } from '../jobs';
 import { MailModule } from '../mail';
+import { TextsModule } from '../texts';
 import { OwnerEventsBus } from './owner-events';
 import { OutboxOwnerLinkMailer } from './owner-links.bindings';
 import { OwnerLinksController } from './owner-links.controller';
@@ -16,7 +17,7 @@ import { OWNER_LINK_MAILER } from './owner-links.ports';
  * exported OwnerLinksService and reports activity on the exported bus.
  */
 @Module({
-  imports: [AuditModule, CustomersModule, JobsModule, MailModule],
+  imports: [AuditModule, CustomersModule, JobsModule, MailModule, TextsModule],
   controllers: [OwnerLinksController],
   providers: [OwnerLinksRepository, OwnerLinksService, OwnerEventsBus, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
   exports: [OwnerLinksService, OwnerEventsBus],

@@ -62,7 +62,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
     expect((await desk.agent.post(`/api/jobs/${job.id}/reports/502/send`).send({}).expect(404)).body.code).toBe('NOT_FOUND');
     const mech = await t.signIn(DEMO.mechanic);
     await mech.agent.post(`/api/jobs/${other.id}/reports/502/send`).send({}).expect(403);
-    const quiet = await bookIn(desk, { newCustomer: { name: 'Ansel Brook', email: null, phone: '+44 1632 960123', preferredChannel: 'phone', notes: null } });
+    const quiet = await bookIn(desk, { newCustomer: { name: 'Ansel Brook', email: null, phone: '+44 20 7946 0123', preferredChannel: 'phone', notes: null } });
     await reports.issue(503, desk.user.shopId, quiet.id, await makePdf('quiet'));
     const res = await desk.agent.post(`/api/jobs/${quiet.id}/reports/503/send`).send({}).expect(422);
     expect(res.body.code).toBe('NO_OWNER_EMAIL');

@@ -32,7 +32,7 @@ describe('owner link', () => {
     const created = await createLink(s.desk, s.jobId);
     expect(created.url).toMatch(/\/o\/[A-Za-z0-9_-]{43}\.[A-Za-z0-9_-]{22}$/);
     expect(created.link).toMatchObject({ state: 'active', jobId: s.jobId });
-    expect(created.mail).toEqual({ status: 'queued', reason: null });
+    expect(created.mail).toEqual({ status: 'queued', reason: null, channel: 'email' });
     expect(created.link.sentTo).toBe('ottilie@example.test');
     const rows = t.app.get<Db>(DB).select().from(ownerLinks).all();
     const row = rows.find((r) => r.id === created.link.id);

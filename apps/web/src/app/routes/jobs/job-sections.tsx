@@ -20,7 +20,7 @@ export const JOB_SECTIONS = [
   { value: 'pairs', label: 'Pairs' },
   { value: 'report', label: 'Report' },
   { value: 'owner', label: 'Owner link' },
-  { value: 'messages', label: 'E-mails' },
+  { value: 'messages', label: 'Messages' },
   { value: 'payment', label: 'Payment' },
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];
