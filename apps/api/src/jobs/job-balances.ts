@@ -11,6 +11,14 @@ export interface JobBalancePort {
   dueByJob(shopId: number, jobIds: number[]): Map<number, number>;
   /** Ids of the shop's ready jobs that still have money due. */
   readyUnpaidIds(shopId: number): number[];
+  /** One job's charged total, what is due and when the balance reached zero through a payment (ISO), for the report. */
+  settlement(shopId: number, jobId: number): JobSettlement;
+}
+
+export interface JobSettlement {
+  grossMinor: number;
+  dueMinor: number;
+  paidAt: string | null;
 }
 
 /** The jobs feature's view of balances: list figures, the "ready, unpaid" filter and the hand-over rule. */
@@ -24,6 +32,11 @@ export class JobBalances {
 
   readyUnpaidIds(shopId: number): number[] {
     return this.port.readyUnpaidIds(shopId);
+  }
+
+  /** Null when no payments feature is bound (nothing is known about money). */
+  settlement(shopId: number, jobId: number): JobSettlement | null {
+    return this.port?.settlement(shopId, jobId) ?? null;
   }
 
   /** Handing over with money due needs desk's reason (UNPAID_BALANCE otherwise); returns what was due. */

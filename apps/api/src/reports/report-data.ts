@@ -1,5 +1,5 @@
 // The snapshot's shape lives beside its column (db/schema/report-snapshot.ts), so reads of reports.snapshot are typed.
-export type { ReportSnapshot, ShotRef, SnapshotFinding, SnapshotRecommendation, SnapshotTotals } from '../db/schema/report-snapshot';
+export type { ReportSnapshot, ShotRef, SnapshotFinding, SnapshotPayment, SnapshotRecommendation, SnapshotTotals } from '../db/schema/report-snapshot';
 /** What an issued version adds on top of the snapshot. */
 export interface IssueStamp {
   version: number;
