@@ -1,4 +1,5 @@
 import { createTheme, type CSSVariablesResolver, type MantineColorsTuple } from '@mantine/core';
+import numberInput from './number-input.module.css';
 
 /** BenchProof's own colours: a deep workshop teal and a brass accent. */
 const bench: MantineColorsTuple = ['#e8f4f3', '#cfe6e4', '#a2cdc9', '#72b3ad', '#4b9c95', '#338b84', '#25807a', '#1f5f5b', '#174a47', '#0d3331'];
@@ -26,7 +27,8 @@ export const theme = createTheme({
       styles: { visibilityToggle: { width: 44, height: 44, minWidth: 44, minHeight: 44 } },
     },
     Select: { defaultProps: { size: 'md' } },
-    NumberInput: { defaultProps: { size: 'md' } },
+    // Steppers: up and down side by side, each a 44 px target in a 50 px field (number-input.module.css).
+    NumberInput: { defaultProps: { size: 'lg', rightSectionWidth: 90 }, classNames: { controls: numberInput.controls, control: numberInput.control } },
     Textarea: { defaultProps: { size: 'md' } },
     // Phone at the workstand: every close button is a 44 px target with a spoken name (CloseButton xl = 44 px).
     CloseButton: { defaultProps: { size: 'xl', 'aria-label': 'Close' } },

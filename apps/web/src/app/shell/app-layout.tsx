@@ -31,7 +31,11 @@ function AccountActions({ user }: { user: SessionUser }) {
       <ActionIcon component={Link} to="/account/password" variant="subtle" color="gray" size={44} aria-label="Change password" title="Change password">
         <IconKey size={22} />
       </ActionIcon>
-      <Button variant="subtle" color="gray" leftSection={<IconLogout size={20} />} onClick={signOut} loading={logout.isPending}>
+      {/* On a phone the word does not fit beside the mark and the key: the icon, with its name for screen readers. */}
+      <ActionIcon hiddenFrom="xs" variant="subtle" color="gray" size={44} aria-label="Sign out" title="Sign out" onClick={signOut} loading={logout.isPending}>
+        <IconLogout size={22} />
+      </ActionIcon>
+      <Button visibleFrom="xs" variant="subtle" color="gray" leftSection={<IconLogout size={20} />} onClick={signOut} loading={logout.isPending}>
         Sign out
       </Button>
     </Group>
