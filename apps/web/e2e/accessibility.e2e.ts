@@ -15,7 +15,8 @@ async function seriousViolations(page: Page): Promise<string[]> {
   // page.addScriptTag is refused by the app's Content-Security-Policy (script-src 'self'); evaluate runs outside it
   await page.evaluate(AXE_SOURCE);
   return page.evaluate(async () => {
-    type Axe = { run: (ctx: Document, o: object) => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> };
+    type Node = { target: string[]; any: { message: string }[] };
+    type Axe = { run: (ctx: Document, o: object) => Promise<{ violations: { id: string; impact: string; nodes: Node[] }[] }> };
     const result = await (window as unknown as { axe: Axe }).axe.run(document, { resultTypes: ['violations'] });
     return result.violations
       .filter((v) => v.impact === 'serious' || v.impact === 'critical')
@@ -23,7 +24,8 @@ async function seriousViolations(page: Page): Promise<string[]> {
         (v) =>
           `${v.id} (${v.impact}): ${v.nodes
             .slice(0, 3)
-            .map((n) => n.target.join(' '))
+            // The check's own words (for contrast: both colours and the ratio) say what to change.
+            .map((n) => `${n.target.join(' ')} — ${n.any[0]?.message ?? ''}`)
             .join(' | ')}`,
       );
   });

@@ -5,6 +5,7 @@ import { generateSync } from 'otplib';
 import type { Page } from 'playwright-core';
 import { openBrowser, PHONE, type Browser } from './support/browser';
 import { emptyServer, linkFromMail, shotBoth, type EmptyServer } from './support/first-run';
+import { dayFromToday, pickDay } from './support/records';
 
 const root = resolve(import.meta.dirname, '../../..');
 const CODE = 'TEST-SETU-PCOD-E234';
@@ -14,7 +15,7 @@ const MECHANIC = { name: 'Sol Brennan', email: 'sol@northgate.test', password: '
 /** The sample file plus two rows with problems: a bad e-mail, and a frame material we do not know. */
 function importFile(dir: string): string {
   const sample = readFileSync(join(root, 'apps/web/public/customers-import-sample.csv'), 'utf8').trimEnd();
-  const bad = ['Dara Voss,dara-at-example,07700 900333,,Hillcrest,Trail 5,2020,steel,10,disc,M,red,,29x2.3', 'Eli Marsh,eli@example.test,,,Vantail,Aero,2021,bamboo,11,rim,52,blue,,25-622'];
+  const bad = ['Dara Voss,dara-at-example,07700 900333,,Hillcrest,Trail 5,2020,steel,10,disc,M,red,,29x2.3', 'Eli Marsh,eli@example.test,,,Vantail,Aero,2021,cardboard,11,rim,52,blue,,25-622'];
   const path = join(dir, 'customers.csv');
   writeFileSync(path, `${sample}\n${bad.join('\n')}\n`);
   return path;
@@ -198,13 +199,20 @@ describe('a new workshop: setup to its first booked-in job', () => {
     await page.getByText('Ada Quinlan', { exact: true }).click();
     await page.getByText('Ridgeline Gravel One').click();
     await page.getByLabel("Reported symptoms, in the owner's words").fill('Rear brake feels soft; gears skip under load.');
+    const promised = dayFromToday(3);
+    await pickDay(page, /^Promised for/, promised.ariaLabel);
+    // A pound-sterling workshop writes dates day first (en-GB), whatever the browser's own language.
+    const d = promised.date;
+    const dayFirst = `${d.getDate()} ${d.toLocaleString('en-GB', { month: 'short' })} ${d.getFullYear()}`;
+    expect(await page.getByRole('button', { name: /^Promised for/ }).textContent()).toContain(dayFirst);
     await shotBoth(page, 'first-run-book-in');
     await page.getByRole('button', { name: 'Book in' }).click();
     await page.waitForURL(/\/jobs\/\d+$/, { timeout: 15_000 });
     await page.getByText(/^Booked in as J-\d{4}-0001$/).waitFor({ timeout: 10_000 });
+    await page.getByText(dayFirst).first().waitFor({ timeout: 10_000 });
     await shotBoth(page, 'first-run-first-job');
     await page.goto(`${server.url}/jobs`);
-    await page.getByText('Ada Quinlan').first().waitFor({ timeout: 10_000 });
+    await page.getByRole('link', { name: /J-\d{4}-0001/ }).waitFor({ timeout: 10_000 });
     await shotBoth(page, 'first-run-jobs');
   });
 });

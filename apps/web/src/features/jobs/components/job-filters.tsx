@@ -49,7 +49,7 @@ function FilterToggle({ on, onClick, disabled, children }: { on: boolean; onClic
   return (
     <Button
       size="sm"
-      h={40}
+      h={44}
       radius="xl"
       variant={on ? 'filled' : 'light'}
       color={on ? undefined : 'gray'}

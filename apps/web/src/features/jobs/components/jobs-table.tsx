@@ -120,13 +120,17 @@ export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE, currency = 'EU
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   const sort: Sort = { field: params.sort ?? 'promisedOn', order: params.order ?? 'asc' };
   const onSort = (s: Sort) => update({ sort: s.field, order: s.order });
+  // A new workshop's empty list is not the filters' doing.
+  const filtered = Boolean(
+    params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed || params.readyUnpaid,
+  );
   return (
     <>
       <JobFilters params={params} includeClosed={includeClosed} update={update} mechanics={mechanics} />
       <QueryState isLoading={jobs.isLoading} error={jobs.error} />
       {data && data.items.length === 0 && (
         <Text c="dimmed" py="lg">
-          No jobs match these filters.
+          {filtered ? 'No jobs match these filters.' : 'No bikes in the workshop right now. Book one in with the button above.'}
         </Text>
       )}
       {data && data.items.length > 0 && (
