@@ -108,7 +108,7 @@ describe('accessibility on the phone (390×844): axe serious/critical and 44 px 
 
     const { jobId, mediaId } = await photoJob(page);
     await page.goto(`/jobs/${jobId}`);
-    await page.getByRole('heading', { level: 1 }).first().waitFor({ timeout: 15_000 });
+    await page.getByText(/^Job J-\d{4}-\d{4}$/).first().waitFor({ timeout: 15_000 });
     await page.waitForLoadState('networkidle');
     await check(page, 'job page');
 

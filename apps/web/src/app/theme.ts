@@ -50,6 +50,8 @@ export const theme = createTheme({
     // A checkbox or switch is tapped through its label: the label line is 44 px high.
     Checkbox: { styles: { label: TAP_LABEL } },
     Switch: { styles: { label: TAP_LABEL } },
+    // Each segment (Before / During / After, roles, units) is a 44 px high target.
+    SegmentedControl: { styles: { label: { ...TAP_LABEL, justifyContent: 'center' } } },
     // Slider thumbs big enough for a thumb.
     Slider: { defaultProps: { thumbSize: 44 } },
   },

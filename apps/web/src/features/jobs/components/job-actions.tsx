@@ -22,7 +22,6 @@ function MoreMoves({ moves, onPick }: { moves: Move[]; onPick: (move: Move) => v
     <Button
       size="lg"
       variant="default"
-      aria-label="Other moves"
       leftSection={<IconDots />}
       style={{ flex: '1 0 auto' }}
       onClick={() => (setTapped(true), wake())}
