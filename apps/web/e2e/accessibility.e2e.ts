@@ -103,12 +103,18 @@ describe('accessibility on the phone (390×844): axe serious/critical and 44 px 
     const { page } = b;
     await signIn(page, TOBIN);
     await page.goto('/jobs');
-    await page.getByRole('link', { name: /^J-\d{4}-\d{4}/ }).first().waitFor({ timeout: 15_000 });
+    await page
+      .getByRole('link', { name: /^J-\d{4}-\d{4}/ })
+      .first()
+      .waitFor({ timeout: 15_000 });
     await check(page, 'jobs list');
 
     const { jobId, mediaId } = await photoJob(page);
     await page.goto(`/jobs/${jobId}`);
-    await page.getByText(/^Job J-\d{4}-\d{4}$/).first().waitFor({ timeout: 15_000 });
+    await page
+      .getByText(/^Job J-\d{4}-\d{4}$/)
+      .first()
+      .waitFor({ timeout: 15_000 });
     await page.waitForLoadState('networkidle');
     await check(page, 'job page');
 

@@ -15,7 +15,10 @@ const MECHANIC = { name: 'Sol Brennan', email: 'sol@northgate.test', password: '
 /** The sample file plus two rows with problems: a bad e-mail, and a frame material we do not know. */
 function importFile(dir: string): string {
   const sample = readFileSync(join(root, 'apps/web/public/customers-import-sample.csv'), 'utf8').trimEnd();
-  const bad = ['Dara Voss,dara-at-example,07700 900333,,Hillcrest,Trail 5,2020,steel,10,disc,M,red,,29x2.3', 'Eli Marsh,eli@example.test,,,Vantail,Aero,2021,cardboard,11,rim,52,blue,,25-622'];
+  const bad = [
+    'Dara Voss,dara-at-example,07700 900333,,Hillcrest,Trail 5,2020,steel,10,disc,M,red,,29x2.3',
+    'Eli Marsh,eli@example.test,,,Vantail,Aero,2021,cardboard,11,rim,52,blue,,25-622',
+  ];
   const path = join(dir, 'customers.csv');
   writeFileSync(path, `${sample}\n${bad.join('\n')}\n`);
   return path;
@@ -54,7 +57,7 @@ describe('a new workshop: setup to its first booked-in job', () => {
   });
   afterAll(async () => {
     await Promise.all([manager?.close(), ...others.map((b) => b.close())]);
-    await server?.stop();
+    server?.stop();
     rmSync(dir, { recursive: true, force: true });
   });
   const other = async () => {
@@ -67,6 +70,12 @@ describe('a new workshop: setup to its first booked-in job', () => {
     const { page } = manager;
     await page.goto(`${server.url}/jobs`);
     await page.waitForURL(/\/setup$/, { timeout: 15_000 });
+    await page.getByLabel('Tax rate (%)').waitFor();
+    // The phone shows the whole form without sideways scrolling, and the number steppers are 44 px targets.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
+    const steppers = await page.locator('.mantine-NumberInput-control').evaluateAll((els) => els.map((e) => e.getBoundingClientRect()));
+    expect(steppers).toHaveLength(4);
+    for (const r of steppers) expect(Math.min(r.width, r.height)).toBeGreaterThanOrEqual(44);
     await shotBoth(page, 'first-run-setup');
     await fillSetup(page, 'WRONG-CODE-0000', MANAGER.password);
     await page.getByText('That setup code is not right').waitFor({ timeout: 10_000 });
@@ -138,7 +147,7 @@ describe('a new workshop: setup to its first booked-in job', () => {
   });
 
   it('recovers a forgotten password by e-mail, which signs the mechanic’s other devices out', async () => {
-    const signedIn = others[0]!.page;
+    const signedIn = others[0].page;
     const page = await other();
     await page.goto(`${server.url}/sign-in`);
     await page.getByRole('link', { name: 'New workshop? Sign it up' }).waitFor();

@@ -4,7 +4,6 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import type { Page } from 'playwright-core';
-import { startMailCatcher, type MailCatcher } from '../../../api/scripts/mail-catcher.mjs';
 import { DESKTOP, PHONE, shot } from './browser';
 
 const root = resolve(import.meta.dirname, '../../../..');
@@ -19,10 +18,38 @@ const freePort = () =>
     });
   });
 
+/** The local mail catcher (apps/api/scripts/mail-catcher.mjs) as its own process, read through its JSON inbox. */
+export interface Inbox {
+  url: string;
+  smtpUrl: string;
+  messages: () => Promise<{ to: string; subject: string; text: string }[]>;
+  stop: () => void;
+}
+
+async function startInbox(): Promise<Inbox> {
+  const [smtpPort, httpPort] = [await freePort(), await freePort()];
+  const proc = spawn(process.execPath, [join(root, 'apps/api/scripts/mail-catcher.mjs')], {
+    cwd: root,
+    env: { ...process.env, MAIL_SMTP_PORT: String(smtpPort), MAIL_HTTP_PORT: String(httpPort) },
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
+  await new Promise<void>((ok, fail) => {
+    proc.stdout?.on('data', (d: Buffer) => d.toString().includes('inbox at') && ok());
+    proc.once('exit', (code) => fail(new Error(`mail catcher exited ${code}`)));
+  });
+  const url = `http://127.0.0.1:${httpPort}`;
+  return {
+    url,
+    smtpUrl: `smtp://127.0.0.1:${smtpPort}`,
+    messages: async () => (await (await fetch(`${url}/api/messages`)).json()) as { to: string; subject: string; text: string }[],
+    stop: () => proc.kill('SIGTERM'),
+  };
+}
+
 export interface EmptyServer {
   url: string;
-  mail: MailCatcher;
-  stop: () => Promise<void>;
+  mail: Inbox;
+  stop: () => void;
 }
 
 /**
@@ -31,7 +58,7 @@ export interface EmptyServer {
  */
 export async function emptyServer(setupCode: string, env: Record<string, string> = {}): Promise<EmptyServer> {
   const dir = mkdtempSync(join(tmpdir(), 'benchproof-first-run-'));
-  const mail = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
+  const mail = await startInbox();
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const server: ChildProcess = spawn(process.execPath, [join(root, 'dist/apps/api/apps/api/src/main.js')], {
@@ -63,23 +90,24 @@ export async function emptyServer(setupCode: string, env: Record<string, string>
   return {
     url,
     mail,
-    stop: async () => {
+    stop: () => {
       server.kill('SIGTERM');
-      await mail.close();
+      mail.stop();
       rmSync(dir, { recursive: true, force: true });
     },
   };
 }
 
-/** The newest caught message to `to`, waiting for it; its link (`/join#…`, `/reset-password#…`) is returned. */
-export async function linkFromMail(mail: MailCatcher, to: string, path: string, count: number): Promise<{ subject: string; link: string }> {
-  await mail.waitFor(count, 20_000);
-  const msg = mail
-    .messages()
-    .filter((m) => m.to.includes(to))
-    .at(-1);
+/** The newest caught message to `to` once `count` have arrived (waits up to 20 s); its link (`/join#…`, `/reset-password#…`). */
+export async function linkFromMail(mail: Inbox, to: string, path: string, count: number): Promise<{ subject: string; link: string }> {
+  let all = await mail.messages();
+  for (let i = 0; i < 100 && all.length < count; i++) {
+    await new Promise((r) => setTimeout(r, 200));
+    all = await mail.messages();
+  }
+  const msg = all.filter((m) => m.to.includes(to)).at(-1);
   const link = msg?.text.match(new RegExp(`https?://\\S+${path}#[\\w-]+`))?.[0];
-  if (!msg || !link) throw new Error(`No ${path} link in the mail to ${to}: ${JSON.stringify(mail.messages().map((m) => m.subject))}`);
+  if (!msg || !link) throw new Error(`No ${path} link in the mail to ${to}: ${JSON.stringify(all.map((m) => m.subject))}`);
   return { subject: msg.subject, link };
 }
 

@@ -10,7 +10,7 @@ import { useJobs } from '../api/jobs';
 import { JOBS_PAGE_SIZE, useJobListParams } from '../hooks/use-job-list-params';
 import { JobCards } from './job-cards';
 import { jobBikeLabel } from './job-label';
-import { JobFilters, type Option } from './job-filters';
+import { filtersActive, JobFilters, type Option } from './job-filters';
 import { JobStatusBadge } from './job-status-badge';
 import { PromisedDate } from './promised-date';
 import classes from './jobs.module.css';
@@ -112,6 +112,13 @@ function DesktopTable({ jobs, sort, onSort, currency }: { jobs: JobDto[]; sort: 
   );
 }
 
+/** An empty list: a new workshop's is not the filters' doing. */
+const NoJobs = ({ filtered }: { filtered: boolean }) => (
+  <Text c="dimmed" py="lg">
+    {filtered ? 'No jobs match these filters.' : 'No bikes in the workshop right now. Book one in with the button above.'}
+  </Text>
+);
+
 /** The jobs table: filters in the address bar, paging and sort on the server, cards on phones. */
 export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE, currency = 'EUR' }: { mechanics: Option[]; pageSize?: number; currency?: string }) {
   const { params, includeClosed, update } = useJobListParams(pageSize);
@@ -120,19 +127,11 @@ export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE, currency = 'EU
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   const sort: Sort = { field: params.sort ?? 'promisedOn', order: params.order ?? 'asc' };
   const onSort = (s: Sort) => update({ sort: s.field, order: s.order });
-  // A new workshop's empty list is not the filters' doing.
-  const filtered = Boolean(
-    params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed || params.readyUnpaid,
-  );
   return (
     <>
       <JobFilters params={params} includeClosed={includeClosed} update={update} mechanics={mechanics} />
       <QueryState isLoading={jobs.isLoading} error={jobs.error} />
-      {data && data.items.length === 0 && (
-        <Text c="dimmed" py="lg">
-          {filtered ? 'No jobs match these filters.' : 'No bikes in the workshop right now. Book one in with the button above.'}
-        </Text>
-      )}
+      {data && data.items.length === 0 && <NoJobs filtered={filtersActive(params, includeClosed)} />}
       {data && data.items.length > 0 && (
         <>
           <Group justify="space-between" mb="xs">
