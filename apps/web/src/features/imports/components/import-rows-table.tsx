@@ -50,7 +50,7 @@ export function ImportRowsTable({ rows }: { rows: ImportRow[] }) {
                 <Text size="sm" fw={600}>
                   {r.customerName || '—'}
                 </Text>
-                <Text size="sm">{r.bikeLabel ?? 'No bike'}</Text>
+                <Text size="sm">{r.bikeLabel ?? '—'}</Text>
               </Table.Td>
               <Table.Td>
                 <RowStatus row={r} />
