@@ -73,7 +73,7 @@ describe('the jobs table and the moves a job offers', () => {
     await signIn(b.page, DESK);
     await b.page.goto('/jobs?status=booked_in');
     const overdueCard = b.page
-      .getByRole('link', { name: /^Job J-/ })
+      .getByRole('link', { name: /^J-\d{4}-\d{4} / })
       .filter({ hasText: /Overdue · / })
       .first();
     await overdueCard.waitFor();
