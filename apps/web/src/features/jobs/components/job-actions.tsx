@@ -20,14 +20,7 @@ function MoreMoves({ moves, onPick }: { moves: Move[]; onPick: (move: Move) => v
   const [ready, wake] = useAfterFirstScreen();
   const [tapped, setTapped] = useState(false);
   const still = (
-    <Button
-      size="lg"
-      variant="default"
-      aria-label="Other moves"
-      leftSection={<IconDots />}
-      style={{ flex: '1 0 auto' }}
-      onClick={() => (setTapped(true), wake())}
-    >
+    <Button size="lg" variant="default" leftSection={<IconDots />} style={{ flex: '1 0 auto' }} onClick={() => (setTapped(true), wake())}>
       More moves
     </Button>
   );

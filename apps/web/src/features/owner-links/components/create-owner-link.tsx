@@ -19,7 +19,7 @@ export function CreateOwnerLink({ jobId }: { jobId: number }) {
   return (
     <>
       <Group align="flex-end">
-        <NumberInput label="Works for (days)" value={days} onChange={(v) => setDays(Number(v) || 14)} min={1} max={60} w={140} size="md" />
+        <NumberInput label="Works for (days)" value={days} onChange={(v) => setDays(Number(v) || 14)} min={1} max={60} w={170} />
         <Button
           size="md"
           mih={44}
