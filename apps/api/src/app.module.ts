@@ -38,6 +38,7 @@ import { PasswordResetsModule } from './password-resets';
 import { SetupModule } from './setup';
 import { ImportsModule } from './imports';
 import { TwoFactorModule } from './two-factor';
+import { MetricsModule } from './metrics';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
@@ -69,6 +70,7 @@ const FEATURES = [
   SetupModule,
   ImportsModule,
   PaymentsModule,
+  MetricsModule,
 ];
 
 @Module({})
