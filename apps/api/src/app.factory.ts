@@ -47,7 +47,6 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   app.use(annotationSaveBody());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());
-  app.enableShutdownHooks();
   setUpOpenApi(app);
   serveWeb(app, cfg.WEB_DIST);
   await seedWhenEmpty(app, cfg);
