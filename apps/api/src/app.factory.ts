@@ -36,9 +36,12 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   // Behind a proxy, TRUST_PROXY says which hops may set X-Forwarded-For; without it req.ip is the socket's address.
   app.set('trust proxy', trustProxy(cfg.TRUST_PROXY));
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
-  // JSON lists and the OpenAPI document. Media bytes (JPEG, MP4…) are already compressed: their routes skip the middleware.
+  // JSON lists and the OpenAPI document. Media bytes (JPEG, MP4…) are already compressed: their routes skip the middleware,
+  // and so does a client that accepts no encoding (scripts): the middleware wraps the response for nothing there.
   const compress = compression({ threshold: 1024 });
-  app.use((req: Request, res: Response, next: NextFunction) => (MEDIA_BYTES.test(req.path) ? next() : compress(req, res, next)));
+  app.use((req: Request, res: Response, next: NextFunction) =>
+    !req.headers['accept-encoding'] || MEDIA_BYTES.test(req.path) ? next() : compress(req, res, next),
+  );
   app.use(cookieParser());
   // A CSV import carries a whole spreadsheet (IMPORT_MAX_CHARS); every other JSON body keeps the default 100 kB limit.
   // Wrapped: Nest skips its own JSON parser when it finds a middleware named 'jsonParser' anywhere in the stack.

@@ -83,7 +83,7 @@ export class JobsService {
       actor.shopId,
       rows.map((r) => r.id),
     );
-    const items = rows.map((r) => ({ ...toJobListDto(r, today), dueMinor: due.get(r.id) ?? null }));
+    const items = rows.map((r) => toJobListDto(r, today, due.get(r.id) ?? null));
     return { items, total, page: query.page, pageSize: query.pageSize };
   }
 

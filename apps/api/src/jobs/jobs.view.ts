@@ -30,7 +30,7 @@ const person = (id: number | null, name: string | null | undefined) => (id ? { i
 const staffMember = (id: number | null, staff: Map<number, string>) => person(id, id ? staff.get(id) : undefined);
 
 /** A list row from the joined read model (owner, bike and mechanic names come with the row). */
-export function toJobListDto(row: JobListRow, today: string): JobDto {
+export function toJobListDto(row: JobListRow, today: string, dueMinor: number | null = null): JobDto {
   // One object per row, written out (the list's hot path: no spread of an intermediate object).
   return {
     id: row.id,
@@ -41,7 +41,7 @@ export function toJobListDto(row: JobListRow, today: string): JobDto {
     reportedSymptoms: row.reportedSymptoms,
     createdAt: row.createdAt.toISOString(),
     overdue: isOverdue(row, today),
-    dueMinor: null,
+    dueMinor,
     customer: { id: row.customerId, name: row.ownerName },
     bike: { id: row.bikeId, maker: row.bikeMaker, model: row.bikeModel, colour: row.bikeColour || null, serialNumber: row.bikeSerial || null },
   };

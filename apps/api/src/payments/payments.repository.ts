@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, inArray, isNotNull } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, isNotNull, sql } from 'drizzle-orm';
+import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { DB, type Db } from '../core/db';
 import { checkoutSessions, jobs, payments, recommendations, users, workEntries } from '../db/schema';
 import type { DbTx } from '../core/db';
@@ -19,31 +20,54 @@ export class PaymentsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
   approvedRecommendations(shopId: number, jobIds: number[]): ChargedRecommendation[] {
-    const r = recommendations;
-    return this.db
-      .select({ jobId: r.jobId, parts: r.parts, labourHundredths: r.labourHundredths, labourRateMinor: r.labourRateMinor, taxRateBp: r.taxRateBp })
-      .from(r)
-      .where(and(eq(r.shopId, shopId), inArray(r.jobId, jobIds), eq(r.decisionStatus, 'approved')))
-      .all();
+    return this.charged().recommendations.all({ shopId, ids: JSON.stringify(jobIds) });
   }
 
   chargedWork(shopId: number, jobIds: number[]): ChargedWork[] {
-    const w = workEntries;
-    return this.db
-      .select({ jobId: w.jobId, minutes: w.minutes, rateMinor: w.rateMinor })
-      .from(w)
-      .where(and(eq(w.shopId, shopId), inArray(w.jobId, jobIds), isNotNull(w.rateMinor)))
-      .all()
+    return this.charged()
+      .work.all({ shopId, ids: JSON.stringify(jobIds) })
       .map((x) => ({ ...x, rateMinor: x.rateMinor ?? 0 }));
   }
 
-  paymentsOf(shopId: number, jobIds: number[], tx?: DbTx): PaymentRow[] {
-    return (tx ?? this.db)
-      .select()
-      .from(payments)
-      .where(and(eq(payments.shopId, shopId), inArray(payments.jobId, jobIds)))
-      .orderBy(asc(payments.at), asc(payments.id))
-      .all();
+  /** Same connection inside a transaction (better-sqlite3), so the prepared statement reads the caller's writes. */
+  paymentsOf(shopId: number, jobIds: number[], _tx?: DbTx): PaymentRow[] {
+    return this.charged().payments.all({ shopId, ids: JSON.stringify(jobIds) });
+  }
+
+  /**
+   * The balance's three reads, prepared once (first use, after migrations) with the job ids bound as one
+   * JSON list: every jobs-list page asks for 20 balances, and building and preparing three statements per
+   * request cost several times more than running them (issue 22).
+   */
+  private charged() {
+    return (this.statements ??= this.prepareCharged());
+  }
+
+  private statements: ReturnType<PaymentsRepository['prepareCharged']> | undefined;
+
+  private prepareCharged() {
+    const shopId = sql.placeholder('shopId');
+    const inIds = (col: SQLiteColumn) => sql`${col} IN (SELECT value FROM json_each(${sql.placeholder('ids')}))`;
+    const r = recommendations;
+    const w = workEntries;
+    return {
+      recommendations: this.db
+        .select({ jobId: r.jobId, parts: r.parts, labourHundredths: r.labourHundredths, labourRateMinor: r.labourRateMinor, taxRateBp: r.taxRateBp })
+        .from(r)
+        .where(and(eq(r.shopId, shopId), inIds(r.jobId), eq(r.decisionStatus, 'approved')))
+        .prepare(),
+      work: this.db
+        .select({ jobId: w.jobId, minutes: w.minutes, rateMinor: w.rateMinor })
+        .from(w)
+        .where(and(eq(w.shopId, shopId), inIds(w.jobId), isNotNull(w.rateMinor)))
+        .prepare(),
+      payments: this.db
+        .select()
+        .from(payments)
+        .where(and(eq(payments.shopId, shopId), inIds(payments.jobId)))
+        .orderBy(asc(payments.at), asc(payments.id))
+        .prepare(),
+    };
   }
 
   readyJobIds(shopId: number): number[] {

@@ -9,8 +9,20 @@ export type ShopRow = typeof shops.$inferSelect;
 export class ShopsRepository {
   constructor(@Inject(DB) private readonly db: Db) {}
 
+  /** Read on many requests (the jobs list's balances, the job page): prepared once, on first use. */
   find(id: number): ShopRow | undefined {
-    return this.db.select().from(shops).where(eq(shops.id, id)).get();
+    this.byId ??= this.prepareById();
+    return this.byId.get({ id });
+  }
+
+  private byId: ReturnType<ShopsRepository['prepareById']> | undefined;
+
+  private prepareById() {
+    return this.db
+      .select()
+      .from(shops)
+      .where(eq(shops.id, sql.placeholder('id')))
+      .prepare();
   }
 
   insert(row: typeof shops.$inferInsert): ShopRow {

@@ -33,6 +33,32 @@ describe('sign-in, sessions and CSRF', () => {
     expect(res.body.code).toBe('CSRF_MISMATCH');
   });
 
+  it('keeps the CSRF token of the session on a page load, and that token still lets a change through', async () => {
+    const { agent, csrf } = await t.signIn(DEMO.manager);
+    const again = await agent.get('/api/auth/session').expect(200);
+    expect(again.body.csrfToken).toBe(csrf);
+    await agent
+      .patch('/api/shop/settings')
+      .set('x-csrf-token', again.body.csrfToken as string)
+      .send({ labourRateMinor: 4500 })
+      .expect(200);
+    // A new sign-in is a new session: its token differs, and the first session's token is refused with the new cookie.
+    const other = await t.signIn(DEMO.manager);
+    expect(other.csrf).not.toBe(csrf);
+    const res = await other.agent.patch('/api/shop/settings').set('x-csrf-token', csrf).send({ labourRateMinor: 4600 }).expect(403);
+    expect(res.body.code).toBe('CSRF_MISMATCH');
+  });
+
+  it('compresses a list over 1 KB for a client that accepts gzip, and sends it plain to one that accepts no encoding', async () => {
+    const { agent } = await t.signIn(DEMO.desk);
+    const zipped = await agent.get('/api/jobs').set('Accept-Encoding', 'gzip').expect(200);
+    expect(zipped.headers['content-encoding']).toBe('gzip');
+    const plain = await agent.get('/api/jobs').set('Accept-Encoding', '').expect(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(Number(plain.headers['content-length'])).toBeGreaterThan(1024);
+    expect(plain.body.items).toEqual(zipped.body.items);
+  });
+
   it('tells an expired session apart from a missing one', async () => {
     const jwt = t.app.get(JwtService);
     const expired = await jwt.signAsync({ sub: 1, shop: 1, role: 'manager' }, { expiresIn: -10 });

@@ -40,8 +40,12 @@ export class CsrfGuard implements CanActivate {
   }
 }
 
-/** Issues a CSRF token for the session cookie about to be set (or already present). */
+/**
+ * Issues a CSRF token for the session cookie about to be set (or already present). A new session always
+ * gets a new token; otherwise the token already in the cookie is kept when its HMAC still matches this
+ * session (csrf-csrf checks that), which spares the random bytes on every page load's session check.
+ */
 export function issueCsrfToken(csrf: DoubleCsrfUtilities, req: Request, res: Response, session?: string): string {
   if (session) (req.cookies as Record<string, string>)[SESSION_COOKIE] = session;
-  return csrf.generateCsrfToken(req, res, { overwrite: true });
+  return csrf.generateCsrfToken(req, res, { overwrite: session !== undefined });
 }
