@@ -86,7 +86,7 @@ describe('SIGTERM drains the server', () => {
     const startServer = async () => {
       const p = spawn(process.execPath, [MAIN], { cwd: root, env, stdio: ['ignore', process.env.DRAIN_LOG ? 'inherit' : 'ignore', 'inherit'] });
       procs.push(p);
-      await until('the server', async () => (await fetch(`${base}/api/health`)).ok, 60_000);
+      await until('the server', async () => (await fetch(`${base}/api/health`)).ok, 120_000);
       return p;
     };
     const signIn = async () => {
@@ -181,5 +181,5 @@ describe('SIGTERM drains the server', () => {
     expect(outbox.map((m) => m.status)).toEqual(['sent']);
     server.kill('SIGTERM');
     expect(await new Promise((ok) => server.once('exit', ok))).toBe(0);
-  }, 180_000);
+  }, 300_000);
 });

@@ -42,7 +42,7 @@ export function EraseCustomer({ customerId, name }: { customerId: number; name: 
       <Button size="lg" color="red" variant="outline" leftSection={<IconTrash />} onClick={open}>
         Erase this customer
       </Button>
-      <Modal opened={opened} onClose={close} title={`Erase ${name}?`} size="lg">
+      <Modal opened={opened} onClose={close} title={done ? 'Erased' : `Erase ${name}?`} size="lg">
         {done ? (
           <Alert color="teal" role="status" title="Customer erased">
             {done.jobs} {done.jobs === 1 ? 'job' : 'jobs'} cleared of personal data; {done.mediaDeleted} photos and videos deleted, {done.mediaKept} kept with
