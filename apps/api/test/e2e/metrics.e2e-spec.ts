@@ -70,10 +70,10 @@ describe('metrics: with a token and a loopback port', () => {
   });
 
   it('reports queue depth and the age of the oldest queued task by kind, and the mail outbox', async () => {
-    // A backlog: three thumbnails waiting since two minutes ago (not due yet, so the runner leaves them queued).
+    // A backlog: three showcase zips (a kind the demo never queues) waiting since two minutes ago (not due yet, so the runner leaves them queued).
     const now = Date.now();
     const insert = db.prepare(
-      `INSERT INTO tasks (shop_id, kind, key, payload, status, attempts, progress, next_run_at, retry_later, created_at, updated_at) VALUES (NULL, 'media.phash', ?, '{}', 'queued', 0, 0, ?, 0, ?, ?)`,
+      `INSERT INTO tasks (shop_id, kind, key, payload, status, attempts, progress, next_run_at, retry_later, created_at, updated_at) VALUES (NULL, 'showcase.export', ?, '{}', 'queued', 0, 0, ?, 0, ?, ?)`,
     );
     for (const k of ['m1', 'm2', 'm3']) insert.run(k, now + 3600_000, now - 120_000 + Number(k.slice(1)), now);
     const desk = await t.signIn(DEMO.desk);
@@ -81,8 +81,8 @@ describe('metrics: with a token and a loopback port', () => {
     await desk.agent.post(`/api/jobs/${jobId}/owner-links`).send({ send: true }).expect(201);
     for (let i = 0; i < 100 && sample(await scrape(), 'benchproof_mail_outbox', { state: 'failed' }) !== 1; i++) await new Promise((r) => setTimeout(r, 100));
     const text = await scrape();
-    expect(sample(text, 'benchproof_tasks', { kind: 'media.phash', state: 'queued' })).toBe(3);
-    expect(sample(text, 'benchproof_tasks_oldest_age_seconds', { kind: 'media.phash' })).toBeGreaterThanOrEqual(119);
+    expect(sample(text, 'benchproof_tasks', { kind: 'showcase.export', state: 'queued' })).toBe(3);
+    expect(sample(text, 'benchproof_tasks_oldest_age_seconds', { kind: 'showcase.export' })).toBeGreaterThanOrEqual(119);
     expect(sample(text, 'benchproof_mail_outbox', { state: 'failed' })).toBe(1);
     expect(sample(text, 'benchproof_mail_outbox', { state: 'queued' })).toBe(0);
     expect(sample(text, 'benchproof_tasks', { kind: 'mail.send', state: 'failed' })).toBe(1);
