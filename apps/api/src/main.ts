@@ -2,12 +2,14 @@ import './threadpool';
 import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { createApp } from './app.factory';
+import { isPrimaryOfMany, runPrimary } from './cluster';
 import { ConfigError, loadConfig } from './config';
 import { drainOnSignals } from './core/http';
 import { TASK_RUNNER, type TaskRunner } from './infra/tasks';
 
 async function bootstrap(): Promise<void> {
   const cfg = loadConfig();
+  if (isPrimaryOfMany(cfg.WEB_CONCURRENCY)) return runPrimary(cfg.WEB_CONCURRENCY);
   const app = await createApp(cfg);
   await app.listen(cfg.PORT, '0.0.0.0');
   const logger = new Logger('BenchProof');
