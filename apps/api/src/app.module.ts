@@ -42,6 +42,7 @@ import { PasswordResetsModule } from './password-resets';
 import { SetupModule } from './setup';
 import { ImportsModule } from './imports';
 import { TwoFactorModule } from './two-factor';
+import { MetricsModule } from './metrics';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
@@ -74,6 +75,7 @@ const FEATURES = [
   ImportsModule,
   PaymentsModule,
   TextsModule,
+  MetricsModule,
 ];
 
 @Module({})

@@ -148,6 +148,16 @@ const EnvSchema = z.object({
   ORPHAN_GRACE_MINUTES: z.coerce.number().positive().default(60),
   /** Readiness reports `low` (and managers see a warning) when the database's or the uploads' disk has less free space than this. */
   DISK_LOW_MB: z.coerce.number().min(0).default(1024),
+  /**
+   * Prometheus metrics, off unless one is set. METRICS_PORT: a second listener on METRICS_HOST (loopback by default)
+   * serving GET /metrics; METRICS_TOKEN: GET /api/metrics on the main port with `Authorization: Bearer <token>`
+   * (with METRICS_PORT too, that listener asks for the token as well). Never public: no token, no port, no endpoint.
+   */
+  METRICS_PORT: z.coerce.number().int().min(0).max(65535).optional(),
+  METRICS_HOST: z.string().default('127.0.0.1'),
+  METRICS_TOKEN: z.string().min(24, 'METRICS_TOKEN must be at least 24 characters').optional(),
+  /** On SIGTERM: how long in-flight requests and running tasks get to finish before they are cut off (ms). */
+  SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).default(10_000),
   /** pino level; 'silent' turns request logs off (tests). */
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });

@@ -118,6 +118,22 @@ const signedIn: RouteObject[] = [
     ),
   },
   {
+    path: 'settings/data',
+    loader: requireAction('backups.manage'),
+    lazy: page(
+      inFrame((p) => p.data),
+      (m) => m.DataRoute,
+    ),
+  },
+  {
+    path: 'settings/work',
+    loader: requireAction('work.retry'),
+    lazy: page(
+      inFrame((p) => p.work),
+      (m) => m.WorkRoute,
+    ),
+  },
+  {
     path: 'account/password',
     lazy: page(
       inFrame((p) => p.password),

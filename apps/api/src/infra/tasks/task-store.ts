@@ -75,6 +75,18 @@ export class TaskStore {
     });
   }
 
+  /**
+   * Shutdown: this owner's running tasks go back to the queue, due now, without the attempt the shutdown cut short.
+   * Their handlers, if they still finish, find the row no longer theirs (`mine`) and change nothing.
+   */
+  release(owner: string, now: Date): number {
+    return this.db
+      .update(tasks)
+      .set({ status: 'queued', leaseOwner: null, leasedUntil: null, nextRunAt: now, attempts: sql`max(${tasks.attempts} - 1, 0)`, updatedAt: now })
+      .where(and(eq(tasks.status, 'running'), eq(tasks.leaseOwner, owner)))
+      .run().changes;
+  }
+
   /** Only the holder of the lease may touch a running task (a slow process that lost it must not). */
   private mine(id: number, owner: string) {
     return and(eq(tasks.id, id), eq(tasks.status, 'running'), eq(tasks.leaseOwner, owner));

@@ -44,14 +44,17 @@ function createRunner(db: Db, clock: Clock, cfg: AppConfig, redis: MaybeRedis): 
   exports: [TASK_RUNNER],
 })
 export class TasksModule implements OnApplicationBootstrap, BeforeApplicationShutdown {
-  constructor(@Inject(TASK_RUNNER) private readonly runner: DrivenRunner) {}
+  constructor(
+    @Inject(TASK_RUNNER) private readonly runner: DrivenRunner,
+    @Inject(APP_CONFIG) private readonly cfg: AppConfig,
+  ) {}
 
   onApplicationBootstrap(): void {
     this.runner.start();
   }
 
-  /** Before the database closes: finish what is running, take nothing new. */
+  /** Before the database closes: take nothing new, finish what is running within the grace, release the rest. */
   async beforeApplicationShutdown(): Promise<void> {
-    await this.runner.stop();
+    await this.runner.stop(this.cfg.SHUTDOWN_GRACE_MS);
   }
 }

@@ -98,6 +98,11 @@ export interface TaskRunner {
   health?(): TaskRunnerHealth;
   /** Deletes finished (done) tasks last touched before `before`; returns how many. */
   prune?(before: Date): number;
+  /**
+   * Shutdown (SIGTERM): takes no new work, waits up to `graceMs` for running tasks, then releases the leases of those
+   * still running so the next process takes them at once. Idempotent: a second call waits on the first.
+   */
+  stop?(graceMs?: number): Promise<void>;
 }
 
 export interface TaskRunnerHealth {
