@@ -1,10 +1,45 @@
 import react from '@vitejs/plugin-react';
 import { compression, defineAlgorithm } from 'vite-plugin-compression2';
+import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
   // Precompressed copies next to each asset; the API serves them by Accept-Encoding.
-  plugins: [react(), compression({ algorithms: [defineAlgorithm('brotliCompress'), defineAlgorithm('gzip')], threshold: 1024 })],
+  plugins: [
+    react(),
+    // Installable app: manifest with our own mark, a Workbox service worker that precaches the shell (HTML, JS, CSS,
+    // fonts, icons). Nothing from /api is cached by it (owner pages and every image included), and owner pages (/o/…)
+    // never get the cached shell: they always come from the server. A new version waits for the user's tap.
+    VitePWA({
+      registerType: 'prompt',
+      injectRegister: false,
+      manifest: {
+        name: 'BenchProof',
+        short_name: 'BenchProof',
+        description: 'Service visits documented at the workstand.',
+        start_url: '/jobs',
+        scope: '/',
+        display: 'standalone',
+        orientation: 'portrait',
+        background_color: '#FFFFFF',
+        theme_color: '#173F3C',
+        icons: [
+          { src: '/icons/icon-192.png', sizes: '192x192', type: 'image/png' },
+          { src: '/icons/icon-512.png', sizes: '512x512', type: 'image/png' },
+          { src: '/icons/icon-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+        ],
+      },
+      workbox: {
+        globPatterns: ['**/*.{js,css,html,svg,png,woff2}'],
+        globIgnores: ['**/*.{br,gz}', 'customers-import-sample.csv'],
+        maximumFileSizeToCacheInBytes: 4 * 1024 * 1024,
+        navigateFallback: '/index.html',
+        navigateFallbackDenylist: [/^\/api\//, /^\/o\//],
+        runtimeCaching: [],
+      },
+    }),
+    compression({ algorithms: [defineAlgorithm('brotliCompress'), defineAlgorithm('gzip')], threshold: 1024 }),
+  ],
   build: {
     outDir: '../../dist/apps/web',
     emptyOutDir: true,

@@ -23,12 +23,16 @@ import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './core/clock';
 import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
+import { RedisModule } from './infra/redis';
+import { LiveUpdatesModule } from './infra/live';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { ReportsModule } from './reports';
 import { MailModule } from './mail';
 import { PaymentsModule } from './payments';
 import { PaymentProviderModule } from './infra/payments';
+import { TextProviderModule } from './infra/texts';
+import { TextsModule } from './texts';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
@@ -69,6 +73,7 @@ const FEATURES = [
   SetupModule,
   ImportsModule,
   PaymentsModule,
+  TextsModule,
 ];
 
 @Module({})
@@ -79,9 +84,12 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot(cfg),
         ClockModule,
+        RedisModule,
+        LiveUpdatesModule,
         TasksModule,
         ScheduleModule.forRoot(),
         PaymentProviderModule,
+        TextProviderModule,
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,

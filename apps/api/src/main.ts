@@ -2,10 +2,12 @@ import './threadpool';
 import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { createApp } from './app.factory';
+import { isPrimaryOfMany, runPrimary } from './cluster';
 import { ConfigError, loadConfig } from './config';
 
 async function bootstrap(): Promise<void> {
   const cfg = loadConfig();
+  if (isPrimaryOfMany(cfg.WEB_CONCURRENCY)) return runPrimary(cfg.WEB_CONCURRENCY);
   const app = await createApp(cfg);
   await app.listen(cfg.PORT, '0.0.0.0');
   new Logger('BenchProof').log(`Serving web and API on http://localhost:${cfg.PORT}`);

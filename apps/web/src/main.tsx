@@ -5,6 +5,7 @@ import { sessionKey } from './features/auth';
 import { AppProvider } from './app/provider';
 import { createRouter } from './app/router';
 import { handleSessionLost } from './lib/api-client';
+import { startServiceWorker } from './lib/app-update';
 import { queryClient } from './lib/query-client';
 
 const router = createRouter();
@@ -15,6 +16,8 @@ handleSessionLost(() => {
   const here = window.location.pathname + window.location.search;
   if (!window.location.pathname.startsWith('/sign-in')) void router.navigate(`/sign-in?reason=expired&next=${encodeURIComponent(here)}`);
 });
+
+startServiceWorker();
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>

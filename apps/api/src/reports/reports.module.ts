@@ -1,4 +1,4 @@
-import { ThrottlerModule } from '@nestjs/throttler';
+import { sharedThrottlerModule } from '../infra/redis';
 import { Module } from '@nestjs/common';
 import { MulterModule } from '@nestjs/platform-express';
 import { AnnotationsModule } from '../annotations';
@@ -31,7 +31,7 @@ import { VerifyController } from './verify.controller';
  */
 @Module({
   imports: [
-    ThrottlerModule.forRoot([{ ttl: 60_000, limit: 30 }]),
+    sharedThrottlerModule([{ ttl: 60_000, limit: 30 }]),
     AuditModule,
     JobsModule,
     ShopsModule,

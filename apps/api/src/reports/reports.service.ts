@@ -12,7 +12,6 @@ import { type ByteRange, STORAGE, type Storage } from '../infra/storage';
 import { JobAccess } from '../jobs';
 import { MailService } from '../mail';
 import { ShopsService } from '../shops';
-import type { ReportSnapshot } from './report-data';
 import { ReportRenderService } from './report-render.service';
 import { ReportSnapshotService } from './report-snapshot.service';
 import { toReportDto } from './reports.mapper';
@@ -180,7 +179,7 @@ export class ReportsService implements OnApplicationBootstrap {
   verify(hash: string): VerifyResult {
     const row = this.repo.findIssuedByHash(hash);
     if (!row?.version || !row.issuedAt) return { issued: false };
-    const snap = row.snapshot as ReportSnapshot;
+    const snap = row.snapshot;
     return { issued: true, shopName: snap.shop.name, jobNumber: snap.job.number, version: row.version, issuedAt: row.issuedAt.toISOString() };
   }
 
@@ -197,7 +196,7 @@ export class ReportsService implements OnApplicationBootstrap {
   }
 
   private filename(row: ReportRow): string {
-    const number = (row.snapshot as ReportSnapshot).job.number;
+    const number = row.snapshot.job.number;
     return row.kind === 'issued' ? `bench-report-${number}-v${row.version}.pdf` : `bench-report-${number}-draft-${row.id}.pdf`;
   }
 }

@@ -2,6 +2,7 @@ import type { OutboxMessageDto } from '@benchproof/contracts';
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
 import { eventually, FakeReportFiles, freePort, makePdf, sha256 } from '../mail/mail-fixtures';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
+import { ALL_PASS } from '../support/final-check';
 import { bookIn } from './records-helpers';
 
 /** Short retry and sweep times so an outage of a second is retried within the test. */
@@ -62,7 +63,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
     expect((await desk.agent.post(`/api/jobs/${job.id}/reports/502/send`).send({}).expect(404)).body.code).toBe('NOT_FOUND');
     const mech = await t.signIn(DEMO.mechanic);
     await mech.agent.post(`/api/jobs/${other.id}/reports/502/send`).send({}).expect(403);
-    const quiet = await bookIn(desk, { newCustomer: { name: 'Ansel Brook', email: null, phone: '+44 1632 960123', preferredChannel: 'phone', notes: null } });
+    const quiet = await bookIn(desk, { newCustomer: { name: 'Ansel Brook', email: null, phone: '+44 20 7946 0123', preferredChannel: 'phone', notes: null } });
     await reports.issue(503, desk.user.shopId, quiet.id, await makePdf('quiet'));
     const res = await desk.agent.post(`/api/jobs/${quiet.id}/reports/503/send`).send({}).expect(422);
     expect(res.body.code).toBe('NO_OWNER_EMAIL');
@@ -78,16 +79,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
       await checker.agent
         .post(`/api/jobs/${jobId}/final-check`)
         .send({
-          items: {
-            brakes: true,
-            shifting: true,
-            steering: true,
-            fasteners_torqued: true,
-            wheels_true_centred: true,
-            tyres_pressure: true,
-            axles_closed: true,
-            test_ride: true,
-          },
+          items: ALL_PASS,
           passed: true,
         })
         .expect(201);

@@ -47,7 +47,7 @@ async function signedInRequest(email: string): Promise<{ req: APIRequestContext;
 }
 
 /** Books a bike in as the front desk, for a seed without jobs. */
-async function bookInJob(): Promise<number> {
+export async function bookInJob(): Promise<number> {
   const { req, csrf } = await signedInRequest('desk@lantern-spoke.test');
   const res = await req.post('/api/jobs', {
     headers: { 'x-csrf-token': csrf },

@@ -35,10 +35,20 @@ export function contractResolver<V>(schema: z.ZodType, toRequest: (values: V) =>
  * shows only other codes in its alert.
  */
 export function showServerFieldErrors<V>(form: UseFormReturnType<V>, error: unknown, toField: PathMap = samePath): boolean {
-  if (!(error instanceof ApiError) || error.code !== 'VALIDATION_FAILED') return false;
+  if (!(error instanceof ApiError)) return false;
+  const field = FIELD_CODES[error.code];
+  if (field) {
+    // The server read the box and refused it (e.g. a phone number no country has): its message goes under that box.
+    form.setFieldError(toField(field), error.message);
+    return true;
+  }
+  if (error.code !== 'VALIDATION_FAILED') return false;
   form.setErrors(error.fieldErrors(toField));
   return true;
 }
+
+/** Codes that are about one box of a form, and that box's request path. */
+const FIELD_CODES: Partial<Record<ApiError['code'], string>> = { PHONE_INVALID: 'phone' };
 
 // Zod-free, so pages that only show a save's failure (the owner page's payment card) load no form checks.
 export { formFailure, JOB_CLOSED_MESSAGE } from './messages';

@@ -8,6 +8,7 @@ export const JOB_CLOSED_MESSAGE = 'This job was handed over; its records are fro
 /** Codes whose wording on a form differs from the server's default message; null = shown under the boxes instead. */
 const FORM_MESSAGES: Partial<Record<ApiError['code'], string | null>> = {
   VALIDATION_FAILED: null,
+  PHONE_INVALID: null,
   JOB_CLOSED: JOB_CLOSED_MESSAGE,
 };
 

@@ -35,7 +35,7 @@ export class TaskStore {
       progress: 0,
       nextRunAt: spec.runAt ?? now,
       retryLater: false,
-      payload: (spec.payload ?? {}) as Record<string, unknown>,
+      payload: spec.payload ?? {},
       updatedAt: now,
     };
     (tx ?? this.db)

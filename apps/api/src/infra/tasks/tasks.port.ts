@@ -1,5 +1,5 @@
 import type { DbTx } from '../../core/db';
-import type { NoPayload, TaskKind, TaskPayloads } from './task-kinds';
+import type { NoPayload, TaskKind, TaskPayload, TaskPayloads } from './task-kinds';
 
 /** What a piece of slow work is: its kind, the entity it is about, and the ids the handler needs. */
 export type TaskSpec<K extends TaskKind = TaskKind> = {
@@ -16,7 +16,7 @@ export interface RawTaskSpec {
   kind: string;
   key: string;
   shopId: number | null;
-  payload?: object;
+  payload?: TaskPayload;
   runAt?: Date;
 }
 
@@ -25,7 +25,7 @@ export interface RawTaskContext {
   kind: string;
   key: string;
   shopId: number | null;
-  payload: object;
+  payload: TaskPayload;
   attempt: number;
   /** True when a failure of this attempt ends the quick retries (the task then fails, or waits long if the error is transient). */
   final: boolean;

@@ -1,25 +1,25 @@
 import { ROLE_LABELS, type SessionUser } from '@benchproof/contracts';
-import { ActionIcon, Burger, Button, Group, Stack, Text } from '@mantine/core';
+import { ActionIcon, Burger, Group, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconKey, IconLogout } from '@tabler/icons-react';
-import { Suspense } from 'react';
-import { Link, Outlet, useNavigate } from 'react-router';
+import { IconKey } from '@tabler/icons-react';
+import { Suspense, useEffect } from 'react';
+import { Link, Outlet } from 'react-router';
 import { Logo } from '../../components/logo';
 import { DatesLocale } from '../../lib/dates';
-import { useLogout, useSession } from '../../features/auth';
+import { useSession } from '../../features/auth';
 import { DiskSpaceWarning } from '../../features/disk-space';
+import { attachShots, UploadBadge } from '../../features/media';
 import { useShopSettings } from '../../features/shop-settings';
 import { shopCan } from '../shop-access';
 import classes from './app-layout.module.css';
 import { Navigation } from './navigation';
+import { SignOutButton } from './sign-out';
+import { UpdatePrompt } from './update-prompt';
 
 /** The signed-in user's name and role, the change-password key and sign-out, at the header's right. */
 function AccountActions({ user }: { user: SessionUser }) {
-  const logout = useLogout();
-  const navigate = useNavigate();
-  const signOut = () => logout.mutate(undefined, { onSettled: () => void navigate('/sign-in', { replace: true }) });
   return (
-    <Group gap="sm" wrap="nowrap">
+    <Group gap="xs" wrap="nowrap">
       <Stack gap={0} visibleFrom="xs" align="flex-end">
         <Text size="sm" fw={600}>
           {user.name}
@@ -31,9 +31,7 @@ function AccountActions({ user }: { user: SessionUser }) {
       <ActionIcon component={Link} to="/account/password" variant="subtle" color="gray" size={44} aria-label="Change password" title="Change password">
         <IconKey size={22} />
       </ActionIcon>
-      <Button variant="subtle" color="gray" leftSection={<IconLogout size={20} />} onClick={signOut} loading={logout.isPending}>
-        Sign out
-      </Button>
+      <SignOutButton />
     </Group>
   );
 }
@@ -43,6 +41,11 @@ export function AppLayout() {
   const [opened, { toggle, close }] = useDisclosure();
   const { data: user } = useSession();
   const { data: shop } = useShopSettings();
+  // The signed-in user's shots kept on this phone come back and carry on uploading (app open, sign-in).
+  const userId = user?.id;
+  useEffect(() => {
+    if (userId !== undefined) void attachShots(userId);
+  }, [userId]);
   if (!user) return null;
   const can = shopCan(user.role, shop);
 
@@ -50,7 +53,7 @@ export function AppLayout() {
     <>
       <header className={classes.header}>
         <Group h="100%" px="md" justify="space-between" wrap="nowrap">
-          <Group gap="sm" wrap="nowrap">
+          <Group gap="xs" wrap="nowrap">
             <Burger
               opened={opened}
               onClick={toggle}
@@ -61,6 +64,7 @@ export function AppLayout() {
               aria-controls="app-navigation"
             />
             <Logo size={30} />
+            <UploadBadge />
           </Group>
           <AccountActions user={user} />
         </Group>
@@ -74,6 +78,7 @@ export function AppLayout() {
             <DiskSpaceWarning />
           </Suspense>
         )}
+        <UpdatePrompt />
         <DatesLocale locale={shop?.dateLocale}>
           <Outlet />
         </DatesLocale>

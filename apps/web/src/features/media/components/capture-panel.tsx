@@ -8,6 +8,8 @@ import { uploadStore, useUploadQueue } from '../upload/upload-store';
 import { AddFiles } from './add-files';
 import { BulkTagBar } from './bulk-tag-bar';
 import { ShotCard } from './shot-card';
+import { StorageNotice } from './storage-notice';
+import { OfflineNotice } from './upload-badge';
 
 const DEFAULT_TAGS: ShotTags = { phase: 'before', area: 'whole_bike', caption: '' };
 
@@ -31,6 +33,8 @@ export function CapturePanel({ jobId }: { jobId: number }) {
 
   return (
     <Stack gap="md">
+      <OfflineNotice />
+      <StorageNotice />
       <AddFiles onFiles={add} />
       <BulkTagBar tags={tags} onTags={setTags} items={items} />
       <QueueSummary done={items.filter((i) => i.status === 'done').length} total={items.length} />

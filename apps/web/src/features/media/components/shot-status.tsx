@@ -1,7 +1,8 @@
 import { Badge, Progress, Text } from '@mantine/core';
-import type { QueueItem } from '../upload/queue';
+import { OFFLINE_CODE, type QueueItem } from '../upload/queue';
 
 const LABEL: Record<QueueItem['status'], string> = {
+  saving: 'Keeping',
   queued: 'Waiting',
   uploading: 'Sending',
   paused: 'Paused',
@@ -10,6 +11,7 @@ const LABEL: Record<QueueItem['status'], string> = {
   failed: 'Failed',
 };
 const COLOUR: Record<QueueItem['status'], string> = {
+  saving: 'gray',
   queued: 'gray',
   uploading: 'bench',
   paused: 'gray',
@@ -53,7 +55,7 @@ function ShotError({ item }: { item: QueueItem }) {
     <Text size="sm" c={loud ? 'red.8' : 'dimmed'} role={loud ? 'alert' : undefined}>
       {item.error}
       {full && ' This shot stays here and is sent again every minute.'}
-      {!full && item.status === 'waiting_retry' && ` Trying again (attempt ${item.attempts + 1}).`}
+      {!full && item.errorCode !== OFFLINE_CODE && item.status === 'waiting_retry' && ` Trying again (attempt ${item.attempts + 1}).`}
     </Text>
   );
 }

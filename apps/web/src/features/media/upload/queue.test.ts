@@ -19,11 +19,45 @@ describe('upload queue', () => {
     expect(UploadMetaSchema.parse(tagFields(retried)).clientId).toBe(items[0].clientId);
   });
 
-  it('starts at most the parallel limit and queues the rest', () => {
-    let items = queueReducer([], { type: 'add', items: make(3) });
-    expect(nextToStart(items, 2)).toHaveLength(2);
+  it('sends one job’s shots one after another in the order taken, other jobs side by side, never over the limit', () => {
+    const other = [newItem(8, file('o1.jpg'), { ...tags }), newItem(9, file('o2.jpg'), { ...tags })];
+    let items = queueReducer([], { type: 'add', items: [...make(3), ...other] });
+    expect(nextToStart(items, 2).map((i) => i.id)).toEqual([items[0].id, other[0].id]);
     items = queueReducer(items, { type: 'started', id: items[0].id });
-    expect(nextToStart(items, 2).map((i) => i.id)).toEqual([items[1].id]);
+    expect(nextToStart(items, 2).map((i) => i.id)).toEqual([other[0].id]);
+    // An earlier shot waiting for its retry holds the later ones of its job; a refused or paused one does not.
+    items = fail(items, items[0].id, true);
+    expect(nextToStart(items, 3).map((i) => i.id)).toEqual([other[0].id, other[1].id]);
+    items = queueReducer(items, { type: 'failed', id: items[0].id, message: 'Not a photo', retryable: false, now: 0 });
+    expect(items[0].status).toBe('failed');
+    items = queueReducer(items, { type: 'pause', id: items[1].id });
+    expect(nextToStart(items, 1).map((i) => i.id)).toEqual([items[2].id]);
+  });
+
+  it('keeps a shot that could not reach the server at all waiting, however long the outage, with capped backoff', () => {
+    let items = make(1);
+    const id = items[0].id;
+    for (let n = 1; n <= 20; n++) {
+      items = queueReducer(queueReducer(items, { type: 'started', id }), {
+        type: 'failed',
+        id,
+        message: 'No connection',
+        retryable: true,
+        now: 0,
+        offline: true,
+      });
+      expect(items[0]).toMatchObject({ status: 'waiting_retry', errorCode: 'OFFLINE', retryAt: backoffMs(Math.min(n, MAX_AUTO_ATTEMPTS)) });
+      items = queueReducer(items, { type: 'retryDue', now: 60_000 });
+    }
+  });
+
+  it('holds a shot that is still being kept on the phone, and the later ones of its job, until it is saved', () => {
+    let items = queueReducer([], { type: 'add', items: make(2).map((i) => ({ ...i, status: 'saving' as const })) });
+    expect(nextToStart(items, 2)).toEqual([]);
+    items = queueReducer(items, { type: 'saved', id: items[1].id });
+    expect(nextToStart(items, 2)).toEqual([]);
+    items = queueReducer(items, { type: 'saved', id: items[0].id });
+    expect(nextToStart(items, 2).map((i) => i.id)).toEqual([items[0].id]);
   });
 
   it('keeps a shot the server could not store for lack of disk space queued, however often, and never marks it failed', () => {

@@ -8,7 +8,8 @@ export interface ShotTags {
 }
 
 export type Transport = 'form' | 'tus';
-export type ShotStatus = 'queued' | 'uploading' | 'paused' | 'waiting_retry' | 'done' | 'failed';
+/** `saving`: being written to the phone's storage (IndexedDB); nothing is sent before it is kept there. */
+export type ShotStatus = 'saving' | 'queued' | 'uploading' | 'paused' | 'waiting_retry' | 'done' | 'failed';
 
 export interface QueueItem {
   id: string;
@@ -38,11 +39,12 @@ export interface QueueItem {
 
 export type QueueAction =
   | { type: 'add'; items: QueueItem[] }
+  | { type: 'saved'; id: string }
   | { type: 'started'; id: string }
   | { type: 'progress'; id: string; progress: number }
   | { type: 'stored'; id: string; assetId: number; tags: ShotTags }
   | { type: 'tagsSaved'; id: string; tags: ShotTags }
-  | { type: 'failed'; id: string; message: string; retryable: boolean; now: number; code?: string }
+  | { type: 'failed'; id: string; message: string; retryable: boolean; now: number; code?: string; offline?: boolean }
   | { type: 'retryDue'; now: number }
   | { type: 'retryNow'; id?: string }
   | { type: 'pause'; id: string }
@@ -58,6 +60,9 @@ export const TUS_THRESHOLD_BYTES = 16 * 1024 * 1024;
 
 /** A full server disk is not this shot's fault: it stays queued and is offered again every minute until space is freed. */
 export const STORAGE_FULL_RETRY_MS = 60_000;
+
+/** The error code a shot carries while the phone could not reach the server at all. */
+export const OFFLINE_CODE = 'OFFLINE';
 
 /** Exponential backoff: 1 s, 2 s, 4 s … capped at 30 s. */
 export function backoffMs(attempts: number): number {
@@ -117,6 +122,16 @@ export const needsRetag = (i: QueueItem): boolean => i.status === 'done' && i.sa
 
 function onFailed(item: QueueItem, a: Extract<QueueAction, { type: 'failed' }>): QueueItem {
   if (item.status === 'paused') return item;
+  // No answer at all (Wi-Fi gone): never the shot's fault, so it waits however long the outage lasts.
+  if (a.offline)
+    return {
+      ...item,
+      error: a.message,
+      errorCode: OFFLINE_CODE,
+      status: 'waiting_retry',
+      retryAt: a.now + backoffMs(Math.min(item.attempts + 1, MAX_AUTO_ATTEMPTS)),
+      attempts: item.attempts + 1,
+    };
   if (a.code === 'STORAGE_FULL') return { ...item, error: a.message, errorCode: a.code, status: 'waiting_retry', retryAt: a.now + STORAGE_FULL_RETRY_MS };
   const attempts = item.attempts + 1;
   const auto = a.retryable && attempts < MAX_AUTO_ATTEMPTS;
@@ -132,6 +147,8 @@ function onFailed(item: QueueItem, a: Extract<QueueAction, { type: 'failed' }>):
 
 function update(item: QueueItem, a: QueueAction): QueueItem {
   switch (a.type) {
+    case 'saved':
+      return item.status === 'saving' ? { ...item, status: 'queued' } : item;
     case 'started':
       return { ...item, status: 'uploading', retryAt: null };
     case 'progress':
@@ -173,10 +190,22 @@ export function queueReducer(items: QueueItem[], a: QueueAction): QueueItem[] {
   return items.map((i) => (targets(a, i) ? update(i, a) : i));
 }
 
-/** Shots to start now, at most `limit` transfers at a time. */
+/** States of an earlier shot of the same job that hold a later one back, so a job's shots are stored in the order taken. */
+const HOLDS_LATER: ReadonlySet<ShotStatus> = new Set(['saving', 'uploading', 'waiting_retry']);
+
+/**
+ * Shots to start now, at most `limit` transfers at a time. Within one job they go one after another in the
+ * order taken (a paused or refused shot does not hold the rest); different jobs may go side by side.
+ */
 export function nextToStart(items: QueueItem[], limit: number): QueueItem[] {
   const running = items.filter((i) => i.status === 'uploading').length;
-  return items.filter((i) => i.status === 'queued').slice(0, Math.max(0, limit - running));
+  const held = new Set<number>();
+  const ready: QueueItem[] = [];
+  for (const i of items) {
+    if (i.status === 'queued' && !held.has(i.jobId)) ready.push(i);
+    if (i.status === 'queued' || HOLDS_LATER.has(i.status)) held.add(i.jobId);
+  }
+  return ready.slice(0, Math.max(0, limit - running));
 }
 
 /** The earliest pending automatic retry, for the runner's timer. */

@@ -4,7 +4,7 @@ import { csrfHeader } from '../../../lib/api-client';
 import { isRetryableStatus, type QueueItem } from './queue';
 
 /** What a finished or failed transfer tells the queue. */
-export type TransferOutcome = { ok: true; assetId: number } | { ok: false; message: string; retryable: boolean; code?: string };
+export type TransferOutcome = { ok: true; assetId: number } | { ok: false; message: string; retryable: boolean; code?: string; offline?: boolean };
 
 export interface Transfer {
   done: Promise<TransferOutcome>;
@@ -71,7 +71,7 @@ export function sendForm(item: QueueItem, onProgress: (p: number) => void): Tran
     for (const [k, v] of Object.entries({ accept: 'application/json', ...csrfHeader() })) xhr.setRequestHeader(k, v);
     xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
     xhr.onload = () => resolve(outcomeOfForm(xhr));
-    xhr.onerror = () => resolve({ ok: false, message: OFFLINE, retryable: true });
+    xhr.onerror = () => resolve({ ok: false, message: OFFLINE, retryable: true, offline: true });
     xhr.ontimeout = xhr.onerror;
     xhr.onabort = () => resolve({ ok: false, message: 'Paused.', retryable: false });
     xhr.send(form);
@@ -92,7 +92,7 @@ async function assetIdFromStatus(uploadUrl: string | null): Promise<number | nul
  */
 export function tusFailure(err: Error): TransferOutcome {
   const res = (err as tus.DetailedError).originalResponse ?? null;
-  if (!res) return { ok: false, message: OFFLINE, retryable: false };
+  if (!res) return { ok: false, message: OFFLINE, retryable: false, offline: true };
   const status = res.getStatus();
   return { ok: false, message: messageFromBody(status, res.getBody()), retryable: false, code: codeFromBody(res.getBody()) };
 }
@@ -109,6 +109,9 @@ export function sendTus(item: QueueItem, onProgress: (p: number) => void): Trans
       chunkSize: 4 * 1024 * 1024,
       retryDelays: [0, 1000, 3000, 5000, 10000, 20000],
       removeFingerprintOnSuccess: true,
+      // The shot's own id, not the file's name, size and date: a file rebuilt from IndexedDB after a reload has a new
+      // date, and must still find its earlier upload and resume at the server's offset.
+      fingerprint: () => Promise.resolve(`benchproof-shot-${item.clientId}`),
       headers: csrfHeader(),
       metadata: { ...tagFields(item), jobId: String(item.jobId), filename: item.file.name },
       onProgress: (sent, total) => onProgress(total ? sent / total : 0),
