@@ -2,7 +2,6 @@ import { roleCan, type Action } from '@benchproof/contracts';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import { sessionHasExpired, sessionQuery } from '../features/auth';
 import { shopSettingsQuery } from '../features/shop-settings';
-import { api } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
 import { shopCan } from './shop-access';
 
@@ -35,12 +34,5 @@ export async function requireShowcase(args: LoaderFunctionArgs) {
   const user = await queryClient.ensureQueryData(sessionQuery);
   const shop = user ? await queryClient.ensureQueryData(shopSettingsQuery).catch(() => undefined) : undefined;
   if (!user || !shopCan(user.role, shop)('showcase.view')) throw redirect(deniedUrl('showcase.view'));
-  return null;
-}
-
-/** Loader of the sign-in page: while the server has no workshop, the setup screen is the only way in. */
-export async function redirectToSetup() {
-  const status = await api<{ setupOpen: boolean }>('/setup', { quietAuth: true }).catch(() => null);
-  if (status?.setupOpen) throw redirect('/setup');
   return null;
 }
