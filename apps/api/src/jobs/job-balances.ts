@@ -34,9 +34,8 @@ export class JobBalances {
     return this.port.readyUnpaidIds(shopId);
   }
 
-  /** Null when no payments feature is bound (nothing is known about money). */
-  settlement(shopId: number, jobId: number): JobSettlement | null {
-    return this.port?.settlement(shopId, jobId) ?? null;
+  settlement(shopId: number, jobId: number): JobSettlement {
+    return this.port.settlement(shopId, jobId);
   }
 
   /** Handing over with money due needs desk's reason (UNPAID_BALANCE otherwise); returns what was due. */

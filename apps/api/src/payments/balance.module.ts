@@ -1,5 +1,5 @@
 import { Global, Injectable, Module } from '@nestjs/common';
-import { JOB_BALANCES, type JobBalancePort } from '../jobs';
+import { JOB_BALANCES, type JobBalancePort, type JobSettlement } from '../jobs';
 import { ShopsModule } from '../shops';
 import { BalanceService } from './balance.service';
 import { PaymentsRepository } from './payments.repository';
@@ -15,6 +15,11 @@ export class PaymentsJobBalances implements JobBalancePort {
 
   readyUnpaidIds(shopId: number): number[] {
     return this.balances.readyUnpaidIds(shopId);
+  }
+
+  settlement(shopId: number, jobId: number): JobSettlement {
+    const b = this.balances.balance(shopId, jobId);
+    return { grossMinor: b.grossMinor, dueMinor: b.dueMinor, paidAt: b.paidAt };
   }
 }
 

@@ -15,7 +15,7 @@ import type { AuthUser } from '../core/auth';
 import { FindingsService } from '../findings';
 import { CLOCK, type Clock } from '../core/clock';
 import { InspectionService } from '../inspection';
-import { JobsService } from '../jobs';
+import { JOB_BALANCES, JobsService, type JobBalancePort } from '../jobs';
 import { MediaService } from '../media';
 import { ShopsService } from '../shops';
 import { WorkLogService } from '../work-log';
@@ -34,6 +34,7 @@ export class ReportSnapshotService {
     private readonly media: MediaService,
     @Inject(PAIRS_SOURCE) private readonly pairs: PairsSource,
     @Inject(CLOCK) private readonly clock: Clock,
+    @Inject(JOB_BALANCES) private readonly balances: JobBalancePort,
   ) {}
 
   async build(actor: AuthUser, jobId: number): Promise<ReportSnapshot> {
@@ -70,7 +71,7 @@ export class ReportSnapshotService {
 
   /** The balance as the payments feature answers it through the jobs feature's port (reports never imports payments). */
   private paymentPart(shopId: number, jobId: number): ReportSnapshot['payment'] {
-    return this.jobs.balances.settlement(shopId, jobId) ?? undefined;
+    return this.balances.settlement(shopId, jobId);
   }
 
   private shopPart(shopId: number): ReportSnapshot['shop'] {

@@ -54,9 +54,9 @@ describeRedis('BullMqTaskRunner', () => {
         throw new Error('the change failed');
       }),
     ).toThrow('the change failed');
-    db.transaction((tx) => runner.enqueue({ kind: 'demo.work', key: 'committed', shopId: null, payload: { n: 1 } }, tx));
+    db.transaction((tx) => runner.enqueue({ kind: 'demo.work', key: 'committed', shopId: null, payload: { messageId: 1 } }, tx));
     await runner.settled();
-    expect(calls.map((c) => [c.key, c.payload])).toEqual([['committed', { n: 1 }]]);
+    expect(calls.map((c) => [c.key, c.payload])).toEqual([['committed', { messageId: 1 }]]);
     expect(runner.status('demo.work', 'rolled-back')).toBeNull();
     expect(runner.status('demo.work', 'committed')).toMatchObject({ state: 'done', attempts: 1, progress: 1 });
     expect(runner.health()).toMatchObject({ ok: true, driver: 'redis' });
@@ -66,12 +66,12 @@ describeRedis('BullMqTaskRunner', () => {
     const { runner, calls, record } = setUp();
     runner.register('demo.work', record, { concurrency: 2 });
     runner.start();
-    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 1 } });
-    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 2 } });
+    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { messageId: 1 } });
+    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { messageId: 2 } });
     await runner.settled();
-    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 3 } });
+    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { messageId: 3 } });
     await runner.settled();
-    expect(calls.map((c) => c.payload)).toEqual([{ n: 1 }]);
+    expect(calls.map((c) => c.payload)).toEqual([{ messageId: 1 }]);
   });
 
   it('never runs more tasks of a kind at once than its concurrency', async () => {

@@ -73,4 +73,13 @@ export interface ReportSnapshot {
   finalCheck: { checker: string; passed: boolean; at: string; notes: string | null } | null;
   cautions: string[];
   madeAt: string;
+  /** The job's balance when the snapshot was made; absent in snapshots frozen before it existed. */
+  payment?: SnapshotPayment;
+}
+
+/** Paid (with the day the balance reached zero) or what is still due; gross 0 = nothing charged. */
+export interface SnapshotPayment {
+  grossMinor: number;
+  dueMinor: number;
+  paidAt: string | null;
 }
