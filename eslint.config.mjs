@@ -73,7 +73,12 @@ export default tseslint.config(
   },
   {
     files: ['libs/*/src/**/*.test.ts'],
-    rules: { 'no-restricted-imports': restrict(['^(?!\\.{1,2}/|mathjs$|zod$|@benchproof/domain$)', 'Lib tests may add only the mathjs reference oracle.']) },
+    rules: {
+      'no-restricted-imports': restrict([
+        '^(?!\\.{1,2}/|mathjs$|i18n-iso-countries$|zod$|@benchproof/domain$)',
+        'Lib tests may add only the reference oracles: mathjs, i18n-iso-countries (country codes).',
+      ]),
+    },
   },
   {
     files: ['apps/api/**'],

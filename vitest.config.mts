@@ -1,4 +1,18 @@
+import { existsSync } from 'node:fs';
 import { defineConfig } from 'vitest/config';
+
+/** The task suite again with TASKS=redis (BullMQ), only where Debian's redis-server is installed; test/redis/ prints why it skips otherwise. */
+const REDIS_TASK_SUITE = existsSync(process.env.REDIS_SERVER_BIN ?? '/usr/bin/redis-server')
+  ? [
+      'test/e2e/background-work.e2e-spec.ts',
+      'test/e2e/mail.e2e-spec.ts',
+      'test/e2e/annotations.e2e-spec.ts',
+      'test/e2e/domain-events.e2e-spec.ts',
+      'test/e2e/pairs.e2e-spec.ts',
+      'test/e2e/showcase-export.e2e-spec.ts',
+      'test/e2e/reports.e2e-spec.ts',
+    ]
+  : [];
 
 const lib = (name: string) => ({
   test: { name, root: `libs/${name}`, include: ['src/**/*.test.ts'], globals: true },
@@ -55,6 +69,21 @@ export default defineConfig({
           setupFiles: ['reflect-metadata'],
           testTimeout: 30_000,
           hookTimeout: 60_000,
+        },
+      },
+      {
+        // Several API processes: tasks on BullMQ, live updates and rate limits on Redis (one redis-server per run, see the global setup).
+        test: {
+          name: 'api-redis',
+          root: 'apps/api',
+          environment: 'node',
+          globals: true,
+          include: ['test/redis/**/*.e2e-spec.ts', ...REDIS_TASK_SUITE],
+          env: { TEST_TASKS: 'redis' },
+          globalSetup: ['./test/support/redis-global-setup.ts'],
+          setupFiles: ['reflect-metadata'],
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
         },
       },
       {

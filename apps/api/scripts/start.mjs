@@ -40,6 +40,15 @@ if (process.env.PAYMENT_FAKE !== 'false' && /^http:\/\/(127\.0\.0\.1|localhost):
   console.log(`[start] Card payments go to ${stripeUrl === 'provider' ? 'the provider' : stripeUrl} (no local fake)`);
 }
 
+// The local text-message fake starts only when the SDK is meant to reach it (TWILIO_API_URL unset or the default).
+const textFake = resolve(root, 'apps/api/scripts/text-fake.mjs');
+const twilioUrl = process.env.TWILIO_API_URL ?? 'http://127.0.0.1:12112';
+if (process.env.TEXT_FAKE !== 'false' && /^http:\/\/(127\.0\.0\.1|localhost):12112\/?$/.test(twilioUrl) && existsSync(textFake)) {
+  children.push(spawn(process.execPath, [textFake], { cwd: root, stdio: 'inherit' }));
+} else {
+  console.log(`[start] Texts go to ${twilioUrl === 'provider' ? 'the provider' : twilioUrl} (no local fake)`);
+}
+
 // Fewer glibc malloc arenas so memory freed after a burst of photo work goes back to the
 // system (sharp's docs on glibc fragmentation); the bench measures idle RSS before and after.
 // A 128 KB trim threshold hands the top of the heap back once freed: without it about 35 MB of

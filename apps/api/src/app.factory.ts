@@ -14,6 +14,7 @@ import { AppModule } from './app.module';
 import type { AppConfig } from './config';
 import { ErrorFilter } from './core/http';
 import { createLogger, NestPinoLogger, requestLog } from './core/logging';
+import { MetricsService } from './metrics';
 import { SeedService } from './seed';
 
 /** The routes that send stored media files (staff and owner-page), e.g. /api/media/12/screen. */
@@ -31,6 +32,7 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const logger = createLogger(cfg);
   if (opts.logger !== false) app.useLogger(new NestPinoLogger(logger));
   app.use(requestLog(logger));
+  await app.get(MetricsService).install(app);
   // Behind a proxy, TRUST_PROXY says which hops may set X-Forwarded-For; without it req.ip is the socket's address.
   app.set('trust proxy', trustProxy(cfg.TRUST_PROXY));
   app.use(helmet({ contentSecurityPolicy: { directives: contentSecurity() } }));
@@ -48,7 +50,6 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   app.use(annotationSaveBody());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());
-  app.enableShutdownHooks();
   setUpOpenApi(app);
   serveWeb(app, cfg.WEB_DIST);
   await seedWhenEmpty(app, cfg);

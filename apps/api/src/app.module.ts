@@ -23,12 +23,16 @@ import { OwnerLinksModule } from './owner-links';
 import { ClockModule } from './core/clock';
 import { DiskSpace } from './infra/disk';
 import { TasksModule } from './infra/tasks';
+import { RedisModule } from './infra/redis';
+import { LiveUpdatesModule } from './infra/live';
 import { InspectionModule } from './inspection';
 import { JobsModule } from './jobs';
 import { ReportsModule } from './reports';
 import { MailModule } from './mail';
 import { PaymentsModule } from './payments';
 import { PaymentProviderModule } from './infra/payments';
+import { TextProviderModule } from './infra/texts';
+import { TextsModule } from './texts';
 import { SeedModule } from './seed';
 import { ShopsModule } from './shops';
 import { UsersModule } from './users';
@@ -38,6 +42,7 @@ import { PasswordResetsModule } from './password-resets';
 import { SetupModule } from './setup';
 import { ImportsModule } from './imports';
 import { TwoFactorModule } from './two-factor';
+import { MetricsModule } from './metrics';
 
 /** Feature modules, one per product noun (DESIGN.md). Add new features here. */
 const FEATURES = [
@@ -69,6 +74,8 @@ const FEATURES = [
   SetupModule,
   ImportsModule,
   PaymentsModule,
+  TextsModule,
+  MetricsModule,
 ];
 
 @Module({})
@@ -79,9 +86,12 @@ export class AppModule {
       imports: [
         ConfigModule.forRoot(cfg),
         ClockModule,
+        RedisModule,
+        LiveUpdatesModule,
         TasksModule,
         ScheduleModule.forRoot(),
         PaymentProviderModule,
+        TextProviderModule,
         EventEmitterModule.forRoot(),
         DbModule,
         AuthCoreModule,

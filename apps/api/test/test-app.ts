@@ -3,7 +3,9 @@ import { DEMO_PASSWORD } from '@benchproof/seeds';
 import { mkdirSync, mkdtempSync, readdirSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { randomBytes } from 'node:crypto';
 import request from 'supertest';
+import { inject } from 'vitest';
 import type TestAgent from 'supertest/lib/agent';
 import { createApp } from '../src/app.factory';
 import { type AppConfig, loadConfig } from '../src/config';
@@ -31,6 +33,16 @@ export interface SignedIn {
 /** Whether this run puts media on the S3 fake (TEST_STORAGE=s3, set by the api-s3 vitest project). */
 export const ON_S3 = process.env.TEST_STORAGE === 's3';
 
+/** Whether this run puts tasks, live updates and rate limits on Redis (TEST_TASKS=redis, set by the api-redis vitest project). */
+export const ON_REDIS = process.env.TEST_TASKS === 'redis';
+
+/** TASKS=redis on the api-redis project's shared Redis, under a key prefix of this app's own (two apps given the same prefix share a queue). */
+export function redisEnv(prefix = `t${randomBytes(4).toString('hex')}`): Record<string, string> {
+  const url = inject('redisUrl');
+  if (!url) throw new Error('api-redis: no redis-server (see the global setup output)');
+  return { TASKS: 'redis', REDIS_URL: url, REDIS_PREFIX: prefix };
+}
+
 /**
  * A fresh server on a fresh temporary SQLite file with the real migrations and the demo seed;
  * with TEST_STORAGE=s3, its storage is a bucket on an s3rver of its own.
@@ -49,6 +61,7 @@ export async function startTestApp(env: Record<string, string> = {}, opts: { s3?
     LOGIN_THROTTLE_ADDRESS_LIMIT: '1000',
     MAIL_CATCHER: 'false',
     LOG_LEVEL: 'silent',
+    ...(ON_REDIS ? redisEnv() : {}),
     ...env,
   });
   const app = await createApp(cfg, { logger: false });

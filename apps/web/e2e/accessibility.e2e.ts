@@ -3,9 +3,9 @@ import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import { request, type Page } from 'playwright-core';
 import { inject } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, PHONE, SHOTS_DIR, type Browser } from './support/browser';
+import { DEMO_PASSWORD, openBrowser, PHONE, SHOTS_DIR, signIn, type Browser } from './support/browser';
 import { ownerJobByApi } from './support/owner';
-import { DESK } from './support/records';
+import { DESK, TOBIN } from './support/records';
 
 /** axe-core's own engine, injected as a script (no wrapper package). */
 const AXE_SOURCE = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
@@ -15,7 +15,8 @@ async function seriousViolations(page: Page): Promise<string[]> {
   // page.addScriptTag is refused by the app's Content-Security-Policy (script-src 'self'); evaluate runs outside it
   await page.evaluate(AXE_SOURCE);
   return page.evaluate(async () => {
-    type Axe = { run: (ctx: Document, o: object) => Promise<{ violations: { id: string; impact: string; nodes: { target: string[] }[] }[] }> };
+    type Node = { target: string[]; any: { message: string }[] };
+    type Axe = { run: (ctx: Document, o: object) => Promise<{ violations: { id: string; impact: string; nodes: Node[] }[] }> };
     const result = await (window as unknown as { axe: Axe }).axe.run(document, { resultTypes: ['violations'] });
     return result.violations
       .filter((v) => v.impact === 'serious' || v.impact === 'critical')
@@ -23,7 +24,8 @@ async function seriousViolations(page: Page): Promise<string[]> {
         (v) =>
           `${v.id} (${v.impact}): ${v.nodes
             .slice(0, 3)
-            .map((n) => n.target.join(' '))
+            // The check's own words (for contrast: both colours and the ratio) say what to change.
+            .map((n) => `${n.target.join(' ')} — ${n.any[0]?.message ?? ''}`)
             .join(' | ')}`,
       );
   });
@@ -56,6 +58,7 @@ async function smallTargets(page: Page): Promise<string[]> {
 }
 
 async function check(page: Page, screen: string): Promise<void> {
+  await page.screenshot({ path: join(SHOTS_DIR, `accessibility-${screen.replace(/\W+/g, '-')}-phone.png`), fullPage: true });
   expect({ screen, violations: await seriousViolations(page) }).toEqual({ screen, violations: [] });
   expect({ screen, small: await smallTargets(page) }).toEqual({ screen, small: [] });
 }
@@ -85,7 +88,6 @@ describe('accessibility on the phone (390×844): axe serious/critical and 44 px 
     await owner.page.getByRole('link', { name: 'Call' }).waitFor();
     await owner.page.mouse.wheel(0, 5000);
     await owner.page.getByRole('switch', { name: 'Marketing consent' }).waitFor();
-    await owner.page.screenshot({ path: join(SHOTS_DIR, 'accessibility-owner-phone.png'), fullPage: true });
     await check(owner.page, 'owner page');
 
     const staff = await openBrowser(PHONE);
@@ -94,4 +96,45 @@ describe('accessibility on the phone (390×844): axe serious/critical and 44 px 
     await staff.page.getByRole('button', { name: 'Sign in' }).waitFor();
     await check(staff.page, 'sign-in');
   });
+
+  it('the mechanic’s jobs list, a job, capture and the annotation editor', { timeout: 120_000 }, async () => {
+    const b = await openBrowser(PHONE, { touch: true });
+    open.push(b);
+    const { page } = b;
+    await signIn(page, TOBIN);
+    await page.goto('/jobs');
+    await page
+      .getByRole('link', { name: /^J-\d{4}-\d{4}/ })
+      .first()
+      .waitFor({ timeout: 15_000 });
+    await check(page, 'jobs list');
+
+    const { jobId, mediaId } = await photoJob(page);
+    await page.goto(`/jobs/${jobId}`);
+    await page
+      .getByText(/^Job J-\d{4}-\d{4}$/)
+      .first()
+      .waitFor({ timeout: 15_000 });
+    await page.waitForLoadState('networkidle');
+    await check(page, 'job page');
+
+    await page.goto(`/jobs/${jobId}/capture`);
+    await page.getByRole('button', { name: 'Take shots' }).waitFor({ timeout: 15_000 });
+    await check(page, 'capture');
+
+    await page.goto(`/jobs/${jobId}/media/${mediaId}/annotate`);
+    await page.getByTestId('annotate-stage').waitFor({ timeout: 15_000 });
+    await check(page, 'annotate');
+  });
 });
+
+/** A job of the mechanic's with a photo whose derivatives are ready (the demo has them). */
+async function photoJob(page: Page): Promise<{ jobId: number; mediaId: number }> {
+  const jobs = (await (await page.request.get('/api/jobs?pageSize=20')).json()) as { items: { id: number }[] };
+  for (const { id } of jobs.items) {
+    const media = (await (await page.request.get(`/api/jobs/${id}/media`)).json()) as { id: number; kind: string; status: string }[];
+    const photo = media.find((m) => m.kind === 'photo' && m.status === 'ready');
+    if (photo) return { jobId: id, mediaId: photo.id };
+  }
+  throw new Error('No demo photo found');
+}

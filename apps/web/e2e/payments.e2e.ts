@@ -1,33 +1,12 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { DEMO_PASSWORD, openBrowser, PHONE, shot, type Browser } from './support/browser';
+import { freePort, waitForHealth } from './support/server';
 
 const root = resolve(import.meta.dirname, '../../..');
 const DEMO_DESK = 'desk@lantern-spoke.test';
-
-const freePort = () =>
-  new Promise<number>((ok) => {
-    const srv = createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address() as { port: number };
-      srv.close(() => ok(port));
-    });
-  });
-
-async function waitForHealth(base: string): Promise<void> {
-  for (let i = 0; i < 240; i++) {
-    const ok = await fetch(`${base}/api/health`).then(
-      (r) => r.ok,
-      () => false,
-    );
-    if (ok) return;
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the API did not start');
-}
 
 /**
  * Paying online at the workstand's phone size: the owner opens their link, pays on the local fake's

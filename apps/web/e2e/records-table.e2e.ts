@@ -11,7 +11,7 @@ function expectedMoves(status: JobStatus) {
 }
 
 async function menuItems(page: Page): Promise<string[]> {
-  await jobHeader(page).getByRole('button', { name: 'Other moves' }).click();
+  await jobHeader(page).getByRole('button', { name: 'More moves' }).click();
   const menu = page.getByRole('menu');
   await menu.waitFor();
   const items = (await menu.getByRole('menuitem').allTextContents()).map((t) => t.trim());
@@ -73,7 +73,7 @@ describe('the jobs table and the moves a job offers', () => {
     await signIn(b.page, DESK);
     await b.page.goto('/jobs?status=booked_in');
     const overdueCard = b.page
-      .getByRole('link', { name: /^Job J-/ })
+      .getByRole('link', { name: /^J-\d{4}-\d{4} / })
       .filter({ hasText: /Overdue · / })
       .first();
     await overdueCard.waitFor();
@@ -119,7 +119,7 @@ describe('the jobs table and the moves a job offers', () => {
     await other.page.goto(`/jobs/${job.id}`);
     await headerStatus(other.page, 'Booked in');
     expect(await menuItems(other.page)).toEqual(['Cancel job']);
-    await jobHeader(other.page).getByRole('button', { name: 'Other moves' }).click();
+    await jobHeader(other.page).getByRole('button', { name: 'More moves' }).click();
     await other.page.getByRole('menuitem', { name: 'Cancel job' }).click();
     const confirm = other.page.getByRole('dialog', { name: 'Cancel job' });
     await confirm.getByLabel('Note (optional)').fill('Owner collected it unrepaired.');

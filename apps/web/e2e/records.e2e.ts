@@ -83,7 +83,7 @@ describe('the workshop records: booking-in to In work', () => {
     await signIn(tobin.page, TOBIN);
     await tobin.page.goto('/jobs');
     await tobin.page.getByRole('textbox', { name: 'Search jobs' }).fill(jobNumber);
-    const card = tobin.page.getByRole('link', { name: new RegExp(`^Job ${jobNumber}, `) });
+    const card = tobin.page.getByRole('link', { name: new RegExp(`^${jobNumber} `) });
     await card.waitFor();
     expect(await card.textContent()).toContain('Booked in');
     await tobin.page.getByRole('textbox', { name: 'Search jobs' }).fill('');

@@ -6,6 +6,9 @@ export const FailedWorkSchema = z.object({
   /** The task kind, e.g. 'media.derivatives', 'report.render', 'mail.send'. */
   kind: z.string(),
   key: z.string(),
+  /** The job the work belongs to (a photo's, a report's, an e-mail's job), when it belongs to one. */
+  jobId: z.number().int().nullable(),
+  jobNumber: z.string().nullable(),
   attempts: z.number().int(),
   lastError: z.string().nullable(),
   /** When it is tried again by itself (a transient failure: full disk, lost connection), or null. */

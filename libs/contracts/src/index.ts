@@ -25,6 +25,7 @@ export * from './owner';
 export * from './annotations';
 export * from './reports';
 export * from './mail';
+export * from './texts';
 export * from './showcase';
 export * from './backups';
 export * from './data-export';

@@ -31,7 +31,8 @@ export type OwnerLinkDto = z.infer<typeof OwnerLinkDtoSchema>;
 export const CreatedOwnerLinkDtoSchema = z.object({
   link: OwnerLinkDtoSchema,
   url: z.string(),
-  mail: z.object({ status: z.enum(['queued', 'not_sent']), reason: z.string().nullable() }),
+  /** How the link went to the owner: by e-mail or, for an owner who prefers texts, by text. */
+  mail: z.object({ status: z.enum(['queued', 'not_sent']), reason: z.string().nullable(), channel: z.enum(['email', 'sms']).nullable() }),
 });
 export type CreatedOwnerLinkDto = z.infer<typeof CreatedOwnerLinkDtoSchema>;
 

@@ -1,4 +1,4 @@
-import { chainWearLimits, MAX_BICYCLE_CHAIN_LIMIT_PCT, SHOP_LOCALES } from '@benchproof/domain';
+import { chainWearLimits, isCountryCode, MAX_BICYCLE_CHAIN_LIMIT_PCT, SHOP_LOCALES } from '@benchproof/domain';
 import { z } from 'zod';
 import { IdSchema, requiredText } from './common';
 
@@ -48,7 +48,7 @@ const settingsFields = {
   /** How dates and times are written (web, e-mail, PDF); null: the one that fits the currency (domain shopLocale). */
   locale: z.enum(SHOP_LOCALES).nullable(),
   /** ISO 3166-1 alpha-2: phone numbers typed without a country code are read as this country's. */
-  country: z.string().regex(/^[A-Z]{2}$/, 'Two capital letters, e.g. GB'),
+  country: z.string().refine((c): boolean => isCountryCode(c), 'Choose the country from the list'),
   /** Printed on receipts when set. */
   taxNumber: z.string().trim().max(40),
   units: UnitSystemSchema,

@@ -28,3 +28,4 @@ export * from './pair-suggestion';
 export * from './owner-explanations';
 export * from './report-palette';
 export * from './dates';
+export * from './countries';

@@ -3,10 +3,10 @@ import type { DemoBike, DemoOwner } from './types';
 
 export const DEMO_OWNERS: DemoOwner[] = [
   { key: 'ottilie', name: 'Ottilie Fernsby', email: 'ottilie.fernsby@example.test', phone: null, preferredChannel: 'email' },
-  { key: 'caspian', name: 'Caspian Mordell', email: null, phone: '+44 1632 960 112', preferredChannel: 'phone' },
-  { key: 'wilhelmina', name: 'Wilhelmina Tarrant', email: 'w.tarrant@example.test', phone: '+44 1632 960 245', preferredChannel: 'email' },
+  { key: 'caspian', name: 'Caspian Mordell', email: null, phone: '+44 20 7946 0112', preferredChannel: 'phone' }, // Ofcom's drama range for London, 020 7946 0000-0999 (from memory); a valid number to libphonenumber-js
+  { key: 'wilhelmina', name: 'Wilhelmina Tarrant', email: 'w.tarrant@example.test', phone: '+44 20 7946 0245', preferredChannel: 'email' },
   { key: 'jory', name: 'Jory Pellham', email: 'jory.pellham@example.test', phone: null, preferredChannel: 'email' },
-  { key: 'anouk', name: 'Anouk Selberg', email: 'anouk.selberg@example.test', phone: '+61 491 570 156', preferredChannel: 'sms' }, // a number from Australia's range set aside for fiction (ACMA; from memory): libphonenumber-js takes it as a valid mobile, unlike the UK's drama range
+  { key: 'anouk', name: 'Anouk Selberg', email: 'anouk.selberg@example.test', phone: '+61 491 570 156', preferredChannel: 'sms' }, // a number from Australia's range set aside for fiction (ACMA; from memory): libphonenumber-js takes it as a valid mobile, unlike the UK's drama mobile range (07700 900xxx)
   { key: 'fenwick', name: 'Fenwick Aldous', email: 'fenwick@example.test', phone: null, preferredChannel: 'email' },
   { key: 'reed-owner', name: 'Marisol Quent', email: 'marisol.quent@example.test', phone: null, preferredChannel: 'email' },
 ];

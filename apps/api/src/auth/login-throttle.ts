@@ -1,23 +1,25 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { RateLimiterMemory, type RateLimiterRes } from 'rate-limiter-flexible';
+import type { RateLimiterAbstract, RateLimiterRes } from 'rate-limiter-flexible';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { DomainError } from '../core/http';
+import { createRateLimiter, type MaybeRedis, REDIS } from '../infra/redis';
 
 /**
  * Failed sign-ins are counted per account and per address (rate-limiter-flexible,
  * fixed window). Successful sign-ins are not counted, so a shop's shared front-desk
  * machine is not locked by its own staff; a success clears its account's count.
  * The address is Express's req.ip, which follows X-Forwarded-For only when TRUST_PROXY is set.
+ * With REDIS_URL the counts live in Redis, shared by every API process.
  */
 @Injectable()
 export class LoginThrottle {
-  private readonly byAccount: RateLimiterMemory;
-  private readonly byAddress: RateLimiterMemory;
+  private readonly byAccount: RateLimiterAbstract;
+  private readonly byAddress: RateLimiterAbstract;
 
-  constructor(@Inject(APP_CONFIG) cfg: AppConfig) {
+  constructor(@Inject(APP_CONFIG) cfg: AppConfig, @Inject(REDIS) redis: MaybeRedis) {
     const duration = cfg.LOGIN_THROTTLE_WINDOW_SECONDS;
-    this.byAccount = new RateLimiterMemory({ keyPrefix: 'login-account', points: cfg.LOGIN_THROTTLE_LIMIT, duration });
-    this.byAddress = new RateLimiterMemory({ keyPrefix: 'login-address', points: cfg.LOGIN_THROTTLE_ADDRESS_LIMIT, duration });
+    this.byAccount = createRateLimiter(redis, { keyPrefix: 'login-account', points: cfg.LOGIN_THROTTLE_LIMIT, duration });
+    this.byAddress = createRateLimiter(redis, { keyPrefix: 'login-address', points: cfg.LOGIN_THROTTLE_ADDRESS_LIMIT, duration });
   }
 
   /** Refuses with 429 + Retry-After while either count is used up. */

@@ -5,11 +5,14 @@ import { AuditService } from '../audit';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
 import { TASK_RUNNER, type FailedTask, type TaskRunner } from '../infra/tasks';
+import { WorkJobsRepository, type WorkJob } from './work-jobs.repository';
 
-const toDto = (t: FailedTask): FailedWork => ({
+const toDto = (t: FailedTask, job: WorkJob | null): FailedWork => ({
   id: t.id,
   kind: t.kind,
   key: t.key,
+  jobId: job?.jobId ?? null,
+  jobNumber: job?.jobNumber ?? null,
   attempts: t.attempts,
   lastError: t.lastError,
   nextTryAt: t.nextRunAt,
@@ -23,12 +26,13 @@ export class BackgroundWorkController {
   constructor(
     @Inject(TASK_RUNNER) private readonly tasks: TaskRunner,
     private readonly audit: AuditService,
+    private readonly jobs: WorkJobsRepository,
   ) {}
 
   @Get('failed')
   @Can('work.retry')
   failed(@CurrentUser() user: AuthUser): FailedWork[] {
-    return (this.tasks.failed?.(user.shopId) ?? []).map(toDto);
+    return (this.tasks.failed?.(user.shopId) ?? []).map((t) => toDto(t, this.jobs.jobOf(user.shopId, t.kind, t.key)));
   }
 
   /** Queues the failed task again at once with fresh attempts (a failed report draft renders again; derivatives are made). */

@@ -99,8 +99,19 @@ const EnvSchema = z.object({
     .positive()
     .default(4 * 1024 * 1024 * 1024),
   MAX_IMAGE_PIXELS: z.coerce.number().int().positive().default(100_000_000),
-  /** Background tasks (infra/tasks): only 'sqlite' is built; see DEVELOPERS.md for a BullMQ driver. */
-  TASKS_DRIVER: z.enum(['sqlite']).default('sqlite'),
+  /** Background tasks (infra/tasks): 'sqlite' (default, in this process) or 'redis' (BullMQ on REDIS_URL; the tasks table stays the outbox). */
+  TASKS: z.enum(['sqlite', 'redis']).optional(),
+  /** The older name of TASKS; TASKS wins when both are set. */
+  TASKS_DRIVER: z.enum(['sqlite', 'redis']).default('sqlite'),
+  /** redis://[user:pass@]host:port[/db]: shared state of several API processes (tasks, live updates, rate limits). Unset: everything in this process. */
+  REDIS_URL: z
+    .string()
+    .regex(/^rediss?:\/\//, 'must start with redis:// or rediss://')
+    .optional(),
+  /** Prefix of every Redis key and channel of this deployment (two deployments may share one Redis). */
+  REDIS_PREFIX: z.string().min(1).default('benchproof'),
+  /** API processes serving one port (node:cluster); above 1 needs REDIS_URL. */
+  WEB_CONCURRENCY: z.coerce.number().int().min(1).max(64).default(1),
   TASK_POLL_MS: z.coerce.number().int().positive().default(1000),
   TASK_LEASE_MS: z.coerce.number().int().min(300).default(60_000),
   TASK_BACKOFF_MS: z.coerce.number().int().positive().default(2000),
@@ -137,6 +148,16 @@ const EnvSchema = z.object({
   ORPHAN_GRACE_MINUTES: z.coerce.number().positive().default(60),
   /** Readiness reports `low` (and managers see a warning) when the database's or the uploads' disk has less free space than this. */
   DISK_LOW_MB: z.coerce.number().min(0).default(1024),
+  /**
+   * Prometheus metrics, off unless one is set. METRICS_PORT: a second listener on METRICS_HOST (loopback by default)
+   * serving GET /metrics; METRICS_TOKEN: GET /api/metrics on the main port with `Authorization: Bearer <token>`
+   * (with METRICS_PORT too, that listener asks for the token as well). Never public: no token, no port, no endpoint.
+   */
+  METRICS_PORT: z.coerce.number().int().min(0).max(65535).optional(),
+  METRICS_HOST: z.string().default('127.0.0.1'),
+  METRICS_TOKEN: z.string().min(24, 'METRICS_TOKEN must be at least 24 characters').optional(),
+  /** On SIGTERM: how long in-flight requests and running tasks get to finish before they are cut off (ms). */
+  SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).default(10_000),
   /** pino level; 'silent' turns request logs off (tests). */
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
@@ -172,9 +193,22 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
         'Set it to the address customers open, e.g. PUBLIC_URL=https://workshop.example.com',
     );
   }
+  checkSharedState(cfg);
   const publicUrl = (cfg.PUBLIC_URL ?? `http://localhost:${cfg.PORT}`).replace(/\/+$/, '');
   const appOrigin = new URL(cfg.APP_ORIGIN ?? publicUrl).origin;
-  return { ...cfg, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH), appOrigin, publicUrl };
+  return { ...cfg, TASKS_DRIVER: cfg.TASKS ?? cfg.TASKS_DRIVER, jwtSecret: cfg.JWT_SECRET ?? secretBeside(cfg.DATABASE_PATH), appOrigin, publicUrl };
+}
+
+/** Several processes share tasks, live updates and rate limits only through Redis; refuse a setup that would split them silently. */
+function checkSharedState(cfg: z.infer<typeof EnvSchema>): void {
+  if ((cfg.TASKS ?? cfg.TASKS_DRIVER) === 'redis' && !cfg.REDIS_URL)
+    throw new ConfigError('TASKS=redis needs REDIS_URL (e.g. REDIS_URL=redis://127.0.0.1:6379).');
+  if (cfg.WEB_CONCURRENCY > 1 && !cfg.REDIS_URL) {
+    throw new ConfigError(
+      `WEB_CONCURRENCY=${cfg.WEB_CONCURRENCY} needs REDIS_URL: with several API processes, live updates to staff and rate limits must be shared ` +
+        'through Redis, or each process would see only its own. Set REDIS_URL (and TASKS=redis), or leave WEB_CONCURRENCY at 1.',
+    );
+  }
 }
 
 function secretBeside(databasePath: string): string {

@@ -3,7 +3,9 @@ import type { CustomerInput, CustomerDto, CustomerListQuery, CustomerPage, Updat
 import type { AuthUser } from '../core/auth';
 import { notFound } from '../core/http';
 import { CLOCK, type Clock } from '../core/clock';
+import { ShopsService } from '../shops';
 import { type CustomerRow, CustomersRepository } from './customers.repository';
+import { normalisePhone, toE164 } from './phone-number';
 
 export const toCustomerDto = (c: CustomerRow): CustomerDto => ({
   id: c.id,
@@ -29,6 +31,7 @@ const toColumns = (input: CustomerInput) => ({
 export class CustomersService {
   constructor(
     private readonly repo: CustomersRepository,
+    private readonly shops: ShopsService,
     @Inject(CLOCK) private readonly clock: Clock,
   ) {}
 
@@ -43,16 +46,43 @@ export class CustomersService {
     return toCustomerDto(row);
   }
 
-  create(actor: Pick<AuthUser, 'shopId'>, input: CustomerInput): CustomerDto {
+  /**
+   * Desk's entry: the phone is stored in E.164 read with the shop's country, and an invalid number is
+   * refused (PHONE_INVALID). An import keeps a number it cannot read as typed (`keepUnreadablePhone`):
+   * its preview already listed the rows, and such a number simply gets no texts.
+   */
+  create(actor: Pick<AuthUser, 'shopId'>, input: CustomerInput, opts: { keepUnreadablePhone?: boolean } = {}): CustomerDto {
     const now = this.clock.now();
-    const row = this.repo.insert({ ...toColumns(input), shopId: actor.shopId, createdAt: now, updatedAt: now });
+    const country = this.country(actor.shopId);
+    const phone = opts.keepUnreadablePhone && input.phone ? (toE164(input.phone, country) ?? input.phone) : normalisePhone(input.phone, country);
+    const row = this.repo.insert({ ...toColumns({ ...input, phone }), shopId: actor.shopId, createdAt: now, updatedAt: now });
     return toCustomerDto(row);
   }
 
+  /** A number left as it was is not read again (records from before numbers were checked stay editable). */
   update(actor: AuthUser, id: number, patch: UpdateCustomerRequest): CustomerDto {
-    const row = this.repo.update(actor.shopId, id, { ...toColumns(patch), updatedAt: this.clock.now() });
+    const before = this.repo.find(actor.shopId, id);
+    if (!before) throw notFound('Customer');
+    const phone = patch.phone !== null && patch.phone === before.phone ? patch.phone : normalisePhone(patch.phone, this.country(actor.shopId));
+    const row = this.repo.update(actor.shopId, id, { ...toColumns({ ...patch, phone }), updatedAt: this.clock.now() });
     if (!row) throw notFound('Customer');
     return toCustomerDto(row);
+  }
+
+  /** The customer's number for texts (E.164), why there is none, or that they replied STOP. */
+  textNumber(actor: Pick<AuthUser, 'shopId'>, id: number): { number: string | null; optedOut: boolean } {
+    const row = this.repo.find(actor.shopId, id);
+    if (!row) throw notFound('Customer');
+    return { number: row.phone ? toE164(row.phone, this.country(actor.shopId)) : null, optedOut: row.smsOptOutAt !== null };
+  }
+
+  /** The owner's STOP (a time) or START (null) reply to a text. */
+  setTextOptOut(scope: Pick<AuthUser, 'shopId'>, id: number, at: Date | null): void {
+    this.repo.update(scope.shopId, id, { smsOptOutAt: at });
+  }
+
+  private country(shopId: number): string {
+    return this.shops.settings(shopId).country;
   }
 
   /** Every customer of the shop with contact fields, oldest first (import matching, CSV export). */

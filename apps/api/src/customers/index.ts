@@ -1,2 +1,3 @@
 export { CustomersModule } from './customers.module';
 export { CustomersService } from './customers.service';
+export { normalisePhone, toE164 } from './phone-number';

@@ -96,11 +96,9 @@ export class CustomerErasureService {
     db.prepare(`UPDATE bikes SET serial_number = '', notes = '' WHERE shop_id = ? AND customer_id = ?`).run(actor.shopId, customerId);
     const ids = jobs.map((j) => j.id);
     const inJobs = `job_id IN (${ids.map(() => '?').join(',') || 'NULL'})`;
-    db.prepare(`UPDATE outbox_messages SET to_address = '', text_body = ?, html_body = ?, text_after_send = NULL, html_after_send = NULL WHERE ${inJobs}`).run(
-      ERASED,
-      ERASED,
-      ...ids,
-    );
+    db.prepare(
+      `UPDATE outbox_messages SET to_address = '', text_body = ?, html_body = ?, text_after_send = NULL, html_after_send = NULL, sealed_secrets = NULL WHERE ${inJobs}`,
+    ).run(ERASED, ERASED, ...ids);
     db.prepare(`UPDATE owner_links SET sent_to = '', revoked_at = coalesce(revoked_at, ?) WHERE ${inJobs}`).run(now, ...ids);
     const { files, mediaDeleted, mediaKept } = this.purgeMedia(db, jobs, inJobs, ids, now);
     const reports = db

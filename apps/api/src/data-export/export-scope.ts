@@ -14,7 +14,7 @@ export type ExportScope = { kind: 'shop'; shopId: number } | { kind: 'customer';
 
 /** Never exported: sign-in sessions, the task queue, password and link-token hashes, mail bodies that may still hold a live owner link. */
 const SKIP_TABLES = new Set(['sessions', 'tasks']);
-const SKIP_COLUMNS = new Set(['password_hash', 'token_hash', 'text_body', 'html_body']);
+const SKIP_COLUMNS = new Set(['password_hash', 'token_hash', 'text_body', 'html_body', 'sealed_secrets']);
 /** Not in one customer's export: staff accounts and shop-wide records. */
 const SHOP_ONLY = new Set(['users', 'shops', 'showcase_items']);
 

@@ -22,7 +22,7 @@ import { JobAccess, type EvidenceKind, type JobCaller, type JobRef } from '../jo
 import { ShopsService } from '../shops';
 import { type FindingRow, FindingsRepository, type RecommendationRow } from './findings.repository';
 import { addTotals, recommendationTotals, toDecisionDto, toFindingDto, toRecommendationDto, ZERO_TOTALS } from './findings.view';
-import { UnitOfWork } from '../core/db';
+import { type DbTx, UnitOfWork } from '../core/db';
 
 /** One decision on a recommendation, from staff (phone, in person, e-mail) or from the owner page (owner_link). */
 export interface DecisionInput {
@@ -56,8 +56,8 @@ export class FindingsService {
   ) {}
 
   /** JobAccess's per-object check: in the caller's shop and still open (or a manager's audited override). */
-  private openJob(actor: AuthUser, jobId: number, what: EvidenceKind = 'finding'): JobRef {
-    return this.jobs.change(actor, jobId, what);
+  private openJob(actor: AuthUser, jobId: number, tx: DbTx, what: EvidenceKind = 'finding'): JobRef {
+    return this.jobs.change(actor, jobId, what, tx);
   }
 
   /** NOT_FOUND unless the finding belongs to this job of the caller's shop (media links use this; the row stays here). */
@@ -95,69 +95,77 @@ export class FindingsService {
   }
 
   create(actor: AuthUser, jobId: number, input: CreateFindingRequest): FindingDto {
-    const job = this.openJob(actor, jobId);
-    if (input.checkpointId) this.inspection.requireCheckpoint(actor, jobId, input.checkpointId);
-    const now = this.clock.now();
-    const row = this.uow.run(() => this.repo.insert({ ...input, shopId: actor.shopId, jobId, createdBy: actor.id, createdAt: now, updatedAt: now }));
-    return this.dtos(actor, job, [row])[0];
+    return this.uow.run((tx) => {
+      const job = this.openJob(actor, jobId, tx);
+      if (input.checkpointId) this.inspection.requireCheckpoint(actor, jobId, input.checkpointId);
+      const now = this.clock.now();
+      const row = this.uow.run(() => this.repo.insert({ ...input, shopId: actor.shopId, jobId, createdBy: actor.id, createdAt: now, updatedAt: now }));
+      return this.dtos(actor, job, [row])[0];
+    });
   }
 
   update(actor: AuthUser, jobId: number, findingId: number, patch: UpdateFindingRequest): FindingDto {
-    const job = this.openJob(actor, jobId);
-    this.owned(actor, jobId, findingId);
-    if (patch.checkpointId) this.inspection.requireCheckpoint(actor, jobId, patch.checkpointId);
-    const row = this.uow.run(() => this.repo.update(actor.shopId, findingId, { ...patch, updatedAt: this.clock.now() }));
-    return this.dtos(actor, job, [row])[0];
+    return this.uow.run((tx) => {
+      const job = this.openJob(actor, jobId, tx);
+      this.owned(actor, jobId, findingId);
+      if (patch.checkpointId) this.inspection.requireCheckpoint(actor, jobId, patch.checkpointId);
+      const row = this.uow.run(() => this.repo.update(actor.shopId, findingId, { ...patch, updatedAt: this.clock.now() }));
+      return this.dtos(actor, job, [row])[0];
+    });
   }
 
   delete(actor: AuthUser, jobId: number, findingId: number): void {
-    this.openJob(actor, jobId);
-    this.owned(actor, jobId, findingId);
-    try {
-      this.uow.run(() => {
-        this.repo.delete(actor.shopId, findingId);
-        this.audit.record(actor, { action: 'finding.deleted', entityType: 'job', entityId: jobId, details: { findingId } });
-      });
-    } catch (e) {
-      // finding_media (media feature) still points at it: the shots must be unlinked first.
-      if ((e as { code?: string }).code === 'SQLITE_CONSTRAINT_FOREIGNKEY')
-        throw new DomainError('CONFLICT', 'Unlink the shots of this finding before deleting it.');
-      throw e;
-    }
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      this.owned(actor, jobId, findingId);
+      try {
+        this.uow.run(() => {
+          this.repo.delete(actor.shopId, findingId);
+          this.audit.record(actor, { action: 'finding.deleted', entityType: 'job', entityId: jobId, details: { findingId } });
+        });
+      } catch (e) {
+        // finding_media (media feature) still points at it: the shots must be unlinked first.
+        if ((e as { code?: string }).code === 'SQLITE_CONSTRAINT_FOREIGNKEY')
+          throw new DomainError('CONFLICT', 'Unlink the shots of this finding before deleting it.');
+        throw e;
+      }
+    });
   }
 
   /** Creates or replaces the finding's recommendation at the shop's current labour rate, tax rate and currency. */
   setRecommendation(actor: AuthUser, jobId: number, findingId: number, input: RecommendationRequest): RecommendationDto {
-    this.openJob(actor, jobId, 'recommendation');
-    const finding = this.owned(actor, jobId, findingId);
-    const shop = this.shops.settings(actor.shopId);
-    const now = this.clock.now();
-    const urgency = input.urgency ?? defaultUrgency(finding.condition);
-    const priced = {
-      summary: input.summary,
-      urgency,
-      parts: input.parts,
-      labourHundredths: input.labourHundredths,
-      labourRateMinor: shop.labourRateMinor,
-      taxRateBp: shop.taxRateBp,
-      currency: shop.currency,
-      updatedAt: now,
-    };
-    const existing = this.repo.recommendationOf(actor.shopId, findingId);
-    // A changed price needs the owner's word again.
-    const row = this.uow.run(() => {
-      const saved = existing
-        ? this.repo.updateRecommendation(actor.shopId, existing.id, { ...priced, decisionStatus: 'pending' })
-        : this.repo.insertRecommendation({ ...priced, shopId: actor.shopId, jobId, findingId, createdBy: actor.id, createdAt: now });
-      this.audit.record(actor, {
-        action: existing ? 'recommendation.replaced' : 'recommendation.created',
-        entityType: 'job',
-        entityId: jobId,
-        details: { recommendationId: saved.id, previousDecision: existing?.decisionStatus ?? null },
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx, 'recommendation');
+      const finding = this.owned(actor, jobId, findingId);
+      const shop = this.shops.settings(actor.shopId);
+      const now = this.clock.now();
+      const urgency = input.urgency ?? defaultUrgency(finding.condition);
+      const priced = {
+        summary: input.summary,
+        urgency,
+        parts: input.parts,
+        labourHundredths: input.labourHundredths,
+        labourRateMinor: shop.labourRateMinor,
+        taxRateBp: shop.taxRateBp,
+        currency: shop.currency,
+        updatedAt: now,
+      };
+      const existing = this.repo.recommendationOf(actor.shopId, findingId);
+      // A changed price needs the owner's word again.
+      const row = this.uow.run(() => {
+        const saved = existing
+          ? this.repo.updateRecommendation(actor.shopId, existing.id, { ...priced, decisionStatus: 'pending' })
+          : this.repo.insertRecommendation({ ...priced, shopId: actor.shopId, jobId, findingId, createdBy: actor.id, createdAt: now });
+        this.audit.record(actor, {
+          action: existing ? 'recommendation.replaced' : 'recommendation.created',
+          entityType: 'job',
+          entityId: jobId,
+          details: { recommendationId: saved.id, previousDecision: existing?.decisionStatus ?? null },
+        });
+        return saved;
       });
-      return saved;
+      return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]), finding.condition);
     });
-    return toRecommendationDto(row, this.repo.decisions(actor.shopId, [row.id]), finding.condition);
   }
 
   estimate(actor: JobCaller, jobId: number): EstimateDto {
@@ -189,7 +197,7 @@ export class FindingsService {
   decide(actor: JobCaller, jobId: number, recommendationId: number, d: DecisionInput): DecisionDto {
     const shopId = actor.shopId;
     return this.uow.run((tx) => {
-      this.jobs.change(actor, jobId, 'decision');
+      this.jobs.change(actor, jobId, 'decision', tx);
       const rec: RecommendationRow | undefined = this.repo.recommendation(shopId, jobId, recommendationId);
       if (!rec) throw notFound('Recommendation');
       if (d.seen) this.requireSeenPrice(rec, d.seen);

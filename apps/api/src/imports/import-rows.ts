@@ -158,7 +158,9 @@ function readBike(v: Partial<Record<ImportField, string>>, problems: ReadRow['pr
     const raw = v[field];
     if (!raw) return fallback;
     const hit = words[squash(raw)];
-    if (hit === undefined) problems.push({ field, message: `“${raw}” is not a value we know for ${field.slice(5)}` });
+    // The field's name is already before the message on the preview: name the values we read instead of the code key.
+    const known = [...new Set(Object.values(words).map((w) => String(w).replace(/_/g, ' ')))].join(', ');
+    if (hit === undefined) problems.push({ field, message: `“${raw}” is not one we know (we read: ${known})` });
     return hit;
   };
   const spec = {

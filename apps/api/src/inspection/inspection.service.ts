@@ -16,6 +16,7 @@ import type { AuthUser } from '../core/auth';
 import { DOMAIN_EVENTS, type JobBookedInEvent } from '../core/events';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../core/clock';
+import { type DbTx, UnitOfWork } from '../core/db';
 import { JobAccess, JobsService, type JobRef } from '../jobs';
 import { ShopsService } from '../shops';
 import { InspectionRepository, type CheckpointRow, type MeasurementRow } from './inspection.repository';
@@ -45,6 +46,7 @@ const toCheckpointDto = (c: CheckpointRow, ms: MeasurementRow[]): CheckpointDto 
 export class InspectionService {
   constructor(
     private readonly repo: InspectionRepository,
+    private readonly uow: UnitOfWork,
     private readonly jobs: JobsService,
     private readonly access: JobAccess,
     private readonly bikes: BikesService,
@@ -66,8 +68,8 @@ export class InspectionService {
   }
 
   /** JobAccess's per-object check: in the caller's shop and still open (or a manager's audited override). */
-  private openJob(actor: AuthUser, jobId: number): JobRef {
-    return this.access.change(actor, jobId, 'inspection');
+  private openJob(actor: AuthUser, jobId: number, tx: DbTx): JobRef {
+    return this.access.change(actor, jobId, 'inspection', tx);
   }
 
   private checkpointOf(actor: AuthUser, jobId: number, checkpointId: number): CheckpointRow {
@@ -95,11 +97,13 @@ export class InspectionService {
   }
 
   updateCheckpoint(actor: AuthUser, jobId: number, checkpointId: number, patch: UpdateCheckpointRequest): CheckpointDto {
-    this.openJob(actor, jobId);
-    this.checkpointOf(actor, jobId, checkpointId);
-    const inspected = patch.condition === undefined ? {} : { inspectedBy: actor.id, inspectedAt: this.clock.now() };
-    const row = this.repo.updateCheckpoint(actor.shopId, checkpointId, { ...patch, ...inspected });
-    return toCheckpointDto(row, this.repo.measurements(actor.shopId, [jobId]));
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      this.checkpointOf(actor, jobId, checkpointId);
+      const inspected = patch.condition === undefined ? {} : { inspectedBy: actor.id, inspectedAt: this.clock.now() };
+      const row = this.repo.updateCheckpoint(actor.shopId, checkpointId, { ...patch, ...inspected });
+      return toCheckpointDto(row, this.repo.measurements(actor.shopId, [jobId]));
+    });
   }
 
   /** The verdict for a reading on this job's bike with the shop's limits, without storing anything. */
@@ -114,36 +118,40 @@ export class InspectionService {
   }
 
   addMeasurement(actor: AuthUser, jobId: number, checkpointId: number, input: MeasurementInputDto): MeasurementDto {
-    const job = this.openJob(actor, jobId);
-    const cp = this.checkpointOf(actor, jobId, checkpointId);
-    const expected = findCheckpoint(cp.key)?.measurementKinds ?? [];
-    if (!expected.includes(input.kind)) {
-      throw new DomainError('VALIDATION_FAILED', `kind: this checkpoint takes ${expected.join(', ') || 'no measurements'}.`, { expected });
-    }
-    const result = this.assessFor(actor, job, input);
-    const now = this.clock.now();
-    const row = this.repo.insertMeasurement({
-      shopId: actor.shopId,
-      jobId,
-      checkpointId,
-      kind: input.kind,
-      input: { ...input },
-      result: { ...result },
-      unit: unitOf(input),
-      userId: actor.id,
-      at: now,
+    return this.uow.run((tx) => {
+      const job = this.openJob(actor, jobId, tx);
+      const cp = this.checkpointOf(actor, jobId, checkpointId);
+      const expected = findCheckpoint(cp.key)?.measurementKinds ?? [];
+      if (!expected.includes(input.kind)) {
+        throw new DomainError('VALIDATION_FAILED', `kind: this checkpoint takes ${expected.join(', ') || 'no measurements'}.`, { expected });
+      }
+      const result = this.assessFor(actor, job, input);
+      const now = this.clock.now();
+      const row = this.repo.insertMeasurement({
+        shopId: actor.shopId,
+        jobId,
+        checkpointId,
+        kind: input.kind,
+        input: { ...input },
+        result: { ...result },
+        unit: unitOf(input),
+        userId: actor.id,
+        at: now,
+      });
+      // A reading on an unassessed checkpoint gives it the computed condition; a mechanic's own call is kept.
+      if (cp.condition === null) this.repo.updateCheckpoint(actor.shopId, cp.id, { condition: result.condition, inspectedBy: actor.id, inspectedAt: now });
+      return toMeasurementDto(row);
     });
-    // A reading on an unassessed checkpoint gives it the computed condition; a mechanic's own call is kept.
-    if (cp.condition === null) this.repo.updateCheckpoint(actor.shopId, cp.id, { condition: result.condition, inspectedBy: actor.id, inspectedAt: now });
-    return toMeasurementDto(row);
   }
 
   deleteMeasurement(actor: AuthUser, jobId: number, measurementId: number): void {
-    this.openJob(actor, jobId);
-    const m = this.repo.measurement(actor.shopId, jobId, measurementId);
-    if (!m) throw notFound('Measurement');
-    this.repo.deleteMeasurement(actor.shopId, measurementId);
-    this.audit.record(actor, { action: 'measurement.deleted', entityType: 'job', entityId: jobId, details: { measurementId, kind: m.kind } });
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      const m = this.repo.measurement(actor.shopId, jobId, measurementId);
+      if (!m) throw notFound('Measurement');
+      this.repo.deleteMeasurement(actor.shopId, measurementId);
+      this.audit.record(actor, { action: 'measurement.deleted', entityType: 'job', entityId: jobId, details: { measurementId, kind: m.kind } });
+    });
   }
 
   /** Throws NOT_FOUND unless the checkpoint belongs to this job of the caller's shop (findings link to one). */

@@ -1,8 +1,10 @@
-import { Injectable } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
+import type Database from 'better-sqlite3';
 import { actorCan, type Actor } from '@benchproof/contracts';
 import { isTerminalStatus } from '@benchproof/domain';
 import { AuditService } from '../audit';
 import { type AuthUser, staffActor } from '../core/auth';
+import { type DbTx, SQLITE } from '../core/db';
 import { DomainError, notFound } from '../core/http';
 import { type JobRow, JobsRepository } from './jobs.repository';
 
@@ -46,13 +48,15 @@ const asActor = (c: JobCaller): Actor => ('kind' in c ? c : staffActor(c));
  * NOT_FOUND so other shops learn nothing; and for changes, the job is still
  * open. Evidence freezes at handover (collected, or cancelled): a change is
  * JOB_CLOSED unless the caller may `jobs.reopen_evidence` (managers), and every
- * such override is written to the audit log.
+ * such override is written to the audit log inside the change's own unit of work,
+ * so the change and its override record commit together or not at all.
  */
 @Injectable()
 export class JobAccess {
   constructor(
     private readonly repo: JobsRepository,
     private readonly audit: AuditService,
+    @Inject(SQLITE) private readonly opened: { sqlite: Database.Database },
   ) {}
 
   /** The job if the caller may see it, else NOT_FOUND. */
@@ -63,18 +67,35 @@ export class JobAccess {
     return toJobRef(job);
   }
 
-  /** The job if the caller may change its `what` records now: open, or closed with an audited manager override. */
-  change(caller: JobCaller, jobId: number, what: EvidenceKind): JobRef {
+  /**
+   * Before slow work that precedes the change (an upload's bytes): the answer `change` would give, writing nothing.
+   * The change itself still calls `change` inside its unit of work.
+   */
+  check(caller: JobCaller, jobId: number, what: EvidenceKind): JobRef {
     const job = this.read(caller, jobId);
+    if (isTerminalStatus(job.status) && !this.mayOverride(caller)) throw new DomainError('JOB_CLOSED', undefined, { status: job.status, what });
+    return job;
+  }
+
+  /**
+   * The job if the caller may change its `what` records now: open, or closed with a manager override whose audit
+   * record is written in the caller's transaction (`tx`, from `uow.run`), so a change that fails leaves no record.
+   */
+  change(caller: JobCaller, jobId: number, what: EvidenceKind, _tx: DbTx): JobRef {
+    if (!this.opened.sqlite.inTransaction) throw new Error('JobAccess.change runs inside the unit of work of the change it allows');
+    const job = this.check(caller, jobId, what);
     if (!isTerminalStatus(job.status)) return job;
     const actor = asActor(caller);
-    if (actor.kind === 'staff' && actorCan(actor, 'jobs.reopen_evidence')) {
+    if (actor.kind === 'staff')
       this.audit.record(
         { id: actor.userId, shopId: actor.shopId },
         { action: 'job.closed_override', entityType: 'job', entityId: jobId, details: { status: job.status, what } },
       );
-      return job;
-    }
-    throw new DomainError('JOB_CLOSED', undefined, { status: job.status, what });
+    return job;
+  }
+
+  private mayOverride(caller: JobCaller): boolean {
+    const actor = asActor(caller);
+    return actor.kind === 'staff' && actorCan(actor, 'jobs.reopen_evidence');
   }
 }

@@ -2,12 +2,15 @@ import type { JobListQuery } from '@benchproof/contracts';
 import { JOB_STATUSES, TERMINAL_STATUSES, type JobStatus } from '@benchproof/domain';
 import { and, asc, count, desc, eq, gte, inArray, isNull, lt, lte, or, sql, type SQL } from 'drizzle-orm';
 import { ftsPrefixQuery, PreparedPages, type Db } from '../core/db';
-import { bikes, customers, jobs, users } from '../db/schema';
+import { bikes, customers, jobs, OPEN_STATUSES_SQL, users } from '../db/schema';
 
 /** Statuses in which a passed promised day no longer counts as overdue. */
 export const DONE_STATUSES: JobStatus[] = ['ready', 'collected', 'cancelled'];
 const NOT_DONE = JOB_STATUSES.filter((st) => !DONE_STATUSES.includes(st));
 const OPEN = JOB_STATUSES.filter((st) => !TERMINAL_STATUSES.includes(st));
+if (OPEN.map((st) => `'${st}'`).join(', ') !== OPEN_STATUSES_SQL) throw new Error('OPEN_STATUSES_SQL (jobs.table.ts) differs from the domain open statuses');
+/** Written as literals so SQLite can use the open-jobs partial index (it does not match bound values). */
+const OPEN_LITERAL = sql`${jobs.status} IN (${sql.raw(OPEN_STATUSES_SQL)})`;
 
 /** A jobs-list row: the columns the list shows, with owner, bike and mechanic names joined in (a read model). */
 export interface JobListRow {
@@ -80,7 +83,7 @@ function filters(f: JobListQuery, text: boolean): SQL | undefined {
     f.promisedAfter ? gte(jobs.promisedOn, p('promisedAfter')) : undefined,
     f.promisedBefore ? lte(jobs.promisedOn, p('promisedBefore')) : undefined,
     f.overdue === undefined ? undefined : f.overdue ? overdue : notOverdue,
-    f.open === undefined ? undefined : inArray(jobs.status, f.open ? OPEN : [...TERMINAL_STATUSES]),
+    f.open === undefined ? undefined : f.open ? OPEN_LITERAL : inArray(jobs.status, [...TERMINAL_STATUSES]),
     text ? sql`${jobs.id} IN (SELECT rowid FROM job_search WHERE job_search MATCH ${p('text')})` : undefined,
     f.readyUnpaid ? and(eq(jobs.status, 'ready'), sql`${jobs.id} IN (SELECT value FROM json_each(${p('readyUnpaidIds')}))`) : undefined,
   );
@@ -120,7 +123,8 @@ export class JobsListQuery {
   }
 
   private buildPage(f: JobListQuery, text: boolean) {
-    const order = [(f.order === 'desc' ? desc : asc)(SORT_COLUMN[f.sort]), desc(jobs.id)];
+    // Same-day (same value) jobs: oldest booking first, so an index ending in id serves the page unsorted.
+    const order = [(f.order === 'desc' ? desc : asc)(SORT_COLUMN[f.sort]), asc(jobs.id)];
     const pageIds = this.db
       .select({ id: jobs.id })
       .from(jobs)

@@ -5,6 +5,7 @@ import { CustomersModule } from '../customers';
 import { ShopsModule } from '../shops';
 import { UsersModule } from '../users';
 import { BookInService } from './book-in.service';
+import { JobBalances } from './job-balances';
 import { JobAccess } from './job-access.service';
 import { JobsController } from './jobs.controller';
 import { JobsRepository } from './jobs.repository';
@@ -13,7 +14,7 @@ import { JobsService } from './jobs.service';
 @Module({
   imports: [AuditModule, BikesModule, CustomersModule, ShopsModule, UsersModule],
   controllers: [JobsController],
-  providers: [JobsRepository, JobsService, JobAccess, BookInService],
+  providers: [JobsRepository, JobsService, JobAccess, BookInService, JobBalances],
   exports: [JobsService, JobAccess],
 })
 export class JobsModule {}

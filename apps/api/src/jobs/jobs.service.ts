@@ -33,9 +33,6 @@ type Actor = Pick<AuthUser, 'shopId'>;
 
 @Injectable()
 export class JobsService {
-  /** Money due per job; the payments feature binds its answer here. */
-  readonly balances = new JobBalances();
-
   constructor(
     private readonly repo: JobsRepository,
     private readonly uow: UnitOfWork,
@@ -46,6 +43,7 @@ export class JobsService {
     private readonly audit: AuditService,
     private readonly access: JobAccess,
     private readonly booking: BookInService,
+    private readonly balances: JobBalances,
     @Inject(CLOCK) private readonly clock: Clock,
     private readonly emitter: EventEmitter2,
   ) {}
@@ -114,13 +112,15 @@ export class JobsService {
   }
 
   update(actor: AuthUser, id: number, patch: UpdateJobRequest): JobDetail {
-    this.access.change(actor, id, 'job');
-    this.checkStaff(actor, patch.mechanicId);
-    this.uow.run(() => {
-      this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
-      this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });
+    return this.uow.run((tx) => {
+      this.access.change(actor, id, 'job', tx);
+      this.checkStaff(actor, patch.mechanicId);
+      this.uow.run(() => {
+        this.repo.update(actor.shopId, id, { ...patch, updatedAt: this.clock.now() });
+        this.audit.record(actor, { action: 'job.updated', entityType: 'job', entityId: id, details: { fields: Object.keys(patch) } });
+      });
+      return this.get(actor, id);
     });
-    return this.get(actor, id);
   }
 
   /** Moves the job along JOB_TRANSITIONS (libs/domain); anything else is ILLEGAL_TRANSITION. */

@@ -8,6 +8,7 @@ import { PermanentTaskError, type TaskContext, TaskHandler } from '../infra/task
 import { JobsService } from '../jobs';
 import type { OutboxAttachmentRef } from '../db/schema';
 import { type OutboxRow, MailRepository } from './mail.repository';
+import { fillSecrets, openSecrets } from './outbox-secrets';
 
 export const MAIL_SEND = 'mail.send' as const;
 
@@ -39,18 +40,29 @@ export class MailDelivery {
     const row = this.repo.claim(shopId, task.payload.messageId, task.key);
     if (!row) return; // sent already, or desk resent it under a newer task
     try {
+      const secrets = this.secrets(row);
       const receipt = await this.transport.send({
         from: this.cfg.MAIL_FROM,
         to: row.toAddress,
         subject: row.subject,
-        text: row.textBody,
-        html: row.htmlBody,
+        text: fillSecrets(row.textBody, secrets, false),
+        html: fillSecrets(row.htmlBody, secrets, true),
         messageId: row.messageId,
         attachments: await this.attachments(row),
       });
       this.repo.markSent(shopId, row.id, task.attempt, this.clock.now(), receipt.response);
     } catch (err) {
       throw this.recordFailure(row, err, task);
+    }
+  }
+
+  /** The message's sealed secrets (an owner link), opened only for this send; a key that changed since it was queued cannot. */
+  private secrets(row: OutboxRow): string[] {
+    if (!row.sealedSecrets) return [];
+    try {
+      return openSecrets(this.cfg.jwtSecret, row.sealedSecrets);
+    } catch {
+      throw new PermanentTaskError('The link in this message was sealed with another server secret (JWT_SECRET changed); send a new link');
     }
   }
 

@@ -68,7 +68,7 @@ export class MailRepository {
 
   /**
    * Records the send and, in the same UPDATE, swaps in the bodies without secrets (SET reads the
-   * row as it was). A crash before this write leaves the full message for the retry; a second
+   * row as it was) and drops the sealed secrets. A crash before this write leaves the full message for the retry; a second
    * call changes nothing more.
    */
   markSent(shopId: number, id: number, attempts: number, at: Date, response: string): void {
@@ -85,6 +85,7 @@ export class MailRepository {
         htmlBody: sql`coalesce(${m.htmlAfterSend}, ${m.htmlBody})`,
         textAfterSend: null,
         htmlAfterSend: null,
+        sealedSecrets: null,
       })
       .where(and(eq(outboxMessages.shopId, shopId), eq(outboxMessages.id, id)))
       .run();

@@ -1,6 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { OutboxMessageDto, SendReportRequest } from '@benchproof/contracts';
-import { formatDate } from '@benchproof/domain';
+import { formatDate, type JobStatus } from '@benchproof/domain';
 import { randomBytes } from 'node:crypto';
 import { AuditService } from '../audit';
 import { BikesService } from '../bikes';
@@ -15,11 +15,12 @@ import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import type { OutboxAttachmentRef } from '../db/schema';
 import { MAIL_SEND } from './mail-delivery';
-import { type OutboxRow, MailRepository } from './mail.repository';
+import { type NewOutboxRow, type OutboxRow, MailRepository } from './mail.repository';
+import { sealSecrets, withPlaceholders } from './outbox-secrets';
 import { estimateDecisionMail } from './templates/estimate-decision';
 import { type RenderedMail, type ShopBrand, withoutSecrets } from './templates/layout';
 import { paymentReceiptMail, type ReceiptLine } from './templates/payment-receipt';
-import { reportReadyMail } from './templates/report-ready';
+import { type ReportMailStage, reportReadyMail } from './templates/report-ready';
 
 /** A message to queue. Attachments are references, opened at send time. */
 export interface QueuedMail {
@@ -50,8 +51,17 @@ export interface ReportPdf {
   /** Hex SHA-256 of the PDF bytes, as issued. */
   sha256: string;
   size: number;
-  /** Where the owner can open the report without an attachment, or null. */
-  link: string | null;
+  /** The owner's private page (a link made for this message), or null when the job can have none. */
+  link: { url: string; expiresAt: Date } | null;
+  /** Recommendations still waiting for the owner's decision. */
+  openItems: number;
+}
+
+/** "Finished" only of finished work; open items on an open job ask for the owner's decision; a cancelled job gets the plain record. */
+export function reportStage(status: JobStatus, openItems: number): ReportMailStage {
+  if (status === 'cancelled') return { kind: 'record' };
+  if (status === 'collected' || (status === 'ready' && openItems === 0)) return { kind: 'finished' };
+  return openItems > 0 ? { kind: 'decision', openItems } : { kind: 'in_progress' };
 }
 
 /** A fresh key for a message's delivery task: a resend is a new task. */
@@ -85,9 +95,7 @@ export class MailService {
           reportId: mail.reportId ?? null,
           toAddress: mail.to,
           subject: mail.subject,
-          textBody: mail.text,
-          htmlBody: mail.html,
-          ...this.afterSend(mail),
+          ...this.bodies(mail),
           attachments: mail.attachments,
           status: 'queued',
           taskKey: newTaskKey(),
@@ -108,11 +116,20 @@ export class MailService {
     this.tasks.enqueue({ kind: MAIL_SEND, key: row.taskKey, shopId: row.shopId, payload: { messageId: row.id } }, tx);
   }
 
-  /** The bodies that replace the sent ones (MailRepository.markSent), when the message carries secrets. */
-  private afterSend(mail: QueuedMail): { textAfterSend: string | null; htmlAfterSend: string | null } {
-    const secrets = mail.secrets ?? [];
-    if (!secrets.length) return { textAfterSend: null, htmlAfterSend: null };
-    return { textAfterSend: withoutSecrets(mail.text, secrets), htmlAfterSend: withoutSecrets(mail.html, secrets) };
+  /**
+   * The bodies as stored. With secrets (an owner link): a placeholder where each stood, the secrets sealed
+   * beside them (opened at send time), and the bodies that replace these once sent (MailRepository.markSent).
+   */
+  private bodies(mail: QueuedMail): Pick<NewOutboxRow, 'textBody' | 'htmlBody' | 'textAfterSend' | 'htmlAfterSend' | 'sealedSecrets'> {
+    const secrets = (mail.secrets ?? []).filter(Boolean);
+    if (!secrets.length) return { textBody: mail.text, htmlBody: mail.html, textAfterSend: null, htmlAfterSend: null, sealedSecrets: null };
+    return {
+      textBody: withPlaceholders(mail.text, secrets),
+      htmlBody: withPlaceholders(mail.html, secrets),
+      textAfterSend: withoutSecrets(mail.text, secrets),
+      htmlAfterSend: withoutSecrets(mail.html, secrets),
+      sealedSecrets: sealSecrets(this.cfg.jwtSecret, secrets),
+    };
   }
 
   /** Every message of a job, newest first, with where it is on its way. */
@@ -138,8 +155,9 @@ export class MailService {
   }
 
   /**
-   * Queues "your bench report is ready" to the owner: the PDF attached within the budget (by its
-   * storage key and SHA-256), else a link. The reports feature calls this with its issued PDF.
+   * Queues the report e-mail to the owner: ONE message with the PDF attached within the budget (by its
+   * storage key and SHA-256) and the owner's private link (sealed in the row until sent), worded by where
+   * the job stands. The reports feature calls this with its issued PDF and a fresh owner link.
    */
   sendReport(actor: Actor, jobId: number, pdf: ReportPdf, input: SendReportRequest): OutboxMessageDto {
     const job = this.access.read(actor, jobId);
@@ -147,20 +165,26 @@ export class MailService {
     const { reportId } = pdf;
     const to = this.recipient(actor, job.customerId, input.to);
     const attached = pdf.size <= this.cfg.MAIL_ATTACHMENT_BUDGET;
+    const ctx = this.context(actor, job);
+    const locale = this.shops.settings(actor.shopId).dateLocale;
     const rendered = reportReadyMail({
-      ...this.context(actor, job),
+      ...ctx,
       version: pdf.version,
+      stage: reportStage(job.status, pdf.openItems),
       attached,
       sizeBytes: pdf.size,
       budgetBytes: this.cfg.MAIL_ATTACHMENT_BUDGET,
-      link: pdf.link,
+      link: pdf.link?.url ?? null,
+      linkUntil: pdf.link ? formatDate(pdf.link.expiresAt, locale, { timeZone: 'UTC' }) : null,
     });
     const attachments: OutboxAttachmentRef[] = attached
       ? [{ filename: pdf.filename, contentType: 'application/pdf', size: pdf.size, sha256: pdf.sha256, source: { kind: 'storage', key: pdf.storageKey } }]
       : [];
+    const secrets = pdf.link ? [pdf.link.url] : [];
     return this.uow.run((tx) => {
-      const dto = this.queue({ shopId: actor.shopId, jobId, kind: 'report_ready', reportId, to, ...rendered, attachments, createdBy: actor.id }, tx);
-      this.audit.record(actor, { action: 'report.sent', entityType: 'report', entityId: reportId, details: { jobId, to, attached, messageId: dto.id } });
+      const dto = this.queue({ shopId: actor.shopId, jobId, kind: 'report_ready', reportId, to, ...rendered, attachments, createdBy: actor.id, secrets }, tx);
+      const details = { jobId, to, attached, withLink: !!pdf.link, messageId: dto.id };
+      this.audit.record(actor, { action: 'report.sent', entityType: 'report', entityId: reportId, details });
       return dto;
     });
   }

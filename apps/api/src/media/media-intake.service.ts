@@ -11,6 +11,7 @@ import { IMAGE, type ImageAdapter } from '../infra/image';
 import { SNIFFER, type FileSniffer } from '../infra/sniff';
 import { STORAGE, UPLOAD_TEMP, type Storage, type UploadTemp } from '../infra/storage';
 import { VIDEO_PROBE, type VideoProbe } from '../infra/video';
+import { JobAccess } from '../jobs';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
@@ -51,6 +52,7 @@ export class MediaIntakeService {
     private readonly repo: MediaRepository,
     private readonly derivatives: MediaDerivativesService,
     private readonly audit: AuditService,
+    private readonly jobs: JobAccess,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     @Inject(CLOCK) private readonly clock: Clock,
     @Inject(STORAGE) private readonly storage: Storage,
@@ -171,6 +173,8 @@ export class MediaIntakeService {
     stored: { key: string; sha256: string; bytes: number },
     tx: DbTx,
   ): MediaAssetRow {
+    // Checked before the bytes were taken too; here a manager's override on a closed job is audited with the row.
+    this.jobs.change(actor, jobId, 'media', tx);
     const row = this.repo.insert({
       shopId: actor.shopId,
       jobId,

@@ -35,9 +35,12 @@ export class MediaSweepService implements OnModuleInit, OnApplicationBootstrap {
     @Inject(STORAGE) private readonly storage: Storage,
   ) {}
 
-  /** Runs before the server listens and before the task runner starts, so nothing of ours is live. */
+  /**
+   * Runs before the server listens and before the task runner starts, so nothing of ours is live. With several
+   * API processes (WEB_CONCURRENCY) a sibling may be writing, so only files idle past the grace go.
+   */
   async onModuleInit(): Promise<void> {
-    const removed = await this.removeLeftovers(null);
+    const removed = await this.removeLeftovers(this.cfg.WEB_CONCURRENCY > 1 ? new Date(this.clock.now().getTime() - LIVE_WRITE_GRACE_MS) : null);
     if (removed.length > 0) this.logger.log(`Removed ${removed.length} leftover file(s) at boot`);
   }
 

@@ -126,7 +126,7 @@ export class MediaTusService implements OnModuleInit {
     const parsed = TusUploadMetaSchema.safeParse(presentValues(upload.metadata));
     if (!parsed.success) throw tusError(new DomainError('VALIDATION_FAILED', 'Upload-Metadata needs jobId, phase and area.', { issues: parsed.error.issues }));
     try {
-      this.media.assertOpenJob(actor, parsed.data.jobId);
+      this.media.checkOpenJob(actor, parsed.data.jobId);
     } catch (err) {
       if (err instanceof DomainError) throw tusError(err);
       throw err;

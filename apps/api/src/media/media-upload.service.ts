@@ -23,7 +23,7 @@ export class MediaUploadService {
   async uploadBatch(actor: AuthUser, jobIdParam: string, files: IncomingFile[], fields: unknown): Promise<{ status: 201 | 207; body: UploadBatchResult }> {
     try {
       const jobId = parseId(jobIdParam);
-      this.media.assertOpenJob(actor, jobId);
+      this.media.checkOpenJob(actor, jobId);
       const meta = new ZodPipe(UploadMetaSchema).transform(fields);
       if (!files.length) throw new DomainError('VALIDATION_FAILED', 'Attach at least one file in the "files" field.');
       if (meta.clientId && files.length > 1) throw new DomainError('VALIDATION_FAILED', 'A clientId names one shot: send one file with it.');

@@ -11,7 +11,7 @@ import { JobAccess, type JobCaller } from '../jobs';
 import { MediaDerivativesService } from './media-derivatives.service';
 import { toMediaDto } from './media.mapper';
 import { MediaRepository, type MediaAssetRow } from './media.repository';
-import { UnitOfWork } from '../core/db';
+import { type DbTx, UnitOfWork } from '../core/db';
 
 /** An upright derivative in storage and its pixel size. */
 export interface UprightImage {
@@ -41,9 +41,14 @@ export class MediaService {
     this.jobs.read(actor, jobId);
   }
 
-  /** As assertJob, and the job's evidence is not frozen (JOB_CLOSED after handover unless a manager overrides). */
-  assertOpenJob(actor: AuthUser, jobId: number): void {
-    this.jobs.change(actor, jobId, 'media');
+  /** As assertJob, and the job's evidence is not frozen (JOB_CLOSED after handover unless a manager overrides, audited in `tx`). */
+  assertOpenJob(actor: AuthUser, jobId: number, tx: DbTx): void {
+    this.jobs.change(actor, jobId, 'media', tx);
+  }
+
+  /** The same answer before an upload's bytes are taken, writing nothing; the upload's row calls assertOpenJob in its unit of work. */
+  checkOpenJob(actor: AuthUser, jobId: number): void {
+    this.jobs.check(actor, jobId, 'media');
   }
 
   list(actor: AuthUser, jobId: number, q: MediaListQuery): MediaAssetDto[] {
@@ -61,28 +66,33 @@ export class MediaService {
   }
 
   retag(actor: AuthUser, jobId: number, req: RetagRequest): MediaAssetDto[] {
-    this.assertOpenJob(actor, jobId);
-    const { ids, ...tags } = req;
-    const patch = Object.fromEntries(Object.entries(tags).filter(([, v]) => v !== undefined));
-    const updated = this.uow.run(() => {
-      const rows = this.repo.listByIds(actor.shopId, jobId, [...new Set(ids)]);
-      const missing = ids.filter((id) => !rows.some((r) => r.id === id));
-      if (missing.length) throw new DomainError('NOT_FOUND', 'Some media were not found in this job.', { missing });
-      const changed = rows.map((r) => this.repo.update(r.id, patch));
-      for (const r of changed) this.audit.record(actor, { action: 'media.retagged', entityType: 'media_asset', entityId: r.id, details: { jobId, ...patch } });
-      return changed;
+    return this.uow.run((tx) => {
+      this.assertOpenJob(actor, jobId, tx);
+      const { ids, ...tags } = req;
+      const patch = Object.fromEntries(Object.entries(tags).filter(([, v]) => v !== undefined));
+      const updated = this.uow.run(() => {
+        const rows = this.repo.listByIds(actor.shopId, jobId, [...new Set(ids)]);
+        const missing = ids.filter((id) => !rows.some((r) => r.id === id));
+        if (missing.length) throw new DomainError('NOT_FOUND', 'Some media were not found in this job.', { missing });
+        const changed = rows.map((r) => this.repo.update(r.id, patch));
+        for (const r of changed)
+          this.audit.record(actor, { action: 'media.retagged', entityType: 'media_asset', entityId: r.id, details: { jobId, ...patch } });
+        return changed;
+      });
+      return this.toDtos(updated);
     });
-    return this.toDtos(updated);
   }
 
   /** Soft delete: hidden from the job, original and derivatives kept until a manager purges. */
   softDelete(actor: AuthUser, jobId: number, id: number): void {
-    this.assertOpenJob(actor, jobId);
-    const row = this.owned(actor, jobId, id);
-    if (row.deletedAt) return;
-    this.uow.run(() => {
-      this.repo.update(id, { deletedAt: this.clock.now(), deletedBy: actor.id });
-      this.audit.record(actor, { action: 'media.deleted', entityType: 'media_asset', entityId: id, details: { jobId, sha256: row.sha256 } });
+    return this.uow.run((tx) => {
+      this.assertOpenJob(actor, jobId, tx);
+      const row = this.owned(actor, jobId, id);
+      if (row.deletedAt) return;
+      this.uow.run(() => {
+        this.repo.update(id, { deletedAt: this.clock.now(), deletedBy: actor.id });
+        this.audit.record(actor, { action: 'media.deleted', entityType: 'media_asset', entityId: id, details: { jobId, sha256: row.sha256 } });
+      });
     });
   }
 
@@ -104,17 +114,19 @@ export class MediaService {
 
   /** Replaces the shots shown with a finding (order kept); they must be live media of the same job. */
   linkToFinding(actor: AuthUser, jobId: number, findingId: number, assetIds: number[]): FindingMediaDto {
-    this.assertOpenJob(actor, jobId);
-    this.findings.assertFinding(actor, jobId, findingId);
-    const unique = [...new Set(assetIds)];
-    const rows = this.repo.listByIds(actor.shopId, jobId, unique);
-    const missing = unique.filter((id) => !rows.some((r) => r.id === id));
-    if (missing.length) throw new DomainError('VALIDATION_FAILED', 'Only live media of this job can be linked.', { missing });
-    this.uow.run(() => {
-      this.repo.replaceLinks(findingId, unique);
-      this.audit.record(actor, { action: 'finding.media_linked', entityType: 'finding', entityId: findingId, details: { jobId, assetIds: unique } });
+    return this.uow.run((tx) => {
+      this.assertOpenJob(actor, jobId, tx);
+      this.findings.assertFinding(actor, jobId, findingId);
+      const unique = [...new Set(assetIds)];
+      const rows = this.repo.listByIds(actor.shopId, jobId, unique);
+      const missing = unique.filter((id) => !rows.some((r) => r.id === id));
+      if (missing.length) throw new DomainError('VALIDATION_FAILED', 'Only live media of this job can be linked.', { missing });
+      this.uow.run(() => {
+        this.repo.replaceLinks(findingId, unique);
+        this.audit.record(actor, { action: 'finding.media_linked', entityType: 'finding', entityId: findingId, details: { jobId, assetIds: unique } });
+      });
+      return this.findingMedia(actor, jobId, findingId);
     });
-    return this.findingMedia(actor, jobId, findingId);
   }
 
   findingMedia(actor: AuthUser, jobId: number, findingId: number): FindingMediaDto {

@@ -1,4 +1,4 @@
 export { OwnerLinksModule } from './owner-links.module';
 export { OwnerLinksService } from './owner-links.service';
-export { OwnerEventsBus } from './owner-events';
+export { OwnerLiveEvents } from './owner-events';
 export { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMail, type OwnerLinkMailerPort } from './owner-links.ports';

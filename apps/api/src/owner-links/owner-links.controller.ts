@@ -6,7 +6,7 @@ import { AuditService } from '../audit';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
 import { ApiZodBody, zod } from '../core/http';
 import { JobAccess } from '../jobs';
-import { OwnerEventsBus } from './owner-events';
+import { OwnerLiveEvents } from './owner-events';
 import { OwnerLinksService } from './owner-links.service';
 
 /** Audit actions staff see in the job's owner panel. */
@@ -20,7 +20,7 @@ export class OwnerLinksController {
     private readonly links: OwnerLinksService,
     private readonly audit: AuditService,
     private readonly access: JobAccess,
-    private readonly bus: OwnerEventsBus,
+    private readonly bus: OwnerLiveEvents,
   ) {}
 
   @Get('owner-links')

@@ -3,7 +3,8 @@ import { AuditModule } from '../audit';
 import { CustomersModule } from '../customers';
 import { JobsModule } from '../jobs';
 import { MailModule } from '../mail';
-import { OwnerEventsBus } from './owner-events';
+import { TextsModule } from '../texts';
+import { OwnerLiveEvents } from './owner-events';
 import { OutboxOwnerLinkMailer } from './owner-links.bindings';
 import { OwnerLinksController } from './owner-links.controller';
 import { OwnerLinksRepository } from './owner-links.repository';
@@ -16,9 +17,9 @@ import { OWNER_LINK_MAILER } from './owner-links.ports';
  * exported OwnerLinksService and reports activity on the exported bus.
  */
 @Module({
-  imports: [AuditModule, CustomersModule, JobsModule, MailModule],
+  imports: [AuditModule, CustomersModule, JobsModule, MailModule, TextsModule],
   controllers: [OwnerLinksController],
-  providers: [OwnerLinksRepository, OwnerLinksService, OwnerEventsBus, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
-  exports: [OwnerLinksService, OwnerEventsBus],
+  providers: [OwnerLinksRepository, OwnerLinksService, OwnerLiveEvents, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
+  exports: [OwnerLinksService, OwnerLiveEvents],
 })
 export class OwnerLinksModule {}

@@ -1,16 +1,15 @@
 import { Inject, Injectable } from '@nestjs/common';
-import type { CreatedOwnerLinkDto, CreateOwnerLinkRequest, OwnerLinkDto } from '@benchproof/contracts';
+import { type CreatedOwnerLinkDto, type CreateOwnerLinkRequest, CreateOwnerLinkRequestSchema, type OwnerLinkDto } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
-import { CustomersService } from '../customers';
 import { CLOCK, type Clock } from '../core/clock';
 import { JobAccess } from '../jobs';
-import { OwnerEventsBus } from './owner-events';
+import { OwnerLiveEvents } from './owner-events';
 import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';
 import { hashOwnerToken, newOwnerToken, ownerTokenSignatureOk } from './owner-token';
-import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort } from './owner-links.ports';
+import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort, type OwnerLinkSent } from './owner-links.ports';
 import { UnitOfWork } from '../core/db';
 
 const DAY_MS = 24 * 3600 * 1000;
@@ -23,9 +22,8 @@ export class OwnerLinksService {
     private readonly repo: OwnerLinksRepository,
     private readonly uow: UnitOfWork,
     private readonly access: JobAccess,
-    private readonly customers: CustomersService,
     private readonly audit: AuditService,
-    private readonly bus: OwnerEventsBus,
+    private readonly bus: OwnerLiveEvents,
     @Inject(OWNER_LINK_MAILER) private readonly mailer: OwnerLinkMailerPort,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -54,48 +52,61 @@ export class OwnerLinksService {
 
   /**
    * A new link for the job; earlier links stop working so only one is live.
-   * The token leaves the server only in this answer and in the e-mail.
+   * The token leaves the server only in this answer and in the e-mail or text.
    */
   create(actor: AuthUser, jobId: number, input: CreateOwnerLinkRequest): CreatedOwnerLinkDto {
     const job = this.access.read(actor, jobId);
     if (job.status === 'cancelled') throw new DomainError('CONFLICT', 'The job is cancelled; there is nothing for the owner to see.');
-    const owner = this.customers.get(actor, job.customerId);
+    const awaitingDecision = job.status === 'waiting_owner';
+    // One transaction: the link, the message that carries it (text or e-mail outbox row and its task) and the audit entry.
+    const { saved, url, mail, now } = this.uow.run(() => {
+      const { row, url, expiresAt, now } = this.mint(actor, jobId, input.expiresInDays);
+      const sent: OwnerLinkSent = input.send
+        ? this.mailer.send({ shopId: actor.shopId, jobId, linkId: row.id, createdBy: actor.id, customerId: job.customerId, awaitingDecision, url, expiresAt })
+        : { status: 'not_sent', reason: 'Not asked to send.' };
+      const mail: CreatedOwnerLinkDto['mail'] =
+        sent.status === 'queued' ? { status: 'queued', reason: null, channel: sent.channel } : { status: 'not_sent', reason: sent.reason, channel: null };
+      const saved = sent.status === 'queued' ? this.repo.update(actor.shopId, row.id, { sentTo: sent.to }) : row;
+      const details = { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status, channel: mail.channel };
+      this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details });
+      return { saved, url, mail, now };
+    });
+    this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
+    return { link: this.toDto(saved), url, mail };
+  }
+
+  /**
+   * Sends a message that carries the owner's link (the report e-mail): the link is made exactly as desk's
+   * "create" makes one (default lifetime, earlier links revoked, audited, recorded as sent to the
+   * recipient) in one transaction with the message `send` queues, so both commit or neither. A cancelled
+   * job has no owner page: `send` gets null.
+   */
+  sendWithLink<T extends { to: string }>(actor: AuthUser, jobId: number, send: (link: { url: string; expiresAt: Date } | null) => T): T {
+    const job = this.access.read(actor, jobId);
+    if (job.status === 'cancelled') return send(null);
+    const done = this.uow.run(() => {
+      const { row, url, expiresAt, now } = this.mint(actor, jobId, CreateOwnerLinkRequestSchema.parse({}).expiresInDays);
+      const sent = send({ url, expiresAt });
+      this.repo.update(actor.shopId, row.id, { sentTo: sent.to });
+      const details = { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: 'queued', with: 'report' };
+      this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details });
+      return { sent, now };
+    });
+    this.bus.emit(actor.shopId, { type: 'link', jobId, at: done.now.toISOString() });
+    return done.sent;
+  }
+
+  /** A new token for the job; its earlier links stop working. The URL is built from configuration only. */
+  private mint(actor: AuthUser, jobId: number, expiresInDays: number): { row: OwnerLinkRow; url: string; expiresAt: Date; now: Date } {
     const token = newOwnerToken(this.cfg.jwtSecret);
     const now = this.clock.now();
-    const expiresAt = new Date(now.getTime() + input.expiresInDays * DAY_MS);
+    const expiresAt = new Date(now.getTime() + expiresInDays * DAY_MS);
     const row = this.uow.run(() => {
       this.repo.revokeOpen(actor.shopId, jobId, now, actor.id);
       return this.repo.insert({ shopId: actor.shopId, jobId, tokenHash: hashOwnerToken(token), createdBy: actor.id, createdAt: now, expiresAt });
     });
     // From configuration only: a forged Host header must never end up in an e-mail.
-    const url = `${this.cfg.publicUrl}/o/${token}`;
-    let mail: CreatedOwnerLinkDto['mail'] = { status: 'not_sent', reason: 'Not asked to send.' };
-    if (input.send && !owner.email) mail = { status: 'not_sent', reason: 'The owner has no e-mail address; copy the link for a text message.' };
-    else if (input.send && owner.email) {
-      const sent = this.mailer.send({
-        shopId: actor.shopId,
-        jobId,
-        linkId: row.id,
-        createdBy: actor.id,
-        to: owner.email,
-        ownerName: owner.name,
-        url,
-        expiresAt,
-      });
-      mail = sent.status === 'queued' ? { status: 'queued', reason: null } : sent;
-    }
-    const saved = this.uow.run(() => {
-      const saved = mail.status === 'queued' && owner.email ? this.repo.update(actor.shopId, row.id, { sentTo: owner.email }) : row;
-      this.audit.record(actor, {
-        action: 'owner_link.created',
-        entityType: 'job',
-        entityId: jobId,
-        details: { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status },
-      });
-      return saved;
-    });
-    this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
-    return { link: this.toDto(saved), url, mail };
+    return { row, url: `${this.cfg.publicUrl}/o/${token}`, expiresAt, now };
   }
 
   revoke(actor: AuthUser, jobId: number, linkId: number): OwnerLinkDto {

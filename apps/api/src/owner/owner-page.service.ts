@@ -11,7 +11,7 @@ import { InspectionService } from '../inspection';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import { UnitOfWork } from '../core/db';
-import { OwnerEventsBus, type OwnerActor } from '../owner-links';
+import { OwnerLiveEvents, type OwnerActor } from '../owner-links';
 import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
 
 /**
@@ -30,7 +30,7 @@ export class OwnerPageService {
     private readonly findings: FindingsService,
     private readonly inspection: InspectionService,
     private readonly consent: ConsentService,
-    private readonly bus: OwnerEventsBus,
+    private readonly bus: OwnerLiveEvents,
     @Inject(OWNER_MEDIA) private readonly media: OwnerMediaPort,
     @Inject(OWNER_PAIRS) private readonly pairs: OwnerPairsPort,
     @Inject(OWNER_REPORT) private readonly report: OwnerReportPort,
@@ -116,8 +116,8 @@ export class OwnerPageService {
    */
   decide(owner: OwnerActor, input: OwnerDecisionsRequest): void {
     const decidedAt = this.clock.now();
-    this.uow.run(() => {
-      const job = this.access.change(owner, owner.jobId, 'decision');
+    this.uow.run((tx) => {
+      const job = this.access.change(owner, owner.jobId, 'decision', tx);
       const byRec = new Map(this.findings.list(owner, owner.jobId).flatMap((f) => (f.recommendation ? [[f.recommendation.id, f] as const] : [])));
       const ownerName = this.customers.get(owner, job.customerId).name;
       for (const item of input.items) {

@@ -1,4 +1,4 @@
-import { ThrottlerModule } from '@nestjs/throttler';
+import { sharedThrottlerModule } from '../infra/redis';
 import { type MiddlewareConsumer, Module, type NestModule } from '@nestjs/common';
 import type { NextFunction, Request, Response } from 'express';
 import { AnnotationsModule } from '../annotations';
@@ -38,7 +38,7 @@ function noStore(_req: Request, res: Response, next: NextFunction): void {
 @Module({
   // Owner routes are public: each address gets its own budget (ThrottlerGuard via @OwnerRoute).
   imports: [
-    ThrottlerModule.forRoot([{ ttl: 60_000, limit: 120 }]),
+    sharedThrottlerModule([{ ttl: 60_000, limit: 120 }]),
     BikesModule,
     ConsentModule,
     CustomersModule,

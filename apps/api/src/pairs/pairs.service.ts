@@ -10,7 +10,7 @@ import { JobAccess, type JobCaller } from '../jobs';
 import { MediaService, type ShotForPairing } from '../media';
 import { PairsRepository, type ShotPairRow } from './pairs.repository';
 import { cropColumns, toPairDto } from './pairs.view';
-import { UnitOfWork } from '../core/db';
+import { type DbTx, UnitOfWork } from '../core/db';
 
 /** Domain problem → error code and the form field it belongs under. */
 const PROBLEM_ERRORS: Record<PairProblem, { code: 'PAIR_NOT_A_STILL' | 'PAIR_WRONG_PHASE'; field: 'beforeAssetId' | 'afterAssetId' }> = {
@@ -51,82 +51,90 @@ export class PairsService {
   }
 
   create(actor: AuthUser, jobId: number, input: CreatePairRequest): ShotPairDto {
-    this.openJob(actor, jobId);
-    const req = CreatePairRequestSchema.parse(input);
-    const before = this.shotOfJob(actor, jobId, req.beforeAssetId, 'beforeAssetId');
-    const after = this.shotOfJob(actor, jobId, req.afterAssetId, 'afterAssetId');
-    const problem = pairProblem(before.shot, after.shot);
-    if (problem) {
-      const { code, field } = PROBLEM_ERRORS[problem];
-      throw new DomainError(code, undefined, { problem, issues: [{ path: field, message: messageFor(problem) }] });
-    }
-    if (this.repo.findByShots(actor.shopId, jobId, before.shot.id, after.shot.id)) throw new DomainError('PAIR_EXISTS');
-    const now = this.clock.now();
-    const row = this.uow.run(() => {
-      const saved = this.repo.insert({
-        shopId: actor.shopId,
-        jobId,
-        beforeAssetId: before.shot.id,
-        afterAssetId: after.shot.id,
-        caption: req.caption,
-        position: this.repo.nextPosition(actor.shopId, jobId),
-        ...cropColumns(req.crop),
-        createdBy: actor.id,
-        createdAt: now,
-        updatedAt: now,
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      const req = CreatePairRequestSchema.parse(input);
+      const before = this.shotOfJob(actor, jobId, req.beforeAssetId, 'beforeAssetId');
+      const after = this.shotOfJob(actor, jobId, req.afterAssetId, 'afterAssetId');
+      const problem = pairProblem(before.shot, after.shot);
+      if (problem) {
+        const { code, field } = PROBLEM_ERRORS[problem];
+        throw new DomainError(code, undefined, { problem, issues: [{ path: field, message: messageFor(problem) }] });
+      }
+      if (this.repo.findByShots(actor.shopId, jobId, before.shot.id, after.shot.id)) throw new DomainError('PAIR_EXISTS');
+      const now = this.clock.now();
+      const row = this.uow.run(() => {
+        const saved = this.repo.insert({
+          shopId: actor.shopId,
+          jobId,
+          beforeAssetId: before.shot.id,
+          afterAssetId: after.shot.id,
+          caption: req.caption,
+          position: this.repo.nextPosition(actor.shopId, jobId),
+          ...cropColumns(req.crop),
+          createdBy: actor.id,
+          createdAt: now,
+          updatedAt: now,
+        });
+        this.audit.record(actor, {
+          action: 'pair.created',
+          entityType: 'job',
+          entityId: jobId,
+          details: { pairId: saved.id, beforeAssetId: saved.beforeAssetId, afterAssetId: saved.afterAssetId },
+        });
+        return saved;
       });
-      this.audit.record(actor, {
-        action: 'pair.created',
-        entityType: 'job',
-        entityId: jobId,
-        details: { pairId: saved.id, beforeAssetId: saved.beforeAssetId, afterAssetId: saved.afterAssetId },
-      });
-      return saved;
+      return toPairDto(row, before.dto, after.dto);
     });
-    return toPairDto(row, before.dto, after.dto);
   }
 
   update(actor: AuthUser, jobId: number, pairId: number, patch: UpdatePairRequest): ShotPairDto {
-    this.openJob(actor, jobId);
-    this.owned(actor, jobId, pairId);
-    const crop = patch.crop === undefined ? {} : cropColumns(patch.crop);
-    this.uow.run(() => {
-      this.repo.update(actor.shopId, pairId, { ...(patch.caption === undefined ? {} : { caption: patch.caption }), ...crop, updatedAt: this.clock.now() });
-      this.audit.record(actor, { action: 'pair.updated', entityType: 'job', entityId: jobId, details: { pairId, fields: Object.keys(patch) } });
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      this.owned(actor, jobId, pairId);
+      const crop = patch.crop === undefined ? {} : cropColumns(patch.crop);
+      this.uow.run(() => {
+        this.repo.update(actor.shopId, pairId, { ...(patch.caption === undefined ? {} : { caption: patch.caption }), ...crop, updatedAt: this.clock.now() });
+        this.audit.record(actor, { action: 'pair.updated', entityType: 'job', entityId: jobId, details: { pairId, fields: Object.keys(patch) } });
+      });
+      return this.one(actor, jobId, pairId);
     });
-    return this.one(actor, jobId, pairId);
   }
 
   delete(actor: AuthUser, jobId: number, pairId: number): void {
-    this.openJob(actor, jobId);
-    const row = this.owned(actor, jobId, pairId);
-    this.uow.run(() => {
-      this.repo.delete(actor.shopId, pairId);
-      this.audit.record(actor, {
-        action: 'pair.deleted',
-        entityType: 'job',
-        entityId: jobId,
-        details: { pairId, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId },
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      const row = this.owned(actor, jobId, pairId);
+      this.uow.run(() => {
+        this.repo.delete(actor.shopId, pairId);
+        this.audit.record(actor, {
+          action: 'pair.deleted',
+          entityType: 'job',
+          entityId: jobId,
+          details: { pairId, beforeAssetId: row.beforeAssetId, afterAssetId: row.afterAssetId },
+        });
       });
     });
   }
 
   /** Sets the order; the request must name every pair of the job exactly once. */
   reorder(actor: AuthUser, jobId: number, req: ReorderPairsRequest): ShotPairDto[] {
-    this.openJob(actor, jobId);
-    const rows = this.repo.list(actor.shopId, jobId);
-    const known = new Set(rows.map((r) => r.id));
-    if (req.ids.length !== rows.length || req.ids.some((id) => !known.has(id))) {
-      throw new DomainError('VALIDATION_FAILED', 'List every pair of this job once.', {
-        issues: [{ path: 'ids', message: 'List every pair of this job once.' }],
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      const rows = this.repo.list(actor.shopId, jobId);
+      const known = new Set(rows.map((r) => r.id));
+      if (req.ids.length !== rows.length || req.ids.some((id) => !known.has(id))) {
+        throw new DomainError('VALIDATION_FAILED', 'List every pair of this job once.', {
+          issues: [{ path: 'ids', message: 'List every pair of this job once.' }],
+        });
+      }
+      const now = this.clock.now();
+      this.uow.run(() => {
+        req.ids.forEach((id, position) => this.repo.update(actor.shopId, id, { position, updatedAt: now }));
+        this.audit.record(actor, { action: 'pairs.reordered', entityType: 'job', entityId: jobId, details: { ids: req.ids } });
       });
-    }
-    const now = this.clock.now();
-    this.uow.run(() => {
-      req.ids.forEach((id, position) => this.repo.update(actor.shopId, id, { position, updatedAt: now }));
-      this.audit.record(actor, { action: 'pairs.reordered', entityType: 'job', entityId: jobId, details: { ids: req.ids } });
+      return this.list(actor, jobId);
     });
-    return this.list(actor, jobId);
   }
 
   /** Before/after combinations of shots not yet in a pair, likeliest first. */
@@ -156,9 +164,9 @@ export class PairsService {
     return row;
   }
 
-  private openJob(actor: AuthUser, jobId: number): void {
+  private openJob(actor: AuthUser, jobId: number, tx: DbTx): void {
     // Pairs are evidence: they freeze at handover like the shots themselves (JobAccess).
-    this.jobs.change(actor, jobId, 'media');
+    this.jobs.change(actor, jobId, 'media', tx);
   }
 
   private shotOfJob(actor: AuthUser, jobId: number, assetId: number, field: string): ShotForPairing {

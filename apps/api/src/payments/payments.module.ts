@@ -5,7 +5,7 @@ import { MailModule } from '../mail';
 import { OwnerLinksModule } from '../owner-links';
 import { ShopsModule } from '../shops';
 import { UsersModule } from '../users';
-import { BalanceService } from './balance.service';
+import { BalanceModule } from './balance.module';
 import { CheckoutService } from './checkout.service';
 import { OwnerPaymentController, PaymentsWebhookController } from './payments-public.controller';
 import { PaymentsController } from './payments.controller';
@@ -13,9 +13,9 @@ import { PaymentsRepository } from './payments.repository';
 import { PaymentsService } from './payments.service';
 
 @Module({
-  imports: [AuditModule, JobsModule, MailModule, OwnerLinksModule, ShopsModule, UsersModule],
+  imports: [AuditModule, BalanceModule, JobsModule, MailModule, OwnerLinksModule, ShopsModule, UsersModule],
   controllers: [PaymentsController, OwnerPaymentController, PaymentsWebhookController],
-  providers: [PaymentsRepository, BalanceService, PaymentsService, CheckoutService],
-  exports: [PaymentsService, BalanceService],
+  providers: [PaymentsRepository, PaymentsService, CheckoutService],
+  exports: [PaymentsService, BalanceModule],
 })
 export class PaymentsModule {}

@@ -1,4 +1,4 @@
-import { Inject, Injectable, type OnModuleInit } from '@nestjs/common';
+import { Inject, Injectable } from '@nestjs/common';
 import type { BalanceDto, JobPayments, PaymentDto, RecordPaymentRequest, RefundRequest } from '@benchproof/contracts';
 import { randomUUID } from 'node:crypto';
 import { AuditService } from '../audit';
@@ -8,7 +8,7 @@ import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../core/clock';
 import { PAYMENT_PROVIDER, PaymentProviderError, type PaymentProvider } from '../infra/payments';
 import type { DbTx } from '../core/db';
-import { JobAccess, JobsService } from '../jobs';
+import { JobAccess } from '../jobs';
 import { MailService } from '../mail';
 import { UsersService } from '../users';
 import { BalanceService } from './balance.service';
@@ -25,26 +25,18 @@ const METHOD_LABEL: Record<PaymentRow['method'], string> = {
 
 /** Money in and out of a job: in-shop payments, refunds, online payments from the webhook, and the receipt. */
 @Injectable()
-export class PaymentsService implements OnModuleInit {
+export class PaymentsService {
   constructor(
     private readonly uow: UnitOfWork,
     private readonly repo: PaymentsRepository,
     private readonly balances: BalanceService,
     private readonly access: JobAccess,
-    private readonly jobs: JobsService,
     private readonly users: UsersService,
     private readonly mail: MailService,
     private readonly audit: AuditService,
     @Inject(PAYMENT_PROVIDER) private readonly provider: PaymentProvider,
     @Inject(CLOCK) private readonly clock: Clock,
   ) {}
-
-  onModuleInit(): void {
-    this.jobs.balances.use({
-      dueByJob: (shopId, ids) => new Map([...this.balances.balances(shopId, ids)].map(([id, b]) => [id, b.dueMinor])),
-      readyUnpaidIds: (shopId) => this.balances.readyUnpaidIds(shopId),
-    });
-  }
 
   forJob(actor: Actor, jobId: number): JobPayments {
     this.access.read(actor, jobId);

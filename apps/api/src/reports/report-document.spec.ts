@@ -6,6 +6,7 @@ import { join } from 'node:path';
 import { inflateSync } from 'node:zlib';
 import { createElement } from 'react';
 import sharp from 'sharp';
+import { pdfPages } from '../../test/reports/pdf-readback';
 import { PdfAdapter } from '../infra/pdf';
 import { ReportDocument } from './pdf/report.pdf';
 import type { ReportImage, ReportSnapshot } from './report-data';
@@ -111,7 +112,10 @@ describe('ReportDocument (react-pdf, read back with poppler)', { timeout: 60_000
     const pages = poppler(out, 'pdftotext')
       .split('\f')
       .filter((p) => p.trim());
-    expect(pages.length).toBe(pdf.pageCount(out));
+    // Page count read by a PDF library (pdfjs-dist); the adapter's own count (stored as reports.page_count) must agree.
+    const readBack = (await pdfPages(out)).length;
+    expect(pages.length).toBe(readBack);
+    expect(pdf.pageCount(out)).toBe(readBack);
     pages.forEach((text, i) => {
       expect(text).toContain('J-2026-0777');
       expect(text).toContain(`Page ${i + 1} of ${pages.length}`);

@@ -9,7 +9,7 @@ import { IMAGE, type ImageAdapter } from '../infra/image';
 import { PDF, type PdfAdapter } from '../infra/pdf';
 import { STORAGE, type Storage } from '../infra/storage';
 import { TASK_RUNNER, type TaskContext, TaskHandler, type TaskRunner } from '../infra/tasks';
-import type { IssueStamp, ReportImage, ReportSnapshot } from './report-data';
+import type { IssueStamp, ReportImage } from './report-data';
 import { ANNOTATED_IMAGE_SOURCE, type AnnotatedImageSource } from './report-sources';
 import { ReportsRepository, type ReportRow } from './reports.repository';
 
@@ -68,7 +68,7 @@ export class ReportRenderService {
 
   /** Loads every shot (the prepared print JPEGs), then lays out and writes the PDF. */
   async renderPdf(row: ReportRow, progress: (f: number) => void = () => undefined): Promise<Buffer> {
-    const snap = row.snapshot as ReportSnapshot;
+    const snap = row.snapshot;
     const ids = [
       ...new Set([...snap.findings.flatMap((f) => f.shots), ...snap.pairs.flatMap((p) => [p.before, p.after]), ...snap.scopeStills].map((s) => s.assetId)),
     ];

@@ -64,7 +64,13 @@ export class ReportSnapshotService {
         : null,
       cautions: this.cautions(findings, torque.length > 0, scope.length > 0),
       madeAt: this.clock.now().toISOString(),
+      payment: this.paymentPart(actor.shopId, jobId),
     };
+  }
+
+  /** The balance as the payments feature answers it through the jobs feature's port (reports never imports payments). */
+  private paymentPart(shopId: number, jobId: number): ReportSnapshot['payment'] {
+    return this.jobs.balances.settlement(shopId, jobId) ?? undefined;
   }
 
   private shopPart(shopId: number): ReportSnapshot['shop'] {

@@ -1,4 +1,4 @@
-import { ThrottlerModule } from '@nestjs/throttler';
+import { sharedThrottlerModule } from '../infra/redis';
 import { Module } from '@nestjs/common';
 import { MulterModule } from '@nestjs/platform-express';
 import { AnnotationsModule } from '../annotations';
@@ -11,6 +11,7 @@ import { InspectionModule } from '../inspection';
 import { JobsModule } from '../jobs';
 import { MailModule } from '../mail';
 import { MediaModule } from '../media';
+import { OwnerLinksModule } from '../owner-links';
 import { PairsModule } from '../pairs';
 import { ShopsModule } from '../shops';
 import { WorkLogModule } from '../work-log';
@@ -27,11 +28,12 @@ import { VerifyController } from './verify.controller';
 /**
  * The bench report. Shots come from the annotated print renders and pairs from the
  * pairs feature, each through a small port (report-sources.ts); an issued PDF goes to
- * the owner through MailService.sendReport, attached by storage key and SHA-256.
+ * the owner through MailService.sendReport, attached by storage key and SHA-256, with a fresh owner
+ * link (OwnerLinksService.sendWithLink) in the same e-mail.
  */
 @Module({
   imports: [
-    ThrottlerModule.forRoot([{ ttl: 60_000, limit: 30 }]),
+    sharedThrottlerModule([{ ttl: 60_000, limit: 30 }]),
     AuditModule,
     JobsModule,
     ShopsModule,
@@ -42,6 +44,7 @@ import { VerifyController } from './verify.controller';
     AnnotationsModule,
     PairsModule,
     MailModule,
+    OwnerLinksModule,
     StorageModule,
     PdfModule,
     MulterModule.registerAsync({

@@ -10,9 +10,10 @@ import { CLOCK, type Clock } from '../core/clock';
 import { PDF_PAGES, type PdfPageImages } from '../infra/pdf';
 import { type ByteRange, STORAGE, type Storage } from '../infra/storage';
 import { JobAccess } from '../jobs';
+import { FindingsService } from '../findings';
 import { MailService } from '../mail';
+import { OwnerLinksService } from '../owner-links';
 import { ShopsService } from '../shops';
-import type { ReportSnapshot } from './report-data';
 import { ReportRenderService } from './report-render.service';
 import { ReportSnapshotService } from './report-snapshot.service';
 import { toReportDto } from './reports.mapper';
@@ -29,8 +30,6 @@ export interface IssuedReportFile {
   sha256: string;
   byteSize: number;
   storageKey: string;
-  /** Where the owner can open it without an attachment; null today (the owner page's token is stored only hashed). */
-  link: string | null;
   stream(): Readable;
   bytes(): Promise<Buffer>;
 }
@@ -47,6 +46,8 @@ export class ReportsService implements OnApplicationBootstrap {
     private readonly shops: ShopsService,
     private readonly audit: AuditService,
     private readonly mail: MailService,
+    private readonly ownerLinks: OwnerLinksService,
+    private readonly findings: FindingsService,
     @Inject(STORAGE) private readonly storage: Storage,
     @Inject(PDF_PAGES) private readonly pages: PdfPageImages,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -157,17 +158,21 @@ export class ReportsService implements OnApplicationBootstrap {
       sha256: row.sha256,
       byteSize: row.byteSize,
       storageKey: key,
-      link: null,
       stream: () => this.storage.createReadStream(key),
       bytes: () => buffer(this.storage.createReadStream(key)),
     };
   }
 
-  /** Queues the issued PDF to the owner through the mail outbox, attached by storage key and SHA-256. */
+  /**
+   * Queues the issued PDF to the owner through the mail outbox (attached by storage key and SHA-256) in
+   * ONE e-mail with a fresh owner link, made as desk makes one; the wording follows the open items.
+   */
   sendToOwner(actor: AuthUser, jobId: number, reportId: number, input: SendReportRequest): OutboxMessageDto {
     const f = this.issuedPdf(actor.shopId, reportId);
+    if (f.jobId !== jobId) throw notFound('Report');
     const pdf = { reportId, jobId: f.jobId, version: f.version, filename: f.filename, storageKey: f.storageKey, sha256: f.sha256, size: f.byteSize };
-    return this.mail.sendReport(actor, jobId, { ...pdf, link: f.link }, input);
+    const openItems = this.findings.estimate(actor, jobId).items.filter((i) => i.recommendation.decisionStatus === 'pending').length;
+    return this.ownerLinks.sendWithLink(actor, jobId, (link) => this.mail.sendReport(actor, jobId, { ...pdf, link, openItems }, input));
   }
 
   /** The newest issued version of a job (rendered or not), or null. */
@@ -180,7 +185,7 @@ export class ReportsService implements OnApplicationBootstrap {
   verify(hash: string): VerifyResult {
     const row = this.repo.findIssuedByHash(hash);
     if (!row?.version || !row.issuedAt) return { issued: false };
-    const snap = row.snapshot as ReportSnapshot;
+    const snap = row.snapshot;
     return { issued: true, shopName: snap.shop.name, jobNumber: snap.job.number, version: row.version, issuedAt: row.issuedAt.toISOString() };
   }
 
@@ -197,7 +202,7 @@ export class ReportsService implements OnApplicationBootstrap {
   }
 
   private filename(row: ReportRow): string {
-    const number = (row.snapshot as ReportSnapshot).job.number;
+    const number = row.snapshot.job.number;
     return row.kind === 'issued' ? `bench-report-${number}-v${row.version}.pdf` : `bench-report-${number}-draft-${row.id}.pdf`;
   }
 }

@@ -42,3 +42,13 @@ export function backdateJob(db: Db, jobId: number, days: number): void {
     db.run(sql.raw(`UPDATE ${table} SET ${set} WHERE ${key} = ${Number(jobId)}`));
   }
 }
+
+/**
+ * Demo history is replayed through the real services, so moving a demo job to ready queued a text to
+ * its owner (who prefers texts). That visit is history: its texts and their tasks are dropped before the
+ * task runner can take them (the seed is synchronous up to here), so no demo owner is texted at start-up.
+ */
+export function forgetReplayedTexts(db: Db, shopId: number): void {
+  db.run(sql`DELETE FROM tasks WHERE kind = 'text.send' AND shop_id = ${shopId}`);
+  db.run(sql`DELETE FROM text_messages WHERE shop_id = ${shopId}`);
+}

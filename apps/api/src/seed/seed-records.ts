@@ -70,8 +70,10 @@ export class SeedRecords {
         const checker = a.byEmail.get(job.checker ?? '') ?? a.manager;
         this.jobs.recordFinalCheck(checker, id, { items: ALL_PASS, passed: true, testRideNotes: 'Short loop round the yard', note: null });
       }
-      // Demo history predates reports, so its hand-overs are confirmed without one.
-      this.jobs.transition(to === 'collected' ? a.desk : mechanic, id, { to, note: null, confirmNoReport: to === 'collected' });
+      // Demo history predates reports and payments, so its hand-overs are confirmed without a report and, where
+      // approved work is still due, with desk's reason (the UNPAID_BALANCE rule holds for the seed too).
+      const handover = to === 'collected' ? { confirmNoReport: true, unpaidReason: 'Settled before payments were recorded here' } : {};
+      this.jobs.transition(to === 'collected' ? a.desk : mechanic, id, { to, note: null, ...handover });
       if (to === 'on_stand') this.inspect(job, id, mechanic, a);
       if (to === 'in_work') this.logWork(job, id, mechanic);
     }

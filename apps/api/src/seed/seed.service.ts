@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import { DEMO_PASSWORD, DEMO_SHOPS, type DemoShop } from '@benchproof/seeds';
 import { DB, type Db } from '../core/db';
 import { shops, users } from '../db/schema';
-import { backdateJob } from './seed-backdate';
+import { backdateJob, forgetReplayedTexts } from './seed-backdate';
 import { SeedRecords, type ShopActors } from './seed-records';
 import { CLOCK, type Clock } from '../core/clock';
 import { hashPassword } from '../users';
@@ -38,6 +38,7 @@ export class SeedService {
       const shopId = this.insertShop(demo, passwordHash);
       const seeded = this.records.seedShop(demo.key, this.actors(shopId));
       for (const [jobId, daysAgo] of seeded) backdateJob(this.db, jobId, daysAgo);
+      forgetReplayedTexts(this.db, shopId);
       jobs += seeded.length;
     }
     this.logger.log(`Seeded ${DEMO_SHOPS.length} demo shops with ${jobs} jobs`);

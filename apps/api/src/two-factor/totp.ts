@@ -1,5 +1,6 @@
 import { generateSecret, generateSync, generateURI, verifySync } from 'otplib';
-import { createCipheriv, createDecipheriv, createHash, createHmac, randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
+import { openText, sealText } from '../core/crypto';
 
 /**
  * TOTP as RFC 6238 describes it with the values authenticator apps expect: HMAC-SHA-1, 6 digits,
@@ -26,22 +27,9 @@ export function totpStep(secret: string, code: string, epochSeconds: number): nu
 }
 
 /** AES-256-GCM with a key derived (HMAC) from the server secret, so a copied database holds no usable TOTP secrets. */
-export function sealSecret(serverSecret: string, plain: string): string {
-  const iv = randomBytes(12);
-  const cipher = createCipheriv('aes-256-gcm', sealKey(serverSecret), iv);
-  const body = Buffer.concat([cipher.update(plain, 'utf8'), cipher.final()]);
-  return ['v1', iv.toString('base64url'), cipher.getAuthTag().toString('base64url'), body.toString('base64url')].join('.');
-}
-
-export function openSecret(serverSecret: string, sealed: string): string {
-  const [v, iv, tag, body] = sealed.split('.');
-  if (v !== 'v1' || !iv || !tag || !body) throw new Error('Unreadable TOTP secret');
-  const decipher = createDecipheriv('aes-256-gcm', sealKey(serverSecret), Buffer.from(iv, 'base64url'));
-  decipher.setAuthTag(Buffer.from(tag, 'base64url'));
-  return Buffer.concat([decipher.update(Buffer.from(body, 'base64url')), decipher.final()]).toString('utf8');
-}
-
-const sealKey = (serverSecret: string): Buffer => createHmac('sha256', serverSecret).update('benchproof:totp-seal:v1').digest();
+const TOTP_SEAL = 'benchproof:totp-seal:v1';
+export const sealSecret = (serverSecret: string, plain: string): string => sealText(serverSecret, TOTP_SEAL, plain);
+export const openSecret = (serverSecret: string, sealed: string): string => openText(serverSecret, TOTP_SEAL, sealed);
 
 /** Ten recovery codes, 10 characters each from an alphabet without look-alikes (0/O, 1/l), shown as xxxxx-xxxxx. */
 export function newRecoveryCodes(count = 10): string[] {

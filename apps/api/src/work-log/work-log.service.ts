@@ -10,7 +10,7 @@ import { ShopsService } from '../shops';
 import { UsersService } from '../users';
 import type { StoredTorqueInput } from '../db/schema';
 import { type TorqueEntryRow, type WorkEntryRow, WorkLogRepository } from './work-log.repository';
-import { UnitOfWork } from '../core/db';
+import { type DbTx, UnitOfWork } from '../core/db';
 
 const toWorkDto = (w: WorkEntryRow, staff: Map<number, string>): WorkEntryDto => ({
   id: w.id,
@@ -70,8 +70,8 @@ export class WorkLogService {
   }
 
   /** JobAccess's per-object check: in the caller's shop and still open (or a manager's audited override). */
-  private openJob(actor: AuthUser, jobId: number): void {
-    this.jobs.change(actor, jobId, 'work_log');
+  private openJob(actor: AuthUser, jobId: number, tx: DbTx): void {
+    this.jobs.change(actor, jobId, 'work_log', tx);
   }
 
   listWork(actor: AuthUser, jobId: number): WorkEntryDto[] {
@@ -81,20 +81,24 @@ export class WorkLogService {
   }
 
   addWork(actor: AuthUser, jobId: number, input: WorkEntryRequest): WorkEntryDto {
-    this.openJob(actor, jobId);
-    const { chargeable, ...entry } = input;
-    // The rate is copied in, so a later change of the shop's rate does not re-price logged work.
-    const rateMinor = chargeable ? this.shops.settings(actor.shopId).labourRateMinor : null;
-    const row = this.uow.run(() => this.repo.insertWorkEntry({ ...entry, rateMinor, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() }));
-    return toWorkDto(row, this.staff(actor));
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      const { chargeable, ...entry } = input;
+      // The rate is copied in, so a later change of the shop's rate does not re-price logged work.
+      const rateMinor = chargeable ? this.shops.settings(actor.shopId).labourRateMinor : null;
+      const row = this.uow.run(() => this.repo.insertWorkEntry({ ...entry, rateMinor, shopId: actor.shopId, jobId, userId: actor.id, at: this.clock.now() }));
+      return toWorkDto(row, this.staff(actor));
+    });
   }
 
   deleteWork(actor: AuthUser, jobId: number, entryId: number): void {
-    this.openJob(actor, jobId);
-    if (!this.repo.workEntry(actor.shopId, jobId, entryId)) throw notFound('Work entry');
-    this.uow.run(() => {
-      this.repo.deleteWorkEntry(actor.shopId, entryId);
-      this.audit.record(actor, { action: 'work_entry.deleted', entityType: 'job', entityId: jobId, details: { entryId } });
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      if (!this.repo.workEntry(actor.shopId, jobId, entryId)) throw notFound('Work entry');
+      this.uow.run(() => {
+        this.repo.deleteWorkEntry(actor.shopId, entryId);
+        this.audit.record(actor, { action: 'work_entry.deleted', entityType: 'job', entityId: jobId, details: { entryId } });
+      });
     });
   }
 
@@ -106,39 +110,41 @@ export class WorkLogService {
 
   /** Stores the reading and the verdict computed by libs/domain torqueVerdict (the maker's value governs). */
   addTorque(actor: AuthUser, jobId: number, input: TorqueEntryRequest): TorqueEntryDto {
-    this.openJob(actor, jobId);
-    const now = this.clock.now();
-    this.requirePastCalibration(input.toolCalibratedOn, now);
-    const verdict = this.verdict(input);
-    const stored: StoredTorqueInput = { specified: input.specified, applied: input.applied, tolerancePct: input.tolerancePct ?? null };
-    const row = this.uow.run(() => {
-      const saved = this.repo.insertTorqueEntry({
-        shopId: actor.shopId,
-        jobId,
-        fastener: input.fastener,
-        input: { ...stored },
-        result: { ...verdict },
-        specValue: input.specified.min,
-        specUnit: input.specified.unit,
-        appliedValue: input.applied.value,
-        appliedUnit: input.applied.unit,
-        specSource: input.specSource,
-        tool: input.tool,
-        toolCalibratedOn: input.toolCalibratedOn ?? null,
-        threadlocker: input.threadlocker ?? null,
-        carbonPart: input.carbonPart,
-        userId: actor.id,
-        at: now,
+    return this.uow.run((tx) => {
+      this.openJob(actor, jobId, tx);
+      const now = this.clock.now();
+      this.requirePastCalibration(input.toolCalibratedOn, now);
+      const verdict = this.verdict(input);
+      const stored: StoredTorqueInput = { specified: input.specified, applied: input.applied, tolerancePct: input.tolerancePct ?? null };
+      const row = this.uow.run(() => {
+        const saved = this.repo.insertTorqueEntry({
+          shopId: actor.shopId,
+          jobId,
+          fastener: input.fastener,
+          input: { ...stored },
+          result: { ...verdict },
+          specValue: input.specified.min,
+          specUnit: input.specified.unit,
+          appliedValue: input.applied.value,
+          appliedUnit: input.applied.unit,
+          specSource: input.specSource,
+          tool: input.tool,
+          toolCalibratedOn: input.toolCalibratedOn ?? null,
+          threadlocker: input.threadlocker ?? null,
+          carbonPart: input.carbonPart,
+          userId: actor.id,
+          at: now,
+        });
+        this.audit.record(actor, {
+          action: 'torque.recorded',
+          entityType: 'job',
+          entityId: jobId,
+          details: { torqueEntryId: saved.id, verdict: verdict.verdict },
+        });
+        return saved;
       });
-      this.audit.record(actor, {
-        action: 'torque.recorded',
-        entityType: 'job',
-        entityId: jobId,
-        details: { torqueEntryId: saved.id, verdict: verdict.verdict },
-      });
-      return saved;
+      return toTorqueDto(row, this.staff(actor));
     });
-    return toTorqueDto(row, this.staff(actor));
   }
 
   /** A calibration cannot lie in the future; same error shape as the zod pipe so forms mark the field. */

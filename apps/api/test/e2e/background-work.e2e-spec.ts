@@ -38,7 +38,10 @@ describe('failed background work: the manager retries it', () => {
 
     const list = (await manager.agent.get('/api/background-work/failed').expect(200)).body as FailedWork[];
     const failed = list.find((w) => w.kind === 'media.derivatives' && w.key === String(asset.id));
-    expect(failed).toMatchObject({ attempts: 3, lastError: expect.stringContaining('ENOSPC') });
+    expect(failed).toMatchObject({ attempts: 3, lastError: expect.stringContaining('ENOSPC'), jobId });
+    // The screen names the job by its number, as the jobs list does.
+    const job = (await manager.agent.get(`/api/jobs/${jobId}`).expect(200)).body as { number: string };
+    expect(failed?.jobNumber).toBe(job.number);
     // A full disk is transient: it is also tried again by itself, later (a long backoff).
     expect(Date.parse(failed?.nextTryAt ?? '')).toBeGreaterThan(Date.now() + 60_000);
 

@@ -1,7 +1,8 @@
 import type { InvitationDto } from '@benchproof/contracts';
-import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
+import type { MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { startAppWithMail, stopAppWithMail } from '../support/app-with-mail';
 import { CLOCK, type Clock } from '../../src/core/clock';
-import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
+import { DEMO, type SignedIn, type TestApp } from '../test-app';
 import { linkToken, mailTo, newAgent, STRONG } from './accounts-helpers';
 
 describe('invitations by e-mail', () => {
@@ -9,14 +10,10 @@ describe('invitations by e-mail', () => {
   let catcher: MailCatcher;
   let manager: SignedIn;
   beforeAll(async () => {
-    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    t = await startTestApp({ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100' });
+    ({ t, catcher } = await startAppWithMail({ MAIL_SWEEP_MS: '100' }));
     manager = await t.signIn(DEMO.manager);
   });
-  afterAll(async () => {
-    await t.close();
-    await catcher.close();
-  });
+  afterAll(() => stopAppWithMail(t, catcher));
 
   const invite = async (name: string, email: string, role = 'mechanic') => {
     const res = await manager.agent.post('/api/invitations').send({ name, email, role }).expect(201);

@@ -1,16 +1,7 @@
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
+import { ALL_PASS } from '../support/final-check';
 import { bookIn } from './records-helpers';
 
-const ALL_PASS = {
-  brakes: true,
-  shifting: true,
-  steering: true,
-  fasteners_torqued: true,
-  wheels_true_centred: true,
-  tyres_pressure: true,
-  axles_closed: true,
-  test_ride: true,
-};
 const WORK = { description: 'Trued rear wheel', minutes: 15 };
 const FINDING = { area: 'drivetrain', condition: 'worn', description: 'Chain at 0.5 % elongation' };
 
@@ -74,6 +65,23 @@ describe('JobAccess: evidence freezes at handover', () => {
     const overrides = after.filter((e) => e.action === 'job.closed_override');
     expect(overrides.length).toBe(before.filter((e) => e.action === 'job.closed_override').length + 1);
     expect(overrides.at(-1)).toMatchObject({ userId: manager.user.id, details: { what: 'work_log', status: 'collected' } });
+  });
+
+  it("writes no override entry when the manager's change itself fails (the record commits with the change)", async () => {
+    const overrides = async () =>
+      ((await manager.agent.get(`/api/audit?entityType=job&entityId=${jobId}`).expect(200)).body as { action: string }[]).filter(
+        (e) => e.action === 'job.closed_override',
+      ).length;
+    const before = await overrides();
+    const j = `/api/jobs/${jobId}`;
+    // Each passes the closed-job check (manager override) and then fails on its own record.
+    await manager.agent.delete(`${j}/work-entries/999999`).expect(404);
+    await manager.agent.patch(`${j}/findings/999999`).send({ description: 'Chain replaced' }).expect(404);
+    await manager.agent
+      .patch(`${j}/media`)
+      .send({ ids: [999999], caption: 'Rear hub after' })
+      .expect(404);
+    expect(await overrides()).toBe(before);
   });
 
   it('writes no override entry for changes to an open job', async () => {

@@ -22,12 +22,12 @@ const key: Record<Sort, (j: Ref) => string | number | null> = {
   status: (j) => j.status,
 };
 
-/** SQLite order: NULL first ascending and last descending; ties by newest id. */
+/** SQLite order: NULL first ascending and last descending; ties by oldest booking (id ascending) in either direction. */
 function order(sort: Sort, dir: 'asc' | 'desc') {
   return (a: Ref, b: Ref) => {
     const [x, y] = [key[sort](a), key[sort](b)];
     const c = x === y ? 0 : x === null ? -1 : y === null ? 1 : x < y ? -1 : 1;
-    return (dir === 'asc' ? c : -c) || b.id - a.id;
+    return (dir === 'asc' ? c : -c) || a.id - b.id;
   };
 }
 
@@ -90,6 +90,14 @@ describe('jobs list: every filter shape answers like a plain reference (prepared
     const days = ref.flatMap((j) => (j.promised ? [j.promised] : [])).sort();
     const all = shapes(mechanicId, [days[Math.floor(days.length * 0.4)], days[Math.floor(days.length * 0.6)]]);
     for (const s of [...all, ...[...all].reverse()]) await expectLikeReference(s, today);
+  });
+
+  it('lists open jobs promised for the same day oldest booking first (product decision, session 18)', async () => {
+    const res = await desk.agent.get('/api/jobs?open=true&pageSize=100').expect(200);
+    const rows = res.body.items as { id: number; promisedOn: string | null }[];
+    const sameDay = rows.slice(1).flatMap((r, i) => (r.promisedOn === rows[i].promisedOn ? [[rows[i].id, r.id]] : []));
+    expect(sameDay.length).toBeGreaterThan(0);
+    for (const [earlier, later] of sameDay) expect(later).toBeGreaterThan(earlier);
   });
 
   it('names the assigned mechanic on a list row, and an unassigned job has none', async () => {

@@ -1,17 +1,7 @@
 import { JOB_TRANSITIONS, TERMINAL_STATUSES, JOB_STATUSES } from '@benchproof/domain';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
+import { ALL_PASS } from '../support/final-check';
 import { bookIn } from './records-helpers';
-
-const ALL_PASS = {
-  brakes: true,
-  shifting: true,
-  steering: true,
-  fasteners_torqued: true,
-  wheels_true_centred: true,
-  tyres_pressure: true,
-  axles_closed: true,
-  test_ride: true,
-};
 
 describe('jobs: book-in and the status machine', () => {
   let t: TestApp;

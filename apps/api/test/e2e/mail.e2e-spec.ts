@@ -2,7 +2,7 @@ import type { OutboxMessageDto } from '@benchproof/contracts';
 import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
 import { eventually, FakeReportFiles, freePort, makePdf, sha256 } from '../mail/mail-fixtures';
 import { DEMO, startTestApp, type SignedIn, type TestApp } from '../test-app';
-import { bookIn } from './records-helpers';
+import { bookIn, driveToReady } from './records-helpers';
 
 /** Short retry and sweep times so an outage of a second is retried within the test. */
 const FAST = { MAIL_RETRY_BASE_MS: '200', MAIL_SWEEP_MS: '100' };
@@ -62,7 +62,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
     expect((await desk.agent.post(`/api/jobs/${job.id}/reports/502/send`).send({}).expect(404)).body.code).toBe('NOT_FOUND');
     const mech = await t.signIn(DEMO.mechanic);
     await mech.agent.post(`/api/jobs/${other.id}/reports/502/send`).send({}).expect(403);
-    const quiet = await bookIn(desk, { newCustomer: { name: 'Ansel Brook', email: null, phone: '+44 1632 960123', preferredChannel: 'phone', notes: null } });
+    const quiet = await bookIn(desk, { newCustomer: { name: 'Ansel Brook', email: null, phone: '+44 20 7946 0123', preferredChannel: 'phone', notes: null } });
     await reports.issue(503, desk.user.shopId, quiet.id, await makePdf('quiet'));
     const res = await desk.agent.post(`/api/jobs/${quiet.id}/reports/503/send`).send({}).expect(422);
     expect(res.body.code).toBe('NO_OWNER_EMAIL');
@@ -73,26 +73,7 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
   it('asks desk to confirm a hand-over with no report sent, and records that the bike left without one', async () => {
     const manager = await t.signIn(DEMO.manager);
     const checker = await t.signIn(DEMO.mechanic2);
-    const drive = async (jobId: number) => {
-      for (const to of ['on_stand', 'in_work', 'final_check']) await manager.agent.post(`/api/jobs/${jobId}/transitions`).send({ to }).expect(200);
-      await checker.agent
-        .post(`/api/jobs/${jobId}/final-check`)
-        .send({
-          items: {
-            brakes: true,
-            shifting: true,
-            steering: true,
-            fasteners_torqued: true,
-            wheels_true_centred: true,
-            tyres_pressure: true,
-            axles_closed: true,
-            test_ride: true,
-          },
-          passed: true,
-        })
-        .expect(201);
-      await manager.agent.post(`/api/jobs/${jobId}/transitions`).send({ to: 'ready' }).expect(200);
-    };
+    const drive = (jobId: number) => driveToReady(manager, checker, jobId);
     const bare = await bookIn(desk);
     await drive(bare.id);
     const refused = await desk.agent.post(`/api/jobs/${bare.id}/transitions`).send({ to: 'collected' }).expect(409);
@@ -109,27 +90,6 @@ describe('mail: the report e-mail through real SMTP into the local catcher', () 
     await desk.agent.post(`/api/jobs/${reported.id}/reports/504/send`).send({}).expect(202);
     const handed = (await desk.agent.post(`/api/jobs/${reported.id}/transitions`).send({ to: 'collected' }).expect(200)).body;
     expect(handed).toMatchObject({ status: 'collected', collectedWithoutReport: false });
-  });
-});
-
-describe('mail: a report over the attachment budget goes as a link', () => {
-  it('sends the owner link and says why there is no attachment', async () => {
-    const catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    const pdf = await makePdf('Large report', 40);
-    const { t, reports, desk } = await appWithReports({ SMTP_URL: catcher.smtpUrl, MAIL_ATTACHMENT_BUDGET: String(pdf.length - 1) });
-    try {
-      const job = await bookIn(desk);
-      await reports.issue(601, desk.user.shopId, job.id, pdf, 'https://bench.example.test/o/abc123');
-      await desk.agent.post(`/api/jobs/${job.id}/reports/601/send`).send({}).expect(202);
-      const [mail] = await catcher.waitFor(1);
-      expect(mail.attachments).toEqual([]);
-      expect(mail.text).toContain('https://bench.example.test/o/abc123');
-      expect(mail.text).toMatch(/larger than the .* MB we attach/);
-      expect(mail.html).toContain('href="https://bench.example.test/o/abc123"');
-    } finally {
-      await t.close();
-      await catcher.close();
-    }
   });
 });
 

@@ -1,7 +1,8 @@
 import type { ConsentStatusDto, FindingDto, OwnerPageDto } from '@benchproof/contracts';
 import { CONSENT_WORDING } from '@benchproof/contracts';
-import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
-import { startTestApp, type TestApp } from '../test-app';
+import type { MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { startAppWithMail, stopAppWithMail } from '../support/app-with-mail';
+import type { TestApp } from '../test-app';
 import { createLink, ownerPage, ownerScenario, seen, type OwnerScenario } from './owner-helpers';
 
 // What the owner does on the page: decisions (through the staff decision path) and consent.
@@ -11,15 +12,11 @@ describe('owner link: decisions and consent', () => {
   let other: OwnerScenario;
   let catcher: MailCatcher;
   beforeAll(async () => {
-    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    t = await startTestApp({ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100' });
+    ({ t, catcher } = await startAppWithMail({ MAIL_SWEEP_MS: '100' }));
     s = await ownerScenario(t);
     other = await ownerScenario(t);
   });
-  afterAll(async () => {
-    await t.close();
-    await catcher.close();
-  });
+  afterAll(() => stopAppWithMail(t, catcher));
 
   it('refuses a decision on a price the owner did not see (desk re-priced meanwhile), storing nothing', async () => {
     const { token } = await createLink(s.desk, s.jobId);

@@ -6,10 +6,11 @@ import { outboxMessages, ownerLinks } from '../../src/db/schema';
 import type { AuthUser } from '../../src/core/auth';
 import { CLOCK, type Clock } from '../../src/core/clock';
 import { OwnerLinksService } from '../../src/owner-links';
-import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
+import type { MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { startAppWithMail, stopAppWithMail } from '../support/app-with-mail';
 import { eventually } from '../mail/mail-fixtures';
 import { derivativesSettled, solidJpeg } from '../media/media-fixtures';
-import { startTestApp, type TestApp } from '../test-app';
+import type { TestApp } from '../test-app';
 import { createLink, ownerPage, ownerScenario, seen, type OwnerScenario } from './owner-helpers';
 
 describe('owner link', () => {
@@ -18,21 +19,17 @@ describe('owner link', () => {
   let other: OwnerScenario;
   let catcher: MailCatcher;
   beforeAll(async () => {
-    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    t = await startTestApp({ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100' });
+    ({ t, catcher } = await startAppWithMail({ MAIL_SWEEP_MS: '100' }));
     s = await ownerScenario(t);
     other = await ownerScenario(t);
   });
-  afterAll(async () => {
-    await t.close();
-    await catcher.close();
-  });
+  afterAll(() => stopAppWithMail(t, catcher));
 
   it('is returned once as a URL and stored only as a SHA-256 hash', async () => {
     const created = await createLink(s.desk, s.jobId);
     expect(created.url).toMatch(/\/o\/[A-Za-z0-9_-]{43}\.[A-Za-z0-9_-]{22}$/);
     expect(created.link).toMatchObject({ state: 'active', jobId: s.jobId });
-    expect(created.mail).toEqual({ status: 'queued', reason: null });
+    expect(created.mail).toEqual({ status: 'queued', reason: null, channel: 'email' });
     expect(created.link.sentTo).toBe('ottilie@example.test');
     const rows = t.app.get<Db>(DB).select().from(ownerLinks).all();
     const row = rows.find((r) => r.id === created.link.id);

@@ -1,19 +1,16 @@
-import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
+import type { MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { startAppWithMail, stopAppWithMail } from '../support/app-with-mail';
 import { CLOCK, type Clock } from '../../src/core/clock';
-import { DEMO, startTestApp, type TestApp } from '../test-app';
+import { DEMO, type TestApp } from '../test-app';
 import { linkToken, mailTo, newAgent, STRONG, STRONG_2 } from './accounts-helpers';
 
 describe('forgotten passwords through the local mail catcher', () => {
   let t: TestApp;
   let catcher: MailCatcher;
   beforeAll(async () => {
-    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    t = await startTestApp({ SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100', RESET_THROTTLE_LIMIT: '3' });
+    ({ t, catcher } = await startAppWithMail({ MAIL_SWEEP_MS: '100', RESET_THROTTLE_LIMIT: '3' }));
   });
-  afterAll(async () => {
-    await t.close();
-    await catcher.close();
-  });
+  afterAll(() => stopAppWithMail(t, catcher));
 
   it('mails a link that works once, ends every other session and signs in the device that used it', async () => {
     const phone = await t.signIn(DEMO.mechanic);

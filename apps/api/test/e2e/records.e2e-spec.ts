@@ -1,5 +1,6 @@
 import { CARBON_CAUTION, TORQUE_CAUTION } from '@benchproof/domain';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
+import { ALL_PASS } from '../support/final-check';
 import { bookIn } from './records-helpers';
 
 describe('records: measurements, estimate, decisions, torque', () => {
@@ -205,16 +206,7 @@ describe('records: measurements, estimate, decisions, torque', () => {
         'post',
         `${j}/final-check`,
         {
-          items: {
-            brakes: true,
-            shifting: true,
-            steering: true,
-            fasteners_torqued: true,
-            wheels_true_centred: true,
-            tyres_pressure: true,
-            axles_closed: true,
-            test_ride: false,
-          },
+          items: { ...ALL_PASS, test_ride: false },
           passed: false,
           note: 'x',
         },

@@ -1,4 +1,4 @@
-import { formatTorque } from '@benchproof/domain';
+import { formatDate, formatTorque } from '@benchproof/domain';
 import { writeFileSync } from 'node:fs';
 import { binary } from '../media/media-fixtures';
 import { FINDINGS, OWNER, jobWithRecords, photo, settled } from '../reports/report-fixtures';
@@ -24,7 +24,8 @@ describe('bench report: draft, issue, read back', () => {
   let pdf: Buffer;
 
   beforeAll(async () => {
-    t = await startTestApp();
+    // No mail server here: the paid job's receipt gets one attempt, so no retry keeps the task wait (settled) open.
+    t = await startTestApp({ MAIL_MAX_ATTEMPTS: '1' });
     ctx = await jobWithRecords(t, 3);
   });
   afterAll(() => t.close());
@@ -68,6 +69,9 @@ describe('bench report: draft, issue, read back', () => {
     expect(all).toContain('You chose not to have this work done');
     expect(all).toContain('Do not ride');
     expect(all).toContain('Do not ride if a brake lever reaches the handlebar');
+    // Nothing paid yet: the cover says what is due (no "paid").
+    expect(pages[0].text).toMatch(/PAYMENT\s+Due £\d+\.\d{2}/);
+    expect(pages[0].text).not.toContain('Paid');
     // Job number and "Page n of N" on every page after the cover.
     pages.slice(1).forEach((p, i) => {
       expect(p.text).toContain(`Job ${ctx.job.number}`);
@@ -154,6 +158,22 @@ describe('bench report: draft, issue, read back', () => {
       ).body,
     ).toEqual({ issued: false });
     await t.http().get('/api/verify/not-a-hash').expect(400);
+  });
+
+  it('a paid job: the report made after the payment says "Paid" with the day, written as the shop writes dates', async () => {
+    const due = ((await ctx.m.agent.get(`${ctx.base}/payments`).expect(200)).body as { balance: { dueMinor: number } }).balance.dueMinor;
+    expect(due).toBeGreaterThan(0);
+    await ctx.m.agent.post(`${ctx.base}/payments`).send({ method: 'cash', amountMinor: due }).expect(201);
+    const draft = (await ctx.m.agent.post(`${ctx.base}/reports/drafts`).expect(202)).body as ReportBody;
+    await settled(t);
+    const ready = (await ctx.m.agent.get(`${ctx.base}/reports/${draft.id}`).expect(200)).body as ReportBody;
+    const paidPdf = await getPdf(ready.urls.pdf);
+    if (process.env.REPORT_PAID_PDF_OUT) writeFileSync(process.env.REPORT_PAID_PDF_OUT, paidPdf);
+    const cover = (await pdfPages(paidPdf))[0].text;
+    // The demo shop writes dates en-GB: day, short month, year (CLDR via formatDate, tested in libs/domain).
+    expect(cover).toMatch(/PAYMENT\s+Paid \d{1,2} [A-Z][a-z]{2} \d{4}/);
+    expect(cover).toContain(`Paid ${formatDate(new Date(), 'en-GB', { timeZone: 'UTC' })}`);
+    expect(cover).not.toMatch(/Due £/);
   });
 
   it('a draft cannot be verified, and a draft still rendering cannot be issued', async () => {

@@ -20,8 +20,8 @@ const words = (...texts: string[]) =>
 /** A straightforward reference: every typed word must start some word of the job's number, owner or bike. */
 const matches = (job: RefJob, q: string) => words(q).every((w) => job.words.some((x) => x.startsWith(w)));
 
-/** SQLite sorts NULL first ascending; ties by newest id, as the list does. */
-const byPromised = (a: RefJob, b: RefJob) => ((a.promised ?? '') < (b.promised ?? '') ? -1 : (a.promised ?? '') > (b.promised ?? '') ? 1 : b.id - a.id);
+/** SQLite sorts NULL first ascending; ties by oldest booking (id ascending), as the list does. */
+const byPromised = (a: RefJob, b: RefJob) => ((a.promised ?? '') < (b.promised ?? '') ? -1 : (a.promised ?? '') > (b.promised ?? '') ? 1 : a.id - b.id);
 
 describe('search at scale: 50,000 customers and bikes, 50,000 jobs in one shop', () => {
   let t: TestApp;

@@ -1,16 +1,9 @@
-import { DEMO_PASSWORD } from '@benchproof/seeds';
 import { sql } from 'drizzle-orm';
 import { DB, type Db } from '../../src/core/db';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
+import { bearer, changePassword, claimsOf, sessionOf } from '../support/sessions';
 
-/** A session as a script keeps it: the raw JWT, sent as a Bearer token. */
-async function bearer(t: TestApp, email: string, password = DEMO_PASSWORD): Promise<string> {
-  const res = await t.http().post('/api/auth/login').send({ email, password }).expect(200);
-  const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('bp_session='))!;
-  return cookie.split(';')[0].slice('bp_session='.length);
-}
-
-const subOf = (jwt: string) => (JSON.parse(Buffer.from(jwt.split('.')[1], 'base64url').toString()) as { sub: number }).sub;
+const subOf = (jwt: string) => claimsOf(jwt).sub as number;
 
 /**
  * Session lookups are remembered for a few seconds per session id. These checks run inside that window
@@ -23,7 +16,7 @@ describe('the session cache never outlives a session', () => {
   });
   afterAll(() => t.close());
 
-  const me = (jwt: string) => t.http().get('/api/auth/session').set('Authorization', `Bearer ${jwt}`);
+  const me = (jwt: string) => sessionOf(t, jwt);
   const warm = async (jwt: string) => {
     for (let i = 0; i < 3; i++) await me(jwt).expect(200);
   };
@@ -69,18 +62,9 @@ describe('the session cache never outlives a session', () => {
     const elsewhere = await bearer(t, DEMO.otherShopMechanic);
     await warm(other);
     await warm(elsewhere);
-    const res = await t
-      .http()
-      .post('/api/auth/password')
-      .set('Authorization', `Bearer ${other}`)
-      .send({ currentPassword: DEMO_PASSWORD, newPassword: 'a-new-bench-password' })
-      .expect(200);
+    const fresh = await changePassword(t, other, 'a-new-bench-password');
     await me(other).expect(401);
     await me(elsewhere).expect(401);
-    const fresh = (res.headers['set-cookie'] as unknown as string[])
-      .find((c) => c.startsWith('bp_session='))!
-      .split(';')[0]
-      .slice(11);
     await me(fresh).expect(200);
   });
 

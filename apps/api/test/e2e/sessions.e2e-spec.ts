@@ -1,15 +1,7 @@
 import { DEMO_PASSWORD } from '@benchproof/seeds';
 import { createHmac } from 'node:crypto';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
-
-/** A session as a script keeps it: the raw JWT, sent as a Bearer token (no CSRF needed). */
-async function bearer(t: TestApp, email: string, password = DEMO_PASSWORD): Promise<string> {
-  const res = await t.http().post('/api/auth/login').send({ email, password }).expect(200);
-  const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('bp_session='))!;
-  return cookie.split(';')[0].slice('bp_session='.length);
-}
-
-const claimsOf = (jwt: string) => JSON.parse(Buffer.from(jwt.split('.')[1], 'base64url').toString()) as Record<string, unknown>;
+import { bearer, changePassword, claimsOf, sessionOf } from '../support/sessions';
 
 /** An HS256 JWT (RFC 7519) signed with the server's own secret, built by hand so it can lack `exp`. */
 function signHs256(payload: object, secret: string): string {
@@ -25,7 +17,7 @@ describe('sessions end when they should', () => {
   });
   afterAll(() => t.close());
 
-  const me = (jwt: string) => t.http().get('/api/auth/session').set('Authorization', `Bearer ${jwt}`);
+  const me = (jwt: string) => sessionOf(t, jwt);
 
   it('refuses a token after sign-out, while the same user’s other session lives on', async () => {
     const phone = await bearer(t, DEMO.mechanic);
@@ -69,18 +61,9 @@ describe('sessions end when they should', () => {
   it('ends every session on a password change; the new password works, the old one does not', async () => {
     const other = await bearer(t, DEMO.otherShopMechanic);
     const elsewhere = await bearer(t, DEMO.otherShopMechanic);
-    const res = await t
-      .http()
-      .post('/api/auth/password')
-      .set('Authorization', `Bearer ${other}`)
-      .send({ currentPassword: DEMO_PASSWORD, newPassword: 'a-new-bench-password' })
-      .expect(200);
+    const fresh = await changePassword(t, other, 'a-new-bench-password');
     await me(other).expect(401);
     await me(elsewhere).expect(401);
-    const fresh = (res.headers['set-cookie'] as unknown as string[])
-      .find((c) => c.startsWith('bp_session='))!
-      .split(';')[0]
-      .slice('bp_session='.length);
     await me(fresh).expect(200);
     await t.http().post('/api/auth/login').send({ email: DEMO.otherShopMechanic, password: DEMO_PASSWORD }).expect(401);
     await me(await bearer(t, DEMO.otherShopMechanic, 'a-new-bench-password')).expect(200);

@@ -1,4 +1,5 @@
-import { startMailCatcher, type MailCatcher } from '../../scripts/mail-catcher.mjs';
+import type { MailCatcher } from '../../scripts/mail-catcher.mjs';
+import { startAppWithMail, stopAppWithMail } from '../support/app-with-mail';
 import { SetupCode } from '../../src/setup';
 import { startTestApp, type TestApp } from '../test-app';
 import { linkToken, mailTo, newAgent, STRONG, withCsrf } from './accounts-helpers';
@@ -79,13 +80,9 @@ describe('self-service sign-up (SIGNUP=open) with a confirmed e-mail', () => {
   let t: TestApp;
   let catcher: MailCatcher;
   beforeAll(async () => {
-    catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0 });
-    t = await startTestApp({ SEED_DEMO: 'false', SIGNUP: 'open', SIGNUP_LIMIT: '3', SMTP_URL: catcher.smtpUrl, MAIL_SWEEP_MS: '100' });
+    ({ t, catcher } = await startAppWithMail({ SEED_DEMO: 'false', SIGNUP: 'open', SIGNUP_LIMIT: '3', MAIL_SWEEP_MS: '100' }));
   });
-  afterAll(async () => {
-    await t.close();
-    await catcher.close();
-  });
+  afterAll(() => stopAppWithMail(t, catcher));
 
   it('opens the workshop only once the link in the e-mail is used, and the link works once', async () => {
     const manager = { name: 'Ola Mensah', email: 'ola@spokehouse.test', password: STRONG };

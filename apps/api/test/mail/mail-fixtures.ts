@@ -20,7 +20,7 @@ export async function makePdf(title: string, pages = 1): Promise<Buffer> {
  * reports feature's issuedPdf answers for these ids (the report e-mail then attaches them by key).
  */
 export class FakeReportFiles {
-  private readonly reports = new Map<number, { jobId: number; bytes: Buffer; link: string | null; shopId: number; key: string }>();
+  private readonly reports = new Map<number, { jobId: number; bytes: Buffer; shopId: number; key: string }>();
   private readonly storage: Storage;
 
   constructor(app: INestApplicationContext) {
@@ -30,10 +30,10 @@ export class FakeReportFiles {
     svc.issuedPdf = (shopId: number, reportId: number) => this.find(shopId, reportId) ?? real(shopId, reportId);
   }
 
-  async issue(reportId: number, shopId: number, jobId: number, bytes: Buffer, link: string | null = null): Promise<void> {
+  async issue(reportId: number, shopId: number, jobId: number, bytes: Buffer): Promise<void> {
     const key = `reports/${shopId}/fake-${reportId}.pdf`;
     await this.storage.put(key, Readable.from([bytes]));
-    this.reports.set(reportId, { jobId, bytes, link, shopId, key });
+    this.reports.set(reportId, { jobId, bytes, shopId, key });
   }
 
   private find(shopId: number, reportId: number): IssuedReportFile | null {
@@ -48,7 +48,6 @@ export class FakeReportFiles {
       sha256: sha256(r.bytes),
       byteSize: r.bytes.length,
       storageKey: r.key,
-      link: r.link,
       stream: () => Readable.from([r.bytes]),
       bytes: () => Promise.resolve(r.bytes),
     };

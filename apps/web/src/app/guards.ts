@@ -1,10 +1,9 @@
-import { roleCan, type Action } from '@benchproof/contracts';
-import type { SessionUser } from '@benchproof/contracts';
+import { roleCan, type Action, type SessionUser } from '@benchproof/contracts';
 import { onlineManager } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import { sessionHasExpired, sessionKey, sessionQuery } from '../features/auth';
 import { shopSettingsQuery } from '../features/shop-settings';
-import { api, ApiError } from '../lib/api-client';
+import { ApiError } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
 import { shopCan } from './shop-access';
 
@@ -51,12 +50,5 @@ export async function requireShowcase(args: LoaderFunctionArgs) {
   const user = await queryClient.ensureQueryData(sessionQuery);
   const shop = user ? await queryClient.ensureQueryData(shopSettingsQuery).catch(() => undefined) : undefined;
   if (!user || !shopCan(user.role, shop)('showcase.view')) throw redirect(deniedUrl('showcase.view'));
-  return null;
-}
-
-/** Loader of the sign-in page: while the server has no workshop, the setup screen is the only way in. */
-export async function redirectToSetup() {
-  const status = await api<{ setupOpen: boolean }>('/setup', { quietAuth: true }).catch(() => null);
-  if (status?.setupOpen) throw redirect('/setup');
   return null;
 }

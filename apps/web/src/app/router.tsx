@@ -1,9 +1,17 @@
 import type { ComponentType } from 'react';
-import { createBrowserRouter, Navigate, type RouteObject } from 'react-router';
-import { redirectToSetup, requireAction, requireSession, requireShowcase } from './guards';
-import { warmJobsList } from './routes/jobs/jobs.loader';
-import { NotFoundRoute } from './routes/errors/not-found.route';
-import { RouteError } from './routes/errors/route-error';
+import type { Action } from '@benchproof/contracts';
+import { createBrowserRouter, Navigate, type LoaderFunctionArgs, type RouteObject } from 'react-router';
+import { LazyRouteError as RouteError } from './routes/errors/lazy-route-error';
+import { redirectToSetup } from './setup-redirect';
+
+type Loaders = typeof import('./signed-in-loaders');
+/** A signed-in loader, fetched with its chunk on first use (see signed-in-loaders.ts). */
+const loader = (pick: (l: Loaders) => (args: LoaderFunctionArgs) => unknown) => async (args: LoaderFunctionArgs) =>
+  pick(await import('./signed-in-loaders'))(args);
+const warmJobsList = loader((l) => l.warmJobsList);
+const requireSession = loader((l) => l.requireSession);
+const requireShowcase = loader((l) => l.requireShowcase);
+const requireAction = (action: Action) => loader((l) => l.requireAction(action));
 
 /** Loads a page's code when it is first visited, so a phone downloads only what it opens. */
 const page =
@@ -118,13 +126,35 @@ const signedIn: RouteObject[] = [
     ),
   },
   {
+    path: 'settings/data',
+    loader: requireAction('backups.manage'),
+    lazy: page(
+      inFrame((p) => p.data),
+      (m) => m.DataRoute,
+    ),
+  },
+  {
+    path: 'settings/work',
+    loader: requireAction('work.retry'),
+    lazy: page(
+      inFrame((p) => p.work),
+      (m) => m.WorkRoute,
+    ),
+  },
+  {
     path: 'account/password',
     lazy: page(
       inFrame((p) => p.password),
       (m) => m.PasswordRoute,
     ),
   },
-  { path: '*', element: <NotFoundRoute /> },
+  {
+    path: '*',
+    lazy: page(
+      () => import('./routes/errors/not-found.route'),
+      (m) => m.NotFoundRoute,
+    ),
+  },
 ];
 
 /** Pages reached from e-mailed links or before any account exists (features/auth). */

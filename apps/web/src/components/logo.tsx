@@ -6,8 +6,9 @@ export function Logo({ size = 32, withName = true }: { size?: number; withName?:
     <Group gap={8} wrap="nowrap">
       <img src="/benchproof-mark.svg" width={size} height={size} alt={withName ? '' : 'BenchProof'} />
       {withName && (
+        // Brass 8 on white is 5.5:1; brass 7 (4.0:1) failed WCAG 1.4.3 at the header's 18 px.
         <Text fw={700} fz={size * 0.6} c="bench.8" style={{ letterSpacing: '-0.02em' }}>
-          Bench<span style={{ color: 'var(--mantine-color-brass-7)' }}>Proof</span>
+          Bench<span style={{ color: 'var(--mantine-color-brass-8)' }}>Proof</span>
         </Text>
       )}
     </Group>

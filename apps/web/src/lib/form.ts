@@ -35,25 +35,20 @@ export function contractResolver<V>(schema: z.ZodType, toRequest: (values: V) =>
  * shows only other codes in its alert.
  */
 export function showServerFieldErrors<V>(form: UseFormReturnType<V>, error: unknown, toField: PathMap = samePath): boolean {
-  if (!(error instanceof ApiError) || error.code !== 'VALIDATION_FAILED') return false;
+  if (!(error instanceof ApiError)) return false;
+  const field = FIELD_CODES[error.code];
+  if (field) {
+    // The server read the box and refused it (e.g. a phone number no country has): its message goes under that box.
+    form.setFieldError(toField(field), error.message);
+    return true;
+  }
+  if (error.code !== 'VALIDATION_FAILED') return false;
   form.setErrors(error.fieldErrors(toField));
   return true;
 }
 
-import { JOB_CLOSED_MESSAGE } from './messages';
+/** Codes that are about one box of a form, and that box's request path. */
+const FIELD_CODES: Partial<Record<ApiError['code'], string>> = { PHONE_INVALID: 'phone' };
 
-export { JOB_CLOSED_MESSAGE };
-
-/** Codes whose wording on a form differs from the server's default message; null = shown under the boxes instead. */
-const FORM_MESSAGES: Partial<Record<ApiError['code'], string | null>> = {
-  VALIDATION_FAILED: null,
-  JOB_CLOSED: JOB_CLOSED_MESSAGE,
-};
-
-/** The message for a failed save, looked up by error code; field problems give null (they sit under the boxes). */
-export function formFailure(error: unknown): string | null {
-  if (!error) return null;
-  if (!(error instanceof ApiError)) return 'Something went wrong. Your input is kept; try again.';
-  const special = FORM_MESSAGES[error.code];
-  return special === undefined ? error.message : special;
-}
+// Zod-free, so pages that only show a save's failure (the owner page's payment card) load no form checks.
+export { formFailure, JOB_CLOSED_MESSAGE } from './messages';

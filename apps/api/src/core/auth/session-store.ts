@@ -4,6 +4,7 @@ import { randomUUID } from 'node:crypto';
 import { sessions, users } from '../../db/schema';
 import { CLOCK, type Clock } from '../clock';
 import { DB, type Db } from '../db';
+import { LIVE_UPDATES, type LiveUpdates } from '../events';
 import type { AuthUser } from './auth-user';
 import { SessionCache } from './session-cache';
 
@@ -12,8 +13,13 @@ import { SessionCache } from './session-cache';
  * prepared, primary-key query joined to the user, remembered for a few seconds per
  * session id (`SessionCache`); every way a session ends — sign-out, deactivation, a
  * password change, a role change — goes through `end`/`endAllOf`/`userChanged` here,
- * which forget the cached answer at once, so the next request is refused.
+ * which forget the cached answer at once, so the next request is refused. They also tell every
+ * other API process (the live-updates port: Redis pub/sub with several processes), which forgets too.
  */
+/** What one process tells the others to forget from their session caches. */
+type Forget = { sid?: string; userId?: number };
+const FORGET_TOPIC = 'sessions:forget';
+
 @Injectable()
 export class SessionStore {
   private readonly lookup;
@@ -22,8 +28,10 @@ export class SessionStore {
   constructor(
     @Inject(DB) private readonly db: Db,
     @Inject(CLOCK) private readonly clock: Clock,
+    @Inject(LIVE_UPDATES) private readonly live: LiveUpdates,
   ) {
     this.cache = new SessionCache(() => this.clock.now().getTime());
+    live.subscribe<Forget>(FORGET_TOPIC).subscribe((m) => this.forget(m));
     this.lookup = db
       .select({
         id: users.id,
@@ -61,6 +69,7 @@ export class SessionStore {
   end(sid: string): void {
     this.db.delete(sessions).where(eq(sessions.id, sid)).run();
     this.cache.forgetSession(sid);
+    this.live.publish(FORGET_TOPIC, { sid } satisfies Forget);
   }
 
   /** Ends every session of a user (deactivation, password change); scoped by shop like every write. */
@@ -69,12 +78,19 @@ export class SessionStore {
       .delete(sessions)
       .where(and(eq(sessions.shopId, shopId), eq(sessions.userId, userId)))
       .run();
-    this.cache.forgetUser(userId);
+    this.userChanged(userId);
   }
 
   /** A user's role, name or e-mail changed: their live sessions answer with the new values from the next request. */
   userChanged(userId: number): void {
     this.cache.forgetUser(userId);
+    this.live.publish(FORGET_TOPIC, { userId } satisfies Forget);
+  }
+
+  /** Another process (or this one, echoed by Redis) ended a session or changed a user. */
+  private forget(m: Forget): void {
+    if (m.sid) this.cache.forgetSession(m.sid);
+    if (m.userId) this.cache.forgetUser(m.userId);
   }
 
   private read(sid: string): { user: AuthUser | null; expiresAt: number } {

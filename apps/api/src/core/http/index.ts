@@ -3,3 +3,4 @@ export { ErrorFilter } from './error.filter';
 export { ZodPipe, zod, ApiZodBody, ApiZodQuery } from './zod';
 export { sendFile, type FileToSend, type FileStatus } from './file-answer';
 export { isStorageFull, domainErrorOf } from './storage-full';
+export { drainOnSignals } from './drain';

@@ -40,6 +40,13 @@ export const outboxMessages = sqliteTable(
      */
     textAfterSend: text('text_after_send'),
     htmlAfterSend: text('html_after_send'),
+    /**
+     * The secrets the bodies stand in for (an owner link), AES-256-GCM sealed with a key derived from the
+     * server secret (mail/outbox-secrets.ts); the bodies hold a placeholder in their place, so no row,
+     * write-ahead page or freed page ever holds the link in clear. Opened only at send time; cleared
+     * by the write that records the send.
+     */
+    sealedSecrets: text('sealed_secrets'),
     attachments: text('attachments', { mode: 'json' }).$type<OutboxAttachmentRef[]>().notNull(),
     status: text('status').$type<OutboxStatus>().notNull(),
     /**

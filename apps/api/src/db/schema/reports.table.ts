@@ -1,5 +1,6 @@
 import { index, integer, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
+import type { ReportSnapshot } from './report-snapshot';
 import { jobs } from './jobs.table';
 import { shops } from './shops.table';
 import { users } from './users.table';
@@ -25,7 +26,7 @@ export const reports = sqliteTable(
     state: text('state', { enum: ['rendering', 'ready', 'failed'] }).notNull(),
     error: text('error'),
     pageSize: text('page_size', { enum: ['A4', 'Letter'] }).notNull(),
-    snapshot: text('snapshot', { mode: 'json' }).notNull(),
+    snapshot: text('snapshot', { mode: 'json' }).$type<ReportSnapshot>().notNull(),
     fromDraftId: integer('from_draft_id'),
     /** SHA-256 of the snapshot plus version and issue time, printed on the last page. */
     fingerprint: text('fingerprint'),

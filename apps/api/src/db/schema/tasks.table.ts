@@ -1,3 +1,5 @@
+// Type-only (erased when drizzle-kit loads this file): the payload's type is the task kinds' one map.
+import type { TaskPayload } from '../../infra/tasks/task-kinds';
 import { index, integer, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
 import { id, timestamp } from './columns';
 import { shops } from './shops.table';
@@ -16,7 +18,7 @@ export const tasks = sqliteTable(
     shopId: integer('shop_id').references(() => shops.id),
     kind: text('kind').notNull(),
     key: text('key').notNull(),
-    payload: text('payload', { mode: 'json' }).$type<Record<string, unknown>>().notNull(),
+    payload: text('payload', { mode: 'json' }).$type<TaskPayload>().notNull(),
     status: text('status', { enum: ['queued', 'running', 'done', 'failed'] })
       .notNull()
       .default('queued'),

@@ -6,3 +6,4 @@ export { hashing, hashFile } from './hashing';
 export { UPLOAD_TEMP, UploadTemp } from './upload-temp';
 export { StorageModule } from './storage.module';
 export { removeLeftovers } from './leftovers';
+export { storageErrorRows } from './storage-errors';

@@ -17,6 +17,7 @@ export { TaskHandler, type TaskHandlerOptions } from './task-handler.decorator';
 export { TaskHandlerRegistry } from './task-handler.registry';
 export { TasksModule } from './tasks.module';
 export { SqliteTaskRunner, type SqliteRunnerOptions } from './sqlite-task-runner';
+export { BullMqTaskRunner, type BullMqRunnerOptions } from './bullmq/bullmq-task-runner';
 export { TaskStore } from './task-store';
 export { retryDelay, type BackoffOptions } from './backoff';
 export { isTransientError, PermanentTaskError } from './task-errors';

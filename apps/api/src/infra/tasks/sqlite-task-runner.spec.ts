@@ -49,13 +49,13 @@ describe('SqliteTaskRunner', () => {
     const { runner, calls } = setUp();
     runner.register('demo.work', (t) => record(calls, t), { concurrency: 2 });
     runner.start();
-    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 1 } });
-    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 2 } });
+    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { messageId: 1 } });
+    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { messageId: 2 } });
     await runner.settled();
-    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { n: 3 } });
+    runner.enqueue({ kind: 'demo.work', key: 'asset-7', shopId: null, payload: { messageId: 3 } });
     await runner.settled();
     expect(calls).toHaveLength(1);
-    expect(calls[0].payload).toEqual({ n: 1 });
+    expect(calls[0].payload).toEqual({ messageId: 1 });
     await runner.stop();
   });
 

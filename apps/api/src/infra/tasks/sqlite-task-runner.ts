@@ -43,6 +43,7 @@ export class SqliteTaskRunner implements TaskRunner {
   private state: 'idle' | 'started' | 'stopped' = 'idle';
   private lastPollAt: Date | null = null;
   private lastPollFailed = false;
+  private stopping: Promise<void> | null = null;
 
   constructor(
     private readonly store: TaskStore,
@@ -99,11 +100,26 @@ export class SqliteTaskRunner implements TaskRunner {
     this.wake();
   }
 
-  /** Takes no new work and waits for what this process is running. */
-  async stop(): Promise<void> {
+  /** Takes no new work and waits for what this process is running; after `graceMs`, releases the leases of what still runs. */
+  stop(graceMs = Infinity): Promise<void> {
+    this.stopping ??= this.drain(graceMs);
+    return this.stopping;
+  }
+
+  private async drain(graceMs: number): Promise<void> {
     this.state = 'stopped';
     if (this.timer) clearTimeout(this.timer);
-    await Promise.allSettled([...this.inflight]);
+    let timer: NodeJS.Timeout | undefined;
+    const graceOver = new Promise<'over'>((ok) => {
+      if (Number.isFinite(graceMs)) timer = setTimeout(() => ok('over'), graceMs);
+    });
+    const finished = await Promise.race([Promise.allSettled([...this.inflight]), graceOver]);
+    clearTimeout(timer);
+    if (finished === 'over') {
+      let released = 0;
+      this.safely(() => (released = this.store.release(this.owner, this.clock.now())));
+      this.logger.warn(`Shutdown: ${released} running task(s) did not finish within ${graceMs} ms; released for the next process`);
+    }
     for (const w of this.waiters.splice(0)) w();
   }
 

@@ -33,6 +33,9 @@ class MostKinds {
   @TaskHandler('showcase.export', { concurrency: 1 }) showcase(): Promise<void> {
     return noop();
   }
+  @TaskHandler('text.send', { concurrency: 1 }) text(): Promise<void> {
+    return noop();
+  }
 }
 
 @Injectable()

@@ -9,6 +9,8 @@ import type { ShowcaseZipRequest } from '@benchproof/contracts';
 export type TaskPayloads = {
   /** key = the outbox row's task_key (new for each resend): deliver one outbox message (mail). */
   'mail.send': { messageId: number };
+  /** key = text id: send one text message through the provider's SDK (texts). */
+  'text.send': { textId: number };
   /** key = asset id: thumb/screen/print JPEGs of a stored photo (media). */
   'media.derivatives': NoPayload;
   /** key = asset id: perceptual hash of a still for pair suggestions (media). */
@@ -25,10 +27,13 @@ export type TaskPayloads = {
 
 export type NoPayload = Record<string, never>;
 export type TaskKind = keyof TaskPayloads;
+/** Any declared kind's payload: what the tasks.payload column holds. */
+export type TaskPayload = TaskPayloads[TaskKind];
 
 /** The declared kinds at run time (the compiler keeps this in step with TaskPayloads). */
 export const TASK_KINDS = Object.keys({
   'mail.send': 1,
+  'text.send': 1,
   'media.derivatives': 1,
   'media.phash': 1,
   'backup.run': 1,

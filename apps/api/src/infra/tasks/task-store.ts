@@ -35,7 +35,7 @@ export class TaskStore {
       progress: 0,
       nextRunAt: spec.runAt ?? now,
       retryLater: false,
-      payload: (spec.payload ?? {}) as Record<string, unknown>,
+      payload: spec.payload ?? {},
       updatedAt: now,
     };
     (tx ?? this.db)
@@ -73,6 +73,18 @@ export class TaskStore {
         .returning()
         .all();
     });
+  }
+
+  /**
+   * Shutdown: this owner's running tasks go back to the queue, due now, without the attempt the shutdown cut short.
+   * Their handlers, if they still finish, find the row no longer theirs (`mine`) and change nothing.
+   */
+  release(owner: string, now: Date): number {
+    return this.db
+      .update(tasks)
+      .set({ status: 'queued', leaseOwner: null, leasedUntil: null, nextRunAt: now, attempts: sql`max(${tasks.attempts} - 1, 0)`, updatedAt: now })
+      .where(and(eq(tasks.status, 'running'), eq(tasks.leaseOwner, owner)))
+      .run().changes;
   }
 
   /** Only the holder of the lease may touch a running task (a slow process that lost it must not). */

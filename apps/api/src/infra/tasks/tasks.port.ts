@@ -1,5 +1,5 @@
 import type { DbTx } from '../../core/db';
-import type { NoPayload, TaskKind, TaskPayloads } from './task-kinds';
+import type { NoPayload, TaskKind, TaskPayload, TaskPayloads } from './task-kinds';
 
 /** What a piece of slow work is: its kind, the entity it is about, and the ids the handler needs. */
 export type TaskSpec<K extends TaskKind = TaskKind> = {
@@ -16,7 +16,7 @@ export interface RawTaskSpec {
   kind: string;
   key: string;
   shopId: number | null;
-  payload?: object;
+  payload?: TaskPayload;
   runAt?: Date;
 }
 
@@ -25,7 +25,7 @@ export interface RawTaskContext {
   kind: string;
   key: string;
   shopId: number | null;
-  payload: object;
+  payload: TaskPayload;
   attempt: number;
   /** True when a failure of this attempt ends the quick retries (the task then fails, or waits long if the error is transient). */
   final: boolean;
@@ -98,6 +98,11 @@ export interface TaskRunner {
   health?(): TaskRunnerHealth;
   /** Deletes finished (done) tasks last touched before `before`; returns how many. */
   prune?(before: Date): number;
+  /**
+   * Shutdown (SIGTERM): takes no new work, waits up to `graceMs` for running tasks, then releases the leases of those
+   * still running so the next process takes them at once. Idempotent: a second call waits on the first.
+   */
+  stop?(graceMs?: number): Promise<void>;
 }
 
 export interface TaskRunnerHealth {

@@ -18,7 +18,9 @@ const base = {
   attached: true,
   sizeBytes: 200_000,
   budgetBytes: 8 * 1024 * 1024,
+  stage: { kind: 'finished' } as const,
   link: null,
+  linkUntil: null,
 };
 
 describe('mail templates', () => {

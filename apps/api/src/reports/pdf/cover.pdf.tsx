@@ -1,7 +1,7 @@
 import { Image, Page, Text, View } from '@react-pdf/renderer';
 import type { PageSize } from '@benchproof/contracts';
 import type { IssueStamp, ReportImage, ReportSnapshot } from '../report-data';
-import { fmtDate } from './format';
+import { fmtDate, money } from './format';
 import { ConditionMark } from './parts.pdf';
 import { MARGIN, MUTED, PAGE_POINTS, styles } from './theme';
 
@@ -72,6 +72,7 @@ function JobDetails({ snap }: { snap: ReportSnapshot }) {
         <Field label="Booked in" value={fmtDate(snap.job.bookedAt, snap)} ink={ink} />
         <Field label="Ready" value={fmtDate(snap.job.readyAt, snap)} ink={ink} />
         <Field label="Mechanic" value={snap.job.mechanic ?? '—'} ink={ink} />
+        <Payment snap={snap} ink={ink} />
       </View>
       <Field label="What you told us" value="" sub={snap.job.symptoms} ink={ink} />
       {snap.overall && (
@@ -82,6 +83,14 @@ function JobDetails({ snap }: { snap: ReportSnapshot }) {
       )}
     </View>
   );
+}
+
+/** "Paid" with the day the balance reached zero, or what is still due; nothing when nothing was charged (or an older snapshot). */
+function Payment({ snap, ink }: { snap: ReportSnapshot; ink: string }) {
+  const p = snap.payment;
+  if (!p || p.grossMinor <= 0) return null;
+  if (p.paidAt && p.dueMinor <= 0) return <Field label="Payment" value={`Paid ${fmtDate(p.paidAt, snap)}`} ink={ink} />;
+  return p.dueMinor > 0 ? <Field label="Payment" value={`Due ${money(p.dueMinor, snap.shop.currency)}`} ink={ink} /> : null;
 }
 
 function CoverFooter({ snap }: { snap: ReportSnapshot }) {

@@ -1,5 +1,5 @@
 import type { Action } from '@benchproof/contracts';
-import { IconBike, IconClipboardList, IconPhotoStar, IconSettings, IconUsers } from '@tabler/icons-react';
+import { IconAlertTriangle, IconBike, IconClipboardList, IconDatabase, IconPhotoStar, IconSettings, IconUsers } from '@tabler/icons-react';
 
 export interface NavItem {
   to: string;
@@ -16,4 +16,6 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/showcase', label: 'Showcase', icon: IconPhotoStar, action: 'showcase.view' },
   { to: '/settings/users', label: 'Users & roles', icon: IconUsers, action: 'users.manage' },
   { to: '/settings/shop', label: 'Shop settings', icon: IconSettings, action: 'shop.edit' },
+  { to: '/settings/data', label: 'Backups & export', icon: IconDatabase, action: 'backups.manage' },
+  { to: '/settings/work', label: 'Failed work', icon: IconAlertTriangle, action: 'work.retry' },
 ];

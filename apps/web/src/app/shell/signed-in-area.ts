@@ -23,5 +23,7 @@ export const pages = {
   showcase: () => import('../routes/showcase/showcase.route'),
   users: () => import('../routes/settings/users.route'),
   shopSettings: () => import('../routes/settings/shop.route'),
+  data: () => import('../routes/settings/data.route'),
+  work: () => import('../routes/settings/work.route'),
   password: () => import('../routes/account/password.route'),
 };

@@ -37,7 +37,7 @@ export function JoinRoute() {
   const p = preview.data;
   return (
     <PublicCard title={`Join ${p.shopName}`} intro={`${p.name}, you are invited as ${ROLE_LABELS[p.role].toLowerCase()}. You sign in with ${p.email}.`}>
-      <ChoosePasswordForm token={token} mutation={accept} label="Choose password and start" onSignedIn={() => void navigate('/jobs', { replace: true })} />
+      <ChoosePasswordForm token={token} mutation={accept} label="Save and sign in" onSignedIn={() => void navigate('/jobs', { replace: true })} />
     </PublicCard>
   );
 }

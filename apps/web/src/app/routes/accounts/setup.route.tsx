@@ -1,3 +1,4 @@
+import type { SignInStep } from '@benchproof/contracts';
 import { Alert, Anchor } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -9,10 +10,19 @@ import { PublicCard } from './public-card';
 export function SetupRoute() {
   const navigate = useNavigate();
   const status = useQuery(setupStatusQuery);
-  if (status.data && !status.data.setupOpen) return <Navigate to="/sign-in" replace />;
+  // Opening the workshop clears the query cache, so the status is asked again and now says closed; without
+  // this flag that answer would send the new manager to sign-in while the import page is still loading.
+  const [opened, setOpened] = useState(false);
+  if (!opened && status.data && !status.data.setupOpen) return <Navigate to="/sign-in" replace />;
+  const onDone = (res: SignInStep | { message: string }) => {
+    setOpened(true);
+    // Only a finished sign-in has a session; any other answer leaves the manager to sign in themselves.
+    const signedIn = 'step' in res && res.step === 'done';
+    void navigate(signedIn ? '/customers/import?welcome=1' : '/sign-in', { replace: true });
+  };
   return (
     <PublicCard wide title="Set up your workshop" intro="This server has no workshop yet. You will be its first manager; invite your staff afterwards.">
-      <SetupForm mode="setup" onDone={() => void navigate('/customers/import?welcome=1', { replace: true })} />
+      <SetupForm mode="setup" onDone={onDone} />
     </PublicCard>
   );
 }

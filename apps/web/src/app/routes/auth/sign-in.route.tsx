@@ -1,7 +1,8 @@
-import { Center, Paper, Stack, Text, Title } from '@mantine/core';
-import { useNavigate, useSearchParams } from 'react-router';
+import { Anchor, Center, Paper, Stack, Text, Title } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
+import { Link, useNavigate, useSearchParams } from 'react-router';
 import { Logo } from '../../../components/logo';
-import { SignInForm } from '../../../features/auth';
+import { setupStatusQuery, SignInForm } from '../../../features/auth';
 
 const NOTICES: Record<string, string> = {
   expired: 'Your session has expired. Please sign in again — nothing you saved is lost.',
@@ -11,6 +12,7 @@ const NOTICES: Record<string, string> = {
 export function SignInRoute() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
+  const status = useQuery(setupStatusQuery);
   const next = params.get('next');
   const safeNext = next?.startsWith('/') && !next.startsWith('//') ? next : '/jobs';
 
@@ -24,6 +26,11 @@ export function SignInRoute() {
             <Text c="dimmed">Staff of your workshop only. Bike owners use the link in their e-mail.</Text>
           </div>
           <SignInForm notice={NOTICES[params.get('reason') ?? ''] ?? null} onSignedIn={() => void navigate(safeNext, { replace: true })} />
+          {status.data?.signupOpen && (
+            <Anchor component={Link} to="/signup" ta="center" py="xs">
+              New workshop? Sign it up
+            </Anchor>
+          )}
         </Stack>
       </Paper>
     </Center>

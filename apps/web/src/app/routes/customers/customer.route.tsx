@@ -6,6 +6,7 @@ import { QueryState } from '../../../components/query-state';
 import { useCan } from '../../../features/auth';
 import { BikeForm, CustomerBikes } from '../../../features/bikes';
 import { CustomerCard, CustomerForm, useCustomer } from '../../../features/customers';
+import { CustomerData, EraseCustomer } from '../../../features/data-export';
 
 /** /customers/:customerId — contact details and the bikes on file. */
 export function CustomerRoute() {
@@ -13,7 +14,8 @@ export function CustomerRoute() {
   const customer = useCustomer(id);
   const [editing, edit] = useDisclosure();
   const [adding, add] = useDisclosure();
-  const canEdit = useCan()('customers.edit');
+  const can = useCan();
+  const canEdit = can('customers.edit');
   if (!customer.data) return <QueryState isLoading={customer.isLoading} error={customer.error} />;
   return (
     <Stack>
@@ -36,6 +38,9 @@ export function CustomerRoute() {
         )}
       </Group>
       <CustomerBikes customerId={id} />
+      {can('customers.export') && (
+        <CustomerData customerId={id} erase={can('customers.erase') && <EraseCustomer customerId={id} name={customer.data.name} />} />
+      )}
       <Modal opened={editing} onClose={edit.close} title="Edit customer" size="lg">
         <CustomerForm customer={customer.data} onDone={edit.close} />
       </Modal>

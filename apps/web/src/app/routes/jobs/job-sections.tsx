@@ -1,15 +1,7 @@
-import type { JobDetail, SessionUser, ShopSettingsDto } from '@benchproof/contracts';
 import { lazy, Suspense, type ComponentType } from 'react';
 import { BikeSpecs } from '../../../features/bikes';
 import { IntakeSection } from '../../../features/jobs';
-
-export interface SectionProps {
-  job: JobDetail;
-  me: SessionUser;
-  settings: ShopSettingsDto;
-  /** Handed over and the caller may not correct evidence: editing controls are hidden. */
-  frozen: boolean;
-}
+import type { SectionProps } from './sections/section-props';
 
 export const JOB_SECTIONS = [
   { value: 'intake', label: 'Intake' },
@@ -20,7 +12,7 @@ export const JOB_SECTIONS = [
   { value: 'pairs', label: 'Pairs' },
   { value: 'report', label: 'Report' },
   { value: 'owner', label: 'Owner link' },
-  { value: 'messages', label: 'E-mails' },
+  { value: 'messages', label: 'Messages' },
   { value: 'payment', label: 'Payment' },
 ] as const;
 export type JobSection = (typeof JOB_SECTIONS)[number]['value'];

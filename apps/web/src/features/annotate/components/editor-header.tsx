@@ -4,6 +4,7 @@ import { Link } from 'react-router';
 import classes from './annotate-editor.module.css';
 import type { SaveState, useAutosave } from './use-autosave';
 
+// Light badges (dark text on a pale ground, theme.ts LIGHT_TEXT): white on green 6 was 2.7:1, under WCAG 1.4.3's 4.5:1.
 const SAVE_LABEL: Record<SaveState, [string, string]> = {
   saved: ['Saved', 'green'],
   dirty: ['Unsaved changes', 'yellow'],
@@ -30,7 +31,7 @@ export function EditorHeader({ backTo, title, save, onExport }: Props) {
       <Text fw={600} size="sm" truncate="end" className={classes.title} title={title}>
         {title}
       </Text>
-      <Badge color={colour} size="md" maw="9.5rem" data-testid="save-state" title={label}>
+      <Badge color={colour} variant="light" size="md" maw="9.5rem" data-testid="save-state" title={label}>
         {label}
       </Badge>
       <Button size="sm" h={44} px="sm" onClick={() => void save.flush()} disabled={save.state === 'saved'}>

@@ -12,6 +12,7 @@ import type {
 } from '@benchproof/contracts';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, setCsrfToken } from '../../../lib/api-client';
+import { sessionKey } from './session';
 
 export const setupStatusQuery = queryOptions({ queryKey: ['setup-status'], queryFn: () => api<SetupStatus>('/setup', { quietAuth: true }), staleTime: 0 });
 
@@ -24,7 +25,7 @@ function useSignedInStep<B>(path: string) {
       if (res.step !== 'done') return;
       setCsrfToken(res.csrfToken);
       qc.clear();
-      qc.setQueryData(['session'], res.user);
+      qc.setQueryData(sessionKey, res.user);
     },
   });
 }
@@ -55,7 +56,8 @@ export const useStartTwoFactor = () => useMutation({ mutationFn: () => api<TotpE
 export function useConfirmTwoFactor() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (code: string) => api<RecoveryCodes>('/account/two-factor/confirm', { method: 'POST', body: { code } }),
+    // quietAuth: a wrong code answers 401 CODE_INVALID, which is a field problem and must not sign this device out.
+    mutationFn: (code: string) => api<RecoveryCodes>('/account/two-factor/confirm', { method: 'POST', body: { code }, quietAuth: true }),
     onSuccess: () => qc.invalidateQueries({ queryKey: twoFactorQuery.queryKey }),
   });
 }

@@ -4,6 +4,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { IconAlertTriangle, IconShieldLock } from '@tabler/icons-react';
 import { useEffect, useState, type FormEvent } from 'react';
 import { api, ApiError, setCsrfToken } from '../../../lib/api-client';
+import { sessionKey } from '../api/session';
 import { CodeInput } from './code-input';
 import { RecoveryCodesCard } from './recovery-codes';
 import { TotpSetup } from './totp-setup';
@@ -31,7 +32,7 @@ function useSecondStep(challenge: Challenge, onSignedIn: () => void) {
       });
       setCsrfToken(res.csrfToken);
       qc.clear();
-      qc.setQueryData(['session'], res.user);
+      qc.setQueryData(sessionKey, res.user);
       if (res.recoveryCodes) setRecovery(res.recoveryCodes);
       else onSignedIn();
     } catch (err) {

@@ -1,5 +1,5 @@
 import { SetupRequestSchema, SignupRequestSchema, type SignInStep, type SetupRequest, type UnitSystem } from '@benchproof/contracts';
-import { Alert, Button, Fieldset, Group, NumberInput, SegmentedControl, Select, Stack, TextInput } from '@mantine/core';
+import { Alert, Button, Fieldset, NumberInput, SegmentedControl, Select, SimpleGrid, Stack, TextInput, useMatches } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconAlertTriangle, IconBuildingStore } from '@tabler/icons-react';
 import { ApiError } from '../../../lib/api-client';
@@ -69,22 +69,27 @@ const FIELDS = pathTable({
 type Form = UseFormReturnType<SetupValues>;
 
 function WorkshopFields({ form }: { form: Form }) {
+  // The two unit systems do not fit side by side on a phone: stacked there.
+  const orientation = useMatches<'vertical' | 'horizontal'>({ base: 'vertical', xs: 'horizontal' });
   return (
     <Fieldset legend="Your workshop">
       <Stack>
         <TextInput label="Workshop name" size="lg" {...form.getInputProps('shopName')} />
         <TextInput label="Address" size="lg" {...form.getInputProps('address')} />
-        <Group grow wrap="wrap">
+        <SimpleGrid cols={{ base: 1, xs: 2 }}>
           <TextInput label="Phone" inputMode="tel" size="lg" {...form.getInputProps('phone')} />
           <TextInput label="Workshop e-mail" type="email" size="lg" {...form.getInputProps('shopEmail')} />
-        </Group>
-        <Group grow wrap="wrap">
+        </SimpleGrid>
+        {/* One field a row on a phone: three side by side left the currency two letters wide. */}
+        <SimpleGrid cols={{ base: 1, xs: 3 }}>
           <Select label="Currency" size="lg" data={CURRENCIES} allowDeselect={false} {...form.getInputProps('currency')} />
           <NumberInput label="Tax rate (%)" size="lg" min={0} max={100} decimalScale={2} {...form.getInputProps('taxRatePct')} />
           <NumberInput label="Labour rate per hour" size="lg" min={0} decimalScale={2} {...form.getInputProps('labourRate')} />
-        </Group>
+        </SimpleGrid>
         <SegmentedControl
           size="md"
+          fullWidth
+          orientation={orientation}
           data={[
             { value: 'metric', label: 'Metric (mm, N·m)' },
             { value: 'imperial', label: 'Imperial (in, in·lbf)' },

@@ -1,5 +1,5 @@
 import { IMPORT_FIELD_LABELS, type ImportField, type ImportRow } from '@benchproof/contracts';
-import { Badge, Stack, Table, Text } from '@mantine/core';
+import { Stack, Table, Text } from '@mantine/core';
 
 const fieldLabel = (f: string): string => IMPORT_FIELD_LABELS[f as ImportField] ?? f;
 
@@ -16,27 +16,29 @@ function RowStatus({ row }: { row: ImportRow }) {
     );
   if (row.customer.kind === 'existing')
     return (
-      <Badge color="blue" variant="light">
+      <Text size="sm" fw={600} c="blue.9">
         Matches {row.customer.name}
-      </Badge>
+      </Text>
     );
   return (
-    <Badge color="teal" variant="light">
+    <Text size="sm" fw={600} c="teal.9">
       New customer
-    </Badge>
+    </Text>
   );
 }
 
-/** Every row of the file with what importing it would do, or what is wrong with it. */
+/**
+ * Every row of the file with what importing it would do, or what is wrong with it. Three narrow columns and
+ * wrapping text, so a phone shows each row's problems without scrolling sideways.
+ */
 export function ImportRowsTable({ rows }: { rows: ImportRow[] }) {
   return (
-    <Table.ScrollContainer minWidth={520}>
+    <Table.ScrollContainer minWidth={300}>
       <Table verticalSpacing="xs" striped>
         <Table.Thead>
           <Table.Tr>
             <Table.Th>Line</Table.Th>
-            <Table.Th>Owner</Table.Th>
-            <Table.Th>Bike</Table.Th>
+            <Table.Th>Owner and bike</Table.Th>
             <Table.Th>Result</Table.Th>
           </Table.Tr>
         </Table.Thead>
@@ -44,8 +46,12 @@ export function ImportRowsTable({ rows }: { rows: ImportRow[] }) {
           {rows.map((r) => (
             <Table.Tr key={r.line} data-testid="import-row" data-problems={r.problems.length}>
               <Table.Td>{r.line}</Table.Td>
-              <Table.Td>{r.customerName || '—'}</Table.Td>
-              <Table.Td>{r.bikeLabel ?? '—'}</Table.Td>
+              <Table.Td>
+                <Text size="sm" fw={600}>
+                  {r.customerName || '—'}
+                </Text>
+                <Text size="sm">{r.bikeLabel ?? '—'}</Text>
+              </Table.Td>
               <Table.Td>
                 <RowStatus row={r} />
               </Table.Td>

@@ -6,12 +6,15 @@ import { usePreviewImport, useRunImport } from '../api/imports';
 import { ColumnMapping } from './column-mapping';
 import { ImportRowsTable } from './import-rows-table';
 
+/** "1 bike", "3 bikes": the counts read as sentences. */
+const n = (count: number, one: string, many: string) => `${count} ${count === 1 ? one : many}`;
+
 function Counts({ preview }: { preview: ImportPreview }) {
   const c = preview.counts;
   return (
     <Text>
-      {c.rows} rows: <b>{c.valid} ready</b> ({c.newCustomers} new customers, {c.matchedCustomers} matched to customers on file, {c.bikes} bikes) and{' '}
-      <b>{c.withProblems} with problems</b>, which are left out.
+      {n(c.rows, 'row', 'rows')}: <b>{c.valid} ready</b> ({n(c.newCustomers, 'new customer', 'new customers')}, {c.matchedCustomers} matched to customers on
+      file, {n(c.bikes, 'bike', 'bikes')}) and <b>{c.withProblems} with problems</b>, {c.withProblems === 1 ? 'which is' : 'which are'} left out.
     </Text>
   );
 }
@@ -19,8 +22,9 @@ function Counts({ preview }: { preview: ImportPreview }) {
 function Summary({ summary }: { summary: ImportSummary }) {
   return (
     <Alert color="teal" variant="light" icon={<IconCircleCheck />} title="Imported" role="status">
-      {summary.customersCreated} new customers, {summary.customersMatched} rows added to customers already on file, {summary.bikesCreated} bikes.
-      {summary.rowsSkipped > 0 && ` ${summary.rowsSkipped} rows were left out (lines ${summary.skippedLines.join(', ')}).`}
+      {n(summary.customersCreated, 'new customer', 'new customers')}, {n(summary.customersMatched, 'row', 'rows')} added to customers already on file,{' '}
+      {n(summary.bikesCreated, 'bike', 'bikes')}.
+      {summary.rowsSkipped > 0 && ` ${n(summary.rowsSkipped, 'row was', 'rows were')} left out (lines ${summary.skippedLines.join(', ')}).`}
     </Alert>
   );
 }

@@ -5,7 +5,7 @@ import { DatePickerInput } from '@mantine/dates';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconAlertTriangle, IconCheck } from '@tabler/icons-react';
 import type { ReactNode } from 'react';
-import { formFailure, showServerFieldErrors } from '../../../lib/form';
+import { formFailure, pathTable, showServerFieldErrors } from '../../../lib/form';
 import { useBookIn } from '../api/jobs';
 import { initialBookIn, parseBookIn, validateBookIn, type BikeFormModel, type BookInValues, type CustomerFormModel } from './book-in-values';
 import type { Option } from './job-filters';
@@ -127,12 +127,17 @@ function SymptomsSection({ form, mechanics }: { form: UseFormReturnType<BookInVa
   );
 }
 
+/** A refusal about the owner's phone (PHONE_INVALID) lands under the new owner's phone box. */
+const NEW_OWNER_BOXES = pathTable({ phone: 'newCustomer.phone' });
+
 /** Booking-in: owner, bike, symptoms, promised day and mechanic in one submit. */
 export function BookInForm({ slots, mechanics, onBooked }: { slots: BookInSlots; mechanics: Option[]; onBooked: (job: JobDetail) => void }) {
   const bookIn = useBookIn();
   const models = { customer: slots.customerModel, bike: slots.bikeModel };
   const form = useForm<BookInValues>({ mode: 'controlled', initialValues: initialBookIn(models), validate: validateBookIn(models) });
-  const submit = form.onSubmit((values) => bookIn.mutate(parseBookIn(values, models), { onSuccess: onBooked, onError: (e) => showServerFieldErrors(form, e) }));
+  const submit = form.onSubmit((values) =>
+    bookIn.mutate(parseBookIn(values, models), { onSuccess: onBooked, onError: (e) => showServerFieldErrors(form, e, NEW_OWNER_BOXES) }),
+  );
   const failure = formFailure(bookIn.error);
   const hasErrors = Object.keys(form.errors).length > 0;
   return (

@@ -10,6 +10,7 @@ const parts = () => import('./job-move-parts');
 const OtherMovesMenu = lazy(async () => ({ default: (await import('./job-menu')).OtherMovesMenu }));
 const ConfirmMove = lazy(async () => ({ default: (await parts()).ConfirmMove }));
 const ConfirmNoReport = lazy(async () => ({ default: (await parts()).ConfirmNoReport }));
+const ConfirmUnpaid = lazy(async () => ({ default: (await parts()).ConfirmUnpaid }));
 
 /**
  * "More moves": the same button on the first screen; its menu's code loads a moment later or on the first tap, which
@@ -19,14 +20,7 @@ function MoreMoves({ moves, onPick }: { moves: Move[]; onPick: (move: Move) => v
   const [ready, wake] = useAfterFirstScreen();
   const [tapped, setTapped] = useState(false);
   const still = (
-    <Button
-      size="lg"
-      variant="default"
-      aria-label="Other moves"
-      leftSection={<IconDots />}
-      style={{ flex: '1 0 auto' }}
-      onClick={() => (setTapped(true), wake())}
-    >
+    <Button size="lg" variant="default" leftSection={<IconDots />} style={{ flex: '1 0 auto' }} onClick={() => (setTapped(true), wake())}>
       More moves
     </Button>
   );
@@ -40,7 +34,7 @@ function MoreMoves({ moves, onPick }: { moves: Move[]; onPick: (move: Move) => v
 
 /** The next sensible move as one big button, the other allowed moves in a menu. */
 export function JobActions({ job }: { job: JobDetail }) {
-  const { confirm, setConfirm, move, handOverWithoutReport, pending, noReport, error, dismissError } = useJobMoves(job.id);
+  const { confirm, setConfirm, move, handOverWithoutReport, handOverUnpaid, pending, noReport, unpaid, error, dismissError } = useJobMoves(job.id);
   const [ready] = useAfterFirstScreen();
   const primary = job.nextAction ?? nextAction(job.status);
   const others: Move[] = (job.allowedTransitions.length ? job.allowedTransitions : allowedTransitions(job.status)).filter((t) => t.to !== primary?.to);
@@ -59,9 +53,10 @@ export function JobActions({ job }: { job: JobDetail }) {
           {error}
         </Alert>
       )}
-      {(ready || noReport || confirm) && (
+      {(ready || noReport || unpaid || confirm) && (
         <Suspense fallback={null}>
           <ConfirmNoReport opened={noReport} onClose={dismissError} onConfirm={handOverWithoutReport} pending={pending} />
+          <ConfirmUnpaid opened={unpaid} onClose={dismissError} onConfirm={handOverUnpaid} pending={pending} />
           <ConfirmMove
             key={confirm?.to ?? 'none'}
             move={confirm}

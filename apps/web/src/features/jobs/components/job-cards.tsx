@@ -8,12 +8,15 @@ import { JobStatusBadge } from './job-status-badge';
 import { PromisedDate } from './promised-date';
 import classes from './jobs.module.css';
 
-/** The jobs list on a phone: one big tappable card per job. */
+/**
+ * The jobs list on a phone: one big tappable card per job. The card's own words are its name (no aria-label):
+ * a spoken name that differs from the visible text fails voice control ("tap J-2026-0001", WCAG 2.5.3).
+ */
 export function JobCards({ jobs, currency }: { jobs: JobDto[]; currency: string }) {
   return (
     <Stack gap="sm">
       {jobs.map((job) => (
-        <UnstyledButton key={job.id} component={Link} to={`/jobs/${job.id}`} aria-label={`Job ${job.number}, ${jobBikeLabel(job)}`}>
+        <UnstyledButton key={job.id} component={Link} to={`/jobs/${job.id}`}>
           <Card withBorder padding="md" className={job.overdue ? classes.overdueCard : undefined}>
             <Group justify="space-between" wrap="nowrap" align="flex-start">
               <Stack gap={4} miw={0}>

@@ -49,7 +49,7 @@ function FilterToggle({ on, onClick, disabled, children }: { on: boolean; onClic
   return (
     <Button
       size="sm"
-      h={40}
+      h={44}
       radius="xl"
       variant={on ? 'filled' : 'light'}
       color={on ? undefined : 'gray'}
@@ -104,11 +104,13 @@ function PromisedRange({ from, to, update }: { from: string; to: string; update:
   );
 }
 
+/** Whether any filter narrows the list (the default shows every job still in the workshop). */
+export const filtersActive = (params: JobListParams, includeClosed: boolean): boolean =>
+  Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed || params.readyUnpaid);
+
 /** Status chips, mechanic, promised range and free text for the jobs table. */
 export function JobFilters({ params, includeClosed, update, mechanics }: Props) {
-  const active = Boolean(
-    params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed || params.readyUnpaid,
-  );
+  const active = filtersActive(params, includeClosed);
   const byStatus = Boolean(params.status?.length);
   return (
     <Stack gap="sm" mb="md">

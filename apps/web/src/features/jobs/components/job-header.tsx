@@ -9,21 +9,22 @@ import type { Option } from './job-filters';
 import { jobBikeLabel } from './job-label';
 import { JobStatusBadge } from './job-status-badge';
 import { PromisedDate } from './promised-date';
+import classes from './jobs.module.css';
 
 const PREFERS = { email: 'prefers e-mail', phone: 'prefers a call', sms: 'prefers a text' } as const;
 
 function Owner({ job }: { job: JobDetail }) {
   const c = job.customerDetail;
   return (
-    <Stack gap={2}>
+    <Stack gap={0}>
       <Text size="xs" tt="uppercase" c="dimmed" fw={700}>
         Owner · {PREFERS[c.preferredChannel]}
       </Text>
-      <Anchor component={Link} to={`/customers/${c.id}`} fw={600}>
+      <Anchor component={Link} to={`/customers/${c.id}`} fw={600} className={classes.contact}>
         {c.name}
       </Anchor>
       {c.phone && (
-        <Anchor href={`tel:${c.phone}`} size="sm" mih={32}>
+        <Anchor href={`tel:${c.phone}`} size="sm" className={classes.contact}>
           <Group gap={4} component="span" wrap="nowrap">
             <IconPhone size={16} />
             {c.phone}
@@ -31,7 +32,7 @@ function Owner({ job }: { job: JobDetail }) {
         </Anchor>
       )}
       {c.phone && c.preferredChannel === 'sms' && (
-        <Anchor href={`sms:${c.phone}`} size="sm">
+        <Anchor href={`sms:${c.phone}`} size="sm" className={classes.contact}>
           <Group gap={4} component="span" wrap="nowrap">
             <IconMessage size={16} />
             Send a text
@@ -39,7 +40,7 @@ function Owner({ job }: { job: JobDetail }) {
         </Anchor>
       )}
       {c.email && (
-        <Anchor href={`mailto:${c.email}`} size="sm" style={{ wordBreak: 'break-all' }}>
+        <Anchor href={`mailto:${c.email}`} size="sm" className={classes.contact} style={{ wordBreak: 'break-all' }}>
           <Group gap={4} component="span" wrap="nowrap">
             <IconMail size={16} />
             {c.email}

@@ -9,7 +9,7 @@ export function OtherMovesMenu({ moves, onPick, openAtOnce = false }: { moves: M
   return (
     <Menu position="bottom-end" withinPortal>
       <Menu.Target>
-        <Button ref={target} size="lg" variant="default" aria-label="Other moves" leftSection={<IconDots />} style={{ flex: '1 0 auto' }}>
+        <Button ref={target} size="lg" variant="default" leftSection={<IconDots />} style={{ flex: '1 0 auto' }}>
           More moves
         </Button>
       </Menu.Target>

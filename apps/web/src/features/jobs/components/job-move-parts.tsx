@@ -55,3 +55,43 @@ export function ConfirmNoReport({ opened, onClose, onConfirm, pending }: { opene
     </Modal>
   );
 }
+
+/** Handing over with money still due: desk says why (required); the reason goes into the job's history and audit. */
+export function ConfirmUnpaid({
+  opened,
+  onClose,
+  onConfirm,
+  pending,
+}: {
+  opened: boolean;
+  onClose: () => void;
+  onConfirm: (reason: string) => void;
+  pending: boolean;
+}) {
+  const [reason, setReason] = useState('');
+  const [tried, setTried] = useState(false);
+  const missing = tried && !reason.trim() ? 'Say why the bike goes home unpaid.' : null;
+  return (
+    <Modal opened={opened} onClose={onClose} title="Money still due">
+      <Stack>
+        <Text>This job still has money due. The bike can go home unpaid; the reason is kept in the job&apos;s history.</Text>
+        <Textarea
+          label="Why is it going home unpaid?"
+          placeholder="e.g. pays by bank transfer on Friday"
+          value={reason}
+          onChange={(e) => setReason(e.currentTarget.value)}
+          error={missing}
+          maxLength={500}
+          rows={3}
+          data-autofocus
+        />
+        <Button size="lg" color="orange" loading={pending} onClick={() => (reason.trim() ? onConfirm(reason.trim()) : setTried(true))}>
+          Hand over unpaid
+        </Button>
+        <Button size="lg" variant="default" onClick={onClose}>
+          Not yet — take the payment first
+        </Button>
+      </Stack>
+    </Modal>
+  );
+}

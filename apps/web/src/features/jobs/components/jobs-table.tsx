@@ -10,7 +10,7 @@ import { useJobs } from '../api/jobs';
 import { JOBS_PAGE_SIZE, useJobListParams } from '../hooks/use-job-list-params';
 import { JobCards } from './job-cards';
 import { jobBikeLabel } from './job-label';
-import { JobFilters, type Option } from './job-filters';
+import { filtersActive, JobFilters, type Option } from './job-filters';
 import { JobStatusBadge } from './job-status-badge';
 import { PromisedDate } from './promised-date';
 import classes from './jobs.module.css';
@@ -112,6 +112,13 @@ function DesktopTable({ jobs, sort, onSort, currency }: { jobs: JobDto[]; sort: 
   );
 }
 
+/** An empty list: a new workshop's is not the filters' doing. */
+const NoJobs = ({ filtered }: { filtered: boolean }) => (
+  <Text c="dimmed" py="lg">
+    {filtered ? 'No jobs match these filters.' : 'No bikes in the workshop right now. Book one in with the button above.'}
+  </Text>
+);
+
 /** The jobs table: filters in the address bar, paging and sort on the server, cards on phones. */
 export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE, currency = 'EUR' }: { mechanics: Option[]; pageSize?: number; currency?: string }) {
   const { params, includeClosed, update } = useJobListParams(pageSize);
@@ -124,11 +131,7 @@ export function JobsTable({ mechanics, pageSize = JOBS_PAGE_SIZE, currency = 'EU
     <>
       <JobFilters params={params} includeClosed={includeClosed} update={update} mechanics={mechanics} />
       <QueryState isLoading={jobs.isLoading} error={jobs.error} />
-      {data && data.items.length === 0 && (
-        <Text c="dimmed" py="lg">
-          No jobs match these filters.
-        </Text>
-      )}
+      {data && data.items.length === 0 && <NoJobs filtered={filtersActive(params, includeClosed)} />}
       {data && data.items.length > 0 && (
         <>
           <Group justify="space-between" mb="xs">

@@ -8,32 +8,39 @@ export interface Move {
   label: string;
 }
 
-/** The message to show for a failed move; a handover refused for want of a report gets its own dialog instead. */
+/** Hand-over refusals that desk answers in a dialog of their own, not as an error line. */
+const ASKED = ['REPORT_NOT_SENT', 'UNPAID_BALANCE'];
+
+/** The message to show for a failed move; a handover refused for want of a report or a payment gets its own dialog instead. */
 function moveError(error: unknown): string | null {
   if (!error) return null;
-  if (error instanceof ApiError) return error.code === 'REPORT_NOT_SENT' ? null : error.message;
+  if (error instanceof ApiError) return ASKED.includes(error.code) ? null : error.message;
   return 'The move did not go through. Try again.';
 }
 
 /**
  * Moving a job: the move waiting for confirmation, the move itself, and what went wrong.
- * The last note is kept so a handover refused with REPORT_NOT_SENT can be confirmed without retyping it.
+ * The last note (and a confirmed "no report") is kept so a handover refused with REPORT_NOT_SENT and then
+ * UNPAID_BALANCE can be confirmed step by step without retyping anything.
  */
 export function useJobMoves(jobId: number) {
   const transition = useTransitionJob(jobId);
   const [confirm, setConfirm] = useState<Move | null>(null);
-  const [pendingNote, setPendingNote] = useState('');
-  const move = (to: JobStatus, note = '', confirmNoReport = false) => {
-    setPendingNote(note);
-    transition.mutate({ to, note, confirmNoReport }, { onSuccess: () => setConfirm(null) });
+  const [pending, setPending] = useState({ note: '', confirmNoReport: false });
+  const move = (to: JobStatus, note = '', confirmNoReport = false, unpaidReason?: string) => {
+    setPending({ note, confirmNoReport });
+    transition.mutate({ to, note, confirmNoReport, ...(unpaidReason ? { unpaidReason } : {}) }, { onSuccess: () => setConfirm(null) });
   };
+  const refused = (code: string) => transition.error instanceof ApiError && transition.error.code === code;
   return {
     confirm,
     setConfirm,
     move,
-    handOverWithoutReport: () => move('collected', pendingNote, true),
+    handOverWithoutReport: () => move('collected', pending.note, true),
+    handOverUnpaid: (reason: string) => move('collected', pending.note, pending.confirmNoReport, reason),
     pending: transition.isPending,
-    noReport: transition.error instanceof ApiError && transition.error.code === 'REPORT_NOT_SENT',
+    noReport: refused('REPORT_NOT_SENT'),
+    unpaid: refused('UNPAID_BALANCE'),
     error: moveError(transition.error),
     dismissError: () => transition.reset(),
   };

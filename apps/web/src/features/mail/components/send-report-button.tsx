@@ -44,7 +44,7 @@ export function SendReportButton({ jobId, reportId }: { jobId: number; reportId:
       />
       {send.isSuccess && (
         <Text size="sm" c="teal" role="status">
-          Queued for {send.data.to}. Its progress shows under E-mails.
+          Queued for {send.data.to}. Its progress shows under Messages.
         </Text>
       )}
       {!send.isSuccess && earlier && (

@@ -5,7 +5,13 @@ import { useState } from 'react';
 import type { ApiError } from '../../../lib/api-client';
 import { useCreateOwnerLink } from '../api/owner-links';
 
-/** How long the new link works, the button that makes and e-mails it, and the link itself once made. */
+/** How the link went out: the owner's preferred channel (texts or e-mail), or why it did not. */
+function sentNote(mail: CreatedOwnerLinkDto['mail']): string {
+  if (mail.status !== 'queued') return `Not sent: ${mail.reason ?? ''}`;
+  return mail.channel === 'sms' ? 'Text queued to the owner (they prefer texts). Its progress shows under Messages.' : 'E-mail queued to the owner.';
+}
+
+/** How long the new link works, the button that makes and sends it, and the link itself once made. */
 export function CreateOwnerLink({ jobId }: { jobId: number }) {
   const create = useCreateOwnerLink(jobId);
   const [days, setDays] = useState<number>(14);
@@ -13,7 +19,7 @@ export function CreateOwnerLink({ jobId }: { jobId: number }) {
   return (
     <>
       <Group align="flex-end">
-        <NumberInput label="Works for (days)" value={days} onChange={(v) => setDays(Number(v) || 14)} min={1} max={60} w={140} size="md" />
+        <NumberInput label="Works for (days)" value={days} onChange={(v) => setDays(Number(v) || 14)} min={1} max={60} w={170} />
         <Button
           size="md"
           mih={44}
@@ -43,7 +49,7 @@ function CreatedLink({ created }: { created: CreatedOwnerLinkDto }) {
             </Button>
           )}
         </CopyButton>
-        <Text size="sm">{created.mail.status === 'queued' ? 'E-mail queued to the owner.' : `Not e-mailed: ${created.mail.reason ?? ''}`}</Text>
+        <Text size="sm">{sentNote(created.mail)}</Text>
       </Stack>
     </Alert>
   );

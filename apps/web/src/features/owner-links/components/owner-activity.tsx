@@ -6,7 +6,7 @@ const str = (v: unknown, fallback = ''): string => (typeof v === 'string' || typ
 
 const LABELS: Record<string, (d: Record<string, unknown>) => string> = {
   'owner.viewed': () => 'Owner opened the page',
-  'owner_link.created': (d) => `Link created (e-mail ${d.mail === 'queued' ? 'queued' : 'not sent'})`,
+  'owner_link.created': (d) => `Link created (${d.channel === 'sms' ? 'text' : 'e-mail'} ${d.mail === 'queued' ? 'queued' : 'not sent'})`,
   'owner_link.revoked': () => 'Link revoked',
   'recommendation.decided': (d) =>
     `${str(d.decidedByName, 'Owner')} ${str(d.status)} ${str(d.summary) || `item #${str(d.recommendationId)}`} (${str(d.channel)})`,

@@ -1,7 +1,7 @@
 import { formatMoney } from '@benchproof/domain';
 import { Alert, Button, Card, Stack, Text, Title } from '@mantine/core';
 import { useDates } from '../../../lib/dates';
-import { formFailure } from '../../../lib/form';
+import { formFailure } from '../../../lib/messages';
 import { useOwnerPayment, useStartCheckout } from '../api/payments';
 
 /**

@@ -15,6 +15,9 @@ export interface SettingsValues {
   currency: string;
   /** A ShopLocale, or 'auto': the one that fits the currency. */
   locale: string;
+  /** ISO 3166-1 alpha-2, chosen from the list. */
+  country: string;
+  taxNumber: string;
   units: ShopSettingsDto['units'];
   pageSize: ShopSettingsDto['pageSize'];
   finalCheckSecondPerson: boolean;
@@ -36,6 +39,8 @@ export function fromDto(s: ShopSettingsDto, toMajor: (minor: number, currency: s
     taxRatePct: s.taxRateBp / 100,
     currency: s.currency,
     locale: s.locale ?? 'auto',
+    country: s.country,
+    taxNumber: s.taxNumber,
     units: s.units,
     pageSize: s.pageSize,
     finalCheckSecondPerson: s.finalCheckSecondPerson,

@@ -26,6 +26,7 @@ import { ChainLimitFields } from './chain-limit-fields';
 import { ContrastCheck } from './contrast-check';
 import { CoverPreview } from './cover-preview';
 import { LogoUpload } from './logo-upload';
+import { ReceiptFields } from './receipt-fields';
 import { fromDto, toFormPath, toRequest, validateSettings, type SettingsValues } from './settings-values';
 import { ShowcaseAccessSection } from './showcase-access-section';
 
@@ -159,6 +160,7 @@ export function ShopSettingsForm({ settings }: { settings: ShopSettingsDto }) {
     <form onSubmit={submit} noValidate>
       <Stack maw={900}>
         <MoneySection form={form} />
+        <ReceiptFields form={form} settings={settings} />
         <WorkshopSection form={form} />
         <BrandSection form={form} settings={settings} />
         <ShowcaseAccessSection form={form} />

@@ -2,7 +2,7 @@ import { roleCan } from '@benchproof/contracts';
 import { FindingsPanel } from '../../../../features/findings';
 import { FindingMediaPicker } from '../../../../features/media';
 import { useStaff } from '../../staff';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 export default function FindingsSection({ job, me, settings, frozen }: SectionProps) {
   const { staffName } = useStaff();

@@ -1,6 +1,6 @@
 import { roleCan } from '@benchproof/contracts';
 import { InspectionPanel } from '../../../../features/inspection';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 export default function InspectionSection({ job, me, settings, frozen }: SectionProps) {
   return (

@@ -1,7 +1,7 @@
 import { roleCan } from '@benchproof/contracts';
 import { AnnotatedStill } from '../../../../features/annotate';
 import { JobMediaSection } from '../../../../features/media';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 // The media feature (features/media) owns this section; the annotate feature draws stills in its viewer
 // (an "Annotated" sign and a switch between the photo and its annotated render).

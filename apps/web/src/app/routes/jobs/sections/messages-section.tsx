@@ -1,8 +1,14 @@
 import { roleCan } from '@benchproof/contracts';
-import { MessagesPanel } from '../../../../features/mail';
-import type { SectionProps } from '../job-sections';
+import { Stack } from '@mantine/core';
+import { MessagesPanel, TextsPanel } from '../../../../features/mail';
+import type { SectionProps } from './section-props';
 
-// The mail feature (features/mail) owns this section: delivery status and resend.
+// The mail feature (features/mail) owns this section: e-mail and text delivery status, e-mail resend.
 export default function MessagesSection({ job, me }: SectionProps) {
-  return <MessagesPanel jobId={job.id} canResend={roleCan(me.role, 'reports.issue')} />;
+  return (
+    <Stack gap="xl">
+      <TextsPanel jobId={job.id} />
+      <MessagesPanel jobId={job.id} canResend={roleCan(me.role, 'reports.issue')} />
+    </Stack>
+  );
 }

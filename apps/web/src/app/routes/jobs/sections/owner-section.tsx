@@ -1,7 +1,7 @@
 import { roleCan } from '@benchproof/contracts';
 import { OwnerLinkPanel } from '../../../../features/owner-links';
 import { TakeDownList } from '../../../../features/showcase';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 export default function OwnerSection({ job, me }: SectionProps) {
   // The take-down list (showcase.manage) sits in the consent card, where a withdrawal says to take photos down.

@@ -1,6 +1,6 @@
 import { roleCan } from '@benchproof/contracts';
 import { PaymentsPanel } from '../../../../features/payments';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 // The payments feature (features/payments) owns this section: balance, in-shop payments, refunds.
 export default function PaymentSection({ job, me }: SectionProps) {

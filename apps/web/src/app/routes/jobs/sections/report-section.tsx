@@ -1,7 +1,7 @@
 import { roleCan } from '@benchproof/contracts';
 import { SendReportButton } from '../../../../features/mail';
 import { ReportSection as Reports } from '../../../../features/reports';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 // Mail (features/mail) adds "Send to owner" under each issued version.
 export default function ReportSection({ job, me }: SectionProps) {

@@ -3,7 +3,7 @@ import { Stack } from '@mantine/core';
 import { FinalCheckPanel } from '../../../../features/jobs';
 import { TorqueEntries, WorkEntries } from '../../../../features/work-log';
 import { useStaff } from '../../staff';
-import type { SectionProps } from '../job-sections';
+import type { SectionProps } from './section-props';
 
 export default function WorkSection({ job, me, frozen }: SectionProps) {
   const { checkers } = useStaff();

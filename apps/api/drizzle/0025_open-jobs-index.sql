@@ -1,0 +1,1 @@
+CREATE INDEX `jobs_open_promised_idx` ON `jobs` (`shop_id`,`promised_on`,`id`) WHERE status IN ('booked_in', 'on_stand', 'waiting_owner', 'in_work', 'final_check', 'ready');

@@ -1,0 +1,1 @@
+export { openText, sealText } from './seal';

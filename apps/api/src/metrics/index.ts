@@ -1,0 +1,2 @@
+export { MetricsModule } from './metrics.module';
+export { MetricsService } from './metrics.service';

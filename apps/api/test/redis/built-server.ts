@@ -1,0 +1,56 @@
+import { type ChildProcess, spawn } from 'node:child_process';
+import { join, resolve } from 'node:path';
+import { REPO_ROOT } from '../../src/config';
+import { freePort } from '../support/redis-server';
+import { sleep, until } from './redis-suite';
+
+/** The built API entry (npm run build). */
+export const API_ENTRY = resolve(REPO_ROOT, 'dist/apps/api/apps/api/src/main.js');
+
+export interface BuiltServer {
+  base: string;
+  proc: ChildProcess;
+  output: () => string;
+  stop: () => Promise<void>;
+}
+
+/** The built server as its own process on a free port, ready once /api/health/ready answers 200. */
+export async function startBuiltServer(env: Record<string, string>): Promise<BuiltServer> {
+  const port = await freePort();
+  let out = '';
+  const proc = spawn(process.execPath, [API_ENTRY], {
+    env: {
+      ...process.env,
+      PORT: String(port),
+      WEB_DIST: join(env.DATABASE_PATH, '..', 'no-web'),
+      MAIL_CATCHER: 'false',
+      LOG_LEVEL: 'warn',
+      LOGIN_THROTTLE_ADDRESS_LIMIT: '1000',
+      ...env,
+    },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  proc.stdout?.on('data', (d) => (out += String(d)));
+  proc.stderr?.on('data', (d) => (out += String(d)));
+  const base = `http://127.0.0.1:${port}`;
+  await until(
+    'readiness',
+    async () => {
+      if (proc.exitCode !== null) throw new Error(`server exited with ${proc.exitCode}: ${out}`);
+      return (await fetch(`${base}/api/health/ready`).catch(() => null))?.ok ? true : undefined;
+    },
+    120_000,
+    200,
+  );
+  return {
+    base,
+    proc,
+    output: () => out,
+    stop: async () => {
+      if (proc.exitCode !== null) return;
+      const gone = new Promise((r) => proc.once('exit', r));
+      proc.kill('SIGTERM');
+      await Promise.race([gone, sleep(10_000)]);
+    },
+  };
+}

@@ -1,0 +1,2 @@
+export { FailedWorkList } from './components/failed-work-list';
+export { workWhat, workWhy } from './components/work-words';

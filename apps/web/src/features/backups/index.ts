@@ -1,0 +1,1 @@
+export { BackupsPanel } from './components/backups-panel';

@@ -1,0 +1,3 @@
+export { CustomerData } from './components/customer-data';
+export { EraseCustomer } from './components/erase-customer';
+export { ShopExportCard } from './components/shop-export-card';
