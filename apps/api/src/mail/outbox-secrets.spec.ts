@@ -1,3 +1,4 @@
+import * as core from '../core/crypto';
 import { reportStage } from './mail.service';
 import { fillSecrets, openSecrets, sealSecrets, withPlaceholders } from './outbox-secrets';
 import { esc } from './templates/layout';
@@ -13,6 +14,13 @@ describe('outbox secrets: the link is stored sealed and put back only at send ti
     expect(`${t}${h}`).not.toContain('abc_DEF-123');
     expect(fillSecrets(t, [link], false)).toBe(text);
     expect(fillSecrets(h, [link], true)).toBe(html);
+  });
+
+  it('a text (no HTML) keeps the placeholder in place of the link and gets the exact link back at send', () => {
+    const text = `Shop: your page: ${link}`;
+    const stored = core.withPlaceholders(text, [link]);
+    expect(stored).toBe('Shop: your page: [[bp-secret-0]]');
+    expect(core.fillSecrets(stored, core.openSecrets(KEY, core.sealSecrets(KEY, [link])))).toBe(text);
   });
 
   it('seals with AES-256-GCM under the server secret: the sealed text holds no link, another key cannot open it, a changed byte is refused', () => {

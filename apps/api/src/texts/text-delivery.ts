@@ -1,6 +1,7 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
+import { fillSecrets, openSecrets } from '../core/crypto';
 import { CustomersService } from '../customers';
 import { TEXT_PROVIDER, TextProvider, TextProviderError } from '../infra/texts';
 import { PermanentTaskError, type TaskContext, TaskHandler } from '../infra/tasks';
@@ -35,7 +36,8 @@ export class TextDelivery {
     if (!row) return; // sent already
     if (this.customers.textNumber({ shopId }, row.customerId).optedOut) return this.repo.markOptedOut(shopId, row.id, this.clock.now());
     try {
-      const sent = await this.provider.send(row.toNumber, row.body, statusCallbackUrl(this.cfg.publicUrl, row));
+      const body = fillSecrets(row.body, this.secrets(row));
+      const sent = await this.provider.send(row.toNumber, body, statusCallbackUrl(this.cfg.publicUrl, row));
       this.repo.markSent(shopId, row.id, task.attempt, sent.sid, this.clock.now());
     } catch (err) {
       const message = err instanceof Error ? err.message : String(err);
@@ -44,6 +46,16 @@ export class TextDelivery {
       this.repo.markAttemptFailed(shopId, row.id, task.attempt, message, final);
       this.logger.warn(`Text ${row.id} attempt ${task.attempt} failed${final ? ' for good' : ''}: ${message}`);
       throw permanent ? new PermanentTaskError(message) : err;
+    }
+  }
+
+  /** The text's sealed link, opened only for this send; a key that changed since it was queued cannot. */
+  private secrets(row: TextRow): string[] {
+    if (!row.sealedSecrets) return [];
+    try {
+      return openSecrets(this.cfg.jwtSecret, row.sealedSecrets);
+    } catch {
+      throw new TextProviderError('The link in this text was sealed with another server secret (JWT_SECRET changed); send a new link', true);
     }
   }
 }

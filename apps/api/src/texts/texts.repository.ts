@@ -46,7 +46,7 @@ export class TextsRepository {
       .all()[0];
   }
 
-  /** The provider has it: records its id and, in the same UPDATE, drops the link from the stored body. */
+  /** The provider has it: records its id and, in the same UPDATE, drops the (sealed) link from the stored row. */
   markSent(shopId: number, id: number, attempts: number, sid: string, at: Date): void {
     const t = textMessages;
     this.db
@@ -60,6 +60,7 @@ export class TextsRepository {
         lastError: null,
         body: sql`coalesce(${t.bodyAfterSend}, ${t.body})`,
         bodyAfterSend: null,
+        sealedSecrets: null,
       })
       .where(and(eq(t.shopId, shopId), eq(t.id, id)))
       .run();
@@ -78,7 +79,13 @@ export class TextsRepository {
   markOptedOut(shopId: number, id: number, at: Date): void {
     this.db
       .update(textMessages)
-      .set({ status: 'opted_out', statusAt: at, body: sql`coalesce(${textMessages.bodyAfterSend}, ${textMessages.body})`, bodyAfterSend: null })
+      .set({
+        status: 'opted_out',
+        statusAt: at,
+        body: sql`coalesce(${textMessages.bodyAfterSend}, ${textMessages.body})`,
+        bodyAfterSend: null,
+        sealedSecrets: null,
+      })
       .where(and(eq(textMessages.shopId, shopId), eq(textMessages.id, id)))
       .run();
   }

@@ -2,17 +2,18 @@ import { Inject, Injectable } from '@nestjs/common';
 import type { TextMessageDto } from '@benchproof/contracts';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
+import { sealSecrets, withPlaceholders } from '../core/crypto';
 import { type DbTx, UnitOfWork } from '../core/db';
 import { CustomersService } from '../customers';
 import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
 import { JobAccess } from '../jobs';
 import { ShopsService } from '../shops';
 import { LINK_REMOVED, textBody, type TextKind } from './text-bodies';
-import { type TextRow, TextsRepository } from './texts.repository';
+import { type NewTextRow, type TextRow, TextsRepository } from './texts.repository';
 
 export const TEXT_SEND = 'text.send' as const;
 
-/** What a caller asks for: a text about a job to its owner; `link` (an owner link) is dropped from the row once sent. */
+/** What a caller asks for: a text about a job to its owner; `link` (an owner link) is stored only sealed and dropped once sent. */
 export interface TextRequest {
   jobId: number;
   customerId: number;
@@ -52,8 +53,8 @@ export class TextsService {
     const write = (t: DbTx): TextQueued => {
       const row = this.repo.insert(
         {
-          ...{ shopId: scope.shopId, jobId: req.jobId, customerId: req.customerId, kind: req.kind, toNumber: number, body },
-          ...{ bodyAfterSend: req.link ? body.split(req.link).join(LINK_REMOVED) : null, status: 'queued', createdAt: this.clock.now() },
+          ...{ shopId: scope.shopId, jobId: req.jobId, customerId: req.customerId, kind: req.kind, toNumber: number, ...this.sealed(body, req.link) },
+          ...{ status: 'queued', createdAt: this.clock.now() },
         },
         t,
       );
@@ -61,6 +62,13 @@ export class TextsService {
       return { status: 'queued', id: row.id, to: number };
     };
     return tx ? write(tx) : this.uow.run(write);
+  }
+
+  /** The body as stored: the link only sealed (opened at send), a placeholder in its place. */
+  private sealed(body: string, link: string | null): Pick<NewTextRow, 'body' | 'bodyAfterSend' | 'sealedSecrets'> {
+    if (!link) return { body, bodyAfterSend: null, sealedSecrets: null };
+    const bodyAfterSend = body.split(link).join(LINK_REMOVED);
+    return { body: withPlaceholders(body, [link]), bodyAfterSend, sealedSecrets: sealSecrets(this.cfg.jwtSecret, [link]) };
   }
 
   listForJob(scope: Scope, jobId: number): TextMessageDto[] {

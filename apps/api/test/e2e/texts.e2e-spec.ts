@@ -1,7 +1,11 @@
 import type { CreatedOwnerLinkDto, CustomerDto, OutboxMessageDto } from '@benchproof/contracts';
 import { FINAL_CHECK_ITEMS } from '@benchproof/domain';
+import { sql } from 'drizzle-orm';
+import { existsSync, readFileSync } from 'node:fs';
 import { signRequest } from '../../scripts/text-fake.mjs';
+import { DB, type Db } from '../../src/core/db';
 import { appWithTextFake, jobForTexter, jobTexts, TEXT_AUTH, textReaches, until, type TextFake } from '../texts/text-fixtures';
+import { eventually } from '../mail/mail-fixtures';
 import { DEMO, type SignedIn, type TestApp } from '../test-app';
 
 const sendLink = async (desk: SignedIn, jobId: number) =>
@@ -88,6 +92,36 @@ describe('texts: owners who prefer texts get links by text through the provider 
     expect(failed).toMatchObject({ attempts: 1, maxAttempts: 3 });
     expect(failed.lastError).toContain('unsubscribed recipient');
     expect(textsTo(fake, '+442079460323')).toHaveLength(0);
+  });
+
+  it('a queued text keeps the link sealed (no row, no database or WAL byte holds it); the text that arrives has a working link', async () => {
+    const { jobId } = await jobForTexter(desk, '020 7946 0327');
+    fake.failNext(2, 503, 20503, 'Service Unavailable'); // two refused attempts keep the text queued a while
+    const created = await sendLink(desk, jobId);
+    const token = created.url.split('/o/')[1];
+    const secret = token.split('.')[0];
+    // While the provider refuses, the text waits in the queue: its row holds a placeholder and the sealed link only.
+    const waiting = await eventually(async () => (await jobTexts(desk, jobId)).find((m) => m.attempts >= 1), 'a refused first attempt');
+    expect(['queued', 'sending']).toContain(waiting.status);
+    const db = t.app.get<Db>(DB);
+    const tables = db.all<{ name: string }>(sql`SELECT name FROM sqlite_master WHERE type = 'table'`).map((r) => r.name);
+    const rowsWith = (needle: string) => tables.filter((name) => db.all(sql.raw(`SELECT * FROM "${name}"`)).some((r) => JSON.stringify(r).includes(needle)));
+    const filesWith = (needle: string) =>
+      ['', '-wal'].map((x) => `${t.cfg.DATABASE_PATH}${x}`).filter((f) => existsSync(f) && readFileSync(f).includes(needle));
+    expect(rowsWith(secret)).toEqual([]);
+    expect(filesWith(secret)).toEqual([]);
+    const row = db.get<{ body: string; sealed_secrets: string | null }>(sql`SELECT body, sealed_secrets FROM text_messages WHERE id = ${waiting.id}`);
+    expect(row?.body).not.toContain('/o/');
+    expect(row?.sealed_secrets).toMatch(/^v1\./);
+    // The provider gets the whole link at send; it opens the owner page; the sealed copy is gone once it was accepted.
+    const [text] = await until(() => textsTo(fake, '+442079460327')[0] && textsTo(fake, '+442079460327'), 'the text');
+    expect(text.body).toBe(`Lantern & Spoke Workshop: your bike's service page: ${created.url}`);
+    await t.http().get(`/api/owner/${token}`).expect(200);
+    expect((await textReaches(desk, jobId, 'delivered')).attempts).toBe(3);
+    const after = db.get<{ sealed_secrets: string | null }>(sql`SELECT sealed_secrets FROM text_messages WHERE id = ${waiting.id}`);
+    expect(after?.sealed_secrets).toBeNull();
+    expect(rowsWith(secret)).toEqual([]);
+    expect(filesWith(secret)).toEqual([]);
   });
 
   it('a STOP reply records the opt-out and no further text goes to that owner', async () => {

@@ -1,1 +1,2 @@
 export { openText, sealText } from './seal';
+export { fillSecrets, openSecrets, sealSecrets, type Spelling, withPlaceholders } from './sealed-secrets';

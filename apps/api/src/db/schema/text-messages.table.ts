@@ -22,9 +22,15 @@ export const textMessages = sqliteTable(
     kind: text('kind').notNull(),
     /** E.164 */
     toNumber: text('to_number').notNull(),
+    /** As queued, the owner link is a placeholder here; the link itself is in `sealedSecrets`. */
     body: text('body').notNull(),
     /** The body with the link removed; replaces `body` once the provider has it. */
     bodyAfterSend: text('body_after_send'),
+    /**
+     * The owner link, AES-256-GCM sealed under the server secret (core/crypto/sealed-secrets.ts); opened
+     * only to send, cleared once the provider has the text, so no row or database file holds it in clear.
+     */
+    sealedSecrets: text('sealed_secrets'),
     status: text('status').$type<TextStatus>().notNull(),
     attempts: integer('attempts').notNull().default(0),
     lastError: text('last_error'),

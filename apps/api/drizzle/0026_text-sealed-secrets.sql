@@ -1,0 +1,1 @@
+ALTER TABLE `text_messages` ADD `sealed_secrets` text;
