@@ -99,6 +99,11 @@ export class CustomerErasureService {
     db.prepare(
       `UPDATE outbox_messages SET to_address = '', text_body = ?, html_body = ?, text_after_send = NULL, html_after_send = NULL, sealed_secrets = NULL WHERE ${inJobs}`,
     ).run(ERASED, ERASED, ...ids);
+    db.prepare(`UPDATE text_messages SET to_number = '', body = ?, body_after_send = NULL, sealed_secrets = NULL WHERE shop_id = ? AND customer_id = ?`).run(
+      ERASED,
+      actor.shopId,
+      customerId,
+    );
     db.prepare(`UPDATE owner_links SET sent_to = '', revoked_at = coalesce(revoked_at, ?) WHERE ${inJobs}`).run(now, ...ids);
     const { files, mediaDeleted, mediaKept } = this.purgeMedia(db, jobs, inJobs, ids, now);
     const reports = db

@@ -4,7 +4,7 @@ import { SQLITE } from '../../src/core/db';
 import { jobWithRecords, OWNER, settled } from '../reports/report-fixtures';
 import { DEMO, startTestApp, type TestApp } from '../test-app';
 
-const PERSONAL = { name: OWNER, email: 'zsofia@example.test' };
+const PERSONAL = { name: OWNER, email: 'zsofia@example.test', phone: '+447700900461' };
 
 /** Every text cell of every table (sqlite_master + PRAGMA table_info) that holds `needle`, as table.column. */
 function scanText(db: Database.Database, needle: string): string[] {
@@ -36,6 +36,11 @@ describe('erasing a customer on request', () => {
     await ctx.m.agent.post(`${ctx.base}/reports/drafts`).expect(202);
     await settled(t);
     const customerId = (db.prepare('SELECT customer_id FROM jobs WHERE id = ?').pluck().get(ctx.job.id) as number) ?? 0;
+    // A text already sent to the owner's phone (texts keep the number they went to).
+    db.prepare(
+      `INSERT INTO text_messages (shop_id, job_id, customer_id, kind, to_number, body, status, attempts, created_at)
+       SELECT shop_id, id, customer_id, 'ready_to_collect', ?, 'Ready to collect', 'delivered', 1, 0 FROM jobs WHERE id = ?`,
+    ).run(PERSONAL.phone, ctx.job.id);
     for (const v of Object.values(PERSONAL)) expect(scanText(db, v).length).toBeGreaterThan(0);
     const others = db.prepare('SELECT id, name, email, phone, notes FROM customers WHERE id != ? ORDER BY id').all(customerId);
     const otherJobs = db.prepare('SELECT * FROM jobs WHERE customer_id != ? ORDER BY id').all(customerId);
