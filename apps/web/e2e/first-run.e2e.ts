@@ -32,7 +32,7 @@ async function fillSetup(page: Page, code: string, password: string) {
   await page.getByLabel('Workshop name').fill('Northgate Cycle Works');
   await page.getByLabel('Address').fill('4 Mill Lane, Easterby');
   // Month-first dates for a pound shop, not the currency's day-first default: the job below must show them.
-  await page.getByLabel('Dates written as').click();
+  await page.getByRole('combobox', { name: 'Dates written as' }).click();
   await page.getByRole('option', { name: /^English \(United States\)/ }).click();
   await page.getByLabel('Your name').fill(MANAGER.name);
   await page.getByLabel('Your e-mail (you sign in with it)').fill(MANAGER.email);
