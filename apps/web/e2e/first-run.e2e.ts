@@ -31,6 +31,9 @@ async function fillSetup(page: Page, code: string, password: string) {
   await page.getByLabel('Setup code').fill(code);
   await page.getByLabel('Workshop name').fill('Northgate Cycle Works');
   await page.getByLabel('Address').fill('4 Mill Lane, Easterby');
+  // Month-first dates for a pound shop, not the currency's day-first default: the job below must show them.
+  await page.getByRole('combobox', { name: 'Dates written as' }).click();
+  await page.getByRole('option', { name: /^English \(United States\)/ }).click();
   await page.getByLabel('Your name').fill(MANAGER.name);
   await page.getByLabel('Your e-mail (you sign in with it)').fill(MANAGER.email);
   await page.getByLabel('Choose a password').fill(password);
@@ -210,15 +213,15 @@ describe('a new workshop: setup to its first booked-in job', () => {
     await page.getByLabel("Reported symptoms, in the owner's words").fill('Rear brake feels soft; gears skip under load.');
     const promised = dayFromToday(3);
     await pickDay(page, /^Promised for/, promised.ariaLabel);
-    // A pound-sterling workshop writes dates day first (en-GB), whatever the browser's own language.
+    // The pound-sterling workshop chose US dates at setup: month first ("Dec 8, 2026"), not the en-GB "8 Dec 2026".
     const d = promised.date;
-    const dayFirst = `${d.getDate()} ${d.toLocaleString('en-GB', { month: 'short' })} ${d.getFullYear()}`;
-    expect(await page.getByRole('button', { name: /^Promised for/ }).textContent()).toContain(dayFirst);
+    const monthFirst = `${d.toLocaleString('en-US', { month: 'short' })} ${d.getDate()}, ${d.getFullYear()}`;
+    expect(await page.getByRole('button', { name: /^Promised for/ }).textContent()).toContain(monthFirst);
     await shotBoth(page, 'first-run-book-in');
     await page.getByRole('button', { name: 'Book in' }).click();
     await page.waitForURL(/\/jobs\/\d+$/, { timeout: 15_000 });
     await page.getByText(/^Booked in as J-\d{4}-0001$/).waitFor({ timeout: 10_000 });
-    await page.getByText(dayFirst).first().waitFor({ timeout: 10_000 });
+    await page.getByText(monthFirst).first().waitFor({ timeout: 10_000 });
     await shotBoth(page, 'first-run-first-job');
     await page.goto(`${server.url}/jobs`);
     await page.getByRole('link', { name: /J-\d{4}-0001/ }).waitFor({ timeout: 10_000 });

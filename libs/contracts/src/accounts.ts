@@ -1,3 +1,4 @@
+import { SHOP_LOCALES } from '@benchproof/domain';
 import { z } from 'zod';
 import { RoleSchema, SessionUserSchema } from './auth';
 import { EmailSchema, IdSchema, IsoDateTimeSchema, requiredText } from './common';
@@ -27,6 +28,8 @@ export const NewShopSchema = z.object({
   email: z.union([z.literal(''), EmailSchema]).default(''),
   currency: CurrencySchema,
   units: UnitSystemSchema,
+  /** How dates are written; null (the default) follows the currency, as in the shop settings. */
+  locale: z.enum(SHOP_LOCALES).nullable().default(null),
   /** Tax rate in basis points: 2000 = 20 %. */
   taxRateBp: z.int().min(0).max(10_000),
   /** Labour rate per hour in minor units. */

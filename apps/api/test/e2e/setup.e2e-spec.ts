@@ -37,18 +37,34 @@ describe('first-run setup on an empty database (SEED_DEMO=false)', () => {
       .send({ code, shop: SHOP, manager: { ...MANAGER, password: 'Northgate2026' } })
       .expect(422);
     expect(weak.body.code).toBe('WEAK_PASSWORD');
+    // Only the locales the settings screen offers (libs/domain SHOP_LOCALES); checked by the contract.
+    const badLocale = await t
+      .http()
+      .post('/api/setup')
+      .send({ code, shop: { ...SHOP, locale: 'xx-YY' }, manager: MANAGER })
+      .expect(400);
+    expect(badLocale.body.details.issues[0].path).toBe('shop.locale');
     expect((await t.http().get('/api/setup').expect(200)).body.setupOpen).toBe(true);
 
     const agent = newAgent(t);
     // The code is read with dashes and case ignored.
     const made = await agent
       .post('/api/setup')
-      .send({ code: code!.toLowerCase().replace(/-/g, ' '), shop: SHOP, manager: MANAGER })
+      // US dates chosen for a pound shop: the choice, not the currency, decides how dates are written.
+      .send({ code: code!.toLowerCase().replace(/-/g, ' '), shop: { ...SHOP, locale: 'en-US' }, manager: MANAGER })
       .expect(201);
     expect(made.body).toMatchObject({ step: 'done', user: { email: MANAGER.email, role: 'manager', name: 'Juno Abara' } });
     withCsrf(agent, made.body);
     const settings = (await agent.get('/api/shop/settings').expect(200)).body;
-    expect(settings).toMatchObject({ name: SHOP.name, currency: 'GBP', taxRateBp: 2000, labourRateMinor: 6000, requireTwoFactor: false });
+    expect(settings).toMatchObject({
+      name: SHOP.name,
+      currency: 'GBP',
+      taxRateBp: 2000,
+      labourRateMinor: 6000,
+      requireTwoFactor: false,
+      locale: 'en-US',
+      dateLocale: 'en-US',
+    });
 
     await t
       .http()

@@ -1,4 +1,15 @@
-import { dateInputPattern, datePickerPattern, formatDate, formatDateTime, formatMonth, formatTime, formatWeekday } from '@benchproof/domain';
+import {
+  dateInputPattern,
+  datePickerPattern,
+  formatDate,
+  formatDateTime,
+  formatMonth,
+  formatTime,
+  formatWeekday,
+  SHOP_LOCALE_LABELS,
+  SHOP_LOCALES,
+  shopLocale,
+} from '@benchproof/domain';
 import { createContext, useContext, useMemo, type ReactNode } from 'react';
 
 /** Until the shop's settings arrive: day-first, the more common order (domain shopLocale's fallback). */
@@ -48,4 +59,15 @@ export function useDates(): Dates {
     }),
     [locale],
   );
+}
+
+/** The value of the locale choice that follows the currency (stored as null). */
+export const LOCALE_FROM_CURRENCY = 'auto';
+
+/** The choices of "Dates written as" (setup and shop settings): from the currency, or one locale with a sample date. */
+export function localeChoices(currency: string): { value: string; label: string }[] {
+  return [
+    { value: LOCALE_FROM_CURRENCY, label: `From the currency: ${SHOP_LOCALE_LABELS[shopLocale({ currency })]}` },
+    ...SHOP_LOCALES.map((l) => ({ value: l, label: `${SHOP_LOCALE_LABELS[l]} — ${formatDate('2026-12-05', l)}` })),
+  ];
 }

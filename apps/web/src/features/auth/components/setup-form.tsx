@@ -1,8 +1,9 @@
-import { SetupRequestSchema, SignupRequestSchema, type SignInStep, type SetupRequest, type UnitSystem } from '@benchproof/contracts';
+import { SetupRequestSchema, SignupRequestSchema, type NewShop, type SignInStep, type SetupRequest, type UnitSystem } from '@benchproof/contracts';
 import { Alert, Button, Fieldset, NumberInput, SegmentedControl, Select, SimpleGrid, Stack, TextInput, useMatches } from '@mantine/core';
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { IconAlertTriangle, IconBuildingStore } from '@tabler/icons-react';
 import { ApiError } from '../../../lib/api-client';
+import { LOCALE_FROM_CURRENCY, localeChoices } from '../../../lib/dates';
 import { contractResolver, formFailure, pathTable, showServerFieldErrors } from '../../../lib/form';
 import { useSetUp, useSignUp } from '../api/accounts';
 import { NewPasswordInput, weakPasswordMessage } from './new-password-input';
@@ -14,6 +15,8 @@ export interface SetupValues {
   phone: string;
   shopEmail: string;
   currency: string;
+  /** 'auto' follows the currency (stored as null), as on the settings screen. */
+  locale: string;
   units: UnitSystem;
   taxRatePct: number | string;
   labourRate: number | string;
@@ -29,6 +32,7 @@ const EMPTY: SetupValues = {
   phone: '',
   shopEmail: '',
   currency: 'GBP',
+  locale: LOCALE_FROM_CURRENCY,
   units: 'metric',
   taxRatePct: 20,
   labourRate: 60,
@@ -47,6 +51,7 @@ const toRequest = (v: SetupValues): SetupRequest => ({
     phone: v.phone,
     email: v.shopEmail,
     currency: v.currency,
+    locale: v.locale === LOCALE_FROM_CURRENCY ? null : (v.locale as NewShop['locale']),
     units: v.units,
     taxRateBp: Math.round(Number(v.taxRatePct) * 100),
     labourRateMinor: Math.round(Number(v.labourRate) * 100),
@@ -59,6 +64,7 @@ const FIELDS = pathTable({
   'shop.address': 'address',
   'shop.phone': 'phone',
   'shop.email': 'shopEmail',
+  'shop.locale': 'locale',
   'shop.taxRateBp': 'taxRatePct',
   'shop.labourRateMinor': 'labourRate',
   'manager.name': 'managerName',
@@ -86,6 +92,7 @@ function WorkshopFields({ form }: { form: Form }) {
           <NumberInput label="Tax rate (%)" size="lg" min={0} max={100} decimalScale={2} {...form.getInputProps('taxRatePct')} />
           <NumberInput label="Labour rate per hour" size="lg" min={0} decimalScale={2} {...form.getInputProps('labourRate')} />
         </SimpleGrid>
+        <Select label="Dates written as" size="lg" allowDeselect={false} data={localeChoices(form.getValues().currency)} {...form.getInputProps('locale')} />
         <SegmentedControl
           size="md"
           fullWidth

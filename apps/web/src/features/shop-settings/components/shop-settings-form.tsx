@@ -1,5 +1,5 @@
 import { UpdateShopSettingsRequestSchema, type ShopSettingsDto } from '@benchproof/contracts';
-import { DEFAULT_CHAIN_LIMIT_POLICY, formatDate, majorTextToMinor, minorToMajorText, SHOP_LOCALE_LABELS, SHOP_LOCALES, shopLocale } from '@benchproof/domain';
+import { DEFAULT_CHAIN_LIMIT_POLICY, majorTextToMinor, minorToMajorText } from '@benchproof/domain';
 import {
   Alert,
   Button,
@@ -20,6 +20,7 @@ import {
 import { useForm, type UseFormReturnType } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
 import type { ReactNode } from 'react';
+import { localeChoices } from '../../../lib/dates';
 import { formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useUpdateShopSettings } from '../api/shop-settings';
 import { ChainLimitFields } from './chain-limit-fields';
@@ -63,10 +64,7 @@ function MoneySection({ form }: { form: Form }) {
         label="Dates written as"
         description="On every screen, e-mail and report, and in date pickers"
         allowDeselect={false}
-        data={[
-          { value: 'auto', label: `From the currency: ${SHOP_LOCALE_LABELS[shopLocale({ currency: form.getValues().currency })]}` },
-          ...SHOP_LOCALES.map((l) => ({ value: l, label: `${SHOP_LOCALE_LABELS[l]} — ${formatDate('2026-12-05', l)}` })),
-        ]}
+        data={localeChoices(form.getValues().currency)}
         {...form.getInputProps('locale')}
       />
     </Section>
