@@ -105,8 +105,15 @@ describe('SIGTERM drains the server', () => {
     let server = await startServer();
     const s = await signIn();
     const get = async <T>(path: string) => (await (await fetch(`${base}${path}`, { headers: { cookie: s.cookie } })).json()) as T;
-    const jobs = await get<{ items: { id: number; status: string }[] }>('/api/jobs?pageSize=50');
-    const job = jobs.items.find((j) => !['collected', 'cancelled'].includes(j.status))!;
+    const jobs = await get<{ items: { id: number; status: string; customer: { id: number } }[] }>('/api/jobs?pageSize=50');
+    // An open job whose owner prefers e-mail (an owner who prefers texts gets the link by text instead).
+    let job: { id: number } | undefined;
+    for (const j of jobs.items.filter((i) => !['collected', 'cancelled'].includes(i.status)))
+      if ((await get<{ preferredChannel: string }>(`/api/customers/${j.customer.id}`)).preferredChannel === 'email') {
+        job = j;
+        break;
+      }
+    if (!job) throw new Error('the demo has no open job of an owner who prefers e-mail');
     const link = await fetch(`${base}/api/jobs/${job.id}/owner-links`, {
       method: 'POST',
       headers: { cookie: s.cookie, 'x-csrf-token': s.csrf, 'content-type': 'application/json' },
