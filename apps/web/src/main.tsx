@@ -1,4 +1,3 @@
-import { onlineManager } from '@tanstack/react-query';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router';
@@ -7,14 +6,7 @@ import { AppProvider } from './app/provider';
 import { createRouter } from './app/router';
 import { handleSessionLost } from './lib/api-client';
 import { startServiceWorker } from './lib/app-update';
-import { keepCache, restoreCache } from './lib/offline-cache';
 import { queryClient } from './lib/query-client';
-
-// Opened with no connection: queries wait for one and show the kept answers meanwhile.
-onlineManager.setOnline(navigator.onLine);
-// The last signed-in user's kept answers come back before the first loader asks for the session.
-await restoreCache(queryClient);
-keepCache(queryClient);
 
 const router = createRouter();
 
