@@ -63,6 +63,8 @@ describe('signing in and out', () => {
     await shot(b.page, 'denied-notice-desktop');
     await notice.getByRole('button', { name: 'Dismiss' }).click();
     await b.page.waitForURL(/\/jobs$/);
+    // The router changes the address before React commits the render: wait for the notice to go.
+    await notice.waitFor({ state: 'detached', timeout: 5000 });
     expect(await notice.count()).toBe(0);
   });
 });
