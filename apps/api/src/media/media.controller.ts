@@ -9,7 +9,6 @@ import {
   Patch,
   Post,
   Put,
-  Query,
   Res,
   UploadedFile,
   UploadedFiles,
@@ -29,7 +28,7 @@ import {
 } from '@benchproof/contracts';
 import type { Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ZodBody, ZodQuery } from '../core/http';
 import { MediaUploadService } from './media-upload.service';
 import { MediaService } from './media.service';
 import { MAX_FILES_PER_BATCH, toIncoming, UPLOAD_FORM } from './upload-form';
@@ -62,15 +61,13 @@ export class MediaController {
 
   @Get('jobs/:jobId/media')
   @Can('media.view')
-  @ApiZodQuery(MediaListQuerySchema)
-  list(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Query(zod(MediaListQuerySchema)) q: MediaListQuery) {
+  list(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodQuery(MediaListQuerySchema) q: MediaListQuery) {
     return this.media.list(user, jobId, q);
   }
 
   @Patch('jobs/:jobId/media')
   @Can('media.edit')
-  @ApiZodBody(RetagRequestSchema)
-  retag(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(RetagRequestSchema)) body: RetagRequest) {
+  retag(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodBody(RetagRequestSchema) body: RetagRequest) {
     return this.media.retag(user, jobId, body);
   }
 
@@ -82,12 +79,11 @@ export class MediaController {
 
   @Patch('jobs/:jobId/media/:id')
   @Can('media.edit')
-  @ApiZodBody(RetagOneRequestSchema)
   retagOne(
     @CurrentUser() user: AuthUser,
     @Param('jobId', ParseIntPipe) jobId: number,
     @Param('id', ParseIntPipe) id: number,
-    @Body(zod(RetagOneRequestSchema)) body: RetagOneRequest,
+    @ZodBody(RetagOneRequestSchema) body: RetagOneRequest,
   ) {
     return this.media.retagOne(user, jobId, id, body);
   }
@@ -117,12 +113,11 @@ export class MediaController {
 
   @Put('jobs/:jobId/findings/:findingId/media')
   @Can('media.edit')
-  @ApiZodBody(FindingMediaRequestSchema)
   linkFindingMedia(
     @CurrentUser() user: AuthUser,
     @Param('jobId', ParseIntPipe) jobId: number,
     @Param('findingId', ParseIntPipe) findingId: number,
-    @Body(zod(FindingMediaRequestSchema)) body: FindingMediaRequest,
+    @ZodBody(FindingMediaRequestSchema) body: FindingMediaRequest,
   ) {
     return this.media.linkToFinding(user, jobId, findingId, body.assetIds);
   }
