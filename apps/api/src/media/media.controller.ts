@@ -15,12 +15,13 @@ import {
   UseInterceptors,
 } from '@nestjs/common';
 import { FileInterceptor, FilesInterceptor } from '@nestjs/platform-express';
-import { ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import {
   FindingMediaRequestSchema,
   MediaListQuerySchema,
   RetagOneRequestSchema,
   RetagRequestSchema,
+  UploadMetaSchema,
   type FindingMediaRequest,
   type MediaListQuery,
   type RetagOneRequest,
@@ -28,10 +29,10 @@ import {
 } from '@benchproof/contracts';
 import type { Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ZodBody, ZodQuery } from '../core/http';
+import { ApiZodForm, ZodBody, ZodQuery } from '../core/http';
 import { MediaUploadService } from './media-upload.service';
 import { MediaService } from './media.service';
-import { MAX_FILES_PER_BATCH, toIncoming, UPLOAD_FORM } from './upload-form';
+import { MAX_FILES_PER_BATCH, toIncoming } from './upload-form';
 
 @ApiTags('media')
 @Controller()
@@ -45,8 +46,7 @@ export class MediaController {
   @Post('jobs/:jobId/media')
   @Can('media.upload')
   @UseInterceptors(FilesInterceptor('files', MAX_FILES_PER_BATCH))
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: UPLOAD_FORM })
+  @ApiZodForm({ field: 'files', many: true }, UploadMetaSchema)
   async upload(
     @CurrentUser() user: AuthUser,
     @Param('jobId') jobId: string,
@@ -99,8 +99,7 @@ export class MediaController {
   @Put('jobs/:jobId/media/:id/poster')
   @Can('media.upload')
   @UseInterceptors(FileInterceptor('file'))
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } })
+  @ApiZodForm({ field: 'file' })
   poster(@CurrentUser() user: AuthUser, @Param('jobId') jobId: string, @Param('id') id: string, @UploadedFile() file: Express.Multer.File | undefined) {
     return this.uploads.setPoster(user, jobId, id, file && toIncoming(file));
   }

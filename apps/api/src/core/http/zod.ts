@@ -1,5 +1,5 @@
-import { Body, type PipeTransform, Param, Query } from '@nestjs/common';
-import { ApiBody, ApiParam, ApiQuery } from '@nestjs/swagger';
+import { applyDecorators, Body, type PipeTransform, Param, Query } from '@nestjs/common';
+import { ApiBody, ApiConsumes, ApiParam, ApiQuery } from '@nestjs/swagger';
 import { z } from 'zod';
 import { DomainError } from './domain-error';
 
@@ -61,3 +61,19 @@ export const ZodParam =
     Param(name, new ZodPipe(schema))(target, key, index);
     onMethod(target, key, ApiParam({ name, schema: toOpenApi(schema) }));
   };
+
+/**
+ * Documents a multipart form: its file field (`many`: several files) plus the text fields of a contracts schema.
+ * Those fields arrive with the files, so the service validates them with `ZodPipe` after multer, where it can
+ * still discard the files it was sent; the form's description is never written out by hand.
+ */
+export function ApiZodForm(file: { field: string; many?: boolean }, fields?: z.ZodObject): MethodDecorator {
+  const binary = { type: 'string' as const, format: 'binary' };
+  const form = (fields ? toOpenApi(fields) : {}) as { properties?: Record<string, OpenApiSchema>; required?: string[] };
+  const schema = {
+    type: 'object' as const,
+    required: [file.field, ...(form.required ?? [])],
+    properties: { [file.field]: file.many ? { type: 'array' as const, items: binary } : binary, ...form.properties },
+  };
+  return applyDecorators(ApiConsumes('multipart/form-data'), ApiBody({ schema }));
+}
