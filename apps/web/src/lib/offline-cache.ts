@@ -141,6 +141,14 @@ function keepCache(queryClient: QueryClient): () => void {
       dehydrateOptions: { shouldDehydrateQuery: keepQuery, shouldDehydrateMutation: () => false },
     });
   };
+  // Closed, reloaded or put away (a phone switching apps) before the pause is over: written at once.
+  const flush = () => {
+    if (!timer) return;
+    clearTimeout(timer);
+    save();
+  };
+  window.addEventListener('pagehide', flush);
+  document.addEventListener('visibilitychange', () => document.visibilityState === 'hidden' && flush());
   return queryClient.getQueryCache().subscribe((event) => {
     if (event.type !== 'added' && event.type !== 'removed' && event.type !== 'updated') return;
     const key = event.query.queryKey as readonly unknown[];
