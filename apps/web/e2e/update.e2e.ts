@@ -34,15 +34,15 @@ async function releaseServer(): Promise<{ url: string; web: string; stop: () => 
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   const url = `http://127.0.0.1:${port}`;
-  await waitForHealth(url);
-  return {
-    url,
-    web,
-    stop: () => {
-      server.kill('SIGTERM');
-      rmSync(web, { recursive: true, force: true });
-    },
+  const stop = () => {
+    server.kill('SIGTERM');
+    rmSync(web, { recursive: true, force: true });
   };
+  await waitForHealth(url).catch((e: unknown) => {
+    stop();
+    throw e;
+  });
+  return { url, web, stop };
 }
 
 /** The next release's worker: the same precache, plus an answer to "which version?" so the test can tell it apart. */

@@ -17,8 +17,12 @@ const freePort = () =>
     });
   });
 
+/**
+ * Up to 90 s: seeding the demo (its generated photos) on a shared, loaded machine took over 30 s at times. A server
+ * that never answers is stopped, so a failed start leaves no process behind.
+ */
 async function waitForHealth(url: string, server: ChildProcess): Promise<void> {
-  for (let i = 0; i < 150; i++) {
+  for (let i = 0; i < 450; i++) {
     if (server.exitCode !== null) throw new Error(`Server exited with ${server.exitCode}`);
     const ok = await fetch(`${url}/api/health`)
       .then((r) => r.ok)
@@ -26,7 +30,8 @@ async function waitForHealth(url: string, server: ChildProcess): Promise<void> {
     if (ok) return;
     await new Promise((r) => setTimeout(r, 200));
   }
-  throw new Error('Server did not become healthy in 30 s');
+  server.kill('SIGTERM');
+  throw new Error('Server did not become healthy in 90 s');
 }
 
 /** Starts the BUILT app (npm run build first) on a free port with a fresh seeded database. */
