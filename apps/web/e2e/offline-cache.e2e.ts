@@ -69,7 +69,9 @@ describe('last known data with no connection (phone)', () => {
     await jobCard.click();
     await b.page.getByText(SYMPTOMS).first().waitFor();
     await expect.poll(() => jobPageKept(b.page, jobId), { timeout: 10_000 }).toBe(true);
-    expect((await keptRecords(b.page, '')).length).toBe(1);
+    const kept = await keptRecords(b.page, '');
+    expect(kept.length).toBe(1);
+    const firstKey = kept[0].key;
     expect(await b.page.getByTestId('offline-age').count()).toBe(0);
 
     // No connection: the reloaded job page shows its last known data and says it is offline, and how old it is.
@@ -97,8 +99,13 @@ describe('last known data with no connection (phone)', () => {
     await expect.poll(() => keptRecords(b.page, SYMPTOMS)).toEqual([]);
 
     // Another mechanic of the same shop signs in on this phone; offline, the job page has nothing of the first one's.
+    // (From the plain sign-in page: sent back to the job page, this user would load it online, as their own data.)
+    await b.page.goto('/sign-in');
     await signIn(b.page, OTHER_MECHANIC);
     await expect.poll(async () => (await keptRecords(b.page, '')).length, { timeout: 10_000 }).toBe(1);
+    const [theirs] = await keptRecords(b.page, '');
+    expect(theirs.key).not.toBe(firstKey);
+    expect(theirs.queries).not.toContain(JSON.stringify(['jobs', 'detail', jobId]));
     await network(cdp, true);
     await b.page.goto(`/jobs/${jobId}`);
     await b.page.getByTestId('offline-age').waitFor();
