@@ -13,6 +13,8 @@ const listeners = new Set<() => void>();
 
 export function startServiceWorker(): void {
   if (typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;
+  // An owner opening their link is a one-off visitor: the staff app is not installed on their phone.
+  if (window.location.pathname.startsWith('/o/')) return;
   const register = async () => {
     const { registerSW } = await import('virtual:pwa-register');
     apply = registerSW({
