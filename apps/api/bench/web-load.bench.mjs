@@ -2,7 +2,7 @@
 // (1.6 Mbps down, 150 ms RTT), and the JavaScript a first visit needs before its first screen can be used.
 //
 // First-load JS = every script the page requested before its first screen showed (the sign-in form's
-// password box; the jobs table's first row; a job's intake; the owner page's bike heading), whatever the loader: entry, modulepreload, route chunks.
+// password box; the jobs table's first row; a job's intake; the capture screen's camera button; the owner page's bike heading), whatever the loader: entry, modulepreload, route chunks.
 // Its size is counted as gzip, the way the server's precompressed .gz copies send it; that is
 // deterministic, unlike the seconds, which depend on how busy the machine is.
 import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
@@ -134,6 +134,8 @@ async function main() {
     const link = await ownerLink(api.base);
     const jobPage = await coldLoad(api.base, `/jobs/${link.jobId}`, 'h3:text-is("Reported symptoms")', cookie);
     emitRow(firstLoadRow('cold job page', firstLoadKb('cold job page', jobPage.firstScreen), jobPage.wireBytes));
+    const capture = await coldLoad(api.base, `/jobs/${link.jobId}/capture`, 'button:has-text("Take shots")', cookie);
+    emitRow(firstLoadRow('cold capture page', firstLoadKb('capture page', capture.firstScreen), capture.wireBytes));
     const ownerPage = await coldLoad(api.base, link.path, 'h1');
     emitRow(firstLoadRow('owner page (link from the e-mail)', firstLoadKb('owner page', ownerPage.firstScreen), ownerPage.wireBytes));
   } finally {

@@ -60,6 +60,8 @@ describe('signing in and out', () => {
     await b.page.waitForURL(/\/jobs\?denied=users\.manage$/);
     const notice = b.page.getByRole('alert').filter({ hasText: 'That page is not open to your role' });
     await notice.getByText(/Only manager accounts can open it, so you are on the jobs list instead\./).waitFor();
+    // The tab says which page is open (the route table's title).
+    expect(await b.page.title()).toBe('Jobs · BenchProof');
     await shot(b.page, 'denied-notice-desktop');
     await notice.getByRole('button', { name: 'Dismiss' }).click();
     await b.page.waitForURL(/\/jobs$/);

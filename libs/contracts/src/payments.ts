@@ -43,7 +43,8 @@ export type PaymentDto = z.infer<typeof PaymentDtoSchema>;
 export const JobPaymentsSchema = z.object({ balance: BalanceDtoSchema, payments: z.array(PaymentDtoSchema) });
 export type JobPayments = z.infer<typeof JobPaymentsSchema>;
 
-const amount = z.number().int().positive().max(100_000_000);
+const ENTER_AMOUNT = 'Enter an amount like 12.50';
+const amount = z.number({ error: ENTER_AMOUNT }).int(ENTER_AMOUNT).positive(ENTER_AMOUNT).max(100_000_000);
 
 export const RecordPaymentRequestSchema = z.object({
   method: z.enum(IN_SHOP_METHODS),

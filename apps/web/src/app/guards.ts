@@ -1,4 +1,4 @@
-import { roleCan, type Action, type SessionUser } from '@benchproof/contracts';
+import type { Action, SessionUser } from '@benchproof/contracts';
 import { onlineManager } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import { sessionHasExpired, sessionKey, sessionQuery } from '../features/auth';
@@ -35,20 +35,16 @@ export async function requireSession({ request }: LoaderFunctionArgs) {
 /** The jobs list, told which action the page needed, so it can say why the user landed there. */
 const deniedUrl = (action: Action) => `/jobs?denied=${encodeURIComponent(action)}`;
 
-/** Loader for pages limited by ACCESS_POLICY; roles that may not do `action` are sent to the jobs page. */
+/**
+ * Loader for a page the route table limits to an ACCESS_POLICY action (narrowed by the shop's own switches, e.g.
+ * the showcase for the desk): other roles are sent to the jobs page.
+ */
 export const requireAction = (action: Action) => async (args: LoaderFunctionArgs) => {
   // Child loaders run alongside the parent's, so this one must send a visitor to sign-in too.
   await requireSession(args);
   const user = await queryClient.ensureQueryData(sessionQuery);
-  if (!user || !roleCan(user.role, action)) throw redirect(deniedUrl(action));
+  // Only the shop's switches need the shop's settings; other pages do not wait for them.
+  const shop = user && action === 'showcase.view' ? await queryClient.ensureQueryData(shopSettingsQuery).catch(() => undefined) : undefined;
+  if (!user || !shopCan(user.role, shop)(action)) throw redirect(deniedUrl(action));
   return null;
 };
-
-/** Loader for the showcase: the policy's `showcase.view`, and for the desk only where the shop allows it. */
-export async function requireShowcase(args: LoaderFunctionArgs) {
-  await requireSession(args);
-  const user = await queryClient.ensureQueryData(sessionQuery);
-  const shop = user ? await queryClient.ensureQueryData(shopSettingsQuery).catch(() => undefined) : undefined;
-  if (!user || !shopCan(user.role, shop)('showcase.view')) throw redirect(deniedUrl('showcase.view'));
-  return null;
-}

@@ -4,7 +4,7 @@ import { cleanup, render, screen } from '@testing-library/react';
 import { MemoryRouter } from 'react-router';
 import { theme } from '../theme';
 import { Navigation } from './navigation';
-import { NAV_ITEMS } from './nav-items';
+import { MENU as NAV_ITEMS } from '../route-table';
 
 const managerOnly = (a: Action) => ACCESS_POLICY[a].staff.length === 1 && ACCESS_POLICY[a].staff[0] === 'manager';
 

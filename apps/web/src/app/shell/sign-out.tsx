@@ -1,9 +1,13 @@
-import { ActionIcon, Button, Modal, Stack, Text } from '@mantine/core';
+import { ActionIcon, Button } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { IconLogout } from '@tabler/icons-react';
+import { lazy, Suspense } from 'react';
 import { useNavigate } from 'react-router';
 import { useLogout } from '../../features/auth';
 import { detachShots, useWaitingCount } from '../../features/media';
+
+// The dialog (Modal with its focus trap and scroll lock, ~30 KB gzip) loads only when someone signs out with shots waiting.
+const WaitingShotsDialog = lazy(() => import('./waiting-shots-dialog').then((m) => ({ default: m.WaitingShotsDialog })));
 
 /**
  * Sign-out. With shots still waiting on this phone it first asks: keep them for this user's next sign-in, or
@@ -29,23 +33,11 @@ export function SignOutButton() {
       <ActionIcon variant="subtle" color="gray" size={44} onClick={ask} loading={logout.isPending} hiddenFrom="xs" aria-label="Sign out" title="Sign out">
         <IconLogout size={22} />
       </ActionIcon>
-      <Modal opened={asking} onClose={close} title="Shots still waiting" centered>
-        <Stack gap="md">
-          <Text>
-            {waiting === 1 ? '1 shot has' : `${waiting} shots have`} not reached the workshop server yet. Keep them on this phone to send after your next
-            sign-in, or delete them?
-          </Text>
-          <Button size="lg" onClick={() => signOut(true)}>
-            Keep for my next sign-in
-          </Button>
-          <Button size="lg" color="red" variant="light" onClick={() => signOut(false)}>
-            Delete the waiting shots
-          </Button>
-          <Button size="lg" variant="subtle" color="gray" onClick={close}>
-            Stay signed in
-          </Button>
-        </Stack>
-      </Modal>
+      {asking && (
+        <Suspense fallback={null}>
+          <WaitingShotsDialog waiting={waiting} onChoose={signOut} onClose={close} />
+        </Suspense>
+      )}
     </>
   );
 }

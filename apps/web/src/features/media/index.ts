@@ -5,4 +5,4 @@ export { JobMediaSection } from './components/job-media-section';
 export { FindingMediaPicker } from './components/finding-media-picker';
 export { ScopePanel } from './scope/scope-panel';
 export { UploadBadge } from './components/upload-badge';
-export { attachShots, detachShots, useWaitingCount } from './upload/upload-store';
+export { attachShots, detachShots, useWaitingCount } from './upload/frame-shots';

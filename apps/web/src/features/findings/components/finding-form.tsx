@@ -1,9 +1,9 @@
 import { CreateFindingRequestSchema, type CreateFindingRequest, type FindingDto } from '@benchproof/contracts';
 import { INSPECTION_AREAS, INSPECTION_AREA_LABELS } from '@benchproof/domain';
 import { Alert, Button, Select, Stack, Text, Textarea } from '@mantine/core';
-import { schemaResolver, useForm } from '@mantine/form';
+import { useForm } from '@mantine/form';
 import { ConditionPicker } from '../../../components/condition-picker';
-import { formFailure, showServerFieldErrors } from '../../../lib/form';
+import { contractResolver, formFailure, showServerFieldErrors } from '../../../lib/form';
 import { useSaveFinding } from '../api/findings';
 
 const AREA_OPTIONS = INSPECTION_AREAS.map((a) => ({ value: a, label: INSPECTION_AREA_LABELS[a] }));
@@ -18,9 +18,9 @@ export function FindingForm({ jobId, finding, onDone }: { jobId: number; finding
       description: finding?.description ?? '',
       checkpointId: finding?.checkpointId ?? null,
     },
-    validate: schemaResolver(CreateFindingRequestSchema, { sync: true }),
+    validate: contractResolver(CreateFindingRequestSchema, (v: CreateFindingRequest) => v),
   });
-  const submit = form.onSubmit((v) => save.mutate(v, { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e) }));
+  const submit = form.onSubmit((v) => save.mutate(CreateFindingRequestSchema.parse(v), { onSuccess: onDone, onError: (e) => showServerFieldErrors(form, e) }));
   const failure = formFailure(save.error);
   return (
     <form onSubmit={submit} noValidate>

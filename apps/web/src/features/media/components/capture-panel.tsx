@@ -9,7 +9,7 @@ import { AddFiles } from './add-files';
 import { BulkTagBar } from './bulk-tag-bar';
 import { ShotCard } from './shot-card';
 import { StorageNotice } from './storage-notice';
-import { OfflineNotice } from './upload-badge';
+import { OfflineNotice } from './offline-notice';
 
 const DEFAULT_TAGS: ShotTags = { phase: 'before', area: 'whole_bike', caption: '' };
 

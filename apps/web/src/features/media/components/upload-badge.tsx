@@ -1,6 +1,6 @@
-import { Alert, Badge } from '@mantine/core';
+import { Badge } from '@mantine/core';
 import { IconCloudUpload, IconWifiOff } from '@tabler/icons-react';
-import { useOnline, useWaitingCount } from '../upload/upload-store';
+import { useOnline, useWaitingCount } from '../upload/frame-shots';
 
 const waitingText = (n: number) => `${n} ${n === 1 ? 'shot' : 'shots'} waiting`;
 
@@ -26,16 +26,5 @@ export function UploadBadge() {
     >
       {waiting}
     </Badge>
-  );
-}
-
-/** On the capture screen while offline: shots are kept and go when the connection returns. */
-export function OfflineNotice() {
-  const online = useOnline();
-  if (online) return null;
-  return (
-    <Alert color="red" variant="light" icon={<IconWifiOff />} title="Offline" data-testid="offline-notice">
-      Shots are kept on this phone and sent by themselves when the connection returns, even after the page is closed.
-    </Alert>
   );
 }

@@ -4,6 +4,7 @@ import { queryClient } from '../../../lib/query-client';
 import { mediaKeys } from '../api/media-keys';
 import { needsRetag, nextRetryAt, nextToStart, queueReducer, type QueueAction, type QueueItem, type ShotTags } from './queue';
 import type { Transfer, TransferOutcome } from './transports';
+import { storeArrived } from './frame-shots';
 import { sendPoster } from './poster';
 import { ShotKeeper } from './shot-keeper';
 
@@ -196,6 +197,8 @@ class UploadStore {
 }
 
 export const uploadStore = new UploadStore();
+// The frame's badge and sign-out learn of the store, and the signed-in user's kept shots attach, as it loads.
+storeArrived(uploadStore);
 
 /** How many shots are not yet stored on the server (refused ones included: they wait for a person). */
 export function useWaitingCount(): number {
