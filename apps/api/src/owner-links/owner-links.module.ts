@@ -9,6 +9,7 @@ import { OutboxOwnerLinkMailer } from './owner-links.bindings';
 import { OwnerLinksController } from './owner-links.controller';
 import { OwnerLinksRepository } from './owner-links.repository';
 import { OwnerLinksService } from './owner-links.service';
+import { ReadyTextListener } from './ready-text.listener';
 import { OWNER_LINK_MAILER } from './owner-links.ports';
 
 /**
@@ -19,7 +20,7 @@ import { OWNER_LINK_MAILER } from './owner-links.ports';
 @Module({
   imports: [AuditModule, CustomersModule, JobsModule, MailModule, TextsModule],
   controllers: [OwnerLinksController],
-  providers: [OwnerLinksRepository, OwnerLinksService, OwnerLiveEvents, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
+  providers: [OwnerLinksRepository, OwnerLinksService, OwnerLiveEvents, ReadyTextListener, { provide: OWNER_LINK_MAILER, useClass: OutboxOwnerLinkMailer }],
   exports: [OwnerLinksService],
 })
 export class OwnerLinksModule {}

@@ -11,7 +11,7 @@ import { JobAccess } from '../jobs';
 import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';
 import { hashOwnerToken, newOwnerToken, ownerTokenSignatureOk } from './owner-token';
 import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort, type OwnerLinkSent } from './owner-links.ports';
-import { UnitOfWork } from '../core/db';
+import { type DbTx, UnitOfWork } from '../core/db';
 
 const DAY_MS = 24 * 3600 * 1000;
 const iso = (d: Date | null): string | null => (d ? d.toISOString() : null);
@@ -96,8 +96,26 @@ export class OwnerLinksService {
     });
   }
 
+  /**
+   * For the "ready to collect" text, in the move's transaction: when the job has a live link, a fresh one made
+   * as desk makes one (earlier links revoked, audited, recorded as sent to `to`), since only a link's hash is
+   * stored; null when the job has none (the owner never had a page link, or it was revoked or expired).
+   */
+  renewForText(actor: Pick<AuthUser, 'shopId' | 'id'>, jobId: number, to: string, tx: DbTx): string | null {
+    const now = this.clock.now().getTime();
+    const live = this.repo.listForJob(actor.shopId, jobId).find((r) => !r.revokedAt && r.expiresAt.getTime() > now);
+    if (!live) return null;
+    const days = Math.max(CreateOwnerLinkRequestSchema.parse({}).expiresInDays, Math.ceil((live.expiresAt.getTime() - now) / DAY_MS));
+    const { row, url, expiresAt, now: at } = this.mint(actor, jobId, days);
+    publish(this.emitter, new OwnerLinkChangedEvent(tx, actor.shopId, jobId, row.id, 'created', at));
+    this.repo.update(actor.shopId, row.id, { sentTo: to });
+    const details = { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: 'queued', channel: 'sms', with: 'ready_to_collect' };
+    this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details });
+    return url;
+  }
+
   /** A new token for the job; its earlier links stop working. The URL is built from configuration only. */
-  private mint(actor: AuthUser, jobId: number, expiresInDays: number): { row: OwnerLinkRow; url: string; expiresAt: Date; now: Date } {
+  private mint(actor: Pick<AuthUser, 'shopId' | 'id'>, jobId: number, expiresInDays: number): { row: OwnerLinkRow; url: string; expiresAt: Date; now: Date } {
     const token = newOwnerToken(this.cfg.jwtSecret);
     const now = this.clock.now();
     const expiresAt = new Date(now.getTime() + expiresInDays * DAY_MS);
