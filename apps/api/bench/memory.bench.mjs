@@ -42,6 +42,10 @@ const LAZY = [
   ['e-mail transport (nodemailer)', "require('nodemailer')"],
   ['QR encoder for the report (qrcode)', "require('qrcode')"],
   ['archive writer (yazl)', "require('yazl')"],
+  [
+    'e-mail templates (react-dom/server and the react-email components)',
+    "require('react-dom/server'); for (const c of ['html', 'head', 'preview', 'body', 'container', 'section', 'text', 'button', 'row', 'column']) require('@react-email/' + c)",
+  ],
 ];
 
 const mem = (m) => `rss ${fmt(m.rss / MB)}, heapUsed ${fmt(m.heapUsed / MB)}, external ${fmt(m.external / MB)}, arrayBuffers ${fmt(m.arrayBuffers / MB)} MB`;

@@ -74,7 +74,7 @@ describe('texts: the demo customer who prefers texts gets the owner link by text
     const { page, context } = browser;
     await context.request.post(`${base}/api/auth/login`, { data: { email: DEMO_DESK, password: DEMO_PASSWORD } });
     const found = (await (await context.request.get(`${base}/api/jobs?q=Selberg&pageSize=50`)).json()) as {
-      items: { id: number; status: string; customer: { name: string } }[];
+      items: { id: number; status: string; customer: { id: number; name: string } }[];
     };
     const job = found.items.find((j) => j.customer.name === 'Anouk Selberg' && j.status !== 'collected' && j.status !== 'cancelled');
     if (!job) throw new Error('no open job of the demo customer who prefers texts');
@@ -88,6 +88,11 @@ describe('texts: the demo customer who prefers texts gets the owner link by text
     expect(await card.textContent()).toContain('To +61491570156');
     await card.scrollIntoViewIfNeeded();
     await shot(page, 'texts-desk-status-390');
+    // The customer page lists the customer's texts too, with a way back to the job.
+    await page.goto(`${base}/customers/${job.customer.id}`);
+    const onCustomer = page.getByTestId('customer-texts').getByTestId('text-message').first();
+    await onCustomer.getByText('Delivered to the phone', { exact: true }).waitFor();
+    expect(await onCustomer.getByRole('link', { name: '(open the job)' }).getAttribute('href')).toBe(`/jobs/${job.id}`);
 
     await page.goto(fakeUrl);
     const text = page.getByTestId('text').first();

@@ -38,6 +38,8 @@ export const CustomerDtoSchema = z.object({
   preferredChannel: ContactChannelSchema,
   notes: z.string().nullable(),
   createdAt: IsoDateTimeSchema,
+  /** When the owner replied STOP to a text (no texts go to them until START); null: texts allowed. */
+  textsStoppedAt: IsoDateTimeSchema.nullable(),
 });
 export type CustomerDto = z.infer<typeof CustomerDtoSchema>;
 

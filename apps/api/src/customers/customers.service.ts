@@ -15,6 +15,7 @@ export const toCustomerDto = (c: CustomerRow): CustomerDto => ({
   preferredChannel: c.preferredChannel,
   notes: c.notes || null,
   createdAt: c.createdAt.toISOString(),
+  textsStoppedAt: c.smsOptOutAt?.toISOString() ?? null,
 });
 
 /** Contract nulls are stored as '' so the columns stay simple to search. */

@@ -1,16 +1,17 @@
 import { Inject, Injectable } from '@nestjs/common';
+import { EventEmitter2 } from '@nestjs/event-emitter';
 import { type CreatedOwnerLinkDto, type CreateOwnerLinkRequest, CreateOwnerLinkRequestSchema, type OwnerLinkDto } from '@benchproof/contracts';
 import { AuditService } from '../audit';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
 import { DomainError, notFound } from '../core/http';
 import { CLOCK, type Clock } from '../core/clock';
+import { OwnerLinkChangedEvent, OwnerPageViewedEvent, publish } from '../core/events';
 import { JobAccess } from '../jobs';
-import { OwnerLiveEvents } from './owner-events';
 import { type OwnerLinkRow, OwnerLinksRepository } from './owner-links.repository';
 import { hashOwnerToken, newOwnerToken, ownerTokenSignatureOk } from './owner-token';
 import { OWNER_LINK_MAILER, type OwnerActor, type OwnerLinkMailerPort, type OwnerLinkSent } from './owner-links.ports';
-import { UnitOfWork } from '../core/db';
+import { type DbTx, UnitOfWork } from '../core/db';
 
 const DAY_MS = 24 * 3600 * 1000;
 const iso = (d: Date | null): string | null => (d ? d.toISOString() : null);
@@ -23,7 +24,7 @@ export class OwnerLinksService {
     private readonly uow: UnitOfWork,
     private readonly access: JobAccess,
     private readonly audit: AuditService,
-    private readonly bus: OwnerLiveEvents,
+    private readonly emitter: EventEmitter2,
     @Inject(OWNER_LINK_MAILER) private readonly mailer: OwnerLinkMailerPort,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     @Inject(CLOCK) private readonly clock: Clock,
@@ -59,8 +60,9 @@ export class OwnerLinksService {
     if (job.status === 'cancelled') throw new DomainError('CONFLICT', 'The job is cancelled; there is nothing for the owner to see.');
     const awaitingDecision = job.status === 'waiting_owner';
     // One transaction: the link, the message that carries it (text or e-mail outbox row and its task) and the audit entry.
-    const { saved, url, mail, now } = this.uow.run(() => {
+    const { saved, url, mail } = this.uow.run((tx) => {
       const { row, url, expiresAt, now } = this.mint(actor, jobId, input.expiresInDays);
+      publish(this.emitter, new OwnerLinkChangedEvent(tx, actor.shopId, jobId, row.id, 'created', now));
       const sent: OwnerLinkSent = input.send
         ? this.mailer.send({ shopId: actor.shopId, jobId, linkId: row.id, createdBy: actor.id, customerId: job.customerId, awaitingDecision, url, expiresAt })
         : { status: 'not_sent', reason: 'Not asked to send.' };
@@ -69,9 +71,8 @@ export class OwnerLinksService {
       const saved = sent.status === 'queued' ? this.repo.update(actor.shopId, row.id, { sentTo: sent.to }) : row;
       const details = { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: mail.status, channel: mail.channel };
       this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details });
-      return { saved, url, mail, now };
+      return { saved, url, mail };
     });
-    this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
     return { link: this.toDto(saved), url, mail };
   }
 
@@ -84,20 +85,37 @@ export class OwnerLinksService {
   sendWithLink<T extends { to: string }>(actor: AuthUser, jobId: number, send: (link: { url: string; expiresAt: Date } | null) => T): T {
     const job = this.access.read(actor, jobId);
     if (job.status === 'cancelled') return send(null);
-    const done = this.uow.run(() => {
+    return this.uow.run((tx) => {
       const { row, url, expiresAt, now } = this.mint(actor, jobId, CreateOwnerLinkRequestSchema.parse({}).expiresInDays);
+      publish(this.emitter, new OwnerLinkChangedEvent(tx, actor.shopId, jobId, row.id, 'created', now));
       const sent = send({ url, expiresAt });
       this.repo.update(actor.shopId, row.id, { sentTo: sent.to });
       const details = { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: 'queued', with: 'report' };
       this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details });
-      return { sent, now };
+      return sent;
     });
-    this.bus.emit(actor.shopId, { type: 'link', jobId, at: done.now.toISOString() });
-    return done.sent;
+  }
+
+  /**
+   * For the "ready to collect" text, in the move's transaction: when the job has a live link, a fresh one made
+   * as desk makes one (earlier links revoked, audited, recorded as sent to `to`), since only a link's hash is
+   * stored; null when the job has none (the owner never had a page link, or it was revoked or expired).
+   */
+  renewForText(actor: Pick<AuthUser, 'shopId' | 'id'>, jobId: number, to: string, tx: DbTx): string | null {
+    const now = this.clock.now().getTime();
+    const live = this.repo.listForJob(actor.shopId, jobId).find((r) => !r.revokedAt && r.expiresAt.getTime() > now);
+    if (!live) return null;
+    const days = Math.max(CreateOwnerLinkRequestSchema.parse({}).expiresInDays, Math.ceil((live.expiresAt.getTime() - now) / DAY_MS));
+    const { row, url, expiresAt, now: at } = this.mint(actor, jobId, days);
+    publish(this.emitter, new OwnerLinkChangedEvent(tx, actor.shopId, jobId, row.id, 'created', at));
+    this.repo.update(actor.shopId, row.id, { sentTo: to });
+    const details = { linkId: row.id, expiresAt: expiresAt.toISOString(), mail: 'queued', channel: 'sms', with: 'ready_to_collect' };
+    this.audit.record(actor, { action: 'owner_link.created', entityType: 'job', entityId: jobId, details });
+    return url;
   }
 
   /** A new token for the job; its earlier links stop working. The URL is built from configuration only. */
-  private mint(actor: AuthUser, jobId: number, expiresInDays: number): { row: OwnerLinkRow; url: string; expiresAt: Date; now: Date } {
+  private mint(actor: Pick<AuthUser, 'shopId' | 'id'>, jobId: number, expiresInDays: number): { row: OwnerLinkRow; url: string; expiresAt: Date; now: Date } {
     const token = newOwnerToken(this.cfg.jwtSecret);
     const now = this.clock.now();
     const expiresAt = new Date(now.getTime() + expiresInDays * DAY_MS);
@@ -115,12 +133,12 @@ export class OwnerLinksService {
     if (!row) throw notFound('Owner link');
     if (row.revokedAt) return this.toDto(row);
     const now = this.clock.now();
-    const saved = this.uow.run(() => {
+    const saved = this.uow.run((tx) => {
       const saved = this.repo.update(actor.shopId, linkId, { revokedAt: now, revokedBy: actor.id });
+      publish(this.emitter, new OwnerLinkChangedEvent(tx, actor.shopId, jobId, linkId, 'revoked', now));
       this.audit.record(actor, { action: 'owner_link.revoked', entityType: 'job', entityId: jobId, details: { linkId } });
       return saved;
     });
-    this.bus.emit(actor.shopId, { type: 'link', jobId, at: now.toISOString() });
     return this.toDto(saved);
   }
 
@@ -138,13 +156,13 @@ export class OwnerLinksService {
   /** Every page view: kept on the link for staff, audited, and pushed to the job page. */
   viewed(owner: OwnerActor): void {
     const now = this.clock.now();
-    this.uow.run(() => {
+    this.uow.run((tx) => {
       this.repo.update(owner.shopId, owner.linkId, { lastViewedAt: now });
+      publish(this.emitter, new OwnerPageViewedEvent(tx, owner.shopId, owner.jobId, owner.linkId, now));
       this.audit.record(
         { shopId: owner.shopId, id: null },
         { action: 'owner.viewed', entityType: 'job', entityId: owner.jobId, details: { linkId: owner.linkId } },
       );
     });
-    this.bus.emit(owner.shopId, { type: 'viewed', jobId: owner.jobId, at: now.toISOString() });
   }
 }

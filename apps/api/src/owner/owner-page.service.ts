@@ -11,7 +11,7 @@ import { InspectionService } from '../inspection';
 import { JobAccess, JobsService } from '../jobs';
 import { ShopsService } from '../shops';
 import { UnitOfWork } from '../core/db';
-import { OwnerLiveEvents, type OwnerActor } from '../owner-links';
+import type { OwnerActor } from '../owner-links';
 import { OWNER_MEDIA, OWNER_PAIRS, OWNER_REPORT, type OwnerMediaPort, type OwnerPairsPort, type OwnerReportPort, type OwnerShotSource } from './owner.ports';
 
 /**
@@ -30,7 +30,6 @@ export class OwnerPageService {
     private readonly findings: FindingsService,
     private readonly inspection: InspectionService,
     private readonly consent: ConsentService,
-    private readonly bus: OwnerLiveEvents,
     @Inject(OWNER_MEDIA) private readonly media: OwnerMediaPort,
     @Inject(OWNER_PAIRS) private readonly pairs: OwnerPairsPort,
     @Inject(OWNER_REPORT) private readonly report: OwnerReportPort,
@@ -134,7 +133,6 @@ export class OwnerPageService {
       }
       this.moveJobOn(owner);
     });
-    this.bus.emit(owner.shopId, { type: 'decided', jobId: owner.jobId, at: decidedAt.toISOString() });
   }
 
   private check(f: FindingDto | undefined, item: OwnerDecisionsRequest['items'][number]): void {
@@ -165,8 +163,6 @@ export class OwnerPageService {
   setConsent(owner: OwnerActor, input: OwnerConsentRequest): ConsentDto {
     const job = this.access.read(owner, owner.jobId);
     const name = this.customers.get(owner, job.customerId).name;
-    const saved = this.consent.record(owner, owner.jobId, input, { method: 'owner_link', ownerLinkId: owner.linkId, givenByName: name });
-    this.bus.emit(owner.shopId, { type: 'consent', jobId: owner.jobId, at: saved.at });
-    return saved;
+    return this.consent.record(owner, owner.jobId, input, { method: 'owner_link', ownerLinkId: owner.linkId, givenByName: name });
   }
 }

@@ -7,6 +7,7 @@ describe('text bodies: the shop name, one sentence and the link, nothing else', 
     ['owner_link', 'Spoke & Chain', LINK, `Spoke & Chain: your bike's service page: ${LINK}`],
     ['estimate_decision', 'Spoke & Chain', LINK, `Spoke & Chain: your estimate needs a decision: ${LINK}`],
     ['ready_to_collect', 'Spoke & Chain', null, 'Spoke & Chain: your bike is ready to collect.'],
+    ['ready_to_collect', 'Spoke & Chain', LINK, `Spoke & Chain: your bike is ready to collect: ${LINK}`],
     ['ready_to_collect', ' Two\nLines  Cycles ', null, 'Two Lines Cycles: your bike is ready to collect.'],
   ] as const)('%s from %j', (kind, shop, link, expected) => {
     expect(textBody(kind, shop, link)).toBe(expected);

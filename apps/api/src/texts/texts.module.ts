@@ -3,7 +3,6 @@ import { AuditModule } from '../audit';
 import { CustomersModule } from '../customers';
 import { JobsModule } from '../jobs';
 import { ShopsModule } from '../shops';
-import { ReadyTextListener } from './ready-text.listener';
 import { TextDelivery } from './text-delivery';
 import { TextsWebhooksController } from './texts-webhooks.controller';
 import { TextsWebhooks } from './texts-webhooks.service';
@@ -15,7 +14,7 @@ import { TextsService } from './texts.service';
 @Module({
   imports: [AuditModule, CustomersModule, JobsModule, ShopsModule],
   controllers: [TextsController, TextsWebhooksController],
-  providers: [TextsRepository, TextsService, TextDelivery, TextsWebhooks, ReadyTextListener],
+  providers: [TextsRepository, TextsService, TextDelivery, TextsWebhooks],
   exports: [TextsService],
 })
 export class TextsModule {}

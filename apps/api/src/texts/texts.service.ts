@@ -44,6 +44,12 @@ export class TextsService {
     return this.customers.get(scope, customerId).preferredChannel === 'sms';
   }
 
+  /** The number a text to the customer would go to, or null when none can (no valid number, or they replied STOP). */
+  numberFor(scope: Scope, customerId: number): string | null {
+    const { number, optedOut } = this.customers.textNumber(scope, customerId);
+    return optedOut ? null : number;
+  }
+
   /** Queues the text in the caller's transaction (or its own); says why when it cannot go. */
   queue(scope: Scope, req: TextRequest, tx?: DbTx): TextQueued {
     const { number, optedOut } = this.customers.textNumber(scope, req.customerId);

@@ -112,6 +112,9 @@ describe('self-service sign-up (SIGNUP=open) with a confirmed e-mail', () => {
     const mail = await mailTo(catcher, manager.email, 1);
     expect(mail.subject).toContain('Spokehouse');
     const token = linkToken(mail.text, '/signup/confirm');
+    // The HTML part (react-email) carries the same link on its button.
+    expect(mail.html).toContain(`/signup/confirm#${token}"`);
+    expect(mail.html).toContain('Confirm my e-mail');
     const agent = newAgent(t);
     const confirmed = await agent.post('/api/signup/confirm').send({ token }).expect(200);
     expect(confirmed.body).toMatchObject({ step: 'done', user: { email: manager.email, role: 'manager' } });

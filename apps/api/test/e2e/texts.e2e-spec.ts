@@ -71,7 +71,19 @@ describe('texts: owners who prefer texts get links by text through the provider 
     expect(textsTo(fake, '+61491570157')).toHaveLength(1); // nothing on the way to ready
     await desk.agent.post(`${j}/transitions`).send({ to: 'ready' }).expect(200);
     await until(() => textsTo(fake, '+61491570157')[1], 'the ready text');
-    expect(textsTo(fake, '+61491570157')[1].body).toBe('Lantern & Spoke Workshop: your bike is ready to collect.');
+    // The job had a live link: the ready text carries a fresh one (only a link's hash is kept), and the earlier one stops working.
+    const ready = /^Lantern & Spoke Workshop: your bike is ready to collect: (http\S+\/o\/(\S+))$/.exec(textsTo(fake, '+61491570157')[1].body);
+    expect(ready).not.toBeNull();
+    expect(ready![1]).not.toBe(created.url);
+    await t.http().get(`/api/owner/${ready![2]}`).expect(200);
+    expect(
+      (
+        await t
+          .http()
+          .get(`/api/owner/${created.url.split('/o/')[1]}`)
+          .expect(410)
+      ).body.code,
+    ).toBe('OWNER_LINK_REVOKED');
     const texts = await jobTexts(desk, jobId);
     expect(texts.map((m) => m.kind)).toEqual(['ready_to_collect', 'estimate_decision']);
   });
@@ -128,8 +140,14 @@ describe('texts: owners who prefer texts get links by text through the provider 
     const { jobId, customer } = await jobForTexter(desk, '020 7946 0324');
     await sendLink(desk, jobId);
     await textReaches(desk, jobId, 'delivered');
+    expect(((await desk.agent.get(`/api/customers/${customer.id}`).expect(200)).body as CustomerDto).textsStoppedAt).toBeNull();
     const reply = await fake.reply('+442079460324', 'Stop');
     expect(reply.status).toBe(200);
+    // Desk sees on the customer that (and when) they replied STOP, and the text that went before it.
+    const stopped = (await desk.agent.get(`/api/customers/${customer.id}`).expect(200)).body as CustomerDto;
+    expect(Date.parse(stopped.textsStoppedAt ?? '')).toBeGreaterThan(Date.now() - 60_000);
+    const customerTexts = (await desk.agent.get(`/api/customers/${customer.id}/texts`).expect(200)).body as { jobId: number; status: string }[];
+    expect(customerTexts).toMatchObject([{ jobId, status: 'delivered' }]);
     const again = await sendLink(desk, jobId);
     expect(again.mail).toEqual({ status: 'not_sent', reason: 'The owner replied STOP and gets no more texts.', channel: null });
     for (const to of ['on_stand', 'in_work']) await desk.agent.post(`/api/jobs/${jobId}/transitions`).send({ to }).expect(200);

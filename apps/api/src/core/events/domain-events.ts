@@ -12,6 +12,8 @@ export const DOMAIN_EVENTS = {
   jobMoved: 'job.moved',
   recommendationDecided: 'recommendation.decided',
   consentChanged: 'consent.changed',
+  ownerLinkChanged: 'owner_link.changed',
+  ownerPageViewed: 'owner_page.viewed',
 } as const;
 
 export type DomainEventName = (typeof DOMAIN_EVENTS)[keyof typeof DOMAIN_EVENTS];
@@ -70,7 +72,32 @@ export class ConsentChangedEvent implements InTransaction {
   ) {}
 }
 
-export type DomainEvent = JobBookedInEvent | JobMovedEvent | RecommendationDecidedEvent | ConsentChangedEvent;
+/** Desk made a new owner link for the job (earlier ones stop working) or revoked one. */
+export class OwnerLinkChangedEvent implements InTransaction {
+  readonly eventName = DOMAIN_EVENTS.ownerLinkChanged;
+  constructor(
+    readonly tx: DbTx,
+    readonly shopId: number,
+    readonly jobId: number,
+    readonly linkId: number,
+    readonly change: 'created' | 'revoked',
+    readonly at: Date,
+  ) {}
+}
+
+/** The owner opened their page through the job's link (kept on the link as last viewed). */
+export class OwnerPageViewedEvent implements InTransaction {
+  readonly eventName = DOMAIN_EVENTS.ownerPageViewed;
+  constructor(
+    readonly tx: DbTx,
+    readonly shopId: number,
+    readonly jobId: number,
+    readonly linkId: number,
+    readonly at: Date,
+  ) {}
+}
+
+export type DomainEvent = JobBookedInEvent | JobMovedEvent | RecommendationDecidedEvent | ConsentChangedEvent | OwnerLinkChangedEvent | OwnerPageViewedEvent;
 
 /** Emits an event under its own name (keeps name and class together at every call site). */
 export function publish(emitter: { emit(name: string, ...args: unknown[]): boolean }, event: DomainEvent): void {

@@ -1,5 +1,7 @@
+import { invitationMail, passwordResetMail, signupConfirmMail } from './account';
 import { estimateDecisionMail } from './estimate-decision';
-import { SECRET_REMOVED, type ShopBrand, withoutSecrets } from './layout';
+import { esc, SECRET_REMOVED, type ShopBrand, withoutSecrets } from './layout';
+import { paymentReceiptMail } from './payment-receipt';
 import { reportReadyMail } from './report-ready';
 
 const shop = (brandPrimary: string): ShopBrand => ({
@@ -27,9 +29,9 @@ describe('mail templates', () => {
   it('escapes the shop name and picks the header text colour by WCAG contrast (white on dark teal, black on pale yellow)', () => {
     const dark = reportReadyMail({ ...base, shop: shop('#1F5F5B') });
     expect(dark.html).toContain('Spoke &amp; &quot;Sons&quot;');
-    expect(dark.html).toContain('background:#1F5F5B;color:#FFFFFF');
+    expect(dark.html).toContain('background-color:#1F5F5B;color:#FFFFFF');
     const pale = reportReadyMail({ ...base, shop: shop('#F7E27A') });
-    expect(pale.html).toContain('background:#F7E27A;color:#000000');
+    expect(pale.html).toContain('background-color:#F7E27A;color:#000000');
   });
 
   it('ends the plain text with the usual "-- " signature line and the shop contact, one per line', () => {
@@ -83,5 +85,41 @@ describe('mail templates', () => {
     expect(`${text}${html}`).not.toContain('k3y');
     expect(html).toContain('See the estimate and decide');
     expect(withoutSecrets(mail.text, [])).toBe(mail.text);
+  });
+});
+
+describe('mail templates: what comes from the records is escaped in every kind', () => {
+  const name = `Rosa O'Dell <script>x</script> & "Co"`;
+  const escaped = 'Rosa O&#x27;Dell &lt;script&gt;x&lt;/script&gt; &amp; &quot;Co&quot;';
+  const brand = shop('#1F5F5B');
+  const link = "https://bench.example.test/o/k3y?a=1&b='2'";
+  const kinds = {
+    report: reportReadyMail({ ...base, shop: brand, ownerName: name, link, linkUntil: '12 Dec 2026' }),
+    estimate: estimateDecisionMail({ shop: brand, ownerName: name, jobNumber: 'J-1', bikeLabel: 'Stratus', link }),
+    receipt: paymentReceiptMail({
+      ...{ shop: { ...brand, taxNumber: 'GB 123', currency: 'GBP' }, ownerName: name, jobNumber: 'J-1', bikeLabel: 'Stratus' },
+      ...{ netMinor: 3000, taxMinor: 600, grossMinor: 3600, payments: [{ label: 'Cash', amountMinor: 3600 }], paidOn: '5 Dec 2026' },
+    }),
+    invitation: invitationMail({ shop: brand, name, roleLabel: 'Mechanic', inviterName: 'Ada', link, expiresOn: '12 Dec 2026' }),
+    reset: passwordResetMail({ shop: brand, name, link, minutes: 30, byManager: null }),
+    signup: signupConfirmMail({ shop: brand, name, link, hours: 24 }),
+  };
+
+  it.each(Object.entries(kinds))('%s: the name is escaped in the HTML, as typed in the text part', (_kind, mail) => {
+    expect(mail.html).toContain(escaped);
+    expect(mail.html).not.toContain('<script>');
+    expect(mail.text).toContain(name);
+  });
+
+  it.each(Object.entries(kinds).filter(([k]) => k !== 'receipt'))('%s: a link with & and an apostrophe leaves no trace once taken out', (_kind, mail) => {
+    expect(mail.html).toContain(`href="${esc(link)}"`);
+    expect(`${withoutSecrets(mail.text, [link])}${withoutSecrets(mail.html, [link])}`).not.toContain('k3y');
+  });
+
+  it('the receipt shows each amount in the shop currency, the total bold, and the tax number', () => {
+    const { html, text } = kinds.receipt;
+    expect(html).toMatch(/font-weight:bold[^>]*>.*Total.*£36\.00/);
+    expect(text).toContain('Total: £36.00');
+    expect(html).toContain('Tax number: GB 123');
   });
 });

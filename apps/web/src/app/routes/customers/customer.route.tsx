@@ -7,8 +7,9 @@ import { useCan } from '../../../features/auth';
 import { BikeForm, CustomerBikes } from '../../../features/bikes';
 import { CustomerCard, CustomerForm, useCustomer } from '../../../features/customers';
 import { CustomerData, EraseCustomer } from '../../../features/data-export';
+import { CustomerTextsPanel } from '../../../features/mail';
 
-/** /customers/:customerId — contact details and the bikes on file. */
+/** /customers/:customerId — contact details (with a STOP reply to texts), the bikes on file and the texts sent. */
 export function CustomerRoute() {
   const id = Number(useParams().customerId);
   const customer = useCustomer(id);
@@ -38,6 +39,7 @@ export function CustomerRoute() {
         )}
       </Group>
       <CustomerBikes customerId={id} />
+      <CustomerTextsPanel customerId={id} />
       {can('customers.export') && (
         <CustomerData customerId={id} erase={can('customers.erase') && <EraseCustomer customerId={id} name={customer.data.name} />} />
       )}

@@ -4,7 +4,8 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render, screen, within } from '@testing-library/react';
 import { theme } from '../../../app/theme';
 import { textKeys } from '../api/texts';
-import { TextsPanel } from './texts-panel';
+import { MemoryRouter } from 'react-router';
+import { CustomerTextsPanel, TextsPanel } from './texts-panel';
 
 function text(id: number, patch: Partial<TextMessageDto>): TextMessageDto {
   return {
@@ -51,5 +52,24 @@ describe('job texts panel', () => {
   it('says when the job has no texts', () => {
     renderPanel([]);
     expect(screen.getByText(/No texts for this job/)).toBeTruthy();
+  });
+});
+
+describe('customer texts panel', () => {
+  it("lists the customer's texts across jobs, the STOP one named as such, each with a way to its job", () => {
+    const qc = new QueryClient({ defaultOptions: { queries: { staleTime: Infinity, retry: false } } });
+    qc.setQueryData(textKeys.customer(4), [text(7, { jobId: 12, status: 'opted_out', attempts: 0 }), text(8, { jobId: 11 })]);
+    render(
+      <QueryClientProvider client={qc}>
+        <MantineProvider theme={theme}>
+          <MemoryRouter>
+            <CustomerTextsPanel customerId={4} />
+          </MemoryRouter>
+        </MantineProvider>
+      </QueryClientProvider>,
+    );
+    expect(within(card(7)).getByText('Owner replied STOP')).toBeTruthy();
+    expect(within(card(7)).getByRole('link', { name: '(open the job)' }).getAttribute('href')).toBe('/jobs/12');
+    expect(within(card(8)).getByRole('link', { name: '(open the job)' }).getAttribute('href')).toBe('/jobs/11');
   });
 });

@@ -1,9 +1,10 @@
 import type { TextMessageDto, TextStatus } from '@benchproof/contracts';
-import { Alert, Badge, Card, Group, Stack, Text, Title } from '@mantine/core';
+import { Alert, Anchor, Badge, Card, Group, Stack, Text, Title } from '@mantine/core';
 import { IconAlertTriangle, IconBan, IconCheck, IconChecks, IconClockHour4, IconSend } from '@tabler/icons-react';
 import { QueryState } from '../../../components/query-state';
 import { useDates } from '../../../lib/dates';
-import { useTexts } from '../api/texts';
+import { Link } from 'react-router';
+import { useCustomerTexts, useTexts } from '../api/texts';
 
 const KIND_LABELS: Record<string, string> = {
   owner_link: 'Owner link',
@@ -32,14 +33,21 @@ export function TextStatusBadge({ status }: { status: TextStatus }) {
   );
 }
 
-function TextCard({ m }: { m: TextMessageDto }) {
+function TextCard({ m, withJob = false }: { m: TextMessageDto; withJob?: boolean }) {
   const dates = useDates();
   const stopped = m.status === 'failed' || m.status === 'undelivered';
   return (
     <Card withBorder radius="md" p="md" data-testid="text-message">
       <Stack gap={6}>
         <Group justify="space-between" gap="xs" wrap="wrap">
-          <Text fw={700}>{KIND_LABELS[m.kind] ?? m.kind}</Text>
+          <Text fw={700}>
+            {KIND_LABELS[m.kind] ?? m.kind}
+            {withJob && m.jobId !== null && (
+              <Anchor component={Link} to={`/jobs/${m.jobId}`} fw={400} ml="xs">
+                (open the job)
+              </Anchor>
+            )}
+          </Text>
           <TextStatusBadge status={m.status} />
         </Group>
         <Text size="sm">To {m.to}</Text>
@@ -73,6 +81,21 @@ export function TextsPanel({ jobId }: { jobId: number }) {
       {texts.data.length === 0 && <Text c="dimmed">No texts for this job. Owners who prefer texts get their link and "ready to collect" this way.</Text>}
       {texts.data.map((m) => (
         <TextCard key={m.id} m={m} />
+      ))}
+    </Stack>
+  );
+}
+
+/** Every text to one customer across their jobs, so desk can see why one did not go (e.g. they replied STOP). */
+export function CustomerTextsPanel({ customerId }: { customerId: number }) {
+  const texts = useCustomerTexts(customerId);
+  if (!texts.data) return <QueryState isLoading={texts.isLoading} error={texts.error} />;
+  return (
+    <Stack gap="sm" data-testid="customer-texts">
+      <Title order={3}>Texts</Title>
+      {texts.data.length === 0 && <Text c="dimmed">No texts to this customer yet.</Text>}
+      {texts.data.map((m) => (
+        <TextCard key={m.id} m={m} withJob />
       ))}
     </Stack>
   );

@@ -1,11 +1,19 @@
-import { htmlButton, htmlFrame, paragraphs, safeLink, type RenderedMail, type ShopBrand, textFrame } from './layout';
+import { renderHtml } from './email-kit';
+import { LinkButton, MailFrame, Paragraphs } from './frame';
+import { safeLink, type RenderedMail, type ShopBrand, textFrame } from './layout';
 
 /** One message with a single button: the link is the only thing the reader needs. */
 function linkMail(shop: ShopBrand, subject: string, lines: string[], link: string, button: string, after: string[]): RenderedMail {
   const safe = safeLink(link);
   if (!safe) throw new Error('An account link must be an http(s) address');
   const text = textFrame(shop, [...lines, `${button}: ${safe}`, ...after]);
-  const html = htmlFrame(shop, subject, paragraphs(lines) + htmlButton(shop, safe, button) + paragraphs(after));
+  const html = renderHtml(
+    <MailFrame shop={shop} title={subject} preview={lines[1] ?? subject}>
+      <Paragraphs lines={lines} />
+      <LinkButton shop={shop} href={safe} label={button} />
+      <Paragraphs lines={after} />
+    </MailFrame>,
+  );
   return { subject, text, html };
 }
 

@@ -1,4 +1,6 @@
-import { htmlButton, htmlFrame, paragraphs, safeLink, type RenderedMail, type ShopBrand, textFrame } from './layout';
+import { renderHtml } from './email-kit';
+import { LinkButton, MailFrame, Paragraphs } from './frame';
+import { safeLink, type RenderedMail, type ShopBrand, textFrame } from './layout';
 
 export interface EstimateDecisionInput {
   shop: ShopBrand;
@@ -24,6 +26,12 @@ export function estimateDecisionMail(input: EstimateDecisionInput): RenderedMail
   ];
   const close = 'Questions? Reply to this e-mail or call us.';
   const text = textFrame(shop, [...lines, `Your estimate: ${link}`, close]);
-  const html = htmlFrame(shop, subject, paragraphs(lines) + htmlButton(shop, link, 'See the estimate and decide') + paragraphs([close]));
+  const html = renderHtml(
+    <MailFrame shop={shop} title={subject} preview={lines[1]}>
+      <Paragraphs lines={lines} />
+      <LinkButton shop={shop} href={link} label="See the estimate and decide" />
+      <Paragraphs lines={[close]} />
+    </MailFrame>,
+  );
   return { subject, text, html };
 }

@@ -1,4 +1,6 @@
-import { esc, htmlButton, htmlFrame, paragraphs, safeLink, type RenderedMail, type ShopBrand, textFrame } from './layout';
+import { renderHtml } from './email-kit';
+import { LinkButton, MailFrame, Paragraphs } from './frame';
+import { safeLink, type RenderedMail, type ShopBrand, textFrame } from './layout';
 
 /**
  * Where the job stands when the report goes out; it decides what the e-mail may claim.
@@ -87,10 +89,13 @@ export function reportReadyMail(input: ReportReadyInput): RenderedMail {
   const lines = [`Hello ${input.ownerName},`, ...intro, ...(revised ? [revised] : []), where(input, link)];
   const after = [...(privacy ? [privacy] : []), close];
   const text = textFrame(shop, [...lines, ...(link ? [`Your page: ${link}`] : []), ...after, jobLine]);
-  const html = htmlFrame(
-    shop,
-    subject,
-    paragraphs(lines) + (link ? htmlButton(shop, link, button) : '') + paragraphs(after) + `<p style="font-size:13px;color:#4a4f55">${esc(jobLine)}</p>`,
+  const html = renderHtml(
+    <MailFrame shop={shop} title={subject} preview={intro[0]}>
+      <Paragraphs lines={lines} />
+      {link ? <LinkButton shop={shop} href={link} label={button} /> : null}
+      <Paragraphs lines={after} />
+      <Paragraphs lines={[jobLine]} small />
+    </MailFrame>,
   );
   return { subject, text, html };
 }

@@ -1,5 +1,7 @@
 import { formatMoney } from '@benchproof/domain';
-import { esc, htmlFrame, paragraphs, type RenderedMail, type ShopBrand, textFrame } from './layout';
+import { emailKit, renderHtml } from './email-kit';
+import { MailFrame, Paragraphs } from './frame';
+import { type RenderedMail, type ShopBrand, textFrame } from './layout';
 
 export interface ReceiptLine {
   label: string;
@@ -19,6 +21,24 @@ export interface PaymentReceiptInput {
   paidOn: string;
 }
 
+/** The amounts, one row each, the total (third row) in bold under a rule. */
+function Amounts({ rows }: { rows: [string, string][] }) {
+  const { Section, Row, Column } = emailKit();
+  return (
+    <Section style={{ margin: '0 0 14px' }}>
+      {rows.map(([label, amount], i) => {
+        const total = i === 2 ? { fontWeight: 'bold', borderTop: '1px solid #cccccc' } : {};
+        return (
+          <Row key={i} style={total}>
+            <Column style={{ padding: '6px 0', fontSize: '16px' }}>{label}</Column>
+            <Column style={{ padding: '6px 0', fontSize: '16px', textAlign: 'right' }}>{amount}</Column>
+          </Row>
+        );
+      })}
+    </Section>
+  );
+}
+
 /** "Paid, thank you": what was charged, tax, how it was paid, and the shop's tax number when it has one. */
 export function paymentReceiptMail(input: PaymentReceiptInput): RenderedMail {
   const money = (minor: number) => formatMoney(minor, input.shop.currency);
@@ -31,16 +51,14 @@ export function paymentReceiptMail(input: PaymentReceiptInput): RenderedMail {
   ];
   const lines = [`Hello ${input.ownerName},`, `Thank you: the work on your ${input.bikeLabel} (job ${input.jobNumber}) was paid in full on ${input.paidOn}.`];
   const taxLine = input.shop.taxNumber.trim() ? [`Tax number: ${input.shop.taxNumber.trim()}`] : [];
-  const text = textFrame(input.shop, [...lines, rows.map(([k, v]) => `${k}: ${v}`).join('\n'), ...taxLine, 'Keep this e-mail as your receipt.']);
-  const table =
-    `<table role="presentation" cellpadding="6" style="border-collapse:collapse;width:100%">` +
-    rows
-      .map(
-        ([k, v], i) =>
-          `<tr${i === 2 ? ' style="font-weight:bold;border-top:1px solid #ccc"' : ''}><td>${esc(k)}</td><td style="text-align:right">${esc(v)}</td></tr>`,
-      )
-      .join('') +
-    `</table>`;
-  const html = htmlFrame(input.shop, subject, paragraphs(lines) + table + paragraphs([...taxLine, 'Keep this e-mail as your receipt.']));
+  const after = [...taxLine, 'Keep this e-mail as your receipt.'];
+  const text = textFrame(input.shop, [...lines, rows.map(([k, v]) => `${k}: ${v}`).join('\n'), ...after]);
+  const html = renderHtml(
+    <MailFrame shop={input.shop} title={subject} preview={lines[1]}>
+      <Paragraphs lines={lines} />
+      <Amounts rows={rows} />
+      <Paragraphs lines={after} />
+    </MailFrame>,
+  );
   return { subject, text, html };
 }
