@@ -96,6 +96,11 @@ export default tseslint.config(
           message:
             'No .returning().get(): a failed commit is lost in autocommit. Use .returning().all()[0] (all() steps to the end, so the error throws), inside uow.run for more than one write.',
         },
+        {
+          // One way to declare a route's input: the decorator that validates also documents (core/http/zod.ts).
+          selector: "Decorator > CallExpression[callee.name=/^(Body|Query|Param)$/] > NewExpression[callee.name='ZodPipe']",
+          message: 'Declare route input with @ZodBody(Schema), @ZodQuery(Schema) or @ZodParam(name, Schema): they validate and document it in one place.',
+        },
       ],
     },
   },

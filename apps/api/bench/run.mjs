@@ -23,6 +23,7 @@ const BENCHES = [
   'annotation-render.bench.mjs',
   'report.bench.mjs',
   'media-upload.bench.mjs',
+  'export-memory.bench.mjs',
 ];
 const only = process.argv.slice(2);
 const rows = [];

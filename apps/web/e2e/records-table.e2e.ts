@@ -82,6 +82,26 @@ describe('the jobs table and the moves a job offers', () => {
     await snap(b.page, 'records-jobs-filter-phone');
   });
 
+  it('puts the first job on a phone’s first screen and keeps the other filters one tap away', async () => {
+    b = await openBrowser(PHONE);
+    await signIn(b.page, DESK);
+    await b.page.goto('/jobs');
+    const firstCard = b.page.getByRole('link', { name: /^J-\d{4}-\d{4} / }).first();
+    await firstCard.waitFor();
+    const box = (await firstCard.boundingBox())!;
+    expect(box.y + box.height).toBeLessThanOrEqual(PHONE.height);
+    const mechanic = b.page.getByRole('combobox', { name: 'Mechanic' });
+    expect(await mechanic.count()).toBe(0);
+
+    await b.page.getByRole('button', { name: 'More filters' }).click();
+    await mechanic.selectOption({ label: 'Tobin Ashgrove' });
+    await b.page.waitForURL(/mechanicId=\d+/);
+    await b.page.getByRole('button', { name: 'Fewer filters' }).click();
+    // Hidden again, the button still says a filter is on.
+    await b.page.getByRole('button', { name: 'More filters (1 on)' }).waitFor();
+    expect(await mechanic.count()).toBe(0);
+  });
+
   it('offers only the moves JOB_TRANSITIONS allows from each status', async () => {
     const job = await bookInByApi('Front brake rubs on every turn of the wheel.');
     b = await openBrowser(PHONE);

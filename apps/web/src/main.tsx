@@ -6,7 +6,12 @@ import { AppProvider } from './app/provider';
 import { createRouter } from './app/router';
 import { handleSessionLost } from './lib/api-client';
 import { startServiceWorker } from './lib/app-update';
+import { startOfflineCache } from './lib/offline-cache';
 import { queryClient } from './lib/query-client';
+
+// Opened with no connection: the last signed-in user's kept answers come back before the first loader asks for the
+// session, and queries wait for the connection meanwhile.
+await startOfflineCache(queryClient);
 
 const router = createRouter();
 

@@ -24,10 +24,10 @@ export const UploadMetaSchema = z.object({
   area: MediaAreaSchema,
   source: MediaSourceSchema.default('upload'),
   caption: caption.default(''),
-  sourceAssetId: z.coerce.number().int().positive().optional(),
-  timecodeMs: z.coerce.number().int().min(0).optional(),
+  sourceAssetId: z.coerce.number().int().positive().optional().describe('For a still grabbed from a video of this job'),
+  timecodeMs: z.coerce.number().int().min(0).optional().describe('Position of the still in the source video'),
   /** Made up by the device for one shot (a UUID): sending it again returns the asset already stored instead of a second one. */
-  clientId: z.uuid().optional(),
+  clientId: z.uuid().optional().describe('Made up by the device for one shot; sent again, the stored asset is answered'),
 });
 export type UploadMeta = z.infer<typeof UploadMetaSchema>;
 

@@ -1,7 +1,6 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Post, Put, Req, Res } from '@nestjs/common';
-import { ApiParam, ApiTags } from '@nestjs/swagger';
+import { Controller, Get, Param, ParseIntPipe, Post, Put, Req, Res } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
 import {
-  ANNOTATED_SIZES,
   AnnotatedSizeSchema,
   ChainFromPhotoSchema,
   SaveAnnotationSchema,
@@ -11,7 +10,7 @@ import {
 } from '@benchproof/contracts';
 import type { Request, Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, sendFile, zod } from '../core/http';
+import { sendFile, ZodBody, ZodParam } from '../core/http';
 import { AnnotationFilesService } from './annotation-files.service';
 import { AnnotationsService } from './annotations.service';
 
@@ -32,26 +31,23 @@ export class AnnotationsController {
   /** Autosave: every save is a new version; the original photo is never changed. */
   @Put('annotations/:mediaId')
   @Can('annotations.edit')
-  @ApiZodBody(SaveAnnotationSchema)
-  save(@CurrentUser() user: AuthUser, @Param('mediaId', ParseIntPipe) mediaId: number, @Body(zod(SaveAnnotationSchema)) body: SaveAnnotationRequest) {
+  save(@CurrentUser() user: AuthUser, @Param('mediaId', ParseIntPipe) mediaId: number, @ZodBody(SaveAnnotationSchema) body: SaveAnnotationRequest) {
     return this.annotations.save(user, mediaId, body);
   }
 
   @Post('annotations/:mediaId/chain-reading')
   @Can('inspection.record')
-  @ApiZodBody(ChainFromPhotoSchema)
-  chain(@CurrentUser() user: AuthUser, @Param('mediaId', ParseIntPipe) mediaId: number, @Body(zod(ChainFromPhotoSchema)) body: ChainFromPhotoRequest) {
+  chain(@CurrentUser() user: AuthUser, @Param('mediaId', ParseIntPipe) mediaId: number, @ZodBody(ChainFromPhotoSchema) body: ChainFromPhotoRequest) {
     return this.annotations.chainReading(user, mediaId, body);
   }
 
   /** The annotated JPEG (blur boxes pixelated, shapes burned in); the plain derivative when not annotated. */
   @Get('media/:id/annotated/:size')
   @Can('media.view')
-  @ApiParam({ name: 'size', enum: ANNOTATED_SIZES })
   async annotated(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
-    @Param('size', zod(AnnotatedSizeSchema)) size: AnnotatedSize,
+    @ZodParam('size', AnnotatedSizeSchema) size: AnnotatedSize,
     @Req() req: Request,
     @Res() res: Response,
   ): Promise<void> {

@@ -1,8 +1,8 @@
-import { Controller, Get, Query } from '@nestjs/common';
+import { Controller, Get } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { AuditQuerySchema, type AuditQuery } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodQuery, zod } from '../core/http';
+import { ZodQuery } from '../core/http';
 import { AuditService } from './audit.service';
 
 @ApiTags('audit')
@@ -12,8 +12,7 @@ export class AuditController {
 
   @Get()
   @Can('audit.view')
-  @ApiZodQuery(AuditQuerySchema)
-  list(@CurrentUser() user: AuthUser, @Query(zod(AuditQuerySchema)) q: AuditQuery) {
+  list(@CurrentUser() user: AuthUser, @ZodQuery(AuditQuerySchema) q: AuditQuery) {
     return this.audit.list(user.shopId, q.entityType, q.entityId);
   }
 }

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Inject, Post, Req, Res } from '@nestjs/common';
+import { Controller, Get, HttpCode, Inject, Post, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   ChallengeRequestSchema,
@@ -13,7 +13,7 @@ import {
 import type { DoubleCsrfUtilities } from 'csrf-csrf';
 import type { Request, Response } from 'express';
 import { Can, CSRF, CSRF_COOKIE, CurrentUser, issueCsrfToken, Public, SESSION_COOKIE, sessionTokenFrom, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { AuthService } from './auth.service';
 import { clientAddress, SessionResponder } from './session-responder';
 
@@ -34,8 +34,7 @@ export class AuthController {
   @Post('login')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(LoginRequestSchema)
-  async login(@Body(zod(LoginRequestSchema)) body: LoginRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async login(@ZodBody(LoginRequestSchema) body: LoginRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     return this.respond.outcome(await this.auth.login(body.email, body.password, clientAddress(req)), req, res);
   }
 
@@ -43,8 +42,7 @@ export class AuthController {
   @Post('login/code')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(CodeStepRequestSchema)
-  async code(@Body(zod(CodeStepRequestSchema)) body: CodeStepRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async code(@ZodBody(CodeStepRequestSchema) body: CodeStepRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     return this.respond.session(await this.auth.withCode(body.challenge, body.code, clientAddress(req)), req, res);
   }
 
@@ -52,8 +50,7 @@ export class AuthController {
   @Post('login/enrol')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(ChallengeRequestSchema)
-  enrol(@Body(zod(ChallengeRequestSchema)) body: ChallengeRequest) {
+  enrol(@ZodBody(ChallengeRequestSchema) body: ChallengeRequest) {
     return this.auth.enrolStart(body.challenge);
   }
 
@@ -61,8 +58,7 @@ export class AuthController {
   @Post('login/enrol/confirm')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(CodeStepRequestSchema)
-  async enrolConfirm(@Body(zod(CodeStepRequestSchema)) body: CodeStepRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async enrolConfirm(@ZodBody(CodeStepRequestSchema) body: CodeStepRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     const { session, recoveryCodes } = await this.auth.enrolConfirm(body.challenge, body.code, clientAddress(req));
     return { ...this.respond.session(session, req, res), recoveryCodes };
   }
@@ -71,10 +67,9 @@ export class AuthController {
   @Post('password')
   @Can('account.change_password')
   @HttpCode(200)
-  @ApiZodBody(ChangePasswordRequestSchema)
   async changePassword(
     @CurrentUser() user: AuthUser,
-    @Body(zod(ChangePasswordRequestSchema)) body: ChangePasswordRequest,
+    @ZodBody(ChangePasswordRequestSchema) body: ChangePasswordRequest,
     @Req() req: Request,
     @Res({ passthrough: true }) res: Response,
   ) {

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { Controller, Get, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   BikeListQuerySchema,
@@ -9,7 +9,7 @@ import {
   type UpdateBikeRequest,
 } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ZodBody, ZodQuery } from '../core/http';
 import { BikesService } from './bikes.service';
 
 @ApiTags('bikes')
@@ -19,15 +19,13 @@ export class BikesController {
 
   @Get()
   @Can('bikes.view')
-  @ApiZodQuery(BikeListQuerySchema)
-  list(@CurrentUser() user: AuthUser, @Query(zod(BikeListQuerySchema)) query: BikeListQuery) {
+  list(@CurrentUser() user: AuthUser, @ZodQuery(BikeListQuerySchema) query: BikeListQuery) {
     return this.bikes.list(user, query);
   }
 
   @Post()
   @Can('bikes.edit')
-  @ApiZodBody(BikeInputSchema)
-  create(@CurrentUser() user: AuthUser, @Body(zod(BikeInputSchema)) body: BikeInput) {
+  create(@CurrentUser() user: AuthUser, @ZodBody(BikeInputSchema) body: BikeInput) {
     return this.bikes.create(user, body);
   }
 
@@ -39,8 +37,7 @@ export class BikesController {
 
   @Patch(':id')
   @Can('bikes.edit')
-  @ApiZodBody(UpdateBikeRequestSchema)
-  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateBikeRequestSchema)) body: UpdateBikeRequest) {
+  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(UpdateBikeRequestSchema) body: UpdateBikeRequest) {
     return this.bikes.update(user, id, body);
   }
 }

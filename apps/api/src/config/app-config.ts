@@ -162,6 +162,9 @@ const EnvSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 
+/** Every environment variable the config reads (DEVELOPERS.md lists each one; a spec checks). */
+export const SETTING_NAMES: readonly string[] = Object.keys(EnvSchema.shape);
+
 export type AppConfig = z.infer<typeof EnvSchema> & {
   jwtSecret: string;
   appOrigin: string;

@@ -1,8 +1,8 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { Controller, Get, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { RecordConsentRequestSchema, type RecordConsentRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { ConsentService } from './consent.service';
 
 @ApiTags('consent')
@@ -19,8 +19,7 @@ export class ConsentController {
   /** Desk or manager record a consent the owner gave (or withdrew) in person. */
   @Post()
   @Can('consent.record')
-  @ApiZodBody(RecordConsentRequestSchema)
-  record(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(RecordConsentRequestSchema)) body: RecordConsentRequest) {
+  record(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodBody(RecordConsentRequestSchema) body: RecordConsentRequest) {
     return this.consent.recordInPerson(user, jobId, body);
   }
 }

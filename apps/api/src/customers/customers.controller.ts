@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { Controller, Get, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   CustomerInputSchema,
@@ -9,7 +9,7 @@ import {
   type UpdateCustomerRequest,
 } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ZodBody, ZodQuery } from '../core/http';
 import { CustomersService } from './customers.service';
 
 @ApiTags('customers')
@@ -19,15 +19,13 @@ export class CustomersController {
 
   @Get()
   @Can('customers.view')
-  @ApiZodQuery(CustomerListQuerySchema)
-  list(@CurrentUser() user: AuthUser, @Query(zod(CustomerListQuerySchema)) query: CustomerListQuery) {
+  list(@CurrentUser() user: AuthUser, @ZodQuery(CustomerListQuerySchema) query: CustomerListQuery) {
     return this.customers.list(user, query);
   }
 
   @Post()
   @Can('customers.edit')
-  @ApiZodBody(CustomerInputSchema)
-  create(@CurrentUser() user: AuthUser, @Body(zod(CustomerInputSchema)) body: CustomerInput) {
+  create(@CurrentUser() user: AuthUser, @ZodBody(CustomerInputSchema) body: CustomerInput) {
     return this.customers.create(user, body);
   }
 
@@ -39,8 +37,7 @@ export class CustomersController {
 
   @Patch(':id')
   @Can('customers.edit')
-  @ApiZodBody(UpdateCustomerRequestSchema)
-  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateCustomerRequestSchema)) body: UpdateCustomerRequest) {
+  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(UpdateCustomerRequestSchema) body: UpdateCustomerRequest) {
     return this.customers.update(user, id, body);
   }
 }

@@ -1,11 +1,11 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Res } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Post, Res } from '@nestjs/common';
 import { EraseCustomerRequestSchema, type EraseCustomerRequest } from '@benchproof/contracts';
 import { ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { CustomerErasureService } from './customer-erasure.service';
 import { DataExportService } from './data-export.service';
 
@@ -41,8 +41,7 @@ export class DataExportController {
   @Post('customers/:id/erase')
   @HttpCode(200)
   @Can('customers.erase')
-  @ApiZodBody(EraseCustomerRequestSchema)
-  erase(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(EraseCustomerRequestSchema)) body: EraseCustomerRequest) {
+  erase(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(EraseCustomerRequestSchema) body: EraseCustomerRequest) {
     return this.erasure.erase(user, id, body.confirmCustomerId);
   }
 }

@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   CreateFindingRequestSchema,
@@ -11,7 +11,7 @@ import {
   type UpdateFindingRequest,
 } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { FindingsService } from './findings.service';
 
 @ApiTags('findings')
@@ -27,19 +27,17 @@ export class FindingsController {
 
   @Post('findings')
   @Can('findings.edit')
-  @ApiZodBody(CreateFindingRequestSchema)
-  create(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(CreateFindingRequestSchema)) body: CreateFindingRequest) {
+  create(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(CreateFindingRequestSchema) body: CreateFindingRequest) {
     return this.findings.create(user, id, body);
   }
 
   @Patch('findings/:findingId')
   @Can('findings.edit')
-  @ApiZodBody(UpdateFindingRequestSchema)
   update(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
     @Param('findingId', ParseIntPipe) findingId: number,
-    @Body(zod(UpdateFindingRequestSchema)) body: UpdateFindingRequest,
+    @ZodBody(UpdateFindingRequestSchema) body: UpdateFindingRequest,
   ) {
     return this.findings.update(user, id, findingId, body);
   }
@@ -54,12 +52,11 @@ export class FindingsController {
   /** Create or replace; prices at the shop's current rates. Desk may price too (it builds the estimate). */
   @Post('findings/:findingId/recommendation')
   @Can('findings.recommend')
-  @ApiZodBody(RecommendationRequestSchema)
   setRecommendation(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
     @Param('findingId', ParseIntPipe) findingId: number,
-    @Body(zod(RecommendationRequestSchema)) body: RecommendationRequest,
+    @ZodBody(RecommendationRequestSchema) body: RecommendationRequest,
   ) {
     return this.findings.setRecommendation(user, id, findingId, body);
   }
@@ -72,12 +69,11 @@ export class FindingsController {
 
   @Post('recommendations/:recId/decision')
   @Can('recommendations.decide')
-  @ApiZodBody(RecordDecisionRequestSchema)
   decide(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
     @Param('recId', ParseIntPipe) recId: number,
-    @Body(zod(RecordDecisionRequestSchema)) body: RecordDecisionRequest,
+    @ZodBody(RecordDecisionRequestSchema) body: RecordDecisionRequest,
   ) {
     return this.findings.recordDecision(user, id, recId, body);
   }

@@ -1,8 +1,8 @@
-import { Body, Controller, Get, Header, HttpCode, Post } from '@nestjs/common';
+import { Controller, Get, Header, HttpCode, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { ImportRequestSchema, type ImportRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { ImportsService } from './imports.service';
 
 @ApiTags('imports')
@@ -14,15 +14,13 @@ export class ImportsController {
   @Post('imports/customers/preview')
   @Can('customers.import')
   @HttpCode(200)
-  @ApiZodBody(ImportRequestSchema)
-  preview(@CurrentUser() user: AuthUser, @Body(zod(ImportRequestSchema)) body: ImportRequest) {
+  preview(@CurrentUser() user: AuthUser, @ZodBody(ImportRequestSchema) body: ImportRequest) {
     return this.imports.preview(user, body.csv, body.mapping);
   }
 
   @Post('imports/customers')
   @Can('customers.import')
-  @ApiZodBody(ImportRequestSchema)
-  commit(@CurrentUser() user: AuthUser, @Body(zod(ImportRequestSchema)) body: ImportRequest) {
+  commit(@CurrentUser() user: AuthUser, @ZodBody(ImportRequestSchema) body: ImportRequest) {
     return this.imports.commit(user, body.csv, body.mapping);
   }
 

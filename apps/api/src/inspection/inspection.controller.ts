@@ -1,8 +1,8 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { MeasurementInputSchema, UpdateCheckpointRequestSchema, type MeasurementInputDto, type UpdateCheckpointRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { BikeHistoryService } from './bike-history.service';
 import { InspectionService } from './inspection.service';
 
@@ -19,24 +19,22 @@ export class InspectionController {
 
   @Patch('checkpoints/:checkpointId')
   @Can('inspection.record')
-  @ApiZodBody(UpdateCheckpointRequestSchema)
   updateCheckpoint(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
     @Param('checkpointId', ParseIntPipe) checkpointId: number,
-    @Body(zod(UpdateCheckpointRequestSchema)) body: UpdateCheckpointRequest,
+    @ZodBody(UpdateCheckpointRequestSchema) body: UpdateCheckpointRequest,
   ) {
     return this.inspection.updateCheckpoint(user, id, checkpointId, body);
   }
 
   @Post('checkpoints/:checkpointId/measurements')
   @Can('inspection.record')
-  @ApiZodBody(MeasurementInputSchema)
   addMeasurement(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
     @Param('checkpointId', ParseIntPipe) checkpointId: number,
-    @Body(zod(MeasurementInputSchema)) body: MeasurementInputDto,
+    @ZodBody(MeasurementInputSchema) body: MeasurementInputDto,
   ) {
     return this.inspection.addMeasurement(user, id, checkpointId, body);
   }
@@ -45,8 +43,7 @@ export class InspectionController {
   @Post('measurements/preview')
   @Can('inspection.view')
   @HttpCode(200)
-  @ApiZodBody(MeasurementInputSchema)
-  preview(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(MeasurementInputSchema)) body: MeasurementInputDto) {
+  preview(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(MeasurementInputSchema) body: MeasurementInputDto) {
     return this.inspection.preview(user, id, body);
   }
 

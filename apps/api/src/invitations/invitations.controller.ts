@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
+import { Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   AcceptInvitationRequestSchema,
@@ -11,7 +11,7 @@ import {
 import type { Request, Response } from 'express';
 import { SessionResponder } from '../auth';
 import { Can, CurrentUser, Public, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { InvitationsService } from './invitations.service';
 
 @ApiTags('invitations')
@@ -31,8 +31,7 @@ export class InvitationsController {
 
   @Post()
   @Can('users.manage')
-  @ApiZodBody(InviteRequestSchema)
-  invite(@CurrentUser() user: AuthUser, @Body(zod(InviteRequestSchema)) body: InviteRequest) {
+  invite(@CurrentUser() user: AuthUser, @ZodBody(InviteRequestSchema) body: InviteRequest) {
     return this.invitations.invite(user, body);
   }
 
@@ -54,16 +53,14 @@ export class InvitationsController {
   @Post('preview')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(TokenRequestSchema)
-  preview(@Body(zod(TokenRequestSchema)) body: TokenRequest) {
+  preview(@ZodBody(TokenRequestSchema) body: TokenRequest) {
     return this.invitations.preview(body.token);
   }
 
   @Post('accept')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(AcceptInvitationRequestSchema)
-  async accept(@Body(zod(AcceptInvitationRequestSchema)) body: AcceptInvitationRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async accept(@ZodBody(AcceptInvitationRequestSchema) body: AcceptInvitationRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     return this.respond.outcome(await this.invitations.accept(body.token, body.password), req, res);
   }
 }

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Query } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   BookInRequestSchema,
@@ -13,7 +13,7 @@ import {
   type UpdateJobRequest,
 } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ZodBody, ZodQuery } from '../core/http';
 import { JobsService } from './jobs.service';
 
 @ApiTags('jobs')
@@ -23,16 +23,14 @@ export class JobsController {
 
   @Get()
   @Can('jobs.view')
-  @ApiZodQuery(JobListQuerySchema)
-  list(@CurrentUser() user: AuthUser, @Query(zod(JobListQuerySchema)) query: JobListQuery) {
+  list(@CurrentUser() user: AuthUser, @ZodQuery(JobListQuerySchema) query: JobListQuery) {
     return this.jobs.list(user, query);
   }
 
   /** Book-in: existing or new customer and bike, in one transaction. */
   @Post()
   @Can('jobs.book_in')
-  @ApiZodBody(BookInRequestSchema)
-  bookIn(@CurrentUser() user: AuthUser, @Body(zod(BookInRequestSchema)) body: BookInRequest) {
+  bookIn(@CurrentUser() user: AuthUser, @ZodBody(BookInRequestSchema) body: BookInRequest) {
     return this.jobs.bookIn(user, body);
   }
 
@@ -44,16 +42,14 @@ export class JobsController {
 
   @Patch(':id')
   @Can('jobs.edit')
-  @ApiZodBody(UpdateJobRequestSchema)
-  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateJobRequestSchema)) body: UpdateJobRequest) {
+  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(UpdateJobRequestSchema) body: UpdateJobRequest) {
     return this.jobs.update(user, id, body);
   }
 
   @Post(':id/transitions')
   @Can('jobs.transition')
   @HttpCode(200)
-  @ApiZodBody(TransitionRequestSchema)
-  transition(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(TransitionRequestSchema)) body: TransitionRequest) {
+  transition(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(TransitionRequestSchema) body: TransitionRequest) {
     return this.jobs.transition(user, id, body);
   }
 
@@ -66,8 +62,7 @@ export class JobsController {
   /** The final check belongs to the job's flow: ready needs a passed one. */
   @Post(':id/final-check')
   @Can('jobs.final_check')
-  @ApiZodBody(FinalCheckRequestSchema)
-  finalCheck(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(FinalCheckRequestSchema)) body: FinalCheckRequest) {
+  finalCheck(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(FinalCheckRequestSchema) body: FinalCheckRequest) {
     return this.jobs.recordFinalCheck(user, id, body);
   }
 }

@@ -36,6 +36,27 @@ describe('MediaFileCache', () => {
     expect(reads).toEqual(['a', 'b', 'c', 'b']);
   });
 
+  it('weighs entries by their bytes, not their number: one large file pushes out as many small ones as it needs', async () => {
+    const cache = new MediaFileCache(100, 80);
+    const reads: string[] = [];
+    const get = (key: string, size: number) =>
+      cache.get(key, 'h', size, () => {
+        reads.push(key);
+        return Promise.resolve(bytes(size, 0));
+      });
+    for (let i = 0; i < 20; i++) await get(`small${i}`, 5); // 20 × 5 = 100 bytes: all kept
+    expect(cache.heldBytes).toBe(100);
+    await get('large', 60); // needs 60 bytes: the 12 least recently used small files go, 8 stay
+    expect(cache.heldBytes).toBe(100);
+    reads.length = 0;
+    await get('small12', 5); // the oldest small file still held
+    await get('large', 60);
+    expect(reads).toEqual([]);
+    await get('small11', 5); // the newest of the twelve that went
+    expect(reads).toEqual(['small11']);
+    expect(cache.heldBytes).toBeLessThanOrEqual(100);
+  });
+
   it('does not keep a read whose size differs from the row (file changed under it), nor a forgotten key', async () => {
     const cache = new MediaFileCache(100, 50);
     const read = vi.fn(() => Promise.resolve(bytes(9, 1)));

@@ -1,3 +1,5 @@
+import { LRUCache } from 'lru-cache';
+
 /**
  * The bytes of recently served small files (thumb and screen derivatives), least recently
  * used first out, bounded in total bytes. An entry is named by storage key and SHA-256, so
@@ -5,14 +7,16 @@
  * It only saves disk work: every request is still authorised against the database first.
  */
 export class MediaFileCache {
-  private readonly entries = new Map<string, Buffer>();
+  /** lru-cache bounded by bytes: each entry weighs its length; null when the budget keeps nothing. */
+  private readonly entries: LRUCache<string, Buffer> | null;
   private readonly loading = new Map<string, Promise<Buffer>>();
-  private total = 0;
 
   constructor(
     private readonly maxBytes: number,
     private readonly maxEntryBytes: number,
-  ) {}
+  ) {
+    this.entries = maxBytes > 0 ? new LRUCache({ maxSize: maxBytes, maxEntrySize: maxEntryBytes, sizeCalculation: (data) => data.length }) : null;
+  }
 
   /** Whether a file of this size is kept at all (a cache of 0 bytes keeps nothing). */
   fits(bytes: number): boolean {
@@ -22,40 +26,25 @@ export class MediaFileCache {
   /** The cached bytes, or `read()`'s (kept when they have the expected size); one read per file at a time. */
   async get(key: string, sha256: string, bytes: number, read: () => Promise<Buffer>): Promise<Buffer> {
     const name = `${key}\n${sha256}`;
-    const hit = this.entries.get(name);
-    if (hit) {
-      // Map order is insertion order: moving the entry to the end marks it most recently used.
-      this.entries.delete(name);
-      this.entries.set(name, hit);
-      return hit;
-    }
+    const hit = this.entries?.get(name); // a hit becomes the most recently used
+    if (hit) return hit;
     const pending = this.loading.get(name);
     if (pending) return pending;
     const load = read().finally(() => this.loading.delete(name));
     this.loading.set(name, load);
     const data = await load;
-    if (data.length === bytes) this.add(name, data);
+    if (data.length === bytes && this.fits(bytes)) this.entries?.set(name, data);
     return data;
   }
 
   /** Drops every entry of a storage key (its file was deleted). */
   forget(key: string): void {
-    for (const [name, data] of this.entries) {
-      if (name.startsWith(`${key}\n`)) {
-        this.entries.delete(name);
-        this.total -= data.length;
-      }
-    }
+    if (!this.entries) return;
+    for (const name of [...this.entries.keys()]) if (name.startsWith(`${key}\n`)) this.entries.delete(name);
   }
 
-  private add(name: string, data: Buffer): void {
-    if (!this.fits(data.length) || this.entries.has(name)) return;
-    this.entries.set(name, data);
-    this.total += data.length;
-    for (const [oldest, old] of this.entries) {
-      if (this.total <= this.maxBytes) break;
-      this.entries.delete(oldest);
-      this.total -= old.length;
-    }
+  /** Bytes held now (for tests and the benchmark). */
+  get heldBytes(): number {
+    return this.entries?.calculatedSize ?? 0;
   }
 }

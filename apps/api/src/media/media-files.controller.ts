@@ -1,9 +1,9 @@
 import { Controller, Get, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
-import { ApiParam, ApiTags } from '@nestjs/swagger';
-import { MEDIA_VARIANTS, MediaVariantSchema, type MediaVariant } from '@benchproof/contracts';
+import { ApiTags } from '@nestjs/swagger';
+import { MediaVariantSchema, type MediaVariant } from '@benchproof/contracts';
 import type { Request, Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { sendFile, zod } from '../core/http';
+import { sendFile, ZodParam } from '../core/http';
 import { MediaFilesService } from './media-files.service';
 import { MediaService } from './media.service';
 
@@ -24,11 +24,10 @@ export class MediaFilesController {
 
   @Get(':id/:variant')
   @Can('media.view')
-  @ApiParam({ name: 'variant', enum: MEDIA_VARIANTS })
   async variant(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
-    @Param('variant', zod(MediaVariantSchema)) variant: MediaVariant,
+    @ZodParam('variant', MediaVariantSchema) variant: MediaVariant,
     @Req() req: Request,
     @Res() res: Response,
   ) {

@@ -2,6 +2,7 @@ import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnModuleI
 import { SchedulerRegistry } from '@nestjs/schedule';
 import { APP_CONFIG, type AppConfig } from '../config';
 import { CLOCK, type Clock } from '../core/clock';
+import { TICK_GATE, type TickGate } from '../core/schedule';
 import { removeLeftovers, STORAGE, type Storage, UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { TASK_RUNNER, type TaskRunner } from '../infra/tasks';
 import { MediaTusService } from './media-tus.service';
@@ -33,6 +34,7 @@ export class MediaSweepService implements OnModuleInit, OnApplicationBootstrap {
     private readonly schedule: SchedulerRegistry,
     private readonly repo: MediaRepository,
     @Inject(STORAGE) private readonly storage: Storage,
+    @Inject(TICK_GATE) private readonly gate: TickGate,
   ) {}
 
   /**
@@ -44,11 +46,25 @@ export class MediaSweepService implements OnModuleInit, OnApplicationBootstrap {
     if (removed.length > 0) this.logger.log(`Removed ${removed.length} leftover file(s) at boot`);
   }
 
-  /** Expires old tus uploads once the tus server is up (before the app answers), then every STORAGE_SWEEP_MINUTES. */
+  /**
+   * Expires old tus uploads once the tus server is up (before the app answers), then every STORAGE_SWEEP_MINUTES;
+   * with several processes only the one that wins the tick (TICK_GATE) sweeps, so siblings starting together sweep once.
+   */
   async onApplicationBootstrap(): Promise<void> {
-    await this.sweep();
-    const timer = setInterval(() => void this.sweep(), this.cfg.STORAGE_SWEEP_MINUTES * 60_000);
+    await this.tick();
+    const timer = setInterval(() => void this.tick(), this.periodMs());
     this.schedule.addInterval('storage-sweep', timer);
+  }
+
+  /** A scheduled sweep: this process's, or skipped when another process has this period's. */
+  async tick(): Promise<boolean> {
+    if (!(await this.gate.claim('storage-sweep', this.periodMs()))) return false;
+    await this.sweep();
+    return true;
+  }
+
+  private periodMs(): number {
+    return this.cfg.STORAGE_SWEEP_MINUTES * 60_000;
   }
 
   /** One sweep now, or the one already running (the interval's tick; tests call it too). */

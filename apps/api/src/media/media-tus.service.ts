@@ -8,7 +8,9 @@ import { join } from 'node:path';
 import { NodeRequest, sendNodeResponse } from 'srvx/node';
 import { APP_CONFIG, type AppConfig } from '../config';
 import type { AuthUser } from '../core/auth';
+import { LIVE_UPDATES, type LiveUpdates } from '../core/events';
 import { DomainError, domainErrorOf, notFound } from '../core/http';
+import { type MaybeRedis, REDIS, RedisTusLocker } from '../infra/redis';
 import { UPLOAD_TEMP, type UploadTemp } from '../infra/storage';
 import { MediaIntakeService } from './media-intake.service';
 import { withJsonError } from './media-tus.errors';
@@ -68,6 +70,8 @@ export class MediaTusService implements OnModuleInit {
     private readonly media: MediaService,
     @Inject(APP_CONFIG) private readonly cfg: AppConfig,
     @Inject(UPLOAD_TEMP) private readonly temp: UploadTemp,
+    @Inject(REDIS) private readonly redis: MaybeRedis,
+    @Inject(LIVE_UPDATES) private readonly live: LiveUpdates,
   ) {}
 
   onModuleInit(): void {
@@ -76,6 +80,8 @@ export class MediaTusService implements OnModuleInit {
     this.server = new Server({
       path: TUS_PATH,
       datastore: this.store,
+      // Several API processes (REDIS_URL): an upload's lock is held in Redis, else tus's in-memory locker.
+      ...(this.redis ? { locker: new RedisTusLocker(this.redis, this.live) } : {}),
       relativeLocation: true,
       respectForwardedHeaders: false,
       // The web app is served from this origin; no other site may drive uploads from a browser.

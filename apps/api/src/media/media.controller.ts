@@ -9,19 +9,19 @@ import {
   Patch,
   Post,
   Put,
-  Query,
   Res,
   UploadedFile,
   UploadedFiles,
   UseInterceptors,
 } from '@nestjs/common';
 import { FileInterceptor, FilesInterceptor } from '@nestjs/platform-express';
-import { ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import {
   FindingMediaRequestSchema,
   MediaListQuerySchema,
   RetagOneRequestSchema,
   RetagRequestSchema,
+  UploadMetaSchema,
   type FindingMediaRequest,
   type MediaListQuery,
   type RetagOneRequest,
@@ -29,10 +29,10 @@ import {
 } from '@benchproof/contracts';
 import type { Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ApiZodForm, ZodBody, ZodQuery } from '../core/http';
 import { MediaUploadService } from './media-upload.service';
 import { MediaService } from './media.service';
-import { MAX_FILES_PER_BATCH, toIncoming, UPLOAD_FORM } from './upload-form';
+import { MAX_FILES_PER_BATCH, toIncoming } from './upload-form';
 
 @ApiTags('media')
 @Controller()
@@ -46,8 +46,7 @@ export class MediaController {
   @Post('jobs/:jobId/media')
   @Can('media.upload')
   @UseInterceptors(FilesInterceptor('files', MAX_FILES_PER_BATCH))
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: UPLOAD_FORM })
+  @ApiZodForm({ field: 'files', many: true }, UploadMetaSchema)
   async upload(
     @CurrentUser() user: AuthUser,
     @Param('jobId') jobId: string,
@@ -62,15 +61,13 @@ export class MediaController {
 
   @Get('jobs/:jobId/media')
   @Can('media.view')
-  @ApiZodQuery(MediaListQuerySchema)
-  list(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Query(zod(MediaListQuerySchema)) q: MediaListQuery) {
+  list(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodQuery(MediaListQuerySchema) q: MediaListQuery) {
     return this.media.list(user, jobId, q);
   }
 
   @Patch('jobs/:jobId/media')
   @Can('media.edit')
-  @ApiZodBody(RetagRequestSchema)
-  retag(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(RetagRequestSchema)) body: RetagRequest) {
+  retag(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodBody(RetagRequestSchema) body: RetagRequest) {
     return this.media.retag(user, jobId, body);
   }
 
@@ -82,12 +79,11 @@ export class MediaController {
 
   @Patch('jobs/:jobId/media/:id')
   @Can('media.edit')
-  @ApiZodBody(RetagOneRequestSchema)
   retagOne(
     @CurrentUser() user: AuthUser,
     @Param('jobId', ParseIntPipe) jobId: number,
     @Param('id', ParseIntPipe) id: number,
-    @Body(zod(RetagOneRequestSchema)) body: RetagOneRequest,
+    @ZodBody(RetagOneRequestSchema) body: RetagOneRequest,
   ) {
     return this.media.retagOne(user, jobId, id, body);
   }
@@ -103,8 +99,7 @@ export class MediaController {
   @Put('jobs/:jobId/media/:id/poster')
   @Can('media.upload')
   @UseInterceptors(FileInterceptor('file'))
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } })
+  @ApiZodForm({ field: 'file' })
   poster(@CurrentUser() user: AuthUser, @Param('jobId') jobId: string, @Param('id') id: string, @UploadedFile() file: Express.Multer.File | undefined) {
     return this.uploads.setPoster(user, jobId, id, file && toIncoming(file));
   }
@@ -117,12 +112,11 @@ export class MediaController {
 
   @Put('jobs/:jobId/findings/:findingId/media')
   @Can('media.edit')
-  @ApiZodBody(FindingMediaRequestSchema)
   linkFindingMedia(
     @CurrentUser() user: AuthUser,
     @Param('jobId', ParseIntPipe) jobId: number,
     @Param('findingId', ParseIntPipe) findingId: number,
-    @Body(zod(FindingMediaRequestSchema)) body: FindingMediaRequest,
+    @ZodBody(FindingMediaRequestSchema) body: FindingMediaRequest,
   ) {
     return this.media.linkToFinding(user, jobId, findingId, body.assetIds);
   }

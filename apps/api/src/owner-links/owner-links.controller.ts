@@ -1,10 +1,10 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Sse } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Post, Sse } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { CreateOwnerLinkRequestSchema, type AuditEvent, type CreateOwnerLinkRequest } from '@benchproof/contracts';
 import { interval, map, merge, type Observable } from 'rxjs';
 import { AuditService } from '../audit';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { JobAccess } from '../jobs';
 import { OwnerLiveEvents } from './owner-events';
 import { OwnerLinksService } from './owner-links.service';
@@ -31,8 +31,7 @@ export class OwnerLinksController {
 
   @Post('owner-links')
   @Can('owner_links.manage')
-  @ApiZodBody(CreateOwnerLinkRequestSchema)
-  create(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(CreateOwnerLinkRequestSchema)) body: CreateOwnerLinkRequest) {
+  create(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodBody(CreateOwnerLinkRequestSchema) body: CreateOwnerLinkRequest) {
     return this.links.create(user, jobId, body);
   }
 

@@ -1,11 +1,11 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
-import { ApiParam, ApiTags } from '@nestjs/swagger';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
 import { Throttle } from '@nestjs/throttler';
 import { OwnerConsentRequestSchema, OwnerDecisionsRequestSchema, type OwnerConsentRequest, type OwnerDecisionsRequest } from '@benchproof/contracts';
 import type { Request, Response } from 'express';
 import { z } from 'zod';
 import { Can } from '../core/auth';
-import { ApiZodBody, DomainError, sendFile, zod } from '../core/http';
+import { DomainError, sendFile, ZodBody, ZodParam } from '../core/http';
 import { OwnerLinksService } from '../owner-links';
 import { CurrentOwner, type LinkOwner, OwnerRoute } from './owner-link.guard';
 import { OwnerMediaService } from './owner-media.service';
@@ -40,8 +40,7 @@ export class OwnerController {
   @Post('decisions')
   @HttpCode(200)
   @Can('owner.decide')
-  @ApiZodBody(OwnerDecisionsRequestSchema)
-  decide(@CurrentOwner() owner: LinkOwner, @Param('token') token: string, @Body(zod(OwnerDecisionsRequestSchema)) body: OwnerDecisionsRequest) {
+  decide(@CurrentOwner() owner: LinkOwner, @Param('token') token: string, @ZodBody(OwnerDecisionsRequestSchema) body: OwnerDecisionsRequest) {
     this.page.decide(owner, body);
     return this.page.page(owner, token);
   }
@@ -49,8 +48,7 @@ export class OwnerController {
   @Post('consent')
   @HttpCode(200)
   @Can('owner.consent')
-  @ApiZodBody(OwnerConsentRequestSchema)
-  consent(@CurrentOwner() owner: LinkOwner, @Body(zod(OwnerConsentRequestSchema)) body: OwnerConsentRequest) {
+  consent(@CurrentOwner() owner: LinkOwner, @ZodBody(OwnerConsentRequestSchema) body: OwnerConsentRequest) {
     return this.page.setConsent(owner, body);
   }
 
@@ -58,11 +56,10 @@ export class OwnerController {
   @Get('media/:mediaId/:variant')
   @Can('owner.view')
   @Throttle({ default: { limit: 1200, ttl: 60_000 } })
-  @ApiParam({ name: 'variant', enum: OwnerVariantSchema.options })
   async media(
     @CurrentOwner() owner: LinkOwner,
     @Param('mediaId', ParseIntPipe) mediaId: number,
-    @Param('variant', zod(OwnerVariantSchema)) variant: 'thumb' | 'screen',
+    @ZodParam('variant', OwnerVariantSchema) variant: 'thumb' | 'screen',
     @Req() req: Request,
     @Res() res: Response,
   ) {

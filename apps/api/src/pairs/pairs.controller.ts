@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Put } from '@nestjs/common';
+import { Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import {
   CreatePairRequestSchema,
@@ -9,7 +9,7 @@ import {
   type UpdatePairRequest,
 } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { PairsService } from './pairs.service';
 
 @ApiTags('pairs')
@@ -31,26 +31,23 @@ export class PairsController {
 
   @Post('pairs')
   @Can('pairs.edit')
-  @ApiZodBody(CreatePairRequestSchema)
-  create(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(CreatePairRequestSchema)) body: CreatePairRequest) {
+  create(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(CreatePairRequestSchema) body: CreatePairRequest) {
     return this.pairs.create(user, id, body);
   }
 
   @Put('pairs/order')
   @Can('pairs.edit')
-  @ApiZodBody(ReorderPairsRequestSchema)
-  reorder(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(ReorderPairsRequestSchema)) body: ReorderPairsRequest) {
+  reorder(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(ReorderPairsRequestSchema) body: ReorderPairsRequest) {
     return this.pairs.reorder(user, id, body);
   }
 
   @Patch('pairs/:pairId')
   @Can('pairs.edit')
-  @ApiZodBody(UpdatePairRequestSchema)
   update(
     @CurrentUser() user: AuthUser,
     @Param('id', ParseIntPipe) id: number,
     @Param('pairId', ParseIntPipe) pairId: number,
-    @Body(zod(UpdatePairRequestSchema)) body: UpdatePairRequest,
+    @ZodBody(UpdatePairRequestSchema) body: UpdatePairRequest,
   ) {
     return this.pairs.update(user, id, pairId, body);
   }

@@ -1,10 +1,10 @@
-import { Body, Controller, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
+import { Controller, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { ForgotPasswordRequestSchema, ResetPasswordRequestSchema, type ForgotPasswordRequest, type ResetPasswordRequest } from '@benchproof/contracts';
 import type { Request, Response } from 'express';
 import { clientAddress, SessionResponder } from '../auth';
 import { Can, CurrentUser, Public, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { PasswordResetsService } from './password-resets.service';
 
 /** The same words whether or not the address has an account. */
@@ -21,8 +21,7 @@ export class PasswordResetsController {
   @Post('password-resets')
   @Public()
   @HttpCode(202)
-  @ApiZodBody(ForgotPasswordRequestSchema)
-  async request(@Body(zod(ForgotPasswordRequestSchema)) body: ForgotPasswordRequest, @Req() req: Request) {
+  async request(@ZodBody(ForgotPasswordRequestSchema) body: ForgotPasswordRequest, @Req() req: Request) {
     await this.resets.request(body.email, clientAddress(req));
     return SENT;
   }
@@ -30,8 +29,7 @@ export class PasswordResetsController {
   @Post('password-resets/use')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(ResetPasswordRequestSchema)
-  async use(@Body(zod(ResetPasswordRequestSchema)) body: ResetPasswordRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async use(@ZodBody(ResetPasswordRequestSchema) body: ResetPasswordRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     return this.respond.outcome(await this.resets.use(body.token, body.password), req, res);
   }
 

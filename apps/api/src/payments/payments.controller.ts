@@ -1,8 +1,8 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { RecordPaymentRequestSchema, RefundRequestSchema, type RecordPaymentRequest, type RefundRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { PaymentsService } from './payments.service';
 
 @ApiTags('payments')
@@ -21,20 +21,18 @@ export class PaymentsController {
   @Post()
   @HttpCode(201)
   @Can('payments.record')
-  @ApiZodBody(RecordPaymentRequestSchema)
-  record(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(RecordPaymentRequestSchema)) body: RecordPaymentRequest) {
+  record(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodBody(RecordPaymentRequestSchema) body: RecordPaymentRequest) {
     return this.payments.recordInShop(user, jobId, body);
   }
 
   @Post(':paymentId/refunds')
   @HttpCode(201)
   @Can('payments.refund')
-  @ApiZodBody(RefundRequestSchema)
   refund(
     @CurrentUser() user: AuthUser,
     @Param('jobId', ParseIntPipe) jobId: number,
     @Param('paymentId', ParseIntPipe) paymentId: number,
-    @Body(zod(RefundRequestSchema)) body: RefundRequest,
+    @ZodBody(RefundRequestSchema) body: RefundRequest,
   ) {
     return this.payments.refund(user, jobId, paymentId, body);
   }

@@ -1,8 +1,9 @@
 import { Controller, Delete, Get, Post, Res, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
+import { ApiZodForm } from '../core/http';
 import { BrandingService } from './branding.service';
 
 /** The shop's report logo (manager settings); lives with reports because it goes through the media intake. */
@@ -14,8 +15,7 @@ export class BrandingController {
   @Post()
   @Can('shop.edit')
   @UseInterceptors(FileInterceptor('file'))
-  @ApiConsumes('multipart/form-data')
-  @ApiBody({ schema: { type: 'object', properties: { file: { type: 'string', format: 'binary' } }, required: ['file'] } })
+  @ApiZodForm({ field: 'file' })
   upload(@CurrentUser() user: AuthUser, @UploadedFile() file: Express.Multer.File | undefined) {
     return this.branding.setLogo(user, file && { path: file.path, originalName: file.originalname, size: file.size });
   }

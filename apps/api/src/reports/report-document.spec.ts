@@ -115,7 +115,7 @@ describe('ReportDocument (react-pdf, read back with poppler)', { timeout: 60_000
     // Page count read by a PDF library (pdfjs-dist); the adapter's own count (stored as reports.page_count) must agree.
     const readBack = (await pdfPages(out)).length;
     expect(pages.length).toBe(readBack);
-    expect(pdf.pageCount(out)).toBe(readBack);
+    expect(await pdf.pageCount(out)).toBe(readBack);
     pages.forEach((text, i) => {
       expect(text).toContain('J-2026-0777');
       expect(text).toContain(`Page ${i + 1} of ${pages.length}`);

@@ -1,4 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
+import pMap from 'p-map';
 import { createElement } from 'react';
 import { Readable } from 'node:stream';
 import { buffer } from 'node:stream/consumers';
@@ -56,7 +57,7 @@ export class ReportRenderService {
         storageKey: stored.key,
         sha256: stored.sha256,
         byteSize: stored.bytes,
-        pageCount: this.pdf.pageCount(pdf),
+        pageCount: await this.pdf.pageCount(pdf),
         renderedAt: this.clock.now(),
       });
       task.progress(1);
@@ -88,19 +89,17 @@ export class ReportRenderService {
    * lookups took about as long as a fifth of the layout, mostly waiting on the disk.
    */
   private async loadShots(shopId: number, ids: number[], progress: (f: number) => void): Promise<Map<number, ReportImage>> {
-    const images = new Map<number, ReportImage>();
-    let next = 0;
     let done = 0;
-    const worker = async () => {
-      while (next < ids.length) {
-        const id = ids[next++];
+    const read = await pMap(
+      ids,
+      async (id) => {
         const img = await this.shots.printJpeg(shopId, id);
-        if (img) images.set(id, img);
         progress(0.05 + (0.6 * ++done) / ids.length);
-      }
-    };
-    await Promise.all(Array.from({ length: Math.min(SHOT_READS_AT_ONCE, ids.length) }, worker));
-    return images;
+        return [id, img] as const;
+      },
+      { concurrency: SHOT_READS_AT_ONCE },
+    );
+    return new Map(read.filter((entry): entry is readonly [number, ReportImage] => entry[1] !== null));
   }
 
   private stamp(row: ReportRow): IssueStamp | null {

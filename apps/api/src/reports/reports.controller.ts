@@ -1,9 +1,9 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query, Req, Res } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { IssueReportRequestSchema, SendReportRequestSchema, type IssueReportRequest, type SendReportRequest } from '@benchproof/contracts';
 import type { Request, Response } from 'express';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, notFound, sendFile, zod } from '../core/http';
+import { notFound, sendFile, ZodBody } from '../core/http';
 import { ReportsService } from './reports.service';
 
 /** A job's bench report: drafts to preview, issued versions to keep and send. */
@@ -29,8 +29,7 @@ export class ReportsController {
   @Post('issue')
   @Can('reports.issue')
   @HttpCode(202)
-  @ApiZodBody(IssueReportRequestSchema)
-  issue(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @Body(zod(IssueReportRequestSchema)) body: IssueReportRequest) {
+  issue(@CurrentUser() user: AuthUser, @Param('jobId', ParseIntPipe) jobId: number, @ZodBody(IssueReportRequestSchema) body: IssueReportRequest) {
     return this.reports.issue(user, jobId, body.draftId);
   }
 
@@ -38,12 +37,11 @@ export class ReportsController {
   @Post(':reportId/send')
   @HttpCode(202)
   @Can('reports.issue')
-  @ApiZodBody(SendReportRequestSchema)
   send(
     @CurrentUser() user: AuthUser,
     @Param('jobId', ParseIntPipe) jobId: number,
     @Param('reportId', ParseIntPipe) reportId: number,
-    @Body(zod(SendReportRequestSchema)) body: SendReportRequest,
+    @ZodBody(SendReportRequestSchema) body: SendReportRequest,
   ) {
     return this.reports.sendToOwner(user, jobId, reportId, body);
   }

@@ -1,9 +1,9 @@
-import { Controller, Get, Param, UseGuards } from '@nestjs/common';
+import { Controller, Get, UseGuards } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { Throttle, ThrottlerGuard } from '@nestjs/throttler';
 import { VerifyHashSchema } from '@benchproof/contracts';
 import { Public } from '../core/auth';
-import { zod } from '../core/http';
+import { ZodParam } from '../core/http';
 import { ReportsService } from './reports.service';
 
 /** Per client IP and minute: enough for a warranty desk checking a pile, too few to walk the hash space. */
@@ -19,7 +19,7 @@ export class VerifyController {
   @Public()
   @UseGuards(ThrottlerGuard)
   @Throttle({ default: { limit: VERIFY_LIMIT_PER_MINUTE, ttl: 60_000 } })
-  verify(@Param('hash', zod(VerifyHashSchema)) hash: string) {
+  verify(@ZodParam('hash', VerifyHashSchema) hash: string) {
     return this.reports.verify(hash);
   }
 }

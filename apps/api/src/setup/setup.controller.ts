@@ -1,10 +1,10 @@
-import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { SetupRequestSchema, SignupRequestSchema, TokenRequestSchema, type SetupRequest, type SignupRequest, type TokenRequest } from '@benchproof/contracts';
 import type { Request, Response } from 'express';
 import { SessionResponder } from '../auth';
 import { Public } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { SetupThrottleGuard } from './setup-throttle.guard';
 import { SetupService } from './setup.service';
 
@@ -27,8 +27,7 @@ export class SetupController {
   @Public()
   @UseGuards(SetupThrottleGuard)
   @HttpCode(201)
-  @ApiZodBody(SetupRequestSchema)
-  async setUp(@Body(zod(SetupRequestSchema)) body: SetupRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async setUp(@ZodBody(SetupRequestSchema) body: SetupRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     return this.respond.outcome(await this.setup.setUp(body), req, res);
   }
 
@@ -36,8 +35,7 @@ export class SetupController {
   @Public()
   @UseGuards(SetupThrottleGuard)
   @HttpCode(202)
-  @ApiZodBody(SignupRequestSchema)
-  async signUp(@Body(zod(SignupRequestSchema)) body: SignupRequest) {
+  async signUp(@ZodBody(SignupRequestSchema) body: SignupRequest) {
     await this.setup.signUp(body);
     return { message: 'Check your e-mail: we sent a link to confirm the address and open your workshop.' };
   }
@@ -45,8 +43,7 @@ export class SetupController {
   @Post('signup/confirm')
   @Public()
   @HttpCode(200)
-  @ApiZodBody(TokenRequestSchema)
-  async confirm(@Body(zod(TokenRequestSchema)) body: TokenRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
+  async confirm(@ZodBody(TokenRequestSchema) body: TokenRequest, @Req() req: Request, @Res({ passthrough: true }) res: Response) {
     return this.respond.outcome(await this.setup.confirm(body.token), req, res);
   }
 }

@@ -1,8 +1,8 @@
-import { Body, Controller, Get, Patch } from '@nestjs/common';
+import { Controller, Get, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { UpdateShopSettingsRequestSchema, type UpdateShopSettingsRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { ShopsService } from './shops.service';
 
 @ApiTags('shop')
@@ -18,8 +18,7 @@ export class ShopsController {
 
   @Patch('settings')
   @Can('shop.edit')
-  @ApiZodBody(UpdateShopSettingsRequestSchema)
-  update(@CurrentUser() user: AuthUser, @Body(zod(UpdateShopSettingsRequestSchema)) body: UpdateShopSettingsRequest) {
+  update(@CurrentUser() user: AuthUser, @ZodBody(UpdateShopSettingsRequestSchema) body: UpdateShopSettingsRequest) {
     return this.shops.update(user, body);
   }
 }

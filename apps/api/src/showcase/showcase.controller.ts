@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Query, Res } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, ParseIntPipe, Patch, Post, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import {
@@ -12,7 +12,7 @@ import {
   type UpdateShowcaseItemRequest,
 } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, ApiZodQuery, zod } from '../core/http';
+import { ZodBody, ZodQuery } from '../core/http';
 import { ShowcaseExportTasks } from './showcase-export-tasks.service';
 import { ShowcaseExportService } from './showcase-export.service';
 import { ShowcaseService } from './showcase.service';
@@ -28,18 +28,16 @@ export class ShowcaseController {
 
   @Get('items')
   @Can('showcase.view')
-  @ApiZodQuery(ShowcaseQuerySchema)
-  list(@CurrentUser() user: AuthUser, @Query(zod(ShowcaseQuerySchema)) q: ShowcaseQuery) {
+  list(@CurrentUser() user: AuthUser, @ZodQuery(ShowcaseQuerySchema) q: ShowcaseQuery) {
     return this.showcase.list(user, q);
   }
 
   @Patch('items/:pairId')
   @Can('showcase.manage')
-  @ApiZodBody(UpdateShowcaseItemRequestSchema)
   update(
     @CurrentUser() user: AuthUser,
     @Param('pairId', ParseIntPipe) pairId: number,
-    @Body(zod(UpdateShowcaseItemRequestSchema)) body: UpdateShowcaseItemRequest,
+    @ZodBody(UpdateShowcaseItemRequestSchema) body: UpdateShowcaseItemRequest,
   ) {
     return this.showcase.update(user, pairId, body);
   }
@@ -53,11 +51,10 @@ export class ShowcaseController {
   /** One image made on request (small): a composed pair or one shot, at a named size. */
   @Get('items/:pairId/export')
   @Can('showcase.view')
-  @ApiZodQuery(ShowcaseExportQuerySchema)
   async file(
     @CurrentUser() user: AuthUser,
     @Param('pairId', ParseIntPipe) pairId: number,
-    @Query(zod(ShowcaseExportQuerySchema)) q: ShowcaseExportQuery,
+    @ZodQuery(ShowcaseExportQuerySchema) q: ShowcaseExportQuery,
     @Res() res: Response,
   ) {
     const f = await this.exports.file(user, pairId, q);
@@ -68,8 +65,7 @@ export class ShowcaseController {
   @Post('zip')
   @HttpCode(200)
   @Can('showcase.view')
-  @ApiZodBody(ShowcaseZipRequestSchema)
-  async zip(@CurrentUser() user: AuthUser, @Body(zod(ShowcaseZipRequestSchema)) body: ShowcaseZipRequest, @Res() res: Response) {
+  async zip(@CurrentUser() user: AuthUser, @ZodBody(ShowcaseZipRequestSchema) body: ShowcaseZipRequest, @Res() res: Response) {
     for (const item of body.items) this.showcase.clear(user, item.pairId);
     res.set({ 'Content-Type': 'application/zip', 'Content-Disposition': 'attachment; filename="showcase.zip"', 'Cache-Control': 'no-store' });
     await this.exports.streamZip(user, body, res).catch(() => undefined);
@@ -78,8 +74,7 @@ export class ShowcaseController {
   /** A large selection as a background task with progress. */
   @Post('exports')
   @Can('showcase.view')
-  @ApiZodBody(ShowcaseZipRequestSchema)
-  start(@CurrentUser() user: AuthUser, @Body(zod(ShowcaseZipRequestSchema)) body: ShowcaseZipRequest) {
+  start(@CurrentUser() user: AuthUser, @ZodBody(ShowcaseZipRequestSchema) body: ShowcaseZipRequest) {
     return this.tasks.start(user, body);
   }
 

@@ -1,9 +1,9 @@
-import { Body, Controller, Get, HttpCode, Post, Put } from '@nestjs/common';
+import { Controller, Get, HttpCode, Post, Put } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { ConfirmTotpRequestSchema, RequireTwoFactorRequestSchema, type ConfirmTotpRequest, type RequireTwoFactorRequest } from '@benchproof/contracts';
 import { z } from 'zod';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { TwoFactorService } from './two-factor.service';
 
 const DisableRequestSchema = z.object({ password: z.string().min(1, 'Required').max(200) });
@@ -30,23 +30,20 @@ export class TwoFactorController {
   @Post('account/two-factor/confirm')
   @Can('account.two_factor')
   @HttpCode(200)
-  @ApiZodBody(ConfirmTotpRequestSchema)
-  confirm(@CurrentUser() user: AuthUser, @Body(zod(ConfirmTotpRequestSchema)) body: ConfirmTotpRequest) {
+  confirm(@CurrentUser() user: AuthUser, @ZodBody(ConfirmTotpRequestSchema) body: ConfirmTotpRequest) {
     return this.twoFactor.confirm(user, body.code);
   }
 
   @Post('account/two-factor/disable')
   @Can('account.two_factor')
   @HttpCode(204)
-  @ApiZodBody(DisableRequestSchema)
-  async disable(@CurrentUser() user: AuthUser, @Body(zod(DisableRequestSchema)) body: { password: string }): Promise<void> {
+  async disable(@CurrentUser() user: AuthUser, @ZodBody(DisableRequestSchema) body: { password: string }): Promise<void> {
     await this.twoFactor.disable(user, body.password);
   }
 
   @Put('shop/two-factor')
   @Can('shop.edit')
-  @ApiZodBody(RequireTwoFactorRequestSchema)
-  require(@CurrentUser() user: AuthUser, @Body(zod(RequireTwoFactorRequestSchema)) body: RequireTwoFactorRequest) {
+  require(@CurrentUser() user: AuthUser, @ZodBody(RequireTwoFactorRequestSchema) body: RequireTwoFactorRequest) {
     return this.twoFactor.setRequired(user, body.required);
   }
 }

@@ -1,8 +1,8 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Patch } from '@nestjs/common';
+import { Controller, Get, Param, ParseIntPipe, Patch } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { UpdateUserRequestSchema, type UpdateUserRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { UsersService } from './users.service';
 
 @ApiTags('users')
@@ -19,8 +19,7 @@ export class UsersController {
 
   @Patch(':id')
   @Can('users.manage')
-  @ApiZodBody(UpdateUserRequestSchema)
-  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(UpdateUserRequestSchema)) body: UpdateUserRequest) {
+  update(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(UpdateUserRequestSchema) body: UpdateUserRequest) {
     return this.users.update(user, id, body);
   }
 }

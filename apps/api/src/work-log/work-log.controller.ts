@@ -1,8 +1,8 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import { TorqueEntryRequestSchema, WorkEntryRequestSchema, type TorqueEntryRequest, type WorkEntryRequest } from '@benchproof/contracts';
 import { Can, CurrentUser, type AuthUser } from '../core/auth';
-import { ApiZodBody, zod } from '../core/http';
+import { ZodBody } from '../core/http';
 import { WorkLogService } from './work-log.service';
 
 @ApiTags('work-log')
@@ -18,8 +18,7 @@ export class WorkLogController {
 
   @Post('work-entries')
   @Can('work_log.record')
-  @ApiZodBody(WorkEntryRequestSchema)
-  addWork(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(WorkEntryRequestSchema)) body: WorkEntryRequest) {
+  addWork(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(WorkEntryRequestSchema) body: WorkEntryRequest) {
     return this.log.addWork(user, id, body);
   }
 
@@ -38,8 +37,7 @@ export class WorkLogController {
 
   @Post('torque-entries')
   @Can('work_log.record')
-  @ApiZodBody(TorqueEntryRequestSchema)
-  addTorque(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @Body(zod(TorqueEntryRequestSchema)) body: TorqueEntryRequest) {
+  addTorque(@CurrentUser() user: AuthUser, @Param('id', ParseIntPipe) id: number, @ZodBody(TorqueEntryRequestSchema) body: TorqueEntryRequest) {
     return this.log.addTorque(user, id, body);
   }
 }

@@ -14,6 +14,7 @@ interface ReportBody {
   fingerprint: string | null;
   pageSize: string;
   byteSize: number;
+  pageCount: number | null;
   urls: { pdf: string };
 }
 
@@ -52,6 +53,10 @@ describe('bench report: draft, issue, read back', () => {
     if (process.env.REPORT_PDF_OUT) writeFileSync(process.env.REPORT_PDF_OUT, pdf);
     expect(sha256(pdf)).toBe(issued.sha256);
     expect(pdf.length).toBe(issued.byteSize);
+    // The stored page count (pdf-lib, at render) agrees with Mozilla's reader on the served file.
+    const readBack = (await pdfPages(pdf)).length;
+    expect(readBack).toBeGreaterThan(1);
+    expect(issued.pageCount).toBe(readBack);
   });
 
   it('shows job number, owner (ő, ł, ş), each finding, totals and the safety cautions', async () => {

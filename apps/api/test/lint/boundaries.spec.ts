@@ -75,4 +75,22 @@ describe('import boundaries hold on resolved paths (STYLE.md dependency rules)',
     const all = await lintProbe(file, 'declare const q: any;\nexport const row = q.insert(1).values(2).returning().all()[0];\n', 'no-restricted-syntax');
     expect(all).toEqual([]);
   });
+
+  it('refuses a zod pipe handed to @Body/@Query/@Param: a route names its input schema once, with @ZodBody/@ZodQuery/@ZodParam', async () => {
+    const file = 'apps/api/src/findings/probe.ts';
+    const head =
+      "import { Body } from '@nestjs/common';\nimport { ZodBody, ZodPipe } from '../core/http';\nimport { z } from 'zod';\nconst S = z.object({});\n";
+    const twice = await lintProbe(
+      file,
+      `${head}export class C {\n  a(@Body(new ZodPipe(S)) b: unknown) {\n    return [b, ZodBody];\n  }\n}\n`,
+      'no-restricted-syntax',
+    );
+    expect(twice).toEqual([expect.stringMatching(/@ZodBody\(Schema\)/)]);
+    const once = await lintProbe(
+      file,
+      `${head}export class C {\n  a(@ZodBody(S) b: unknown) {\n    return [b, Body, ZodPipe];\n  }\n}\n`,
+      'no-restricted-syntax',
+    );
+    expect(once).toEqual([]);
+  });
 });

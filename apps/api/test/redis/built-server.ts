@@ -2,7 +2,7 @@ import { type ChildProcess, spawn } from 'node:child_process';
 import { join, resolve } from 'node:path';
 import { REPO_ROOT } from '../../src/config';
 import { freePort } from '../support/redis-server';
-import { sleep, until } from './redis-suite';
+import { freshPrefix, REDIS_URL, sleep, until } from './redis-suite';
 
 /** The built API entry (npm run build). */
 export const API_ENTRY = resolve(REPO_ROOT, 'dist/apps/api/apps/api/src/main.js');
@@ -53,4 +53,20 @@ export async function startBuiltServer(env: Record<string, string>): Promise<Bui
       await Promise.race([gone, sleep(10_000)]);
     },
   };
+}
+
+/** WEB_CONCURRENCY=2 with TASKS=redis on this run's Redis, files under `dir`; resolves once both API processes serve. */
+export async function startTwoProcesses(dir: string, env: Record<string, string> = {}): Promise<BuiltServer> {
+  const server = await startBuiltServer({
+    WEB_CONCURRENCY: '2',
+    TASKS: 'redis',
+    REDIS_URL: REDIS_URL!,
+    REDIS_PREFIX: freshPrefix(),
+    DATABASE_PATH: join(dir, 'db.sqlite'),
+    UPLOADS_DIR: join(dir, 'uploads'),
+    ...env,
+  });
+  // Ready means the first process answers; the second starts after it (only the first migrates and seeds).
+  await until('both processes', () => (server.output().includes('2 API processes serving') ? true : undefined), 180_000, 200);
+  return server;
 }

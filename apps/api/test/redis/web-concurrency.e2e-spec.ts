@@ -2,8 +2,8 @@ import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { API_ENTRY, type BuiltServer, startBuiltServer } from './built-server';
-import { describeRedis, freshPrefix, REDIS_URL, until } from './redis-suite';
+import { API_ENTRY, type BuiltServer, startTwoProcesses } from './built-server';
+import { describeRedis, until } from './redis-suite';
 
 /** The API processes the primary forked (Linux: /proc/<pid>/task/<pid>/children). */
 const childrenOf = (pid: number): number[] => readFileSync(`/proc/${pid}/task/${pid}/children`, 'utf8').trim().split(/\s+/).filter(Boolean).map(Number);
@@ -39,17 +39,7 @@ describeRedis('WEB_CONCURRENCY=2 with Redis', () => {
   });
 
   it('serves one port from two API processes and replaces one that dies', { timeout: 400_000 }, async () => {
-    const env = {
-      WEB_CONCURRENCY: '2',
-      TASKS: 'redis',
-      REDIS_URL: REDIS_URL!,
-      REDIS_PREFIX: freshPrefix(),
-      DATABASE_PATH: join(dir, 'db.sqlite'),
-      UPLOADS_DIR: join(dir, 'uploads'),
-    };
-    server = await startBuiltServer(env);
-    // Ready means the first process answers; the second starts after it (only the first migrates and seeds).
-    await until('both processes', () => (server.output().includes('2 API processes serving') ? true : undefined), 180_000, 200);
+    server = await startTwoProcesses(dir);
     const primary = server.proc.pid!;
     const first = childrenOf(primary);
     expect(first).toHaveLength(2);

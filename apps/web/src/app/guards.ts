@@ -1,13 +1,29 @@
-import { roleCan, type Action } from '@benchproof/contracts';
+import { roleCan, type Action, type SessionUser } from '@benchproof/contracts';
+import { onlineManager } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
-import { sessionHasExpired, sessionQuery } from '../features/auth';
+import { sessionHasExpired, sessionKey, sessionQuery } from '../features/auth';
 import { shopSettingsQuery } from '../features/shop-settings';
+import { ApiError } from '../lib/api-client';
 import { queryClient } from '../lib/query-client';
 import { shopCan } from './shop-access';
 
+/**
+ * The signed-in user. Offline (or with the workshop server out of reach) the last known one from this phone's kept
+ * cache, so the kept pages open; a session restored from that cache is confirmed with the server when it can be.
+ */
+async function currentUser(): Promise<SessionUser | null> {
+  const known = queryClient.getQueryData<SessionUser | null>(sessionKey);
+  if (known && !onlineManager.isOnline()) return known;
+  if (!queryClient.getQueryState(sessionKey)?.isInvalidated) return queryClient.ensureQueryData(sessionQuery);
+  return queryClient.fetchQuery(sessionQuery).catch((e: unknown) => {
+    if (known && e instanceof ApiError && e.code === 'NETWORK') return known;
+    throw e;
+  });
+}
+
 /** Loader for the signed-in area: no session → sign-in, remembering where the user was going. */
 export async function requireSession({ request }: LoaderFunctionArgs) {
-  const user = await queryClient.ensureQueryData(sessionQuery);
+  const user = await currentUser();
   if (!user) {
     const url = new URL(request.url);
     const reason = sessionHasExpired() ? '&reason=expired' : '';

@@ -31,6 +31,7 @@ function registerFonts({ Font }: ReactPdf): void {
  */
 export class PdfAdapter {
   private renderer?: Promise<ReactPdf>;
+  private reader?: Promise<typeof import('pdf-lib')>;
 
   async render(document: ReactElement): Promise<Buffer> {
     const { renderToBuffer } = await this.load();
@@ -43,9 +44,14 @@ export class PdfAdapter {
     return this.renderer;
   }
 
-  /** Pages in a PDF written by react-pdf (pdfkit writes one "/Type /Page" object per page, uncompressed). */
-  pageCount(pdf: Buffer): number {
-    return (pdf.toString('latin1').match(/\/Type\s*\/Page(?![a-zA-Z])/g) ?? []).length;
+  /**
+   * Pages in a PDF, read with pdf-lib (its page tree, not a text search). Loaded with the first
+   * count, not at boot: about 16 MB of RSS against pdfjs-dist's 36 MB for the same count.
+   */
+  async pageCount(pdf: Buffer): Promise<number> {
+    this.reader ??= import('pdf-lib');
+    const { PDFDocument } = await this.reader;
+    return (await PDFDocument.load(pdf, { updateMetadata: false })).getPageCount();
   }
 }
 

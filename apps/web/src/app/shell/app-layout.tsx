@@ -13,6 +13,7 @@ import { useShopSettings } from '../../features/shop-settings';
 import { shopCan } from '../shop-access';
 import classes from './app-layout.module.css';
 import { Navigation } from './navigation';
+import { OfflineAge } from './offline-age';
 import { SignOutButton } from './sign-out';
 import { UpdatePrompt } from './update-prompt';
 
@@ -79,6 +80,7 @@ export function AppLayout() {
           </Suspense>
         )}
         <UpdatePrompt />
+        <OfflineAge />
         <DatesLocale locale={shop?.dateLocale}>
           <Outlet />
         </DatesLocale>

@@ -16,7 +16,7 @@ export function UpdatePrompt() {
     <Paper withBorder shadow="md" p="sm" radius="md" role="status" data-testid="update-prompt">
       <Group justify="space-between" wrap="nowrap">
         <Text size="sm">{waiting ? 'A new version is ready. Shots waiting on this phone are kept.' : 'A new version of BenchProof is ready.'}</Text>
-        <Button size="md" onClick={() => void applyUpdate()}>
+        <Button size="md" style={{ flexShrink: 0 }} onClick={() => void applyUpdate()}>
           Update
         </Button>
       </Group>

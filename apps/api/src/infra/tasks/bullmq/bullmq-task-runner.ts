@@ -56,6 +56,9 @@ export class BullMqTaskRunner implements TaskRunner {
   private again = false;
   private lastPollAt: Date | null = null;
   private lastPollFailed = false;
+  private stopping: Promise<void> | null = null;
+  /** Handlers this process is running, by queue job id (what stop() waits for, then releases). */
+  private readonly inflight = new Map<string, InFlight>();
 
   constructor(
     private readonly store: TaskStore,
@@ -116,13 +119,42 @@ export class BullMqTaskRunner implements TaskRunner {
     this.wake();
   }
 
-  /** Takes nothing new, lets running handlers finish (Worker.close waits for them), then lets go of the queues. */
-  async stop(): Promise<void> {
+  /**
+   * Takes nothing new and waits for the handlers this process is running, up to `graceMs`; what still runs
+   * then is released (as the SQLite runner does): its row goes back to queued, due now, the cut attempt not
+   * counted, and its queue job lets go of its lock, so another process takes the task at once, not after a lease.
+   */
+  stop(graceMs = Infinity): Promise<void> {
+    this.stopping ??= this.drain(graceMs);
+    return this.stopping;
+  }
+
+  private async drain(graceMs: number): Promise<void> {
     this.state = 'stopped';
     if (this.timer) clearTimeout(this.timer);
     await this.relaying;
-    await Promise.allSettled([...this.kinds.values()].flatMap((k) => (k.worker ? [k.worker.close()] : [])));
+    const workers = [...this.kinds.values()].flatMap((k) => (k.worker ? [k.worker] : []));
+    await Promise.allSettled(workers.map((w) => w.pause(true)));
+    let timer: NodeJS.Timeout | undefined;
+    const graceOver = new Promise<'over'>((ok) => {
+      if (Number.isFinite(graceMs)) timer = setTimeout(() => ok('over'), graceMs);
+    });
+    const finished = await Promise.race([Promise.allSettled([...this.inflight.values()].map((f) => f.done)), graceOver]);
+    clearTimeout(timer);
+    if (finished === 'over') await this.releaseInFlight(graceMs);
+    await Promise.allSettled(workers.map((w) => w.close(finished === 'over')));
     await Promise.allSettled([...this.kinds.values()].map((k) => k.queue.close()));
+  }
+
+  private async releaseInFlight(graceMs: number): Promise<void> {
+    const now = this.clock.now();
+    let released = 0;
+    for (const [jobId, f] of this.inflight) {
+      this.safely(() => (released += this.store.release(`queue:${jobId}`, now)));
+      // The job runs again elsewhere as a no-op (its row is no longer handed to it); the relay hands the row over anew.
+      await f.job.moveToWait(f.token).catch((err: Error) => this.logger.warn(`release of job ${jobId}: ${err.message}`));
+    }
+    this.logger.warn(`Shutdown: ${released} running task(s) did not finish within ${graceMs} ms; released for the next process`);
   }
 
   private prefix(): string {
@@ -130,7 +162,7 @@ export class BullMqTaskRunner implements TaskRunner {
   }
 
   private worker(name: string, kind: Kind): Worker<JobData> {
-    const worker = new (bullmq().Worker)<JobData>(name, (job) => this.process(kind, job), {
+    const worker = new (bullmq().Worker)<JobData>(name, (job, token) => this.track(job, token, this.process(kind, job)), {
       connection: this.redis.open(`worker:${name}`),
       prefix: this.prefix(),
       concurrency: kind.options.concurrency,
@@ -143,6 +175,16 @@ export class BullMqTaskRunner implements TaskRunner {
     });
     worker.on('error', (err) => this.logger.warn(`worker ${name}: ${err.message}`));
     return worker;
+  }
+
+  private async track(job: Job<JobData>, token: string | undefined, run: Promise<void>): Promise<void> {
+    const id = job.id ?? '';
+    this.inflight.set(id, { job, token, done: run });
+    try {
+      await run;
+    } finally {
+      this.inflight.delete(id);
+    }
   }
 
   /** One attempt: start it on the row (or skip a row that is finished or handed to another job), run, record. */
@@ -249,6 +291,12 @@ export class BullMqTaskRunner implements TaskRunner {
       this.logger.error(`Task bookkeeping failed: ${(err as Error).message}`);
     }
   }
+}
+
+interface InFlight {
+  job: Job<JobData>;
+  token: string | undefined;
+  done: Promise<void>;
 }
 
 type RetryError = Error & { retryInMs?: number };

@@ -1,6 +1,7 @@
 import type { ChangePasswordRequest, LoginRequest, LoginResponse, SessionResponse, SignInStep } from '@benchproof/contracts';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, ApiError, setCsrfToken } from '../../../lib/api-client';
+import { forgetCache } from '../../../lib/offline-cache';
 
 export const sessionKey = ['session'] as const;
 
@@ -48,6 +49,8 @@ export function useLogout() {
     mutationFn: () => api<void>('/auth/logout', { method: 'POST', quietAuth: true }),
     onSettled: () => {
       setCsrfToken(null);
+      // The kept answers leave the phone with the user; the next person signing in never sees them.
+      void forgetCache();
       qc.clear();
       qc.setQueryData(sessionKey, null);
     },

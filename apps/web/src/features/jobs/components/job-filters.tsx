@@ -1,7 +1,7 @@
 import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from '@benchproof/domain';
 import { Button, Group, NativeSelect, Stack, Text, TextInput, useMatches } from '@mantine/core';
 import { useDebouncedCallback } from '@mantine/hooks';
-import { IconCheck, IconSearch, IconX } from '@tabler/icons-react';
+import { IconAdjustmentsHorizontal, IconCheck, IconSearch, IconX } from '@tabler/icons-react';
 import { useEffect, useState } from 'react';
 import type { JobListParams } from '../api/jobs';
 import type { useJobListParams } from '../hooks/use-job-list-params';
@@ -108,13 +108,11 @@ function PromisedRange({ from, to, update }: { from: string; to: string; update:
 export const filtersActive = (params: JobListParams, includeClosed: boolean): boolean =>
   Boolean(params.q || params.status?.length || params.mechanicId || params.promisedAfter || params.promisedBefore || includeClosed || params.readyUnpaid);
 
-/** Status chips, mechanic, promised range and free text for the jobs table. */
-export function JobFilters({ params, includeClosed, update, mechanics }: Props) {
-  const active = filtersActive(params, includeClosed);
+/** Closed jobs, ready-unpaid, mechanic and promised range: behind "More filters" on a phone. */
+function MoreFilters({ params, includeClosed, update, mechanics }: Props) {
   const byStatus = Boolean(params.status?.length);
   return (
-    <Stack gap="sm" mb="md">
-      <StatusChips value={params.status ?? []} onChange={(status) => update({ status })} />
+    <>
       <Group gap="sm">
         <FilterToggle on={includeClosed || byStatus} disabled={byStatus} onClick={() => update({ closed: includeClosed ? null : '1' })}>
           Include collected and cancelled jobs
@@ -127,7 +125,6 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
         </Text>
       </Group>
       <div className={classes.filterGrid}>
-        <SearchBox initial={params.q ?? ''} onSearch={(q) => update({ q })} />
         <NativeSelect
           aria-label="Mechanic"
           data={[{ value: '', label: 'Any mechanic' }, ...mechanics]}
@@ -137,6 +134,45 @@ export function JobFilters({ params, includeClosed, update, mechanics }: Props) 
         />
         <PromisedRange from={params.promisedAfter ?? ''} to={params.promisedBefore ?? ''} update={update} />
       </div>
+    </>
+  );
+}
+
+/** How many of the filters behind "More filters" are on: the phone's button says so while they are hidden. */
+const hiddenActive = (params: JobListParams, includeClosed: boolean): number =>
+  [includeClosed, params.readyUnpaid, params.mechanicId, params.promisedAfter || params.promisedBefore].filter(Boolean).length;
+
+/**
+ * Status chips, mechanic, promised range and free text for the jobs table. On a phone only the search box and
+ * the status row show at first, so the first jobs are on the first screen; the rest opens under "More filters".
+ */
+export function JobFilters({ params, includeClosed, update, mechanics }: Props) {
+  const active = filtersActive(params, includeClosed);
+  // Read at first render, so a desktop never flashes the phone's button.
+  const wide = useMatches({ base: false, sm: true }, { getInitialValueInEffect: false });
+  const [opened, setOpened] = useState(false);
+  const hidden = hiddenActive(params, includeClosed);
+  const showMore = wide || opened;
+  return (
+    <Stack gap="sm" mb="md">
+      <SearchBox initial={params.q ?? ''} onSearch={(q) => update({ q })} />
+      <StatusChips value={params.status ?? []} onChange={(status) => update({ status })} />
+      {!wide && (
+        <Group>
+          <Button
+            variant="light"
+            color="gray"
+            c="var(--mantine-color-text)"
+            h={44}
+            leftSection={<IconAdjustmentsHorizontal size={18} aria-hidden />}
+            aria-expanded={opened}
+            onClick={() => setOpened((o) => !o)}
+          >
+            {opened ? 'Fewer filters' : hidden ? `More filters (${hidden} on)` : 'More filters'}
+          </Button>
+        </Group>
+      )}
+      {showMore && <MoreFilters params={params} includeClosed={includeClosed} update={update} mechanics={mechanics} />}
       {active && (
         <Group>
           <Button

@@ -102,6 +102,22 @@ describe('upload queue', () => {
     expect(items[0]).toMatchObject({ status: 'failed', error: 'That kind of file is not accepted.', retryAt: null });
   });
 
+  it('never sends a refused shot again by itself (online event, next sign-in); its own Retry does; a signed-out refusal goes again', () => {
+    let items = make(3);
+    const [refused, expired, waiting] = items.map((i) => i.id);
+    items = queueReducer(items, { type: 'failed', id: refused, message: 'This job is closed.', retryable: false, now: 0, code: 'JOB_CLOSED' });
+    items = queueReducer(items, { type: 'failed', id: expired, message: 'Please sign in.', retryable: false, now: 0, code: 'SESSION_EXPIRED' });
+    items = fail(items, waiting, true);
+    items = queueReducer(items, { type: 'retryNow' });
+    expect(items.map((i) => [i.status, i.error])).toEqual([
+      ['failed', 'This job is closed.'],
+      ['queued', 'Please sign in.'],
+      ['queued', 'No connection'],
+    ]);
+    items = queueReducer(items, { type: 'retryNow', id: refused });
+    expect(items[0].status).toBe('queued');
+  });
+
   it('keeps a paused shot paused when its aborted request reports back', () => {
     let items = make(1);
     const id = items[0].id;

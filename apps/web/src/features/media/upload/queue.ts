@@ -64,6 +64,15 @@ export const STORAGE_FULL_RETRY_MS = 60_000;
 /** The error code a shot carries while the phone could not reach the server at all. */
 export const OFFLINE_CODE = 'OFFLINE';
 
+/** Turned away only because nobody was signed in: not the shot's fault, so it goes again after the next sign-in. */
+const SIGNED_OUT_CODES: ReadonlySet<string> = new Set(['UNAUTHENTICATED', 'SESSION_EXPIRED']);
+
+/**
+ * Refused: the server (or six failed attempts) said no for this shot, so it waits for a person to retry or delete
+ * it; nothing sends it again by itself, not the `online` event, not the next sign-in, not a reload.
+ */
+export const isRefused = (i: QueueItem): boolean => i.status === 'failed' && !SIGNED_OUT_CODES.has(i.errorCode ?? '');
+
 /** Exponential backoff: 1 s, 2 s, 4 s … capped at 30 s. */
 export function backoffMs(attempts: number): number {
   return Math.min(30_000, 1000 * 2 ** Math.max(0, attempts - 1));
@@ -162,7 +171,10 @@ function update(item: QueueItem, a: QueueAction): QueueItem {
     case 'retryDue':
       return item.status === 'waiting_retry' && item.retryAt !== null && item.retryAt <= a.now ? { ...item, status: 'queued', retryAt: null } : item;
     case 'retryNow':
-      return item.status === 'failed' || item.status === 'waiting_retry' ? { ...item, status: 'queued', attempts: 0, retryAt: null } : item;
+      // Everything waiting goes again; a refused shot only on its own Retry button.
+      return item.status === 'waiting_retry' || (item.status === 'failed' && (a.id !== undefined || !isRefused(item)))
+        ? { ...item, status: 'queued', attempts: 0, retryAt: null }
+        : item;
     case 'pause':
       return item.status === 'done' || item.status === 'failed' ? item : { ...item, status: 'paused', retryAt: null };
     case 'resume':

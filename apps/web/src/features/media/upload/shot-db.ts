@@ -19,6 +19,8 @@ export interface StoredShot {
   tags: QueueItem['tags'];
   /** Order of taking: the queue uploads in this order after a reload. */
   seq: number;
+  /** Why the server refused it: it comes back refused with this reason, never sent again by itself. */
+  refused?: { message: string; code: string | null };
 }
 
 interface ShotSchema extends DBSchema {
@@ -49,26 +51,36 @@ export async function retagShot(db: ShotDb, id: string, tags: QueueItem['tags'])
   await tx.done;
 }
 
+/** Refused (with its reason), or `null` when the user pressed Retry: a reload shows the same state. */
+export async function markRefused(db: ShotDb, id: string, refused: StoredShot['refused'] | null): Promise<void> {
+  const tx = db.transaction('shots', 'readwrite');
+  const row = await tx.store.get(id);
+  if (row) await tx.store.put({ ...row, refused: refused ?? undefined });
+  await tx.done;
+}
+
 /** Stored on the server or deleted by the user: no longer kept on the phone. */
 export const forgetShot = (db: ShotDb, id: string): Promise<void> => db.delete('shots', id);
 
-/** One user's waiting shots, oldest first, as fresh queue items (queued again, nothing sent yet as far as the page knows). */
+/** A kept shot as a queue item: queued again, or refused with its reason, as it was before the reload. */
+const toItem = (r: StoredShot): QueueItem => ({
+  id: r.id,
+  clientId: r.clientId,
+  jobId: r.jobId,
+  file: new File([r.bytes], r.name, { type: r.type }),
+  transport: r.transport,
+  source: r.source,
+  sourceAssetId: r.sourceAssetId,
+  timecodeMs: r.timecodeMs,
+  tags: r.tags,
+  ...NOT_SENT,
+  ...(r.refused ? { status: 'failed' as const, error: r.refused.message, errorCode: r.refused.code } : {}),
+});
+
+/** One user's kept shots, oldest first. */
 export async function shotsOf(db: ShotDb, userId: number): Promise<QueueItem[]> {
   const rows = await db.getAllFromIndex('shots', 'byUser', userId);
-  return rows
-    .sort((a, b) => a.seq - b.seq)
-    .map((r) => ({
-      id: r.id,
-      clientId: r.clientId,
-      jobId: r.jobId,
-      file: new File([r.bytes], r.name, { type: r.type }),
-      transport: r.transport,
-      source: r.source,
-      sourceAssetId: r.sourceAssetId,
-      timecodeMs: r.timecodeMs,
-      tags: r.tags,
-      ...NOT_SENT,
-    }));
+  return rows.sort((a, b) => a.seq - b.seq).map(toItem);
 }
 
 /** Sign-out chose "delete": every waiting shot of that user goes. */

@@ -1,5 +1,5 @@
-import type { QueueAction, QueueItem } from './queue';
-import { forgetShot, forgetUser, openShotDb, retagShot, saveShot, shotsOf, type ShotDb } from './shot-db';
+import { isRefused, queueReducer, type QueueAction, type QueueItem } from './queue';
+import { forgetShot, forgetUser, markRefused, openShotDb, retagShot, saveShot, shotsOf, type ShotDb } from './shot-db';
 
 /** Order of taking across reloads: a clock reading that never repeats or goes back within this page. */
 let lastSeq = 0;
@@ -15,8 +15,11 @@ export class ShotKeeper {
   /** Every write goes through this chain, so a re-tag never lands before the shot's own first write. */
   private chain: Promise<void> = Promise.resolve();
 
-  constructor(readonly userId: number) {
-    this.db = openShotDb().catch(() => null);
+  constructor(
+    readonly userId: number,
+    dbName?: string,
+  ) {
+    this.db = openShotDb(dbName).catch(() => null);
   }
 
   async load(): Promise<QueueItem[]> {
@@ -31,15 +34,21 @@ export class ShotKeeper {
     });
   }
 
-  /** Mirrors what a queue action means for the kept copies (called before the reducer runs it). */
-  follow(action: QueueAction, items: QueueItem[]): void {
-    if (action.type === 'stored' || action.type === 'remove') void this.run((db) => forgetShot(db, action.id));
+  /** Mirrors what a queue action means for the kept copies (called before the reducer runs it); resolves once written. */
+  follow(action: QueueAction, items: QueueItem[]): Promise<void> {
+    if (action.type === 'stored' || action.type === 'remove') return this.run((db) => forgetShot(db, action.id));
+    if (action.type === 'failed') {
+      const after = queueReducer(items, action).find((i) => i.id === action.id);
+      if (after && isRefused(after)) return this.run((db) => markRefused(db, after.id, { message: after.error ?? '', code: after.errorCode }));
+    }
+    if (action.type === 'retryNow' && action.id !== undefined) return this.run((db) => markRefused(db, action.id!, null));
     if (action.type === 'tag') {
       for (const item of items.filter((i) => action.ids.includes(i.id) && i.status !== 'done')) {
         const tags = { ...item.tags, ...action.patch };
         void this.run((db) => retagShot(db, item.id, tags));
       }
     }
+    return this.chain;
   }
 
   forgetAll(): Promise<void> {

@@ -116,7 +116,7 @@ class UploadStore {
       void keeper.save(action.items).then(() => action.items.forEach((i) => this.apply({ type: 'saved', id: i.id })));
       return;
     }
-    if (keeper) keeper.follow(action, this.items);
+    if (keeper) void keeper.follow(action, this.items);
     this.apply(action);
   };
 

@@ -1,0 +1,1 @@
+export { claimMs, everyTick, TICK_GATE, type TickGate } from './tick-gate.port';
