@@ -46,6 +46,8 @@ async function nestApp() {
   const { DbModule } = src('core/db');
   const { ClockModule } = src('core/clock');
   const { createLogger, requestLog } = src('core/logging');
+  const { LIVE_UPDATES } = src('core/events');
+  const { InProcessLiveUpdates } = src('infra/live/in-process.live-updates.js');
   const cfg = loadConfig();
 
   class Probe {
@@ -69,7 +71,8 @@ async function nestApp() {
     providers.push({ provide: CSRF, inject: [APP_CONFIG], useFactory: csrfFactory });
     if (has('passport')) {
       imports.push(PassportModule, ClockModule, DbModule);
-      providers.push({ provide: APP_GUARD, useClass: JwtAuthGuard }, auth.SessionStore);
+      // The session store tells other processes what to forget; one process here, so in-process delivery.
+      providers.push({ provide: APP_GUARD, useClass: JwtAuthGuard }, auth.SessionStore, { provide: LIVE_UPDATES, useClass: InProcessLiveUpdates });
       providers.push(has('session') ? JwtStrategy : { provide: JwtStrategy, useClass: ClaimsOnly });
     } else {
       providers.push({ provide: APP_GUARD, useClass: fixedUserGuard(payload.user) });

@@ -13,6 +13,7 @@ const { openDb } = dist('core/db');
 const { JobsListQuery } = dist('jobs/jobs-list.query.js');
 const { JobListQuerySchema } = req(join(ROOT, 'dist/apps/api/libs/contracts/src/index.js'));
 const { ftsPrefixQuery } = dist('core/db');
+const { PaymentsRepository } = dist('payments/payments.repository.js');
 
 const CASES = [
   ['open jobs', { open: 'true' }],
@@ -38,11 +39,29 @@ function report(sqlite, q, label, raw) {
     ['total', q.buildTotal(query, text !== null)],
     ['page', q.buildPage(query, text !== null)],
   ]) {
+    if (part === 'page')
+      balances(
+        sqlite,
+        q.page(1, { query, today: values.today }).rows.map((r) => r.id),
+      );
     const { sql } = stmt.getQuery();
     const s = sqlite.prepare(sql);
     const args = bind(stmt);
     const run = part === 'total' ? () => s.get(...args) : () => s.all(...args);
     console.log(`  ${part}: ${timeIt(run).toFixed(0)} µs`);
+    for (const row of sqlite.prepare(`EXPLAIN QUERY PLAN ${sql}`).all(...args)) console.log(`    ${row.detail}`);
+  }
+}
+
+/** The page's money due: the three reads of payments' balance, for the page's job ids (one JSON list). */
+function balances(sqlite, ids) {
+  const repo = new PaymentsRepository(null);
+  const stmts = repo.prepareCharged.call({ db: openDb.lastDb });
+  for (const [name, stmt] of Object.entries(stmts)) {
+    const { sql } = stmt.getQuery();
+    const s = sqlite.prepare(sql);
+    const args = stmt.getQuery().params.map((p) => (p && typeof p === 'object' && 'name' in p ? { shopId: 1, ids: JSON.stringify(ids) }[p.name] : p));
+    console.log(`  balance ${name} (${ids.length} jobs): ${timeIt(() => s.all(...args)).toFixed(0)} µs`);
     for (const row of sqlite.prepare(`EXPLAIN QUERY PLAN ${sql}`).all(...args)) console.log(`    ${row.detail}`);
   }
 }
@@ -55,6 +74,7 @@ for (const jobs of process.argv
   try {
     const shop = await prepareShop(dir, jobs);
     const { db, sqlite } = openDb(shop.env.DATABASE_PATH);
+    openDb.lastDb = db;
     const open = sqlite.prepare("SELECT count(*) n FROM jobs WHERE shop_id = 1 AND status NOT IN ('collected','cancelled')").get().n;
     console.log(`\n=== ${jobs} jobs (${open} open) ===`);
     const q = new JobsListQuery(db);

@@ -46,6 +46,16 @@ const LAZY = [
     'e-mail templates (react-dom/server and the react-email components)',
     "require('react-dom/server'); for (const c of ['html', 'head', 'preview', 'body', 'container', 'section', 'text', 'button', 'row', 'column']) require('@react-email/' + c)",
   ],
+  ['text-message SDK (twilio)', "require('twilio')"],
+  ['card-payment SDK (stripe)', "require('stripe')"],
+  ['S3 SDK (@aws-sdk/client-s3, lib-storage), only with STORAGE=s3', "require('@aws-sdk/client-s3'); require('@aws-sdk/lib-storage')"],
+  ['BullMQ and ioredis, only with REDIS_URL', "require('bullmq')"],
+  [
+    'password strength lists (zxcvbn-ts, English and common), built',
+    "const { ZxcvbnFactory } = require('@zxcvbn-ts/core'); const c = require('@zxcvbn-ts/language-common'); new ZxcvbnFactory({ dictionary: { ...c.dictionary, ...require('@zxcvbn-ts/language-en').dictionary }, graphs: c.adjacencyGraphs }).check('x')",
+  ],
+  ['phone-number metadata (libphonenumber-js/max)', "require('libphonenumber-js/max').parsePhoneNumberFromString('+61491570156')"],
+  ['two-step codes (otplib)', "require('otplib')"],
 ];
 
 const mem = (m) => `rss ${fmt(m.rss / MB)}, heapUsed ${fmt(m.heapUsed / MB)}, external ${fmt(m.external / MB)}, arrayBuffers ${fmt(m.arrayBuffers / MB)} MB`;

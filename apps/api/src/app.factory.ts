@@ -1,15 +1,15 @@
 import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import expressStaticGzip from 'express-static-gzip';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import helmet from 'helmet';
-import { json, type NextFunction, type Request, type Response } from 'express';
+import { json, urlencoded, type NextFunction, type Request, type Response } from 'express';
 import { annotationSaveBody } from './annotations';
+import { setUpOpenApi } from './app.docs';
 import { AppModule } from './app.module';
 import type { AppConfig } from './config';
 import { ErrorFilter } from './core/http';
@@ -25,8 +25,8 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const app = await NestFactory.create<NestExpressApplication>(AppModule.register(cfg), {
     logger: opts.logger === false ? false : ['log', 'warn', 'error'],
     bufferLogs: opts.logger !== false,
-    // The payment provider signs the exact bytes it sent; its webhook needs them (req.rawBody).
-    rawBody: true,
+    // Nest's body parsers would read every GET's empty body too; bodyParsers() below skips GET and HEAD.
+    bodyParser: false,
   });
   // One pino logger: a line per request, and Nest's own log lines as JSON at LOG_LEVEL.
   const logger = createLogger(cfg);
@@ -48,12 +48,29 @@ export async function createApp(cfg: AppConfig, opts: { logger?: boolean } = {})
   const importJson = json({ limit: '6mb' });
   app.use('/api/imports', (req: Request, res: Response, next: NextFunction) => importJson(req, res, next));
   app.use(annotationSaveBody());
+  app.use(bodyParsers());
   app.setGlobalPrefix('api');
   app.useGlobalFilters(new ErrorFilter());
   setUpOpenApi(app);
   serveWeb(app, cfg.WEB_DIST);
   await seedWhenEmpty(app, cfg);
   return app;
+}
+
+/**
+ * JSON and form bodies for every other route, as Nest would parse them, but not for GET and HEAD, which carry none.
+ * The payment provider signs the exact bytes it sent; its webhook needs them (req.rawBody).
+ */
+function bodyParsers() {
+  const verify = (req: Request & { rawBody?: Buffer }, _res: Response, buf: Buffer) => {
+    req.rawBody = buf;
+  };
+  const parseJson = json({ verify });
+  const parseForm = urlencoded({ extended: true, verify });
+  return (req: Request, res: Response, next: NextFunction) => {
+    if (req.method === 'GET' || req.method === 'HEAD') return next();
+    parseJson(req, res, (err?: unknown) => (err ? next(err) : parseForm(req, res, next)));
+  };
 }
 
 /** Express 'trust proxy' from the environment: `true`/`false`, a hop count, or addresses/subnet names. */
@@ -73,18 +90,6 @@ function contentSecurity() {
     connectSrc: ["'self'"],
     workerSrc: ["'self'", 'blob:'],
   };
-}
-
-function setUpOpenApi(app: NestExpressApplication): void {
-  const config = new DocumentBuilder()
-    .setTitle('BenchProof API')
-    .setDescription('Service records, media and bench reports for bicycle workshops. Routes need a session cookie unless marked x-public.')
-    .setVersion('0.1.0')
-    .addCookieAuth('bp_session')
-    .build();
-  // Built on the first request for it, not at boot: the document and the JSON schemas behind it are
-  // several MB of heap that a workshop's server otherwise keeps without ever serving.
-  SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, config), { jsonDocumentUrl: 'api/docs-json' });
 }
 
 /**

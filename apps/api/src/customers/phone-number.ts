@@ -1,6 +1,11 @@
 import type { CountryCode } from 'libphonenumber-js';
-import { parsePhoneNumberFromString } from 'libphonenumber-js/max';
 import { DomainError } from '../core/http';
+
+type PhoneLib = typeof import('libphonenumber-js/max');
+let lib: PhoneLib | undefined;
+/** Loaded with the first number read, not at boot: the full metadata is about 9 MB of resident memory (issue 22). */
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- lazy and synchronous on purpose, see above
+const phoneLib = (): PhoneLib => (lib ??= require('libphonenumber-js/max') as PhoneLib);
 
 /**
  * A phone number as typed, read with the shop's country for numbers without a country code, in
@@ -8,7 +13,7 @@ import { DomainError } from '../core/http';
  * its full metadata, which checks the number ranges, not only the length).
  */
 export function toE164(typed: string, country: string): string | null {
-  const parsed = parsePhoneNumberFromString(typed, country as CountryCode);
+  const parsed = phoneLib().parsePhoneNumberFromString(typed, country as CountryCode);
   return parsed?.isValid() ? parsed.number : null;
 }
 

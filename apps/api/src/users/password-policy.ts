@@ -1,6 +1,4 @@
-import { ZxcvbnFactory } from '@zxcvbn-ts/core';
-import * as common from '@zxcvbn-ts/language-common';
-import * as english from '@zxcvbn-ts/language-en';
+import type { ZxcvbnFactory } from '@zxcvbn-ts/core';
 import { DomainError } from '../core/http';
 
 /**
@@ -9,7 +7,20 @@ import { DomainError } from '../core/http';
  * English words, names) plus the words we pass in; below 3 (fewer than ~10^8 guesses, the library's
  * "safely unguessable" threshold) is refused. The 10-character minimum is checked by the contract.
  */
-const checker = new ZxcvbnFactory({ dictionary: { ...common.dictionary, ...english.dictionary }, graphs: common.adjacencyGraphs });
+let made: ZxcvbnFactory | undefined;
+/**
+ * Made with the first password checked, not at boot: the frequency lists and their ranked dictionaries are
+ * about 35 MB of resident memory (issue 22) that a running shop needs only when someone sets a password.
+ */
+function checker(): ZxcvbnFactory {
+  if (made) return made;
+  /* eslint-disable @typescript-eslint/no-require-imports -- lazy and synchronous on purpose, see above */
+  const { ZxcvbnFactory: Factory } = require('@zxcvbn-ts/core') as typeof import('@zxcvbn-ts/core');
+  const common = require('@zxcvbn-ts/language-common') as typeof import('@zxcvbn-ts/language-common');
+  const english = require('@zxcvbn-ts/language-en') as typeof import('@zxcvbn-ts/language-en');
+  /* eslint-enable @typescript-eslint/no-require-imports */
+  return (made = new Factory({ dictionary: { ...common.dictionary, ...english.dictionary }, graphs: common.adjacencyGraphs }));
+}
 
 /** The lowest accepted zxcvbn score (0–4). */
 export const MIN_PASSWORD_SCORE = 3;
@@ -36,7 +47,7 @@ export function personalWords(ctx: PasswordContext): string[] {
 
 /** Throws WEAK_PASSWORD (details: field, score) when the password is too easy to guess. */
 export function assertStrongPassword(password: string, ctx: PasswordContext, field = 'password'): void {
-  const result = checker.check(password, personalWords(ctx));
+  const result = checker().check(password, personalWords(ctx));
   if (result.score < MIN_PASSWORD_SCORE) {
     throw new DomainError('WEAK_PASSWORD', undefined, {
       field,

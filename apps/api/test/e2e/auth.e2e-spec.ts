@@ -24,6 +24,7 @@ describe('sign-in, sessions and CSRF', () => {
     const res = await t.http().post('/api/auth/login').send({ email: DEMO.desk, password: 'bench-demo-2026' }).expect(200);
     const cookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
     expect(cookies.find((c) => c.startsWith('bp_session='))).toMatch(/HttpOnly/i);
+    expect(cookies.find((c) => c.startsWith('bp_csrf='))).toContain(`bp_csrf=${encodeURIComponent(res.body.csrfToken as string)}`);
     expect(res.body.user).toMatchObject({ email: DEMO.desk, role: 'desk' });
   });
 
@@ -37,6 +38,8 @@ describe('sign-in, sessions and CSRF', () => {
     const { agent, csrf } = await t.signIn(DEMO.manager);
     const again = await agent.get('/api/auth/session').expect(200);
     expect(again.body.csrfToken).toBe(csrf);
+    // The browser already holds that token: the page load does not send the cookie again.
+    expect(([] as string[]).concat(again.headers['set-cookie'] ?? []).filter((c) => c.startsWith('bp_csrf'))).toEqual([]);
     await agent
       .patch('/api/shop/settings')
       .set('x-csrf-token', again.body.csrfToken as string)

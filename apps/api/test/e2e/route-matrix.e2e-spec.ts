@@ -63,6 +63,12 @@ describe('route matrix from the OpenAPI document and ACCESS_POLICY', () => {
     );
   });
 
+  it('serves the OpenAPI page, its script and its stylesheet', async () => {
+    expect((await t.http().get('/api/docs').expect(200)).text).toContain('swagger-ui-init.js');
+    expect((await t.http().get('/api/docs/swagger-ui-init.js').expect(200)).text).toContain('/api/health');
+    expect((await t.http().get('/api/docs/swagger-ui.css').expect(200)).headers['content-type']).toMatch(/text\/css/);
+  });
+
   it('names a policy action on every signed-in route', () => {
     expect(guarded.length).toBeGreaterThan(3);
     expect(guarded.filter((o) => !o.action || !ACTIONS.includes(o.action)).map((o) => o.route)).toEqual([]);

@@ -43,9 +43,16 @@ export class CsrfGuard implements CanActivate {
 /**
  * Issues a CSRF token for the session cookie about to be set (or already present). A new session always
  * gets a new token; otherwise the token already in the cookie is kept when its HMAC still matches this
- * session (csrf-csrf checks that), which spares the random bytes on every page load's session check.
+ * session (csrf-csrf checks that), which spares the random bytes on every page load's session check, and then
+ * no Set-Cookie is sent for it.
  */
 export function issueCsrfToken(csrf: DoubleCsrfUtilities, req: Request, res: Response, session?: string): string {
-  if (session) (req.cookies as Record<string, string>)[SESSION_COOKIE] = session;
-  return csrf.generateCsrfToken(req, res, { overwrite: session !== undefined });
+  const cookies = req.cookies as Record<string, string | undefined>;
+  if (session) cookies[SESSION_COOKIE] = session;
+  // csrf-csrf sets its cookie on every call; the browser already holds an unchanged token, so only a new one is sent.
+  const prior = cookies[CSRF_COOKIE];
+  const onlyWhenChanged = {
+    cookie: (name: string, value: string, options: object) => (value === prior ? onlyWhenChanged : res.cookie(name, value, options)),
+  };
+  return csrf.generateCsrfToken(req, onlyWhenChanged as unknown as Response, { overwrite: session !== undefined });
 }

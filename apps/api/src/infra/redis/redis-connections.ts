@@ -1,5 +1,5 @@
 import { Logger } from '@nestjs/common';
-import { Redis } from 'ioredis';
+import type { Redis } from 'ioredis';
 
 /**
  * The Redis connections of one API process (REDIS_URL). Commands and publishing share `main`;
@@ -20,7 +20,13 @@ export class RedisConnections {
 
   /** A new connection; BullMQ insists on `maxRetriesPerRequest: null` for blocking commands, which suits a subscriber too. */
   open(name: string): Redis {
-    const conn = new Redis(this.url, { maxRetriesPerRequest: null, connectionName: `${this.prefix}:${name}:${process.pid}`, lazyConnect: false });
+    // ioredis loads with the first connection (REDIS_URL set), not at every boot (issue 22).
+    // eslint-disable-next-line @typescript-eslint/no-require-imports -- lazy and synchronous on purpose
+    const conn = new (require('ioredis') as typeof import('ioredis')).Redis(this.url, {
+      maxRetriesPerRequest: null,
+      connectionName: `${this.prefix}:${name}:${process.pid}`,
+      lazyConnect: false,
+    });
     conn.on('error', (err: Error) => this.logger.warn(`${name}: ${err.message}`));
     this.opened.push(conn);
     return conn;

@@ -1,10 +1,21 @@
-import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, ListObjectsV2Command, S3Client, type S3ClientConfig } from '@aws-sdk/client-s3';
-import { Upload } from '@aws-sdk/lib-storage';
+import type { S3Client, S3ClientConfig } from '@aws-sdk/client-s3';
 import { createReadStream } from 'node:fs';
 import { rm } from 'node:fs/promises';
 import { Readable } from 'node:stream';
 import { hashing } from './hashing';
 import { assertSafeKey, type AdoptOptions, type ByteRange, type ListedObject, type PutOptions, type Storage, type StoredObject } from './storage';
+
+type S3Sdk = typeof import('@aws-sdk/client-s3') & typeof import('@aws-sdk/lib-storage');
+let sdk: S3Sdk | undefined;
+/** The AWS SDK, loaded when a bucket is configured (STORAGE=s3), not at every boot: about 22 MB resident (issue 22). */
+function s3(): S3Sdk {
+  /* eslint-disable @typescript-eslint/no-require-imports -- lazy and synchronous on purpose, see above */
+  return (sdk ??= {
+    ...(require('@aws-sdk/client-s3') as typeof import('@aws-sdk/client-s3')),
+    ...(require('@aws-sdk/lib-storage') as typeof import('@aws-sdk/lib-storage')),
+  });
+  /* eslint-enable @typescript-eslint/no-require-imports */
+}
 
 export interface S3StorageOptions {
   bucket: string;
@@ -49,7 +60,7 @@ export class S3Storage implements Storage {
     };
     if (opts.endpoint) config.endpoint = opts.endpoint;
     if (opts.credentials) config.credentials = opts.credentials;
-    this.client = new S3Client(config);
+    this.client = new (s3().S3Client)(config);
   }
 
   async put(key: string, source: Readable, opts: PutOptions = {}): Promise<StoredObject> {
@@ -86,7 +97,7 @@ export class S3Storage implements Storage {
     const request = (out: Readable) => {
       requested = true;
       const input = { Bucket: this.opts.bucket, Key: key, Range: range ? `bytes=${range.start}-${range.end}` : undefined };
-      this.client.send(new GetObjectCommand(input), { abortSignal: abort.signal }).then(
+      this.client.send(new (s3().GetObjectCommand)(input), { abortSignal: abort.signal }).then(
         (res) => {
           if (range && !res.ContentRange?.startsWith(`bytes ${range.start}-`)) {
             out.destroy(new Error(`Storage ignored the range of ${key}: ${res.ContentRange ?? 'whole object'}`));
@@ -130,7 +141,7 @@ export class S3Storage implements Storage {
   async stat(key: string): Promise<{ bytes: number } | null> {
     assertSafeKey(key);
     try {
-      const head = await this.client.send(new HeadObjectCommand({ Bucket: this.opts.bucket, Key: key }));
+      const head = await this.client.send(new (s3().HeadObjectCommand)({ Bucket: this.opts.bucket, Key: key }));
       return { bytes: head.ContentLength ?? 0 };
     } catch (err) {
       if (notThere(err)) return null;
@@ -141,14 +152,14 @@ export class S3Storage implements Storage {
   async delete(key: string): Promise<void> {
     assertSafeKey(key);
     // DeleteObject of a missing key succeeds, like the disk store's ENOENT-tolerant unlink.
-    await this.client.send(new DeleteObjectCommand({ Bucket: this.opts.bucket, Key: key }));
+    await this.client.send(new (s3().DeleteObjectCommand)({ Bucket: this.opts.bucket, Key: key }));
   }
 
   async list(prefix: string): Promise<ListedObject[]> {
     const out: ListedObject[] = [];
     let token: string | undefined;
     do {
-      const page = await this.client.send(new ListObjectsV2Command({ Bucket: this.opts.bucket, Prefix: prefix, ContinuationToken: token }));
+      const page = await this.client.send(new (s3().ListObjectsV2Command)({ Bucket: this.opts.bucket, Prefix: prefix, ContinuationToken: token }));
       for (const o of page.Contents ?? []) if (o.Key) out.push({ key: o.Key, bytes: o.Size ?? 0, modifiedAt: o.LastModified ?? new Date(0) });
       token = page.IsTruncated ? page.NextContinuationToken : undefined;
     } while (token);
@@ -157,7 +168,7 @@ export class S3Storage implements Storage {
 
   private async upload(key: string, body: Readable): Promise<void> {
     const partSize = this.opts.partSize ?? 8 * 1024 * 1024;
-    await new Upload({ client: this.client, params: { Bucket: this.opts.bucket, Key: key, Body: body }, partSize, queueSize: 2 }).done();
+    await new (s3().Upload)({ client: this.client, params: { Bucket: this.opts.bucket, Key: key, Body: body }, partSize, queueSize: 2 }).done();
   }
 
   private async refuseExisting(key: string): Promise<void> {

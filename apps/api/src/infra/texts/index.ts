@@ -1,2 +1,2 @@
-export { EndpointRequestClient, TEXT_PROVIDER, TextProvider, TextProviderError, twilioClient, type SentText } from './text-provider';
+export { TEXT_PROVIDER, TextProvider, TextProviderError, twilioClient, type SentText } from './text-provider';
 export { TextProviderModule } from './texts.module';

@@ -1,5 +1,5 @@
 import { Logger } from '@nestjs/common';
-import { type Job, Queue, UnrecoverableError, Worker } from 'bullmq';
+import type { Job, Queue, Worker } from 'bullmq';
 import { randomBytes } from 'node:crypto';
 import type { Clock } from '../../../core/clock';
 import type { DbTx } from '../../../core/db';
@@ -8,6 +8,12 @@ import { type BackoffOptions, retryDelay } from '../backoff';
 import { isTransientError, PermanentTaskError } from '../task-errors';
 import { type TaskRow, type TaskStore, toStatus } from '../task-store';
 import type { FailedTask, RawTaskContext, RawTaskSpec, TaskHandlerFn, TaskKindOptions, TaskRunner, TaskRunnerHealth, TaskStatus } from '../tasks.port';
+
+type BullMq = typeof import('bullmq');
+let lib: BullMq | undefined;
+/** BullMQ loads when this runner is chosen (TASKS=redis), not with every import of the tasks barrel (issue 22). */
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- lazy and synchronous on purpose, see above
+const bullmq = (): BullMq => (lib ??= require('bullmq') as BullMq);
 import { RelayStore } from './relay-store';
 
 export interface BullMqRunnerOptions {
@@ -66,7 +72,7 @@ export class BullMqTaskRunner implements TaskRunner {
 
   register(kind: string, handler: TaskHandlerFn, options: TaskKindOptions): void {
     if (this.kinds.has(kind)) throw new Error(`Task kind ${kind} already has a handler`);
-    const queue = new Queue<JobData>(kind, { connection: this.redis.main, prefix: this.prefix() });
+    const queue = new (bullmq().Queue)<JobData>(kind, { connection: this.redis.main, prefix: this.prefix() });
     this.kinds.set(kind, { handler, options, queue, worker: null });
   }
 
@@ -156,7 +162,7 @@ export class BullMqTaskRunner implements TaskRunner {
   }
 
   private worker(name: string, kind: Kind): Worker<JobData> {
-    const worker = new Worker<JobData>(name, (job, token) => this.track(job, token, this.process(kind, job)), {
+    const worker = new (bullmq().Worker)<JobData>(name, (job, token) => this.track(job, token, this.process(kind, job)), {
       connection: this.redis.open(`worker:${name}`),
       prefix: this.prefix(),
       concurrency: kind.options.concurrency,
@@ -221,7 +227,7 @@ export class BullMqTaskRunner implements TaskRunner {
     this.logger.warn(
       `${row.kind}:${row.key} attempt ${row.attempts} failed (${message})${later ? `; transient, again at ${later.toISOString()}` : '; giving up'}`,
     );
-    return new UnrecoverableError(message);
+    return new (bullmq().UnrecoverableError)(message);
   }
 
   private wake(): void {
