@@ -157,9 +157,13 @@ describe('operations: failed work, backups, customer data and erasure', () => {
     await expect(dialog.getByText('Photos and videos of jobs that were never handed back.').count()).resolves.toBe(1);
     const erase = dialog.getByRole('button', { name: 'Erase for good' });
     expect(await erase.isDisabled()).toBe(true);
+    // Measured once the dialog has opened: mid-transition it is scaled down, and its close button measured just under 44 px.
+    await page.waitForFunction(() => {
+      const d = document.querySelector('[role=dialog]');
+      return d !== null && ['none', 'matrix(1, 0, 0, 1, 0, 0)'].includes(getComputedStyle(d).transform) && getComputedStyle(d).opacity === '1';
+    });
     // The customer page's own buttons and links are older than this screen; the new section and the dialog are checked.
     expect(await smallTargets(page, '[data-testid=customer-data]')).toEqual([]);
-    await page.waitForTimeout(500); // the dialog's opening transition
     await shot(page, 'ops-erase-confirm-phone');
     await dialog.getByLabel('The customer asked for this, and I have checked it is them').check();
     await erase.click();
