@@ -36,7 +36,7 @@ export function CreateOwnerLink({ jobId }: { jobId: number }) {
   );
 }
 
-/** The new link, shown once: copy it for a text message, and whether the e-mail went out. */
+/** The new link, shown once: copy it to pass on by hand, and how it went to the owner (text or e-mail). */
 function CreatedLink({ created }: { created: CreatedOwnerLinkDto }) {
   return (
     <Alert color="teal" title="Link created — shown only now" data-testid="owner-link-created">
@@ -45,7 +45,7 @@ function CreatedLink({ created }: { created: CreatedOwnerLinkDto }) {
         <CopyButton value={created.url}>
           {({ copied, copy }) => (
             <Button size="md" mih={44} variant="light" leftSection={<IconCopy />} onClick={copy}>
-              {copied ? 'Copied' : 'Copy for a text message'}
+              {copied ? 'Copied' : 'Copy the link'}
             </Button>
           )}
         </CopyButton>
